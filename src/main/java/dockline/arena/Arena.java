@@ -1,0 +1,252 @@
+package dockline.arena;
+
+import dockline.model.Cell;
+import dockline.model.EventKind;
+import dockline.model.Mission;
+
+/**
+ * The compiled two-player arena of one mission (DESIGN.md 2.3), in compressed-sparse-row int
+ * arrays, forward and reverse.
+ *
+ * <p>Vertices {@code 0 .. robotCount-1} belong to the robot: (cell, budget left). Vertices
+ * {@code robotCount .. vertexCount-1} belong to the disturbance: (cell, action, budget left). Every
+ * robot edge goes to a disturbance vertex and carries weight 0; every disturbance edge (an
+ * outcome) goes to a robot vertex and carries the energy delta in units (negative = consumption,
+ * positive = charging) and the event that caused it (or none). Task labels live on cells:
+ * {@link #cellZones(int)} is a bit mask over the map's zones in file order.
+ *
+ * <p>Numbering is deterministic: robot vertex of free-cell slot s (row-major order of free cells)
+ * and budget k is {@code s * (K + 1) + k}; disturbance vertices follow in the order of their robot
+ * vertex and, within it, of the actions (moves in neighbour order N, E, S, W, NE, SE, SW, NW, then
+ * wait, then charge).
+ *
+ * <p>Instances are immutable after construction; the accessors return views of internal arrays
+ * through index methods, so hot loops stay on primitive ints without copying.
+ */
+public final class Arena {
+
+    /** Event code on nominal outcomes. */
+    public static final int NOMINAL = -1;
+
+    private final Mission mission;
+    private final int width;
+    private final int height;
+    private final int budget;
+    private final int robotCount;
+    private final int vertexCount;
+    private final int startVertex;
+
+    // per vertex
+    private final int[] vertexCell;
+    private final int[] vertexBudget;
+    // per disturbance vertex (indexed v - robotCount)
+    private final byte[] actionKind;
+    private final int[] actionTarget;
+
+    // forward CSR
+    private final int[] outStart;
+    private final int[] edgeTarget;
+    private final int[] edgeWeight;
+    private final byte[] edgeEvent;
+    private final int[] edgeRule;
+    // reverse CSR: edge ids grouped by target
+    private final int[] inStart;
+    private final int[] inEdge;
+    private final int[] edgeSource;
+
+    // per cell (row-major index)
+    private final long[] cellZones;
+    private final boolean[] cellDock;
+    private final int[] cellSlot;
+    private final int[] slotCell;
+
+    Arena(Mission mission, int width, int height, int budget, int robotCount, int vertexCount, int startVertex,
+          int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
+          int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
+          long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
+        this.mission = mission;
+        this.width = width;
+        this.height = height;
+        this.budget = budget;
+        this.robotCount = robotCount;
+        this.vertexCount = vertexCount;
+        this.startVertex = startVertex;
+        this.vertexCell = vertexCell;
+        this.vertexBudget = vertexBudget;
+        this.actionKind = actionKind;
+        this.actionTarget = actionTarget;
+        this.outStart = outStart;
+        this.edgeTarget = edgeTarget;
+        this.edgeWeight = edgeWeight;
+        this.edgeEvent = edgeEvent;
+        this.edgeRule = edgeRule;
+        this.cellZones = cellZones;
+        this.cellDock = cellDock;
+        this.cellSlot = cellSlot;
+        this.slotCell = slotCell;
+        int m = edgeTarget.length;
+        this.edgeSource = new int[m];
+        for (int v = 0; v < vertexCount; v++) {
+            for (int e = outStart[v]; e < outStart[v + 1]; e++) {
+                edgeSource[e] = v;
+            }
+        }
+        // counting sort of edges by target: linear time
+        this.inStart = new int[vertexCount + 1];
+        for (int e = 0; e < m; e++) {
+            inStart[edgeTarget[e] + 1]++;
+        }
+        for (int v = 0; v < vertexCount; v++) {
+            inStart[v + 1] += inStart[v];
+        }
+        this.inEdge = new int[m];
+        int[] fill = java.util.Arrays.copyOf(inStart, vertexCount);
+        for (int e = 0; e < m; e++) {
+            inEdge[fill[edgeTarget[e]]++] = e;
+        }
+    }
+
+    public Mission mission() {
+        return mission;
+    }
+
+    public int width() {
+        return width;
+    }
+
+    public int height() {
+        return height;
+    }
+
+    /** The disturbance budget K of the mission. */
+    public int budget() {
+        return budget;
+    }
+
+    public int robotCount() {
+        return robotCount;
+    }
+
+    public int vertexCount() {
+        return vertexCount;
+    }
+
+    public int edgeCount() {
+        return edgeTarget.length;
+    }
+
+    /** The robot vertex at the start cell with the full budget. */
+    public int startVertex() {
+        return startVertex;
+    }
+
+    public boolean isRobot(int v) {
+        return v < robotCount;
+    }
+
+    /** Row-major cell index of the vertex's cell. */
+    public int cell(int v) {
+        return vertexCell[v];
+    }
+
+    public Cell cellOf(int v) {
+        return Cell.ofIndex(vertexCell[v], width);
+    }
+
+    /** Disturbance budget left at the vertex. */
+    public int budgetLeft(int v) {
+        return vertexBudget[v];
+    }
+
+    /** The robot vertex of a free cell (row-major index) and budget left, or -1 if the cell is a wall. */
+    public int robotVertex(int cellIndex, int budgetLeft) {
+        int s = cellSlot[cellIndex];
+        return s < 0 ? -1 : s * (budget + 1) + budgetLeft;
+    }
+
+    /** Number of free cells. */
+    public int freeCellCount() {
+        return slotCell.length;
+    }
+
+    /** Row-major cell index of the free cell with the given slot (0 .. freeCellCount-1). */
+    public int freeCell(int slot) {
+        return slotCell[slot];
+    }
+
+    /** The action of a disturbance vertex. */
+    public ActionKind actionKind(int d) {
+        return ActionKind.values()[actionKind[d - robotCount]];
+    }
+
+    /** The cell (row-major) the action of a disturbance vertex aims at. */
+    public int actionTarget(int d) {
+        return actionTarget[d - robotCount];
+    }
+
+    public Action action(int d) {
+        return new Action(actionKind(d), Cell.ofIndex(actionTarget(d), width));
+    }
+
+    public int outBegin(int v) {
+        return outStart[v];
+    }
+
+    public int outEnd(int v) {
+        return outStart[v + 1];
+    }
+
+    public int target(int e) {
+        return edgeTarget[e];
+    }
+
+    public int source(int e) {
+        return edgeSource[e];
+    }
+
+    /** Energy delta of the edge in units (0 on robot edges). */
+    public int weight(int e) {
+        return edgeWeight[e];
+    }
+
+    /** {@link #NOMINAL} or the {@link EventKind} ordinal of the outcome. */
+    public int event(int e) {
+        return edgeEvent[e];
+    }
+
+    /** Index of the map's event rule that caused the outcome, or -1 when nominal. */
+    public int rule(int e) {
+        return edgeRule[e];
+    }
+
+    public int inBegin(int v) {
+        return inStart[v];
+    }
+
+    public int inEnd(int v) {
+        return inStart[v + 1];
+    }
+
+    /** The i-th incoming edge id (i from {@link #inBegin} to {@link #inEnd}). */
+    public int inEdge(int i) {
+        return inEdge[i];
+    }
+
+    /** Bit mask of the map zones (file order) that contain the cell. */
+    public long cellZones(int cellIndex) {
+        return cellZones[cellIndex];
+    }
+
+    public boolean isDock(int cellIndex) {
+        return cellDock[cellIndex];
+    }
+
+    /** Largest absolute edge weight (the bound mu of the discounted comparator). */
+    public int maxAbsWeight() {
+        int mu = 0;
+        for (int w : edgeWeight) {
+            mu = Math.max(mu, Math.abs(w));
+        }
+        return mu;
+    }
+}

@@ -1,0 +1,337 @@
+package dockline.arena;
+
+import dockline.model.BuildingMap;
+import dockline.model.Cell;
+import dockline.model.EnergyScale;
+import dockline.model.EventKind;
+import dockline.model.EventRule;
+import dockline.model.Mission;
+import dockline.model.Neighbourhood;
+import dockline.model.RobotProfile;
+import dockline.model.Terrain;
+import dockline.model.Zone;
+import java.math.BigDecimal;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Compiles a mission (map + robot + disturbance model) into its {@link Arena}, following the
+ * reference semantics of DESIGN.md 2.3 and maps/README.md.
+ *
+ * <p>Cost: O(F · (K+1) · A · S) time and memory, where F is the number of free cells, K the budget,
+ * A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action; in practice linear in the plan.
+ * Energy figures are turned into units by {@link EnergyScale}, rounding against the robot.
+ */
+public final class ArenaCompiler {
+
+    /** Neighbour offsets in the documented order: N, E, S, W, NE, SE, SW, NW. */
+    static final int[] DX = {0, 1, 0, -1, 1, 1, -1, -1};
+    static final int[] DY = {-1, 0, 1, 0, -1, 1, 1, -1};
+
+    /** Most zones a map may have (zone sets are 64-bit masks). */
+    public static final int MAX_ZONES = 63;
+
+    private ArenaCompiler() {
+    }
+
+    /**
+     * Builds the arena.
+     *
+     * @throws IllegalArgumentException if the mission breaks an invariant the loader checks
+     *                                  (more than {@link #MAX_ZONES} zones, start on a wall, a surface without energy)
+     * @throws ArithmeticException      if the arena would have more than {@code Integer.MAX_VALUE} vertices or edges
+     */
+    public static Arena compile(Mission mission) {
+        BuildingMap map = mission.map();
+        RobotProfile robot = mission.robot();
+        EnergyScale scale = mission.scale();
+        int w = map.width();
+        int h = map.height();
+        int cells = w * h;
+        int budget = map.disturbances().budget();
+        boolean eight = robot.neighbourhood() == Neighbourhood.EIGHT;
+        int dirs = eight ? 8 : 4;
+        if (map.zones().size() > MAX_ZONES) {
+            throw new IllegalArgumentException("a map may have at most " + MAX_ZONES + " zones");
+        }
+
+        boolean[] free = new boolean[cells];
+        boolean[] dock = new boolean[cells];
+        int[] cost = new int[cells];
+        int[] diagCost = new int[cells];
+        int[] slot = new int[cells];
+        Arrays.fill(slot, -1);
+        int freeCount = 0;
+        for (int y = 0; y < h; y++) {
+            for (int x = 0; x < w; x++) {
+                int c = y * w + x;
+                Terrain t = map.terrainAt(new Cell(x, y));
+                if (t.free()) {
+                    free[c] = true;
+                    dock[c] = t.dock();
+                    BigDecimal wh = robot.moveWh().get(t.surface());
+                    if (wh == null) {
+                        throw new IllegalArgumentException("no move energy for surface '" + t.surface() + "'");
+                    }
+                    cost[c] = scale.consumption(wh);
+                    diagCost[c] = scale.diagonalConsumption(wh);
+                    slot[c] = freeCount++;
+                }
+            }
+        }
+        int[] slotCell = new int[freeCount];
+        for (int c = 0; c < cells; c++) {
+            if (slot[c] >= 0) {
+                slotCell[slot[c]] = c;
+            }
+        }
+        long[] zones = new long[cells];
+        List<Zone> zs = map.zones();
+        for (int i = 0; i < zs.size(); i++) {
+            for (Cell c : zs.get(i).cells()) {
+                if (map.inside(c)) {
+                    zones[c.index(w)] |= 1L << i;
+                }
+            }
+        }
+        // event coverage per cell: rule index (first rule wins; drag takes the largest extra)
+        List<EventRule> rules = map.disturbances().rules();
+        int[] doorRule = filled(cells);
+        int[] blockRule = filled(cells);
+        int[] slipRule = filled(cells);
+        int[] dragRule = filled(cells);
+        int[] dragExtra = new int[cells];
+        for (int r = 0; r < rules.size(); r++) {
+            EventRule rule = rules.get(r);
+            int extra = rule.kind() == EventKind.DRAG ? scale.consumption(rule.extraWh()) : 0;
+            for (Cell c : rule.cells()) {
+                if (!map.inside(c)) {
+                    continue;
+                }
+                int ci = c.index(w);
+                switch (rule.kind()) {
+                    case DOOR_SHUT -> {
+                        if (doorRule[ci] < 0 && map.terrainAt(c).door()) {
+                            doorRule[ci] = r;
+                        }
+                    }
+                    case BLOCKAGE -> {
+                        if (blockRule[ci] < 0) {
+                            blockRule[ci] = r;
+                        }
+                    }
+                    case SLIP -> {
+                        if (slipRule[ci] < 0) {
+                            slipRule[ci] = r;
+                        }
+                    }
+                    case DRAG -> {
+                        if (dragRule[ci] < 0 || extra > dragExtra[ci]) {
+                            dragRule[ci] = r;
+                            dragExtra[ci] = extra;
+                        }
+                    }
+                }
+            }
+        }
+        int waitCost = scale.consumption(robot.waitWh());
+        int chargeGain = scale.gain(robot.chargeWh());
+
+        Cell start = mission.start();
+        if (!map.isFree(start)) {
+            throw new IllegalArgumentException("start cell " + start + " is not a free cell");
+        }
+        int kk = budget + 1;
+        int robotCount = Math.multiplyExact(freeCount, kk);
+
+        IntList vCell = new IntList(robotCount * 6);
+        IntList vBudget = new IntList(robotCount * 6);
+        for (int s = 0; s < freeCount; s++) {
+            for (int k = 0; k < kk; k++) {
+                vCell.add(slotCell[s]);
+                vBudget.add(k);
+            }
+        }
+        // robot edges first (to disturbance vertices numbered on the fly), outcomes after
+        IntList aKind = new IntList(robotCount * 5);
+        IntList aTarget = new IntList(robotCount * 5);
+        IntList robotOutStart = new IntList(robotCount + 1);
+        int next = robotCount;
+        int[] nb = new int[8];
+        for (int r = 0; r < robotCount; r++) {
+            robotOutStart.add(next - robotCount);
+            int c = vCell.get(r);
+            int n = neighbours(c, w, h, free, dirs, nb);
+            for (int i = 0; i < n; i++) {
+                aKind.add(ActionKind.MOVE.ordinal());
+                aTarget.add(nb[i]);
+                next = Math.addExact(next, 1);
+            }
+            aKind.add(ActionKind.WAIT.ordinal());
+            aTarget.add(c);
+            next = Math.addExact(next, 1);
+            if (dock[c] && chargeGain > 0) {
+                aKind.add(ActionKind.CHARGE.ordinal());
+                aTarget.add(c);
+                next = Math.addExact(next, 1);
+            }
+        }
+        robotOutStart.add(next - robotCount);
+        int vertexCount = next;
+        int distCount = vertexCount - robotCount;
+
+        IntList outStart = new IntList(vertexCount + 1);
+        IntList eTarget = new IntList(vertexCount * 2);
+        IntList eWeight = new IntList(vertexCount * 2);
+        IntList eEvent = new IntList(vertexCount * 2);
+        IntList eRule = new IntList(vertexCount * 2);
+        for (int r = 0; r < robotCount; r++) {
+            outStart.add(eTarget.size());
+            for (int d = robotOutStart.get(r); d < robotOutStart.get(r + 1); d++) {
+                eTarget.add(robotCount + d);
+                eWeight.add(0);
+                eEvent.add(Arena.NOMINAL);
+                eRule.add(-1);
+            }
+        }
+        int[] mb = new int[8];
+        int[] ownerOfD = new int[distCount];
+        for (int r = 0; r < robotCount; r++) {
+            for (int d = robotOutStart.get(r); d < robotOutStart.get(r + 1); d++) {
+                ownerOfD[d] = r;
+            }
+        }
+        for (int d = 0; d < distCount; d++) {
+            outStart.add(eTarget.size());
+            int owner = ownerOfD[d];
+            int c = vCell.get(owner);
+            int k = vBudget.get(owner);
+            int kind = aKind.get(d);
+            int t = aTarget.get(d);
+            int sOwn = slot[c];
+            if (kind == ActionKind.WAIT.ordinal()) {
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k, -waitCost, Arena.NOMINAL, -1);
+                continue;
+            }
+            if (kind == ActionKind.CHARGE.ordinal()) {
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k, chargeGain, Arena.NOMINAL, -1);
+                continue;
+            }
+            boolean diagonal = (c % w) != (t % w) && (c / w) != (t / w);
+            int enter = diagonal ? diagCost[t] : cost[t];
+            int sT = slot[t];
+            add(eTarget, eWeight, eEvent, eRule, sT * kk + k, -enter, Arena.NOMINAL, -1);
+            if (k == 0) {
+                continue;
+            }
+            int k1 = k - 1;
+            if (doorRule[t] >= 0) {
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), doorRule[t]);
+            }
+            if (blockRule[t] >= 0) {
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), blockRule[t]);
+            }
+            int slip = slipRule[c] >= 0 ? slipRule[c] : slipRule[t];
+            if (slip >= 0) {
+                int mn = neighbours(t, w, h, free, dirs, mb);
+                for (int i = 0; i < mn; i++) {
+                    int m = mb[i];
+                    if (m == c) {
+                        continue;
+                    }
+                    add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
+                }
+            }
+            if (dragRule[t] >= 0) {
+                add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
+                        EventKind.DRAG.ordinal(), dragRule[t]);
+            }
+        }
+        outStart.add(eTarget.size());
+
+        byte[] ak = new byte[distCount];
+        for (int i = 0; i < distCount; i++) {
+            ak[i] = (byte) aKind.get(i);
+        }
+        byte[] ev = new byte[eEvent.size()];
+        for (int i = 0; i < ev.length; i++) {
+            ev[i] = (byte) eEvent.get(i);
+        }
+        // disturbance vertices: cell and budget of their owner
+        int[] cellArr = Arrays.copyOf(vCell.toArray(), vertexCount);
+        int[] budgetArr = Arrays.copyOf(vBudget.toArray(), vertexCount);
+        for (int d = 0; d < distCount; d++) {
+            int owner = ownerOfD[d];
+            cellArr[robotCount + d] = vCell.get(owner);
+            budgetArr[robotCount + d] = vBudget.get(owner);
+        }
+        int startVertex = slot[start.index(w)] * kk + budget;
+        return new Arena(mission, w, h, budget, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
+                aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),
+                zones, dock, slot, slotCell);
+    }
+
+    private static void add(IntList t, IntList wt, IntList ev, IntList ru, int target, int weight, int event, int rule) {
+        t.add(target);
+        wt.add(weight);
+        ev.add(event);
+        ru.add(rule);
+    }
+
+    /**
+     * Free neighbours of cell c in the documented order; a diagonal may not cut a wall corner
+     * (both orthogonal cells beside it must be free).
+     */
+    static int neighbours(int c, int w, int h, boolean[] free, int dirs, int[] out) {
+        int x = c % w;
+        int y = c / w;
+        int n = 0;
+        for (int i = 0; i < dirs; i++) {
+            int nx = x + DX[i];
+            int ny = y + DY[i];
+            if (nx < 0 || ny < 0 || nx >= w || ny >= h || !free[ny * w + nx]) {
+                continue;
+            }
+            if (i >= 4 && (!free[y * w + nx] || !free[ny * w + x])) {
+                continue;
+            }
+            out[n++] = ny * w + nx;
+        }
+        return n;
+    }
+
+    private static int[] filled(int n) {
+        int[] a = new int[n];
+        Arrays.fill(a, -1);
+        return a;
+    }
+
+    /** A growable int array (no boxing). */
+    static final class IntList {
+        private int[] a;
+        private int n;
+
+        IntList(int cap) {
+            a = new int[Math.max(4, cap)];
+        }
+
+        void add(int v) {
+            if (n == a.length) {
+                a = Arrays.copyOf(a, Math.max(4, a.length + (a.length >> 1)));
+            }
+            a[n++] = v;
+        }
+
+        int get(int i) {
+            return a[i];
+        }
+
+        int size() {
+            return n;
+        }
+
+        int[] toArray() {
+            return Arrays.copyOf(a, n);
+        }
+    }
+}

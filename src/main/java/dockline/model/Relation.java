@@ -1,0 +1,28 @@
+package dockline.model;
+
+/** How a discounted score is compared with its threshold. */
+public enum Relation {
+    /** score ≥ threshold: a safety condition on the comparator. */
+    AT_LEAST(">="),
+    /** score &gt; threshold: a co-safety (reachability) condition on the comparator. */
+    ABOVE(">");
+
+    private final String symbol;
+
+    Relation(String symbol) {
+        this.symbol = symbol;
+    }
+
+    public String symbol() {
+        return symbol;
+    }
+
+    public static Relation ofSymbol(String s) {
+        for (Relation r : values()) {
+            if (r.symbol.equals(s)) {
+                return r;
+            }
+        }
+        return null;
+    }
+}
