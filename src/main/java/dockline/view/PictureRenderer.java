@@ -71,9 +71,24 @@ public final class PictureRenderer {
 
     /** Draws the picture as an AWT image. Starts the headless toolkit if needed. */
     public static BufferedImage render(ViewData data, Options o) throws IOException {
+        return renderWithGeometry(data, o).image();
+    }
+
+    /**
+     * A drawn picture and where the map sits in it.
+     *
+     * @param image   the picture
+     * @param mapX    x of the map's top-left corner in the picture
+     * @param mapY    y of the map's top-left corner in the picture
+     * @param cellPx  edge of one cell in pixels
+     */
+    record Drawn(BufferedImage image, double mapX, double mapY, double cellPx) {
+    }
+
+    static Drawn renderWithGeometry(ViewData data, Options o) throws IOException {
         FxRuntime.startHeadless();
         try {
-            return FxRuntime.call(() -> SwingFXUtils.fromFXImage(snapshot(data, o), null));
+            return FxRuntime.call(() -> snapshot(data, o));
         } catch (IOException | RuntimeException e) {
             throw e;
         } catch (Exception e) {
@@ -82,7 +97,7 @@ public final class PictureRenderer {
     }
 
     /** Builds, lays out and snapshots the picture; on the FX thread. */
-    static WritableImage snapshot(ViewData data, Options o) {
+    static Drawn snapshot(ViewData data, Options o) {
         Parent root = build(data, o);
         Scene scene = new Scene(root, o.width(), o.height(), Color.web("#f2f0ea"));
         scene.getStylesheets().add(stylesheet());
@@ -91,7 +106,11 @@ public final class PictureRenderer {
         WritableImage img = new WritableImage(o.width(), o.height());
         SnapshotParameters p = new SnapshotParameters();
         p.setFill(Color.web("#f2f0ea"));
-        return root.snapshot(p, img);
+        root.snapshot(p, img);
+        Canvas canvas = (Canvas) root.lookup("#picture-map");
+        javafx.geometry.Bounds b = canvas.localToScene(canvas.getLayoutBounds());
+        double s = (double) canvas.getProperties().get("cellPx");
+        return new Drawn(SwingFXUtils.fromFXImage(img, null), b.getMinX(), b.getMinY(), s);
     }
 
     static String stylesheet() {
@@ -129,6 +148,8 @@ public final class PictureRenderer {
         double s = Math.floor(Math.min(mapW / map.width(), mapH / map.height()) * 4) / 4;
         s = Math.max(2, s);
         Canvas canvas = new Canvas(Math.ceil(s * map.width()), Math.ceil(s * map.height()));
+        canvas.setId("picture-map");
+        canvas.getProperties().put("cellPx", s);
         MapPainter.paint(canvas.getGraphicsContext2D(), layers, 0, 0, s, canvas.getWidth(), canvas.getHeight());
         StackPane mapBox = new StackPane(canvas);
         mapBox.setPrefSize(mapW, mapH);

@@ -28,7 +28,7 @@ final class TestMissions {
     static Mission twoRooms() {
         List<String> rows = List.of(
                 "##############",
-                "#....#cccccc##",
+                "#....#ccccc=##",
                 "#....#cccccc##",
                 "#....Dcccccc##",
                 "#....#cccccc##",
