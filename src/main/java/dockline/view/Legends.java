@@ -76,13 +76,15 @@ final class Legends {
         return box;
     }
 
-    /** Heat scale from 0 to the capacity, ticks in Wh and %, plus the impossible swatch. */
-    static VBox heatKey(Mission m) {
+    /**
+     * Heat scale from {@code lo} (the reserve floor) to {@code hi} (the most any cell needs), ticks
+     * in Wh and % of capacity, plus the impossible swatch.
+     */
+    static VBox heatKey(Mission m, int lo, int hi) {
         VBox box = new VBox(3);
         Label title = new Label("charge needed to finish safely");
         title.getStyleClass().add("legend-label");
         box.getChildren().add(title);
-        int cap = m.capacityUnits();
         double w = 150;
         double h = 14;
         Canvas bar = new Canvas(w, h);
@@ -94,20 +96,17 @@ final class Legends {
         g.setStroke(Palette.GLYPH);
         g.strokeRect(0.5, 0.5, w - 1, h - 1);
         box.getChildren().add(bar);
-        GridPane ticks = new GridPane();
-        ticks.setHgap(8);
-        int[] fr = {0, 25, 50, 75, 100};
-        for (int i = 0; i < fr.length; i++) {
-            long u = (long) cap * fr[i] / 100;
-            Label l = new Label(fr[i] + " % = " + Units.wh(m, u));
+        VBox ticks = new VBox(0);
+        String[] where = {"left end", "middle", "right end"};
+        long[] at = {lo, lo + (long) (hi - lo) / 2, hi};
+        for (int i = 0; i < at.length; i++) {
+            Label l = new Label(where[i] + ": " + Units.both(m, at[i]));
             l.getStyleClass().add("legend-label");
-            ticks.add(l, i % 2, i / 2);
+            ticks.getChildren().add(l);
         }
         box.getChildren().add(ticks);
-        box.getChildren().add(row(swatch(g2 -> MapPainter.paintHeatCell(g2, ViewData.IMPOSSIBLE, cap, 0, 0, SW)),
+        box.getChildren().add(row(swatch(g2 -> MapPainter.paintHeatCell(g2, ViewData.IMPOSSIBLE, lo, hi, 0, 0, SW)),
                 "impossible: no charge is enough"));
-        box.getChildren().add(row(swatch(g2 -> MapPainter.paintHeatCell(g2, m.reserveUnits(), cap, 0, 0, SW)),
-                "reserve floor " + Units.both(m, m.reserveUnits())));
         return box;
     }
 

@@ -19,18 +19,22 @@ final class MapLayers {
     private final Overlay overlay;
     private final int[] heat;
     private final int capacityUnits;
+    private final int heatLow;
+    private final int heatHigh;
     private final Action[] policy;
     private final ViewReplay replay;
     private final int step;
     private final Cell hover;
 
-    private MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, Action[] policy,
-                      ViewReplay replay, int step, Cell hover) {
+    private MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow,
+                      int heatHigh, Action[] policy, ViewReplay replay, int step, Cell hover) {
         this.map = Objects.requireNonNull(map, "map");
         this.start = start;
         this.overlay = overlay;
         this.heat = heat;
         this.capacityUnits = capacityUnits;
+        this.heatLow = heatLow;
+        this.heatHigh = heatHigh;
         this.policy = policy;
         this.replay = replay;
         this.step = step;
@@ -39,7 +43,7 @@ final class MapLayers {
 
     /** The plan alone (a map opened without a mission). */
     static MapLayers plain(BuildingMap map) {
-        return new MapLayers(map, null, Overlay.PLAIN, null, 0, null, null, 0, null);
+        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, 0, null);
     }
 
     /**
@@ -54,10 +58,15 @@ final class MapLayers {
         int w = map.width();
         int[] heat = null;
         Action[] policy = null;
+        int lo = data.mission().reserveUnits();
+        int hi = lo + 1;
         if (overlay == Overlay.HEAT) {
             heat = new int[n];
             for (int i = 0; i < n; i++) {
                 heat[i] = map.isFree(Cell.ofIndex(i, w)) ? data.chargeNeeded(i, budgetLeft, progress) : ViewData.UNKNOWN;
+                if (heat[i] >= 0) {
+                    hi = Math.max(hi, heat[i]);
+                }
             }
         } else if (overlay == Overlay.POLICY) {
             policy = new Action[n];
@@ -68,19 +77,19 @@ final class MapLayers {
             }
         }
         int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
-        return new MapLayers(map, data.mission().start(), overlay, heat, data.mission().capacityUnits(), policy,
+        return new MapLayers(map, data.mission().start(), overlay, heat, data.mission().capacityUnits(), lo, hi, policy,
                 replay, s, null);
     }
 
     MapLayers withHover(Cell c) {
         return Objects.equals(c, hover) ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, policy, replay, step, c);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, replay, step, c);
     }
 
     MapLayers withStep(int s) {
         int clamped = replay == null ? 0 : Math.max(0, Math.min(s, replay.length()));
         return clamped == step ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, policy, replay, clamped, hover);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, replay, clamped, hover);
     }
 
     BuildingMap map() {
@@ -97,6 +106,16 @@ final class MapLayers {
 
     int capacityUnits() {
         return capacityUnits;
+    }
+
+    /** Bottom of the heat colour scale, in units: the reserve floor. */
+    int heatLow() {
+        return heatLow;
+    }
+
+    /** Top of the heat colour scale, in units: the largest finite value shown (above {@link #heatLow}). */
+    int heatHigh() {
+        return heatHigh;
     }
 
     /** Heat value of a cell (see {@link ViewData#chargeNeeded}); {@link ViewData#UNKNOWN} without a heat layer. */
@@ -125,12 +144,9 @@ final class MapLayers {
         return hover;
     }
 
-    /** Where the robot is at the current step: the replay's cell, else the start cell. */
+    /** Where the robot is at the current step of the replay; {@code null} without a replay. */
     Cell robotCell() {
-        if (replay != null) {
-            return replay.steps().get(step).cell();
-        }
-        return start;
+        return replay == null ? null : replay.steps().get(step).cell();
     }
 
     @Override

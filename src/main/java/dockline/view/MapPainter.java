@@ -73,7 +73,7 @@ final class MapPainter {
                     if (v == ViewData.UNKNOWN) {
                         continue;
                     }
-                    paintHeatCell(g, v, layers.capacityUnits(), ox + x * s, oy + y * s, s);
+                    paintHeatCell(g, v, layers.heatLow(), layers.heatHigh(), ox + x * s, oy + y * s, s);
                 }
             }
         }
@@ -223,8 +223,8 @@ final class MapPainter {
         }
     }
 
-    /** One heat cell: a colour by fraction of capacity, or the cross pattern for impossible cells. */
-    static void paintHeatCell(GraphicsContext g, int units, int capacity, double x, double y, double s) {
+    /** One heat cell: a colour by its place between {@code lo} and {@code hi}, or the cross pattern for impossible cells. */
+    static void paintHeatCell(GraphicsContext g, int units, int lo, int hi, double x, double y, double s) {
         if (units == ViewData.IMPOSSIBLE) {
             g.setFill(Palette.IMPOSSIBLE);
             g.fillRect(x, y, s, s);
@@ -235,7 +235,7 @@ final class MapPainter {
             g.strokeLine(x + m, y + s - m, x + s - m, y + m);
             return;
         }
-        double t = capacity <= 0 ? 0 : (double) units / capacity;
+        double t = hi <= lo ? 0 : (double) (units - lo) / (hi - lo);
         g.setFill(Palette.heat(t).deriveColor(0, 1, 1, 0.88));
         g.fillRect(x, y, s, s);
     }
@@ -304,34 +304,50 @@ final class MapPainter {
         g.setLineDashes();
     }
 
-    /** Zone names on tags at each zone's first cell; tags on the same cell are stacked. */
+    /**
+     * Zone names on tags, each at the first cell of its zone (row-major) whose tag does not
+     * overlap a tag already placed; the first cell when every place overlaps. O(zones × cells).
+     */
     private static void paintZoneNames(GraphicsContext g, BuildingMap map, double ox, double oy, double s) {
         double size = Math.max(9, Math.min(15, s * 0.42));
         Font font = Font.font("DejaVu Sans", FontWeight.BOLD, size);
-        Map<Cell, Integer> stack = new HashMap<>();
+        List<double[]> placed = new java.util.ArrayList<>();
         List<Zone> zones = map.zones();
         for (int i = 0; i < zones.size(); i++) {
             Zone z = zones.get(i);
             if (z.cells().isEmpty()) {
                 continue;
             }
-            Cell c = z.cells().get(0);
-            int k = stack.merge(c, 1, Integer::sum) - 1;
             Text probe = new Text(z.name());
             probe.setFont(font);
-            double tw = probe.getLayoutBounds().getWidth();
-            double th = probe.getLayoutBounds().getHeight();
-            double x = ox + c.x() * s + 2;
-            double y = oy + c.y() * s + 2 + k * (th + 3);
+            double tw = probe.getLayoutBounds().getWidth() + 8;
+            double th = probe.getLayoutBounds().getHeight() + 2;
+            double[] rect = null;
+            for (Cell c : z.cells()) {
+                double[] r = {ox + c.x() * s + 2, oy + c.y() * s + 2, tw, th};
+                if (placed.stream().noneMatch(p -> overlaps(p, r))) {
+                    rect = r;
+                    break;
+                }
+            }
+            if (rect == null) {
+                Cell c = z.cells().get(0);
+                rect = new double[] {ox + c.x() * s + 2, oy + c.y() * s + 2, tw, th};
+            }
+            placed.add(rect);
             Color col = Palette.zone(i);
             g.setFill(col.deriveColor(0, 1, 1, 0.9));
-            g.fillRoundRect(x, y, tw + 8, th + 2, 6, 6);
+            g.fillRoundRect(rect[0], rect[1], tw, th, 6, 6);
             g.setFill(Palette.textOn(col));
             g.setFont(font);
             g.setTextAlign(TextAlignment.LEFT);
             g.setTextBaseline(VPos.TOP);
-            g.fillText(z.name(), x + 4, y + 1);
+            g.fillText(z.name(), rect[0] + 4, rect[1] + 1);
         }
+    }
+
+    private static boolean overlaps(double[] a, double[] b) {
+        return a[0] < b[0] + b[2] && b[0] < a[0] + a[2] && a[1] < b[1] + b[3] && b[1] < a[1] + a[3];
     }
 
     /** A policy glyph: an arrow for a move, two bars for wait, a battery for charge. */

@@ -7,7 +7,6 @@ import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.model.Terrain;
 import java.io.IOException;
-import java.math.BigDecimal;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
@@ -117,6 +116,7 @@ public final class MissionWindow {
     private final Spinner<Integer> budgetSpinner = new Spinner<>(0, 0, 0);
     private final Slider levelSlider = new Slider(0, 1, 1);
     private final Label levelLabel = new Label("");
+    private final javafx.scene.control.CheckBox followReplay = new javafx.scene.control.CheckBox("_Follow the replay step");
     private final StackPane keyBox = new StackPane();
     // replay controls
     private final ComboBox<ViewReplay> replayChoice = new ComboBox<>();
@@ -329,8 +329,13 @@ public final class MissionWindow {
         GridPane.setHgrow(progressChoice, Priority.ALWAYS);
         keyBox.setId("key");
         keyBox.setAlignment(Pos.TOP_LEFT);
+        followReplay.setId("policy-follow");
+        followReplay.setSelected(true);
+        followReplay.setMnemonicParsing(true);
+        followReplay.setTooltip(new Tooltip("Show the policy for the battery, disturbances left and tasks done at the"
+                + " current replay step"));
         VBox overlaySec = section("Show on the map", new HBox(8, plainToggle, heatToggle, policyToggle), og,
-                new Label("Battery level for the policy"), levelSlider, levelLabel, keyBox);
+                new Label("Policy for a battery level of"), levelSlider, levelLabel, followReplay, keyBox);
 
         // replay
         replayChoice.setId("replay");
@@ -415,6 +420,7 @@ public final class MissionWindow {
             refreshLayers();
         });
         replayChoice.valueProperty().addListener((o, a, b) -> onReplayChosen());
+        followReplay.selectedProperty().addListener((o, a, b) -> refreshLayers());
 
         backButton.setOnAction(e -> player.stepBack());
         forwardButton.setOnAction(e -> player.stepForward());
@@ -681,33 +687,21 @@ public final class MissionWindow {
         }
     }
 
+    /** The field's charge (the unit chooser applies when the text has no unit of its own), checked against the capacity. */
     private Charge parseCharge(String text, String unit, String what) {
-        String s = text == null ? "" : text.trim().replace(',', '.');
-        if (s.endsWith("%")) {
-            s = s.substring(0, s.length() - 1).trim();
-            unit = "%";
-        } else if (s.toLowerCase(java.util.Locale.ROOT).endsWith("wh")) {
-            s = s.substring(0, s.length() - 2).trim();
-            unit = "Wh";
-        }
-        BigDecimal v;
+        String t = text == null ? "" : text.trim().replace(',', '.');
+        boolean hasUnit = t.endsWith("%") || t.toLowerCase(java.util.Locale.ROOT).endsWith("wh");
+        Charge c;
         try {
-            v = new BigDecimal(s);
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("the " + what + " must be a number, e.g. 20 (%) or 8.5 (Wh)");
+            c = dockline.io.Quantities.parseCharge(hasUnit || t.isEmpty() ? t : t + ("%".equals(unit) ? "%" : " Wh"));
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("the " + what + ": " + e.getMessage());
         }
-        if (v.signum() < 0) {
-            throw new IllegalArgumentException("the " + what + " must not be negative");
+        String wrong = dockline.io.Quantities.checkAgainstCapacity(c, base.robot().capacityWh());
+        if (wrong != null) {
+            throw new IllegalArgumentException("the " + what + ": " + wrong);
         }
-        boolean pct = "%".equals(unit);
-        if (pct && v.compareTo(BigDecimal.valueOf(100)) > 0) {
-            throw new IllegalArgumentException("the " + what + " cannot be above 100 %");
-        }
-        if (!pct && v.compareTo(base.robot().capacityWh()) > 0) {
-            throw new IllegalArgumentException("the " + what + " cannot be above the capacity, "
-                    + base.robot().capacityWh().stripTrailingZeros().toPlainString() + " Wh");
-        }
-        return pct ? Charge.percent(v) : Charge.wh(v);
+        return c;
     }
 
     // ------------------------------------------------------------------ scenarios
@@ -838,10 +832,17 @@ public final class MissionWindow {
         int s = player.step();
         chart.setStep(s);
         MapLayers l = mapView.layers();
-        if (l != null) {
+        if (following()) {
+            refreshLayers();
+        } else if (l != null) {
             mapView.layersProperty().set(l.withStep(s));
         }
         updateStepLabel();
+    }
+
+    /** Whether the policy overlay takes its situation from the current replay step. */
+    private boolean following() {
+        return currentOverlay() == Overlay.POLICY && followReplay.isSelected() && replayChoice.getValue() != null;
     }
 
     private void updateStepLabel() {
@@ -910,19 +911,34 @@ public final class MissionWindow {
         int progress = pc == null ? 0 : pc.mask();
         Integer k = budgetSpinner.getValue();
         int budget = k == null ? d.mission().map().disturbances().budget() : k;
-        MapLayers l = MapLayers.of(d, o, budget, progress, currentLevel(), replayChoice.getValue(), player.step())
+        int level = currentLevel();
+        ViewReplay r = replayChoice.getValue();
+        if (following()) {
+            ViewStep st = r.steps().get(Math.min(player.step(), r.length()));
+            level = st.levelUnits();
+            budget = st.budgetLeft();
+            progress = st.progress();
+        }
+        MapLayers l = MapLayers.of(d, o, budget, progress, level, r, player.step())
                 .withHover(mapView.hoverCellProperty().get());
         mapView.layersProperty().set(l);
         Mission m = d.mission();
         VBox key = new VBox(6);
         if (o == Overlay.HEAT) {
-            key.getChildren().add(Legends.heatKey(m));
+            key.getChildren().add(Legends.heatKey(m, l.heatLow(), l.heatHigh()));
         } else if (o == Overlay.POLICY) {
             key.getChildren().add(Legends.policyKey());
         }
         key.getChildren().add(Legends.mapKey(m.map()));
         keyBox.getChildren().setAll(key);
-        levelSlider.setDisable(o != Overlay.POLICY);
+        levelSlider.setDisable(o != Overlay.POLICY || following());
+        followReplay.setDisable(o != Overlay.POLICY || r == null);
+        if (following()) {
+            levelLabel.setText("policy shown for the replay step: battery " + Units.both(m, level) + ", "
+                    + budget + " disturbances left");
+        } else {
+            updateLevelLabel();
+        }
         updateCellInfo(mapView.hoverCellProperty().get());
     }
 

@@ -92,7 +92,7 @@ class MissionWindowTest {
         robot.interact(() -> reserve.setText("lots"));
         robot.clickOn("#check");
         WaitForAsyncUtils.waitForFxEvents();
-        assertThat(robot.lookup("#solve-status").queryAs(Label.class).getText()).contains("must be a number");
+        assertThat(robot.lookup("#solve-status").queryAs(Label.class).getText()).contains("reserve floor").contains("not a charge");
         assertThat(analyzer.calls).isEqualTo(before);
     }
 
