@@ -34,7 +34,12 @@ final class FakeAnalyzer implements Analyzer {
             if (cancelled.getAsBoolean()) {
                 throw new CancellationException("cancelled");
             }
-            Thread.onSpinWait();
+            try {
+                Thread.sleep(5);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new CancellationException("interrupted");
+            }
         }
         return compute(m);
     }
