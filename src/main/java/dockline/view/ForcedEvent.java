@@ -1,21 +1,31 @@
 package dockline.view;
 
+import dockline.model.Cell;
+import dockline.model.EventKind;
+import java.util.Objects;
+
 /**
- * A disturbance the user wants to force in a scenario: at the given step (the robot's action
- * number, 1 = first move), the event rule with the given index in the map's disturbance model
- * strikes if it can apply there.
+ * A disturbance the user forces in a scenario: at the given step (the robot's action number,
+ * 1 = first action) the event strikes the robot's move, if the map allows it there.
  *
- * @param step      action number, 1 or more
- * @param ruleIndex index into {@code map.disturbances().rules()}
+ * @param step   action number, 1 or more
+ * @param kind   the event
+ * @param slipTo for a slip, the cell to slip to; {@code null} for "the only possible one" or other events
  */
-public record ForcedEvent(int step, int ruleIndex) {
+public record ForcedEvent(int step, EventKind kind, Cell slipTo) {
 
     public ForcedEvent {
         if (step < 1) {
             throw new IllegalArgumentException("a forced event needs a step of 1 or more");
         }
-        if (ruleIndex < 0) {
-            throw new IllegalArgumentException("rule index must not be negative");
+        Objects.requireNonNull(kind, "kind");
+        if (slipTo != null && kind != EventKind.SLIP) {
+            throw new IllegalArgumentException("only a slip takes a cell to slip to");
         }
+    }
+
+    @Override
+    public String toString() {
+        return "step " + step + ": " + kind.word() + (slipTo != null ? " to " + slipTo : "");
     }
 }

@@ -3,6 +3,7 @@ package dockline.view;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.Charge;
+import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.model.Terrain;
@@ -125,7 +126,8 @@ public final class MissionWindow {
     private final Button forwardButton = new Button("_Next \u25b6");
     private final Slider speedSlider = new Slider(0.5, 10, 2);
     private final Label stepLabel = new Label("");
-    private final ChoiceBox<RuleItem> forceRule = new ChoiceBox<>();
+    private final ChoiceBox<EventKind> forceKind = new ChoiceBox<>();
+    private final TextField forceSlipTo = new TextField();
     private final Spinner<Integer> forceStep = new Spinner<>(1, 10_000, 1);
     private final ListView<ForcedEvent> forcedList = new ListView<>();
     private final Button forceAdd = new Button("Add");
@@ -144,14 +146,6 @@ public final class MissionWindow {
     private final Map<Path, FileTime> dismissed = new LinkedHashMap<>();
     private Stage stage;
     private boolean updatingControls;
-
-    /** An event rule in the scenario chooser. */
-    private record RuleItem(int index, EventRule rule) {
-        @Override
-        public String toString() {
-            return rule.kind().word() + ": " + rule.label();
-        }
-    }
 
     public MissionWindow(Analyzer analyzer, MissionSource source, Path recentStore) {
         this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
@@ -353,8 +347,22 @@ public final class MissionWindow {
         stepLabel.setId("step-label");
         stepLabel.setWrapText(true);
         stepLabel.setMaxWidth(Double.MAX_VALUE);
-        forceRule.setId("force-rule");
-        forceRule.setMaxWidth(Double.MAX_VALUE);
+        forceKind.setId("force-kind");
+        forceKind.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(EventKind k) {
+                return k == null ? "" : k.word();
+            }
+
+            @Override
+            public EventKind fromString(String s) {
+                return EventKind.ofWord(s);
+            }
+        });
+        forceSlipTo.setId("force-slip-to");
+        forceSlipTo.setPromptText("x:y");
+        forceSlipTo.setPrefColumnCount(5);
+        forceSlipTo.disableProperty().bind(forceKind.valueProperty().isNotEqualTo(EventKind.SLIP));
         forceStep.setId("force-step");
         forceStep.setPrefWidth(80);
         forceStep.setEditable(true);
@@ -366,8 +374,11 @@ public final class MissionWindow {
         forceClear.setOnAction(e -> forcedList.getItems().clear());
         forceAdd.setOnAction(e -> addForced());
         forceRun.setOnAction(e -> runScenario());
-        forceBox.getChildren().addAll(forceRule, new HBox(6, new Label("at step"), forceStep, forceAdd, forceClear),
-                forcedList, forceRun);
+        HBox kindRow = new HBox(6, forceKind, new Label("slip to"), forceSlipTo);
+        kindRow.setAlignment(Pos.CENTER_LEFT);
+        HBox stepRow = new HBox(6, new Label("at step"), forceStep, forceAdd, forceClear);
+        stepRow.setAlignment(Pos.CENTER_LEFT);
+        forceBox.getChildren().addAll(kindRow, stepRow, forcedList, forceRun);
         VBox forceSec = section("Force disturbances (scenario)", forceBox);
 
         cellInfo.setId("cell-info");
@@ -707,11 +718,26 @@ public final class MissionWindow {
     // ------------------------------------------------------------------ scenarios
 
     private void addForced() {
-        RuleItem r = forceRule.getValue();
+        EventKind k = forceKind.getValue();
         Integer s = forceStep.getValue();
-        if (r != null && s != null) {
-            forcedList.getItems().add(new ForcedEvent(s, r.index()));
+        if (k == null || s == null) {
+            return;
         }
+        Cell to = null;
+        String t = forceSlipTo.getText() == null ? "" : forceSlipTo.getText().trim();
+        if (k == EventKind.SLIP && !t.isEmpty()) {
+            String[] xy = t.split(":");
+            try {
+                to = new Cell(Integer.parseInt(xy[0].trim()), Integer.parseInt(xy[1].trim()));
+            } catch (RuntimeException e) {
+                status.setText("'" + t + "' is not a cell; write x:y, e.g. 3:4");
+                return;
+            }
+        }
+        ForcedEvent f = new ForcedEvent(s, k, to);
+        forcedList.getItems().removeIf(e -> e.step() == f.step());
+        forcedList.getItems().add(f);
+        forcedList.getItems().sort(java.util.Comparator.comparingInt(ForcedEvent::step));
     }
 
     private void runScenario() {
@@ -720,9 +746,15 @@ public final class MissionWindow {
             return;
         }
         List<ForcedEvent> events = List.copyOf(forcedList.getItems());
-        Optional<ViewReplay> r = d.force(events);
+        Optional<ViewReplay> r;
+        try {
+            r = d.force(events);
+        } catch (IllegalArgumentException e) {
+            status.setText("that scenario cannot be played: " + e.getMessage());
+            return;
+        }
         if (r.isEmpty()) {
-            status.setText("that scenario cannot be played (no event of that kind applies at those steps)");
+            status.setText("that scenario cannot be played");
             return;
         }
         replayChoice.getItems().add(r.get());
@@ -789,13 +821,15 @@ public final class MissionWindow {
             updateLevelLabel();
 
             replayChoice.getItems().setAll(d.replays());
-            forceRule.getItems().clear();
+            forceKind.getItems().clear();
             List<EventRule> rules = m.map().disturbances().rules();
-            for (int i = 0; i < rules.size(); i++) {
-                forceRule.getItems().add(new RuleItem(i, rules.get(i)));
+            for (EventKind ek : EventKind.values()) {
+                if (rules.stream().anyMatch(r -> r.kind() == ek)) {
+                    forceKind.getItems().add(ek);
+                }
             }
-            if (!forceRule.getItems().isEmpty()) {
-                forceRule.setValue(forceRule.getItems().get(0));
+            if (!forceKind.getItems().isEmpty()) {
+                forceKind.setValue(forceKind.getItems().get(0));
             }
             forcedList.getItems().clear();
             forceBox.setDisable(!d.canForce() || rules.isEmpty());

@@ -41,7 +41,11 @@ public interface ViewData {
     /** The runs to play: the worst case (if guaranteed), the counterexample (if not). */
     List<ViewReplay> replays();
 
-    /** Plays a scenario with the given disturbances forced, if this data can do that. */
+    /**
+     * Plays a scenario with the given disturbances forced, if this data can do that.
+     *
+     * @throws IllegalArgumentException when an event cannot happen where it was put (message in words)
+     */
     default Optional<ViewReplay> force(List<ForcedEvent> events) {
         return Optional.empty();
     }

@@ -1,0 +1,100 @@
+package dockline.view;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dockline.model.Cell;
+import dockline.model.Mission;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+import java.util.function.BooleanSupplier;
+import javafx.scene.control.Label;
+import javafx.scene.control.TextField;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * The window on a demo mission with the real loader and solver, headless: what it shows must be
+ * what the solver computed (verdict, heat map under the pointer, replay, chart).
+ */
+@ExtendWith(ApplicationExtension.class)
+class DemoMissionWindowTest {
+
+    private static final Path MISSION = Path.of("missions/night-round.yaml");
+
+    private MissionWindow window;
+
+    @Start
+    void start(Stage stage) {
+        window = new MissionWindow(new SolverAnalyzer(), new FileMissionSource(), null);
+        stage.setScene(window.scene(1180, 780));
+        window.attach(stage);
+        stage.show();
+        window.open(MISSION);
+    }
+
+    @AfterEach
+    void stop() throws Exception {
+        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
+    }
+
+    private static <T> T fx(Callable<T> c) {
+        try {
+            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static void waitUntil(BooleanSupplier c) throws Exception {
+        WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, c::getAsBoolean);
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    private boolean solvedWithReserve(int units) {
+        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
+                && window.dataProperty().get().solved() && window.dataProperty().get().mission().reserveUnits() == units);
+    }
+
+    @Test
+    void the_demo_verdict_and_the_heat_map_under_the_pointer_are_the_solvers(FxRobot robot) throws Exception {
+        Mission m = dockline.io.MissionLoader.load(MISSION);
+        waitUntil(() -> solvedWithReserve(m.reserveUnits()));
+        ViewData d = fx(() -> window.dataProperty().get());
+        // missions/README.md lists this demo as guaranteed
+        assertThat(d.verdict().outcome()).isEqualTo(Verdict.Outcome.GUARANTEED);
+        assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Guaranteed");
+        // the start cell needs no more than the starting charge (else the verdict could not be "guaranteed")
+        int w = m.map().width();
+        int need = d.chargeNeeded(m.start().index(w), m.map().disturbances().budget(), ProgressChoices.initialMask(m));
+        assertThat(need).isBetween(m.reserveUnits(), m.startUnits());
+        // the pointer over the start cell shows that figure
+        MapView mv = window.mapView();
+        Cell c = m.start();
+        double[] p = fx(() -> mv.centreOf(c));
+        robot.moveTo(mv, javafx.geometry.Pos.TOP_LEFT, new javafx.geometry.Point2D(p[0], p[1]),
+                org.testfx.robot.Motion.DIRECT);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertThat(robot.lookup("#cell-info").queryAs(Label.class).getText())
+                .contains("cell " + c).contains("charge needed from here: " + Units.both(m, need));
+    }
+
+    @Test
+    void a_reserve_above_the_starting_charge_is_not_guaranteed(FxRobot robot) throws Exception {
+        Mission m = dockline.io.MissionLoader.load(MISSION);
+        waitUntil(() -> solvedWithReserve(m.reserveUnits()));
+        TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
+        robot.interact(() -> reserve.setText("90"));
+        robot.clickOn("#check");
+        Mission high = m.withReserve(dockline.model.Charge.percent(new java.math.BigDecimal("90")));
+        waitUntil(() -> solvedWithReserve(high.reserveUnits()));
+        // a floor above the starting level loses at once (DESIGN.md 2.3: the start must be at or above the floor)
+        assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
+    }
+}
