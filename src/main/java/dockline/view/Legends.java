@@ -117,6 +117,10 @@ final class Legends {
         box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW)), "move"));
         box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.WAIT, c), 0, 0, 0, 0, SW)), "wait"));
         box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.CHARGE, c), 0, 0, 0, 0, SW)), "charge"));
+        box.getChildren().add(row(swatch(g -> {
+            MapPainter.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW);
+            MapPainter.paintVaries(g, 0, 0, SW);
+        }), "the move depends on the battery level (the most frequent is drawn)"));
         Label none = new Label("no glyph: the policy never gets there in that situation");
         none.getStyleClass().add("legend-label");
         none.setWrapText(true);

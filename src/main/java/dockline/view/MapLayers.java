@@ -22,12 +22,13 @@ final class MapLayers {
     private final int heatLow;
     private final int heatHigh;
     private final Action[] policy;
+    private final boolean[] policyVaries;
     private final ViewReplay replay;
     private final int step;
     private final Cell hover;
 
     private MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow,
-                      int heatHigh, Action[] policy, ViewReplay replay, int step, Cell hover) {
+                      int heatHigh, Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover) {
         this.map = Objects.requireNonNull(map, "map");
         this.start = start;
         this.overlay = overlay;
@@ -36,6 +37,7 @@ final class MapLayers {
         this.heatLow = heatLow;
         this.heatHigh = heatHigh;
         this.policy = policy;
+        this.policyVaries = policyVaries;
         this.replay = replay;
         this.step = step;
         this.hover = hover;
@@ -43,12 +45,14 @@ final class MapLayers {
 
     /** The plan alone (a map opened without a mission). */
     static MapLayers plain(BuildingMap map) {
-        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, 0, null);
+        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, null, 0, null);
     }
 
     /**
      * Everything for one mission's data. The heat map is read at {@code budgetLeft} and
-     * {@code progress}; the policy at {@code level}, {@code budgetLeft} and {@code progress}.
+     * {@code progress}; the policy at {@code level}, {@code budgetLeft} and {@code progress}, or,
+     * when {@code level} is negative, at every level the policy has for the cell (the most
+     * frequent action is drawn, marked when it depends on the level).
      * Cost: one view-model query per free cell.
      */
     static MapLayers of(ViewData data, Overlay overlay, int budgetLeft, int progress, int level,
@@ -58,6 +62,7 @@ final class MapLayers {
         int w = map.width();
         int[] heat = null;
         Action[] policy = null;
+        boolean[] varies = null;
         int lo = data.mission().reserveUnits();
         int hi = lo + 1;
         if (overlay == Overlay.HEAT) {
@@ -70,26 +75,34 @@ final class MapLayers {
             }
         } else if (overlay == Overlay.POLICY) {
             policy = new Action[n];
+            varies = new boolean[n];
             for (int i = 0; i < n; i++) {
-                if (map.isFree(Cell.ofIndex(i, w))) {
+                if (!map.isFree(Cell.ofIndex(i, w))) {
+                    continue;
+                }
+                if (level >= 0) {
                     policy[i] = data.policyAction(i, level, budgetLeft, progress).orElse(null);
+                } else {
+                    java.util.List<Action> all = data.policyActions(i, budgetLeft, progress);
+                    policy[i] = all.isEmpty() ? null : all.get(0);
+                    varies[i] = all.size() > 1;
                 }
             }
         }
         int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
         return new MapLayers(map, data.mission().start(), overlay, heat, data.mission().capacityUnits(), lo, hi, policy,
-                replay, s, null);
+                varies, replay, s, null);
     }
 
     MapLayers withHover(Cell c) {
         return Objects.equals(c, hover) ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, replay, step, c);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, step, c);
     }
 
     MapLayers withStep(int s) {
         int clamped = replay == null ? 0 : Math.max(0, Math.min(s, replay.length()));
         return clamped == step ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, replay, clamped, hover);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, clamped, hover);
     }
 
     BuildingMap map() {
@@ -130,6 +143,11 @@ final class MapLayers {
     /** The policy's action on a cell, or {@code null}. */
     Action policy(int cellIndex) {
         return policy == null ? null : policy[cellIndex];
+    }
+
+    /** Whether the policy's action on the cell depends on the battery level (all-levels mode only). */
+    boolean policyVaries(int cellIndex) {
+        return policyVaries != null && policyVaries[cellIndex];
     }
 
     ViewReplay replay() {

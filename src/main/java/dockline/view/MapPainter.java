@@ -117,6 +117,9 @@ final class MapPainter {
                     Action a = layers.policy(y * w + x);
                     if (a != null) {
                         paintAction(g, a, x, y, ox + x * s, oy + y * s, s);
+                        if (layers.policyVaries(y * w + x)) {
+                            paintVaries(g, ox + x * s, oy + y * s, s);
+                        }
                     }
                 }
             }
@@ -388,6 +391,24 @@ final class MapPainter {
             g.fillRect(mx + bw / 2, my - bh / 5, s * 0.06, bh * 0.4);
             g.fillRect(mx - bw / 2 + bw * 0.12, my - bh / 2 + bh * 0.2, bw * 0.5, bh * 0.6);
         }
+    }
+
+    /** The "depends on the battery level" mark: a small tilde badge in the cell's top-right corner. */
+    static void paintVaries(GraphicsContext g, double x, double y, double s) {
+        double r = Math.max(3.5, s * 0.16);
+        double cx = x + s - r - 1;
+        double cy = y + r + 1;
+        g.setFill(Color.WHITE);
+        g.fillOval(cx - r, cy - r, 2 * r, 2 * r);
+        g.setStroke(Palette.GLYPH);
+        g.setLineWidth(Math.max(1, s / 28));
+        g.strokeOval(cx - r, cy - r, 2 * r, 2 * r);
+        double a = r * 0.55;
+        g.beginPath();
+        g.moveTo(cx - a, cy + a * 0.2);
+        g.bezierCurveTo(cx - a * 0.5, cy - a * 0.7, cx, cy - a * 0.2, cx, cy);
+        g.bezierCurveTo(cx, cy + a * 0.2, cx + a * 0.5, cy + a * 0.7, cx + a, cy - a * 0.2);
+        g.stroke();
     }
 
     /** The replay path (walked part solid, rest dashed), its disturbance events, numbered by step. */

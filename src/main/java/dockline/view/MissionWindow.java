@@ -117,7 +117,25 @@ public final class MissionWindow {
     private final Spinner<Integer> budgetSpinner = new Spinner<>(0, 0, 0);
     private final Slider levelSlider = new Slider(0, 1, 1);
     private final Label levelLabel = new Label("");
-    private final javafx.scene.control.CheckBox followReplay = new javafx.scene.control.CheckBox("_Follow the replay step");
+    private final ChoiceBox<PolicyMode> policyMode = new ChoiceBox<>(FXCollections.observableArrayList(PolicyMode.values()));
+
+    /** Which battery level the policy overlay is read at. */
+    enum PolicyMode {
+        FOLLOW("the current replay step"),
+        ANY("every level it meets"),
+        LEVEL("the level below");
+
+        private final String words;
+
+        PolicyMode(String words) {
+            this.words = words;
+        }
+
+        @Override
+        public String toString() {
+            return words;
+        }
+    }
     private final StackPane keyBox = new StackPane();
     // replay controls
     private final ComboBox<ViewReplay> replayChoice = new ComboBox<>();
@@ -323,13 +341,14 @@ public final class MissionWindow {
         GridPane.setHgrow(progressChoice, Priority.ALWAYS);
         keyBox.setId("key");
         keyBox.setAlignment(Pos.TOP_LEFT);
-        followReplay.setId("policy-follow");
-        followReplay.setSelected(true);
-        followReplay.setMnemonicParsing(true);
-        followReplay.setTooltip(new Tooltip("Show the policy for the battery, disturbances left and tasks done at the"
-                + " current replay step"));
+        policyMode.setId("policy-mode");
+        policyMode.setValue(PolicyMode.ANY);
+        policyMode.setTooltip(new Tooltip("The replay step: the battery, disturbances left and tasks done at the current"
+                + " step. Every level: each cell's move over all battery levels the policy meets there."));
+        HBox modeRow = new HBox(6, new Label("Policy at"), policyMode);
+        modeRow.setAlignment(Pos.CENTER_LEFT);
         VBox overlaySec = section("Show on the map", new HBox(8, plainToggle, heatToggle, policyToggle), og,
-                new Label("Policy for a battery level of"), levelSlider, levelLabel, followReplay, keyBox);
+                modeRow, levelSlider, levelLabel, keyBox);
 
         // replay
         replayChoice.setId("replay");
@@ -431,7 +450,7 @@ public final class MissionWindow {
             refreshLayers();
         });
         replayChoice.valueProperty().addListener((o, a, b) -> onReplayChosen());
-        followReplay.selectedProperty().addListener((o, a, b) -> refreshLayers());
+        policyMode.valueProperty().addListener((o, a, b) -> refreshLayers());
 
         backButton.setOnAction(e -> player.stepBack());
         forwardButton.setOnAction(e -> player.stepForward());
@@ -876,7 +895,8 @@ public final class MissionWindow {
 
     /** Whether the policy overlay takes its situation from the current replay step. */
     private boolean following() {
-        return currentOverlay() == Overlay.POLICY && followReplay.isSelected() && replayChoice.getValue() != null;
+        return currentOverlay() == Overlay.POLICY && policyMode.getValue() == PolicyMode.FOLLOW
+                && replayChoice.getValue() != null;
     }
 
     private void updateStepLabel() {
@@ -945,7 +965,7 @@ public final class MissionWindow {
         int progress = pc == null ? 0 : pc.mask();
         Integer k = budgetSpinner.getValue();
         int budget = k == null ? d.mission().map().disturbances().budget() : k;
-        int level = currentLevel();
+        int level = policyMode.getValue() == PolicyMode.LEVEL ? currentLevel() : -1;
         ViewReplay r = replayChoice.getValue();
         if (following()) {
             ViewStep st = r.steps().get(Math.min(player.step(), r.length()));
@@ -965,11 +985,13 @@ public final class MissionWindow {
         }
         key.getChildren().add(Legends.mapKey(m.map()));
         keyBox.getChildren().setAll(key);
-        levelSlider.setDisable(o != Overlay.POLICY || following());
-        followReplay.setDisable(o != Overlay.POLICY || r == null);
+        levelSlider.setDisable(o != Overlay.POLICY || policyMode.getValue() != PolicyMode.LEVEL);
+        policyMode.setDisable(o != Overlay.POLICY);
         if (following()) {
             levelLabel.setText("policy shown for the replay step: battery " + Units.both(m, level) + ", "
                     + budget + " disturbances left");
+        } else if (policyMode.getValue() == PolicyMode.ANY) {
+            levelLabel.setText("policy shown at every battery level it meets on each cell");
         } else {
             updateLevelLabel();
         }

@@ -39,7 +39,7 @@ public final class PictureRenderer {
      * @param height   picture height in pixels
      * @param overlay  plain map, heat map or policy
      * @param progress task progress mask for heat map and policy; -1 for the progress at the start
-     * @param level    battery level in units for the policy; -1 for the starting charge
+     * @param level    battery level in units for the policy; -1 for every level the policy has
      */
     public record Options(int width, int height, Overlay overlay, int progress, int level) {
         public Options {
@@ -122,7 +122,7 @@ public final class PictureRenderer {
         Mission m = data.mission();
         BuildingMap map = m.map();
         int progress = o.progress() >= 0 ? o.progress() : ProgressChoices.initialMask(m);
-        int level = o.level() >= 0 ? o.level() : m.startUnits();
+        int level = o.level();
         int budget = map.disturbances().budget();
         List<ViewReplay> replays = data.replays();
         ViewReplay replay = replays.isEmpty() ? null : replays.get(0);
@@ -204,7 +204,8 @@ public final class PictureRenderer {
         return switch (overlay) {
             case PLAIN -> "Plain map. " + when;
             case HEAT -> (data.solved() ? "Charge needed per cell. " : "Charge needed per cell (not solved). ") + when;
-            case POLICY -> "Policy at battery " + Units.both(m, level) + ". " + when;
+            case POLICY -> (level < 0 ? "Policy at every battery level it meets. " : "Policy at battery " + Units.both(m, level) + ". ")
+                    + when;
         };
     }
 

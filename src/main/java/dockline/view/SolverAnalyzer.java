@@ -5,11 +5,17 @@ import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.solve.ChargeNeeded;
+import dockline.solve.Policy;
+import dockline.solve.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import dockline.solve.ReserveSolver;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.BooleanSupplier;
 
@@ -30,7 +36,7 @@ public final class SolverAnalyzer implements Analyzer {
         } catch (ProductTooLargeException e) {
             throw new IllegalArgumentException(e.getMessage(), e);
         }
-        return new SolvedData(a, verdictOf(a), List.of());
+        return new SolvedData(a, verdictOf(a), List.of(), a.policy());
     }
 
     /** The verdict in words, for a reserve analysis. */
@@ -65,11 +71,47 @@ public final class SolverAnalyzer implements Analyzer {
                 cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
     }
 
-    /** {@link ViewData} over a {@link ReserveAnalysis}. */
-    record SolvedData(ReserveAnalysis analysis, Verdict verdict, List<ViewReplay> replays) implements ViewData {
+    /** {@link ViewData} over a {@link ReserveAnalysis}; the policy is indexed by cell once, at construction. */
+    static final class SolvedData implements ViewData {
 
-        SolvedData {
-            replays = List.copyOf(replays);
+        private final ReserveAnalysis analysis;
+        private final Verdict verdict;
+        private final List<ViewReplay> replays;
+        private final Optional<Policy> policy;
+        private final Map<Long, List<Action>> byCell;
+
+        SolvedData(ReserveAnalysis analysis, Verdict verdict, List<ViewReplay> replays, Optional<Policy> policy) {
+            this.analysis = analysis;
+            this.verdict = verdict;
+            this.replays = List.copyOf(replays);
+            this.policy = policy;
+            this.byCell = indexByCell(policy, analysis.mission().map().width());
+        }
+
+        private static long key(int cellIndex, int budgetLeft, int progress) {
+            return ((long) cellIndex << 40) | ((long) budgetLeft << 20) | progress;
+        }
+
+        /** Distinct actions per (cell, budget, progress), most frequent first. O(entries). */
+        private static Map<Long, List<Action>> indexByCell(Optional<Policy> policy, int width) {
+            Map<Long, Map<Action, Integer>> counts = new HashMap<>();
+            policy.ifPresent(p -> {
+                for (PolicyEntry e : p.entries()) {
+                    counts.computeIfAbsent(key(e.cell().index(width), e.budgetLeft(), e.progress()), k -> new LinkedHashMap<>())
+                            .merge(e.action(), 1, Integer::sum);
+                }
+            });
+            Map<Long, List<Action>> out = new HashMap<>();
+            for (Map.Entry<Long, Map<Action, Integer>> e : counts.entrySet()) {
+                List<Map.Entry<Action, Integer>> l = new ArrayList<>(e.getValue().entrySet());
+                l.sort((x, y) -> Integer.compare(y.getValue(), x.getValue()));
+                out.put(e.getKey(), l.stream().map(Map.Entry::getKey).toList());
+            }
+            return out;
+        }
+
+        ReserveAnalysis analysis() {
+            return analysis;
         }
 
         @Override
@@ -78,8 +120,18 @@ public final class SolverAnalyzer implements Analyzer {
         }
 
         @Override
+        public Verdict verdict() {
+            return verdict;
+        }
+
+        @Override
         public boolean solved() {
             return true;
+        }
+
+        @Override
+        public List<ViewReplay> replays() {
+            return replays;
         }
 
         @Override
@@ -98,11 +150,16 @@ public final class SolverAnalyzer implements Analyzer {
 
         @Override
         public Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
-            if (analysis.policy().isEmpty()) {
+            if (policy.isEmpty()) {
                 return Optional.empty();
             }
             Cell c = Cell.ofIndex(cellIndex, analysis.mission().map().width());
-            return analysis.policy().get().lookup(c, levelUnits, budgetLeft, progressMask);
+            return policy.get().lookup(c, levelUnits, budgetLeft, progressMask);
+        }
+
+        @Override
+        public List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
+            return byCell.getOrDefault(key(cellIndex, budgetLeft, progressMask), List.of());
         }
     }
 }

@@ -38,6 +38,15 @@ public interface ViewData {
     /** The policy's action in that situation, if the policy has one. */
     Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask);
 
+    /**
+     * The distinct actions the policy takes on the cell, at any battery level, with the given
+     * disturbances left and tasks done; the most frequent first. Empty when the policy never
+     * gets there in that situation.
+     */
+    default List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
+        return List.of();
+    }
+
     /** The runs to play: the worst case (if guaranteed), the counterexample (if not). */
     List<ViewReplay> replays();
 
