@@ -18,6 +18,16 @@ class PictureRendererTest {
     @TempDir
     Path tmp;
 
+    /**
+     * Starts the toolkit the way TestFX does, so that window tests running later in the same JVM
+     * get TestFX's headless set-up (a toolkit started by plain Platform.startup first leaves
+     * TestFX's robot without input).
+     */
+    @org.junit.jupiter.api.BeforeAll
+    static void toolkit() throws Exception {
+        org.testfx.api.FxToolkit.registerPrimaryStage();
+    }
+
     private static int rgb(Color c) {
         return ((int) Math.round(c.getRed() * 255) << 16) | ((int) Math.round(c.getGreen() * 255) << 8)
                 | (int) Math.round(c.getBlue() * 255);
