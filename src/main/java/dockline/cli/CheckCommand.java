@@ -62,7 +62,7 @@ public final class CheckCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
-                    .withMemoryBudget(mission.memoryBudgetBytes()));
+                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));
             if (json) {
                 out.println(json(a));
             } else {
@@ -98,7 +98,8 @@ public final class CheckCommand implements Callable<Integer> {
         }
         if (a.worstCaseMinimumUnits().isPresent()) {
             out.println("  Worst battery level under the policy:  " + amount(a.worstCaseMinimumUnits().getAsInt(), a)
-                    + " (the policy finishes in the fewest moves in the worst case)");
+                    + (a.policyFloorUnits() > a.reserveUnits() ? " (the safest policy; it may take more moves)"
+                    : " (the policy finishes in the fewest moves in the worst case)"));
         } else {
             out.println("  Worst battery level under the policy:  none (there is no safe policy)");
         }
@@ -146,6 +147,7 @@ public final class CheckCommand implements Callable<Integer> {
         putOptional(o, "worstCaseMinimumUnits", a.worstCaseMinimumUnits());
         putOptional(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
         o.put("highestReserveSearched", a.highestReserveSearched());
+        o.put("policyFloorUnits", a.policyFloorUnits());
         o.put("unitWh", a.scale().unitWh().stripTrailingZeros());
         o.put("budget", m.map().disturbances().budget());
         o.put("productVertices", a.productVertices());

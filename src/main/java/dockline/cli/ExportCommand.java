@@ -55,7 +55,7 @@ public final class ExportCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false)
-                    .withMemoryBudget(mission.memoryBudgetBytes()));
+                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));
             if (!a.guaranteed()) {
                 out.println("NOT GUARANTEED: " + m.name() + " — there is no safe policy to export; nothing written.");
                 out.println(Caveats.block());

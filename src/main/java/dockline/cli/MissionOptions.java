@@ -32,6 +32,11 @@ final class MissionOptions {
             description = "at most K disturbances per mission, instead of the map's budget")
     Integer budget;
 
+    @Option(names = "--safest-policy",
+            description = "use the policy that keeps the battery at or above the highest guaranteed floor (it may take"
+                    + " more moves, e.g. to top up on a dock) instead of the one with the fewest moves")
+    boolean safestPolicy;
+
     @Option(names = "--max-memory", paramLabel = "MB",
             description = "refuse games estimated to need more than this many MB (default: half the JVM's heap)")
     Long maxMemoryMb;

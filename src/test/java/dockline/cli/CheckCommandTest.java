@@ -82,6 +82,14 @@ class CheckCommandTest {
     }
 
     @Test
+    void safestPolicy_keepsTheHighestGuaranteedFloor() throws Exception {
+        JsonNode j = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json", "--safest-policy").out());
+        assertThat(j.get("worstCaseMinimumUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(j.get("policyFloorUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(run("check", "missions/night-round.yaml", "--safest-policy").out()).contains("the safest policy");
+    }
+
+    @Test
     void overMemoryLimit_exitsThreeAndSaysWhatToChange() {
         Run r = run("check", "missions/late-return.yaml", "--max-memory", "1");
         assertThat(r.code()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
