@@ -73,6 +73,12 @@ public final class ExportCommand implements Callable<Integer> {
             err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
             err.println("The limit is half the JVM's heap unless --max-memory MB says otherwise.");
             return ExitCodes.RESOURCE_LIMIT;
+        } catch (ArithmeticException | OutOfMemoryError e) {
+            // a count past the int range, or an estimate that fell short of the heap actually needed
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage()
+                    + ". Use a coarser energy resolution or a smaller disturbance budget K, or give the JVM more"
+                    + " memory (-Xmx).");
+            return ExitCodes.RESOURCE_LIMIT;
         } catch (IllegalArgumentException e) {
             err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
