@@ -248,6 +248,13 @@ final class YamlReader {
             at = e.getLocation() != null ? pos(e.getLocation()) : fallback;
             message = firstLine(String.valueOf(e.getOriginalMessage()));
         }
+        if (message.startsWith("Expected a field name")) {
+            // Jackson's wording for a key that is itself a list or mapping ("? [a, b]: ...")
+            message = "a key must be plain text, not a list or a mapping";
+        }
+        if (message.contains("org.yaml.snakeyaml")) {
+            message = message.replaceAll("<?org\\.yaml\\.snakeyaml\\.[\\w.]+\\$?\\w*(\\([^)]*\\))?>?", "a YAML value");
+        }
         if (source.lineHasTab(at.line()) || problems.isExplained(at)) {
             return; // the tab or the bad byte on this line is already reported and is the cause
         }
