@@ -140,7 +140,7 @@ final class YamlReader {
         }
         if (parser.isCurrentAlias()) {
             problems.add(pos, "aliases ('*" + shortText() + "') are not supported",
-                    "write the value out in full; dockline files do not use anchors and aliases");
+                    "write the value out in full; dockline files do not use aliases");
             return new Node.Bad(pos);
         }
         switch (t) {
