@@ -103,7 +103,7 @@ final class YamlReader {
                         .build())
                 .build();
         Pos last = Pos.START;
-        try (YAMLParser p = (YAMLParser) factory.createParser(new StringReader(source.text()))) {
+        try (YAMLParser p = factory.createParser(new StringReader(source.text()))) {
             parser = p;
             JsonToken t = p.nextToken();
             if (t == null) {
