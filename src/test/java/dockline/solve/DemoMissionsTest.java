@@ -17,17 +17,27 @@ import org.junit.jupiter.params.provider.CsvSource;
 class DemoMissionsTest {
 
     @ParameterizedTest
-    @CsvSource({"missions/night-round.yaml, true", "missions/supply-run.yaml, true", "missions/late-return.yaml, false"})
-    void demoMission_hasItsVerdict(String file, boolean guaranteed) throws Exception {
+    @CsvSource({"missions/night-round.yaml, true, 49, 83", "missions/supply-run.yaml, true, 24, 40",
+            "missions/late-return.yaml, false, -1, 46"})
+    void demoMission_hasItsVerdict(String file, boolean guaranteed, int worst, int highest) throws Exception {
         Mission m = MissionLoader.load(Path.of(file));
         ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults());
         assertThat(a.guaranteed()).as(file).isEqualTo(guaranteed);
+        // the figures quoted in missions/README.md
+        assertThat(a.worstCaseMinimumUnits().orElse(-1)).as(file).isEqualTo(worst);
+        assertThat(a.highestGuaranteedReserveUnits().orElse(-1)).as(file).isEqualTo(highest);
         SolutionChecks.assertValidSolution(a.game(), a.solution(),
                 new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits()));
         if (guaranteed) {
             PolicyWalk.Result walk = new PolicyWalk(m, a.game().arena(), a.policy().orElseThrow()).run();
             assertThat(walk.lowestLevel()).isEqualTo(a.worstCaseMinimumUnits().getAsInt());
             assertThat(walk.situations()).hasSize(a.policy().get().size());
+        } else {
+            // quoted in missions/README.md: the start charge the heat map asks for
+            ReserveAnalysis heat = ReserveSolver.analyse(m, ReserveOptions.defaults().withChargeNeeded(true)
+                    .withHighestReserve(false));
+            assertThat(heat.chargeNeeded().orElseThrow().unitsNeeded(m.start(), m.map().disturbances().budget(), 0))
+                    .isEqualTo(164);
         }
         assertThat(a.highestGuaranteedReserveUnits()).isPresent();
         assertThat(a.highestGuaranteedReserveUnits().getAsInt() >= a.reserveUnits()).isEqualTo(guaranteed);
