@@ -93,6 +93,8 @@ public final class MissionWindow {
     private final ReplayPlayer player = new ReplayPlayer();
     private final ObjectProperty<ViewData> data = new SimpleObjectProperty<>(this, "data");
     private final ObjectProperty<Task<?>> task = new SimpleObjectProperty<>(this, "task");
+    private final javafx.beans.property.BooleanProperty hasMission = new javafx.beans.property.SimpleBooleanProperty(this,
+            "hasMission", false);
 
     // header
     private final Label verdict = new Label("Open a mission (File \u203a Open, Ctrl+O)");
@@ -426,7 +428,7 @@ public final class MissionWindow {
     private void wire() {
         checkButton.setOnAction(e -> check());
         cancelButton.setOnAction(e -> cancel());
-        checkButton.disableProperty().bind(task.isNotNull());
+        checkButton.disableProperty().bind(task.isNotNull().or(hasMission.not()));
         cancelButton.disableProperty().bind(task.isNull());
         solving.visibleProperty().bind(task.isNotNull());
 
@@ -569,6 +571,7 @@ public final class MissionWindow {
         }
         base = m;
         mapOnly = null;
+        hasMission.set(true);
         updatingControls = true;
         try {
             setChargeFields(m.reserve(), reserveField, reserveUnit);
@@ -584,6 +587,7 @@ public final class MissionWindow {
     private void showMapOnly(BuildingMap map) {
         base = null;
         mapOnly = map;
+        hasMission.set(false);
         data.set(null);
         refreshAll();
     }
