@@ -28,7 +28,10 @@ final class MapView extends Region {
     private double cellPx = 24;
     private double ox;
     private double oy;
-    private boolean fitted;
+    /** The user zoomed or panned: keep the view when the area is resized; else re-fit. */
+    private boolean userMoved;
+    private double lastW = -1;
+    private double lastH = -1;
     private double dragX;
     private double dragY;
     private boolean dragged;
@@ -42,7 +45,8 @@ final class MapView extends Region {
         setStyle("-fx-background-color: #eceae4;");
         layers.addListener((o, was, now) -> {
             if (was == null || now == null || was.map() != now.map()) {
-                fitted = false;
+                userMoved = false;
+                lastW = -1;
                 requestLayout();
             }
             redraw();
@@ -131,14 +135,14 @@ final class MapView extends Region {
         ox = px - (px - ox) * f;
         oy = py - (py - oy) * f;
         cellPx = n;
-        fitted = true;
+        userMoved = true;
         redraw();
     }
 
     void pan(double dx, double dy) {
         ox += dx;
         oy += dy;
-        fitted = true;
+        userMoved = true;
         redraw();
     }
 
@@ -154,7 +158,7 @@ final class MapView extends Region {
         cellPx = Math.max(MIN_CELL, Math.min(MAX_CELL, Math.min((w - 16) / m.width(), (h - 16) / m.height())));
         ox = (w - cellPx * m.width()) / 2;
         oy = (h - cellPx * m.height()) / 2;
-        fitted = true;
+        userMoved = false;
         redraw();
     }
 
@@ -198,8 +202,12 @@ final class MapView extends Region {
             canvas.setWidth(w);
             canvas.setHeight(h);
         }
-        if (!fitted) {
-            fit();
+        if (w != lastW || h != lastH) {
+            lastW = w;
+            lastH = h;
+            if (!userMoved) {
+                fit();
+            }
         }
         redraw();
     }

@@ -197,15 +197,14 @@ public final class MissionWindow {
         VBox top = new VBox(buildMenu(), header, notice);
         root.setTop(top);
 
-        root.setCenter(mapView);
+
         ScrollPane side = new ScrollPane(buildSide());
         side.setFitToWidth(true);
         side.setPrefViewportWidth(300);
         side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
         root.setRight(side);
 
-        chart.node().setPrefHeight(200);
-        chart.node().setMaxHeight(240);
+        chart.node().setPrefHeight(190);
         status.setId("status");
         status.getStyleClass().add("status-line");
         Label runLabel = new Label("R_un");
@@ -222,7 +221,16 @@ public final class MissionWindow {
         replayBar.setPadding(new Insets(4, 10, 0, 10));
         replayChoice.setMaxWidth(260);
         HBox.setHgrow(stepLabel, Priority.ALWAYS);
-        VBox bottom = new VBox(replayBar, chart.node(), status, new CaveatPanel());
+        VBox replayBox = new VBox(replayBar, chart.node());
+        VBox.setVgrow(chart.node(), Priority.ALWAYS);
+        replayBox.setMinHeight(150);
+        javafx.scene.control.SplitPane split = new javafx.scene.control.SplitPane(mapView, replayBox);
+        split.setId("map-split");
+        split.setOrientation(Orientation.VERTICAL);
+        split.setDividerPositions(0.66);
+        javafx.scene.control.SplitPane.setResizableWithParent(replayBox, false);
+        root.setCenter(split);
+        VBox bottom = new VBox(status, new CaveatPanel());
         root.setBottom(bottom);
 
         wire();

@@ -43,7 +43,8 @@ public final class ViewLauncher {
             try {
                 Stage stage = new Stage();
                 MissionWindow w = new MissionWindow(analyzer, source, RecentFiles.defaultStore());
-                stage.setScene(w.scene(1280, 860));
+                javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+                stage.setScene(w.scene(Math.min(1280, screen.getWidth() - 20), Math.min(900, screen.getHeight() - 40)));
                 w.attach(stage);
                 stage.setOnHidden(e -> {
                     w.dispose();
