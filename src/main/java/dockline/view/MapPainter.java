@@ -464,8 +464,11 @@ final class MapPainter {
         }
     }
 
-    /** Where an event is marked: on the cell the robot tried to enter. */
+    /** Where an event is marked: the cell it concerns, else the cell the robot tried to enter. */
     static Cell eventCell(ViewStep st) {
+        if (st.eventCell() != null) {
+            return st.eventCell();
+        }
         if (st.action() != null && st.action().target() != null) {
             return st.action().target();
         }

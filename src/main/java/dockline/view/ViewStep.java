@@ -13,13 +13,15 @@ import java.util.Objects;
  * @param cell        where the robot is after the step
  * @param action      the action taken to get here ({@code null} at step 0)
  * @param event       the disturbance that hit this step, or {@code null} for the nominal outcome
- * @param eventLabel  the event rule's label in words, e.g. {@code door D2}; empty when no event
+ * @param eventLabel  the event in words, e.g. {@code door D2 shut (rule 'fire doors')}; empty when no event
+ * @param eventCell   the cell the event concerns (the door, the blocked or dragged cell, the cell slipped to);
+ *                    {@code null} when no event, or to mean the cell the action aimed at
  * @param levelUnits  the battery level after the step, in units
  * @param budgetLeft  disturbances the building may still throw
  * @param progress    task progress bit mask after the step
  */
-public record ViewStep(int step, Cell cell, Action action, EventKind event, String eventLabel, int levelUnits,
-                       int budgetLeft, int progress) {
+public record ViewStep(int step, Cell cell, Action action, EventKind event, String eventLabel, Cell eventCell,
+                       int levelUnits, int budgetLeft, int progress) {
 
     public ViewStep {
         Objects.requireNonNull(cell, "cell");

@@ -95,7 +95,7 @@ final class FakeAnalyzer implements Analyzer {
         Cell at = m.start();
         int level = m.startUnits();
         int budget = m.map().disturbances().budget();
-        steps.add(new ViewStep(0, at, null, null, "", level, budget, 0));
+        steps.add(new ViewStep(0, at, null, null, "", null, level, budget, 0));
         int k = 0;
         boolean shut = false;
         while (dist[at.index(w)] > 0 && k < 200) {
@@ -105,12 +105,12 @@ final class FakeAnalyzer implements Analyzer {
                 shut = true;
                 budget--;
                 level -= 1;
-                steps.add(new ViewStep(k, at, a, EventKind.DOOR_SHUT, "door", level, budget, 0));
+                steps.add(new ViewStep(k, at, a, EventKind.DOOR_SHUT, "door", a.target(), level, budget, 0));
                 continue;
             }
             at = a.target();
             level -= per;
-            steps.add(new ViewStep(k, at, a, null, "", level, budget, 0));
+            steps.add(new ViewStep(k, at, a, null, "", null, level, budget, 0));
         }
         ViewReplay worst = new ViewReplay(ViewReplay.Kind.WORST_CASE, "worst case", steps);
         int min = worst.minimumUnits();
