@@ -146,6 +146,7 @@ public final class MissionWindow {
     private final Button forwardButton = new Button("_Next \u25b6");
     private final Slider speedSlider = new Slider(0.5, 10, 2);
     private final Label stepLabel = new Label("");
+    private final Label replayNotes = new Label("");
     private final ChoiceBox<EventKind> forceKind = new ChoiceBox<>();
     private final TextField forceSlipTo = new TextField();
     private final Spinner<Integer> forceStep = new Spinner<>(1, 10_000, 1);
@@ -221,7 +222,11 @@ public final class MissionWindow {
         replayBar.setPadding(new Insets(4, 10, 0, 10));
         replayChoice.setMaxWidth(260);
         HBox.setHgrow(stepLabel, Priority.ALWAYS);
-        VBox replayBox = new VBox(replayBar, chart.node());
+        replayNotes.setId("replay-notes");
+        replayNotes.setWrapText(true);
+        replayNotes.getStyleClass().add("certificate");
+        replayNotes.setMaxHeight(48);
+        VBox replayBox = new VBox(replayBar, replayNotes, chart.node());
         VBox.setVgrow(chart.node(), Priority.ALWAYS);
         replayBox.setMinHeight(150);
         javafx.scene.control.SplitPane split = new javafx.scene.control.SplitPane(mapView, replayBox);
@@ -889,6 +894,7 @@ public final class MissionWindow {
         ViewReplay r = replayChoice.getValue();
         player.load(r == null ? 0 : r.length());
         chart.show(d == null ? null : d.mission(), r);
+        replayNotes.setText(r == null ? "" : String.join(" ", r.notes()));
         refreshLayers();
         onStep();
     }

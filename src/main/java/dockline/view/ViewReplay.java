@@ -10,13 +10,15 @@ import java.util.Objects;
  * @param kind  which kind of run this is
  * @param title a name for the chooser, e.g. {@code worst case (lowest battery 7.2 Wh)}
  * @param steps the steps, step 0 first; never empty
+ * @param notes plain-words lines on what happened and why (may be empty)
  */
-public record ViewReplay(Kind kind, String title, List<ViewStep> steps) {
+public record ViewReplay(Kind kind, String title, List<ViewStep> steps, List<String> notes) {
 
     /** Where a replay comes from. */
     public enum Kind {
         WORST_CASE("worst case"),
         COUNTEREXAMPLE("counterexample"),
+        NOMINAL("run with no disturbance"),
         FORCED("forced scenario");
 
         private final String word;
@@ -34,9 +36,14 @@ public record ViewReplay(Kind kind, String title, List<ViewStep> steps) {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(title, "title");
         steps = List.copyOf(steps);
+        notes = notes == null ? List.of() : List.copyOf(notes);
         if (steps.isEmpty()) {
             throw new IllegalArgumentException("a replay has at least its start step");
         }
+    }
+
+    public ViewReplay(Kind kind, String title, List<ViewStep> steps) {
+        this(kind, title, steps, List.of());
     }
 
     /** The lowest battery level over the run, in units. */

@@ -62,16 +62,6 @@ class MissionWindowTest {
     }
 
     @Test
-    void look(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
-        robot.clickOn("#step-forward");
-        robot.clickOn("#step-forward");
-        WaitForAsyncUtils.waitForFxEvents();
-        javafx.scene.image.WritableImage img = WaitForAsyncUtils.asyncFx(() -> window.root().getScene().snapshot(null)).get();
-        javax.imageio.ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(img, null), "png", new java.io.File("/tmp/window.png"));
-    }
-
-    @Test
     void opening_a_mission_solves_it_and_shows_the_verdict_in_words(FxRobot robot) throws Exception {
         waitUntil(this::idleAndSolved);
         Label v = robot.lookup("#verdict").queryAs(Label.class);
