@@ -200,7 +200,8 @@ public final class CertificateChecker {
                     int e = loop.parentEdge(n);
                     sb.append(" -").append(arena.action(arena.source(e)));
                     if (arena.event(e) != Arena.NOMINAL) {
-                        sb.append(", ").append(EventKind.values()[arena.event(e)].word());
+                        sb.append(", ").append(EventKind.values()[arena.event(e)].word()).append(" '")
+                                .append(mission.map().disturbances().rules().get(arena.rule(e)).label()).append("'");
                     }
                     sb.append("-> ");
                 }
