@@ -148,7 +148,7 @@ public final class CertificateChecker {
         }
 
         String units(int u) {
-            return u + " units (" + scale.formatWh(u) + ")";
+            return u + (u == 1 || u == -1 ? " unit (" : " units (") + scale.formatWh(u) + ")";
         }
 
         String state(int node) {
@@ -177,7 +177,10 @@ public final class CertificateChecker {
             BuildingMap map = mission.map();
             EventRule rule = map.disturbances().rules().get(arena.rule(e));
             String what = switch (k) {
-                case DOOR_SHUT -> map.doorName(arena.action(arena.source(e)).target()) + " shut";
+                case DOOR_SHUT -> {
+                    String d = map.doorName(arena.action(arena.source(e)).target());
+                    yield (d.startsWith("door ") ? d : "door " + d) + " shut";
+                }
                 case BLOCKAGE -> "a blockage at " + arena.action(arena.source(e)).target();
                 case SLIP -> "a slip to " + to;
                 case DRAG -> "drag on entering " + to;

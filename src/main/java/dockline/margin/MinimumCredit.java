@@ -274,6 +274,15 @@ public final class MinimumCredit {
         return x < 0 ? INFINITE : need[x];
     }
 
+    /**
+     * Whether the robot wins at robot vertex v with the given task-progress mask (after occupying v's
+     * cell) and level: {@code need <= level <= capacity}.
+     */
+    public boolean robotWins(int v, int progressMask, int level) {
+        int g = goal.stateOfMask(progressMask);
+        return g >= 0 && level <= capacity && need(v, g) <= level;
+    }
+
     /** Number of arena × goal vertices reachable from the start. */
     public int productSize() {
         return nodeVertex.size();
