@@ -78,8 +78,7 @@ final class Explanation {
             int i = eventRows.get(k);
             ReplayStep s = steps.get(i);
             int until = k + 1 < eventRows.size() ? eventRows.get(k + 1) : steps.size();
-            out.add("step " + s.step() + ": " + s.event().describe() + " as the robot tried '" + s.action() + "' from "
-                    + place(steps.get(i - 1).cell()) + route(i + 1, until) + ".");
+            out.add("step " + s.step() + ": " + event(steps.get(i - 1), s) + route(i + 1, until) + ".");
         }
         if (eventRows.isEmpty() && replay.kind() != Replay.Kind.NOMINAL) {
             out.add(replay.kind() == Replay.Kind.COUNTEREXAMPLE
@@ -99,6 +98,26 @@ final class Explanation {
             case NO_POLICY -> out.add("At step " + last.step() + " the policy has no action for the situation reached.");
         }
         return out;
+    }
+
+    /** One event in words, with the map's names for the door, zones and surfaces. */
+    private String event(ReplayStep before, ReplayStep s) {
+        ReplayEvent e = s.event();
+        String rule = "by rule '" + e.ruleLabel() + "'";
+        int cost = before.batteryUnits() - s.batteryUnits();
+        String paid = cost > 0 ? "; the step cost " + units(cost) : "";
+        String from = place(before.cell());
+        String target = s.action().startsWith("move ") ? s.action().substring(5) : "";
+        return switch (e.kind()) {
+            case DOOR_SHUT -> (e.doorName().startsWith("door ") ? e.doorName() : "door " + e.doorName()) + " at "
+                    + e.cell() + " shut " + rule + " as the robot tried to go through it from " + from
+                    + "; it stays" + paid;
+            case BLOCKAGE -> place(e.cell()) + " blocked " + rule + " as the robot tried to enter it from " + from
+                    + "; it stays" + paid;
+            case SLIP -> "the wheels slipped " + rule + ": on the way from " + from + " to " + target
+                    + " the robot ended at " + place(e.cell()) + paid;
+            case DRAG -> "drag entering " + place(e.cell()) + " " + rule + ", coming from " + before.cell() + paid;
+        };
     }
 
     private ReplayStep lowest() {

@@ -85,9 +85,17 @@ public final class Replayer {
     }
 
     public static Replay nominal(ClosedLoop loop) {
+        return nominal(loop, loop.floor());
+    }
+
+    /**
+     * The run with no events, judged against {@code judgeFloor} (the run ends where it first drops
+     * below it); for the best-effort policy of a mission that is not guaranteed.
+     */
+    public static Replay nominal(ClosedLoop loop, int judgeFloor) {
         requireAcyclic(loop);
-        Walk w = walkLoop(loop, (node, step) -> nominalSlot(loop, node), loop.floor());
-        return new Explainer(loop.arena(), loop.floor()).finish(Replay.Kind.NOMINAL, w, -1);
+        Walk w = walkLoop(loop, (node, step) -> nominalSlot(loop, node), judgeFloor);
+        return new Explainer(loop.arena(), judgeFloor).finish(Replay.Kind.NOMINAL, w, -1);
     }
 
     /**
@@ -102,6 +110,11 @@ public final class Replayer {
     }
 
     public static Replay forced(ClosedLoop loop, List<ForcedEvent> events) throws ForcedEventException {
+        return forced(loop, events, loop.floor());
+    }
+
+    /** Forced events, judged against {@code judgeFloor} (see {@link #nominal(ClosedLoop, int)}). */
+    public static Replay forced(ClosedLoop loop, List<ForcedEvent> events, int judgeFloor) throws ForcedEventException {
         requireAcyclic(loop);
         TreeMap<Integer, ForcedEvent> byStep = new TreeMap<>();
         for (ForcedEvent f : events) {
@@ -114,19 +127,22 @@ public final class Replayer {
         int node = 0;
         int step = 1;
         int lastStep = byStep.isEmpty() ? 0 : byStep.lastKey();
-        while (!loop.isComplete(node)) {
+        boolean breached = false;
+        while (!loop.isComplete(node) && !breached) {
             ForcedEvent f = byStep.get(step);
             int slot = f == null ? nominalSlot(loop, node) : forcedSlot(loop, node, f);
             slots.add(slot);
             node = loop.succNode(slot);
+            breached = loop.level(node) < judgeFloor;
             step++;
         }
         if (lastStep >= step) {
-            throw new ForcedEventException("step " + lastStep + ": the run is already over (mission complete at step "
-                    + (step - 1) + " at " + arena.cellOf(loop.vertex(node)) + ")");
+            throw new ForcedEventException("step " + lastStep + ": the run is already over ("
+                    + (breached ? "below the reserve floor" : "mission complete") + " at step " + (step - 1) + " at "
+                    + arena.cellOf(loop.vertex(node)) + ")");
         }
-        Walk w = walkLoop(loop, (n, s) -> slots.get(s - 1), loop.floor());
-        return new Explainer(arena, loop.floor()).finish(Replay.Kind.FORCED, w, -1);
+        Walk w = walkLoop(loop, (n, s) -> slots.get(s - 1), judgeFloor);
+        return new Explainer(arena, judgeFloor).finish(Replay.Kind.FORCED, w, -1);
     }
 
     private static int forcedSlot(ClosedLoop loop, int node, ForcedEvent f) throws ForcedEventException {

@@ -45,7 +45,7 @@ class ReplayerTest {
         assertThat(r.steps()).extracting(ReplayStep::budgetLeft).containsExactly(1, 0, 0, 0);
         assertThat(r.ending()).isEqualTo(Replay.Ending.COMPLETE);
         assertThat(r.minimumUnits()).isEqualTo(3);
-        assertThat(String.join("\n", r.explanation())).contains("step 1: drag entering 1:0 (rule 'rug')")
+        assertThat(String.join("\n", r.explanation())).contains("step 1: drag entering 1:0 (carpet) by rule 'rug', coming from 0:0; the step cost 5 units (5 Wh)")
                 .contains("lowest battery is 3 units (3 Wh)");
     }
 
@@ -115,7 +115,7 @@ class ReplayerTest {
         assertThat(r.ending()).isEqualTo(Replay.Ending.BELOW_FLOOR);
         assertThat(r.last().batteryUnits()).isLessThan(0);
         String words = String.join("\n", r.explanation());
-        assertThat(words).contains("door D1 shut (rule 'fire doors')").contains("below the reserve floor 0 units");
+        assertThat(words).contains("door D1 at 2:0 shut by rule 'fire doors'").contains("below the reserve floor 0 units");
     }
 
     /** With 6 units and a floor of 2 the highest guaranteed floor is 1: the best effort dips to 1. */
