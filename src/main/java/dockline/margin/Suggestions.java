@@ -57,9 +57,10 @@ public final class Suggestions {
                     "lower the reserve floor to " + charge(s, highestFloor, cap) + " from " + charge(s, floor, cap)));
         }
         if (largestBudget >= 0 && largestBudget < k) {
-            out.add(new Suggestion(Suggestion.Kind.BUDGET, k, largestBudget,
-                    "the mission is guaranteed if at most " + largestBudget + " disturbance" + (largestBudget == 1 ? "" : "s")
-                            + " happen per mission (the map allows " + k + ")"));
+            out.add(new Suggestion(Suggestion.Kind.BUDGET, k, largestBudget, largestBudget == 0
+                    ? "the mission is guaranteed only if no disturbance happens (the map allows " + k + " per mission)"
+                    : "the mission is guaranteed if at most " + largestBudget + " disturbance"
+                            + (largestBudget == 1 ? " happens" : "s happen") + " per mission (the map allows " + k + ")"));
         }
         out.sort(Comparator.comparing((Suggestion x) -> x, (x, y) -> {
             // x.change/range(x) vs y.change/range(y), exactly

@@ -53,10 +53,11 @@ final class Explanation {
         switch (replay.kind()) {
             case WORST -> out.add("Worst case of the certified policy: the lowest battery is " + units(low.batteryUnits())
                     + " at step " + low.step() + ", at " + place(low.cell()) + "; reserve floor " + floor + ".");
-            case NOMINAL -> out.add("Nominal run (no events): the lowest battery is " + units(low.batteryUnits())
-                    + " at step " + low.step() + "; reserve floor " + floor + ".");
-            case FORCED -> out.add("Forced scenario: the policy answers the events named; the lowest battery is "
+            case NOMINAL -> out.add(bestEffort(bestEffortFloor) + "Nominal run (no events): the lowest battery is "
                     + units(low.batteryUnits()) + " at step " + low.step() + "; reserve floor " + floor + ".");
+            case FORCED -> out.add(bestEffort(bestEffortFloor) + "Forced scenario: the policy answers the events named;"
+                    + " the lowest battery is " + units(low.batteryUnits()) + " at step " + low.step() + "; reserve floor "
+                    + floor + ".");
             case COUNTEREXAMPLE -> {
                 out.add("Not guaranteed: the disturbances below defeat every policy the robot could follow.");
                 if (bestEffortFloor >= 0) {
@@ -98,6 +99,11 @@ final class Explanation {
             case NO_POLICY -> out.add("At step " + last.step() + " the policy has no action for the situation reached.");
         }
         return out;
+    }
+
+    private String bestEffort(int bestEffortFloor) {
+        return bestEffortFloor < 0 ? "" : "Not guaranteed; this runs the robot's best effort, its policy for the highest"
+                + " reserve that can be guaranteed (" + units(bestEffortFloor) + "). ";
     }
 
     /** One event in words, with the map's names for the door, zones and surfaces. */

@@ -95,7 +95,8 @@ public final class Replayer {
     public static Replay nominal(ClosedLoop loop, int judgeFloor) {
         requireAcyclic(loop);
         Walk w = walkLoop(loop, (node, step) -> nominalSlot(loop, node), judgeFloor);
-        return new Explainer(loop.arena(), judgeFloor).finish(Replay.Kind.NOMINAL, w, -1);
+        return new Explainer(loop.arena(), judgeFloor).finish(Replay.Kind.NOMINAL, w,
+                judgeFloor > loop.floor() ? loop.floor() : -1);
     }
 
     /**
@@ -142,7 +143,8 @@ public final class Replayer {
                     + arena.cellOf(loop.vertex(node)) + ")");
         }
         Walk w = walkLoop(loop, (n, s) -> slots.get(s - 1), judgeFloor);
-        return new Explainer(arena, judgeFloor).finish(Replay.Kind.FORCED, w, -1);
+        return new Explainer(arena, judgeFloor).finish(Replay.Kind.FORCED, w,
+                judgeFloor > loop.floor() ? loop.floor() : -1);
     }
 
     private static int forcedSlot(ClosedLoop loop, int node, ForcedEvent f) throws ForcedEventException {
