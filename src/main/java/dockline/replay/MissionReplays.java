@@ -51,7 +51,11 @@ public final class MissionReplays {
      * @throws dockline.certify.ClosedLoop.TooLargeException if a closed loop is too large
      */
     public static MissionReplays of(Mission mission, ReserveOptions options) {
-        ReserveAnalysis a = ReserveSolver.analyse(mission, options.withHighestReserve(true));
+        // the highest guaranteed floor (for the best effort) is only needed when not guaranteed
+        ReserveAnalysis a = ReserveSolver.analyse(mission, options.withHighestReserve(false));
+        if (!a.guaranteed()) {
+            a = ReserveSolver.analyse(mission, options.withHighestReserve(true));
+        }
         Arena arena = a.game().arena();
         int floor = a.reserveUnits();
         int start = a.startUnits();
