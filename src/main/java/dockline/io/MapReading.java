@@ -47,7 +47,7 @@ final class MapReading {
     }
 
     BuildingMap read() {
-        int before = problems.count();
+        int before = problems.raised();
         Node.MapNode root = in.map(doc.root(), "a map file");
         if (root == null) {
             return null;
@@ -83,7 +83,7 @@ final class MapReading {
         if (root.get("disturbances") != null) {
             dm = disturbances(in.map(root.get("disturbances"), "disturbances"));
         }
-        if (problems.count() > before || name == null || cellSize == null || legend == null || grid == null || dm == null) {
+        if (problems.raised() > before || name == null || cellSize == null || legend == null || grid == null || dm == null) {
             return null;
         }
         try {
