@@ -104,4 +104,18 @@ class ValidateCommandTest {
         assertThat(r.exit()).isZero();
         assertThat(r.out()).contains("Exit codes").contains("file:line:column");
     }
+
+    @Test
+    void summary_shows_the_rounding_of_each_figure() throws IOException {
+        String mission = Files.readString(Path.of("missions/night-round.yaml"))
+                .replace("map: ../maps/clinic-wing.yaml", "map: " + Path.of("maps/clinic-wing.yaml").toAbsolutePath())
+                .replace("charge-rate: 1 ", "charge-rate: 0.3 ")
+                .replace("    carpet: 1\n", "    carpet: 0.7\n");
+        Path f = dir.resolve("m.yaml");
+        Files.writeString(f, mission);
+        Run r = run("validate", f.toString());
+        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.OK);
+        // 0.7 Wh at 0.5 Wh per unit rounds up to 2 units; 0.3 Wh of charging rounds down to none (hand-worked)
+        assertThat(r.out()).contains("carpet 0.7 Wh = 2 units").contains("no charging (0.3 Wh rounds down to 0 units)");
+    }
 }

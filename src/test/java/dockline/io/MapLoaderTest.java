@@ -360,4 +360,59 @@ class MapLoaderTest {
         assertThat(ps).hasSize(4);
         assertThat(ps).isSortedAccordingTo(java.util.Comparator.comparingInt(Problem::line));
     }
+
+    @Test
+    void crlf_line_ends_and_a_byte_order_mark_keep_positions_exact() throws Exception {
+        String text = edit(Fixtures.MAP, "#../#..#", "#../#.?#");
+        byte[] body = text.replace("\n", "\r\n").getBytes(StandardCharsets.UTF_8);
+        byte[] bytes = new byte[body.length + 3];
+        bytes[0] = (byte) 0xEF;
+        bytes[1] = (byte) 0xBB;
+        bytes[2] = (byte) 0xBF;
+        System.arraycopy(body, 0, bytes, 3, body.length);
+        List<Problem> ps = mapProblems(write(dir, "m.yaml", bytes));
+        assertThat(ps).singleElement().satisfies(p -> assertAt(p, text, "?#"));
+        assertThat(MapLoader.load(write(dir, "ok.yaml", Fixtures.MAP.replace("\n", "\r\n")))).isNotNull();
+    }
+
+    @Test
+    void explicit_indentation_keeps_columns_exact() throws Exception {
+        // with "|2" the block is indented by two spaces, so the two further spaces are plan cells
+        String text = edit(Fixtures.MAP, "plan: |\n  ########", "plan: |2\n    ########");
+        List<Problem> ps = mapProblems(write(dir, "m.yaml", text));
+        assertThat(ps.get(0).message()).isEqualTo("a space in the plan");
+        int[] lc = pos(text, "    ########");
+        assertThat(ps.get(0).line()).isEqualTo(lc[0]);
+        assertThat(ps.get(0).column()).isEqualTo(3);
+    }
+
+    @Test
+    void blank_line_inside_the_plan_is_an_empty_row() throws Exception {
+        String text = edit(Fixtures.MAP, "  #...#,,#\n", "  #...#,,#\n\n");
+        List<Problem> ps = mapProblems(write(dir, "m.yaml", text));
+        assertThat(ps).singleElement().satisfies(p -> {
+            assertThat(p.message()).isEqualTo("plan row 3 is empty");
+            assertThat(p.line()).isEqualTo(pos(text, "  #...#,,#")[0] + 1);
+        });
+    }
+
+    @Test
+    void plan_must_be_a_literal_block() throws Exception {
+        String text = edit(Fixtures.MAP, "plan: |", "plan: >");
+        assertThat(mapProblems(write(dir, "m.yaml", text))).anySatisfy(p -> {
+            assertThat(p.message()).isEqualTo("plan must be a block of rows written after 'plan: |'");
+            assertAt(p, text, ">");
+        });
+    }
+
+    @Test
+    void control_characters_are_reported_where_they_are() throws Exception {
+        String text = edit(Fixtures.MAP, "#C..D,,#", "#C.\u0000D,,#");
+        text = edit(text, "name: test floor", "name: test\u001b floor");
+        List<Problem> ps = mapProblems(write(dir, "m.yaml", text));
+        assertThat(ps).extracting(Problem::message).containsExactly(
+                "control character U+001B is not allowed", "control character U+0000 is not allowed");
+        assertAt(ps.get(0), text, "\u001b");
+        assertAt(ps.get(1), text, "\u0000");
+    }
 }
