@@ -23,7 +23,7 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Mixin;
 
 /**
  * {@code dockline margin MISSION}: the highest reserve floor that can be guaranteed from the
@@ -42,8 +42,8 @@ public final class MarginCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "MISSION", description = "mission file (YAML)")
-    Path missionFile;
+    @Mixin
+    MissionOptions mission;
 
     @Option(names = "--json", paramLabel = "FILE", description = "also write the margins as JSON ('-' for standard output)")
     Path json;
@@ -63,15 +63,25 @@ public final class MarginCommand implements Callable<Integer> {
     }
 
     private int run(PrintWriter out, PrintWriter err) throws TrustOutput.Exit {
-        Mission m = TrustOutput.load(missionFile, err);
+        Mission m;
+        try {
+            m = mission.load(err);
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (m.reserveUnits() > m.capacityUnits()) {
+            err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
+            return ExitCodes.BAD_INPUT;
+        }
         MarginReport r;
         try {
-            r = Margins.compute(m, ProductOptions.defaults());
-        } catch (ProductTooLargeException e) {
-            err.println("dockline: " + e.getMessage());
+            r = Margins.compute(m, ProductOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
+        } catch (ProductTooLargeException | ArithmeticException | OutOfMemoryError e) {
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
             return ExitCodes.RESOURCE_LIMIT;
         } catch (IllegalArgumentException e) {
-            err.println("dockline: " + missionFile + ": " + e.getMessage());
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
         boolean toStdout = json != null && json.toString().equals("-");
@@ -104,7 +114,7 @@ public final class MarginCommand implements Callable<Integer> {
     private void print(PrintWriter out, Mission m, MarginReport r) {
         EnergyScale s = m.scale();
         int cap = r.capacityUnits();
-        out.println(TrustOutput.mission(m, missionFile) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
+        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
                 + " as written (start " + charge(s, r.startUnits(), cap) + ", reserve floor " + charge(s, r.floorUnits(), cap) + ")");
         out.println("highest reserve floor guaranteed from this start: " + charge(s, r.highestReserveUnits(), cap));
         out.println("lowest starting charge that guarantees this floor: " + charge(s, r.lowestStartUnits(), cap));

@@ -20,7 +20,7 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Mixin;
 
 /**
  * {@code dockline replay MISSION}: one run of the robot's policy, step by step. For a guaranteed
@@ -42,8 +42,8 @@ public final class ReplayCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "MISSION", description = "mission file (YAML)")
-    Path missionFile;
+    @Mixin
+    MissionOptions mission;
 
     @Option(names = "--disturbance", paramLabel = "nominal|worst",
             description = "nominal: no events; worst (default): the events that drive the battery lowest,"
@@ -90,15 +90,16 @@ public final class ReplayCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
         }
-        Mission mission = TrustOutput.load(missionFile, err);
+        Mission m = loadMission(err);
         MissionReplays mr;
         try {
-            mr = MissionReplays.of(mission, ReserveOptions.defaults());
-        } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
-            err.println("dockline: " + e.getMessage());
+            mr = MissionReplays.of(m, ReserveOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes())
+                    .withSafestPolicy(mission.safestPolicy));
+        } catch (ProductTooLargeException | ClosedLoop.TooLargeException | ArithmeticException | OutOfMemoryError e) {
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
             return ExitCodes.RESOURCE_LIMIT;
         } catch (IllegalArgumentException e) {
-            err.println("dockline: " + missionFile + ": " + e.getMessage());
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
         if (mr.guaranteed() && !mr.certified()) {
@@ -133,18 +134,26 @@ public final class ReplayCommand implements Callable<Integer> {
                 AtomicFiles.writeString(csv, ReplayFormats.csv(replay));
             }
             if (json != null) {
-                AtomicFiles.writeString(json, ReplayFormats.json(mission, replay));
+                AtomicFiles.writeString(json, ReplayFormats.json(m, replay));
             }
         } catch (IOException e) {
             err.println("dockline: cannot write output: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        print(out, mission, mr, replay, what);
+        print(out, m, mr, replay, what);
         return mr.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
+    private Mission loadMission(PrintWriter err) throws TrustOutput.Exit {
+        try {
+            return mission.load(err);
+        } catch (MissionOptions.BadInput e) {
+            throw new TrustOutput.Exit(ExitCodes.BAD_INPUT);
+        }
+    }
+
     private void print(PrintWriter out, Mission m, MissionReplays mr, Replay replay, String what) {
-        out.println(TrustOutput.mission(m, missionFile) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
+        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
         mr.certificate().ifPresent(c -> out.println("certified: " + c.ok() + " (" + c.statesChecked()
                 + " situations of the policy checked independently)"));
         if (!mr.guaranteed()) {

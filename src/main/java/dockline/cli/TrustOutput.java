@@ -1,10 +1,6 @@
 package dockline.cli;
 
-import dockline.io.InputException;
-import dockline.io.MissionLoader;
-import dockline.io.Problem;
 import dockline.model.Mission;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 
 /** Small helpers shared by the {@code replay} and {@code margin} commands. */
@@ -21,19 +17,6 @@ final class TrustOutput {
         Exit(int code) {
             super(null, null, false, false);
             this.code = code;
-        }
-    }
-
-    /** Loads the mission, or prints every problem as {@code file:line:column: message} and exits 2. */
-    static Mission load(Path file, PrintWriter err) throws Exit {
-        try {
-            return MissionLoader.load(file);
-        } catch (InputException e) {
-            for (Problem p : e.problems()) {
-                err.println(p.format());
-            }
-            err.flush();
-            throw new Exit(ExitCodes.BAD_INPUT);
         }
     }
 

@@ -8,6 +8,7 @@ import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.OptionalInt;
 
 /**
  * What would make a mission that is not guaranteed guaranteed: for each of the start charge, the
@@ -30,6 +31,14 @@ public final class Suggestions {
     }
 
     public static List<Suggestion> find(Mission mission, ProductOptions options) {
+        return find(mission, options, OptionalInt.empty());
+    }
+
+    /**
+     * As {@link #find(Mission, ProductOptions)}, reusing the highest guaranteed floor when the caller
+     * already has it from the solver (saves its bisection).
+     */
+    public static List<Suggestion> find(Mission mission, ProductOptions options, OptionalInt highestFloorKnown) {
         Bisection b = new Bisection(mission, options);
         int floor = mission.reserveUnits();
         int start = mission.startUnits();
@@ -37,7 +46,8 @@ public final class Suggestions {
         if (b.guaranteed(floor, start, k)) {
             return List.of();
         }
-        return find(mission, b.lowestStart(floor), b.highestFloor(start), b.largestBudgetBelow(floor, start));
+        int high = highestFloorKnown.isPresent() ? highestFloorKnown.getAsInt() : b.highestFloor(start);
+        return find(mission, b.lowestStart(floor), high, b.largestBudgetBelow(floor, start));
     }
 
     /** The suggestions from already computed margins (-1: none of that kind). */

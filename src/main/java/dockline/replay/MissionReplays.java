@@ -71,7 +71,8 @@ public final class MissionReplays {
         ClosedLoop loop = null;
         if (best >= 0) {
             Mission lower = mission.withReserve(Charge.wh(mission.scale().toWh(best)));
-            ReserveAnalysis b = ReserveSolver.analyse(lower, options.withHighestReserve(false).withChargeNeeded(false));
+            ReserveAnalysis b = ReserveSolver.analyse(lower, options.withHighestReserve(false).withChargeNeeded(false)
+                    .withSafestPolicy(false));
             if (b.guaranteed() && b.reserveUnits() == best) {
                 ClosedLoop l = CertificateChecker.closedLoop(arena, b.policy().orElseThrow(), best, start);
                 if (CertificateChecker.certify(l).ok()) {

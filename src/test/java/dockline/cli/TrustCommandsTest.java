@@ -119,4 +119,38 @@ class TrustCommandsTest {
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
     }
+
+    static java.util.stream.Stream<Path> demoMissions() throws java.io.IOException {
+        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
+    }
+
+    /** Every guaranteed demo mission is certified by `check`, in text and in JSON; none is silently guaranteed. */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.MethodSource("demoMissions")
+    void check_certifiesEveryGuaranteedDemoMission(Path file) throws Exception {
+        Run text = run("check", file.toString());
+        Run json = run("check", "--json", file.toString());
+        JsonNode j = new ObjectMapper().readTree(json.out());
+        assertThat(json.code()).isEqualTo(text.code());
+        if (text.code() == ExitCodes.OK) {
+            assertThat(text.out()).contains("certified: true");
+            assertThat(j.get("certified").asBoolean()).isTrue();
+            assertThat(j.get("certifiedWorstMinimumUnits").asInt()).isEqualTo(j.get("worstCaseMinimumUnits").asInt());
+            assertThat(j.get("suggestions").size()).isZero();
+        } else {
+            assertThat(text.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+            assertThat(j.get("certified").asBoolean()).isFalse();
+            assertThat(text.out()).contains("To make it guaranteed");
+        }
+    }
+
+    /** The suggested start charge for the late return (164 units = 82 Wh) makes replay certify it. */
+    @Test
+    void replay_withSuggestedStartCharge_isGuaranteed() {
+        Run r = run("replay", "missions/late-return.yaml", "--start-charge", "82");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("certified: true");
+        assertThat(run("replay", "missions/late-return.yaml", "--start-charge", "81.5").code())
+                .isEqualTo(ExitCodes.NOT_GUARANTEED);
+    }
 }
