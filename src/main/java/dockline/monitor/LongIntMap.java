@@ -7,11 +7,13 @@ import java.util.Arrays;
  * no boxing: the hot path of on-the-fly comparator construction ({@link DiscountedComparator},
  * {@link PairMonitor}) looks a key up in O(1) expected time without allocating.
  *
- * <p>{@link Long#MIN_VALUE} marks an empty slot and may not be used as a key. Not thread-safe.
+ * <p>{@link Long#MIN_VALUE} marks an empty slot and may not be used as a key. Not thread-safe. Public
+ * because the product builders in {@code dockline.solve} number their (vertex, state) pairs with it too.
  */
-final class LongIntMap {
+public final class LongIntMap {
 
-    static final int ABSENT = -1;
+    /** What {@link #get} returns for a key that is not in the map. */
+    public static final int ABSENT = -1;
     private static final long EMPTY = Long.MIN_VALUE;
 
     private long[] keys;
@@ -19,7 +21,7 @@ final class LongIntMap {
     private int size;
     private int mask;
 
-    LongIntMap(int expected) {
+    public LongIntMap(int expected) {
         int cap = Integer.highestOneBit(Math.max(4, expected) * 2 - 1) << 1;
         keys = new long[cap];
         values = new int[cap];
@@ -27,12 +29,12 @@ final class LongIntMap {
         mask = cap - 1;
     }
 
-    int size() {
+    public int size() {
         return size;
     }
 
     /** The value of {@code key}, or {@link #ABSENT}. */
-    int get(long key) {
+    public int get(long key) {
         for (int i = slot(key); ; i = (i + 1) & mask) {
             long k = keys[i];
             if (k == key) {
@@ -45,7 +47,7 @@ final class LongIntMap {
     }
 
     /** Stores {@code key -> value} ({@code value >= 0}), replacing an earlier value. */
-    void put(long key, int value) {
+    public void put(long key, int value) {
         if (key == EMPTY) {
             throw new IllegalArgumentException("Long.MIN_VALUE cannot be a key");
         }
