@@ -31,10 +31,8 @@ public final class PairMonitor implements Monitor {
         this.second = second;
         int a = first.initialState();
         int b = second.initialState();
-        if (a == REJECT || b == REJECT) {
-            throw new IllegalArgumentException("a monitor may not start in its losing sink");
-        }
-        this.initial = intern(a, b);
+        // a side that starts in its losing sink (e.g. a battery below the floor) rejects at once
+        this.initial = a == REJECT || b == REJECT ? REJECT : intern(a, b);
     }
 
     public Monitor first() {
