@@ -17,8 +17,9 @@ import net.jqwik.api.constraints.IntRange;
 /**
  * Two independent routes to the same threshold question on random arenas without the dock goal:
  * the comparator product (safety game for {@code >=}, reachability game for {@code >}, solved by a
- * naive fixpoint, {@link TinyProductGame}) against the optimisation baseline (value iteration, then
- * compare). Both must agree with each other and with the exact value; discounted games have optimal
+ * naive fixpoint, {@link TinyProductGame}; and the same question built by
+ * {@link DiscountedThresholdGame} and solved by the linear-time attractor) against the optimisation
+ * baseline (value iteration, then compare). All must agree with each other and with the exact value; discounted games have optimal
  * positional strategies for both players (Shapley 1953; Zwick & Paterson 1996), so the robot can
  * force {@code DS >= v} iff {@code val >= v} and {@code DS > v} iff {@code val > v}.
  */
@@ -48,6 +49,8 @@ class ComparatorVersusValueIterationTest {
                 boolean byProduct = TinyProductGame.robotWinsWithoutGoal(a,
                         new DiscountedComparator(d, mu, v, rel), rel == Relation.AT_LEAST);
                 boolean byIteration = vi.decide(v, rel).holds();
+                boolean byAttractor = DiscountedThresholdGame.build(a, new DiscountedComparator(d, mu, v, rel)).robotWins();
+                assertThat(byAttractor).as("linear-time attractor, val=%s v=%s %s", val, v, rel.symbol()).isEqualTo(expected);
                 assertThat(byProduct).as("comparator, val=%s v=%s %s", val, v, rel.symbol()).isEqualTo(expected);
                 assertThat(byIteration).as("value iteration, val=%s v=%s %s", val, v, rel.symbol()).isEqualTo(expected);
             }

@@ -35,8 +35,8 @@ final class TinyProductGame {
             startCode = LOSE;
             return;
         }
-        if (goal != null && goal.accepting(g0, a.isDock(a.cell(s)))) {
-            startCode = m.acceptsAtCompletion(m0) ? WIN : LOSE;
+        if (goal != null && goal.accepting(g0, a.isDock(a.cell(s))) && m.acceptsAtCompletion(m0)) {
+            startCode = WIN;
             return;
         }
         startCode = node(index, queue, s, g0, m0);
@@ -60,8 +60,8 @@ final class TinyProductGame {
                         int gs = goal.step(x[1], a.cellZones(a.cell(t)));
                         if (gs == GoalAutomaton.REJECT) {
                             code = LOSE;
-                        } else if (goal.accepting(gs, a.isDock(a.cell(t)))) {
-                            code = m.acceptsAtCompletion(ms) ? WIN : LOSE;
+                        } else if (goal.accepting(gs, a.isDock(a.cell(t))) && m.acceptsAtCompletion(ms)) {
+                            code = WIN;
                         } else {
                             code = node(index, queue, t, gs, ms);
                         }
@@ -98,7 +98,11 @@ final class TinyProductGame {
         return new TinyProductGame(a, m, null).solve(safety);
     }
 
-    /** With the goal: reach mission completion with an accepting monitor state, never REJECT. */
+    /**
+     * With the goal: reach a moment where the tasks are done, the robot is on a dock and the monitor
+     * accepts at completion; never REJECT. As in the product the tool uses, being on a dock with the
+     * tasks done but the monitor not (yet) accepting does not end the play: the robot may go on.
+     */
     static boolean robotWinsWithGoal(Arena a, Monitor m, GoalAutomaton goal) {
         return new TinyProductGame(a, m, goal).solve(false);
     }
