@@ -30,8 +30,9 @@ import java.util.Random;
  * (the {@code bench} command) print the rows and the ratios measured in one run.
  *
  * <p>Instances ({@link #instance}) are square floors of invented data: tile and carpet, about one
- * cell in ten a wall, a dock in each corner region, doors that may shut along a middle corridor and
- * a disturbance budget of 1; generated from a fixed seed, so every run measures the same arenas.
+ * cell in ten a wall, docks in two opposite corners, the start beside one of them, doors that may
+ * shut along a middle row and a disturbance budget of 1; generated from a fixed seed per size, so
+ * every run measures the same arenas.
  */
 public final class DiscountedBench {
 
@@ -42,6 +43,7 @@ public final class DiscountedBench {
      * One instance measured both ways.
      *
      * @param size                 side of the square floor in cells
+     * @param threshold            the threshold v of {@code DS relation v}
      * @param arenaVertices        vertices of the arena
      * @param arenaEdges           edges of the arena
      * @param productVertices      vertices of the comparator product
@@ -53,7 +55,7 @@ public final class DiscountedBench {
      * @param comparatorAnswer     the comparator route's answer
      * @param valueIterationAnswer the optimisation route's answer
      */
-    public record Row(int size, int arenaVertices, int arenaEdges, int productVertices, int productEdges,
+    public record Row(int size, Rational threshold, int arenaVertices, int arenaEdges, int productVertices, int productEdges,
                       int comparatorStates, long comparatorNanos, long valueIterationNanos, int sweeps,
                       boolean comparatorAnswer, boolean valueIterationAnswer) {
 
@@ -62,14 +64,22 @@ public final class DiscountedBench {
         }
     }
 
-    /** {@link #run(int[], int, Rational, Relation)} with discount 2 and {@code DS >= 3/4}. */
+    /**
+     * The default series: discount 2, relation {@code >=}, and as threshold each instance's exact
+     * optimal value (found by an untimed value-iteration solve first), the hardest threshold for
+     * both routes: value iteration must pin the value exactly, and the comparator product must
+     * explore every play that stays within reach of it. Every answer is "yes".
+     *
+     * @throws ArithmeticException if an instance's value needs more than 64-bit rationals
+     */
     public static List<Row> run(int... sizes) {
-        return run(sizes, 2, Rational.of(3, 4), Relation.AT_LEAST);
+        return run(sizes, 2, null, Relation.AT_LEAST);
     }
 
     /**
      * Measures each size once, after one untimed warm-up run on the smallest size.
      *
+     * @param threshold the threshold for every instance, or {@code null} for each instance's exact optimal value
      * @throws ArithmeticException if value iteration cannot pin a value with 64-bit rationals
      */
     public static List<Row> run(int[] sizes, int discount, Rational threshold, Relation relation) {
@@ -83,8 +93,10 @@ public final class DiscountedBench {
         return rows;
     }
 
-    static Row measure(int size, int discount, Rational threshold, Relation relation) {
+    static Row measure(int size, int discount, Rational fixedThreshold, Relation relation) {
         Arena arena = ArenaCompiler.compile(instance(size, 0x5eedL + size));
+        Rational threshold = fixedThreshold != null ? fixedThreshold
+                : new DiscountedValueIteration(arena, discount).solve().exactValue();
         long t0 = System.nanoTime();
         DiscountedThresholdGame game = DiscountedThresholdGame.build(arena,
                 new dockline.monitor.DiscountedComparator(discount, arena.maxAbsWeight(), threshold, relation));
@@ -92,7 +104,7 @@ public final class DiscountedBench {
         long t1 = System.nanoTime();
         DiscountedValueIteration.Result vi = new DiscountedValueIteration(arena, discount).decide(threshold, relation);
         long t2 = System.nanoTime();
-        return new Row(size, arena.vertexCount(), arena.edgeCount(), game.vertexCount(), game.edgeCount(),
+        return new Row(size, threshold, arena.vertexCount(), arena.edgeCount(), game.vertexCount(), game.edgeCount(),
                 game.comparatorStates(), t1 - t0, t2 - t1, vi.sweeps(), byComparator, vi.holds());
     }
 
@@ -133,9 +145,10 @@ public final class DiscountedBench {
         RobotProfile robot = new RobotProfile(BigDecimal.valueOf(500), new BigDecimal("0.5"),
                 Map.of("tile", BigDecimal.ONE, "carpet", new BigDecimal("1.5")), new BigDecimal("0.5"),
                 BigDecimal.ONE, Neighbourhood.FOUR);
-        Cell start = new Cell(size - 1, 0);
-        if (rows.get(0).charAt(size - 1) == '#') {
-            rows.set(0, rows.get(0).substring(0, size - 1) + ".");
+        // start beside the corner dock, so optimal values keep small denominators
+        Cell start = new Cell(1, 0);
+        if (rows.get(0).charAt(1) == '#') {
+            rows.set(0, "C." + rows.get(0).substring(2));
             map = new BuildingMap(map.name(), null, map.cellSizeMetres(), rows, legend, List.of(), Map.of(),
                     map.disturbances());
         }
