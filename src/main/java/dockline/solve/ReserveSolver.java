@@ -14,8 +14,10 @@ import java.util.OptionalInt;
  * The threshold solver for the reserve objective: arena × goal automaton × {@link ReserveMonitor},
  * solved as a reachability game by the linear-time attractor (DESIGN.md 2.4).
  *
- * <p>{@link #analyse} gives the verdict, the robot's policy, the worst level the disturbances can
- * force under it (dynamic programming over the acyclic closed loop, O(closed loop)), the highest
+ * <p>{@link #analyse} gives the verdict, the robot's policy (by default the attractor strategy at
+ * the mission's floor, which finishes in the fewest moves in the worst case; with
+ * {@link ReserveOptions#safestPolicy()} the one at the highest guaranteed floor), the worst level
+ * the disturbances can * force under it (dynamic programming over the acyclic closed loop, O(closed loop)), the highest
  * floor that can be guaranteed (a max-min fixpoint over one more product, computed as an
  * incremental attractor while the floor falls; exact because winning is monotone in the floor),
  * and optionally the heat map.
@@ -61,7 +63,7 @@ public final class ReserveSolver {
 
         OptionalInt highest = OptionalInt.empty();
         boolean searched = false;
-        if (options.highestReserve()) {
+        if (options.highestReserve() || options.safestPolicy()) {
             try {
                 int h = highestFloorByThresholds(arena, goal, monitor.withFloor(won ? worst.getAsInt() : 0),
                         options.product());
@@ -72,10 +74,22 @@ public final class ReserveSolver {
                         + e.getMessage());
             }
         }
+        int policyFloor = reserve;
+        ProductGame policyGame = game;
+        Solution policySolution = sol;
+        if (options.safestPolicy() && won && highest.isPresent() && highest.getAsInt() > worst.getAsInt()) {
+            // the policy of the game at the highest floor: it keeps the battery at or above that floor
+            policyFloor = highest.getAsInt();
+            ReserveMonitor safest = monitor.withFloor(policyFloor);
+            policyGame = ProductGame.fromStart(arena, goal, safest, options.product());
+            policySolution = options.solver().create(policyGame.graph(), options.product().cancelled()).solve();
+            policy = Optional.of(policyGame.policy(policySolution, safest::level));
+            worst = OptionalInt.of(worstCaseMinimum(policyGame, policySolution, safest));
+        }
         long t1 = System.nanoTime();
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, capacity, mission.scale(), worst, highest,
                 searched, game.vertexCount(), game.edgeCount(), game.estimate(), millis(game.buildNanos()),
-                millis(solved - t0), millis(t1 - t0), policy, game, sol, heat, notes);
+                millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes);
     }
 
     /** Verdict only (no policy, no search), for callers that probe many variants. */
