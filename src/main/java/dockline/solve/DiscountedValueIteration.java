@@ -185,6 +185,9 @@ public final class DiscountedValueIteration {
         final long[] lo = new long[arena.robotCount()];
         final long[] hi = new long[arena.robotCount()];
         int sweeps;
+        /** Greedy strategies fixed by {@link #recover}, or read off the iterate by {@link #result}. */
+        int[] robotChoice;
+        int[] outcomeChoice;
 
         Run() {
             for (int r : reach) {
@@ -308,9 +311,6 @@ public final class DiscountedValueIteration {
             this.outcomeChoice = outcomeChoice;
             return x;
         }
-
-        int[] robotChoice;
-        int[] outcomeChoice;
 
         /** Each vertex's play under the fixed strategies is a lasso; values by the geometric series. */
         void valuesOfFunctionalGraph(int[] succ, int[] w, Recovered x) {

@@ -233,7 +233,7 @@ class DiscountedComparatorTest {
         int[] pp = prePeriodAndPeriod(v.num(), v.den(), d);
         // bound: (floor(2 mu/(d-1)) + 1) per fractional class, one class per remainder of the long
         // division, plus the initial state and the accepting sink
-        long bound = (long) ((2L * mu) / (d - 1) + 1) * (pp[0] + pp[1]) + 2;
+        long bound = ((2L * mu) / (d - 1) + 1) * (pp[0] + pp[1]) + 2;
         for (Relation rel : Relation.values()) {
             DiscountedComparator comp = new DiscountedComparator(d, mu, v, rel);
             java.util.Set<Integer> reached = exploreAll(comp);
