@@ -10,6 +10,7 @@ import dockline.margin.Margins;
 import dockline.margin.Suggestion;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
+import dockline.model.Objective;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
@@ -116,6 +117,10 @@ public final class MarginCommand implements Callable<Integer> {
         int cap = r.capacityUnits();
         out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
                 + " as written (start " + charge(s, r.startUnits(), cap) + ", reserve floor " + charge(s, r.floorUnits(), cap) + ")");
+        if (!(m.objective() instanceof Objective.Reserve)) {
+            out.println("note: this mission's objective is a discounted score; the margins are those of the reserve"
+                    + " objective (the floor and the tasks) only");
+        }
         out.println("highest reserve floor guaranteed from this start: " + charge(s, r.highestReserveUnits(), cap));
         out.println("lowest starting charge that guarantees this floor: " + charge(s, r.lowestStartUnits(), cap));
         out.println();

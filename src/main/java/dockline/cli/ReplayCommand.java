@@ -4,6 +4,7 @@ import dockline.certify.Certificate;
 import dockline.certify.ClosedLoop;
 import dockline.io.AtomicFiles;
 import dockline.model.Mission;
+import dockline.model.Objective;
 import dockline.replay.ForcedEvent;
 import dockline.replay.ForcedEventException;
 import dockline.replay.MissionReplays;
@@ -161,6 +162,10 @@ public final class ReplayCommand implements Callable<Integer> {
                     ? "best effort: the policy for the highest reserve that can be guaranteed, " + mr.bestEffortFloor()
                             + " units (" + m.scale().formatWh(mr.bestEffortFloor()) + ")"
                     : "best effort: none (no reserve floor at all can be guaranteed from this start)");
+        }
+        if (!(m.objective() instanceof Objective.Reserve)) {
+            out.println("note: this mission's objective is a discounted score; the replay follows the reserve objective"
+                    + " (the floor and the tasks) only");
         }
         out.println("replay: " + what + ", " + (replay.steps().size() - 1) + " steps, ends " + replay.ending().word());
         out.println();
