@@ -35,7 +35,7 @@ import picocli.CommandLine.Parameters;
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:picture written; the mission is guaranteed", "1:picture written; the mission is not guaranteed",
                 "2:bad input or usage (nothing written)", "3:over a resource limit (nothing written)",
-                "4:internal error"})
+                "4:internal error (also: the solver's policy failed the independent certificate check)"})
 public final class RenderCommand implements Callable<Integer> {
 
     private static final Pattern SIZE = Pattern.compile("(\\d{3,4})[xX](\\d{3,4})");
@@ -109,7 +109,8 @@ public final class RenderCommand implements Callable<Integer> {
         try {
             data = new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
-            boolean limit = e.getCause() instanceof dockline.solve.ProductTooLargeException;
+            boolean limit = e.getCause() instanceof dockline.solve.ProductTooLargeException
+                    || e.getCause() instanceof dockline.certify.ClosedLoop.TooLargeException;
             err.println("dockline render: " + e.getMessage());
             return limit ? ExitCodes.RESOURCE_LIMIT : ExitCodes.BAD_INPUT;
         }
@@ -124,7 +125,11 @@ public final class RenderCommand implements Callable<Integer> {
         outw.println(v.headline());
         outw.println(Caveats.block());
         outw.flush();
-        return v.outcome() == Verdict.Outcome.GUARANTEED ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+        return switch (v.outcome()) {
+            case GUARANTEED -> ExitCodes.OK;
+            case NOT_GUARANTEED -> ExitCodes.NOT_GUARANTEED;
+            case NOT_CHECKED -> ExitCodes.INTERNAL; // the policy failed the independent certificate check
+        };
     }
 
     private static Charge charge(String option, String text, Mission m) {

@@ -4,43 +4,85 @@ import dockline.arena.Action;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
+import dockline.monitor.ReserveMonitor;
+import dockline.replay.ForcedEventException;
+import dockline.replay.MissionReplays;
+import dockline.replay.Replay;
 import dockline.solve.ChargeNeeded;
 import dockline.solve.Policy;
 import dockline.solve.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
-import dockline.solve.ReserveSolver;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
 /**
- * The real {@link Analyzer}: the very reserve solver the command line uses
- * ({@link ReserveSolver#analyse}), with the heat map and the highest-floor search switched on and
- * the cancellation flag passed down, turned into the view's own {@link ViewData}.
+ * The real {@link Analyzer}: the solver, the independent certificate checker and the replays the
+ * command line uses ({@link MissionReplays}), plus the heat map ({@link ChargeNeeded}), turned into
+ * the view's own {@link ViewData}. The cancellation flag goes down to every solve and is checked
+ * between the stages.
  */
 public final class SolverAnalyzer implements Analyzer {
 
     @Override
     public ViewData analyze(Mission mission, BooleanSupplier cancelled) {
-        ReserveOptions options = ReserveOptions.defaults().withChargeNeeded(true).withHighestReserve(true)
-                .withCancelled(cancelled);
-        ReserveAnalysis a;
+        ReserveOptions options = ReserveOptions.defaults().withChargeNeeded(false).withCancelled(cancelled);
+        MissionReplays mr;
+        ChargeNeeded heat;
         try {
-            a = ReserveSolver.analyse(mission, options);
-        } catch (ProductTooLargeException e) {
-            throw new IllegalArgumentException(e.getMessage(), e);
+            mr = MissionReplays.of(mission, options);
+            stopIf(cancelled);
+            ReserveAnalysis a = mr.analysis();
+            heat = ChargeNeeded.compute(mr.arena(), a.game().goal(),
+                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product(),
+                    options.solver());
+            stopIf(cancelled);
+        } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
+            throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);
         }
-        return new SolvedData(a, verdictOf(a), List.of(), a.policy());
+        List<ViewReplay> replays = new ArrayList<>();
+        List<String> problems = new ArrayList<>();
+        try {
+            Replay w = mr.worstCase();
+            replays.add(ReplayAdapter.of(mission, w, mr.guaranteed() ? ViewReplay.Kind.WORST_CASE
+                    : ViewReplay.Kind.COUNTEREXAMPLE, title(mission, w, mr.guaranteed() ? "worst case" : "counterexample")));
+        } catch (IllegalStateException e) {
+            problems.add(e.getMessage());
+        }
+        if (mr.policy().isPresent()) {
+            try {
+                Replay n = mr.nominal();
+                replays.add(ReplayAdapter.of(mission, n, ViewReplay.Kind.NOMINAL, title(mission, n, "no disturbance")));
+            } catch (IllegalStateException e) {
+                problems.add(e.getMessage());
+            }
+        }
+        stopIf(cancelled);
+        return new SolvedData(mr, heat, verdictOf(mr, problems), replays);
     }
 
-    /** The verdict in words, for a reserve analysis. */
-    static Verdict verdictOf(ReserveAnalysis a) {
+    private static void stopIf(BooleanSupplier cancelled) {
+        if (cancelled.getAsBoolean()) {
+            throw new CancellationException("cancelled");
+        }
+    }
+
+    static String title(Mission m, Replay r, String what) {
+        return what + " (" + (r.steps().size() - 1) + " steps, lowest " + Units.wh(m, r.minimumUnits()) + ")";
+    }
+
+    /** The verdict in words, with the certificate status. */
+    static Verdict verdictOf(MissionReplays mr, List<String> problems) {
+        ReserveAnalysis a = mr.analysis();
         Mission m = a.mission();
         int k = m.map().disturbances().budget();
         String floor = Units.both(m, a.reserveUnits());
@@ -56,36 +98,63 @@ public final class SolverAnalyzer implements Analyzer {
             if (a.highestGuaranteedReserveUnits().isPresent()) {
                 words.append(" A floor of ").append(Units.both(m, a.highestGuaranteedReserveUnits().getAsInt()))
                         .append(" can be guaranteed.");
-            } else if (a.highestReserveSearched()) {
+            } else if (a.highestReserveSearched() || mr.bestEffortFloor() < 0) {
                 words.append(" No floor can be guaranteed from this start.");
             }
         }
         if (m.objective() instanceof Objective.Discounted) {
-            words.append(" (Checked for the reserve floor; the mission's discounted objective is not shown here.)");
+            words.append(" (This answers the reserve floor; the mission's discounted objective is checked by 'dockline check'.)");
         }
         for (String n : a.notes()) {
             words.append(" Note: ").append(n).append('.');
         }
-        String cert = "not checked by the independent certificate checker yet";
-        return new Verdict(a.guaranteed() ? Verdict.Outcome.GUARANTEED : Verdict.Outcome.NOT_GUARANTEED, words.toString(),
-                cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
+        String cert;
+        Verdict.Outcome outcome = a.guaranteed() ? Verdict.Outcome.GUARANTEED : Verdict.Outcome.NOT_GUARANTEED;
+        if (a.guaranteed()) {
+            Certificate c = mr.certificate().orElse(null);
+            if (c != null && c.ok()) {
+                cert = "passed \u2014 the policy was re-checked independently of the solver (" + c.statesChecked()
+                        + " situations, every disturbance choice; longest run " + c.longestRunSteps() + " steps)";
+            } else {
+                // never trust a guarantee whose policy failed the check: say so, loudly
+                outcome = Verdict.Outcome.NOT_CHECKED;
+                words.insert(0, "the solver says guaranteed, but its policy FAILED the independent check; do not rely on it. ");
+                cert = "FAILED \u2014 " + (c == null ? "no certificate" : c.reason());
+            }
+        } else {
+            cert = "not applicable (nothing to certify for a verdict of not guaranteed); the counterexample replay shows"
+                    + " the breach" + (mr.bestEffortFloor() >= 0 ? "; the policy shown is the best effort, certified for a floor of "
+                    + Units.both(m, mr.bestEffortFloor()) : "");
+        }
+        for (String p : problems) {
+            cert += "; " + p;
+        }
+        return new Verdict(outcome, words.toString(), cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
     }
 
     /** {@link ViewData} over a {@link ReserveAnalysis}; the policy is indexed by cell once, at construction. */
     static final class SolvedData implements ViewData {
 
+        private final MissionReplays replaysSource;
         private final ReserveAnalysis analysis;
+        private final ChargeNeeded heat;
         private final Verdict verdict;
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
         private final Map<Long, List<Action>> byCell;
 
-        SolvedData(ReserveAnalysis analysis, Verdict verdict, List<ViewReplay> replays, Optional<Policy> policy) {
-            this.analysis = analysis;
+        SolvedData(MissionReplays mr, ChargeNeeded heat, Verdict verdict, List<ViewReplay> replays) {
+            this.replaysSource = mr;
+            this.analysis = mr.analysis();
+            this.heat = heat;
             this.verdict = verdict;
             this.replays = List.copyOf(replays);
-            this.policy = policy;
+            this.policy = mr.policy();
             this.byCell = indexByCell(policy, analysis.mission().map().width());
+        }
+
+        MissionReplays missionReplays() {
+            return replaysSource;
         }
 
         private static long key(int cellIndex, int budgetLeft, int progress) {
@@ -136,12 +205,8 @@ public final class SolverAnalyzer implements Analyzer {
 
         @Override
         public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
-            Optional<ChargeNeeded> heat = analysis.chargeNeeded();
-            if (heat.isEmpty()) {
-                return UNKNOWN;
-            }
             try {
-                int u = heat.get().unitsNeeded(cellIndex, budgetLeft, progressMask);
+                int u = heat.unitsNeeded(cellIndex, budgetLeft, progressMask);
                 return u == ChargeNeeded.IMPOSSIBLE ? IMPOSSIBLE : u;
             } catch (IllegalArgumentException outOfRange) {
                 return UNKNOWN;
@@ -160,6 +225,39 @@ public final class SolverAnalyzer implements Analyzer {
         @Override
         public List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
             return byCell.getOrDefault(key(cellIndex, budgetLeft, progressMask), List.of());
+        }
+
+        @Override
+        public boolean canForce() {
+            return policy.isPresent();
+        }
+
+        /**
+         * Replays the policy with the given events (nominal outcomes elsewhere).
+         *
+         * @throws IllegalArgumentException when an event cannot happen where it was put
+         */
+        @Override
+        public Optional<ViewReplay> force(List<ForcedEvent> events) {
+            if (policy.isEmpty() || events.isEmpty()) {
+                return Optional.empty();
+            }
+            List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
+            StringBuilder what = new StringBuilder();
+            for (ForcedEvent e : events) {
+                fs.add(new dockline.replay.ForcedEvent(e.step(), e.kind(), e.slipTo()));
+                what.append(what.length() == 0 ? "" : ", ").append(e.step()).append(':').append(e.kind().word())
+                        .append(e.slipTo() != null ? "@" + e.slipTo() : "");
+            }
+            try {
+                Replay r = replaysSource.forced(fs);
+                return Optional.of(ReplayAdapter.of(mission(), r, ViewReplay.Kind.FORCED,
+                        title(mission(), r, "forced " + what)));
+            } catch (ForcedEventException e) {
+                throw new IllegalArgumentException(e.getMessage(), e);
+            } catch (IllegalStateException e) {
+                throw new IllegalArgumentException(e.getMessage(), e);
+            }
         }
     }
 }
