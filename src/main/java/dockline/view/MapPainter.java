@@ -434,15 +434,21 @@ final class MapPainter {
         g.setLineDashes();
         double size = Math.max(9, Math.min(13, s * 0.36));
         Font font = Font.font("DejaVu Sans", FontWeight.BOLD, size);
+        // one marker per cell; its label lists the steps and kinds there, e.g. "40, 41 drag"
+        Map<Cell, List<ViewStep>> byCell = new java.util.LinkedHashMap<>();
         for (ViewStep st : steps) {
-            if (!st.hasEvent()) {
-                continue;
+            if (st.hasEvent()) {
+                byCell.computeIfAbsent(eventCell(st), c -> new java.util.ArrayList<>()).add(st);
             }
-            Cell where = eventCell(st);
+        }
+        List<double[]> placed = new java.util.ArrayList<>();
+        for (Map.Entry<Cell, List<ViewStep>> en : byCell.entrySet()) {
+            Cell where = en.getKey();
+            List<ViewStep> here = en.getValue();
             double cx = ox + (where.x() + 0.78) * s;
             double cy = oy + (where.y() + 0.22) * s;
             double r = Math.max(5, s * 0.22);
-            boolean happened = st.step() <= step;
+            boolean happened = here.get(0).step() <= step;
             double[] xs = {cx, cx + r, cx, cx - r};
             double[] ys = {cy - r, cy, cy + r, cy};
             g.setFill(happened ? Palette.EVENT : Color.WHITE);
@@ -450,18 +456,52 @@ final class MapPainter {
             g.setStroke(Palette.EVENT);
             g.setLineWidth(1.5);
             g.strokePolygon(xs, ys, 4);
-            String label = st.step() + " " + eventWord(st.event());
+            String label = eventLabel(here);
+            Text probe = new Text(label);
+            probe.setFont(font);
+            double tw = probe.getLayoutBounds().getWidth() + 4;
+            double th = size * 1.3;
+            double[] rect = {cx + r + 1, cy - th / 2, tw, th};
+            for (int tries = 0; tries < 6 && overlapsAny(placed, rect); tries++) {
+                rect[1] += th + 1; // below the one in the way
+            }
+            placed.add(rect);
+            g.setFill(Color.WHITE.deriveColor(0, 1, 1, 0.85));
+            g.fillRect(rect[0], rect[1], rect[2], rect[3]);
             g.setFont(font);
             g.setTextAlign(TextAlignment.LEFT);
             g.setTextBaseline(VPos.CENTER);
-            g.setFill(Color.WHITE.deriveColor(0, 1, 1, 0.85));
-            Text probe = new Text(label);
-            probe.setFont(font);
-            double tw = probe.getLayoutBounds().getWidth();
-            g.fillRect(cx + r + 1, cy - size * 0.65, tw + 4, size * 1.3);
             g.setFill(Palette.EVENT.darker());
-            g.fillText(label, cx + r + 3, cy);
+            g.fillText(label, rect[0] + 2, rect[1] + th / 2);
         }
+    }
+
+    /** {@code 40, 41 drag} when the kinds agree, else {@code 40 drag, 52 slip}. */
+    static String eventLabel(List<ViewStep> here) {
+        boolean same = here.stream().map(ViewStep::event).distinct().count() == 1;
+        StringBuilder sb = new StringBuilder();
+        for (ViewStep st : here) {
+            if (sb.length() > 0) {
+                sb.append(", ");
+            }
+            sb.append(st.step());
+            if (!same) {
+                sb.append(' ').append(eventWord(st.event()));
+            }
+        }
+        if (same) {
+            sb.append(' ').append(eventWord(here.get(0).event()));
+        }
+        return sb.toString();
+    }
+
+    private static boolean overlapsAny(List<double[]> placed, double[] r) {
+        for (double[] p : placed) {
+            if (overlaps(p, r)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Where an event is marked: the cell it concerns, else the cell the robot tried to enter. */
