@@ -218,6 +218,15 @@ public final class MissionWindow {
         HBox replayBar = new HBox(6, runLabel, replayChoice, backButton, playButton, forwardButton, speedLabel, speedSlider,
                 stepLabel);
         replayBar.setId("replay-bar");
+        for (Region n : List.of(runLabel, backButton, playButton, forwardButton, speedSlider)) {
+            n.setMinWidth(Region.USE_PREF_SIZE);
+        }
+        replayChoice.setMinWidth(120);
+        stepLabel.setWrapText(false);
+        stepLabel.setMinWidth(0);
+        stepLabel.setTextOverrun(javafx.scene.control.OverrunStyle.ELLIPSIS);
+        stepLabel.setTooltip(new Tooltip());
+        stepLabel.getTooltip().textProperty().bind(stepLabel.textProperty());
         replayBar.setAlignment(Pos.CENTER_LEFT);
         replayBar.setPadding(new Insets(4, 10, 0, 10));
         replayChoice.setMaxWidth(260);

@@ -86,6 +86,49 @@ class DemoMissionWindowTest {
     }
 
     @Test
+    void stepping_the_certified_worst_case_moves_the_robot_and_the_chart_shows_its_minimum(FxRobot robot) throws Exception {
+        Mission m = dockline.io.MissionLoader.load(MISSION);
+        waitUntil(() -> solvedWithReserve(m.reserveUnits()));
+        ViewData d = fx(() -> window.dataProperty().get());
+        assertThat(d.verdict().certificate()).startsWith("passed");
+        ViewReplay worst = d.replays().get(0);
+        assertThat(worst.kind()).isEqualTo(ViewReplay.Kind.WORST_CASE);
+        int n = Math.min(5, worst.length());
+        for (int i = 0; i < n; i++) {
+            robot.clickOn("#step-forward");
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        assertThat(fx(() -> window.player().step())).isEqualTo(n);
+        assertThat(fx(() -> window.mapView().layers().robotCell())).isEqualTo(worst.steps().get(n).cell());
+        assertThat(robot.lookup("#step-label").queryAs(Label.class).getText()).startsWith("step " + n + " of " + worst.length());
+        // the chart plots the replay; its lowest point is the solver's worst-case minimum
+        assertThat(fx(() -> window.chart().minimumUnits())).isEqualTo(d.verdict().worstCaseMinimumUnits().getAsInt());
+        // playing runs to the end and stops there
+        javafx.scene.control.Slider speed = robot.lookup("#speed").queryAs(javafx.scene.control.Slider.class);
+        robot.interact(() -> speed.setValue(speed.getMax()));
+        robot.clickOn("#play");
+        waitUntil(() -> fx(() -> window.player().step() == worst.length() && !window.player().playingProperty().get()));
+        assertThat(fx(() -> window.mapView().layers().robotCell())).isEqualTo(worst.steps().get(worst.length()).cell());
+    }
+
+    @Test
+    void a_forced_door_shut_scenario_is_added_to_the_runs(FxRobot robot) throws Exception {
+        Mission m = dockline.io.MissionLoader.load(MISSION);
+        waitUntil(() -> solvedWithReserve(m.reserveUnits()));
+        ViewData d = fx(() -> window.dataProperty().get());
+        assertThat(d.canForce()).isTrue();
+        // force the event the worst case itself suffers, at its step: the forced run must replay it
+        ViewStep ev = d.replays().get(0).steps().stream().filter(ViewStep::hasEvent).findFirst().orElseThrow();
+        ViewReplay forced = d.force(java.util.List.of(new ForcedEvent(ev.step(), ev.event(),
+                ev.event() == dockline.model.EventKind.SLIP ? ev.cell() : null))).orElseThrow();
+        assertThat(forced.kind()).isEqualTo(ViewReplay.Kind.FORCED);
+        assertThat(forced.steps().get(ev.step()).event()).isEqualTo(ev.event());
+        // an event where it cannot happen is refused in words
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> d.force(java.util.List.of(
+                new ForcedEvent(1, dockline.model.EventKind.BLOCKAGE, null)))).isInstanceOf(IllegalArgumentException.class);
+    }
+
+    @Test
     void a_reserve_above_the_starting_charge_is_not_guaranteed(FxRobot robot) throws Exception {
         Mission m = dockline.io.MissionLoader.load(MISSION);
         waitUntil(() -> solvedWithReserve(m.reserveUnits()));
