@@ -123,6 +123,26 @@ class DemoMissionWindowTest {
                 ev.event() == dockline.model.EventKind.SLIP ? ev.cell() : null))).orElseThrow();
         assertThat(forced.kind()).isEqualTo(ViewReplay.Kind.FORCED);
         assertThat(forced.steps().get(ev.step()).event()).isEqualTo(ev.event());
+        // the same through the window's controls: the scenario joins the runs and is shown
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ChoiceBox<dockline.model.EventKind> kind = robot.lookup("#force-kind").queryAs(javafx.scene.control.ChoiceBox.class);
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.Spinner<Integer> at = robot.lookup("#force-step").queryAs(javafx.scene.control.Spinner.class);
+        robot.interact(() -> {
+            kind.setValue(ev.event());
+            at.getValueFactory().setValue(ev.step());
+        });
+        if (ev.event() == dockline.model.EventKind.SLIP) {
+            TextField to = robot.lookup("#force-slip-to").queryAs(TextField.class);
+            robot.interact(() -> to.setText(ev.cell().toString()));
+        }
+        robot.interact(() -> robot.lookup("#force-add").queryButton().fire());
+        robot.interact(() -> robot.lookup("#force-run").queryButton().fire());
+        WaitForAsyncUtils.waitForFxEvents();
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ComboBox<ViewReplay> runs = robot.lookup("#replay").queryAs(javafx.scene.control.ComboBox.class);
+        assertThat(fx(() -> runs.getValue().kind())).isEqualTo(ViewReplay.Kind.FORCED);
+        assertThat(fx(() -> window.chart().minimumUnits())).isEqualTo(fx(() -> runs.getValue().minimumUnits()));
         // an event where it cannot happen is refused in words
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> d.force(java.util.List.of(
                 new ForcedEvent(1, dockline.model.EventKind.BLOCKAGE, null)))).isInstanceOf(IllegalArgumentException.class);
