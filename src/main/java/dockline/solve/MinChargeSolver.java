@@ -33,9 +33,10 @@ import java.util.Arrays;
  * </pre>
  * The capacity plays no further part. The result is independent of the energy resolution in
  * cost (values are plain ints): O(m·G·log(n·G)) time for an arena of n vertices and m edges and a
- * goal automaton of G states, with a binary heap on primitive int arrays; memory about 6 bytes per
- * vertex of arena × goal (4-byte value and 1-byte counter per disturbance vertex, value, heap slot
- * and heap position per robot vertex), on top of the arena.
+ * goal automaton of G states, with a 4-ary heap on a primitive long array (key and vertex packed in
+ * one entry, lazy deletion); memory about 5 bytes per disturbance vertex of arena × goal (a 4-byte
+ * running maximum and a 1-byte counter) and 5 bytes per robot vertex (value and a final flag), plus
+ * 8 bytes per heap entry (at most one per improvement), on top of the arena.
  *
  * <p><b>When it applies.</b> When the arena has no charge action (charge rate 0), or no robot
  * vertex reachable from the start before completion can charge (see {@link #applicable}). Charge
@@ -270,7 +271,8 @@ public final class MinChargeSolver {
         Arrays.fill(robotNeed, INFINITE);
         final int[] distMax = new int[distN];
         final byte[] processed = new byte[distN];
-        final Heap heap = new Heap(robotN, robotNeed);
+        final Heap heap = new Heap(Math.min(robotN, 1 << 20));
+        final boolean[] done = new boolean[robotN];
         long explored = 0;
 
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
@@ -284,22 +286,28 @@ public final class MinChargeSolver {
                         for (int k = 0; k <= arena.budget(); k++) {
                             int p = arena.robotVertex(c, k) * gc + g;
                             robotNeed[p] = 0;
-                            heap.insert(p);
+                            heap.push(0, p);
                         }
                     }
                 }
             }
         }
         while (!heap.isEmpty()) {
-            if (stopEarly && robotNeed[heap.peek()] > available) {
+            long top = heap.peek();
+            int x = (int) (top >>> 32);
+            if (stopEarly && x > available) {
                 break;
             }
-            int u = heap.poll();
+            heap.poll();
+            int u = (int) top;
+            if (done[u] || x != robotNeed[u]) {
+                continue; // a stale entry: u was final, or improved after this entry was pushed
+            }
+            done[u] = true;
             explored++;
             if (u == startP && stopEarly) {
                 break;
             }
-            int x = robotNeed[u];
             int r = u / gc;
             int g2 = u - r * gc;
             int base = cellMaskId[arena.cell(r)] * stride + g2;
@@ -328,16 +336,16 @@ public final class MinChargeSolver {
                         int y = distMax[dp];
                         int owner = arena.source(arena.inEdge(arena.inBegin(d)));
                         int rp = owner * gc + invGoal[j];
-                        if (y < robotNeed[rp] && !heap.isFinal(rp)) {
+                        if (y < robotNeed[rp] && !done[rp]) {
                             robotNeed[rp] = y;
-                            heap.decreaseOrInsert(rp);
+                            heap.push(y, rp);
                         }
                     }
                 }
             }
         }
         // after a full run every vertex left with a value is final; in decide() mode an undecided start needs more
-        int startNeed = startP >= 0 && heap.isFinal(startP) ? robotNeed[startP] : INFINITE;
+        int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
         boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
         long productVertices = (long) arena.vertexCount() * gc;
         return new Values(robotNeed, gc, rc, new Result(guaranteed, startNeed, available, explored, productVertices,
@@ -345,100 +353,74 @@ public final class MinChargeSolver {
     }
 
     /**
-     * Binary min-heap of robot product vertices keyed by {@code key[v]}, with decrease-key through a
-     * position array: {@code pos[v] = 0} never inserted, {@code > 0} at heap index pos-1,
-     * {@code -1} removed (final).
+     * Min-heap of robot product vertices with their keys packed into one long ({@code key << 32 | vertex}),
+     * 4-ary, with lazy deletion instead of decrease-key: an improved vertex is pushed again and stale
+     * entries are skipped when they surface. Keys live inside the heap entries, so sifting reads one
+     * array with good locality instead of chasing a key array at random; a 4-ary heap has half the levels
+     * of a binary one. O(log n) per operation, at most one entry per improvement.
      */
     private static final class Heap {
-        private final int[] heap;
-        private final int[] pos;
-        private final int[] key;
+        private long[] heap;
         private int size;
 
-        Heap(int n, int[] key) {
-            this.heap = new int[Math.max(1, n)];
-            this.pos = new int[Math.max(1, n)];
-            this.key = key;
+        Heap(int capacity) {
+            this.heap = new long[Math.max(16, capacity)];
         }
 
         boolean isEmpty() {
             return size == 0;
         }
 
-        boolean isFinal(int v) {
-            return pos[v] < 0;
-        }
-
-        int peek() {
+        long peek() {
             return heap[0];
         }
 
-        void insert(int v) {
-            heap[size] = v;
-            pos[v] = size + 1;
-            size++;
-            up(size - 1);
-        }
-
-        void decreaseOrInsert(int v) {
-            if (pos[v] == 0) {
-                insert(v);
-            } else {
-                up(pos[v] - 1);
+        void push(int key, int v) {
+            if (size == heap.length) {
+                heap = Arrays.copyOf(heap, Math.addExact(heap.length, heap.length >> 1));
             }
-        }
-
-        int poll() {
-            int top = heap[0];
-            pos[top] = -1;
-            size--;
-            if (size > 0) {
-                int last = heap[size];
-                heap[0] = last;
-                pos[last] = 1;
-                down(0);
-            }
-            return top;
-        }
-
-        private void up(int i) {
-            int v = heap[i];
-            int k = key[v];
+            long x = ((long) key << 32) | v;
+            int i = size++;
             while (i > 0) {
-                int parent = (i - 1) >>> 1;
-                int pv = heap[parent];
-                if (key[pv] <= k) {
+                int parent = (i - 1) >>> 2;
+                long p = heap[parent];
+                if (p <= x) {
                     break;
                 }
-                heap[i] = pv;
-                pos[pv] = i + 1;
+                heap[i] = p;
                 i = parent;
             }
-            heap[i] = v;
-            pos[v] = i + 1;
+            heap[i] = x;
         }
 
-        private void down(int i) {
-            int v = heap[i];
-            int k = key[v];
-            int half = size >>> 1;
-            while (i < half) {
-                int child = 2 * i + 1;
-                int cv = heap[child];
-                int right = child + 1;
-                if (right < size && key[heap[right]] < key[cv]) {
-                    child = right;
-                    cv = heap[child];
-                }
-                if (k <= key[cv]) {
+        long poll() {
+            long top = heap[0];
+            long x = heap[--size];
+            int n = size;
+            int i = 0;
+            while (true) {
+                int c = 4 * i + 1;
+                if (c >= n) {
                     break;
                 }
-                heap[i] = cv;
-                pos[cv] = i + 1;
-                i = child;
+                int best = c;
+                long bv = heap[c];
+                int last = Math.min(c + 4, n);
+                for (int j = c + 1; j < last; j++) {
+                    long hv = heap[j];
+                    if (hv < bv) {
+                        bv = hv;
+                        best = j;
+                    }
+                }
+                if (x <= bv) {
+                    break;
+                }
+                heap[i] = bv;
+                i = best;
             }
-            heap[i] = v;
-            pos[v] = i + 1;
+            heap[i] = x;
+            return top;
         }
     }
 }
