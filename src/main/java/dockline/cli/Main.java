@@ -49,6 +49,7 @@ public final class Main implements Runnable {
     static Object[] subcommands() {
         return new Object[] {
             // each issue adds its subcommand here
+            new ValidateCommand(),
         };
     }
 

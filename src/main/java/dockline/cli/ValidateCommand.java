@@ -1,0 +1,133 @@
+package dockline.cli;
+
+import dockline.io.InputException;
+import dockline.io.InputKind;
+import dockline.io.MapLoader;
+import dockline.io.MissionLoader;
+import dockline.io.Problem;
+import dockline.model.BuildingMap;
+import dockline.model.Cell;
+import dockline.model.EnergyScale;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.model.Tasks;
+import dockline.report.Caveats;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code dockline validate FILE...}: checks map and mission files (told apart by their keys) and
+ * prints one {@code ok} line per valid file with a short summary, or every problem on stderr.
+ * Exit code 0 when all files are valid, 2 when any is not.
+ */
+@Command(name = "validate", mixinStandardHelpOptions = true,
+        description = {"Checks map and mission files and reports every problem as file:line:column: message.",
+                "A mission is checked together with the map it names."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:every file is valid", "2:a file has problems, or bad usage"})
+public final class ValidateCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(arity = "1..*", paramLabel = "FILE", description = "map or mission files (YAML)")
+    List<Path> files;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        boolean allValid = true;
+        boolean anyMission = false;
+        for (Path f : files) {
+            try {
+                if (InputKind.of(f) == InputKind.MAP) {
+                    out.println("ok " + f + ": " + summary(MapLoader.load(f)));
+                } else {
+                    List<String> lines = summary(MissionLoader.load(f));
+                    out.println("ok " + f + ": " + lines.get(0));
+                    for (String l : lines.subList(1, lines.size())) {
+                        out.println("   " + l);
+                    }
+                    anyMission = true;
+                }
+            } catch (InputException e) {
+                allValid = false;
+                for (Problem p : e.problems()) {
+                    err.println(p.format());
+                }
+            }
+        }
+        if (anyMission) {
+            out.println(Caveats.block());
+        }
+        out.flush();
+        err.flush();
+        return allValid ? ExitCodes.OK : ExitCodes.BAD_INPUT;
+    }
+
+    /** E.g. {@code map 'X', 20 x 12 cells (150 free), 7 zones, 1 dock, 5 doors, budget 1 with 7 event rules}. */
+    static String summary(BuildingMap m) {
+        int free = 0;
+        int doors = 0;
+        for (int y = 0; y < m.height(); y++) {
+            for (int x = 0; x < m.width(); x++) {
+                Cell c = new Cell(x, y);
+                if (m.isFree(c)) {
+                    free++;
+                    if (m.terrainAt(c).door()) {
+                        doors++;
+                    }
+                }
+            }
+        }
+        int docks = m.docks().size();
+        return "map '" + m.name() + "', " + m.width() + " x " + m.height() + " cells of " + plain(m.cellSizeMetres())
+                + " m (" + free + " free), " + count(m.zones().size(), "zone") + ", " + count(docks, "dock") + ", "
+                + count(doors, "door") + ", disturbance budget " + m.disturbances().budget() + " with "
+                + count(m.disturbances().rules().size(), "event rule");
+    }
+
+    /** The mission in a few lines: the {@code ok} line's summary, then indented details. */
+    static List<String> summary(Mission m) {
+        EnergyScale s = m.scale();
+        Tasks t = m.tasks();
+        int n = t.visit().size();
+        String head = "mission '" + m.name() + "' on " + (m.map().source() != null ? m.map().source() : m.map().name())
+                + ", " + count(n, "zone") + " to visit" + (n > 1 ? (t.ordered() ? " in order" : " in any order") : "")
+                + ", disturbance budget " + m.map().disturbances().budget();
+        String tasks = n == 0 ? "no zones to visit" : "visit " + String.join(", ", t.visit());
+        if (!t.avoid().isEmpty()) {
+            tasks += "; avoid " + String.join(", ", t.avoid());
+        }
+        tasks += t.finishOnDock() ? "; finish on a dock" : "; no need to finish on a dock";
+        String objective = m.objective() instanceof Objective.Discounted d
+                ? "discounted sum of energy deltas (discount " + d.discount() + ") " + d.relation().symbol() + " " + d.threshold()
+                : "never below the reserve floor";
+        return List.of(head,
+                "battery: capacity " + s.formatWh(m.capacityUnits()) + " (" + m.capacityUnits() + " units), start "
+                        + m.start() + " with " + charge(m.startCharge().toString(), m.startUnits(), s) + ", reserve floor "
+                        + charge(m.reserve().toString(), m.reserveUnits(), s),
+                "tasks: " + tasks,
+                "objective: " + objective,
+                "energy: " + s.describe());
+    }
+
+    private static String charge(String written, int units, EnergyScale s) {
+        String wh = s.formatWh(units);
+        return (written.equals(wh) ? wh : written + " = " + wh) + " (" + units + " units)";
+    }
+
+    private static String count(int n, String word) {
+        return n + " " + word + (n == 1 ? "" : "s");
+    }
+
+    private static String plain(java.math.BigDecimal d) {
+        return d.stripTrailingZeros().toPlainString();
+    }
+}

@@ -1,0 +1,233 @@
+package dockline.io;
+
+import dockline.model.Cell;
+import dockline.model.Charge;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Typed reading of {@link Node} values for the loaders: every reader either returns a value or
+ * records a problem at the value's position and returns {@code null}. A {@link Node.Bad} value was
+ * reported already and yields {@code null} silently, so one mistake gives one message.
+ */
+final class Loading {
+
+    final Problems problems;
+    /** Unknown keys found per mapping, so that a misspelt key is not also reported as a missing one. */
+    private final java.util.IdentityHashMap<Node.MapNode, List<String>> unknown = new java.util.IdentityHashMap<>();
+
+    Loading(Problems problems) {
+        this.problems = problems;
+    }
+
+    /** Text for messages: at most 40 characters, control characters shown as '?'. */
+    static String shorten(String s) {
+        if (s == null) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < s.length() && sb.length() < 40; i++) {
+            char c = s.charAt(i);
+            sb.append(Character.isISOControl(c) ? '?' : c);
+        }
+        if (sb.length() < s.length()) {
+            sb.append("...");
+        }
+        return sb.toString();
+    }
+
+    /** The node as a mapping, or a problem. */
+    Node.MapNode map(Node n, String what) {
+        if (n instanceof Node.MapNode m) {
+            return m;
+        }
+        if (n != null && !(n instanceof Node.Bad)) {
+            problems.add(n.pos(), what + " must be a mapping of keys to values, not " + n.describe(),
+                    "write the keys on the lines below, indented");
+        }
+        return null;
+    }
+
+    /** Reports every key that is not one of the known ones, with the closest known key as a hint. */
+    void onlyKeys(Node.MapNode m, String where, String... known) {
+        List<String> k = Arrays.asList(known);
+        for (Node.Entry e : m.entries()) {
+            if (!k.contains(e.key())) {
+                unknown.computeIfAbsent(m, x -> new ArrayList<>()).add(e.key());
+                String near = Spelling.closest(e.key(), k);
+                problems.add(e.keyPos(), near != null
+                                ? "unknown key '" + shorten(e.key()) + "', did you mean '" + near + "'?"
+                                : "unknown key '" + shorten(e.key()) + "' in " + where,
+                        "known keys here: " + String.join(", ", known));
+            }
+        }
+    }
+
+    /** The value of a key that must be there, or a problem at the mapping. */
+    Node require(Node.MapNode m, String key, String where) {
+        Node v = m.get(key);
+        if (v == null && !misspelt(m, key)) {
+            problems.add(m.pos(), where + ": missing key '" + key + "'", null);
+        }
+        return v;
+    }
+
+    private boolean misspelt(Node.MapNode m, String key) {
+        for (String u : unknown.getOrDefault(m, List.of())) {
+            if (Spelling.closest(u, List.of(key)) != null) {
+                return true; // already reported as "unknown key ..., did you mean '<key>'?"
+            }
+        }
+        return false;
+    }
+
+    String string(Node n, String what) {
+        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL) {
+            if (s.text().isBlank()) {
+                problems.add(n.pos(), what + " must not be blank", null);
+                return null;
+            }
+            return s.text().trim();
+        }
+        wrong(n, what, "text");
+        return null;
+    }
+
+    BigDecimal decimal(Node n, String what) {
+        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
+            try {
+                return Quantities.parseDecimal(s.text());
+            } catch (IllegalArgumentException e) {
+                problems.add(n.pos(), what + ": " + e.getMessage(), null);
+                return null;
+            }
+        }
+        wrong(n, what, "a number");
+        return null;
+    }
+
+    /** An energy in Wh (a number, optionally followed by {@code Wh}), not negative. */
+    BigDecimal wh(Node n, String what) {
+        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
+            try {
+                return Quantities.parseWh(s.text());
+            } catch (IllegalArgumentException e) {
+                problems.add(n.pos(), what + ": " + e.getMessage(), "give the energy in Wh, e.g. 0.5 or 0.5 Wh");
+                return null;
+            }
+        }
+        wrong(n, what, "an energy in Wh");
+        return null;
+    }
+
+    /** A whole number in [min, max]. */
+    Integer integer(Node n, String what, long min, long max) {
+        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
+            String t = s.text().trim();
+            if (!t.matches("[+-]?\\d{1,18}")) {
+                if (t.matches("[+-]?\\d+")) {
+                    problems.add(n.pos(), what + ": " + shorten(t) + " is far too large (at most " + max + ")", null);
+                } else {
+                    problems.add(n.pos(), what + " must be a whole number, not '" + shorten(t) + "'", null);
+                }
+                return null;
+            }
+            long v = Long.parseLong(t);
+            if (v < min || v > max) {
+                problems.add(n.pos(), what + " must be " + (max == Integer.MAX_VALUE ? "at least " + min
+                        : "between " + min + " and " + max) + ", not " + v, null);
+                return null;
+            }
+            return (int) v;
+        }
+        wrong(n, what, "a whole number");
+        return null;
+    }
+
+    Boolean bool(Node n, String what) {
+        if (n instanceof Node.Scalar s && s.kind() == Node.Kind.BOOLEAN) {
+            String t = s.text().trim();
+            if (t.equals("true")) {
+                return true;
+            }
+            if (t.equals("false")) {
+                return false;
+            }
+            problems.add(n.pos(), what + " must be true or false, not '" + shorten(t) + "'", "write true or false");
+            return null;
+        }
+        wrong(n, what, "true or false");
+        return null;
+    }
+
+    /** A cell written {@code [x, y]}. Does not check that it lies on the plan. */
+    Cell cell(Node n, String what) {
+        if (n instanceof Node.SeqNode s && s.items().size() == 2) {
+            Integer x = integer(s.items().get(0), what + " x", 0, Integer.MAX_VALUE);
+            Integer y = integer(s.items().get(1), what + " y", 0, Integer.MAX_VALUE);
+            return x == null || y == null ? null : new Cell(x, y);
+        }
+        if (n == null || n instanceof Node.Bad) {
+            return null;
+        }
+        problems.add(n.pos(), what + " must be a cell [x, y], not " + n.describe(),
+                "x is the column from the left, y the row from the top, both from 0, e.g. [3, 7]");
+        return null;
+    }
+
+    /** A name with the position where it is written. */
+    record Named(String name, Pos pos) {
+    }
+
+    /** One name, or a list of names. */
+    List<String> names(Node n, String what) {
+        List<Named> l = named(n, what);
+        return l == null ? null : l.stream().map(Named::name).toList();
+    }
+
+    /** One name, or a list of names, each with its position. */
+    List<Named> named(Node n, String what) {
+        List<Named> out = new ArrayList<>();
+        if (n instanceof Node.SeqNode s) {
+            for (Node item : s.items()) {
+                String t = string(item, what + " entry");
+                if (t != null) {
+                    out.add(new Named(t, item.pos()));
+                }
+            }
+            return out;
+        }
+        if (n instanceof Node.Scalar sc && sc.kind() != Node.Kind.NULL) {
+            String t = string(n, what);
+            if (t != null) {
+                out.add(new Named(t, n.pos()));
+            }
+            return out;
+        }
+        wrong(n, what, "a name or a list of names");
+        return null;
+    }
+
+    /** A charge ({@code 20%}, {@code 15 Wh}, {@code 15}). */
+    Charge charge(Node n, String what) {
+        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
+            try {
+                return Quantities.parseCharge(s.text());
+            } catch (IllegalArgumentException e) {
+                problems.add(n.pos(), what + ": " + e.getMessage(), "write a percentage of the capacity (20%) or Wh (12 Wh)");
+                return null;
+            }
+        }
+        wrong(n, what, "a charge such as 20% or 12 Wh");
+        return null;
+    }
+
+    private void wrong(Node n, String what, String expected) {
+        if (n == null || n instanceof Node.Bad) {
+            return;
+        }
+        problems.add(n.pos(), what + " must be " + expected + ", not " + n.describe(), null);
+    }
+}

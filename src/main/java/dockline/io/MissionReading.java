@@ -1,0 +1,620 @@
+package dockline.io;
+
+import dockline.goal.GoalAutomaton;
+import dockline.model.BuildingMap;
+import dockline.model.Cell;
+import dockline.model.Charge;
+import dockline.model.EnergyScale;
+import dockline.model.EventKind;
+import dockline.model.EventRule;
+import dockline.model.Mission;
+import dockline.model.Neighbourhood;
+import dockline.model.Objective;
+import dockline.model.Rational;
+import dockline.model.Relation;
+import dockline.model.RobotProfile;
+import dockline.model.Tasks;
+import dockline.model.Terrain;
+import dockline.model.Zone;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+
+/**
+ * Checks one parsed mission document (and loads its map) and builds the {@link Mission}. Goes on
+ * after each problem so that one run reports all of them; checks that need the map are skipped
+ * when the map has problems of its own (those are reported with the map's file name).
+ */
+final class MissionReading {
+
+    static final String[] KEYS = {"name", "map", "robot", "start", "reserve", "tasks", "objective"};
+    static final String[] ROBOT_KEYS = {"capacity", "resolution", "move-energy", "wait-energy", "charge-rate", "neighbourhood"};
+    /** Largest discount factor accepted (the comparator's numbers grow with it). */
+    static final int MAX_DISCOUNT = 1_000_000;
+    private static final BigDecimal HUNDRED = BigDecimal.valueOf(100);
+
+    private final YamlReader.Document doc;
+    private final Problems problems;
+    private final Loading in;
+    private BuildingMap map;
+    private boolean mapBroken;
+
+    MissionReading(YamlReader.Document doc, Problems problems) {
+        this.doc = doc;
+        this.problems = problems;
+        this.in = new Loading(problems);
+    }
+
+    Mission read() {
+        int before = problems.count();
+        Node.MapNode root = in.map(doc.root(), "a mission file");
+        if (root == null) {
+            return null;
+        }
+        in.onlyKeys(root, "a mission file", KEYS);
+        String name = root.get("name") == null ? MapReading.stem(doc.file()) : in.string(root.get("name"), "name");
+        Node mapNode = in.require(root, "map", "the mission");
+        if (mapNode != null) {
+            loadMap(mapNode);
+        } else {
+            mapBroken = true;
+        }
+        Robot robot = null;
+        Node rn = in.require(root, "robot", "the mission");
+        if (rn != null) {
+            robot = robot(root.entry("robot"));
+        }
+        Cell start = null;
+        Charge startCharge = Charge.percent(HUNDRED);
+        Node sn = in.require(root, "start", "the mission");
+        Node startChargeNode = null;
+        Node startCellNode = null;
+        Node.MapNode sm = sn == null ? null : in.map(sn, "start");
+        if (sm != null) {
+            in.onlyKeys(sm, "start", "cell", "charge");
+            startCellNode = in.require(sm, "cell", "start");
+            if (startCellNode != null) {
+                start = in.cell(startCellNode, "start cell");
+            }
+            startChargeNode = sm.get("charge");
+            if (startChargeNode != null) {
+                startCharge = in.charge(startChargeNode, "start charge");
+            }
+        }
+        Node resNode = in.require(root, "reserve", "the mission");
+        Charge reserve = resNode == null ? null : in.charge(resNode, "reserve");
+
+        Tasks tasks = Tasks.justDock();
+        Node tn = root.get("tasks");
+        TaskNodes taskNodes = null;
+        if (tn != null) {
+            taskNodes = new TaskNodes();
+            tasks = tasks(in.map(tn, "tasks"), taskNodes, root.entry("tasks").keyPos());
+        }
+        Objective objective = new Objective.Reserve();
+        if (root.get("objective") != null) {
+            objective = objective(in.map(root.get("objective"), "objective"));
+        }
+
+        // checks across sections
+        if (robot != null && robot.profile != null) {
+            charges(robot, startCharge, startChargeNode, sn, reserve, resNode);
+        }
+        if (map != null && start != null && startCellNode != null) {
+            startCell(start, startCellNode.pos(), tasks);
+        }
+        if (map != null && robot != null) {
+            surfaces(robot);
+            drags(robot);
+        }
+        if (map != null && tasks != null && taskNodes != null) {
+            taskZones(tasks, taskNodes);
+        }
+        if (map != null && tasks != null && tasks.finishOnDock() && map.docks().isEmpty()) {
+            Pos at = taskNodes != null && taskNodes.finishOnDock != null ? taskNodes.finishOnDock : mapNode.pos();
+            problems.add(at, "the mission must finish on a dock, but the map has no dock",
+                    "mark a dock in the map's legend, e.g. C: {surface: tile, dock: true}");
+        }
+        if (problems.count() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
+                || start == null || startCharge == null || reserve == null || tasks == null || objective == null) {
+            return null;
+        }
+        return new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+    }
+
+    // ---------------------------------------------------------------- map
+
+    private void loadMap(Node mapNode) {
+        String rel = in.string(mapNode, "map (path of the map file)");
+        if (rel == null) {
+            mapBroken = true;
+            return;
+        }
+        Path mapPath;
+        try {
+            mapPath = doc.file().resolveSibling(rel).normalize();
+        } catch (java.nio.file.InvalidPathException e) {
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path", null);
+            mapBroken = true;
+            return;
+        }
+        if (!Files.isRegularFile(mapPath)) {
+            problems.add(mapNode.pos(), "map file '" + Loading.shorten(rel) + "' not found (looked for " + mapPath + ")",
+                    nearbyFiles(mapPath));
+            mapBroken = true;
+            return;
+        }
+        Problems mapProblems = new Problems(mapPath);
+        map = MapLoader.read(mapPath, mapProblems);
+        if (mapProblems.any() || map == null) {
+            try {
+                mapProblems.throwIfAny();
+            } catch (InputException e) {
+                problems.addAll(e.problems());
+            }
+            map = null;
+            mapBroken = true;
+        }
+    }
+
+    private static String nearbyFiles(Path wanted) {
+        Path dir = wanted.getParent() == null ? Path.of(".") : wanted.getParent();
+        String base = wanted.getFileName() == null ? "" : wanted.getFileName().toString();
+        List<String> names = new ArrayList<>();
+        if (Files.isDirectory(dir)) {
+            try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, "*.{yaml,yml}")) {
+                int n = 0;
+                for (Path p : ds) {
+                    names.add(p.getFileName().toString());
+                    if (++n > 500) {
+                        break;
+                    }
+                }
+            } catch (IOException | RuntimeException e) {
+                return "the path is relative to the mission file's folder";
+            }
+        }
+        String near = Spelling.closest(base, names);
+        return near != null ? "did you mean '" + near + "'? the path is relative to the mission file's folder"
+                : "the path is relative to the mission file's folder";
+    }
+
+    // ---------------------------------------------------------------- robot
+
+    /** The robot profile as read, with the nodes later checks point at. */
+    private static final class Robot {
+        RobotProfile profile;
+        EnergyScale scale;
+        Node capacity;
+        Node resolution;
+        Pos moveKey;
+        Map<String, Node> moveNodes = new LinkedHashMap<>();
+    }
+
+    private Robot robot(Node.Entry entry) {
+        Node.MapNode m = in.map(entry.value(), "robot");
+        if (m == null) {
+            return null;
+        }
+        in.onlyKeys(m, "robot", ROBOT_KEYS);
+        Robot r = new Robot();
+        r.capacity = in.require(m, "capacity", "robot");
+        r.resolution = in.require(m, "resolution", "robot");
+        Node moveNode = in.require(m, "move-energy", "robot");
+        Node waitNode = in.require(m, "wait-energy", "robot");
+        BigDecimal capacity = r.capacity == null ? null : in.wh(r.capacity, "capacity");
+        if (capacity != null && capacity.signum() == 0) {
+            problems.add(r.capacity.pos(), "capacity must be more than 0 Wh", "the usable battery capacity, e.g. 120");
+            capacity = null;
+        }
+        BigDecimal resolution = r.resolution == null ? null : in.wh(r.resolution, "resolution");
+        if (resolution != null && resolution.signum() == 0) {
+            problems.add(r.resolution.pos(), "resolution must be more than 0 Wh", "the size of one energy unit, e.g. 0.5");
+            resolution = null;
+        }
+        EnergyScale scale = resolution == null ? null : new EnergyScale(resolution);
+        r.scale = scale;
+        Map<String, BigDecimal> move = new LinkedHashMap<>();
+        boolean ok = true;
+        if (moveNode != null) {
+            r.moveKey = m.entry("move-energy").keyPos();
+            Node.MapNode mm = in.map(moveNode, "move-energy");
+            if (mm == null) {
+                ok = false;
+            } else {
+                for (Node.Entry e : mm.entries()) {
+                    BigDecimal wh = in.wh(e.value(), "move-energy for '" + Loading.shorten(e.key()) + "'");
+                    if (wh == null) {
+                        ok = false;
+                        continue;
+                    }
+                    move.put(e.key(), wh);
+                    r.moveNodes.put(e.key(), e.value());
+                }
+            }
+        }
+        BigDecimal wait = waitNode == null ? null : in.wh(waitNode, "wait-energy");
+        BigDecimal charge = BigDecimal.ZERO;
+        Node chargeNode = m.get("charge-rate");
+        if (chargeNode != null) {
+            charge = in.wh(chargeNode, "charge-rate");
+        }
+        Neighbourhood nb = Neighbourhood.FOUR;
+        Node nn = m.get("neighbourhood");
+        if (nn != null) {
+            Integer v = in.integer(nn, "neighbourhood", 0, Integer.MAX_VALUE);
+            if (v != null && v != 4 && v != 8) {
+                problems.add(nn.pos(), "neighbourhood must be 4 or 8, not " + v,
+                        "4: up, down, left, right; 8: also the diagonals");
+                v = null;
+            }
+            nb = v == null ? null : v == 8 ? Neighbourhood.EIGHT : Neighbourhood.FOUR;
+        }
+        if (scale != null) {
+            // every figure must be a whole number of units that fits an int at this resolution
+            if (capacity != null) {
+                BigDecimal cap = capacity;
+                Integer units = units(() -> scale.capacity(cap), r.capacity.pos(), "capacity", cap, scale);
+                if (units != null && units == 0) {
+                    problems.add(r.capacity.pos(), "capacity " + capacity.toPlainString() + " Wh is less than one energy unit ("
+                            + scale.unitWh().toPlainString() + " Wh)", "use a finer resolution");
+                    capacity = null;
+                } else if (units == null) {
+                    capacity = null;
+                }
+            }
+            for (Map.Entry<String, BigDecimal> e : move.entrySet()) {
+                Node at = r.moveNodes.get(e.getKey());
+                String what = "move-energy for '" + Loading.shorten(e.getKey()) + "'";
+                ok &= units(() -> scale.consumption(e.getValue()), at.pos(), what, e.getValue(), scale) != null;
+                if (nb == Neighbourhood.EIGHT) {
+                    ok &= units(() -> scale.diagonalConsumption(e.getValue()), at.pos(), what + " (diagonal)",
+                            e.getValue(), scale) != null;
+                }
+            }
+            if (wait != null && units(() -> scale.consumption(wait), waitNode.pos(), "wait-energy", wait, scale) == null) {
+                ok = false;
+            }
+            BigDecimal ch = charge;
+            if (ch != null && units(() -> scale.gain(ch), chargeNode == null ? m.pos() : chargeNode.pos(), "charge-rate",
+                    ch, scale) == null) {
+                ok = false;
+            }
+        }
+        if (ok && capacity != null && resolution != null && wait != null && charge != null && nb != null && moveNode != null) {
+            r.profile = new RobotProfile(capacity, resolution, move, wait, charge, nb);
+        }
+        return r;
+    }
+
+    private Integer units(java.util.function.IntSupplier f, Pos pos, String what, BigDecimal wh, EnergyScale scale) {
+        try {
+            return f.getAsInt();
+        } catch (ArithmeticException e) {
+            problems.add(pos, what + ": " + wh.toPlainString() + " Wh does not fit in the solver's whole-number range at a resolution of "
+                    + scale.unitWh().toPlainString() + " Wh (more than " + Integer.MAX_VALUE + " units)",
+                    "use a coarser resolution, e.g. 0.5 Wh");
+            return null;
+        }
+    }
+
+    /** Starting charge and reserve floor against the capacity and each other. */
+    private void charges(Robot robot, Charge startCharge, Node startChargeNode, Node startNode, Charge reserve, Node resNode) {
+        BigDecimal cap = robot.profile.capacityWh();
+        EnergyScale scale = robot.scale;
+        Integer startUnits = null;
+        if (startCharge != null) {
+            Pos at = startChargeNode != null ? startChargeNode.pos() : startNode.pos();
+            if (!startCharge.percent() && startCharge.amount().compareTo(cap) > 0) {
+                problems.add(at, "start charge " + startCharge + " is above the battery capacity of " + plain(cap) + " Wh",
+                        "give at most " + plain(cap) + " Wh, or a percentage");
+            } else {
+                startUnits = units(() -> scale.start(startCharge.toWh(cap)), at, "start charge", startCharge.toWh(cap), scale);
+            }
+        }
+        Integer resUnits = null;
+        if (reserve != null) {
+            if (!reserve.percent() && reserve.amount().compareTo(cap) > 0) {
+                problems.add(resNode.pos(), "reserve " + reserve + " is above the battery capacity of " + plain(cap) + " Wh",
+                        "give at most " + plain(cap) + " Wh, or a percentage, e.g. 20%");
+            } else {
+                resUnits = units(() -> scale.reserve(reserve.toWh(cap)), resNode.pos(), "reserve", reserve.toWh(cap), scale);
+            }
+        }
+        if (startUnits != null && resUnits != null) {
+            int capUnits = scale.capacity(cap);
+            int s = Math.min(capUnits, startUnits);
+            if (resUnits > s) {
+                boolean byRounding = reserve.toWh(cap).compareTo(startCharge.toWh(cap)) <= 0;
+                problems.add(resNode.pos(), "the reserve floor (" + describe(reserve, cap, resUnits, scale)
+                                + ") is above the starting charge (" + describe(startCharge, cap, s, scale) + ")"
+                                + (byRounding ? " after rounding to whole energy units" : ""),
+                        byRounding ? "rounding is against the robot (reserve up, charge down); use a finer resolution"
+                                : "lower the reserve or raise the start charge");
+            }
+        }
+    }
+
+    private static String describe(Charge c, BigDecimal cap, int units, EnergyScale scale) {
+        String wh = plain(c.toWh(cap)) + " Wh";
+        return (c.percent() ? c + " = " + wh : wh) + ", " + units + " units of " + plain(scale.unitWh()) + " Wh";
+    }
+
+    private static String plain(BigDecimal d) {
+        return d.stripTrailingZeros().toPlainString();
+    }
+
+    /** Every surface the plan uses needs a move energy. */
+    private void surfaces(Robot robot) {
+        if (robot.moveKey == null) {
+            return; // move-energy is missing or broken; already reported
+        }
+        Set<String> used = new TreeSet<>();
+        Set<String> legendSurfaces = new HashSet<>();
+        for (Terrain t : map.legend().values()) {
+            if (t.free()) {
+                legendSurfaces.add(t.surface());
+            }
+        }
+        for (int y = 0; y < map.height(); y++) {
+            for (int x = 0; x < map.width(); x++) {
+                Terrain t = map.terrainAt(new Cell(x, y));
+                if (t.free()) {
+                    used.add(t.surface());
+                }
+            }
+        }
+        Set<String> given = robot.moveNodes.keySet();
+        List<String> strays = new ArrayList<>();
+        for (String g : given) {
+            if (!legendSurfaces.contains(g)) {
+                strays.add(g);
+            }
+        }
+        for (String s : used) {
+            if (!given.contains(s)) {
+                String near = Spelling.closest(s, strays);
+                problems.add(robot.moveKey, "no move energy for surface '" + Loading.shorten(s) + "', which the plan uses",
+                        near != null ? "'" + near + "' at " + robot.moveNodes.get(near).pos() + " looks like a misspelling of it"
+                                : "add '" + Loading.shorten(s) + ": <Wh per cell>' under move-energy");
+            }
+        }
+    }
+
+    /** A drag's extra energy must fit in units too (the arena adds it to a move). */
+    private void drags(Robot robot) {
+        if (robot.scale == null) {
+            return;
+        }
+        Set<BigDecimal> seen = new HashSet<>();
+        for (EventRule rule : map.disturbances().rules()) {
+            if (rule.kind() == EventKind.DRAG && seen.add(rule.extraWh())) {
+                try {
+                    robot.scale.consumption(rule.extraWh());
+                } catch (ArithmeticException e) {
+                    problems.add(robot.resolution.pos(), "the map's drag extra of " + plain(rule.extraWh())
+                            + " Wh does not fit in the solver's whole-number range at this resolution", "use a coarser resolution");
+                }
+            }
+        }
+    }
+
+    private void startCell(Cell start, Pos pos, Tasks tasks) {
+        if (!map.inside(start)) {
+            problems.add(pos, "start cell " + start + " is outside the map (" + map.width() + " x " + map.height()
+                    + " cells: x from 0 to " + (map.width() - 1) + ", y from 0 to " + (map.height() - 1) + ")",
+                    "x is the column from the left, y the row from the top, both from 0");
+            return;
+        }
+        if (!map.isFree(start)) {
+            problems.add(pos, "start cell " + start + " is a wall", "pick a free cell, e.g. "
+                    + (map.docks().isEmpty() ? "one next to it" : "the dock at " + map.docks().get(0)));
+            return;
+        }
+        if (tasks != null) {
+            for (String a : tasks.avoid()) {
+                if (map.zone(a).map(z -> z.contains(start)).orElse(false)) {
+                    problems.add(pos, "start cell " + start + " is in the avoided zone '" + Loading.shorten(a) + "'",
+                            "start outside every avoided zone");
+                }
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- tasks
+
+    private static final class TaskNodes {
+        List<Loading.Named> visit = List.of();
+        List<Loading.Named> avoid = List.of();
+        Pos visitPos;
+        Pos finishOnDock;
+        Pos tasksKey;
+    }
+
+    private Tasks tasks(Node.MapNode m, TaskNodes nodes, Pos keyPos) {
+        if (m == null) {
+            return null;
+        }
+        nodes.tasksKey = keyPos;
+        in.onlyKeys(m, "tasks", "visit", "order", "avoid", "finish-on-dock");
+        boolean ok = true;
+        List<String> visit = List.of();
+        if (m.get("visit") != null) {
+            nodes.visitPos = m.get("visit").pos();
+            List<Loading.Named> v = in.named(m.get("visit"), "visit");
+            ok &= v != null;
+            if (v != null) {
+                nodes.visit = v;
+                visit = v.stream().map(Loading.Named::name).toList();
+            }
+        }
+        boolean ordered = true;
+        Node on = m.get("order");
+        if (on != null) {
+            String o = in.string(on, "order");
+            if ("given".equals(o)) {
+                ordered = true;
+            } else if ("any".equals(o)) {
+                ordered = false;
+            } else if (o != null) {
+                String near = Spelling.closest(o, List.of("given", "any"));
+                problems.add(on.pos(), "order must be 'given' or 'any', not '" + Loading.shorten(o) + "'"
+                        + (near != null ? " (did you mean '" + near + "'?)" : ""),
+                        "given: visit the zones in the order listed; any: in any order");
+                ok = false;
+            } else {
+                ok = false;
+            }
+        }
+        List<String> avoid = List.of();
+        if (m.get("avoid") != null) {
+            List<Loading.Named> a = in.named(m.get("avoid"), "avoid");
+            ok &= a != null;
+            if (a != null) {
+                nodes.avoid = a;
+                avoid = a.stream().map(Loading.Named::name).toList();
+            }
+        }
+        boolean finish = true;
+        Node fn = m.get("finish-on-dock");
+        if (fn != null) {
+            nodes.finishOnDock = fn.pos();
+            Boolean b = in.bool(fn, "finish-on-dock");
+            ok &= b != null;
+            finish = b == null || b;
+        }
+        if (visit.size() > GoalAutomaton.MAX_TASKS) {
+            problems.add(nodes.visitPos, "the mission lists " + visit.size() + " zones to visit; at most "
+                    + GoalAutomaton.MAX_TASKS + " are allowed", "split it into several missions");
+            ok = false;
+        }
+        if (!ordered) {
+            Set<String> seen = new LinkedHashSet<>();
+            for (Loading.Named n : nodes.visit) {
+                if (!seen.add(n.name())) {
+                    problems.add(n.pos(), "zone '" + Loading.shorten(n.name()) + "' is listed twice in visit",
+                            "with order: any, each zone needs visiting once; remove the second one");
+                    ok = false;
+                }
+            }
+        }
+        for (Loading.Named a : nodes.avoid) {
+            if (visit.contains(a.name())) {
+                problems.add(a.pos(), "zone '" + Loading.shorten(a.name()) + "' is both to visit and to avoid", null);
+                ok = false;
+            }
+        }
+        if (ok && visit.isEmpty() && !finish) {
+            problems.add(m.pos(), "the mission has nothing to do: no zone to visit and finish-on-dock is false",
+                    "list zones under visit, or set finish-on-dock: true");
+            ok = false;
+        }
+        return ok ? new Tasks(visit, ordered, avoid, finish) : null;
+    }
+
+    private void taskZones(Tasks tasks, TaskNodes nodes) {
+        List<String> known = map.zones().stream().map(Zone::name).toList();
+        List<Loading.Named> all = new ArrayList<>(nodes.visit);
+        all.addAll(nodes.avoid);
+        for (Loading.Named n : all) {
+            if (!known.contains(n.name())) {
+                String near = Spelling.closest(n.name(), known);
+                problems.add(n.pos(), "no zone named '" + Loading.shorten(n.name()) + "' in the map"
+                                + (near != null ? ", did you mean '" + near + "'?" : ""),
+                        known.isEmpty() ? "the map defines no zones" : "zones of the map: " + String.join(", ", known));
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- objective
+
+    private boolean startsWithFoldIndicator(Node n) {
+        if (!(n instanceof Node.Scalar s) || s.kind() != Node.Kind.STRING || s.text().trim().equals(">")) {
+            return false;
+        }
+        String line = doc.source().line(n.pos().line());
+        int idx = SourceText.charIndexOfColumn(line, n.pos().column());
+        return idx >= 0 && line.charAt(idx) == '>';
+    }
+
+    private Objective objective(Node.MapNode m) {
+        if (m == null) {
+            return null;
+        }
+        Node kn = in.require(m, "kind", "objective");
+        String kind = kn == null ? null : in.string(kn, "objective kind");
+        if (kind == null) {
+            return null;
+        }
+        if (kind.equals("reserve")) {
+            in.onlyKeys(m, "objective", "kind");
+            for (String k : List.of("discount", "threshold", "relation")) {
+                if (m.get(k) != null) {
+                    problems.add(m.entry(k).keyPos(), "'" + k + "' applies only to kind: discounted", "remove it");
+                }
+            }
+            return new Objective.Reserve();
+        }
+        if (!kind.equals("discounted")) {
+            String near = Spelling.closest(kind, List.of("reserve", "discounted"));
+            problems.add(kn.pos(), "unknown objective kind '" + Loading.shorten(kind) + "'"
+                    + (near != null ? ", did you mean '" + near + "'?" : ""), "kinds: reserve, discounted");
+            return null;
+        }
+        in.onlyKeys(m, "objective", "kind", "discount", "threshold", "relation");
+        Node dn = in.require(m, "discount", "a discounted objective");
+        Node tn = in.require(m, "threshold", "a discounted objective");
+        Integer d = null;
+        if (dn != null) {
+            d = in.integer(dn, "discount (a whole number, at least 2)", 2, MAX_DISCOUNT);
+        }
+        Rational threshold = null;
+        if (tn instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
+            String t = s.text().trim();
+            try {
+                threshold = t.matches("[+-]?\\d+\\s*/\\s*[+-]?\\d+|[+-]?\\d+(\\.\\d+)?") ? Rational.parse(t) : null;
+            } catch (NumberFormatException | ArithmeticException e) {
+                threshold = null;
+            }
+            if (threshold == null) {
+                problems.add(tn.pos(), "threshold '" + Loading.shorten(t) + "' is not a rational number",
+                        "write p/q (e.g. \"3/4\"), a whole number (-2) or a decimal (0.75), small enough for 64-bit numbers");
+            }
+        } else if (tn != null && !(tn instanceof Node.Bad)) {
+            problems.add(tn.pos(), "threshold must be a rational number, not " + tn.describe(), "e.g. \"3/4\"");
+        }
+        Relation rel = Relation.AT_LEAST;
+        Node rn = m.get("relation");
+        if (rn != null && startsWithFoldIndicator(rn)) {
+            problems.add(rn.pos(), "relation: a bare '>' starts a folded text block in YAML",
+                    "write relation: \">\" (in quotes) or relation: above");
+            return null;
+        }
+        if (rn != null) {
+            String r = in.string(rn, "relation");
+            rel = r == null ? null : switch (r) {
+                case ">=", "at-least" -> Relation.AT_LEAST;
+                case ">", "above" -> Relation.ABOVE;
+                default -> null;
+            };
+            if (r != null && rel == null) {
+                problems.add(rn.pos(), "relation must be at-least (>=) or above (>), not '" + Loading.shorten(r) + "'",
+                        "write the symbols in quotes: \">=\" or \">\"");
+            }
+        }
+        if (d == null || threshold == null || rel == null) {
+            return null;
+        }
+        return new Objective.Discounted(d, threshold, rel);
+    }
+}

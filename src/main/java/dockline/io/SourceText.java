@@ -1,0 +1,185 @@
+package dockline.io;
+
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The text of an input file, decoded strictly as UTF-8, with a line table that counts lines the
+ * way the YAML scanner does (CR LF, CR, LF, NEL, LS and PS each end a line) so that positions from
+ * the parser and positions computed here agree. Columns are counted in code points.
+ *
+ * <p>Bytes that are not UTF-8 and tab characters are reported, then replaced (by U+FFFD and a
+ * space) so that the rest of the file can still be checked; later problems at those very positions
+ * are suppressed. O(n) in the file size.
+ */
+final class SourceText {
+
+    /** Most encoding (or tab) problems reported one by one; the rest are counted in one line. */
+    private static final int SHOWN = 10;
+
+    private final String text;
+    private final int[] lineStart;
+    private final int[] lineEnd;
+    private final boolean[] lineHasTab;
+
+    private SourceText(String text) {
+        this.text = text;
+        List<int[]> lines = new ArrayList<>();
+        int start = 0;
+        int n = text.length();
+        int i = 0;
+        while (i < n) {
+            char c = text.charAt(i);
+            if (c == '\r' && i + 1 < n && text.charAt(i + 1) == '\n') {
+                lines.add(new int[] {start, i});
+                i += 2;
+                start = i;
+            } else if (c == '\n' || c == '\r' || c == '\u0085' || c == '\u2028' || c == '\u2029') {
+                lines.add(new int[] {start, i});
+                i++;
+                start = i;
+            } else {
+                i++;
+            }
+        }
+        lines.add(new int[] {start, n});
+        lineStart = new int[lines.size()];
+        lineEnd = new int[lines.size()];
+        lineHasTab = new boolean[lines.size()];
+        for (int k = 0; k < lines.size(); k++) {
+            lineStart[k] = lines.get(k)[0];
+            lineEnd[k] = lines.get(k)[1];
+        }
+    }
+
+    /**
+     * Decodes the bytes (a leading byte order mark is dropped), reporting every byte sequence that
+     * is not UTF-8 and every tab.
+     */
+    static SourceText decode(byte[] bytes, Problems problems) {
+        int skip = bytes.length >= 3 && (bytes[0] & 0xff) == 0xEF && (bytes[1] & 0xff) == 0xBB
+                && (bytes[2] & 0xff) == 0xBF ? 3 : 0;
+        CharsetDecoder dec = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes, skip, bytes.length - skip);
+        // UTF-8 never gives more UTF-16 chars than bytes, and each bad sequence is at least one byte.
+        CharBuffer out = CharBuffer.allocate(bytes.length + 2);
+        List<int[]> bad = new ArrayList<>(); // {char index, byte offset, byte value}
+        while (true) {
+            CoderResult r = dec.decode(in, out, true);
+            if (r.isError()) {
+                bad.add(new int[] {out.position(), in.position(), bytes[in.position()] & 0xff});
+                out.put('\uFFFD');
+                in.position(in.position() + r.length());
+                continue;
+            }
+            if (r.isUnderflow()) {
+                dec.flush(out);
+                break;
+            }
+            throw new IllegalStateException("decoder buffer overflow");
+        }
+        out.flip();
+        char[] chars = new char[out.remaining()];
+        out.get(chars);
+        List<Integer> tabs = new ArrayList<>();
+        for (int i = 0; i < chars.length; i++) {
+            if (chars[i] == '\t') {
+                tabs.add(i);
+                chars[i] = ' ';
+            }
+        }
+        SourceText src = new SourceText(new String(chars));
+        for (int k = 0; k < bad.size(); k++) {
+            int[] b = bad.get(k);
+            Pos p = src.posOf(b[0]);
+            if (k < SHOWN) {
+                problems.addExplaining(p, String.format("byte 0x%02X (at byte offset %d) is not valid UTF-8", b[2], b[1]),
+                        "save the file as UTF-8 text");
+            } else {
+                problems.explain(p);
+            }
+        }
+        if (bad.size() > SHOWN) {
+            problems.add(src.posOf(bad.get(SHOWN)[0]), (bad.size() - SHOWN) + " more bytes that are not valid UTF-8",
+                    "save the file as UTF-8 text");
+        }
+        for (int k = 0; k < tabs.size(); k++) {
+            Pos p = src.posOf(tabs.get(k));
+            src.lineHasTab[p.line() - 1] = true;
+            if (k < SHOWN) {
+                problems.addExplaining(p, "tab character", "use spaces: tabs are not allowed in dockline files");
+            } else {
+                problems.explain(p);
+            }
+        }
+        if (tabs.size() > SHOWN) {
+            problems.add(src.posOf(tabs.get(SHOWN)), (tabs.size() - SHOWN) + " more tab characters",
+                    "use spaces: tabs are not allowed in dockline files");
+        }
+        return src;
+    }
+
+    /** For tests and for text that is already a string: no decoding, tabs still reported. */
+    static SourceText of(String s, Problems problems) {
+        return decode(s.getBytes(StandardCharsets.UTF_8), problems);
+    }
+
+    String text() {
+        return text;
+    }
+
+    int lineCount() {
+        return lineStart.length;
+    }
+
+    /** The text of a 1-based line, without its line break; empty past the end. */
+    String line(int line) {
+        if (line < 1 || line > lineStart.length) {
+            return "";
+        }
+        return text.substring(lineStart[line - 1], lineEnd[line - 1]);
+    }
+
+    boolean lineHasTab(int line) {
+        return line >= 1 && line <= lineHasTab.length && lineHasTab[line - 1];
+    }
+
+    /** Position of a char index in {@link #text()}. O(log lines + line length). */
+    Pos posOf(int index) {
+        int lo = 0;
+        int hi = lineStart.length - 1;
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (lineStart[mid] <= index) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
+        }
+        int col = text.codePointCount(lineStart[lo], Math.min(Math.max(index, lineStart[lo]), text.length())) + 1;
+        return new Pos(lo + 1, col);
+    }
+
+    /**
+     * The char index within {@link #line(int)} of a 1-based code-point column, or -1 if the line
+     * is shorter.
+     */
+    static int charIndexOfColumn(String line, int column) {
+        int idx = 0;
+        for (int c = 1; c < column; c++) {
+            if (idx >= line.length()) {
+                return -1;
+            }
+            idx += Character.charCount(line.codePointAt(idx));
+        }
+        return idx < line.length() ? idx : -1;
+    }
+}

@@ -1,0 +1,284 @@
+package dockline.io;
+
+import com.fasterxml.jackson.core.JacksonException;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.StringReader;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.error.Mark;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
+
+/**
+ * Reads one YAML document into a {@link Node} tree that keeps every value's position, with the
+ * Jackson streaming parser (never a data-binding step, so numbers stay text and are never
+ * doubles).
+ *
+ * <p>Defences against hostile or broken files, each reported as a problem, never a crash or a hang:
+ * files above {@link #MAX_BYTES}; bytes that are not UTF-8; tabs; nesting deeper than
+ * {@link #MAX_DEPTH}; more than {@link #MAX_NODES} values; aliases (so an alias "bomb" cannot
+ * expand); more than one document. Time and memory are linear in the file size.
+ */
+final class YamlReader {
+
+    /** Largest file read: a 2048 x 2048 plan with its indentation fits. */
+    static final int MAX_BYTES = 8 * 1024 * 1024;
+    /** Deepest nesting of mappings and lists; our formats need 4. */
+    static final int MAX_DEPTH = 32;
+    /** Most values (scalars, lists, mappings) in one file. */
+    static final int MAX_NODES = 500_000;
+
+    /** A parsed file: its decoded text and its root value ({@code null} when it could not be parsed). */
+    record Document(Path file, SourceText source, Node root) {
+    }
+
+    private final Problems problems;
+    private final SourceText source;
+    private YAMLParser parser;
+    private int nodes;
+
+    private YamlReader(Problems problems, SourceText source) {
+        this.problems = problems;
+        this.source = source;
+    }
+
+    /** Reads the file; problems go to {@code problems}; returns {@code null} when nothing could be read. */
+    static Document read(Path file, Problems problems) {
+        byte[] bytes;
+        try {
+            if (Files.isDirectory(file)) {
+                problems.add(Pos.START, "this is a directory, not a file", null);
+                return null;
+            }
+            try (InputStream in = Files.newInputStream(file)) {
+                bytes = in.readNBytes(MAX_BYTES + 1);
+            }
+        } catch (NoSuchFileException e) {
+            problems.add(Pos.START, "cannot read the file: it does not exist", null);
+            return null;
+        } catch (AccessDeniedException e) {
+            problems.add(Pos.START, "cannot read the file: permission denied", null);
+            return null;
+        } catch (IOException | SecurityException e) {
+            problems.add(Pos.START, "cannot read the file: " + e.getMessage(), null);
+            return null;
+        }
+        return parse(file, bytes, problems);
+    }
+
+    /** Parses file content given as bytes (the file name is used for messages only). */
+    static Document parse(Path file, byte[] bytes, Problems problems) {
+        if (bytes.length > MAX_BYTES) {
+            problems.add(Pos.START, "the file is too large (more than " + (MAX_BYTES / (1024 * 1024)) + " MiB)",
+                    "a map or mission file is a few kilobytes; is this the right file?");
+            return null;
+        }
+        SourceText source = SourceText.decode(bytes, problems);
+        Node root = new YamlReader(problems, source).parseRoot();
+        return new Document(file, source, root);
+    }
+
+    private Node parseRoot() {
+        LoaderOptions options = new LoaderOptions();
+        options.setCodePointLimit(MAX_BYTES + 1);
+        options.setNestingDepthLimit(MAX_DEPTH + 2);
+        options.setMaxAliasesForCollections(10);
+        options.setAllowRecursiveKeys(false);
+        YAMLFactory factory = YAMLFactory.builder()
+                .loaderOptions(options)
+                .streamReadConstraints(StreamReadConstraints.builder()
+                        .maxNestingDepth(MAX_DEPTH + 2)
+                        .maxNumberLength(1000)
+                        .maxStringLength(MAX_BYTES + 1)
+                        .build())
+                .build();
+        Pos last = Pos.START;
+        try (YAMLParser p = (YAMLParser) factory.createParser(new StringReader(source.text()))) {
+            parser = p;
+            JsonToken t = p.nextToken();
+            if (t == null) {
+                problems.add(Pos.START, "the file is empty", "see maps/README.md or missions/README.md for what goes in it");
+                return null;
+            }
+            Node root = value(t, 0);
+            last = root.pos();
+            JsonToken more = p.nextToken();
+            if (more != null) {
+                problems.add(here(), "a second YAML document in the same file",
+                        "put one map or one mission per file; remove the '---' line");
+                return null;
+            }
+            return root;
+        } catch (TooMuch e) {
+            problems.add(e.pos, e.getMessage(), e.hint);
+            return null;
+        } catch (JacksonException e) {
+            syntax(e, last);
+            return null;
+        } catch (IOException | RuntimeException e) {
+            // whatever the YAML library throws, the user gets a position and a message, not a trace
+            problems.add(safeHere(last), "cannot read the YAML: " + firstLine(String.valueOf(e.getMessage())), null);
+            return null;
+        }
+    }
+
+    private Node value(JsonToken t, int depth) throws IOException {
+        Pos pos = here();
+        if (++nodes > MAX_NODES) {
+            throw new TooMuch(pos, "too many values in one file (more than " + MAX_NODES + ")",
+                    "a map or mission has a few hundred values; is this the right file?");
+        }
+        if (parser.isCurrentAlias()) {
+            problems.add(pos, "aliases ('*" + shortText() + "') are not supported",
+                    "write the value out in full; dockline files do not use anchors and aliases");
+            return new Node.Bad(pos);
+        }
+        switch (t) {
+            case START_OBJECT: {
+                checkDepth(depth, pos);
+                List<Node.Entry> entries = new ArrayList<>();
+                while (true) {
+                    JsonToken k = parser.nextToken();
+                    if (k == JsonToken.END_OBJECT || k == null) {
+                        break;
+                    }
+                    String key = parser.currentName();
+                    Pos keyPos = here();
+                    Node v = value(parser.nextToken(), depth + 1);
+                    Node.Entry first = null;
+                    for (Node.Entry e : entries) {
+                        if (e.key().equals(key)) {
+                            first = e;
+                            break;
+                        }
+                    }
+                    if (first != null) {
+                        problems.add(keyPos, "key '" + Loading.shorten(key) + "' appears twice (first at line "
+                                + first.keyPos().line() + ")", "keep only one");
+                    } else {
+                        entries.add(new Node.Entry(key == null ? "" : key, keyPos, v));
+                    }
+                }
+                return new Node.MapNode(entries, pos);
+            }
+            case START_ARRAY: {
+                checkDepth(depth, pos);
+                List<Node> items = new ArrayList<>();
+                while (true) {
+                    JsonToken k = parser.nextToken();
+                    if (k == JsonToken.END_ARRAY || k == null) {
+                        break;
+                    }
+                    items.add(value(k, depth + 1));
+                }
+                return new Node.SeqNode(items, pos);
+            }
+            case VALUE_STRING:
+                return new Node.Scalar(parser.getText(), Node.Kind.STRING, pos);
+            case VALUE_NUMBER_INT:
+                return new Node.Scalar(parser.getText(), Node.Kind.INTEGER, pos);
+            case VALUE_NUMBER_FLOAT:
+                return new Node.Scalar(parser.getText(), Node.Kind.DECIMAL, pos);
+            case VALUE_TRUE:
+            case VALUE_FALSE:
+                return new Node.Scalar(parser.getText(), Node.Kind.BOOLEAN, pos);
+            case VALUE_NULL:
+                return new Node.Scalar(parser.getText(), Node.Kind.NULL, pos);
+            default:
+                problems.add(pos, "unsupported YAML value (a tag such as '!!binary'?)", "write plain text or numbers");
+                return new Node.Bad(pos);
+        }
+    }
+
+    private void checkDepth(int depth, Pos pos) {
+        if (depth >= MAX_DEPTH) {
+            throw new TooMuch(pos, "values nested too deeply (more than " + MAX_DEPTH + " levels)",
+                    "dockline files nest a few levels at most");
+        }
+    }
+
+    private String shortText() throws IOException {
+        return Loading.shorten(String.valueOf(parser.getText()));
+    }
+
+    private Pos here() {
+        return pos(parser.currentTokenLocation());
+    }
+
+    private Pos safeHere(Pos fallback) {
+        try {
+            return here();
+        } catch (RuntimeException e) {
+            return fallback;
+        }
+    }
+
+    private static Pos pos(JsonLocation l) {
+        if (l == null) {
+            return Pos.START;
+        }
+        return new Pos(l.getLineNr(), l.getColumnNr());
+    }
+
+    /** Turns a parser error into a problem at the place the scanner noticed it. */
+    private void syntax(JacksonException e, Pos fallback) {
+        Pos at;
+        String message;
+        String context = null;
+        Throwable cause = e.getCause();
+        if (cause instanceof MarkedYAMLException m && m.getProblemMark() != null) {
+            Mark pm = m.getProblemMark();
+            at = new Pos(pm.getLine() + 1, pm.getColumn() + 1);
+            message = firstLine(String.valueOf(m.getProblem()));
+            if (m.getContext() != null && m.getContextMark() != null) {
+                Mark cm = m.getContextMark();
+                context = m.getContext() + " that starts at " + (cm.getLine() + 1) + ":" + (cm.getColumn() + 1);
+            }
+        } else {
+            at = e.getLocation() != null ? pos(e.getLocation()) : fallback;
+            message = firstLine(String.valueOf(e.getOriginalMessage()));
+        }
+        if (source.lineHasTab(at.line()) || problems.isExplained(at)) {
+            return; // the tab or the bad byte on this line is already reported and is the cause
+        }
+        String hint = null;
+        if (message.contains("mapping values are not allowed")) {
+            hint = "check the indentation; a text value that contains ': ' must be put in quotes";
+        } else if (message.contains("could not find expected ':'")) {
+            hint = "check the indentation and that every key ends with ':'";
+        } else if (message.contains("expected ',' or ']'") || message.contains("expected ',' or '}'")) {
+            hint = "a bracket is not closed";
+        } else if (message.contains("found character '@'") || message.contains("found character '`'")
+                || message.contains("found undefined alias")) {
+            hint = "put the value in quotes";
+        }
+        problems.add(at, "YAML syntax: " + message + (context != null ? " (" + context + ")" : ""), hint);
+    }
+
+    private static String firstLine(String s) {
+        int nl = s.indexOf('\n');
+        return (nl >= 0 ? s.substring(0, nl) : s).trim();
+    }
+
+    /** Thrown to stop reading at a limit; carries its own problem. */
+    private static final class TooMuch extends RuntimeException {
+        final Pos pos;
+        final String hint;
+
+        TooMuch(Pos pos, String message, String hint) {
+            super(message, null, false, false);
+            this.pos = pos;
+            this.hint = hint;
+        }
+    }
+}

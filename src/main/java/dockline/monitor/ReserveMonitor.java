@@ -1,0 +1,103 @@
+package dockline.monitor;
+
+/**
+ * The battery as a deterministic safety automaton (DESIGN.md 2.4): the state is the battery level
+ * in units minus the reserve floor, so states run from {@code 0} (exactly at the floor) to
+ * {@code capacity - floor} (full). Reading a weight adds it, saturates at the capacity, and goes to
+ * {@link #REJECT} the moment the level is below the floor.
+ *
+ * <p>Every run that completes the mission without being rejected is accepted (the floor is a
+ * safety condition), so {@link #acceptsAtCompletion} is always {@code true}. Each step is O(1)
+ * in long arithmetic, so no sum can overflow.
+ */
+public final class ReserveMonitor implements Monitor {
+
+    private final int floor;
+    private final int capacity;
+    private final int start;
+
+    /**
+     * @param floorUnits    the reserve floor in units (0 &le; floor &le; capacity)
+     * @param capacityUnits the battery capacity in units
+     * @param startUnits    the starting level in units; above the capacity it is cut to the capacity,
+     *                      below the floor the monitor starts in {@link #REJECT}
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public ReserveMonitor(int floorUnits, int capacityUnits, int startUnits) {
+        if (floorUnits < 0) {
+            throw new IllegalArgumentException("reserve floor must not be negative: " + floorUnits);
+        }
+        if (floorUnits > capacityUnits) {
+            throw new IllegalArgumentException("reserve floor " + floorUnits + " units is above the capacity "
+                    + capacityUnits + " units");
+        }
+        this.floor = floorUnits;
+        this.capacity = capacityUnits;
+        this.start = Math.min(startUnits, capacityUnits);
+    }
+
+    public int floorUnits() {
+        return floor;
+    }
+
+    public int capacityUnits() {
+        return capacity;
+    }
+
+    public int startUnits() {
+        return start;
+    }
+
+    /** The battery level in units of a (non-sink) state. */
+    public int level(int s) {
+        return floor + s;
+    }
+
+    /** The state of a battery level, or {@link #REJECT} below the floor (above the capacity: full). */
+    public int stateOf(int level) {
+        if (level < floor) {
+            return REJECT;
+        }
+        return Math.min(level, capacity) - floor;
+    }
+
+    @Override
+    public int initialState() {
+        return stateOf(start);
+    }
+
+    @Override
+    public int step(int s, int w) {
+        long level = (long) floor + s + w;
+        if (level < floor) {
+            return REJECT;
+        }
+        return (int) Math.min(level, capacity) - floor;
+    }
+
+    @Override
+    public boolean acceptsAtCompletion(int s) {
+        return true;
+    }
+
+    /** Exactly {@code capacity - floor + 1}: every state is in {@code 0 .. stateBound()-1}. */
+    @Override
+    public long stateBound() {
+        return (long) capacity - floor + 1;
+    }
+
+    @Override
+    public String describe(int s) {
+        return s == REJECT ? "below the reserve floor" : level(s) + " units";
+    }
+
+    /** The same battery with another reserve floor. */
+    public ReserveMonitor withFloor(int floorUnits) {
+        return new ReserveMonitor(floorUnits, capacity, start);
+    }
+
+    @Override
+    public String toString() {
+        return "ReserveMonitor[floor=" + floor + ", capacity=" + capacity + ", start=" + start + "]";
+    }
+}

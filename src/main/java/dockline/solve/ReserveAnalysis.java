@@ -1,0 +1,51 @@
+package dockline.solve;
+
+import dockline.model.EnergyScale;
+import dockline.model.Mission;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
+
+/**
+ * Everything one run of {@link ReserveSolver#analyse} found out about a mission with the reserve
+ * objective. All energy figures are in units of {@link #scale()}.
+ *
+ * @param mission                        the mission as analysed (overrides applied)
+ * @param verdict                        whether the mission is guaranteed
+ * @param startUnits                     starting level (rounded down, at most the capacity)
+ * @param reserveUnits                   reserve floor (rounded up)
+ * @param capacityUnits                  capacity (rounded down)
+ * @param scale                          the energy unit and rounding
+ * @param worstCaseMinimumUnits          the lowest level the disturbances can force while the robot
+ *                                       follows {@link #policy()}; empty when not guaranteed
+ * @param highestGuaranteedReserveUnits  the highest floor that can be guaranteed from the start; empty
+ *                                       when no floor can (or when not searched: see {@code highestReserveSearched})
+ * @param highestReserveSearched         whether the highest floor was searched to the end
+ * @param productVertices                vertices of the product game of the verdict
+ * @param productEdges                   edges of that game
+ * @param estimate                       its size estimated before building
+ * @param buildMillis                    time to build that game
+ * @param solveMillis                    time to build and solve it and derive the policy and worst case
+ * @param totalMillis                    time of the whole analysis (highest floor and heat map included)
+ * @param policy                         the robot's policy when guaranteed
+ * @param game                           the product game of the verdict (for certificates and replays)
+ * @param solution                       its solution
+ * @param chargeNeeded                   the heat map, when asked for
+ * @param notes                          things the reader should know (e.g. a search skipped for memory)
+ */
+public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, int reserveUnits, int capacityUnits,
+                              EnergyScale scale, OptionalInt worstCaseMinimumUnits,
+                              OptionalInt highestGuaranteedReserveUnits, boolean highestReserveSearched,
+                              long productVertices, long productEdges, SizeEstimate estimate,
+                              long buildMillis, long solveMillis, long totalMillis,
+                              Optional<Policy> policy, ProductGame game, Solution solution,
+                              Optional<ChargeNeeded> chargeNeeded, List<String> notes) {
+
+    public ReserveAnalysis {
+        notes = List.copyOf(notes);
+    }
+
+    public boolean guaranteed() {
+        return verdict == Verdict.GUARANTEED;
+    }
+}

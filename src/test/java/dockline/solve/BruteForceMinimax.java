@@ -1,0 +1,199 @@
+package dockline.solve;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.model.Cell;
+import dockline.model.Mission;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * An independent test oracle for the reserve objective: depth-bounded minimax over explicit game
+ * states (robot vertex of the arena, battery level, tasks done), evaluated layer by layer
+ * ("what can the robot force within d of its moves"). It reads only the compiled arena's moves,
+ * outcomes and weights and the mission's zone names; it shares no code with the product game, the
+ * goal automaton, the monitors or the solvers (task progress and battery arithmetic are redone here
+ * from DESIGN.md 2.3).
+ *
+ * <p><b>Depth bound.</b> Reaching "mission complete" while staying at or above a floor is a
+ * reachability game on the finite set S of states; such games are positionally determined, and a
+ * winner can win within |S| of its moves (the attractor has at most |S| rounds; Grädel, Thomas,
+ * Wilke (eds., 2002), "Automata, Logics, and Infinite Games", LNCS 2500, ch. 2). So depth |S|
+ * answers exactly. Layer d+1 is a function of layer d alone, so once two consecutive layers agree
+ * every later layer does too, and the evaluation may stop there; it never needs more than |S|+1
+ * layers (checked).
+ *
+ * <p>For the highest guaranteed floor the layers hold a max-min value instead of a boolean: the
+ * best lowest-level-along-the-play the robot can force (with floor 0), or -1. For each threshold f
+ * this is the reachability game above, so the same depth bound holds.
+ */
+final class BruteForceMinimax {
+
+    private final Mission mission;
+    private final Arena arena;
+    private final int cap;
+    private final List<String> visit;
+    private final List<String> avoid;
+    private final int tasks;
+    private final int masks;
+
+    BruteForceMinimax(Mission mission) {
+        this.mission = mission;
+        this.arena = ArenaCompiler.compile(mission);
+        this.cap = mission.capacityUnits();
+        this.visit = mission.tasks().visit();
+        this.avoid = mission.tasks().avoid();
+        this.tasks = visit.size();
+        this.masks = 1 << tasks;
+    }
+
+    /** Progress after occupying a cell, or -1 if the cell lies in an avoided zone. */
+    private int progress(int mask, Cell c) {
+        List<String> names = mission.map().zonesAt(c);
+        for (String a : avoid) {
+            if (names.contains(a)) {
+                return -1;
+            }
+        }
+        if (mission.tasks().ordered()) {
+            int i = Integer.bitCount(mask);
+            while (i < tasks && names.contains(visit.get(i))) {
+                mask |= 1 << i;
+                i++;
+            }
+        } else {
+            for (int i = 0; i < tasks; i++) {
+                if (names.contains(visit.get(i))) {
+                    mask |= 1 << i;
+                }
+            }
+        }
+        return mask;
+    }
+
+    private boolean complete(int mask, Cell c) {
+        return mask == masks - 1 && (!mission.tasks().finishOnDock() || mission.map().terrainAt(c).dock());
+    }
+
+    private int state(int robotVertex, int level, int mask) {
+        return (robotVertex * (cap + 1) + level) * masks + mask;
+    }
+
+    /** Whether the robot can guarantee the mission with the given floor from the mission's start. */
+    boolean wins(int floor) {
+        int start = mission.startUnits();
+        if (start < floor) {
+            return false;
+        }
+        int p0 = progress(0, mission.start());
+        if (p0 < 0) {
+            return false;
+        }
+        if (complete(p0, mission.start())) {
+            return true;
+        }
+        int n = arena.robotCount() * (cap + 1) * masks;
+        boolean[] cur = new boolean[n];
+        boolean[] next = new boolean[n];
+        for (int d = 0; d <= n; d++) {
+            boolean changed = false;
+            for (int a = 0; a < arena.robotCount(); a++) {
+                for (int level = floor; level <= cap; level++) {
+                    for (int mask = 0; mask < masks; mask++) {
+                        boolean any = false;
+                        for (int e = arena.outBegin(a); e < arena.outEnd(a) && !any; e++) {
+                            int x = arena.target(e);
+                            boolean all = true;
+                            for (int o = arena.outBegin(x); o < arena.outEnd(x) && all; o++) {
+                                int to = arena.target(o);
+                                int l2 = Math.min(cap, level + arena.weight(o));
+                                if (l2 < floor) {
+                                    all = false;
+                                    break;
+                                }
+                                Cell c2 = arena.cellOf(to);
+                                int m2 = progress(mask, c2);
+                                if (m2 < 0) {
+                                    all = false;
+                                } else if (!complete(m2, c2)) {
+                                    all = cur[state(to, l2, m2)];
+                                }
+                            }
+                            any = all;
+                        }
+                        int s = state(a, level, mask);
+                        next[s] = any;
+                        changed |= any != cur[s];
+                    }
+                }
+            }
+            boolean[] t = cur;
+            cur = next;
+            next = t;
+            if (!changed) {
+                return cur[state(arena.startVertex(), start, p0)];
+            }
+        }
+        throw new AssertionError("no fixpoint within |S|+1 layers: the depth bound argument is broken");
+    }
+
+    /** The highest floor that can be guaranteed from the start (the max-min lowest level), or -1. */
+    int highestFloor() {
+        int start = mission.startUnits();
+        int p0 = progress(0, mission.start());
+        if (p0 < 0) {
+            return -1;
+        }
+        if (complete(p0, mission.start())) {
+            return start;
+        }
+        int n = arena.robotCount() * (cap + 1) * masks;
+        int[] cur = new int[n];
+        int[] next = new int[n];
+        Arrays.fill(cur, -1);
+        for (int d = 0; d <= n; d++) {
+            boolean changed = false;
+            for (int a = 0; a < arena.robotCount(); a++) {
+                for (int level = 0; level <= cap; level++) {
+                    for (int mask = 0; mask < masks; mask++) {
+                        int best = -1;
+                        for (int e = arena.outBegin(a); e < arena.outEnd(a); e++) {
+                            int x = arena.target(e);
+                            int worst = level;
+                            for (int o = arena.outBegin(x); o < arena.outEnd(x) && worst >= 0; o++) {
+                                int to = arena.target(o);
+                                int l2 = Math.min(cap, level + arena.weight(o));
+                                if (l2 < 0) {
+                                    worst = -1;
+                                    break;
+                                }
+                                Cell c2 = arena.cellOf(to);
+                                int m2 = progress(mask, c2);
+                                int v;
+                                if (m2 < 0) {
+                                    v = -1;
+                                } else if (complete(m2, c2)) {
+                                    v = l2;
+                                } else {
+                                    v = cur[state(to, l2, m2)];
+                                }
+                                worst = Math.min(worst, v);
+                            }
+                            best = Math.max(best, worst);
+                        }
+                        int s = state(a, level, mask);
+                        next[s] = best;
+                        changed |= best != cur[s];
+                    }
+                }
+            }
+            int[] t = cur;
+            cur = next;
+            next = t;
+            if (!changed) {
+                return cur[state(arena.startVertex(), start, p0)];
+            }
+        }
+        throw new AssertionError("no fixpoint within |S|+1 layers: the depth bound argument is broken");
+    }
+}

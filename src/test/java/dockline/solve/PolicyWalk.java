@@ -1,0 +1,127 @@
+package dockline.solve;
+
+import dockline.arena.Action;
+import dockline.arena.Arena;
+import dockline.model.Cell;
+import dockline.model.Mission;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * Runs an exported {@link Policy} against every disturbance choice, by depth-first search over
+ * situations (cell, level, budget left, tasks done), with the battery and the task progress redone
+ * here from DESIGN.md 2.3 (independent of the product game). Fails on a situation the policy does
+ * not cover, a level below the floor, an avoided zone, or a cycle (a play that never completes).
+ * Reports the lowest level over all plays and the situations met.
+ */
+final class PolicyWalk {
+
+    record Result(int lowestLevel, Set<String> situations) {
+    }
+
+    private final Mission mission;
+    private final Arena arena;
+    private final Policy policy;
+    private final int floor;
+    private final int cap;
+    private final Map<String, Integer> done = new HashMap<>();
+    private final Set<String> onPath = new HashSet<>();
+
+    PolicyWalk(Mission mission, Arena arena, Policy policy) {
+        this.mission = mission;
+        this.arena = arena;
+        this.policy = policy;
+        this.floor = mission.reserveUnits();
+        this.cap = mission.capacityUnits();
+    }
+
+    Result run() {
+        Cell s = mission.start();
+        int p = progress(0, s);
+        int level = mission.startUnits();
+        if (p < 0 || level < floor) {
+            throw new AssertionError("start is already lost");
+        }
+        int low = complete(p, s) ? level : visit(s, level, mission.map().disturbances().budget(), p);
+        return new Result(low, done.keySet());
+    }
+
+    private int visit(Cell c, int level, int k, int prog) {
+        String key = c + "/" + level + "/" + k + "/" + prog;
+        Integer memo = done.get(key);
+        if (memo != null) {
+            return memo;
+        }
+        if (!onPath.add(key)) {
+            throw new AssertionError("the policy can cycle through " + key + " without completing the mission");
+        }
+        Optional<Action> act = policy.lookup(c, level, k, prog);
+        if (act.isEmpty()) {
+            throw new AssertionError("the policy has no action for " + key);
+        }
+        int rv = arena.robotVertex(c.index(arena.width()), k);
+        int d = -1;
+        for (int e = arena.outBegin(rv); e < arena.outEnd(rv); e++) {
+            if (arena.action(arena.target(e)).equals(act.get())) {
+                d = arena.target(e);
+            }
+        }
+        if (d < 0) {
+            throw new AssertionError("the policy's action " + act.get() + " is not available at " + key);
+        }
+        int low = level;
+        for (int o = arena.outBegin(d); o < arena.outEnd(d); o++) {
+            int to = arena.target(o);
+            int l2 = Math.min(cap, level + arena.weight(o));
+            if (l2 < floor) {
+                throw new AssertionError("level " + l2 + " below the floor after " + act.get() + " at " + key);
+            }
+            Cell c2 = arena.cellOf(to);
+            int p2 = progress(prog, c2);
+            if (p2 < 0) {
+                throw new AssertionError("avoided zone entered from " + key);
+            }
+            low = Math.min(low, complete(p2, c2) ? l2 : visit(c2, l2, arena.budgetLeft(to), p2));
+        }
+        onPath.remove(key);
+        done.put(key, low);
+        return low;
+    }
+
+    private int progress(int mask, Cell c) {
+        List<String> names = mission.map().zonesAt(c);
+        for (String a : mission.tasks().avoid()) {
+            if (names.contains(a)) {
+                return -1;
+            }
+        }
+        List<String> visit = mission.tasks().visit();
+        if (mission.tasks().ordered()) {
+            int i = Integer.bitCount(mask);
+            while (i < visit.size() && names.contains(visit.get(i))) {
+                mask |= 1 << i++;
+            }
+        } else {
+            for (int i = 0; i < visit.size(); i++) {
+                if (names.contains(visit.get(i))) {
+                    mask |= 1 << i;
+                }
+            }
+        }
+        return mask;
+    }
+
+    private boolean complete(int mask, Cell c) {
+        return mask == (1 << mission.tasks().visit().size()) - 1
+                && (!mission.tasks().finishOnDock() || mission.map().terrainAt(c).dock());
+    }
+
+    /** The situation key of a policy entry, as {@link #visit} writes it. */
+    static String key(PolicyEntry e) {
+        return e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress();
+    }
+}
