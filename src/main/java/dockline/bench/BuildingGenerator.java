@@ -344,13 +344,11 @@ public final class BuildingGenerator {
         return new int[] {x0, x1, row};
     }
 
-    /** Docks at every other corridor crossing (a checkerboard over the crossings). */
+    /** A dock at every corridor crossing (one cell of it), so docks are {@value #PITCH} cells apart. */
     private void placeDocks() {
-        for (int i = 0; i < lines.size(); i++) {
-            for (int j = 0; j < lines.size(); j++) {
-                if ((i + j) % 2 == 0) {
-                    g[lines.get(i)][lines.get(j)] = DOCK;
-                }
+        for (int y : lines) {
+            for (int x : lines) {
+                g[y][x] = DOCK;
             }
         }
     }

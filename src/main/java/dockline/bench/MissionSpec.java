@@ -42,12 +42,15 @@ public record MissionSpec(int tasks, boolean ordered, boolean avoidQuiet, int bu
     }
 
     /**
-     * A mission with charging on the docks and few energy levels (a 6 Wh battery at 0.5 Wh resolution,
-     * 12 units, reserve 2 units): the robot hops from dock to dock across the floor, so the product
-     * with the reserve monitor covers the whole floor at every level. The product routes' benchmark.
+     * A mission with charging on the docks and few energy levels: a 20 Wh battery at 0.5 Wh
+     * resolution (40 units; every move rounds up to one unit), reserve floor 1 Wh, 2 Wh gained per
+     * step on a dock, three rooms anywhere on the floor in order. Docks are {@value BuildingGenerator#PITCH}
+     * cells apart, so the robot hops from dock to dock across the floor and the product with the
+     * reserve monitor covers the whole floor at most levels: its size grows with the floor area,
+     * not with the battery. The product routes' benchmark.
      */
     public static MissionSpec docking(int budget) {
-        return new MissionSpec(3, true, true, budget, new BigDecimal("0.5"), new BigDecimal("6"), new BigDecimal("1"),
+        return new MissionSpec(3, true, true, budget, new BigDecimal("0.5"), new BigDecimal("20"), new BigDecimal("2"),
                 Charge.percent(new BigDecimal("100")), Charge.wh(new BigDecimal("1")), 0, new Objective.Reserve());
     }
 

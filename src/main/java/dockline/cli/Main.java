@@ -50,6 +50,7 @@ public final class Main implements Runnable {
         return new Object[] {
             // each issue adds its subcommand here
             new ValidateCommand(),
+            new BenchCommand(),
         };
     }
 

@@ -59,11 +59,7 @@ public final class MinChargeSolver {
     private final int robotCount;
     private final int startGoal;
     private final int available;
-    private final long[] maskOfId;
-    private final int[] cellMaskId;
-    // inverse goal steps per distinct zone mask: invStart[id * (G + 1) + g'] .. invStart[id * (G + 1) + g' + 1]
-    private final int[] invStart;
-    private final int[] invGoal;
+    private final GoalPredecessors inverse;
 
     /**
      * The outcome of a run.
@@ -103,50 +99,7 @@ public final class MinChargeSolver {
         this.startGoal = goal.initial(arena.cellZones(arena.cell(s)));
         this.available = mission.startUnits() - mission.reserveUnits();
 
-        int cells = arena.width() * arena.height();
-        this.cellMaskId = new int[cells];
-        long[] masks = new long[16];
-        int distinct = 0;
-        java.util.HashMap<Long, Integer> ids = new java.util.HashMap<>();
-        for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-            int c = arena.freeCell(slot);
-            long m = arena.cellZones(c);
-            Integer id = ids.get(m);
-            if (id == null) {
-                id = distinct++;
-                ids.put(m, id);
-                if (id == masks.length) {
-                    masks = Arrays.copyOf(masks, masks.length * 2);
-                }
-                masks[id] = m;
-            }
-            cellMaskId[c] = id;
-        }
-        this.maskOfId = Arrays.copyOf(masks, distinct);
-        int stride = goalCount + 1;
-        this.invStart = new int[distinct * stride + 1];
-        int[] count = new int[distinct * stride];
-        for (int id = 0; id < distinct; id++) {
-            for (int g = 0; g < goalCount; g++) {
-                int g2 = goal.step(g, maskOfId[id]);
-                if (g2 != GoalAutomaton.REJECT) {
-                    count[id * stride + g2]++;
-                }
-            }
-        }
-        for (int i = 0; i < count.length; i++) {
-            invStart[i + 1] = invStart[i] + count[i];
-        }
-        this.invGoal = new int[invStart[count.length]];
-        int[] fill = Arrays.copyOf(invStart, count.length);
-        for (int id = 0; id < distinct; id++) {
-            for (int g = 0; g < goalCount; g++) {
-                int g2 = goal.step(g, maskOfId[id]);
-                if (g2 != GoalAutomaton.REJECT) {
-                    invGoal[fill[id * stride + g2]++] = g;
-                }
-            }
-        }
+        this.inverse = new GoalPredecessors(arena, goal);
     }
 
     /**
@@ -264,7 +217,6 @@ public final class MinChargeSolver {
     private Values run(boolean stopEarly) {
         final int gc = goalCount;
         final int rc = robotCount;
-        final int stride = gc + 1;
         final int robotN = Math.multiplyExact(rc, gc);
         final int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
         final int[] robotNeed = new int[robotN];
@@ -310,9 +262,9 @@ public final class MinChargeSolver {
             }
             int r = u / gc;
             int g2 = u - r * gc;
-            int base = cellMaskId[arena.cell(r)] * stride + g2;
-            int gFrom = invStart[base];
-            int gTo = invStart[base + 1];
+            int cellR = arena.cell(r);
+            int gFrom = inverse.begin(cellR, g2);
+            int gTo = inverse.end(cellR, g2);
             if (gFrom == gTo) {
                 continue;
             }
@@ -327,7 +279,8 @@ public final class MinChargeSolver {
                 int dIdx = (d - rc) * gc;
                 int outdeg = arena.outEnd(d) - arena.outBegin(d);
                 for (int j = gFrom; j < gTo; j++) {
-                    int dp = dIdx + invGoal[j];
+                    int g = inverse.state(j);
+                    int dp = dIdx + g;
                     if (cost > distMax[dp]) {
                         distMax[dp] = cost;
                     }
@@ -335,7 +288,7 @@ public final class MinChargeSolver {
                         // every outcome is final: the disturbance vertex is worth distMax; its owner may improve
                         int y = distMax[dp];
                         int owner = arena.source(arena.inEdge(arena.inBegin(d)));
-                        int rp = owner * gc + invGoal[j];
+                        int rp = owner * gc + g;
                         if (y < robotNeed[rp] && !done[rp]) {
                             robotNeed[rp] = y;
                             heap.push(y, rp);
