@@ -50,6 +50,8 @@ public final class Main implements Runnable {
         return new Object[] {
             // each issue adds its subcommand here
             new ValidateCommand(),
+            new CheckCommand(),
+            new ExportCommand(),
             new BenchCommand(),
         };
     }

@@ -113,9 +113,41 @@ public final class ValidateCommand implements Callable<Integer> {
                 "battery: capacity " + s.formatWh(m.capacityUnits()) + " (" + m.capacityUnits() + " units), start "
                         + m.start() + " with " + charge(m.startCharge().toString(), m.startUnits(), s) + ", reserve floor "
                         + charge(m.reserve().toString(), m.reserveUnits(), s),
+                "per step: " + steps(m),
                 "tasks: " + tasks,
                 "objective: " + objective,
                 "energy: " + s.describe());
+    }
+
+    /** Move, wait and charge figures in units, so the rounding is visible, e.g. {@code move tile 1 unit, ...}. */
+    private static String steps(Mission m) {
+        EnergyScale s = m.scale();
+        StringBuilder sb = new StringBuilder("move");
+        java.util.Set<String> used = new java.util.TreeSet<>();
+        for (int y = 0; y < m.map().height(); y++) {
+            for (int x = 0; x < m.map().width(); x++) {
+                Cell c = new Cell(x, y);
+                if (m.map().isFree(c)) {
+                    used.add(m.map().terrainAt(c).surface());
+                }
+            }
+        }
+        String sep = " ";
+        for (String surface : used) {
+            java.math.BigDecimal wh = m.robot().moveWh().get(surface);
+            sb.append(sep).append(surface).append(' ').append(plain(wh)).append(" Wh = ").append(count(s.consumption(wh), "unit"));
+            sep = ", ";
+        }
+        sb.append("; wait ").append(plain(m.robot().waitWh())).append(" Wh = ").append(count(s.consumption(m.robot().waitWh()), "unit"));
+        int gain = s.gain(m.robot().chargeWh());
+        if (gain > 0) {
+            sb.append("; charge on a dock +").append(plain(m.robot().chargeWh())).append(" Wh = ").append(count(gain, "unit"));
+        } else if (m.robot().chargeWh().signum() > 0) {
+            sb.append("; no charging (").append(plain(m.robot().chargeWh())).append(" Wh rounds down to 0 units)");
+        } else {
+            sb.append("; no charging");
+        }
+        return sb.toString();
     }
 
     private static String charge(String written, int units, EnergyScale s) {

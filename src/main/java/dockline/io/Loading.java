@@ -172,7 +172,8 @@ final class Loading {
         if (n == null || n instanceof Node.Bad) {
             return null;
         }
-        problems.add(n.pos(), what + " must be a cell [x, y], not " + n.describe(),
+        problems.add(n.pos(), what + " must be a cell [x, y], not " + (n instanceof Node.SeqNode s
+                        ? "a list of " + s.items().size() + (s.items().size() == 1 ? " value" : " values") : n.describe()),
                 "x is the column from the left, y the row from the top, both from 0, e.g. [3, 7]");
         return null;
     }

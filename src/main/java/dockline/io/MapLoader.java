@@ -36,7 +36,7 @@ public final class MapLoader {
     public static BuildingMap load(Path file, byte[] content) throws InputException {
         Problems problems = new Problems(file);
         YamlReader.Document doc = YamlReader.parse(file, content, problems);
-        BuildingMap map = doc.root() == null ? null : new MapReading(doc, problems).read();
+        BuildingMap map = doc.root() == null ? null : problems.guard(() -> new MapReading(doc, problems).read());
         problems.throwIfAny();
         return map;
     }
@@ -47,6 +47,6 @@ public final class MapLoader {
         if (doc == null || doc.root() == null) {
             return null;
         }
-        return new MapReading(doc, problems).read();
+        return problems.guard(() -> new MapReading(doc, problems).read());
     }
 }

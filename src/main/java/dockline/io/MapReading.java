@@ -47,7 +47,7 @@ final class MapReading {
     }
 
     BuildingMap read() {
-        int before = problems.count();
+        int before = problems.raised();
         Node.MapNode root = in.map(doc.root(), "a map file");
         if (root == null) {
             return null;
@@ -83,7 +83,7 @@ final class MapReading {
         if (root.get("disturbances") != null) {
             dm = disturbances(in.map(root.get("disturbances"), "disturbances"));
         }
-        if (problems.count() > before || name == null || cellSize == null || legend == null || grid == null || dm == null) {
+        if (problems.raised() > before || name == null || cellSize == null || legend == null || grid == null || dm == null) {
             return null;
         }
         try {
@@ -200,15 +200,20 @@ final class MapReading {
         final int[] rowColumn;
         /** Some cells have characters the legend does not know (or the legend is broken). */
         boolean incomplete;
+        /** The legend as a table indexed by character (no boxing in the per-cell loops). */
+        final Terrain[] table = new Terrain[65536];
         private final Map<Character, Terrain> legend;
 
-        Grid(List<String> rows, int[] rowLine, int[] rowColumn, Map<Character, Terrain> legend) {
+        Grid(List<String> rows, int width, int[] rowLine, int[] rowColumn, Map<Character, Terrain> legend) {
             this.rows = rows;
             this.height = rows.size();
-            this.width = rows.get(0).length();
+            this.width = width;
             this.rowLine = rowLine;
             this.rowColumn = rowColumn;
             this.legend = legend;
+            if (legend != null) {
+                legend.forEach((c, t) -> table[c] = t);
+            }
         }
 
         boolean inside(Cell c) {
@@ -220,7 +225,7 @@ final class MapReading {
             if (legend == null || !inside(c) || c.x() >= rows.get(c.y()).length()) {
                 return null;
             }
-            return legend.get(rows.get(c.y()).charAt(c.x()));
+            return table[rows.get(c.y()).charAt(c.x())];
         }
 
         String describeSize() {
@@ -265,29 +270,47 @@ final class MapReading {
                 rowColumn[i] = fileLine.codePointCount(0, lead) + 1;
             }
         }
-        int width = rows.get(0).codePointCount(0, rows.get(0).length());
+        int ref = 0; // the first row that is not empty sets the width
+        while (rows.get(ref).isEmpty()) {
+            ref++;
+        }
+        int width = rows.get(ref).codePointCount(0, rows.get(ref).length());
         if (width > MapLoader.MAX_SIDE) {
-            problems.add(at(rowLine, rowColumn, 0, 0, n.pos()), "plan rows are " + width + " cells wide; at most "
+            problems.add(at(rowLine, rowColumn, ref, 0, n.pos()), "plan rows are " + width + " cells wide; at most "
                     + MapLoader.MAX_SIDE + " are allowed", "use a coarser cell size");
             return null;
         }
-        Grid g = new Grid(rows, rowLine, rowColumn, legend);
+        Grid g = new Grid(rows, width, rowLine, rowColumn, legend);
         g.incomplete = legend == null;
         Map<Integer, Integer> seen = new HashMap<>();
         boolean anyFree = false;
         for (int y = 0; y < count; y++) {
             String row = rows.get(y);
+            if (row.isEmpty()) {
+                problems.add(new Pos(rowLine[y], 1), "plan row " + y + " is empty",
+                        "remove the blank line inside the plan, or fill the row with wall characters");
+                g.incomplete = true;
+                continue;
+            }
             int x = 0;
             for (int i = 0; i < row.length(); ) {
                 int cp = row.codePointAt(i);
+                Terrain known = cp <= 0xFFFF ? g.table[cp] : null;
+                if (x < width && (known != null || legend == null)) {
+                    // the common case: a known character inside the width; no objects made
+                    anyFree |= known != null && known.free();
+                    i += Character.charCount(cp);
+                    x++;
+                    continue;
+                }
                 Pos p = at(rowLine, rowColumn, y, x, n.pos());
                 if (x == width) {
-                    problems.add(p, "plan row " + y + " is " + row.codePointCount(0, row.length()) + " cells wide, but row 0 is "
-                            + width, "all rows must be equally wide; fill with wall characters"
+                    problems.add(p, "plan row " + y + " is " + row.codePointCount(0, row.length()) + " cells wide, but row "
+                            + ref + " is " + width, "all rows must be equally wide; fill with wall characters"
                             + (row.endsWith(" ") ? " (this row ends in spaces)" : ""));
                     g.incomplete = true;
                 }
-                if (legend != null && (cp > 0xFFFF || !legend.containsKey((char) cp))) {
+                if (legend != null && known == null) {
                     g.incomplete = true;
                     int times = seen.merge(cp, 1, Integer::sum);
                     if (times <= SHOWN_PER_CHAR) {
@@ -297,7 +320,7 @@ final class MapReading {
                         problems.add(p, "character " + quote(cp) + " is not in the legend (here and " + (more - 1)
                                 + " more time" + (more == 2 ? "" : "s") + " below)", unknownCharHint(cp));
                     }
-                } else if (legend != null && legend.get((char) cp).free()) {
+                } else if (known != null && known.free()) {
                     anyFree = true;
                 }
                 i += Character.charCount(cp);
@@ -305,7 +328,7 @@ final class MapReading {
             }
             if (x < width) {
                 problems.add(at(rowLine, rowColumn, y, x, n.pos()), "plan row " + y + " is " + x
-                        + " cells wide, but row 0 is " + width, "all rows must be equally wide; fill with wall characters");
+                        + " cells wide, but row " + ref + " is " + width, "all rows must be equally wide; fill with wall characters");
                 g.incomplete = true;
             }
         }

@@ -22,7 +22,7 @@ public final class MissionLoader {
     public static Mission load(Path file) throws InputException {
         Problems problems = new Problems(file);
         YamlReader.Document doc = YamlReader.read(file, problems);
-        Mission m = doc == null || doc.root() == null ? null : new MissionReading(doc, problems).read();
+        Mission m = doc == null || doc.root() == null ? null : problems.guard(() -> new MissionReading(doc, problems).read());
         problems.throwIfAny();
         return m;
     }
@@ -34,7 +34,7 @@ public final class MissionLoader {
     public static Mission load(Path file, byte[] content) throws InputException {
         Problems problems = new Problems(file);
         YamlReader.Document doc = YamlReader.parse(file, content, problems);
-        Mission m = doc.root() == null ? null : new MissionReading(doc, problems).read();
+        Mission m = doc.root() == null ? null : problems.guard(() -> new MissionReading(doc, problems).read());
         problems.throwIfAny();
         return m;
     }

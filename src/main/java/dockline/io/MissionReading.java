@@ -56,7 +56,7 @@ final class MissionReading {
     }
 
     Mission read() {
-        int before = problems.count();
+        int before = problems.raised();
         Node.MapNode root = in.map(doc.root(), "a mission file");
         if (root == null) {
             return null;
@@ -125,7 +125,7 @@ final class MissionReading {
             problems.add(at, "the mission must finish on a dock, but the map has no dock",
                     "mark a dock in the map's legend, e.g. C: {surface: tile, dock: true}");
         }
-        if (problems.count() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
+        if (problems.raised() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
                 || start == null || startCharge == null || reserve == null || tasks == null || objective == null) {
             return null;
         }
@@ -233,6 +233,7 @@ final class MissionReading {
                 ok = false;
             } else {
                 for (Node.Entry e : mm.entries()) {
+                    r.moveNodes.put(e.key(), e.value());
                     BigDecimal wh = in.wh(e.value(), "move-energy for '" + Loading.shorten(e.key()) + "'");
                     if (wh == null) {
                         ok = false;
@@ -314,7 +315,7 @@ final class MissionReading {
         EnergyScale scale = robot.scale;
         Integer startUnits = null;
         if (startCharge != null) {
-            Pos at = startChargeNode != null ? startChargeNode.pos() : startNode.pos();
+            Pos at = startChargeNode != null ? startChargeNode.pos() : startNode != null ? startNode.pos() : Pos.START;
             if (!startCharge.percent() && startCharge.amount().compareTo(cap) > 0) {
                 problems.add(at, "start charge " + startCharge + " is above the battery capacity of " + plain(cap) + " Wh",
                         "give at most " + plain(cap) + " Wh, or a percentage");

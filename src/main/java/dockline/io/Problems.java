@@ -23,6 +23,7 @@ final class Problems {
     /** Positions already explained by a lower-level problem (a tab, a bad byte): later problems there are noise. */
     private final Set<Long> explained = new HashSet<>();
     private int dropped;
+    private int attempts;
 
     Problems(Path file) {
         this.file = file;
@@ -37,6 +38,7 @@ final class Problems {
     }
 
     void add(Pos pos, String message, String hint) {
+        attempts++;
         if (explained.contains(key(pos.line(), pos.column()))) {
             return;
         }
@@ -55,6 +57,7 @@ final class Problems {
     }
 
     void add(Problem p) {
+        attempts++;
         if (list.size() >= LIMIT) {
             dropped++;
             return;
@@ -80,12 +83,21 @@ final class Problems {
         return list.size();
     }
 
-    /** Throws if anything was found: problems grouped by file (in order of first mention), then by position. */
+    /**
+     * How many problems were raised, counting those suppressed or dropped: compare before and after a
+     * step to see whether it found anything.
+     */
+    int raised() {
+        return attempts;
+    }
+
+    /** Throws if anything was found: problems grouped by file (this file first), then by position. */
     void throwIfAny() throws InputException {
         if (list.isEmpty()) {
             return;
         }
         Map<Path, Integer> fileOrder = new LinkedHashMap<>();
+        fileOrder.put(file, 0); // the file asked for first, then the files it names
         for (Problem p : list) {
             fileOrder.putIfAbsent(p.file(), fileOrder.size());
         }
@@ -100,6 +112,22 @@ final class Problems {
         }
         throw new InputException(sorted);
     }
+
+    /**
+     * Runs a checking step; a defect in it (any runtime exception) becomes a problem at 1:1 instead
+     * of a stack trace, so that bad input can never crash a run.
+     */
+    <T> T guard(java.util.function.Supplier<T> step) {
+        try {
+            return step.get();
+        } catch (RuntimeException e) {
+            add(Pos.START, INTERNAL + " (" + e + ")", "please report this with the file");
+            return null;
+        }
+    }
+
+    /** How a defect of the checker itself is reported (tests look for it). */
+    static final String INTERNAL = "internal error while checking this file";
 
     private static long key(int line, int col) {
         return ((long) line << 32) | (col & 0xffffffffL);

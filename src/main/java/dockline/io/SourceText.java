@@ -90,13 +90,35 @@ final class SourceText {
         char[] chars = new char[out.remaining()];
         out.get(chars);
         List<Integer> tabs = new ArrayList<>();
+        List<Integer> controls = new ArrayList<>();
+        List<Integer> controlChars = new ArrayList<>();
         for (int i = 0; i < chars.length; i++) {
-            if (chars[i] == '\t') {
+            char c = chars[i];
+            if (c == '\t') {
                 tabs.add(i);
                 chars[i] = ' ';
+            } else if (!printable(chars, i)) {
+                controls.add(i);
+                controlChars.add((int) c);
+                chars[i] = ' ';
+            } else if (Character.isHighSurrogate(c)) {
+                i++; // a valid pair: skip its low half
             }
         }
         SourceText src = new SourceText(new String(chars));
+        for (int k = 0; k < controls.size(); k++) {
+            Pos p = src.posOf(controls.get(k));
+            if (k < SHOWN) {
+                problems.addExplaining(p, String.format("control character U+%04X is not allowed", controlChars.get(k)),
+                        "remove it; dockline files are plain text");
+            } else {
+                problems.explain(p);
+            }
+        }
+        if (controls.size() > SHOWN) {
+            problems.add(src.posOf(controls.get(SHOWN)), (controls.size() - SHOWN) + " more control characters",
+                    "remove them; dockline files are plain text");
+        }
         for (int k = 0; k < bad.size(); k++) {
             int[] b = bad.get(k);
             Pos p = src.posOf(b[0]);
@@ -125,6 +147,25 @@ final class SourceText {
                     "use spaces: tabs are not allowed in dockline files");
         }
         return src;
+    }
+
+    /**
+     * The characters YAML allows in a file (YAML 1.1, section 5.1 "Character Set"): tab, line
+     * breaks, printable ASCII, NEL, and the rest of Unicode except C1 controls, surrogates
+     * without a partner, U+FFFE and U+FFFF.
+     */
+    private static boolean printable(char[] chars, int i) {
+        char c = chars[i];
+        if (c == '\t' || c == '\n' || c == '\r' || (c >= 0x20 && c <= 0x7E) || c == 0x85) {
+            return true;
+        }
+        if (Character.isHighSurrogate(c)) {
+            return i + 1 < chars.length && Character.isLowSurrogate(chars[i + 1]);
+        }
+        if (Character.isLowSurrogate(c)) {
+            return false; // a partnered low half is skipped by the caller
+        }
+        return (c >= 0xA0 && c <= 0xD7FF) || (c >= 0xE000 && c <= 0xFFFD);
     }
 
     /** For tests and for text that is already a string: no decoding, tabs still reported. */

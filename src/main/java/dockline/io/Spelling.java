@@ -3,32 +3,39 @@ package dockline.io;
 import java.util.Collection;
 
 /**
- * "Did you mean" suggestions by edit distance (Levenshtein 1966, "Binary codes capable of
- * correcting deletions, insertions, and reversals"; the textbook dynamic programme, O(|a|·|b|)).
+ * "Did you mean" suggestions by edit distance: insertions, deletions and substitutions
+ * (Levenshtein 1966, "Binary codes capable of correcting deletions, insertions, and reversals")
+ * plus swaps of two neighbouring letters, the commonest typing slip (Damerau 1964, "A technique
+ * for computer detection and correction of spelling errors"), in the restricted
+ * "optimal string alignment" form; the textbook dynamic programme, O(|a|·|b|).
  */
 final class Spelling {
 
     private Spelling() {
     }
 
-    /** Number of single-character insertions, deletions and substitutions that turn a into b. */
+    /** Fewest single-character insertions, deletions, substitutions and neighbour swaps that turn a into b. */
     static int distance(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
+        int n = a.length();
+        int m = b.length();
+        int[][] d = new int[n + 1][m + 1];
+        for (int i = 0; i <= n; i++) {
+            d[i][0] = i;
         }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int sub = prev[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
-                cur[j] = Math.min(sub, Math.min(prev[j] + 1, cur[j - 1] + 1));
+        for (int j = 0; j <= m; j++) {
+            d[0][j] = j;
+        }
+        for (int i = 1; i <= n; i++) {
+            for (int j = 1; j <= m; j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                int v = Math.min(d[i - 1][j - 1] + cost, Math.min(d[i - 1][j] + 1, d[i][j - 1] + 1));
+                if (i > 1 && j > 1 && a.charAt(i - 1) == b.charAt(j - 2) && a.charAt(i - 2) == b.charAt(j - 1)) {
+                    v = Math.min(v, d[i - 2][j - 2] + 1);
+                }
+                d[i][j] = v;
             }
-            int[] t = prev;
-            prev = cur;
-            cur = t;
         }
-        return prev[b.length()];
+        return d[n][m];
     }
 
     /**

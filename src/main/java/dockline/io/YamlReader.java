@@ -103,7 +103,7 @@ final class YamlReader {
                         .build())
                 .build();
         Pos last = Pos.START;
-        try (YAMLParser p = (YAMLParser) factory.createParser(new StringReader(source.text()))) {
+        try (YAMLParser p = factory.createParser(new StringReader(source.text()))) {
             parser = p;
             JsonToken t = p.nextToken();
             if (t == null) {
@@ -140,7 +140,7 @@ final class YamlReader {
         }
         if (parser.isCurrentAlias()) {
             problems.add(pos, "aliases ('*" + shortText() + "') are not supported",
-                    "write the value out in full; dockline files do not use anchors and aliases");
+                    "write the value out in full; dockline files do not use aliases");
             return new Node.Bad(pos);
         }
         switch (t) {
@@ -247,6 +247,13 @@ final class YamlReader {
         } else {
             at = e.getLocation() != null ? pos(e.getLocation()) : fallback;
             message = firstLine(String.valueOf(e.getOriginalMessage()));
+        }
+        if (message.startsWith("Expected a field name")) {
+            // Jackson's wording for a key that is itself a list or mapping ("? [a, b]: ...")
+            message = "a key must be plain text, not a list or a mapping";
+        }
+        if (message.contains("org.yaml.snakeyaml")) {
+            message = message.replaceAll("<?org\\.yaml\\.snakeyaml\\.[\\w.]+\\$?\\w*(\\([^)]*\\))?>?", "a YAML value");
         }
         if (source.lineHasTab(at.line()) || problems.isExplained(at)) {
             return; // the tab or the bad byte on this line is already reported and is the cause

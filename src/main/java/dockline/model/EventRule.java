@@ -18,7 +18,7 @@ import java.util.List;
 public record EventRule(EventKind kind, String label, List<Cell> cells, BigDecimal extraWh) {
 
     public EventRule {
-        cells = List.copyOf(cells.stream().distinct().sorted().toList());
+        cells = Cell.sortedDistinct(cells);
         if (extraWh == null) {
             extraWh = BigDecimal.ZERO;
         }

@@ -12,7 +12,7 @@ public record Zone(String name, List<Cell> cells) {
         if (name == null || name.isBlank()) {
             throw new IllegalArgumentException("zone name must not be blank");
         }
-        cells = List.copyOf(cells.stream().distinct().sorted().toList());
+        cells = Cell.sortedDistinct(cells);
     }
 
     public boolean contains(Cell c) {

@@ -21,14 +21,18 @@ import java.util.OptionalInt;
  * @param highestGuaranteedReserveUnits  the highest floor that can be guaranteed from the start; empty
  *                                       when no floor can (or when not searched: see {@code highestReserveSearched})
  * @param highestReserveSearched         whether the highest floor was searched to the end
- * @param productVertices                vertices of the product game of the verdict
+ * @param productVertices                vertices of the product game of the verdict (at the reserve floor)
  * @param productEdges                   edges of that game
  * @param estimate                       its size estimated before building
  * @param buildMillis                    time to build that game
  * @param solveMillis                    time to build and solve it and derive the policy and worst case
  * @param totalMillis                    time of the whole analysis (highest floor and heat map included)
  * @param policy                         the robot's policy when guaranteed
- * @param game                           the product game of the verdict (for certificates and replays)
+ * @param policyFloorUnits               the floor of the game the policy comes from: the reserve, or with
+ *                                       {@link ReserveOptions#safestPolicy()} the highest guaranteed floor
+ * @param game                           the product game the policy comes from, at {@code policyFloorUnits}
+ *                                       (for certificates and replays; when not guaranteed, the game of
+ *                                       the verdict, whose solution holds the disturbance's winning moves)
  * @param solution                       its solution
  * @param chargeNeeded                   the heat map, when asked for
  * @param notes                          things the reader should know (e.g. a search skipped for memory)
@@ -38,7 +42,7 @@ public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, 
                               OptionalInt highestGuaranteedReserveUnits, boolean highestReserveSearched,
                               long productVertices, long productEdges, SizeEstimate estimate,
                               long buildMillis, long solveMillis, long totalMillis,
-                              Optional<Policy> policy, ProductGame game, Solution solution,
+                              Optional<Policy> policy, int policyFloorUnits, ProductGame game, Solution solution,
                               Optional<ChargeNeeded> chargeNeeded, List<String> notes) {
 
     public ReserveAnalysis {

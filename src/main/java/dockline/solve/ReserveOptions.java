@@ -9,9 +9,12 @@ import java.util.function.BooleanSupplier;
  * @param solver          the game solver; {@code AttractorSolver::new} unless a test swaps it
  * @param highestReserve  also search for the highest reserve floor that can be guaranteed
  * @param chargeNeeded    also compute the heat map ({@link ChargeNeeded}); needs the product over all levels
+ * @param safestPolicy    export the policy that keeps the battery at or above the highest guaranteed floor
+ *                        (it may take more moves, e.g. to top up on a dock) instead of the one that
+ *                        finishes in the fewest moves at the mission's floor; costs one more solve
  */
 public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, boolean highestReserve,
-                             boolean chargeNeeded) {
+                             boolean chargeNeeded, boolean safestPolicy) {
 
     public ReserveOptions {
         if (product == null) {
@@ -24,30 +27,34 @@ public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, 
 
     /** Verdict, policy, worst case and highest guaranteed reserve; no heat map; default memory budget. */
     public static ReserveOptions defaults() {
-        return new ReserveOptions(ProductOptions.defaults(), AttractorSolver::new, true, false);
+        return new ReserveOptions(ProductOptions.defaults(), AttractorSolver::new, true, false, false);
     }
 
     public ReserveOptions withMemoryBudget(long bytes) {
-        return new ReserveOptions(product.withMemoryBudget(bytes), solver, highestReserve, chargeNeeded);
+        return new ReserveOptions(product.withMemoryBudget(bytes), solver, highestReserve, chargeNeeded, safestPolicy);
     }
 
     public ReserveOptions withCancelled(BooleanSupplier flag) {
-        return new ReserveOptions(product.withCancelled(flag), solver, highestReserve, chargeNeeded);
+        return new ReserveOptions(product.withCancelled(flag), solver, highestReserve, chargeNeeded, safestPolicy);
     }
 
     public ReserveOptions withSolver(GameSolver.Factory factory) {
-        return new ReserveOptions(product, factory, highestReserve, chargeNeeded);
+        return new ReserveOptions(product, factory, highestReserve, chargeNeeded, safestPolicy);
     }
 
     public ReserveOptions withIndex(ProductOptions.IndexKind kind) {
-        return new ReserveOptions(product.withIndex(kind), solver, highestReserve, chargeNeeded);
+        return new ReserveOptions(product.withIndex(kind), solver, highestReserve, chargeNeeded, safestPolicy);
     }
 
     public ReserveOptions withHighestReserve(boolean on) {
-        return new ReserveOptions(product, solver, on, chargeNeeded);
+        return new ReserveOptions(product, solver, on, chargeNeeded, safestPolicy);
+    }
+
+    public ReserveOptions withSafestPolicy(boolean on) {
+        return new ReserveOptions(product, solver, highestReserve, chargeNeeded, on);
     }
 
     public ReserveOptions withChargeNeeded(boolean on) {
-        return new ReserveOptions(product, solver, highestReserve, on);
+        return new ReserveOptions(product, solver, highestReserve, on, safestPolicy);
     }
 }

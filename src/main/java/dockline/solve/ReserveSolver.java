@@ -14,10 +14,13 @@ import java.util.OptionalInt;
  * The threshold solver for the reserve objective: arena × goal automaton × {@link ReserveMonitor},
  * solved as a reachability game by the linear-time attractor (DESIGN.md 2.4).
  *
- * <p>{@link #analyse} gives the verdict, the robot's policy, the worst level the disturbances can
- * force under it (dynamic programming over the acyclic closed loop, O(closed loop)), the highest
- * floor that can be guaranteed (bisection over the floor, one solve per probe, O(log start) solves;
- * sound because winning is monotone in the floor), and optionally the heat map.
+ * <p>{@link #analyse} gives the verdict, the robot's policy (by default the attractor strategy at
+ * the mission's floor, which finishes in the fewest moves in the worst case; with
+ * {@link ReserveOptions#safestPolicy()} the one at the highest guaranteed floor), the worst level
+ * the disturbances can * force under it (dynamic programming over the acyclic closed loop, O(closed loop)), the highest
+ * floor that can be guaranteed (a max-min fixpoint over one more product, computed as an
+ * incremental attractor while the floor falls; exact because winning is monotone in the floor),
+ * and optionally the heat map.
  */
 public final class ReserveSolver {
 
@@ -60,10 +63,10 @@ public final class ReserveSolver {
 
         OptionalInt highest = OptionalInt.empty();
         boolean searched = false;
-        if (options.highestReserve()) {
+        if (options.highestReserve() || options.safestPolicy()) {
             try {
-                int h = highestFloor(arena, goal, monitor, won ? worst.getAsInt() : -1, won ? -1 : reserve - 1,
-                        options);
+                int h = highestFloorByThresholds(arena, goal, monitor.withFloor(won ? worst.getAsInt() : 0),
+                        options.product());
                 highest = h >= 0 ? OptionalInt.of(h) : OptionalInt.empty();
                 searched = true;
             } catch (ProductTooLargeException e) {
@@ -71,10 +74,22 @@ public final class ReserveSolver {
                         + e.getMessage());
             }
         }
+        int policyFloor = reserve;
+        ProductGame policyGame = game;
+        Solution policySolution = sol;
+        if (options.safestPolicy() && won && highest.isPresent() && highest.getAsInt() > worst.getAsInt()) {
+            // the policy of the game at the highest floor: it keeps the battery at or above that floor
+            policyFloor = highest.getAsInt();
+            ReserveMonitor safest = monitor.withFloor(policyFloor);
+            policyGame = ProductGame.fromStart(arena, goal, safest, options.product());
+            policySolution = options.solver().create(policyGame.graph(), options.product().cancelled()).solve();
+            policy = Optional.of(policyGame.policy(policySolution, safest::level));
+            worst = OptionalInt.of(worstCaseMinimum(policyGame, policySolution, safest));
+        }
         long t1 = System.nanoTime();
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, capacity, mission.scale(), worst, highest,
                 searched, game.vertexCount(), game.edgeCount(), game.estimate(), millis(game.buildNanos()),
-                millis(solved - t0), millis(t1 - t0), policy, game, sol, heat, notes);
+                millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes);
     }
 
     /** Verdict only (no policy, no search), for callers that probe many variants. */
@@ -180,13 +195,148 @@ public final class ReserveSolver {
     }
 
     /**
-     * The highest floor f in 0..start such that the robot wins with floor f, or -1 if none.
+     * The highest floor f in [f0, start] such that the robot wins with floor f, or -1 if none, where
+     * f0 is the floor of {@code base}: one product at floor f0 and one pass over it (a max-min
+     * fixpoint computed as an incremental attractor). For a floor f the game is the product at f0
+     * with the triples below level f, and the entries into WIN that arrive below f, removed; as f
+     * falls from the start to f0 these games only gain vertices and edges, so their attractors only
+     * grow and can be maintained incrementally (a vertex joins when it is admitted and ready: a
+     * robot triple with a successor in the attractor, a disturbance triple whose counter of other
+     * successors is zero). The answer is the first f at which the start joins.
+     *
+     * <p>O(|V| + |E| + start) for the product at f0. Checked in tests against
+     * {@link #highestFloorByBisection} and an independent brute force.
+     */
+    static int highestFloorByThresholds(Arena arena, GoalAutomaton goal, ReserveMonitor base, ProductOptions options) {
+        ProductGame game = ProductGame.fromStart(arena, goal, base, options);
+        int start = game.start();
+        if (start == ProductGame.WIN) {
+            return base.startUnits();
+        }
+        if (start == ProductGame.LOSE) {
+            return -1;
+        }
+        GameGraph g = game.graph();
+        int n = g.vertexCount();
+        int f0 = base.floorUnits();
+        int top = base.startUnits();
+        int span = top - f0 + 1;
+        // triples bucketed by level (only levels f0..start matter: the start must be admitted)
+        int[] vStart = new int[span + 1];
+        for (int v = 2; v < n; v++) {
+            int l = Math.min(top, base.level(game.monitorState(v)));
+            vStart[top - l + 1]++;
+        }
+        // entries into WIN bucketed by arrival level (above the start: admitted at once)
+        int winEdges = 0;
+        int[] eStart = new int[span + 1];
+        for (int i = g.inBegin(ProductGame.WIN); i < g.inEnd(ProductGame.WIN); i++) {
+            if (g.inSource(i) != ProductGame.WIN) {
+                winEdges++;
+            }
+        }
+        int[] winSource = new int[winEdges];
+        int[] winArrival = new int[winEdges];
+        int k = 0;
+        for (int d = 2; d < n; d++) {
+            if (g.isRobot(d)) {
+                continue;
+            }
+            for (int e = g.outBegin(d); e < g.outEnd(d); e++) {
+                if (g.target(e) == ProductGame.WIN) {
+                    int arrive = base.step(game.monitorState(d), arena.weight(game.arenaEdge(d, e)));
+                    winSource[k] = d;
+                    winArrival[k] = Math.min(top, base.level(arrive));
+                    eStart[top - winArrival[k] + 1]++;
+                    k++;
+                }
+            }
+        }
+        for (int i = 0; i < span; i++) {
+            vStart[i + 1] += vStart[i];
+            eStart[i + 1] += eStart[i];
+        }
+        int[] byLevel = new int[n];
+        int[] fill = java.util.Arrays.copyOf(vStart, span);
+        for (int v = 2; v < n; v++) {
+            int l = Math.min(top, base.level(game.monitorState(v)));
+            byLevel[fill[top - l]++] = v;
+        }
+        int[] winByLevel = new int[winEdges];
+        fill = java.util.Arrays.copyOf(eStart, span);
+        for (int i = 0; i < winEdges; i++) {
+            winByLevel[fill[top - winArrival[i]]++] = winSource[i];
+        }
+
+        int[] counter = new int[n];
+        for (int v = 2; v < n; v++) {
+            if (!g.isRobot(v)) {
+                counter[v] = g.outDegree(v);
+            }
+        }
+        boolean[] admitted = new boolean[n];
+        boolean[] ready = new boolean[n]; // robot triple with a successor in the attractor
+        boolean[] in = new boolean[n];
+        int[] queue = new int[n];
+        int head = 0;
+        int tail = 0;
+        java.util.function.BooleanSupplier cancelled = options.cancelled();
+        for (int b = 0; b < span; b++) {
+            if (cancelled.getAsBoolean()) {
+                throw new java.util.concurrent.CancellationException("search for the highest floor was cancelled");
+            }
+            int f = top - b;
+            for (int i = eStart[b]; i < eStart[b + 1]; i++) {
+                int d = winByLevel[i];
+                if (--counter[d] == 0 && admitted[d] && !in[d]) {
+                    in[d] = true;
+                    queue[tail++] = d;
+                }
+            }
+            for (int i = vStart[b]; i < vStart[b + 1]; i++) {
+                int v = byLevel[i];
+                admitted[v] = true;
+                if (!in[v] && (g.isRobot(v) ? ready[v] : counter[v] == 0)) {
+                    in[v] = true;
+                    queue[tail++] = v;
+                }
+            }
+            while (head < tail) {
+                int v = queue[head++];
+                for (int i = g.inBegin(v); i < g.inEnd(v); i++) {
+                    int u = g.inSource(i);
+                    if (in[u]) {
+                        continue;
+                    }
+                    boolean join;
+                    if (g.isRobot(u)) {
+                        ready[u] = true;
+                        join = admitted[u];
+                    } else {
+                        join = --counter[u] == 0 && admitted[u];
+                    }
+                    if (join) {
+                        in[u] = true;
+                        queue[tail++] = u;
+                    }
+                }
+            }
+            if (in[start]) {
+                return f;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * The highest floor f in 0..start such that the robot wins with floor f, or -1 if none, by
+     * bisection with one product and one attractor per probe; kept as a cross-check.
      * Winning is monotone (a strategy that keeps the level at or above f keeps it at or above any
      * lower floor), so bisection is exact. {@code knownTrue} is a floor already known to win, or -1;
      * the search runs over [knownTrue, start] when knownTrue &ge; 0, else over
      * [-1, min(below, start)] where {@code below} is the highest floor not yet known to lose.
      */
-    private static int highestFloor(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, int knownTrue,
+    static int highestFloorByBisection(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, int knownTrue,
                                     int below, ReserveOptions options) {
         int lo = knownTrue; // wins at lo (or lo == -1: nothing known)
         int hi = knownTrue >= 0 ? monitor.startUnits() : Math.min(below, monitor.startUnits());

@@ -52,10 +52,10 @@ public record SizeEstimate(long vertices, long edges, long bytes, long denseSlot
         if (n < 10_000) {
             return Long.toString(n);
         }
-        if (n < 10_000_000) {
+        if (n < 1_000_000) {
             return String.format(java.util.Locale.ROOT, "%.1f thousand", n / 1e3);
         }
-        if (n < 10_000_000_000L) {
+        if (n < 1_000_000_000) {
             return String.format(java.util.Locale.ROOT, "%.1f million", n / 1e6);
         }
         return String.format(java.util.Locale.ROOT, "%.1f billion", n / 1e9);

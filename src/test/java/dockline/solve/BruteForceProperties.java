@@ -47,6 +47,24 @@ class BruteForceProperties {
     }
 
     @Property(tries = 500)
+    void safestPolicy_keepsTheHighestFloor(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withSafestPolicy(true)
+                .withHighestReserve(false));
+        if (!a.guaranteed()) {
+            return;
+        }
+        int highest = new BruteForceMinimax(m).highestFloor();
+        String why = RandomMissions.describe(m);
+        assertThat(a.worstCaseMinimumUnits().getAsInt()).as(why).isEqualTo(highest);
+        assertThat(a.policyFloorUnits()).as(why).isIn(m.reserveUnits(), highest);
+        PolicyWalk.Result walk = new PolicyWalk(m, a.game().arena(), a.policy().orElseThrow()).run();
+        assertThat(walk.lowestLevel()).as(why).isEqualTo(highest);
+        SolutionChecks.assertValidSolution(a.game(), a.solution(),
+                new ReserveMonitor(a.policyFloorUnits(), m.capacityUnits(), m.startUnits()));
+    }
+
+    @Property(tries = 500)
     void verdictAtEveryFloor_matchesBruteForceMinimax(@ForAll long seed) {
         Mission m = RandomMissions.tiny(seed);
         BruteForceMinimax oracle = new BruteForceMinimax(m);

@@ -26,26 +26,26 @@ final class SolutionChecks {
      * successors, a losing disturbance vertex has a losing one (so nothing more could be won).
      */
     static void assertValidSolution(GameGraph g, Solution s) {
-        assertThat(s.vertexCount()).isEqualTo(g.vertexCount());
+        check(s.vertexCount() == g.vertexCount(), "solution covers %d vertices, graph has %d", s.vertexCount(),
+                g.vertexCount());
         for (int v = 0; v < g.vertexCount(); v++) {
             if (g.isTarget(v)) {
-                assertThat(s.rank(v)).as("rank of target %d", v).isZero();
+                check(s.rank(v) == 0, "target %d has rank %d", v, s.rank(v));
                 continue;
             }
             if (s.winning(v)) {
-                assertThat(s.rank(v)).as("rank of winning vertex %d", v).isPositive();
+                check(s.rank(v) > 0, "winning vertex %d has rank %d", v, s.rank(v));
                 if (g.isRobot(v)) {
                     int e = s.strategyEdge(v);
-                    assertThat(e).as("chosen edge of %d", v).isBetween(g.outBegin(v), g.outEnd(v) - 1);
+                    check(e >= g.outBegin(v) && e < g.outEnd(v), "chosen edge %d does not leave %d", e, v);
                     int t = g.target(e);
-                    assertThat(s.winning(t)).as("strategy of %d stays in the winning region", v).isTrue();
-                    assertThat(s.rank(t)).as("strategy of %d decreases the rank", v).isLessThan(s.rank(v));
+                    check(s.winning(t), "strategy of %d leaves the winning region", v);
+                    check(s.rank(t) < s.rank(v), "strategy of %d does not decrease the rank", v);
                 } else {
                     for (int e = g.outBegin(v); e < g.outEnd(v); e++) {
                         int t = g.target(e);
-                        assertThat(s.winning(t)).as("winning region closed under disturbance moves at %d", v).isTrue();
-                        assertThat(s.rank(t)).as("disturbance successor of %d has smaller rank", v)
-                                .isLessThan(s.rank(v));
+                        check(s.winning(t), "winning region not closed under disturbance moves at %d", v);
+                        check(s.rank(t) < s.rank(v), "disturbance successor of %d has no smaller rank", v);
                     }
                 }
             } else {
@@ -57,11 +57,17 @@ final class SolutionChecks {
                     allLosing &= l;
                 }
                 if (g.isRobot(v)) {
-                    assertThat(allLosing).as("losing robot vertex %d has a winning successor", v).isTrue();
+                    check(allLosing, "losing robot vertex %d has a winning successor", v);
                 } else {
-                    assertThat(someLosing).as("losing disturbance vertex %d has only winning successors", v).isTrue();
+                    check(someLosing, "losing disturbance vertex %d has only winning successors", v);
                 }
             }
+        }
+    }
+
+    private static void check(boolean ok, String what, Object... args) {
+        if (!ok) {
+            fail(String.format(what, args));
         }
     }
 

@@ -1,0 +1,190 @@
+package dockline.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.model.EnergyScale;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.report.Caveats;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.ReserveAnalysis;
+import dockline.solve.ReserveOptions;
+import dockline.solve.ReserveSolver;
+import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code dockline check MISSION}: decides whether the robot can always complete the mission
+ * without its battery dropping below the reserve floor, and reports the worst level under the
+ * policy, the highest floor that can be guaranteed, the size of the game and the time taken.
+ * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit.
+ */
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = {"Decides whether the robot can always finish the mission and dock without its battery going",
+                "below the reserve floor, whatever the building's disturbance model allows."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:guaranteed", "1:not guaranteed", "2:bad input or usage",
+                "3:the game is too large for the memory limit"})
+public final class CheckCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Mixin
+    MissionOptions mission;
+
+    @Option(names = "--json", description = "print the result as one JSON object")
+    boolean json;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            Mission m = mission.load(err);
+            if (!(m.objective() instanceof Objective.Reserve)) {
+                err.println("dockline: " + mission.missionFile + ": this mission's objective is a discounted score;"
+                        + " 'check' decides the reserve objective only so far");
+                return ExitCodes.BAD_INPUT;
+            }
+            if (m.reserveUnits() > m.capacityUnits()) {
+                err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                        + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
+                return ExitCodes.BAD_INPUT;
+            }
+            ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
+                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));
+            if (json) {
+                out.println(json(a));
+            } else {
+                human(a, out);
+            }
+            return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
+        } catch (ProductTooLargeException e) {
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
+            err.println("The limit is half the JVM's heap unless --max-memory MB says otherwise.");
+            return ExitCodes.RESOURCE_LIMIT;
+        } catch (ArithmeticException | OutOfMemoryError e) {
+            // a count past the int range, or an estimate that fell short of the heap actually needed
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage()
+                    + ". Use a coarser energy resolution or a smaller disturbance budget K, or give the JVM more"
+                    + " memory (-Xmx).");
+            return ExitCodes.RESOURCE_LIMIT;
+        } catch (IllegalArgumentException e) {
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    static void human(ReserveAnalysis a, PrintWriter out) {
+        Mission m = a.mission();
+        EnergyScale s = a.scale();
+        int k = m.map().disturbances().budget();
+        String events = k == 0 ? "with no disturbances" : "under up to " + k + " disturbance" + (k == 1 ? "" : "s");
+        if (a.guaranteed()) {
+            out.println("GUARANTEED: " + m.name() + " — the robot can always finish and dock " + events
+                    + " without going below the reserve floor.");
+        } else {
+            out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock " + events
+                    + " while staying at or above the reserve floor.");
+        }
+        if (a.worstCaseMinimumUnits().isPresent()) {
+            out.println("  Worst battery level under the policy:  " + amount(a.worstCaseMinimumUnits().getAsInt(), a)
+                    + (a.policyFloorUnits() > a.reserveUnits() ? " (the safest policy; it may take more moves)"
+                    : " (the policy finishes in the fewest moves in the worst case)"));
+        } else {
+            out.println("  Worst battery level under the policy:  none (there is no safe policy)");
+        }
+        OptionalInt h = a.highestGuaranteedReserveUnits();
+        if (h.isPresent()) {
+            out.println("  Highest reserve floor guaranteed:      " + amount(h.getAsInt(), a));
+        } else if (a.highestReserveSearched()) {
+            out.println("  Highest reserve floor guaranteed:      none (not even a floor of 0 can be guaranteed)");
+        } else {
+            out.println("  Highest reserve floor guaranteed:      not computed");
+        }
+        out.println("  Start " + amount(a.startUnits(), a) + ", reserve floor " + amount(a.reserveUnits(), a)
+                + ", capacity " + s.formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
+        out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
+                + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
+        out.println("  Energy: " + s.describe());
+        for (String note : a.notes()) {
+            out.println("  Note: " + note);
+        }
+        out.println(Caveats.block());
+    }
+
+    /** E.g. {@code 49 units = 24.5 Wh (40.8%)}. */
+    static String amount(int units, ReserveAnalysis a) {
+        return units + " units = " + a.scale().formatWh(units) + " (" + percent(units, a) + "%)";
+    }
+
+    /** Share of the capacity in Wh, one decimal, for display only. */
+    static String percent(int units, ReserveAnalysis a) {
+        BigDecimal cap = a.mission().robot().capacityWh();
+        return a.scale().toWh(units).multiply(BigDecimal.valueOf(100)).divide(cap, 1, RoundingMode.HALF_UP)
+                .stripTrailingZeros().toPlainString();
+    }
+
+    static String json(ReserveAnalysis a) {
+        ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+        ObjectNode o = mapper.createObjectNode();
+        Mission m = a.mission();
+        o.put("mission", m.name());
+        o.put("file", m.source() == null ? null : m.source().toString());
+        o.put("verdict", a.verdict().word());
+        o.put("startUnits", a.startUnits());
+        o.put("reserveUnits", a.reserveUnits());
+        o.put("capacityUnits", a.capacityUnits());
+        putOptional(o, "worstCaseMinimumUnits", a.worstCaseMinimumUnits());
+        putOptional(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        o.put("highestReserveSearched", a.highestReserveSearched());
+        o.put("policyFloorUnits", a.policyFloorUnits());
+        o.put("unitWh", a.scale().unitWh().stripTrailingZeros());
+        o.put("budget", m.map().disturbances().budget());
+        o.put("productVertices", a.productVertices());
+        o.put("productEdges", a.productEdges());
+        o.put("estimatedVertices", a.estimate().vertices());
+        o.put("estimatedEdges", a.estimate().edges());
+        o.put("buildMillis", a.buildMillis());
+        o.put("solveMillis", a.solveMillis());
+        o.put("totalMillis", a.totalMillis());
+        if (a.policy().isPresent()) {
+            o.put("policyRows", a.policy().get().size());
+        } else {
+            o.putNull("policyRows");
+        }
+        o.put("discretisation", a.scale().describe());
+        ArrayNode notes = o.putArray("notes");
+        a.notes().forEach(notes::add);
+        ArrayNode caveats = o.putArray("caveats");
+        Caveats.LINES.forEach(caveats::add);
+        try {
+            return mapper.writeValueAsString(o);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException("cannot write JSON", e);
+        }
+    }
+
+    private static void putOptional(ObjectNode o, String key, OptionalInt v) {
+        if (v.isPresent()) {
+            o.put(key, v.getAsInt());
+        } else {
+            o.putNull(key);
+        }
+    }
+}

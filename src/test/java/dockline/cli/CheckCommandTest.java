@@ -1,0 +1,137 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.io.PolicyFiles;
+import dockline.report.Caveats;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** {@code dockline check} and {@code dockline export} on the demo missions: exit codes and output. */
+class CheckCommandTest {
+
+    @TempDir
+    Path dir;
+
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        int code = cl.execute(args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void guaranteedMission_exitsZeroWithTheSummary() {
+        Run r = run("check", "missions/night-round.yaml");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        String[] lines = r.out().split("\\R");
+        assertThat(lines[0]).startsWith("GUARANTEED: Night round, clinic east wing");
+        assertThat(r.out()).contains("Worst battery level under the policy:  ", " units = ", " Wh (", "%)")
+                .contains("Highest reserve floor guaranteed:").contains("Game: ").contains(" vertices, ")
+                .contains("1 unit = 0.5 Wh; consumption and reserve floor rounded up")
+                .contains(Caveats.block());
+    }
+
+    @Test
+    void json_hasTheDocumentedKeys() throws Exception {
+        Run r = run("check", "missions/night-round.yaml", "--json");
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
+        for (String k : new String[] {"reserveUnits", "startUnits", "worstCaseMinimumUnits",
+                "highestGuaranteedReserveUnits", "productVertices", "productEdges", "solveMillis"}) {
+            assertThat(j.get(k).isIntegralNumber()).as(k).isTrue();
+        }
+        assertThat(j.get("unitWh").decimalValue()).isEqualByComparingTo("0.5");
+        assertThat(j.get("caveats").size()).isEqualTo(Caveats.LINES.size());
+        assertThat(j.get("worstCaseMinimumUnits").asInt()).isGreaterThanOrEqualTo(j.get("reserveUnits").asInt());
+    }
+
+    @Test
+    void notGuaranteedMission_exitsOneWithNullWorstCase() throws Exception {
+        Run r = run("check", "missions/late-return.yaml", "--json");
+        assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertThat(j.get("verdict").asText()).isEqualTo("not-guaranteed");
+        assertThat(j.get("worstCaseMinimumUnits").isNull()).isTrue();
+        Run human = run("check", "missions/late-return.yaml");
+        assertThat(human.out()).startsWith("NOT GUARANTEED: ").contains("none (there is no safe policy)");
+    }
+
+    @Test
+    void overrides_changeTheVerdict() {
+        // a fuller battery and a lower floor make the late return safe
+        Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("reserve floor 30 units = 15 Wh (10%)");
+        Run none = run("check", "missions/late-return.yaml", "--budget", "0", "--json");
+        assertThat(none.out()).contains("\"budget\" : 0");
+    }
+
+    @Test
+    void safestPolicy_keepsTheHighestGuaranteedFloor() throws Exception {
+        JsonNode j = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json", "--safest-policy").out());
+        assertThat(j.get("worstCaseMinimumUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(j.get("policyFloorUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(run("check", "missions/night-round.yaml", "--safest-policy").out()).contains("the safest policy");
+    }
+
+    @Test
+    void overMemoryLimit_exitsThreeAndSaysWhatToChange() {
+        Run r = run("check", "missions/late-return.yaml", "--max-memory", "1");
+        assertThat(r.code()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
+        assertThat(r.err()).contains("vertices", "MB", "coarser energy resolution", "smaller disturbance budget K");
+        assertThat(r.out()).isEmpty();
+    }
+
+    @Test
+    void badOverrides_areAllReportedWithExitTwo() {
+        Run r = run("check", "missions/late-return.yaml", "--reserve", "120%", "--start-charge", "2x", "--budget", "-1");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--reserve", "--start-charge", "--budget").doesNotContain("Exception");
+        assertThat(run("check", dir.resolve("missing.yaml").toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("check").code()).isEqualTo(ExitCodes.BAD_INPUT);
+    }
+
+    @Test
+    void export_writesAPolicyThatReadsBack() throws Exception {
+        for (String name : new String[] {"night.csv", "night.json"}) {
+            Path f = dir.resolve(name);
+            Run r = run("export", "missions/night-round.yaml", "--policy", f.toString());
+            assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+            PolicyFiles.Document d = PolicyFiles.read(f);
+            assertThat(d.header().mission()).isEqualTo("Night round, clinic east wing");
+            assertThat(d.header().floorUnits()).isEqualTo(24);
+            assertThat(r.out()).contains(d.policy().size() + " rows").contains(Caveats.block());
+        }
+    }
+
+    @Test
+    void export_ofANotGuaranteedMission_writesNothing() throws Exception {
+        Path f = dir.resolve("keep.json");
+        Files.writeString(f, "old content");
+        Run r = run("export", "missions/late-return.yaml", "--policy", f.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(Files.readString(f)).isEqualTo("old content");
+    }
+
+    @Test
+    void help_listsTheNewSubcommands() {
+        Run r = run("--help");
+        assertThat(r.out()).contains("check", "export");
+        assertThat(run("check", "--help").out()).contains("--reserve", "--start-charge", "--budget", "--json");
+    }
+}
