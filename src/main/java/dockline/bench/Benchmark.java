@@ -13,6 +13,7 @@ import dockline.solve.MinChargeSolver;
 import dockline.solve.ProductGame;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
+import dockline.solve.ReserveSizeForecast;
 import dockline.solve.SizeEstimate;
 import dockline.solve.Solution;
 import dockline.solve.Verdict;
@@ -182,28 +183,40 @@ public final class Benchmark {
         T run();
     }
 
-    /** The value of the last run, the best time over the runs, the peak heap of the first run. */
-    private record Timed<T>(T value, double millis, long peak) {
+    /** The value of the last run, the best wall and CPU times over the runs, the peak heap of the first run. */
+    private record Timed<T>(T value, double millis, double cpuMillis, long peak) {
+    }
+
+    private static final java.lang.management.ThreadMXBean THREADS =
+            java.lang.management.ManagementFactory.getThreadMXBean();
+
+    /** CPU time of this thread in ns, or -1 when not supported. */
+    private static long cpuNow() {
+        return THREADS.isCurrentThreadCpuTimeSupported() ? THREADS.getCurrentThreadCpuTime() : -1;
     }
 
     /** Runs {@code body} {@code reps} times; the heap is sampled during the first run, above {@code base}. */
     private static <T> Timed<T> time(HeapSampler sampler, long base, int reps, Body<T> body) {
         double best = Double.MAX_VALUE;
+        double bestCpu = Double.MAX_VALUE;
         long peak = -1;
         T value = null;
         for (int r = 0; r < reps; r++) {
             if (r == 0) {
                 sampler.start();
             }
+            long c0 = cpuNow();
             long t0 = System.nanoTime();
             value = body.run();
             double ms = (System.nanoTime() - t0) / 1e6;
+            long c1 = cpuNow();
             if (r == 0) {
                 peak = sampler.stop() - base;
             }
             best = Math.min(best, ms);
+            bestCpu = Math.min(bestCpu, c0 < 0 ? -1 : (c1 - c0) / 1e6);
         }
-        return new Timed<>(value, best, peak);
+        return new Timed<>(value, best, bestCpu, peak);
     }
 
     private static final String[] CSR_METHODS = {"attractor", "compact", "bfs", "sweep"};
@@ -217,10 +230,13 @@ public final class Benchmark {
         Mission m = inst.mission;
         ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
         SizeEstimate est = ProductGame.estimate(inst.arena, inst.goal, monitor, false);
+        long tf0 = System.nanoTime();
+        ReserveSizeForecast.Forecast forecast = ReserveSizeForecast.of(inst.arena, inst.goal, monitor);
+        double forecastMs = (System.nanoTime() - tf0) / 1e6;
         long budget = ProductOptions.defaultMemoryBudget();
         String skip = null;
-        if (est.vertices() > config.maxProductVertices()) {
-            skip = "skipped: the estimate (" + est.describe() + ") is over this run's limit of "
+        if (forecast.vertices() > config.maxProductVertices()) {
+            skip = "skipped: the forecast (" + forecast.vertices() + " vertices) is over this run's limit of "
                     + config.maxProductVertices() + " vertices";
         } else if (est.bytes() > budget) {
             skip = "does not fit: the estimate (" + est.describe() + ") is over the memory budget of "
@@ -253,20 +269,21 @@ public final class Benchmark {
         double wall0 = inst.arenaMillis + buildMs;
 
         Timed<Solution> at = time(sampler, base, reps, () -> new AttractorSolver(game.graph()).solve());
-        rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(),
+        rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
                 Math.max(buildPeak, at.peak()), Verdict.of(at.value().winning(game.start())).word(), wall0 + at.millis(),
-                est.vertices(), String.format(java.util.Locale.ROOT,
-                        "main route: ProductGame + AttractorSolver; estimate %.2fx the real size",
-                        est.vertices() / (double) n)));
+                est.vertices(), forecast.vertices(), String.format(java.util.Locale.ROOT,
+                        "main route: ProductGame + AttractorSolver; its estimate %.2fx the real size,"
+                                + " ReserveSizeForecast %.2fx (in %.0f ms)",
+                        est.vertices() / (double) n, forecast.vertices() / (double) n, forecastMs)));
 
         Timed<Solution> ct = time(sampler, base, reps, () -> new CompactAttractorSolver(game.graph()).solve());
-        rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(),
+        rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
                 Math.max(buildPeak, ct.peak()), Verdict.of(ct.value().winning(game.start())).word(),
-                wall0 + ct.millis(), -1, "the same product graph, CompactAttractorSolver"));
+                wall0 + ct.millis(), -1, -1, "the same product graph, CompactAttractorSolver"));
 
         Timed<GraphBaselines.Traversal> bt = time(sampler, base, reps, () -> GraphBaselines.bfs(game.graph(), game.start()));
         rows.add(new BenchRow(inst.side, inst.kind, "bfs", bt.value().vertices(), bt.value().edges(), buildMs,
-                bt.millis(), Math.max(buildPeak, bt.peak()), null, wall0 + bt.millis(), -1,
+                bt.millis(), bt.cpuMillis(), Math.max(buildPeak, bt.peak()), null, wall0 + bt.millis(), -1, -1,
                 "plain BFS over the same product graph, from the start"));
 
         long cap = warmup ? 2_000 : config.sweepCapMillis();
@@ -274,12 +291,12 @@ public final class Benchmark {
         BooleanSupplier late = () -> System.nanoTime() > deadline;
         Timed<GraphBaselines.Sweeps> st = time(sampler, base, 1, () -> GraphBaselines.sweep(game.graph(), late));
         if (st.value() == null) {
-            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, -1, -1, null, -1, -1,
+            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, -1, -1, -1, null, -1, -1, -1,
                     "stopped after " + cap + " ms (the time cap of this run)"));
         } else {
-            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, st.millis(),
+            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, st.millis(), st.cpuMillis(),
                     Math.max(buildPeak, st.peak()), Verdict.of(st.value().won()[game.start()]).word(),
-                    wall0 + st.millis(), -1, st.value().sweeps() + " naive sweeps over the same product graph"));
+                    wall0 + st.millis(), -1, -1, st.value().sweeps() + " naive sweeps over the same product graph"));
         }
         return rows;
     }
@@ -327,17 +344,17 @@ public final class Benchmark {
         Timed<ImplicitReserveGame.Result> early = time(sampler, base, reps, () -> game.solve(true));
         Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, reps, game::bfs);
         rows.add(new BenchRow(inst.side, inst.kind, "implicit", all, full.value().edgesScanned(), 0, full.millis(),
-                full.peak(), Verdict.of(full.value().startWon()).word(), inst.arenaMillis + full.millis(), -1,
+                full.cpuMillis(), full.peak(), Verdict.of(full.value().startWon()).word(), inst.arenaMillis + full.millis(), -1, -1,
                 String.format(java.util.Locale.ROOT, "implicit product (every triple, %d reachable); won %d",
                         bfs.value().wonVertices(), full.value().wonVertices())));
         rows.add(new BenchRow(inst.side, inst.kind, "early", all, early.value().edgesScanned(), 0, early.millis(),
-                early.peak(), Verdict.of(early.value().startWon()).word(), inst.arenaMillis + early.millis(), -1,
+                early.cpuMillis(), early.peak(), Verdict.of(early.value().startWon()).word(), inst.arenaMillis + early.millis(), -1, -1,
                 String.format(java.util.Locale.ROOT, "implicit, stops once the start is won: %s; won %d (%.0f%% of"
                                 + " the full attractor's)", early.value().stoppedEarly() ? "stopped early" : "ran to the end",
                         early.value().wonVertices(),
                         100.0 * early.value().wonVertices() / Math.max(1, full.value().wonVertices()))));
         rows.add(new BenchRow(inst.side, inst.kind, "implicit-bfs", bfs.value().wonVertices(),
-                bfs.value().edgesScanned(), 0, bfs.millis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1,
+                bfs.value().edgesScanned(), 0, bfs.millis(), bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
                 "plain BFS over the implicit product, from the start"));
         return rows;
     }
@@ -348,21 +365,8 @@ public final class Benchmark {
             return BenchRow.skipped(inst.side, inst.kind, "fast", 0, 0, "the robot can charge before completion");
         }
         long base = HeapSampler.settledUsed();
-        double best = Double.MAX_VALUE;
-        MinChargeSolver.Result res = null;
-        long peak = -1;
-        for (int r = 0; r < reps; r++) {
-            if (r == 0) {
-                sampler.start();
-            }
-            long t0 = System.nanoTime();
-            res = new MinChargeSolver(inst.arena, inst.goal).decide();
-            double ms = (System.nanoTime() - t0) / 1e6;
-            if (r == 0) {
-                peak = sampler.stop() - base;
-            }
-            best = Math.min(best, ms);
-        }
+        Timed<MinChargeSolver.Result> t = time(sampler, base, reps, () -> new MinChargeSolver(inst.arena, inst.goal).decide());
+        MinChargeSolver.Result res = t.value();
         long v = (long) inst.arena.vertexCount() * inst.goal.stateCount();
         long e = (long) inst.arena.edgeCount() * inst.goal.stateCount();
         String note = String.format(java.util.Locale.ROOT,
@@ -370,8 +374,8 @@ public final class Benchmark {
                 res.describeNeed(), res.availableUnits(), res.explored(),
                 (long) inst.arena.robotCount() * inst.goal.stateCount(),
                 100.0 * res.explored() / Math.max(1, (long) inst.arena.robotCount() * inst.goal.stateCount()));
-        return new BenchRow(inst.side, inst.kind, "fast", v, e, 0, best, peak, Verdict.of(res.guaranteed()).word(),
-                inst.arenaMillis + best, -1, note);
+        return new BenchRow(inst.side, inst.kind, "fast", v, e, 0, t.millis(), t.cpuMillis(), t.peak(),
+                Verdict.of(res.guaranteed()).word(), inst.arenaMillis + t.millis(), -1, -1, note);
     }
 
     static String megabytes(long bytes) {
