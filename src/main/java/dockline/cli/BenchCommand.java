@@ -41,7 +41,8 @@ public final class BenchCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
         Benchmark.Config config = new Benchmark.Config(base.sizes(), base.fastOnlySizes(), seed, base.budget(),
-                base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices());
+                base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices(),
+                base.maxImplicitVertices());
         PrintWriter progress = json ? err : out;
         progress.println(quick ? "dockline bench --quick" : "dockline bench (full run, up to ten minutes)");
         progress.flush();
