@@ -30,7 +30,8 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {"Decides whether the robot can always finish the mission and dock without its battery going",
-                "below the reserve floor, whatever the building's disturbance model allows."},
+                "below the reserve floor, whatever the building's disturbance model allows.",
+                "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed", "1:not guaranteed", "2:bad input or usage",
                 "3:the game is too large for the memory limit"})
@@ -45,21 +46,30 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the result as one JSON object")
     boolean json;
 
+    @Mixin
+    DiscountedCheck discounted;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         try {
             Mission m = mission.load(err);
-            if (!(m.objective() instanceof Objective.Reserve)) {
-                err.println("dockline: " + mission.missionFile + ": this mission's objective is a discounted score;"
-                        + " 'check' decides the reserve objective only so far");
+            Objective objective = discounted.objective(m.objective(), err);
+            if (objective == null) {
+                return ExitCodes.BAD_INPUT;
+            }
+            if (objective instanceof Objective.Discounted && mission.safestPolicy) {
+                err.println("dockline: --safest-policy applies to the reserve objective only");
                 return ExitCodes.BAD_INPUT;
             }
             if (m.reserveUnits() > m.capacityUnits()) {
                 err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
                         + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
                 return ExitCodes.BAD_INPUT;
+            }
+            if (objective instanceof Objective.Discounted d) {
+                return discounted.run(m.withObjective(d), d, mission.memoryBudgetBytes(), json, out);
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
                     .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));

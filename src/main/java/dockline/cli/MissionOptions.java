@@ -21,11 +21,11 @@ final class MissionOptions {
     Path missionFile;
 
     @Option(names = "--reserve", paramLabel = "CHARGE",
-            description = "reserve floor instead of the mission's: Wh (12, 12 Wh) or % of the capacity (20%)")
+            description = "reserve floor instead of the mission's: Wh (12, 12 Wh) or %% of the capacity (20%%)")
     String reserve;
 
     @Option(names = "--start-charge", paramLabel = "CHARGE",
-            description = "starting charge instead of the mission's: Wh or % of the capacity")
+            description = "starting charge instead of the mission's: Wh or %% of the capacity")
     String startCharge;
 
     @Option(names = "--budget", paramLabel = "K",

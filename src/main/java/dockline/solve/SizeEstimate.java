@@ -62,7 +62,11 @@ public record SizeEstimate(long vertices, long edges, long bytes, long denseSlot
     }
 
     static String megabytes(long bytes) {
-        long mb = (bytes + (1 << 20) - 1) >> 20;
+        if (bytes == Long.MAX_VALUE) {
+            return "more than can be counted (the estimate saturated)";
+        }
+        // round up without overflow: bytes + 2^20 - 1 could pass Long.MAX_VALUE
+        long mb = (bytes >> 20) + ((bytes & ((1 << 20) - 1)) != 0 ? 1 : 0);
         return mb >= 10_000 ? String.format(java.util.Locale.ROOT, "%.1f GB", bytes / (double) (1L << 30))
                 : mb + " MB";
     }
