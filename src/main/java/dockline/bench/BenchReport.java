@@ -93,7 +93,7 @@ public final class BenchReport {
         ratios.put("earlyOverImplicit", ratioPerSize(res, "early", "implicit", false));
         ratios.put("sweepOverAttractor", ratioPerSize(res, "sweep", "attractor", false));
         ratios.put("fixpointOverAttractor", ratioPerSize(res, "fixpoint", "attractor", false));
-        Map<String, Double> vi = ratioPerSize(Benchmark.DISCOUNTED, "vi", "attractor", true);
+        Map<String, Double> vi = ratioPerSize(Benchmark.DISCOUNTED, "vi", "attractor", false);
         ratios.put("viOverComparator", vi);
         Map<String, Double> bpv = new LinkedHashMap<>();
         Map<String, Double> est = new LinkedHashMap<>();
