@@ -4,10 +4,15 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.certify.Certificate;
+import dockline.certify.CertificateChecker;
+import dockline.margin.Suggestion;
+import dockline.margin.Suggestions;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
+import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
@@ -15,6 +20,7 @@ import dockline.solve.ReserveSolver;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
+import java.util.List;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
@@ -26,15 +32,19 @@ import picocli.CommandLine.Option;
  * {@code dockline check MISSION}: decides whether the robot can always complete the mission
  * without its battery dropping below the reserve floor, and reports the worst level under the
  * policy, the highest floor that can be guaranteed, the size of the game and the time taken.
- * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit.
+ * Every "guaranteed" verdict is re-checked by {@link CertificateChecker} before it is reported; a
+ * failed certificate is an internal error (exit 4), never a silent "guaranteed". A mission that is
+ * not guaranteed gets {@link Suggestions}.
+ * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit, 4 internal error.
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {"Decides whether the robot can always finish the mission and dock without its battery going",
                 "below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
         exitCodeListHeading = "%nExit codes:%n",
-        exitCodeList = {"0:guaranteed", "1:not guaranteed", "2:bad input or usage",
-                "3:the game is too large for the memory limit"})
+        exitCodeList = {"0:guaranteed (and its policy certified)", "1:not guaranteed", "2:bad input or usage",
+                "3:the game is too large for the memory limit",
+                "4:internal error (e.g. the policy failed its independent certificate)"})
 public final class CheckCommand implements Callable<Integer> {
 
     @CommandLine.Spec
@@ -73,10 +83,25 @@ public final class CheckCommand implements Callable<Integer> {
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
                     .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));
+            // never a silent "guaranteed": the policy is re-checked on an independent code path
+            Certificate cert = null;
+            if (a.guaranteed()) {
+                cert = CertificateChecker.check(a.game().arena(), a.policy().orElseThrow(), a.reserveUnits(),
+                        a.startUnits());
+                if (!cert.ok()) {
+                    err.println("dockline: internal error: the solver says guaranteed, but its policy failed the"
+                            + " independent certificate: " + cert.reason());
+                    err.println("No verdict is given. Please report this with the input files.");
+                    return ExitCodes.INTERNAL;
+                }
+            }
+            List<Suggestion> suggestions = a.guaranteed() ? List.of()
+                    : Suggestions.find(m, ProductOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()),
+                            a.highestReserveSearched() ? a.highestGuaranteedReserveUnits() : OptionalInt.empty());
             if (json) {
-                out.println(json(a));
+                out.println(json(a, cert, suggestions));
             } else {
-                human(a, out);
+                human(a, cert, suggestions, out);
             }
             return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
         } catch (MissionOptions.BadInput e) {
@@ -101,6 +126,11 @@ public final class CheckCommand implements Callable<Integer> {
     }
 
     static void human(ReserveAnalysis a, PrintWriter out) {
+        human(a, null, List.of(), out);
+    }
+
+    /** The summary with the certificate line (when guaranteed) and the suggestions (when not). */
+    static void human(ReserveAnalysis a, Certificate cert, List<Suggestion> suggestions, PrintWriter out) {
         Mission m = a.mission();
         EnergyScale s = a.scale();
         int k = m.map().disturbances().budget();
@@ -132,6 +162,16 @@ public final class CheckCommand implements Callable<Integer> {
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
                 + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
         out.println("  Energy: " + s.describe());
+        if (cert != null) {
+            out.println("  certified: " + cert.ok() + " (the policy re-checked independently over " + cert.statesChecked()
+                    + " situations; never below " + amount(cert.worstMinimumUnits(), a) + ")");
+        }
+        if (!suggestions.isEmpty()) {
+            out.println("  To make it guaranteed, change one of (smallest change first):");
+            for (Suggestion sg : suggestions) {
+                out.println("    - " + sg.text());
+            }
+        }
         for (String note : a.notes()) {
             out.println("  Note: " + note);
         }
@@ -151,6 +191,10 @@ public final class CheckCommand implements Callable<Integer> {
     }
 
     static String json(ReserveAnalysis a) {
+        return json(a, null, List.of());
+    }
+
+    static String json(ReserveAnalysis a, Certificate cert, List<Suggestion> suggestions) {
         ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode o = mapper.createObjectNode();
         Mission m = a.mission();
@@ -177,6 +221,19 @@ public final class CheckCommand implements Callable<Integer> {
             o.put("policyRows", a.policy().get().size());
         } else {
             o.putNull("policyRows");
+        }
+        o.put("certified", cert != null && cert.ok());
+        if (cert != null) {
+            o.put("certifiedStates", cert.statesChecked());
+            o.put("certifiedWorstMinimumUnits", cert.worstMinimumUnits());
+        }
+        ArrayNode sug = o.putArray("suggestions");
+        for (Suggestion sg : suggestions) {
+            ObjectNode so = sug.addObject();
+            so.put("kind", sg.kind().word());
+            so.put("from", sg.from());
+            so.put("to", sg.to());
+            so.put("text", sg.text());
         }
         o.put("discretisation", a.scale().describe());
         ArrayNode notes = o.putArray("notes");

@@ -52,6 +52,8 @@ public final class Main implements Runnable {
             new ValidateCommand(),
             new CheckCommand(),
             new ExportCommand(),
+            new ReplayCommand(),
+            new MarginCommand(),
             new BenchCommand(),
         };
     }

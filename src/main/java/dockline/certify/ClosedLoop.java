@@ -1,0 +1,430 @@
+package dockline.certify;
+
+import dockline.arena.Action;
+import dockline.arena.Arena;
+import dockline.model.Cell;
+import dockline.model.Mission;
+import dockline.solve.Policy;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The closed loop of a robot policy against every disturbance choice: the graph whose nodes are the
+ * robot situations (arena robot vertex, battery level, task progress) reachable from the start when
+ * the robot follows the policy, and whose edges are the disturbance's outcomes (arena edges).
+ *
+ * <p>Built by breadth-first search from the start, so the first problem found (a missing or illegal
+ * policy entry, a level below the floor, an avoided zone) has a shortest trace. Complete situations
+ * (all tasks done, on a dock when required) have no successors. Battery levels follow DESIGN.md 2.3:
+ * {@code level' = min(capacity, level + delta)}; a successor below the floor is not a node.
+ *
+ * <p>Cost: O(N + E) time and memory plus one policy lookup per node, for N nodes and E edges of the
+ * loop; everything is stored in int arrays. The task progress is this package's own bookkeeping
+ * ({@link TaskProgress}), not the solver's goal automaton.
+ */
+public final class ClosedLoop {
+
+    /** Successor code: the outcome leaves the battery below the floor. */
+    public static final int LOST_BELOW_FLOOR = -1;
+    /** Successor code: the outcome puts the robot in an avoided zone. */
+    public static final int LOST_AVOIDED_ZONE = -2;
+
+    /** Default limit on the loop size. */
+    public static final int DEFAULT_MAX_NODES = 20_000_000;
+
+    /** What went wrong while building the loop. */
+    public enum ProblemKind {
+        START_BELOW_FLOOR, START_IN_AVOIDED_ZONE, MISSING_ENTRY, ILLEGAL_ACTION, BELOW_FLOOR, AVOIDED_ZONE
+    }
+
+    /**
+     * The first problem found.
+     *
+     * @param kind   what went wrong
+     * @param node   the loop node where it happened
+     * @param edge   the arena outcome edge that caused it, or -1
+     * @param level  for {@link ProblemKind#BELOW_FLOOR}: the level reached; otherwise the node's level
+     */
+    public record Problem(ProblemKind kind, int node, int edge, int level) {
+    }
+
+    /** The loop would exceed the node limit. */
+    public static final class TooLargeException extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        TooLargeException(int limit) {
+            super("the closed loop of the policy has more than " + limit + " states");
+        }
+    }
+
+    private final Arena arena;
+    private final Policy policy;
+    private final int floor;
+    private final int startLevel;
+    private final int capacity;
+    private final TaskProgress progress;
+
+    private final IntArrayList nodeVertex = new IntArrayList(1024);
+    private final IntArrayList nodeLevel = new IntArrayList(1024);
+    private final IntArrayList nodeMask = new IntArrayList(1024);
+    private final IntArrayList nodeChoice = new IntArrayList(1024);
+    private final IntArrayList nodeParent = new IntArrayList(1024);
+    private final IntArrayList nodeParentEdge = new IntArrayList(1024);
+    private final IntArrayList succStart = new IntArrayList(1024);
+    private final IntArrayList succNode = new IntArrayList(4096);
+    private final IntArrayList succEdge = new IntArrayList(4096);
+    private int expanded;
+    private Problem problem;
+
+    private ClosedLoop(Arena arena, Policy policy, int floor, int startLevel) {
+        this.arena = arena;
+        this.policy = policy;
+        this.floor = floor;
+        this.startLevel = startLevel;
+        Mission m = arena.mission();
+        this.capacity = m.capacityUnits();
+        this.progress = TaskProgress.of(m);
+    }
+
+    /**
+     * Builds the loop from the arena's start vertex with the given start level; stops at the first
+     * problem.
+     *
+     * @throws TooLargeException if the loop has more than {@code maxNodes} nodes
+     */
+    static ClosedLoop build(Arena arena, Policy policy, int floor, int startLevel, int maxNodes) {
+        ClosedLoop loop = new ClosedLoop(arena, policy, floor, startLevel);
+        loop.explore(maxNodes);
+        return loop;
+    }
+
+    private void explore(int maxNodes) {
+        int v0 = arena.startVertex();
+        int m0 = progress.step(0, arena.cellZones(arena.cell(v0)));
+        LongIntMap ids = new LongIntMap(1 << 12);
+        addNode(ids, v0, startLevel, Math.max(m0, 0), -1, -1);
+        if (startLevel < floor) {
+            problem = new Problem(ProblemKind.START_BELOW_FLOOR, 0, -1, startLevel);
+            return;
+        }
+        if (m0 == TaskProgress.AVOIDED) {
+            problem = new Problem(ProblemKind.START_IN_AVOIDED_ZONE, 0, -1, startLevel);
+            return;
+        }
+        for (int n = 0; n < nodeVertex.size(); n++) {
+            succStart.add(succNode.size());
+            expanded = n + 1;
+            int v = nodeVertex.get(n);
+            int level = nodeLevel.get(n);
+            int mask = nodeMask.get(n);
+            int cell = arena.cell(v);
+            if (progress.complete(mask, arena.isDock(cell))) {
+                nodeChoice.add(-1);
+                continue;
+            }
+            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask);
+            if (act.isEmpty()) {
+                nodeChoice.add(-1);
+                problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);
+                return;
+            }
+            int d = legalChoice(v, act.get());
+            nodeChoice.add(d);
+            if (d < 0) {
+                problem = new Problem(ProblemKind.ILLEGAL_ACTION, n, -1, level);
+                return;
+            }
+            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+                int u = arena.target(e);
+                long raw = (long) level + arena.weight(e);
+                int next = (int) Math.min(capacity, raw);
+                if (raw < floor) {
+                    succNode.add(LOST_BELOW_FLOOR);
+                    succEdge.add(e);
+                    problem = new Problem(ProblemKind.BELOW_FLOOR, n, e, (int) Math.max(Integer.MIN_VALUE, raw));
+                    return;
+                }
+                int nextMask = progress.step(mask, arena.cellZones(arena.cell(u)));
+                if (nextMask == TaskProgress.AVOIDED) {
+                    succNode.add(LOST_AVOIDED_ZONE);
+                    succEdge.add(e);
+                    problem = new Problem(ProblemKind.AVOIDED_ZONE, n, e, next);
+                    return;
+                }
+                long key = key(u, next, nextMask);
+                int id = ids.get(key);
+                if (id < 0) {
+                    if (nodeVertex.size() >= maxNodes) {
+                        throw new TooLargeException(maxNodes);
+                    }
+                    id = addNode(ids, u, next, nextMask, n, e);
+                }
+                succNode.add(id);
+                succEdge.add(e);
+            }
+        }
+        succStart.add(succNode.size());
+    }
+
+    private int addNode(LongIntMap ids, int v, int level, int mask, int parent, int parentEdge) {
+        int id = nodeVertex.size();
+        nodeVertex.add(v);
+        nodeLevel.add(level);
+        nodeMask.add(mask);
+        nodeParent.add(parent);
+        nodeParentEdge.add(parentEdge);
+        ids.put(key(v, level, mask), id);
+        return id;
+    }
+
+    private long key(int v, int level, int mask) {
+        long k = Math.addExact(Math.multiplyExact((long) v, (long) capacity + 1), level);
+        return Math.addExact(Math.multiplyExact(k, 1L << progress.taskCount()), mask);
+    }
+
+    /** The disturbance vertex of the robot vertex whose action equals {@code a}, or -1 if none (illegal). */
+    private int legalChoice(int v, Action a) {
+        for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
+            int d = arena.target(e);
+            if (arena.actionKind(d) == a.kind() && arena.action(d).target().equals(a.target())) {
+                return d;
+            }
+        }
+        return -1;
+    }
+
+    public Arena arena() {
+        return arena;
+    }
+
+    public Policy policy() {
+        return policy;
+    }
+
+    public int floor() {
+        return floor;
+    }
+
+    public int startLevel() {
+        return startLevel;
+    }
+
+    public int capacity() {
+        return capacity;
+    }
+
+    /** Whether the whole loop was built (no problem stopped the search). */
+    public boolean complete() {
+        return problem == null;
+    }
+
+    public Optional<Problem> problem() {
+        return Optional.ofNullable(problem);
+    }
+
+    /** Number of nodes found (the start is node 0). */
+    public int nodeCount() {
+        return nodeVertex.size();
+    }
+
+    /** Number of nodes whose successors were computed. */
+    public int expandedCount() {
+        return expanded;
+    }
+
+    public int vertex(int node) {
+        return nodeVertex.get(node);
+    }
+
+    public Cell cell(int node) {
+        return arena.cellOf(nodeVertex.get(node));
+    }
+
+    public int level(int node) {
+        return nodeLevel.get(node);
+    }
+
+    public int budgetLeft(int node) {
+        return arena.budgetLeft(nodeVertex.get(node));
+    }
+
+    /** Task progress mask: bit i set when task i of the visit list is done. */
+    public int progress(int node) {
+        return nodeMask.get(node);
+    }
+
+    /** Whether the node is a completed mission (absorbing). */
+    public boolean isComplete(int node) {
+        return node < expanded && nodeChoice.get(node) < 0 && (problem == null || problem.node() != node);
+    }
+
+    /** The arena disturbance vertex of the policy's action at the node, or -1 (complete or not expanded). */
+    public int choice(int node) {
+        return node < expanded ? nodeChoice.get(node) : -1;
+    }
+
+    /** The parent node in the breadth-first tree (-1 for the start). */
+    public int parent(int node) {
+        return nodeParent.get(node);
+    }
+
+    /** The arena edge from the parent (-1 for the start). */
+    public int parentEdge(int node) {
+        return nodeParentEdge.get(node);
+    }
+
+    public int succBegin(int node) {
+        return succStart.get(node);
+    }
+
+    public int succEnd(int node) {
+        return node + 1 < succStart.size() ? succStart.get(node + 1) : succNode.size();
+    }
+
+    /** The successor node of the i-th successor slot, or {@link #LOST_BELOW_FLOOR} / {@link #LOST_AVOIDED_ZONE}. */
+    public int succNode(int i) {
+        return succNode.get(i);
+    }
+
+    /** The arena outcome edge of the i-th successor slot. */
+    public int succEdge(int i) {
+        return succEdge.get(i);
+    }
+
+    /** The level after following outcome edge {@code e} from level {@code level} (saturated at capacity). */
+    public int levelAfter(int level, int e) {
+        return (int) Math.min(capacity, (long) level + arena.weight(e));
+    }
+
+    /** The nodes on the breadth-first path from the start to the node, start first. */
+    public List<Integer> pathTo(int node) {
+        List<Integer> path = new ArrayList<>();
+        for (int n = node; n >= 0; n = nodeParent.get(n)) {
+            path.add(n);
+        }
+        java.util.Collections.reverse(path);
+        return path;
+    }
+
+    /**
+     * A topological order of the loop's nodes (every edge goes from an earlier to a later node), or
+     * {@code null} if the loop has a cycle. Kahn's algorithm (Kahn 1962, "Topological sorting of large
+     * networks", CACM 5(11)), O(N + E); ties are taken in node order, so the order is deterministic.
+     *
+     * @throws IllegalStateException if the loop is not complete
+     */
+    public int[] topologicalOrder() {
+        requireComplete();
+        int n = nodeCount();
+        int[] indegree = new int[n];
+        for (int i = 0; i < succNode.size(); i++) {
+            indegree[succNode.get(i)]++;
+        }
+        int[] order = new int[n];
+        int head = 0;
+        int tail = 0;
+        for (int v = 0; v < n; v++) {
+            if (indegree[v] == 0) {
+                order[tail++] = v;
+            }
+        }
+        while (head < tail) {
+            int v = order[head++];
+            for (int i = succBegin(v); i < succEnd(v); i++) {
+                int t = succNode.get(i);
+                if (--indegree[t] == 0) {
+                    order[tail++] = t;
+                }
+            }
+        }
+        return tail == n ? order : null;
+    }
+
+    /**
+     * A cycle of the loop as a list of nodes {@code n0, n1, ..., nk} with {@code nk == n0}, or an empty
+     * list if the loop is acyclic. Found by peeling off sources (Kahn) and walking back along
+     * predecessors among the nodes left, which must close a cycle. O(N + E).
+     */
+    public List<Integer> findCycle() {
+        requireComplete();
+        int n = nodeCount();
+        int[] indegree = new int[n];
+        for (int i = 0; i < succNode.size(); i++) {
+            indegree[succNode.get(i)]++;
+        }
+        int[] queue = new int[n];
+        boolean[] removed = new boolean[n];
+        int head = 0;
+        int tail = 0;
+        for (int v = 0; v < n; v++) {
+            if (indegree[v] == 0) {
+                queue[tail++] = v;
+            }
+        }
+        while (head < tail) {
+            int v = queue[head++];
+            removed[v] = true;
+            for (int i = succBegin(v); i < succEnd(v); i++) {
+                int t = succNode.get(i);
+                if (--indegree[t] == 0) {
+                    queue[tail++] = t;
+                }
+            }
+        }
+        if (tail == n) {
+            return List.of();
+        }
+        // reverse adjacency restricted to the nodes left (each has a predecessor among them)
+        int[] predStart = new int[n + 1];
+        for (int v = 0; v < n; v++) {
+            if (!removed[v]) {
+                for (int i = succBegin(v); i < succEnd(v); i++) {
+                    int t = succNode.get(i);
+                    if (!removed[t]) {
+                        predStart[t + 1]++;
+                    }
+                }
+            }
+        }
+        for (int v = 0; v < n; v++) {
+            predStart[v + 1] += predStart[v];
+        }
+        int[] pred = new int[predStart[n]];
+        int[] fill = java.util.Arrays.copyOf(predStart, n);
+        for (int v = 0; v < n; v++) {
+            if (!removed[v]) {
+                for (int i = succBegin(v); i < succEnd(v); i++) {
+                    int t = succNode.get(i);
+                    if (!removed[t]) {
+                        pred[fill[t]++] = v;
+                    }
+                }
+            }
+        }
+        int first = 0;
+        while (removed[first]) {
+            first++;
+        }
+        int[] seenAt = new int[n];
+        java.util.Arrays.fill(seenAt, -1);
+        List<Integer> back = new ArrayList<>();
+        int v = first;
+        while (seenAt[v] < 0) {
+            seenAt[v] = back.size();
+            back.add(v);
+            v = pred[predStart[v]];
+        }
+        // back[seenAt[v]] .. back[end] walked backwards from v to a predecessor chain that returns to v
+        List<Integer> cycle = new ArrayList<>(back.subList(seenAt[v], back.size()));
+        cycle.add(v);
+        java.util.Collections.reverse(cycle);
+        return cycle;
+    }
+
+    private void requireComplete() {
+        if (problem != null) {
+            throw new IllegalStateException("the closed loop was not completed: " + problem.kind());
+        }
+    }
+}

@@ -1,0 +1,237 @@
+package dockline.cli;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.io.AtomicFiles;
+import dockline.margin.MarginReport;
+import dockline.margin.Margins;
+import dockline.margin.Suggestion;
+import dockline.model.EnergyScale;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.report.Caveats;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.nio.file.Path;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Mixin;
+
+/**
+ * {@code dockline margin MISSION}: the highest reserve floor that can be guaranteed from the
+ * mission's starting charge and the lowest starting charge that guarantees its floor, each computed
+ * by bisection over the threshold solver and by the minimum-credit fixpoint, with both timings. The
+ * two must agree; if they do not, that is an internal error (exit 4).
+ */
+@Command(name = "margin", mixinStandardHelpOptions = true,
+        description = {"Finds the highest reserve floor and the lowest starting charge that still guarantee a mission,"
+                + " two independent ways, and what would make a mission that is not guaranteed guaranteed."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:the mission as written is guaranteed", "1:not guaranteed", "2:bad input or usage",
+                "3:over a resource limit", "4:internal error (the two methods disagree)"})
+public final class MarginCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Mixin
+    MissionOptions mission;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "also write the margins as JSON ('-' for standard output)")
+    Path json;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            return run(out, err);
+        } catch (TrustOutput.Exit e) {
+            return e.code;
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    private int run(PrintWriter out, PrintWriter err) throws TrustOutput.Exit {
+        Mission m;
+        try {
+            m = mission.load(err);
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (m.reserveUnits() > m.capacityUnits()) {
+            err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
+            return ExitCodes.BAD_INPUT;
+        }
+        MarginReport r;
+        try {
+            r = Margins.compute(m, ProductOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
+        } catch (ProductTooLargeException | ArithmeticException | OutOfMemoryError e) {
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
+            return ExitCodes.RESOURCE_LIMIT;
+        } catch (IllegalArgumentException e) {
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        boolean toStdout = json != null && json.toString().equals("-");
+        if (json != null) {
+            String text = json(m, r);
+            if (toStdout) {
+                out.print(text);
+            } else {
+                try {
+                    AtomicFiles.writeString(json, text);
+                } catch (IOException e) {
+                    err.println("dockline: cannot write output: " + e.getMessage());
+                    return ExitCodes.BAD_INPUT;
+                }
+            }
+        }
+        if (!toStdout) {
+            print(out, m, r);
+        }
+        if (!r.agree()) {
+            err.println("dockline: internal error: the bisection over the threshold solver and the fixpoint disagree"
+                    + " (bisection: highest reserve " + show(r.bisection().highestReserveUnits()) + ", lowest start "
+                    + show(r.bisection().lowestStartUnits()) + "; fixpoint: " + show(r.fixpoint().highestReserveUnits())
+                    + ", " + show(r.fixpoint().lowestStartUnits()) + "). Please report this with the input files.");
+            return ExitCodes.INTERNAL;
+        }
+        return r.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    private void print(PrintWriter out, Mission m, MarginReport r) {
+        EnergyScale s = m.scale();
+        int cap = r.capacityUnits();
+        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
+                + " as written (start " + charge(s, r.startUnits(), cap) + ", reserve floor " + charge(s, r.floorUnits(), cap) + ")");
+        if (!(m.objective() instanceof Objective.Reserve)) {
+            out.println("note: this mission's objective is a discounted score; the margins are those of the reserve"
+                    + " objective (the floor and the tasks) only");
+        }
+        out.println("highest reserve floor guaranteed from this start: " + charge(s, r.highestReserveUnits(), cap));
+        out.println("lowest starting charge that guarantees this floor: " + charge(s, r.lowestStartUnits(), cap));
+        out.println();
+        String[][] rows = {
+            {"method", "highest reserve", "lowest start", "time"},
+            {"bisection over the threshold solver", show(r.bisection().highestReserveUnits()),
+                show(r.bisection().lowestStartUnits()), r.bisection().millis() + " ms"},
+            {"minimum-credit fixpoint", show(r.fixpoint().highestReserveUnits()),
+                show(r.fixpoint().lowestStartUnits()), r.fixpoint().millis() + " ms"}};
+        int[] w = new int[4];
+        for (String[] row : rows) {
+            for (int i = 0; i < 4; i++) {
+                w[i] = Math.max(w[i], row[i].length());
+            }
+        }
+        for (String[] row : rows) {
+            StringBuilder sb = new StringBuilder("  ");
+            for (int i = 0; i < 4; i++) {
+                sb.append(i == 0 ? pad(row[i], w[i]) : "  " + padLeft(row[i], w[i]));
+            }
+            out.println(sb.toString().stripTrailing());
+        }
+        out.println("  the two methods " + (r.agree() ? "agree" : "DISAGREE"));
+        if (!r.suggestions().isEmpty()) {
+            out.println();
+            out.println("to make it guaranteed, change one of (smallest change first):");
+            int i = 1;
+            for (Suggestion sg : r.suggestions()) {
+                out.println("  " + i++ + ". " + sg.text());
+            }
+        } else if (!r.guaranteed()) {
+            out.println();
+            out.println("no change of the start charge, the reserve floor or the disturbance budget alone makes it"
+                    + " guaranteed; consider another route, a second dock or a different robot");
+        }
+        out.println();
+        out.println("Energy: " + s.describe() + ".");
+        out.println(Caveats.block());
+    }
+
+    private static String pad(String s, int w) {
+        return s + " ".repeat(w - s.length());
+    }
+
+    private static String padLeft(String s, int w) {
+        return " ".repeat(w - s.length()) + s;
+    }
+
+    private static String show(OptionalInt u) {
+        return u.isPresent() ? u.getAsInt() + " units" : "none";
+    }
+
+    private static String charge(EnergyScale s, OptionalInt u, int cap) {
+        return u.isPresent() ? charge(s, u.getAsInt(), cap) : "none";
+    }
+
+    private static String charge(EnergyScale s, int u, int cap) {
+        return u + (u == 1 ? " unit (" : " units (") + s.formatWh(u) + ", " + percent(u, cap) + "% of capacity)";
+    }
+
+    /** For display only; no decision depends on it. */
+    private static String percent(int u, int cap) {
+        return cap == 0 ? "0" : BigDecimal.valueOf(u * 100L).divide(BigDecimal.valueOf(cap), 1, RoundingMode.HALF_UP)
+                .stripTrailingZeros().toPlainString();
+    }
+
+    static String json(Mission m, MarginReport r) {
+        ObjectMapper om = new ObjectMapper();
+        om.enable(SerializationFeature.INDENT_OUTPUT);
+        om.configure(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN, true);
+        EnergyScale s = m.scale();
+        ObjectNode root = om.createObjectNode();
+        root.put("mission", m.name());
+        root.put("guaranteed", r.guaranteed());
+        root.put("startUnits", r.startUnits());
+        root.put("floorUnits", r.floorUnits());
+        root.put("capacityUnits", r.capacityUnits());
+        root.put("energyUnitWh", s.unitWh().stripTrailingZeros());
+        units(root, "highestReserve", r.highestReserveUnits(), s);
+        units(root, "lowestStart", r.lowestStartUnits(), s);
+        root.put("agree", r.agree());
+        method(root.putObject("bisection"), r.bisection(), s);
+        method(root.putObject("fixpoint"), r.fixpoint(), s);
+        var arr = root.putArray("suggestions");
+        for (Suggestion sg : r.suggestions()) {
+            ObjectNode o = arr.addObject();
+            o.put("kind", sg.kind().word());
+            o.put("from", sg.from());
+            o.put("to", sg.to());
+            o.put("text", sg.text());
+        }
+        try {
+            return om.writeValueAsString(root) + "\n";
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static void method(ObjectNode o, MarginReport.Method m, EnergyScale s) {
+        units(o, "highestReserve", m.highestReserveUnits(), s);
+        units(o, "lowestStart", m.lowestStartUnits(), s);
+        o.put("millis", m.millis());
+    }
+
+    private static void units(ObjectNode o, String key, OptionalInt u, EnergyScale s) {
+        if (u.isPresent()) {
+            o.put(key + "Units", u.getAsInt());
+            o.put(key + "Wh", s.toWh(u.getAsInt()));
+        } else {
+            o.putNull(key + "Units");
+            o.putNull(key + "Wh");
+        }
+    }
+}

@@ -1,0 +1,181 @@
+package dockline.cli;
+
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
+import dockline.io.AtomicFiles;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.replay.ForcedEvent;
+import dockline.replay.ForcedEventException;
+import dockline.replay.MissionReplays;
+import dockline.replay.Replay;
+import dockline.replay.ReplayFormats;
+import dockline.report.Caveats;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.ReserveOptions;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Mixin;
+
+/**
+ * {@code dockline replay MISSION}: one run of the robot's policy, step by step. For a guaranteed
+ * mission the policy is first certified independently; the default replay is the worst case (the
+ * disturbance choices that drive the battery lowest). For a mission that is not guaranteed the worst
+ * case is the counterexample: the disturbance's winning strategy against the robot's best effort.
+ */
+@Command(name = "replay", mixinStandardHelpOptions = true,
+        description = {"Replays the robot's policy for a mission step by step, with what the disturbances do.",
+                "Guaranteed missions: the certified policy; not guaranteed: the counterexample that defeats every plan."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:guaranteed (policy certified)", "1:not guaranteed", "2:bad input or usage (also an impossible --force event)",
+                "3:over a resource limit", "4:internal error (e.g. the policy failed its certificate)"})
+public final class ReplayCommand implements Callable<Integer> {
+
+    /** Which disturbance choices to replay. */
+    enum Disturbance { nominal, worst }
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Mixin
+    MissionOptions mission;
+
+    @Option(names = "--disturbance", paramLabel = "nominal|worst",
+            description = "nominal: no events; worst (default): the events that drive the battery lowest,"
+                    + " or the counterexample when the mission is not guaranteed")
+    Disturbance disturbance;
+
+    @Option(names = "--force", paramLabel = "STEP:EVENT,...",
+            description = "force events at steps, nominal elsewhere, e.g. 14:door-shut,20:slip@3:4"
+                    + " (events: door-shut, blockage, slip, drag; a slip may name its cell)")
+    String force;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "also write the replay as CSV")
+    Path csv;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "also write the replay as JSON")
+    Path json;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            return run(out, err);
+        } catch (TrustOutput.Exit e) {
+            return e.code;
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    private int run(PrintWriter out, PrintWriter err) throws TrustOutput.Exit {
+        List<ForcedEvent> forced = List.of();
+        if (force != null) {
+            if (disturbance == Disturbance.worst) {
+                err.println("dockline: --force replays the named events with nominal outcomes elsewhere;"
+                        + " it cannot be combined with --disturbance worst");
+                return ExitCodes.BAD_INPUT;
+            }
+            try {
+                forced = ForcedEvent.parseList(force);
+            } catch (IllegalArgumentException e) {
+                err.println("dockline: --force: " + e.getMessage());
+                return ExitCodes.BAD_INPUT;
+            }
+        }
+        Mission m = loadMission(err);
+        MissionReplays mr;
+        try {
+            mr = MissionReplays.of(m, ReserveOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes())
+                    .withSafestPolicy(mission.safestPolicy));
+        } catch (ProductTooLargeException | ClosedLoop.TooLargeException | ArithmeticException | OutOfMemoryError e) {
+            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
+            return ExitCodes.RESOURCE_LIMIT;
+        } catch (IllegalArgumentException e) {
+            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        if (mr.guaranteed() && !mr.certified()) {
+            err.println("dockline: internal error: the solver says guaranteed but its policy failed the independent"
+                    + " certificate: " + mr.certificate().map(Certificate::reason).orElse("?"));
+            err.println("No replay is shown; please report this with the input files.");
+            return ExitCodes.INTERNAL;
+        }
+        Replay replay;
+        String what;
+        try {
+            if (!forced.isEmpty()) {
+                replay = mr.forced(forced);
+                what = "forced events " + force;
+            } else if (disturbance == Disturbance.nominal) {
+                replay = mr.nominal();
+                what = "nominal (no events)";
+            } else {
+                replay = mr.worstCase();
+                what = mr.guaranteed() ? "worst case (the events that drive the battery lowest)"
+                        : "counterexample (the disturbance's winning strategy)";
+            }
+        } catch (ForcedEventException e) {
+            err.println("dockline: --force: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        } catch (IllegalStateException e) {
+            err.println("dockline: " + e.getMessage());
+            return mr.guaranteed() ? ExitCodes.INTERNAL : ExitCodes.NOT_GUARANTEED;
+        }
+        try {
+            if (csv != null) {
+                AtomicFiles.writeString(csv, ReplayFormats.csv(replay));
+            }
+            if (json != null) {
+                AtomicFiles.writeString(json, ReplayFormats.json(m, replay));
+            }
+        } catch (IOException e) {
+            err.println("dockline: cannot write output: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        print(out, m, mr, replay, what);
+        return mr.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    private Mission loadMission(PrintWriter err) throws TrustOutput.Exit {
+        try {
+            return mission.load(err);
+        } catch (MissionOptions.BadInput e) {
+            throw new TrustOutput.Exit(ExitCodes.BAD_INPUT);
+        }
+    }
+
+    private void print(PrintWriter out, Mission m, MissionReplays mr, Replay replay, String what) {
+        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
+        mr.certificate().ifPresent(c -> out.println("certified: " + c.ok() + " (" + c.statesChecked()
+                + " situations of the policy checked independently)"));
+        if (!mr.guaranteed()) {
+            out.println(mr.bestEffortFloor() >= 0
+                    ? "best effort: the policy for the highest reserve that can be guaranteed, " + mr.bestEffortFloor()
+                            + " units (" + m.scale().formatWh(mr.bestEffortFloor()) + ")"
+                    : "best effort: none (no reserve floor at all can be guaranteed from this start)");
+        }
+        if (!(m.objective() instanceof Objective.Reserve)) {
+            out.println("note: this mission's objective is a discounted score; the replay follows the reserve objective"
+                    + " (the floor and the tasks) only");
+        }
+        out.println("replay: " + what + ", " + (replay.steps().size() - 1) + " steps, ends " + replay.ending().word());
+        out.println();
+        out.print(ReplayFormats.table(replay));
+        out.println();
+        for (String line : replay.explanation()) {
+            out.println(line);
+        }
+        out.println();
+        out.println("Energy: " + m.scale().describe() + ".");
+        out.println(Caveats.block());
+    }
+}

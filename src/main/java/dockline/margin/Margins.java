@@ -1,0 +1,56 @@
+package dockline.margin;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.goal.GoalAutomaton;
+import dockline.model.Mission;
+import dockline.solve.ProductOptions;
+import java.util.List;
+import java.util.OptionalInt;
+
+/**
+ * The margins of a mission — the highest reserve floor that can be guaranteed from its starting
+ * charge, and the lowest starting charge that guarantees its floor — each computed two ways, so that
+ * each checks the other:
+ * <ul>
+ *   <li>by bisection over the threshold solver ({@link Bisection}: satisficing, O(log C) solves);</li>
+ *   <li>by the minimum-credit fixpoint ({@link MinimumCredit}, optimisation: the lowest start is one
+ *       run; the highest floor is the fixpoint run per candidate floor, candidates by bisection,
+ *       see {@link FixpointMargins}).</li>
+ * </ul>
+ * When the mission is not guaranteed, the report also carries the {@link Suggestions}.
+ */
+public final class Margins {
+
+    private Margins() {
+    }
+
+    public static MarginReport compute(Mission mission, ProductOptions options) {
+        int floor = mission.reserveUnits();
+        int start = mission.startUnits();
+        int cap = mission.capacityUnits();
+        int k = mission.map().disturbances().budget();
+
+        long t0 = System.nanoTime();
+        Bisection b = new Bisection(mission, options);
+        int bHigh = b.highestFloor(start);
+        int bLow = b.lowestStart(floor);
+        long t1 = System.nanoTime();
+        Arena arena = ArenaCompiler.compile(mission);
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        int fHigh = FixpointMargins.highestFloor(arena, goal, start);
+        int fLow = floor > cap ? -1 : FixpointMargins.lowestStart(arena, goal, floor);
+        long t2 = System.nanoTime();
+
+        boolean guaranteed = bLow >= 0 && bLow <= start;
+        List<Suggestion> suggestions = guaranteed ? List.of()
+                : Suggestions.find(mission, bLow, bHigh, b.largestBudgetBelow(floor, start));
+        return new MarginReport(guaranteed, floor, start, cap,
+                new MarginReport.Method(opt(bHigh), opt(bLow), (t1 - t0) / 1_000_000L),
+                new MarginReport.Method(opt(fHigh), opt(fLow), (t2 - t1) / 1_000_000L), suggestions);
+    }
+
+    private static OptionalInt opt(int v) {
+        return v < 0 ? OptionalInt.empty() : OptionalInt.of(v);
+    }
+}

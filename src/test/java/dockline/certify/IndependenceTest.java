@@ -1,0 +1,39 @@
+package dockline.certify;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The checker must not share code with what it checks (DESIGN.md 2.5): its sources may use the model,
+ * the arena, the policy records and jgrapht, never the solver, the goal automaton or the monitors.
+ */
+class IndependenceTest {
+
+    private static final List<String> ALLOWED = List.of("dockline.model.", "dockline.arena.", "dockline.solve.Policy",
+            "dockline.solve.PolicyEntry", "dockline.certify", "org.jgrapht.", "java.");
+
+    @Test
+    void certifyPackage_importsOnlyModelArenaAndPolicyData() throws IOException {
+        Pattern ref = Pattern.compile("\\b((?:dockline|org\\.jgrapht|java)\\.[a-z][\\w.]*\\.?[A-Z]?\\w*)");
+        int files = 0;
+        try (Stream<Path> s = Files.list(Path.of("src/main/java/dockline/certify"))) {
+            for (Path f : s.filter(p -> p.toString().endsWith(".java")).toList()) {
+                files++;
+                Matcher m = ref.matcher(Files.readString(f));
+                while (m.find()) {
+                    String name = m.group(1);
+                    assertThat(ALLOWED.stream().anyMatch(name::startsWith)).as("%s uses %s", f.getFileName(), name).isTrue();
+                }
+            }
+        }
+        assertThat(files).isGreaterThan(3);
+    }
+}

@@ -1,0 +1,168 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+class TrustCommandsTest {
+
+    @TempDir
+    Path tmp;
+
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        int code = cl.execute(args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void replay_guaranteedMission_isCertified_printsTableExplanationAndCaveats() throws Exception {
+        Path csv = tmp.resolve("worst.csv");
+        Path json = tmp.resolve("worst.json");
+        Run r = run("replay", "missions/night-round.yaml", "--csv", csv.toString(), "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("guaranteed").contains("certified: true").contains("Worst case of the certified policy")
+                .contains("step  cell").contains("Safety: ");
+        String header = Files.readAllLines(csv).get(0);
+        assertThat(header).startsWith("step,cell,action,event,eventDetail,batteryUnits,batteryWh,budgetLeft,progress");
+        JsonNode j = new ObjectMapper().readTree(json.toFile());
+        assertThat(j.get("replay").asText()).isEqualTo("worst");
+        assertThat(j.get("steps").size()).isEqualTo(Files.readAllLines(csv).size() - 1);
+    }
+
+    /** Same input, byte-identical CSV from two separate runs of the command. */
+    @Test
+    void replay_csv_isByteIdenticalAcrossRuns() throws Exception {
+        Path a = tmp.resolve("a.csv");
+        Path b = tmp.resolve("b.csv");
+        assertThat(run("replay", "missions/supply-run.yaml", "--csv", a.toString()).code()).isZero();
+        assertThat(run("replay", "missions/supply-run.yaml", "--csv", b.toString()).code()).isZero();
+        assertThat(Files.readAllBytes(a)).isEqualTo(Files.readAllBytes(b));
+        Path n1 = tmp.resolve("n1.csv");
+        Path n2 = tmp.resolve("n2.csv");
+        run("replay", "missions/supply-run.yaml", "--disturbance", "nominal", "--csv", n1.toString());
+        run("replay", "missions/supply-run.yaml", "--disturbance", "nominal", "--csv", n2.toString());
+        assertThat(Files.readAllBytes(n1)).isEqualTo(Files.readAllBytes(n2)).isNotEqualTo(Files.readAllBytes(a));
+    }
+
+    @Test
+    void replay_notGuaranteed_showsTheCounterexample_exit1() {
+        Run r = run("replay", "missions/late-return.yaml");
+        assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(r.out()).contains("NOT guaranteed").contains("counterexample").contains("below the reserve floor")
+                .contains("link-bridge").contains("Safety: ");
+    }
+
+    @Test
+    void replay_impossibleForcedEvent_isExit2_andWritesNoFile() {
+        Path csv = tmp.resolve("never.csv");
+        Run r = run("replay", "missions/night-round.yaml", "--force", "5:door-shut", "--csv", csv.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("step 5: door-shut cannot happen there").contains("is not a door that may shut");
+        assertThat(csv).doesNotExist();
+        assertThat(run("replay", "missions/night-round.yaml", "--force", "4:fog").err()).contains("unknown event 'fog'");
+        assertThat(run("replay", "missions/night-round.yaml", "--force", "4:door-shut", "--disturbance", "worst").code())
+                .isEqualTo(ExitCodes.BAD_INPUT);
+    }
+
+    @Test
+    void replay_forcedDoor_isAnswered() {
+        Run r = run("replay", "missions/night-round.yaml", "--force", "4:door-shut");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("door ward-a-entry at 3:4 shut").contains("The mission completes");
+    }
+
+    @Test
+    void badMissionFile_isExit2_withFileLineColumn() throws Exception {
+        Path bad = tmp.resolve("bad.yaml");
+        Files.writeString(bad, "name: x\nmap: ../nowhere.yaml\nresrve: 20%\n");
+        Run r = run("replay", bad.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).containsPattern("bad\\.yaml:\\d+:\\d+: ");
+        assertThat(run("margin", bad.toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
+    }
+
+    @Test
+    void margin_guaranteed_jsonHasBothMethods() throws Exception {
+        Path json = tmp.resolve("m.json");
+        Run r = run("margin", "missions/night-round.yaml", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("bisection over the threshold solver").contains("minimum-credit fixpoint")
+                .contains("the two methods agree").contains("Safety: ");
+        JsonNode j = new ObjectMapper().readTree(json.toFile());
+        for (String k : new String[] {"highestReserveUnits", "lowestStartUnits"}) {
+            assertThat(j.has(k)).isTrue();
+            assertThat(j.get("bisection").get(k)).isEqualTo(j.get("fixpoint").get(k)).isEqualTo(j.get(k));
+        }
+        assertThat(j.get("bisection").has("millis")).isTrue();
+        assertThat(j.get("fixpoint").has("millis")).isTrue();
+    }
+
+    @Test
+    void margin_notGuaranteed_printsSuggestions_exit1() {
+        Run r = run("margin", "missions/late-return.yaml", "--json", "-");
+        assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
+    }
+
+    static java.util.stream.Stream<Path> demoMissions() throws java.io.IOException {
+        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
+    }
+
+    /** The demo missions with the reserve objective (the certificate covers that objective). */
+    static java.util.stream.Stream<Path> reserveDemoMissions() throws Exception {
+        java.util.List<Path> out = new java.util.ArrayList<>();
+        for (Path p : demoMissions().toList()) {
+            if (dockline.io.MissionLoader.load(p).objective() instanceof dockline.model.Objective.Reserve) {
+                out.add(p);
+            }
+        }
+        assertThat(out).hasSizeGreaterThanOrEqualTo(3);
+        return out.stream();
+    }
+
+    /** Every guaranteed demo mission is certified by `check`, in text and in JSON; none is silently guaranteed. */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.MethodSource("reserveDemoMissions")
+    void check_certifiesEveryGuaranteedDemoMission(Path file) throws Exception {
+        Run text = run("check", file.toString());
+        Run json = run("check", "--json", file.toString());
+        JsonNode j = new ObjectMapper().readTree(json.out());
+        assertThat(json.code()).isEqualTo(text.code());
+        if (text.code() == ExitCodes.OK) {
+            assertThat(text.out()).contains("certified: true");
+            assertThat(j.get("certified").asBoolean()).isTrue();
+            assertThat(j.get("certifiedWorstMinimumUnits").asInt()).isEqualTo(j.get("worstCaseMinimumUnits").asInt());
+            assertThat(j.get("suggestions").size()).isZero();
+        } else {
+            assertThat(text.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+            assertThat(j.get("certified").asBoolean()).isFalse();
+            assertThat(text.out()).contains("To make it guaranteed");
+        }
+    }
+
+    /** The suggested start charge for the late return (164 units = 82 Wh) makes replay certify it. */
+    @Test
+    void replay_withSuggestedStartCharge_isGuaranteed() {
+        Run r = run("replay", "missions/late-return.yaml", "--start-charge", "82");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("certified: true");
+        assertThat(run("replay", "missions/late-return.yaml", "--start-charge", "81.5").code())
+                .isEqualTo(ExitCodes.NOT_GUARANTEED);
+    }
+}
