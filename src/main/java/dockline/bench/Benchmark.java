@@ -9,6 +9,7 @@ import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
 import dockline.monitor.ReserveMonitor;
+import dockline.margin.MinimumCredit;
 import dockline.solve.AttractorSolver;
 import dockline.solve.CompactAttractorSolver;
 import dockline.solve.DiscountedThresholdGame;
@@ -171,12 +172,14 @@ public final class Benchmark {
             case RESERVE -> {
                 rows.addAll(csrMethods(inst, sampler, reps, warmup));
                 rows.addAll(implicitMethods(inst, sampler, reps));
+                rows.add(fixpoint(inst, sampler, reps));
             }
             case CONSUMPTION -> {
                 rows.add(fast(inst, sampler, reps));
                 if (products) {
                     rows.addAll(csrMethods(inst, sampler, reps, warmup));
                     rows.addAll(implicitMethods(inst, sampler, reps));
+                    rows.add(fixpoint(inst, sampler, reps));
                 }
             }
             case DISCOUNTED -> rows.addAll(discounted(inst, sampler, reps));
@@ -374,6 +377,23 @@ public final class Benchmark {
                 bfs.value().edgesScanned(), 0, bfs.millis(), bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
                 "plain BFS over the implicit product, from the start"));
         return rows;
+    }
+
+    /**
+     * The direct optimisation over energy levels (MinimumCredit, the margin package's fixpoint): the
+     * least starting level per vertex of arena × goal, then compared with the starting charge.
+     */
+    private BenchRow fixpoint(Instance inst, HeapSampler sampler, int reps) {
+        Mission m = inst.mission;
+        long base = HeapSampler.settledUsed();
+        Timed<MinimumCredit> t = time(sampler, base, reps, () -> MinimumCredit.solve(inst.arena, inst.goal, m.reserveUnits()));
+        MinimumCredit mc = t.value();
+        int need = mc.needAtStart();
+        boolean won = need != MinimumCredit.INFINITE && need <= m.startUnits() && m.startUnits() >= m.reserveUnits();
+        return new BenchRow(inst.side, inst.kind, "fixpoint", mc.productSize(), 0, 0, t.millis(), t.cpuMillis(), t.peak(),
+                Verdict.of(won).word(), inst.arenaMillis + t.millis(), -1, -1,
+                "least starting level over arena x goal (reachable pairs): "
+                        + (need == MinimumCredit.INFINITE ? "none" : need + " units") + " against " + m.startUnits());
     }
 
     /** Discount factor of the discounted instance. */
