@@ -2,7 +2,9 @@ package dockline.cli;
 
 import dockline.bench.BenchReport;
 import dockline.bench.Benchmark;
+import dockline.bench.BuildingGenerator;
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -35,12 +37,28 @@ public final class BenchCommand implements Callable<Integer> {
     @Option(names = "--seed", paramLabel = "N", description = "seed of the generated buildings and missions (default: ${DEFAULT-VALUE})")
     long seed = 7;
 
+    @Option(names = "--sizes", paramLabel = "SIDE", split = ",",
+            description = "floor sides to run instead of the default series, e.g. 32,64 (each at least 32)")
+    List<Integer> sizes;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
-        Benchmark.Config config = new Benchmark.Config(base.sizes(), base.fastOnlySizes(), seed, base.budget(),
+        if (sizes != null) {
+            for (int s : sizes) {
+                if (s < BuildingGenerator.MIN_SIDE || s > BuildingGenerator.MAX_SIDE) {
+                    err.println("dockline: --sizes: " + s + " is outside " + BuildingGenerator.MIN_SIDE + ".."
+                            + BuildingGenerator.MAX_SIDE);
+                    err.println("Try 'dockline bench --help'.");
+                    err.flush();
+                    return ExitCodes.BAD_INPUT;
+                }
+            }
+        }
+        Benchmark.Config config = new Benchmark.Config(sizes != null ? sizes : base.sizes(),
+                sizes != null ? List.of() : base.fastOnlySizes(), seed, base.budget(),
                 base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices(),
                 base.maxImplicitVertices());
         PrintWriter progress = json ? err : out;
