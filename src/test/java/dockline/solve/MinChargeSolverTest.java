@@ -11,6 +11,7 @@ import dockline.bench.MissionSpec;
 import dockline.bench.TinyMissions;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
+import dockline.monitor.ReserveMonitor;
 import java.math.BigDecimal;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
@@ -115,6 +116,39 @@ class MinChargeSolverTest {
                 } else {
                     assertThat(need).isEqualTo((int) d);
                 }
+            }
+        }
+    }
+
+    /**
+     * Against the landed main route: the verdict of ProductGame + AttractorSolver, and per position
+     * the heat map of ChargeNeeded (one solve of the product over all levels): the least level is
+     * floor + need when that is within the capacity, impossible otherwise.
+     */
+    @Property(tries = 200)
+    void agreesWithTheProductRoute_verdictAndHeatMap(@ForAll long seed) {
+        Mission m = TinyMissions.random(seed, false);
+        Arena arena = ArenaCompiler.compile(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        ProductGame game = ProductGame.fromStart(arena, goal, monitor, ProductOptions.defaults());
+        boolean product = new AttractorSolver(game.graph()).solve().winning(game.start());
+        MinChargeSolver fast = new MinChargeSolver(arena, goal);
+        assertThat(fast.decide().guaranteed()).isEqualTo(product);
+        MinChargeSolver.Values values = fast.solveAll();
+        ChargeNeeded heat = ChargeNeeded.compute(arena, goal, monitor, ProductOptions.defaults(), AttractorSolver::new);
+        int floor = m.reserveUnits();
+        int cap = m.capacityUnits();
+        for (int v = 0; v < arena.robotCount(); v++) {
+            int cell = arena.cell(v);
+            for (int g = 0; g < goal.stateCount(); g++) {
+                int mask = goal.progressMask(g);
+                int gn = goal.step(g, arena.cellZones(cell));
+                int need = gn == GoalAutomaton.REJECT ? MinChargeSolver.INFINITE : values.need(v, gn);
+                int expected = need != MinChargeSolver.INFINITE && floor + (long) need <= cap ? floor + need
+                        : ChargeNeeded.IMPOSSIBLE;
+                assertThat(heat.unitsNeeded(cell, arena.budgetLeft(v), mask))
+                        .as("cell %d budget %d progress %d", cell, arena.budgetLeft(v), mask).isEqualTo(expected);
             }
         }
     }
