@@ -5,13 +5,16 @@ package dockline.bench;
  *
  * @param size        side of the generated floor in cells (the floor is size × size)
  * @param instance    which mission on it: {@code reserve}, {@code consumption} or {@code discounted}
- * @param method      {@code attractor}, {@code bfs}, {@code sweep}, {@code fixpoint}, {@code vi} or {@code fast}
+ * @param method      {@code attractor}, {@code compact}, {@code bfs}, {@code sweep}, {@code implicit},
+ *                    {@code early}, {@code implicit-bfs}, {@code fixpoint}, {@code vi} or {@code fast}
+ *                    (see {@link Benchmark})
  * @param vertices    vertices of the graph the method worked on (for a skipped product method: the estimate)
  * @param edges       edges of that graph
  * @param buildMillis time to build that graph (0 when the method works on the arena directly)
  * @param solveMillis time to solve it, wall clock (best of the repetitions)
- * @param solveCpuMillis CPU time of the solving thread for the same run (unaffected by other processes
- *                    taking the cores; -1 when the platform cannot tell)
+ * @param solveCpuMillis CPU time of this JVM during the same run (the solving thread and the garbage
+ *                    collector; other processes taking the cores hardly change it; -1 when the
+ *                    platform cannot tell)
  * @param peakBytes   highest heap use above the instance's baseline seen while the method ran
  *                    (sampled; includes garbage not yet collected); -1 when not measured
  * @param verdict     {@code guaranteed} or {@code not-guaranteed}; {@code null} for {@code bfs}
@@ -32,7 +35,7 @@ public record BenchRow(int size, String instance, String method, long vertices, 
         return solveMillis >= 0;
     }
 
-    /** The solve time the ratios use: CPU time of the solving thread when known, else wall clock. */
+    /** The solve time the ratios use: CPU time of this JVM when known, else wall clock. */
     public double ratioMillis() {
         return solveCpuMillis >= 0 ? solveCpuMillis : solveMillis;
     }

@@ -40,21 +40,30 @@ import java.util.function.Consumer;
  * same seed):
  * <ul>
  *   <li>{@code reserve}: {@link MissionSpec#docking} (charging on docks, few levels): the product
- *       with the reserve monitor covers the floor; methods {@code attractor} (product + linear-time
- *       attractor, the main route), {@code bfs} (plain breadth-first search over the same product
- *       graph), {@code sweep} (naive sweeps to the fixpoint on the same graph), {@code fixpoint}
- *       (direct optimisation over energy levels on arena × goal).</li>
+ *       with the reserve monitor covers the floor. Methods: {@code attractor} (the main route as
+ *       landed: {@code ProductGame} built from the start in CSR arrays + {@code AttractorSolver}),
+ *       {@code compact} ({@code CompactAttractorSolver} on the same graph), {@code bfs} (plain
+ *       breadth-first search over the same graph: the memory-bound floor), {@code sweep} (naive
+ *       sweeps to the fixpoint on the same graph), {@code implicit} / {@code early} /
+ *       {@code implicit-bfs} (the attractor, the attractor stopping once the start is won, and plain
+ *       BFS, on {@code ImplicitReserveGame}, which stores no product graph), {@code fixpoint}
+ *       (direct optimisation over energy levels on arena × goal, {@code MinimumCredit}).</li>
  *   <li>{@code consumption}: {@link MissionSpec#consumptionOnly} (no charging, 1,000 levels):
- *       {@code fast} ({@link MinChargeSolver}, stopping once the start is decided), and the product
+ *       {@code fast} ({@link MinChargeSolver}, stopping once the start is decided), and the other
  *       methods where the product fits.</li>
- *   <li>{@code discounted}: the discounted-sum threshold question on the reserve instance's arena:
- *       {@code attractor} on the comparator product versus {@code vi} (value iteration, then compare).</li>
+ *   <li>{@code discounted}: the discounted-sum threshold question (discount 2, threshold the exact
+ *       optimal value, no dock goal) on the consumption instance's arena: {@code attractor} on the
+ *       comparator product ({@code DiscountedThresholdGame}) versus {@code vi} (value iteration,
+ *       then compare: {@code DiscountedValueIteration}).</li>
  * </ul>
  *
  * <p>Before measuring, every method runs a few times on small floors so the JIT compiler has done its
  * work; each timed solve is the best of {@link Config#reps()} runs (the least disturbed by other
- * processes on a shared machine). The peak heap of a method is sampled above the baseline taken
- * (after a full collection) with the instance's arena in memory.
+ * processes on a shared machine; runs over two seconds are not repeated), timed both by the wall
+ * clock and by the CPU time of this JVM (solving thread and garbage collector; the ratios use it,
+ * as other processes on a shared machine hardly change it). The peak heap of a method
+ * is sampled above the baseline taken (after a full collection) with the instance's arena in memory;
+ * for methods on a built product it covers the build too.
  */
 public final class Benchmark {
 
@@ -198,12 +207,19 @@ public final class Benchmark {
     private record Timed<T>(T value, double millis, double cpuMillis, long peak) {
     }
 
-    private static final java.lang.management.ThreadMXBean THREADS =
-            java.lang.management.ManagementFactory.getThreadMXBean();
+    private static final java.lang.management.OperatingSystemMXBean OS =
+            java.lang.management.ManagementFactory.getOperatingSystemMXBean();
 
-    /** CPU time of this thread in ns, or -1 when not supported. */
+    /**
+     * CPU time of this whole JVM in ns (the solving thread and the garbage collector's threads; other
+     * processes on the machine do not count), or -1 when the platform cannot tell.
+     */
     private static long cpuNow() {
-        return THREADS.isCurrentThreadCpuTimeSupported() ? THREADS.getCurrentThreadCpuTime() : -1;
+        if (OS instanceof com.sun.management.OperatingSystemMXBean hs) {
+            long t = hs.getProcessCpuTime();
+            return t >= 0 ? t : -1;
+        }
+        return -1;
     }
 
     /** A run longer than this is not repeated (its time is stable enough, and the full run must stay short). */
