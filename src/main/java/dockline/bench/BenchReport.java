@@ -15,8 +15,8 @@ import java.util.Optional;
  * The rows of one benchmark run, the ratios between methods measured in that run, the targets of
  * issue 7 checked against them, and any verdict disagreement; as a text table or as JSON.
  *
- * <p>Ratios compare CPU times of this JVM (solving thread and garbage collector; wall clock where
- * the platform cannot tell), which other processes on a shared machine disturb much less than
+ * <p>Ratios compare CPU times (the solving thread's, plus the garbage collector's pauses; wall clock
+ * where the platform cannot tell), which other processes on a shared machine disturb much less than
  * wall-clock times.
  * Ratios (per floor size unless noted): {@code attractorOverBfs}, {@code sweepOverAttractor},
  * {@code fixpointOverAttractor} (solve times on the reserve instance), {@code viOverComparator}

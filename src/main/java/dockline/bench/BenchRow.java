@@ -12,9 +12,9 @@ package dockline.bench;
  * @param edges       edges of that graph
  * @param buildMillis time to build that graph (0 when the method works on the arena directly)
  * @param solveMillis time to solve it, wall clock (best of the repetitions)
- * @param solveCpuMillis CPU time of this JVM during the same run (the solving thread and the garbage
- *                    collector; other processes taking the cores hardly change it; -1 when the
- *                    platform cannot tell)
+ * @param solveCpuMillis CPU time of the solving thread plus the garbage collector's pauses during the
+ *                    same run (other processes taking the cores hardly change it; best of the
+ *                    repetitions; -1 when the platform cannot tell)
  * @param peakBytes   highest heap use above the instance's baseline seen while the method ran
  *                    (sampled; includes garbage not yet collected); -1 when not measured
  * @param verdict     {@code guaranteed} or {@code not-guaranteed}; {@code null} for {@code bfs}
@@ -35,7 +35,7 @@ public record BenchRow(int size, String instance, String method, long vertices, 
         return solveMillis >= 0;
     }
 
-    /** The solve time the ratios use: CPU time of this JVM when known, else wall clock. */
+    /** The solve time the ratios use: CPU time (thread + collector pauses) when known, else wall clock. */
     public double ratioMillis() {
         return solveCpuMillis >= 0 ? solveCpuMillis : solveMillis;
     }

@@ -60,7 +60,7 @@ import java.util.function.Consumer;
  * <p>Before measuring, every method runs a few times on small floors so the JIT compiler has done its
  * work; each timed solve is the best of {@link Config#reps()} runs (the least disturbed by other
  * processes on a shared machine; runs over two seconds are not repeated), timed both by the wall
- * clock and by the CPU time of this JVM (solving thread and garbage collector; the ratios use it,
+ * clock and by the solving thread's CPU time plus the collector's pauses (the ratios use the latter,
  * as other processes on a shared machine hardly change it). The peak heap of a method
  * is sampled above the baseline taken (after a full collection) with the instance's arena in memory;
  * for methods on a built product it covers the build too.
@@ -207,19 +207,25 @@ public final class Benchmark {
     private record Timed<T>(T value, double millis, double cpuMillis, long peak) {
     }
 
-    private static final java.lang.management.OperatingSystemMXBean OS =
-            java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+    private static final java.lang.management.ThreadMXBean THREADS =
+            java.lang.management.ManagementFactory.getThreadMXBean();
 
     /**
-     * CPU time of this whole JVM in ns (the solving thread and the garbage collector's threads; other
-     * processes on the machine do not count), or -1 when the platform cannot tell.
+     * CPU time of this thread plus the garbage collector's pauses so far, in ns (other processes on the
+     * machine do not count); -1 when the platform cannot tell. Thread CPU time has nanosecond
+     * resolution (process CPU time on Linux only clock ticks); the pauses are added because the
+     * collector's work is done by its own threads.
      */
     private static long cpuNow() {
-        if (OS instanceof com.sun.management.OperatingSystemMXBean hs) {
-            long t = hs.getProcessCpuTime();
-            return t >= 0 ? t : -1;
+        if (!THREADS.isCurrentThreadCpuTimeSupported()) {
+            return -1;
         }
-        return -1;
+        long gcMillis = 0;
+        for (java.lang.management.GarbageCollectorMXBean gc
+                : java.lang.management.ManagementFactory.getGarbageCollectorMXBeans()) {
+            gcMillis += Math.max(0, gc.getCollectionTime());
+        }
+        return THREADS.getCurrentThreadCpuTime() + gcMillis * 1_000_000L;
     }
 
     /** A run longer than this is not repeated (its time is stable enough, and the full run must stay short). */
