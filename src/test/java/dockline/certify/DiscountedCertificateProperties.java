@@ -116,6 +116,58 @@ class DiscountedCertificateProperties {
     }
 
     /**
+     * Oracle: the definition of a winning policy, checked play by play by {@link DiscountedPlayEnumerator}
+     * (each play's finite discounted sum, a cycle when a play repeats a situation): on random, often
+     * cyclic or failing policies the checker accepts exactly the policies whose every play completes
+     * with its score meeting the threshold, and then its worst score is the minimum over the plays. The
+     * loop's topological order must also agree with jgrapht's CycleDetector on a copy of the loop.
+     */
+    @Property(tries = 300)
+    void randomPolicy_verdictAndWorstScore_matchPlayEnumeration(@ForAll long seed) {
+        Random r = new Random(seed);
+        Mission base = RandomMissions.fromSeed(seed);
+        Objective.Discounted o = objective(base, r);
+        Arena arena = ArenaCompiler.compile(base);
+        boolean keep = r.nextBoolean();
+        int floor = keep ? base.reserveUnits() : Integer.MIN_VALUE;
+        int start = keep ? Math.max(base.reserveUnits(), base.startUnits()) : base.startUnits();
+        Policy p = dockline.fixtures.RandomScoredPolicy.of(arena, o, floor, start, seed, 5_000);
+        OptionalInt kept = keep ? OptionalInt.of(floor) : OptionalInt.empty();
+        DiscountedClosedLoop loop = DiscountedCertificateChecker.closedLoop(arena, p, o, kept, start);
+        DiscountedCertificate c = DiscountedCertificateChecker.certify(loop);
+        if (loop.complete()) {
+            org.jgrapht.Graph<Integer, org.jgrapht.graph.DefaultEdge> g =
+                    new org.jgrapht.graph.DefaultDirectedGraph<>(org.jgrapht.graph.DefaultEdge.class);
+            for (int v = 0; v < loop.nodeCount(); v++) {
+                g.addVertex(v);
+            }
+            for (int v = 0; v < loop.nodeCount(); v++) {
+                for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
+                    g.addEdge(v, loop.succNode(s));
+                }
+            }
+            boolean cyclic = new org.jgrapht.alg.cycle.CycleDetector<>(g).detectCycles();
+            assertThat(loop.topologicalOrder() == null).isEqualTo(cyclic);
+            assertThat(loop.findCycle().isEmpty()).isEqualTo(!cyclic);
+            Statistics.label("loop").collect(cyclic ? "cyclic" : "acyclic");
+        }
+        DiscountedPlayEnumerator.Result e;
+        try {
+            e = DiscountedPlayEnumerator.run(arena, p, o, keep ? floor : null, start);
+        } catch (DiscountedPlayEnumerator.TooManyPlays tooMany) {
+            Statistics.label("verdict").collect("too many plays to enumerate");
+            return;
+        }
+        Statistics.label("verdict").collect(c.ok() ? "certified" : "rejected");
+        assertThat(c.ok()).as("checker: %s; plays: %s", c.reason(), e.why()).isEqualTo(e.ok());
+        if (c.ok()) {
+            ExactScore worst = c.worstScore().orElseThrow();
+            assertThat(e.worstIs(worst.num(), worst.den())).as("plays %s/%s, certificate %s", e.num(), e.den(), worst)
+                    .isTrue();
+        }
+    }
+
+    /**
      * Mutation test. Oracle: the naive explicit game {@link ScoreGameBruteForce} (Grädel, Thomas,
      * Wilke 2002, ch. 2) tells which actions lose a situation once the score counts, and the reserve
      * game {@link BruteForce} which still win without it. Take a certified policy, search for a row
