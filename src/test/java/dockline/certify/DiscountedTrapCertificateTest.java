@@ -36,6 +36,8 @@ class DiscountedTrapCertificateTest {
         assertThat(c.worstScore().orElseThrow().sameValue(Rational.of(16385, 16384))).as(c.reason()).isTrue();
         assertThat(c.worstScore().get().sameValue(a.worstCaseScore().orElseThrow())).isTrue();
         assertThat(c.worstMinimumUnits()).isGreaterThanOrEqualTo(m.reserveUnits());
+        // the figure missions/README.md quotes
+        assertThat(c.statesChecked()).isEqualTo(27);
     }
 
     @Test
