@@ -79,7 +79,7 @@ public final class CheckCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
             if (objective instanceof Objective.Discounted d) {
-                return discounted.run(m.withObjective(d), d, mission.memoryBudgetBytes(), json, out);
+                return discounted.run(m.withObjective(d), d, mission.memoryBudgetBytes(), json, out, err);
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
                     .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));

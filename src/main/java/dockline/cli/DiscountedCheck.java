@@ -6,6 +6,9 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.arena.Action;
 import dockline.arena.ActionKind;
+import dockline.certify.ClosedLoop;
+import dockline.certify.DiscountedCertificate;
+import dockline.certify.DiscountedCertificateChecker;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
@@ -13,16 +16,21 @@ import dockline.model.Relation;
 import dockline.report.Caveats;
 import dockline.solve.DiscountedAnalysis;
 import dockline.solve.DiscountedOptions;
+import dockline.solve.DiscountedPolicies;
 import dockline.solve.DiscountedSolver;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
+import java.util.OptionalInt;
 import picocli.CommandLine.Option;
 
 /**
  * The discounted-objective part of {@code check} (a picocli mixin): the options that choose or
  * override the objective, and the report of {@link DiscountedSolver#analyse}, as text or JSON.
+ * Every guaranteed verdict is re-checked by {@link DiscountedCertificateChecker} on the exported
+ * policy ({@link DiscountedPolicies}) before it is reported, and the worst score the solver reports
+ * must equal the certificate's exact worst score; otherwise exit 4, never a silent "guaranteed".
  */
 final class DiscountedCheck {
 
@@ -129,15 +137,49 @@ final class DiscountedCheck {
                 .withMemoryBudget(memoryBudgetBytes);
     }
 
-    /** Analyses and prints; returns the exit code. Exceptions are mapped by the caller. */
-    int run(Mission m, Objective.Discounted o, long memoryBudgetBytes, boolean json, PrintWriter out) {
+    /** Analyses, certifies and prints; returns the exit code. Other exceptions are mapped by the caller. */
+    int run(Mission m, Objective.Discounted o, long memoryBudgetBytes, boolean json, PrintWriter out, PrintWriter err) {
         DiscountedAnalysis a = DiscountedSolver.analyse(m, o, options(memoryBudgetBytes));
+        DiscountedCertificate cert = null;
+        if (a.guaranteed()) {
+            try {
+                cert = certify(a);
+            } catch (ClosedLoop.TooLargeException e) {
+                err.println("dockline: " + m.name() + ": the certificate check is too large: " + e.getMessage());
+                return ExitCodes.RESOURCE_LIMIT;
+            }
+            String problem = certificateProblem(a, cert);
+            if (problem != null) {
+                err.println("dockline: internal error: the solver says guaranteed, but " + problem);
+                err.println("No verdict is given. Please report this with the input files.");
+                return ExitCodes.INTERNAL;
+            }
+        }
         if (json) {
-            out.println(json(a));
+            out.println(json(a, cert));
         } else {
-            human(a, out);
+            human(a, cert, out);
         }
         return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    /** The certificate of a guaranteed analysis: its policy re-checked on the independent code path. */
+    static DiscountedCertificate certify(DiscountedAnalysis a) {
+        Mission m = a.mission();
+        return DiscountedCertificateChecker.check(a.game().arena(), DiscountedPolicies.of(a), a.objective(),
+                a.reserveKept() ? OptionalInt.of(m.reserveUnits()) : OptionalInt.empty(), m.startUnits());
+    }
+
+    /** What is wrong with the certificate of a guaranteed analysis, or {@code null} when nothing is. */
+    static String certificateProblem(DiscountedAnalysis a, DiscountedCertificate cert) {
+        if (!cert.ok()) {
+            return "its policy failed the independent certificate: " + cert.reason();
+        }
+        if (a.worstCaseScore().isPresent() && !cert.worstScore().orElseThrow().sameValue(a.worstCaseScore().get())) {
+            return "its worst score " + a.worstCaseScore().get() + " differs from the certificate's exact worst score "
+                    + cert.worstScore().get();
+        }
+        return null;
     }
 
     static String condition(Objective.Discounted o) {
@@ -145,6 +187,11 @@ final class DiscountedCheck {
     }
 
     static void human(DiscountedAnalysis a, PrintWriter out) {
+        human(a, null, out);
+    }
+
+    /** The summary, with the certificate line when guaranteed. */
+    static void human(DiscountedAnalysis a, DiscountedCertificate cert, PrintWriter out) {
         Mission m = a.mission();
         Objective.Discounted o = a.objective();
         int k = m.map().disturbances().budget();
@@ -159,6 +206,8 @@ final class DiscountedCheck {
         }
         if (a.worstCaseScore().isPresent()) {
             out.println("  Worst score under the policy:  " + show(a.worstCaseScore().get()));
+        } else if (cert != null && cert.worstScore().isPresent()) {
+            out.println("  Worst score under the policy:  " + cert.worstScore().get() + " (by the certificate)");
         }
         if (!a.nominalPlan().isEmpty()) {
             out.println("  Plan with no disturbance:      " + plan(a.nominalPlan()));
@@ -179,6 +228,12 @@ final class DiscountedCheck {
                     + (c ? "completes the mission" : "never completes the mission")));
         });
         out.println("  Energy: " + m.scale().describe());
+        if (cert != null) {
+            out.println("  certified: " + cert.ok() + " (the policy re-checked independently over " + cert.statesChecked()
+                    + " situations; worst score exactly " + cert.worstScore().map(Object::toString).orElse("?")
+                    + (cert.reserveKept() ? "; battery never below " + cert.worstMinimumUnits() + " units = "
+                    + m.scale().formatWh(cert.worstMinimumUnits()) : "") + ")");
+        }
         for (String note : a.notes()) {
             out.println("  Note: " + note);
         }
@@ -222,6 +277,10 @@ final class DiscountedCheck {
     }
 
     static String json(DiscountedAnalysis a) {
+        return json(a, null);
+    }
+
+    static String json(DiscountedAnalysis a, DiscountedCertificate cert) {
         ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode o = mapper.createObjectNode();
         Mission m = a.mission();
@@ -273,6 +332,14 @@ final class DiscountedCheck {
                 bo.putNull("optimalPlayCompletes");
             }
             bo.put("sweeps", b.sweeps());
+        }
+        o.put("certified", cert != null && cert.ok());
+        if (cert != null) {
+            o.put("certifiedStates", cert.statesChecked());
+            o.put("certifiedWorstScore", cert.worstScore().map(Object::toString).orElse(null));
+            if (cert.reserveKept()) {
+                o.put("certifiedWorstMinimumUnits", cert.worstMinimumUnits());
+            }
         }
         o.put("discretisation", m.scale().describe());
         ArrayNode notes = o.putArray("notes");

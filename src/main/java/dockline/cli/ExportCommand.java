@@ -4,6 +4,11 @@ import dockline.io.PolicyFiles;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
+import dockline.solve.DiscountedAnalysis;
+import dockline.solve.DiscountedOptions;
+import dockline.solve.DiscountedPolicies;
+import dockline.solve.DiscountedSolver;
+import dockline.solve.Policy;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
@@ -20,11 +25,14 @@ import picocli.CommandLine.Option;
 /**
  * {@code dockline export MISSION --policy FILE}: solves the mission and writes the robot's policy,
  * one row per situation it can meet (format: missions/POLICY-FORMAT.md; CSV for a {@code .csv}
- * name, else JSON), atomically. Nothing is written when the mission is not guaranteed.
+ * name, else JSON), atomically. Nothing is written when the mission is not guaranteed. For a
+ * mission with a discounted objective the rows carry the robot's score memory (format version 2,
+ * {@link DiscountedPolicies}); the reserve floor is kept as well, as {@code check} does by default.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
         description = {"Writes the robot's policy for a guaranteed mission: for every situation it can meet (cell,",
-                "battery level, disturbances left, tasks done) the action to take. JSON, or CSV for a .csv name."},
+                "battery level, disturbances left, tasks done, and for a discounted score the score gap) the action",
+                "to take. JSON, or CSV for a .csv name."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:the game is too large for the memory limit"})
@@ -39,20 +47,42 @@ public final class ExportCommand implements Callable<Integer> {
     @Option(names = "--policy", required = true, paramLabel = "FILE", description = "where to write the policy (.json or .csv)")
     Path policyFile;
 
+    private int exportDiscounted(Mission m, Objective.Discounted o, PrintWriter out, PrintWriter err)
+            throws IOException {
+        if (mission.safestPolicy) {
+            err.println("dockline: --safest-policy applies to the reserve objective only");
+            return ExitCodes.BAD_INPUT;
+        }
+        DiscountedAnalysis a = DiscountedSolver.analyse(m, o,
+                DiscountedOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
+        if (!a.guaranteed()) {
+            out.println("NOT GUARANTEED: " + m.name() + " — there is no policy meeting " + DiscountedCheck.condition(o)
+                    + " to export; nothing written.");
+            out.println(Caveats.block());
+            return ExitCodes.NOT_GUARANTEED;
+        }
+        Policy p = DiscountedPolicies.of(a);
+        PolicyFiles.write(policyFile, PolicyFiles.Header.of(m, o, a.maxAbsWeight(), a.reserveKept()), p);
+        out.println("Wrote the policy for " + m.name() + " to " + policyFile + ": " + p.size() + " rows with the score"
+                + " memory; worst score " + a.worstCaseScore().map(DiscountedCheck::show).orElse("not shown")
+                + " against " + DiscountedCheck.condition(o) + ".");
+        out.println("  Energy: " + m.scale().describe());
+        out.println(Caveats.block());
+        return ExitCodes.OK;
+    }
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         try {
             Mission m = mission.load(err);
-            if (!(m.objective() instanceof Objective.Reserve)) {
-                err.println("dockline: " + mission.missionFile + ": this mission's objective is a discounted score;"
-                        + " 'export' handles the reserve objective only so far");
-                return ExitCodes.BAD_INPUT;
-            }
             if (m.reserveUnits() > m.capacityUnits()) {
                 err.println("dockline: " + mission.missionFile + ": the reserve floor is above the capacity");
                 return ExitCodes.BAD_INPUT;
+            }
+            if (m.objective() instanceof Objective.Discounted o) {
+                return exportDiscounted(m, o, out, err);
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false)
                     .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));

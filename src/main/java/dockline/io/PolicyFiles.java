@@ -12,8 +12,12 @@ import dockline.arena.Action;
 import dockline.arena.ActionKind;
 import dockline.model.Cell;
 import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.model.Rational;
+import dockline.model.Relation;
 import dockline.solve.Policy;
 import dockline.solve.PolicyEntry;
+import dockline.solve.PolicyScore;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
@@ -28,6 +32,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -36,7 +41,10 @@ import java.util.regex.Pattern;
  * Reads and writes exported robot policies in dockline's own plain formats, JSON or CSV chosen by
  * the file name's extension; both are documented in missions/POLICY-FORMAT.md. One row per
  * situation the robot can meet while following the policy: cell, battery level (units), budget
- * left, task progress (bit mask over the mission's visit list) and the action.
+ * left, task progress (bit mask over the mission's visit list), for a discounted mission the score
+ * memory ({@link PolicyScore}), and the action. Reserve policies are written as format version 1,
+ * exactly as before the score memory existed; policies with a score memory as version 2 (with the
+ * objective in the header and a {@code score} per row). Both versions are read.
  *
  * <p>Writing is atomic ({@link AtomicFiles}). Reading checks the format (not whether the policy is
  * any good: that is the certificate checker's job) and reports every problem at once as
@@ -46,7 +54,27 @@ public final class PolicyFiles {
 
     /** The value of the {@code format} key (JSON) / the first comment line (CSV). */
     public static final String FORMAT = "dockline-policy";
+    /** The format version of reserve policies (no score memory). */
     public static final int VERSION = 1;
+    /** The format version of policies with a score memory (discounted missions). */
+    public static final int VERSION_WITH_SCORE = 2;
+
+    /**
+     * The discounted objective a policy with a score memory was computed for: what a robot needs to
+     * keep its memory (the gap, and when it is {@code secured}).
+     *
+     * @param discount    discount factor d
+     * @param threshold   threshold v
+     * @param relation    {@code >=} or {@code >}
+     * @param weightBound mu, the largest energy change of a step in units; the gap is secured beyond mu/(d-1)
+     * @param reserveKept whether the reserve floor of the header was kept as well
+     */
+    public record ScoreTerms(int discount, Rational threshold, Relation relation, int weightBound,
+                             boolean reserveKept) {
+        public Objective.Discounted objective() {
+            return new Objective.Discounted(discount, threshold, relation);
+        }
+    }
 
     /**
      * What the rows are about, so a reader can tell whether a policy fits a mission.
@@ -57,17 +85,36 @@ public final class PolicyFiles {
      * @param capacityUnits battery capacity
      * @param budget        disturbance budget K
      * @param tasks         the visit list; bit i of a row's progress is task i
+     * @param score         for a policy with a score memory: the discounted objective; empty for a reserve policy
      */
     public record Header(String mission, BigDecimal unitWh, int floorUnits, int capacityUnits, int budget,
-                         List<String> tasks) {
+                         List<String> tasks, Optional<ScoreTerms> score) {
         public Header {
             tasks = List.copyOf(tasks);
+            score = score == null ? Optional.empty() : score;
         }
 
-        /** The header for a policy computed for this mission (its reserve floor and budget). */
+        /** The header of a reserve policy. */
+        public Header(String mission, BigDecimal unitWh, int floorUnits, int capacityUnits, int budget,
+                      List<String> tasks) {
+            this(mission, unitWh, floorUnits, capacityUnits, budget, tasks, Optional.empty());
+        }
+
+        /** The header for a reserve policy computed for this mission (its reserve floor and budget). */
         public static Header of(Mission m) {
             return new Header(m.name(), m.scale().unitWh(), m.reserveUnits(), m.capacityUnits(),
                     m.map().disturbances().budget(), m.tasks().visit());
+        }
+
+        /** The header for a policy with a score memory computed for this mission and objective. */
+        public static Header of(Mission m, Objective.Discounted o, int weightBound, boolean reserveKept) {
+            return new Header(m.name(), m.scale().unitWh(), m.reserveUnits(), m.capacityUnits(),
+                    m.map().disturbances().budget(), m.tasks().visit(), Optional.of(new ScoreTerms(o.discount(),
+                    o.threshold(), o.relation(), weightBound, reserveKept)));
+        }
+
+        int version() {
+            return score.isPresent() ? VERSION_WITH_SCORE : VERSION;
         }
     }
 
@@ -75,10 +122,16 @@ public final class PolicyFiles {
     public record Document(Header header, Policy policy) {
     }
 
+    private static final List<String> SCORE_KEYS = List.of("objective", "discount", "threshold", "relation",
+            "weight-bound", "reserve-kept");
     private static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unit-wh", "floor-units",
-            "capacity-units", "budget", "tasks", "rows");
+            "capacity-units", "budget", "tasks", "objective", "discount", "threshold", "relation", "weight-bound",
+            "reserve-kept", "rows");
     private static final List<String> ROW_KEYS = List.of("cell", "level", "budget-left", "progress", "action", "to");
+    private static final List<String> SCORE_ROW_KEYS = List.of("cell", "level", "budget-left", "progress", "score",
+            "action", "to");
     private static final String CSV_HEADER = String.join(",", ROW_KEYS);
+    private static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
     private static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
 
     private PolicyFiles() {
@@ -103,6 +156,7 @@ public final class PolicyFiles {
     }
 
     private static void writeJson(Writer w, Header h, Policy policy) throws IOException {
+        requireMatch(h, policy);
         JsonFactory f = new JsonFactory();
         try (JsonGenerator g = f.createGenerator(w)) {
             g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
@@ -111,7 +165,7 @@ public final class PolicyFiles {
             g.setPrettyPrinter(pp);
             g.writeStartObject();
             g.writeStringField("format", FORMAT);
-            g.writeNumberField("version", VERSION);
+            g.writeNumberField("version", h.version());
             g.writeStringField("mission", h.mission());
             g.writeStringField("unit-wh", h.unitWh().stripTrailingZeros().toPlainString());
             g.writeNumberField("floor-units", h.floorUnits());
@@ -122,6 +176,15 @@ public final class PolicyFiles {
                 g.writeString(t);
             }
             g.writeEndArray();
+            if (h.score().isPresent()) {
+                ScoreTerms t = h.score().get();
+                g.writeStringField("objective", "discounted");
+                g.writeNumberField("discount", t.discount());
+                g.writeStringField("threshold", t.threshold().toString());
+                g.writeStringField("relation", t.relation().symbol());
+                g.writeNumberField("weight-bound", t.weightBound());
+                g.writeBooleanField("reserve-kept", t.reserveKept());
+            }
             g.writeArrayFieldStart("rows");
             for (PolicyEntry e : policy.entries()) {
                 // one row per line: written compactly, placed raw by the pretty printer
@@ -141,6 +204,9 @@ public final class PolicyFiles {
             g.writeNumberField("level", e.level());
             g.writeNumberField("budget-left", e.budgetLeft());
             g.writeNumberField("progress", e.progress());
+            if (e.scored()) {
+                g.writeStringField("score", e.score().text());
+            }
             g.writeStringField("action", e.action().kind().word());
             if (e.action().kind() == ActionKind.MOVE) {
                 g.writeStringField("to", e.action().target().toString());
@@ -150,21 +216,45 @@ public final class PolicyFiles {
         return sw.toString();
     }
 
+    /** A header with score terms goes with rows with a score memory, and only with them. */
+    private static void requireMatch(Header h, Policy policy) {
+        if (policy.size() > 0 && policy.scored() != h.score().isPresent()) {
+            throw new IllegalArgumentException(h.score().isPresent()
+                    ? "a header with a discounted objective needs rows with a score memory"
+                    : "rows with a score memory need a header with the discounted objective");
+        }
+    }
+
     private static void writeCsv(Writer w, Header h, Policy policy) throws IOException {
+        requireMatch(h, policy);
         String nl = "\n";
-        w.write("# " + FORMAT + " " + VERSION + nl);
+        w.write("# " + FORMAT + " " + h.version() + nl);
         w.write("# mission: " + h.mission().replace('\n', ' ').replace('\r', ' ') + nl);
         w.write("# unit-wh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
         w.write("# floor-units: " + h.floorUnits() + nl);
         w.write("# capacity-units: " + h.capacityUnits() + nl);
         w.write("# budget: " + h.budget() + nl);
         w.write("# tasks: " + String.join(" ", h.tasks()) + nl);
-        w.write(CSV_HEADER + nl);
+        if (h.score().isPresent()) {
+            ScoreTerms t = h.score().get();
+            w.write("# objective: discounted" + nl);
+            w.write("# discount: " + t.discount() + nl);
+            w.write("# threshold: " + t.threshold() + nl);
+            w.write("# relation: " + t.relation().symbol() + nl);
+            w.write("# weight-bound: " + t.weightBound() + nl);
+            w.write("# reserve-kept: " + t.reserveKept() + nl);
+        }
+        boolean scored = h.score().isPresent();
+        w.write((scored ? CSV_SCORE_HEADER : CSV_HEADER) + nl);
         StringBuilder sb = new StringBuilder();
         for (PolicyEntry e : policy.entries()) {
             sb.setLength(0);
             sb.append(e.cell()).append(',').append(e.level()).append(',').append(e.budgetLeft()).append(',')
-                    .append(e.progress()).append(',').append(e.action().kind().word()).append(',');
+                    .append(e.progress()).append(',');
+            if (scored) {
+                sb.append(e.score().text()).append(',');
+            }
+            sb.append(e.action().kind().word()).append(',');
             if (e.action().kind() == ActionKind.MOVE) {
                 sb.append(e.action().target());
             }
@@ -199,6 +289,7 @@ public final class PolicyFiles {
     private static final class Rows {
         final Problems problems;
         final List<PolicyEntry> entries = new ArrayList<>();
+        final List<Pos> positions = new ArrayList<>();
         final Set<String> seen = new HashSet<>();
 
         Rows(Problems problems) {
@@ -206,17 +297,29 @@ public final class PolicyFiles {
         }
 
         void add(Pos pos, PolicyEntry e) {
-            String key = e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress();
+            String key = e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress()
+                    + (e.scored() ? "/" + e.score().text() : "");
             if (!seen.add(key)) {
                 problems.add(pos, "a second row for cell " + e.cell() + ", level " + e.level() + ", budget left "
-                        + e.budgetLeft() + ", progress " + e.progress(), "keep one action per situation");
+                        + e.budgetLeft() + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
+                        "keep one action per situation");
                 return;
             }
             entries.add(e);
+            positions.add(pos);
         }
 
-        Policy policy() {
-            return new Policy(entries);
+        /** The policy; every row has a score memory exactly when the header has the discounted objective. */
+        Policy policy(Header h) {
+            boolean scored = h.score().isPresent();
+            for (int i = 0; i < entries.size(); i++) {
+                if (entries.get(i).scored() != scored) {
+                    problems.add(positions.get(i), scored ? "row has no 'score' (the policy is for a discounted mission)"
+                            : "a row with a 'score' needs 'objective: discounted' in the header",
+                            scored ? "give the score memory, e.g. 3/8 or secured" : "see missions/POLICY-FORMAT.md");
+                }
+            }
+            return problems.any() ? null : new Policy(entries);
         }
     }
 
@@ -254,6 +357,16 @@ public final class PolicyFiles {
         int budget = nonNegative(p, values, at, "budget-left");
         int progress = nonNegative(p, values, at, "progress");
         ok &= level >= 0 && budget >= 0 && progress >= 0;
+        PolicyScore score = null;
+        if (values.containsKey("score") && !values.get("score").isBlank()) {
+            try {
+                score = PolicyScore.parse(values.get("score"));
+            } catch (NumberFormatException e) {
+                p.add(at.get("score"), "'" + Loading.shorten(values.get("score")) + "' is not a score memory",
+                        "write the gap as n/q (e.g. -3/8, 2) or the word " + PolicyScore.SECURED_WORD);
+                ok = false;
+            }
+        }
         ActionKind kind = ActionKind.ofWord(values.get("action").trim());
         if (kind == null) {
             p.add(at.get("action"), "unknown action '" + Loading.shorten(values.get("action")) + "'",
@@ -276,7 +389,12 @@ public final class PolicyFiles {
             p.add(at.get("to"), "'" + kind.word() + "' stays on its cell and takes no 'to'", "leave 'to' out");
             return null;
         }
-        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target)) : null;
+        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score) : null;
+    }
+
+    private static boolean knownVersion(String v) {
+        String t = v.trim();
+        return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_WITH_SCORE));
     }
 
     private static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
@@ -313,7 +431,80 @@ public final class PolicyFiles {
         if (floor < 0 || cap < 0 || budget < 0) {
             return null;
         }
-        return new Header(values.get("mission"), unit, floor, cap, budget, tasks);
+        Optional<ScoreTerms> score = scoreTerms(p, pos, values, at);
+        if (score == null) {
+            return null;
+        }
+        return new Header(values.get("mission"), unit, floor, cap, budget, tasks, score);
+    }
+
+    /** The discounted objective of the header, empty for a reserve policy, null after a problem. */
+    private static Optional<ScoreTerms> scoreTerms(Problems p, Pos pos, Map<String, String> values,
+                                                   Map<String, Pos> at) {
+        String kind = values.get("objective");
+        if (kind == null || kind.trim().equals("reserve")) {
+            for (String k : SCORE_KEYS.subList(1, SCORE_KEYS.size())) {
+                if (values.containsKey(k)) {
+                    p.add(at.get(k), "'" + k + "' belongs to a policy for a discounted mission",
+                            "add 'objective: discounted', or leave '" + k + "' out");
+                    return null;
+                }
+            }
+            return Optional.empty();
+        }
+        if (!kind.trim().equals("discounted")) {
+            p.add(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
+            return null;
+        }
+        for (String k : List.of("discount", "threshold", "weight-bound")) {
+            if (!values.containsKey(k)) {
+                p.add(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
+                return null;
+            }
+        }
+        boolean ok = true;
+        int d = nonNegative(p, values, at, "discount");
+        if (d >= 0 && d < 2) {
+            p.add(at.get("discount"), "'discount' must be a whole number of at least 2");
+            ok = false;
+        }
+        int mu = nonNegative(p, values, at, "weight-bound");
+        ok &= d >= 0 && mu >= 0;
+        Rational v = null;
+        String t = values.get("threshold").trim();
+        if (t.matches("[+-]?\\d{1,18}(/\\d{1,18})?")) {
+            try {
+                v = Rational.parse(t);
+            } catch (NumberFormatException | ArithmeticException e) {
+                v = null;
+            }
+        }
+        if (v == null) {
+            p.add(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
+            ok = false;
+        }
+        Relation rel = Relation.AT_LEAST;
+        if (values.containsKey("relation")) {
+            rel = switch (values.get("relation").trim()) {
+                case ">=", "at-least" -> Relation.AT_LEAST;
+                case ">", "above" -> Relation.ABOVE;
+                default -> null;
+            };
+            if (rel == null) {
+                p.add(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
+                ok = false;
+            }
+        }
+        boolean kept = true;
+        if (values.containsKey("reserve-kept")) {
+            String k = values.get("reserve-kept").trim();
+            if (!k.equals("true") && !k.equals("false")) {
+                p.add(at.get("reserve-kept"), "'reserve-kept' must be true or false");
+                ok = false;
+            }
+            kept = k.equals("true");
+        }
+        return ok ? Optional.of(new ScoreTerms(d, v, rel, mu, kept)) : null;
     }
 
     /** JSON through Jackson's streaming parser, so every value keeps its line and column. */
@@ -395,15 +586,19 @@ public final class PolicyFiles {
                 if (!FORMAT.equals(values.get("format"))) {
                     p.add(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
                 }
-                if (values.containsKey("version") && !String.valueOf(VERSION).equals(values.get("version"))) {
+                if (values.containsKey("version") && !knownVersion(values.get("version"))) {
                     p.add(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
-                            + " is not known (this dockline reads version " + VERSION + ")");
+                            + " is not known (this dockline reads versions " + VERSION + " and " + VERSION_WITH_SCORE + ")");
                 }
                 if (!sawRows) {
                     p.add(top, "no 'rows' in the policy file");
                 }
                 Header h = header(p, top, values, at, tasks);
-                return h == null || p.any() ? null : new Document(h, rows.policy());
+                if (h == null) {
+                    return null;
+                }
+                Policy policy = rows.policy(h);
+                return policy == null || p.any() ? null : new Document(h, policy);
             } catch (JsonParseException e) {
                 p.add(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
                 return null;
@@ -416,7 +611,7 @@ public final class PolicyFiles {
         private void readRow(JsonParser j, Rows rows) throws IOException {
             Pos rp = pos(j.currentTokenLocation());
             if (j.currentToken() != JsonToken.START_OBJECT) {
-                p.add(rp, "a row is an object with " + String.join(", ", ROW_KEYS));
+                p.add(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
                 j.skipChildren();
                 return;
             }
@@ -428,8 +623,8 @@ public final class PolicyFiles {
                 Pos kp = pos(j.currentTokenLocation());
                 JsonToken t = j.nextToken();
                 Pos vp = pos(j.currentTokenLocation());
-                if (!ROW_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, ROW_KEYS);
+                if (!SCORE_ROW_KEYS.contains(key)) {
+                    String near = Spelling.closest(key, SCORE_ROW_KEYS);
                     p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : null);
                     j.skipChildren();
                     bad = true;
@@ -455,6 +650,8 @@ public final class PolicyFiles {
     private static final class CsvReading {
         private final Problems p;
         private final byte[] bytes;
+        /** The row fields, as the header row names them. */
+        private List<String> columns = ROW_KEYS;
 
         CsvReading(Problems p, byte[] bytes) {
             this.p = p;
@@ -480,9 +677,9 @@ public final class PolicyFiles {
                     String c = line.substring(1).trim();
                     if (!formatLine && !headerRow) {
                         formatLine = true;
-                        if (!c.equals(FORMAT + " " + VERSION)) {
+                        if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
                             p.add(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
-                                    + VERSION + "'");
+                                    + VERSION + "' (or '# " + FORMAT + " " + VERSION_WITH_SCORE + "' with a score memory)");
                         }
                         continue;
                     }
@@ -513,8 +710,11 @@ public final class PolicyFiles {
                 }
                 if (!headerRow) {
                     headerRow = true;
-                    if (!line.trim().equals(CSV_HEADER)) {
-                        p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "'");
+                    if (line.trim().equals(CSV_SCORE_HEADER)) {
+                        columns = SCORE_ROW_KEYS;
+                    } else if (!line.trim().equals(CSV_HEADER)) {
+                        p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
+                                + "' for a discounted mission)");
                         return null;
                     }
                     continue;
@@ -528,7 +728,11 @@ public final class PolicyFiles {
                 p.add(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
             }
             Header h = header(p, Pos.START, values, at, tasks);
-            return h == null || p.any() ? null : new Document(h, rows.policy());
+            if (h == null) {
+                return null;
+            }
+            Policy policy = rows.policy(h);
+            return policy == null || p.any() ? null : new Document(h, policy);
         }
 
         private void readRow(String line, int ln, Rows rows) {
@@ -538,19 +742,20 @@ public final class PolicyFiles {
             int start = 0;
             for (int i = 0; i <= line.length(); i++) {
                 if (i == line.length() || line.charAt(i) == ',') {
-                    if (field < ROW_KEYS.size()) {
+                    if (field < columns.size()) {
                         String v = line.substring(start, i);
-                        if (!(field == ROW_KEYS.size() - 1 && v.isBlank())) {
-                            values.put(ROW_KEYS.get(field), v);
+                        if (!(field == columns.size() - 1 && v.isBlank())) {
+                            values.put(columns.get(field), v);
                         }
-                        at.put(ROW_KEYS.get(field), new Pos(ln, start + 1));
+                        at.put(columns.get(field), new Pos(ln, start + 1));
                     }
                     field++;
                     start = i + 1;
                 }
             }
-            if (field != ROW_KEYS.size()) {
-                p.add(new Pos(ln, 1), "a row has " + ROW_KEYS.size() + " fields (" + CSV_HEADER + "), this one has " + field);
+            if (field != columns.size()) {
+                p.add(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
+                        + "), this one has " + field);
                 return;
             }
             PolicyEntry e = row(p, new Pos(ln, 1), values, at);
