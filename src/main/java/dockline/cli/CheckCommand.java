@@ -1,7 +1,5 @@
 package dockline.cli;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.certify.Certificate;
@@ -13,7 +11,6 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
-import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import dockline.solve.ReserveSolver;
@@ -38,8 +35,8 @@ import picocli.CommandLine.Option;
  * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit, 4 internal error.
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Decides whether the robot can always finish the mission and dock without its battery going",
-                "below the reserve floor, whatever the building's disturbance model allows.",
+        description = {"Decides whether the robot can always finish the mission and dock without its battery going"
+                + " below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed (and its policy certified)", "1:not guaranteed", "2:bad input or usage",
@@ -53,7 +50,10 @@ public final class CheckCommand implements Callable<Integer> {
     @Mixin
     MissionOptions mission;
 
-    @Option(names = "--json", description = "print the result as one JSON object")
+    @Mixin
+    SafestPolicyOption safest;
+
+    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
     boolean json;
 
     @Mixin
@@ -69,20 +69,15 @@ public final class CheckCommand implements Callable<Integer> {
             if (objective == null) {
                 return ExitCodes.BAD_INPUT;
             }
-            if (objective instanceof Objective.Discounted && mission.safestPolicy) {
+            if (objective instanceof Objective.Discounted && safest.on) {
                 err.println("dockline: --safest-policy applies to the reserve objective only");
-                return ExitCodes.BAD_INPUT;
-            }
-            if (m.reserveUnits() > m.capacityUnits()) {
-                err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
-                        + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
                 return ExitCodes.BAD_INPUT;
             }
             if (objective instanceof Objective.Discounted d) {
                 return discounted.run(m.withObjective(d), d, mission.memoryBudgetBytes(), json, out, err);
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
-                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(mission.safestPolicy));
+                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(safest.on));
             // never a silent "guaranteed": the policy is re-checked on an independent code path
             Certificate cert = null;
             if (a.guaranteed()) {
@@ -106,19 +101,8 @@ public final class CheckCommand implements Callable<Integer> {
             return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
         } catch (MissionOptions.BadInput e) {
             return ExitCodes.BAD_INPUT;
-        } catch (ProductTooLargeException e) {
-            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
-            err.println("The limit is half the JVM's heap unless --max-memory MB says otherwise.");
-            return ExitCodes.RESOURCE_LIMIT;
-        } catch (ArithmeticException | OutOfMemoryError e) {
-            // a count past the int range, or an estimate that fell short of the heap actually needed
-            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage()
-                    + ". Use a coarser energy resolution or a smaller disturbance budget K, or give the JVM more"
-                    + " memory (-Xmx).");
-            return ExitCodes.RESOURCE_LIMIT;
-        } catch (IllegalArgumentException e) {
-            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return mission.failure(e, err);
         } finally {
             out.flush();
             err.flush();
@@ -195,8 +179,7 @@ public final class CheckCommand implements Callable<Integer> {
     }
 
     static String json(ReserveAnalysis a, Certificate cert, List<Suggestion> suggestions) {
-        ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = Json.object();
         Mission m = a.mission();
         o.put("mission", m.name());
         o.put("file", m.source() == null ? null : m.source().toString());
@@ -238,13 +221,7 @@ public final class CheckCommand implements Callable<Integer> {
         o.put("discretisation", a.scale().describe());
         ArrayNode notes = o.putArray("notes");
         a.notes().forEach(notes::add);
-        ArrayNode caveats = o.putArray("caveats");
-        Caveats.LINES.forEach(caveats::add);
-        try {
-            return mapper.writeValueAsString(o);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalStateException("cannot write JSON", e);
-        }
+        return Json.withCaveats(o);
     }
 
     private static void putOptional(ObjectNode o, String key, OptionalInt v) {

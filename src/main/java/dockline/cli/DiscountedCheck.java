@@ -1,7 +1,5 @@
 package dockline.cli;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.arena.Action;
@@ -18,6 +16,7 @@ import dockline.solve.DiscountedAnalysis;
 import dockline.solve.DiscountedOptions;
 import dockline.solve.DiscountedPolicies;
 import dockline.solve.DiscountedSolver;
+import dockline.solve.Policy;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -165,8 +164,13 @@ final class DiscountedCheck {
 
     /** The certificate of a guaranteed analysis: its policy re-checked on the independent code path. */
     static DiscountedCertificate certify(DiscountedAnalysis a) {
+        return certify(a, DiscountedPolicies.of(a));
+    }
+
+    /** The certificate of the given policy of a guaranteed analysis (the one that is exported). */
+    static DiscountedCertificate certify(DiscountedAnalysis a, Policy policy) {
         Mission m = a.mission();
-        return DiscountedCertificateChecker.check(a.game().arena(), DiscountedPolicies.of(a), a.objective(),
+        return DiscountedCertificateChecker.check(a.game().arena(), policy, a.objective(),
                 a.reserveKept() ? OptionalInt.of(m.reserveUnits()) : OptionalInt.empty(), m.startUnits());
     }
 
@@ -281,8 +285,7 @@ final class DiscountedCheck {
     }
 
     static String json(DiscountedAnalysis a, DiscountedCertificate cert) {
-        ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = Json.object();
         Mission m = a.mission();
         Objective.Discounted ob = a.objective();
         o.put("mission", m.name());
@@ -344,12 +347,6 @@ final class DiscountedCheck {
         o.put("discretisation", m.scale().describe());
         ArrayNode notes = o.putArray("notes");
         a.notes().forEach(notes::add);
-        ArrayNode caveats = o.putArray("caveats");
-        Caveats.LINES.forEach(caveats::add);
-        try {
-            return mapper.writeValueAsString(o);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalStateException("cannot write JSON", e);
-        }
+        return Json.withCaveats(o);
     }
 }

@@ -34,6 +34,11 @@ public final class Main implements Runnable {
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
             c.getErr().println("dockline: " + ex.getMessage());
+            if (ex instanceof CommandLine.UnmatchedArgumentException u
+                    && u.getUnmatched().stream().anyMatch(w -> w.equalsIgnoreCase("wh") || w.equals("%"))) {
+                // `--reserve 12 Wh` unquoted: the shell splits the amount in two
+                c.getErr().println("An amount with a unit is one argument: write 12Wh, or '12 Wh' in quotes.");
+            }
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help'.");
             return ExitCodes.BAD_INPUT;
         });

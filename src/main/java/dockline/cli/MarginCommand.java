@@ -1,8 +1,5 @@
 package dockline.cli;
 
-import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.io.AtomicFiles;
 import dockline.margin.MarginReport;
@@ -13,7 +10,6 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
-import dockline.solve.ProductTooLargeException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
@@ -46,8 +42,11 @@ public final class MarginCommand implements Callable<Integer> {
     @Mixin
     MissionOptions mission;
 
-    @Option(names = "--json", paramLabel = "FILE", description = "also write the margins as JSON ('-' for standard output)")
-    Path json;
+    @Option(names = "--json", description = "print the margins as one JSON object instead of the text")
+    boolean json;
+
+    @Option(names = "--json-file", paramLabel = "FILE", description = "also write the margins to FILE as JSON")
+    Path jsonFile;
 
     @Override
     public Integer call() {
@@ -70,36 +69,26 @@ public final class MarginCommand implements Callable<Integer> {
         } catch (MissionOptions.BadInput e) {
             return ExitCodes.BAD_INPUT;
         }
-        if (m.reserveUnits() > m.capacityUnits()) {
-            err.println("dockline: " + mission.missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
-                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ")");
+        if (!mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
         }
         MarginReport r;
         try {
             r = Margins.compute(m, ProductOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
-        } catch (ProductTooLargeException | ArithmeticException | OutOfMemoryError e) {
-            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
-            return ExitCodes.RESOURCE_LIMIT;
-        } catch (IllegalArgumentException e) {
-            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return mission.failure(e, err);
         }
-        boolean toStdout = json != null && json.toString().equals("-");
-        if (json != null) {
-            String text = json(m, r);
-            if (toStdout) {
-                out.print(text);
-            } else {
-                try {
-                    AtomicFiles.writeString(json, text);
-                } catch (IOException e) {
-                    err.println("dockline: cannot write output: " + e.getMessage());
-                    return ExitCodes.BAD_INPUT;
-                }
+        if (jsonFile != null) {
+            try {
+                AtomicFiles.writeString(jsonFile, json(m, r));
+            } catch (IOException e) {
+                err.println("dockline: cannot write " + jsonFile + ": " + e.getMessage());
+                return ExitCodes.BAD_INPUT;
             }
         }
-        if (!toStdout) {
+        if (json) {
+            out.print(json(m, r));
+        } else {
             print(out, m, r);
         }
         if (!r.agree()) {
@@ -188,12 +177,10 @@ public final class MarginCommand implements Callable<Integer> {
     }
 
     static String json(Mission m, MarginReport r) {
-        ObjectMapper om = new ObjectMapper();
-        om.enable(SerializationFeature.INDENT_OUTPUT);
-        om.configure(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN, true);
         EnergyScale s = m.scale();
-        ObjectNode root = om.createObjectNode();
+        ObjectNode root = Json.object();
         root.put("mission", m.name());
+        root.put("file", m.source() == null ? null : m.source().toString());
         root.put("guaranteed", r.guaranteed());
         root.put("startUnits", r.startUnits());
         root.put("floorUnits", r.floorUnits());
@@ -212,11 +199,8 @@ public final class MarginCommand implements Callable<Integer> {
             o.put("to", sg.to());
             o.put("text", sg.text());
         }
-        try {
-            return om.writeValueAsString(root) + "\n";
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
-        }
+        root.put("discretisation", s.describe());
+        return Json.withCaveats(root) + "\n";
     }
 
     private static void method(ObjectNode o, MarginReport.Method m, EnergyScale s) {

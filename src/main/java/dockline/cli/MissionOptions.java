@@ -1,19 +1,29 @@
 package dockline.cli;
 
+import dockline.certify.ClosedLoop;
+import dockline.io.AtomicFiles;
 import dockline.io.InputException;
+import dockline.io.MapLoader;
 import dockline.io.MissionLoader;
 import dockline.io.Problem;
 import dockline.io.Quantities;
 import dockline.model.Charge;
 import dockline.model.Mission;
+import dockline.solve.ProductTooLargeException;
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
- * The mission file and the overrides shared by {@code check} and {@code export} (a picocli mixin):
- * another reserve floor, starting charge or disturbance budget, and a memory limit for the game.
+ * The mission file and the overrides shared by {@code check}, {@code export}, {@code replay} and
+ * {@code margin} (a picocli mixin): another reserve floor, starting charge or disturbance budget,
+ * and a memory limit for the game. Also the handling those commands share: loading with the
+ * overrides applied ({@link #load}), refusing an output path before any work ({@link #outputOk}),
+ * and turning what the solver throws into a message and an exit code ({@link #failure}), so that
+ * every command words the same problem the same way.
  */
 final class MissionOptions {
 
@@ -21,7 +31,8 @@ final class MissionOptions {
     Path missionFile;
 
     @Option(names = "--reserve", paramLabel = "CHARGE",
-            description = "reserve floor instead of the mission's: Wh (12, 12 Wh) or %% of the capacity (20%%)")
+            description = "reserve floor instead of the mission's: Wh (12, or '12 Wh' in quotes) or %% of the"
+                    + " capacity (20%%)")
     String reserve;
 
     @Option(names = "--start-charge", paramLabel = "CHARGE",
@@ -29,13 +40,9 @@ final class MissionOptions {
     String startCharge;
 
     @Option(names = "--budget", paramLabel = "K",
-            description = "at most K disturbances per mission, instead of the map's budget")
+            description = "at most K disturbances per mission (0 to " + MapLoader.MAX_BUDGET + "), instead of the"
+                    + " map's budget")
     Integer budget;
-
-    @Option(names = "--safest-policy",
-            description = "use the policy that keeps the battery at or above the highest guaranteed floor (it may take"
-                    + " more moves, e.g. to top up on a dock) instead of the one with the fewest moves")
-    boolean safestPolicy;
 
     @Option(names = "--max-memory", paramLabel = "MB",
             description = "refuse games estimated to need more than this many MB (default: half the JVM's heap)")
@@ -43,6 +50,8 @@ final class MissionOptions {
 
     /** Thrown when the input or an override is bad; the problems are already printed. */
     static final class BadInput extends Exception {
+        private static final long serialVersionUID = 1L;
+
         BadInput() {
             super(null, null, false, false);
         }
@@ -77,8 +86,9 @@ final class MissionOptions {
             }
         }
         if (budget != null) {
-            if (budget < 0) {
-                err.println("dockline: --budget must be 0 or more, not " + budget);
+            if (budget < 0 || budget > MapLoader.MAX_BUDGET) {
+                err.println("dockline: --budget must be a whole number from 0 to " + MapLoader.MAX_BUDGET + ", not "
+                        + budget);
                 bad = true;
             } else {
                 m = m.withBudget(budget);
@@ -86,6 +96,14 @@ final class MissionOptions {
         }
         if (maxMemoryMb != null && maxMemoryMb <= 0) {
             err.println("dockline: --max-memory must be a positive number of MB, not " + maxMemoryMb);
+            bad = true;
+        }
+        if (!bad && m.reserveUnits() > m.capacityUnits()) {
+            // both are within the capacity in Wh, but the floor rounds up and the capacity down
+            err.println("dockline: " + missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ") in whole energy units"
+                    + " (hint: the floor rounds up and the capacity down to units of " + m.scale().formatWh(1)
+                    + "; give a lower reserve)");
             bad = true;
         }
         if (bad) {
@@ -112,5 +130,71 @@ final class MissionOptions {
     /** The memory budget in bytes, 0 for the default. */
     long memoryBudgetBytes() {
         return maxMemoryMb == null ? 0 : Math.multiplyExact(maxMemoryMb, 1L << 20);
+    }
+
+    /**
+     * Whether {@code target} (given with {@code option}) can be written: checked before any work, so
+     * that a long solve does not end in "cannot write". A path that cannot be written, or that is
+     * the mission file or its map, is refused with a message on {@code err}: an output never
+     * overwrites an input.
+     */
+    boolean outputOk(String option, Path target, Mission m, PrintWriter err) {
+        if (target == null) {
+            return true;
+        }
+        String why = AtomicFiles.problemWith(target);
+        if (why == null && (sameFile(target, missionFile) || (m.map().source() != null
+                && sameFile(target, m.map().source())))) {
+            why = "that is an input file of this mission; choose another name (outputs never overwrite inputs)";
+        }
+        if (why != null) {
+            err.println("dockline: " + option + " " + (target.toString().isEmpty() ? "''" : target) + ": " + why);
+            return false;
+        }
+        return true;
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.exists(a) && Files.exists(b) && Files.isSameFile(a, b);
+        } catch (IOException | SecurityException e) {
+            return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
+        }
+    }
+
+    /**
+     * The message and exit code for what solving, certifying or replaying the mission threw: 3 for a
+     * game or closed loop over a limit (or past the int range, or out of heap), 2 for a mission the
+     * solver rejects. Anything else is rethrown, for the internal-error handler (exit 4).
+     */
+    int failure(Throwable e, PrintWriter err) {
+        String file = "dockline: " + missionFile + ": ";
+        if (e instanceof ProductTooLargeException) {
+            err.println(file + e.getMessage());
+            err.println("The limit is half the JVM's heap unless --max-memory MB says otherwise.");
+            return ExitCodes.RESOURCE_LIMIT;
+        }
+        if (e instanceof ClosedLoop.TooLargeException) {
+            err.println(file + e.getMessage() + ", too many to certify. Make the game smaller: a coarser energy"
+                    + " resolution or a smaller disturbance budget K.");
+            return ExitCodes.RESOURCE_LIMIT;
+        }
+        if (e instanceof ArithmeticException || e instanceof OutOfMemoryError) {
+            // a count past the int range, or an estimate that fell short of the heap actually needed
+            err.println(file + "the game is too large: " + e.getMessage() + ". Use a coarser energy resolution or a"
+                    + " smaller disturbance budget K, or give the JVM more memory (-Xmx).");
+            return ExitCodes.RESOURCE_LIMIT;
+        }
+        if (e instanceof IllegalArgumentException) {
+            err.println(file + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        if (e instanceof RuntimeException r) {
+            throw r;
+        }
+        if (e instanceof Error r) {
+            throw r;
+        }
+        throw new IllegalStateException(e);
     }
 }

@@ -1,7 +1,7 @@
 package dockline.cli;
 
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.io.AtomicFiles;
 import dockline.model.Mission;
 import dockline.model.Objective;
@@ -11,7 +11,6 @@ import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.report.Caveats;
-import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveOptions;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -46,6 +45,9 @@ public final class ReplayCommand implements Callable<Integer> {
     @Mixin
     MissionOptions mission;
 
+    @Mixin
+    SafestPolicyOption safest;
+
     @Option(names = "--disturbance", paramLabel = "nominal|worst",
             description = "nominal: no events; worst (default): the events that drive the battery lowest,"
                     + " or the counterexample when the mission is not guaranteed")
@@ -56,11 +58,14 @@ public final class ReplayCommand implements Callable<Integer> {
                     + " (events: door-shut, blockage, slip, drag; a slip may name its cell)")
     String force;
 
-    @Option(names = "--csv", paramLabel = "FILE", description = "also write the replay as CSV")
+    @Option(names = "--csv", paramLabel = "FILE", description = "also write the replay to FILE as CSV")
     Path csv;
 
-    @Option(names = "--json", paramLabel = "FILE", description = "also write the replay as JSON")
-    Path json;
+    @Option(names = "--json-file", paramLabel = "FILE", description = "also write the replay to FILE as JSON")
+    Path jsonFile;
+
+    @Option(names = "--json", description = "print the replay as one JSON object instead of the text")
+    boolean json;
 
     @Override
     public Integer call() {
@@ -92,16 +97,19 @@ public final class ReplayCommand implements Callable<Integer> {
             }
         }
         Mission m = loadMission(err);
+        if (!mission.outputOk("--csv", csv, m, err) || !mission.outputOk("--json-file", jsonFile, m, err)) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (csv != null && jsonFile != null && csv.toAbsolutePath().normalize().equals(jsonFile.toAbsolutePath().normalize())) {
+            err.println("dockline: --csv and --json-file name the same file " + csv + "; give two names");
+            return ExitCodes.BAD_INPUT;
+        }
         MissionReplays mr;
         try {
             mr = MissionReplays.of(m, ReserveOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes())
-                    .withSafestPolicy(mission.safestPolicy));
-        } catch (ProductTooLargeException | ClosedLoop.TooLargeException | ArithmeticException | OutOfMemoryError e) {
-            err.println("dockline: " + mission.missionFile + ": the game is too large: " + e.getMessage());
-            return ExitCodes.RESOURCE_LIMIT;
-        } catch (IllegalArgumentException e) {
-            err.println("dockline: " + mission.missionFile + ": " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+                    .withSafestPolicy(safest.on));
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return mission.failure(e, err);
         }
         if (mr.guaranteed() && !mr.certified()) {
             err.println("dockline: internal error: the solver says guaranteed but its policy failed the independent"
@@ -130,18 +138,26 @@ public final class ReplayCommand implements Callable<Integer> {
             err.println("dockline: " + e.getMessage());
             return mr.guaranteed() ? ExitCodes.INTERNAL : ExitCodes.NOT_GUARANTEED;
         }
+        String jsonText = json || jsonFile != null ? json(m, mr, replay) : null;
+        Path writing = null;
         try {
             if (csv != null) {
+                writing = csv;
                 AtomicFiles.writeString(csv, ReplayFormats.csv(replay));
             }
-            if (json != null) {
-                AtomicFiles.writeString(json, ReplayFormats.json(m, replay));
+            if (jsonFile != null) {
+                writing = jsonFile;
+                AtomicFiles.writeString(jsonFile, jsonText + "\n");
             }
         } catch (IOException e) {
-            err.println("dockline: cannot write output: " + e.getMessage());
+            err.println("dockline: cannot write " + writing + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        print(out, m, mr, replay, what);
+        if (json) {
+            out.println(jsonText);
+        } else {
+            print(out, m, mr, replay, what);
+        }
         return mr.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
@@ -151,6 +167,17 @@ public final class ReplayCommand implements Callable<Integer> {
         } catch (MissionOptions.BadInput e) {
             throw new TrustOutput.Exit(ExitCodes.BAD_INPUT);
         }
+    }
+
+    /** The replay's JSON with the verdict, the certificate and the caveats. */
+    private static String json(Mission m, MissionReplays mr, Replay replay) {
+        ObjectNode o = Json.object();
+        o.put("mission", m.name());
+        o.put("file", m.source() == null ? null : m.source().toString());
+        o.put("verdict", mr.guaranteed() ? "guaranteed" : "not-guaranteed");
+        o.put("certified", mr.certified());
+        o.setAll(ReplayFormats.jsonTree(m, replay));
+        return Json.withCaveats(o);
     }
 
     private void print(PrintWriter out, Mission m, MissionReplays mr, Replay replay, String what) {

@@ -1,5 +1,7 @@
 package dockline.cli;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.io.InputException;
 import dockline.io.InputKind;
 import dockline.io.MapLoader;
@@ -18,6 +20,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
@@ -38,32 +41,58 @@ public final class ValidateCommand implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "map or mission files (YAML)")
     List<Path> files;
 
+    @Option(names = "--json", description = "print the result as one JSON object instead of the text (the problems"
+            + " are printed as file:line:column lines as well)")
+    boolean json;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         boolean allValid = true;
         boolean anyMission = false;
+        ObjectNode root = Json.object();
+        ArrayNode results = root.putArray("files");
         for (Path f : files) {
+            ObjectNode fo = results.addObject();
+            fo.put("file", f.toString());
             try {
+                List<String> lines;
                 if (InputKind.of(f) == InputKind.MAP) {
-                    out.println("ok " + f + ": " + summary(MapLoader.load(f)));
+                    lines = List.of(summary(MapLoader.load(f)));
+                    fo.put("kind", "map");
                 } else {
-                    List<String> lines = summary(MissionLoader.load(f));
+                    lines = summary(MissionLoader.load(f));
+                    fo.put("kind", "mission");
+                    anyMission = true;
+                }
+                fo.put("valid", true);
+                lines.forEach(fo.putArray("summary")::add);
+                if (!json) {
                     out.println("ok " + f + ": " + lines.get(0));
                     for (String l : lines.subList(1, lines.size())) {
                         out.println("   " + l);
                     }
-                    anyMission = true;
                 }
             } catch (InputException e) {
                 allValid = false;
+                fo.put("valid", false);
+                ArrayNode problems = fo.putArray("problems");
                 for (Problem p : e.problems()) {
                     err.println(p.format());
+                    ObjectNode po = problems.addObject();
+                    po.put("file", p.file().toString());
+                    po.put("line", p.line());
+                    po.put("column", p.column());
+                    po.put("message", p.message());
+                    po.put("hint", p.hint());
                 }
             }
         }
-        if (anyMission) {
+        if (json) {
+            root.put("valid", allValid);
+            out.println(Json.withCaveats(root));
+        } else if (anyMission) {
             out.println(Caveats.block());
         }
         out.flush();

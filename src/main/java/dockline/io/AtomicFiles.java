@@ -3,15 +3,28 @@ package dockline.io;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * Writes output files atomically: the content goes to a temporary file beside the target, which is
  * then moved over it. An interrupted run never leaves a half-written file, and an existing file is
  * replaced only by a complete one.
+ *
+ * <p>The temporary file is created like any new file (so it gets the usual permissions, not the
+ * owner-only ones of {@link Files#createTempFile}); when the target exists, its permissions are
+ * kept. A failure is an {@link IOException} whose message says in plain words what is wrong with
+ * the target (never the temporary file's name). {@link #problemWith(Path)} asks the same questions
+ * before any work is done, so a command can refuse a bad output path up front.
  */
 public final class AtomicFiles {
 
@@ -28,24 +41,117 @@ public final class AtomicFiles {
         write(target, out -> out.write(content.getBytes(StandardCharsets.UTF_8)));
     }
 
+    /**
+     * Writes the file atomically; a missing parent folder is created.
+     *
+     * @throws IOException with a plain-words reason; the target is then untouched
+     */
     public static void write(Path target, Writer writer) throws IOException {
+        if (target.toString().isEmpty()) {
+            throw new IOException("the file name is empty");
+        }
         Path abs = target.toAbsolutePath();
         Path dir = abs.getParent();
-        if (dir != null) {
-            Files.createDirectories(dir);
+        if (dir == null) {
+            throw new IOException("it names no file");
         }
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+        if (Files.isDirectory(abs)) {
+            throw new IOException("it is a folder, not a file");
+        }
+        Path tmp;
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            Files.createDirectories(dir);
+            tmp = newTemporary(dir, abs);
+        } catch (IOException e) {
+            throw new IOException(reason(dir, e), e);
+        }
+        try {
+            try (OutputStream out = Files.newOutputStream(tmp, StandardOpenOption.WRITE)) {
                 writer.write(out);
             }
+            keepPermissions(abs, tmp);
             try {
                 Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
                 Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
             }
+        } catch (FileSystemException e) {
+            throw new IOException(reason(dir, e), e);
         } finally {
             Files.deleteIfExists(tmp);
         }
+    }
+
+    /**
+     * What stands in the way of writing {@code target} with {@link #write}, in plain words, or
+     * {@code null} when nothing visible does: an empty name, a folder, a parent that does not exist
+     * or is not a folder, a folder or a file that may not be written. Unlike {@link #write}, a missing
+     * folder is a problem here: a mistyped folder name should not silently become a new folder.
+     */
+    public static String problemWith(Path target) {
+        if (target.toString().isEmpty()) {
+            return "the file name is empty";
+        }
+        Path abs = target.toAbsolutePath().normalize();
+        if (Files.isDirectory(abs)) {
+            return "it is a folder, not a file";
+        }
+        Path dir = abs.getParent();
+        if (dir == null) {
+            return "it names no file";
+        }
+        if (!Files.exists(dir)) {
+            return "the folder " + dir + " does not exist (create it first, or check the spelling)";
+        }
+        if (!Files.isDirectory(dir)) {
+            return dir + " is not a folder";
+        }
+        if (!Files.isWritable(dir)) {
+            return "the folder " + dir + " may not be written to";
+        }
+        if (Files.exists(abs) && !Files.isWritable(abs)) {
+            return "the file may not be written to";
+        }
+        return null;
+    }
+
+    /** A new, empty file beside the target, created with the usual (umask) permissions. */
+    private static Path newTemporary(Path dir, Path abs) throws IOException {
+        for (int attempt = 0; ; attempt++) {
+            Path tmp = dir.resolve("." + abs.getFileName() + "."
+                    + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36) + ".part");
+            try {
+                Files.newByteChannel(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
+                return tmp;
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                if (attempt > 100) {
+                    throw e;
+                }
+            }
+        }
+    }
+
+    /** Gives the new file the permissions of the file it replaces (POSIX file systems only). */
+    private static void keepPermissions(Path target, Path tmp) throws IOException {
+        PosixFileAttributeView old = Files.getFileAttributeView(target, PosixFileAttributeView.class,
+                LinkOption.NOFOLLOW_LINKS);
+        if (old != null && Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+            Files.setPosixFilePermissions(tmp, old.readAttributes().permissions());
+        }
+    }
+
+    /** The failure in plain words, about the target (the temporary file is an implementation detail). */
+    private static String reason(Path dir, IOException e) {
+        if (e instanceof AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof NoSuchFileException) {
+            return Files.isDirectory(dir) ? "no file can be created in the folder " + dir : "the folder does not exist";
+        }
+        if (e instanceof FileSystemException f && f.getReason() != null) {
+            String r = f.getReason();
+            return r.substring(0, 1).toLowerCase(java.util.Locale.ROOT) + r.substring(1);
+        }
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 }

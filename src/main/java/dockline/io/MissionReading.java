@@ -61,6 +61,12 @@ final class MissionReading {
         if (root == null) {
             return null;
         }
+        if (root.get("map") == null && root.get("robot") == null && (root.get("plan") != null || root.get("legend") != null)) {
+            // a map where a mission belongs: one clear line instead of a screenful of unknown and missing keys
+            problems.add(root.pos(), "this is a map file, not a mission",
+                    "give a mission file whose 'map:' names this map; 'dockline validate' checks a map on its own");
+            return null;
+        }
         in.onlyKeys(root, "a mission file", KEYS);
         String name = root.get("name") == null ? MapReading.stem(doc.file()) : in.string(root.get("name"), "name");
         Node mapNode = in.require(root, "map", "the mission");
@@ -145,6 +151,12 @@ final class MissionReading {
             mapPath = doc.file().resolveSibling(rel).normalize();
         } catch (java.nio.file.InvalidPathException e) {
             problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path", null);
+            mapBroken = true;
+            return;
+        }
+        if (Files.isDirectory(mapPath)) {
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is a folder, not a map file (" + mapPath + ")",
+                    "name the map's .yaml file in that folder");
             mapBroken = true;
             return;
         }

@@ -15,11 +15,14 @@ import java.util.TreeMap;
  */
 public record ForcedEvent(int step, EventKind kind, Cell cell) {
 
+    private static final String HINT = "write STEP:EVENT or STEP:slip@X:Y, e.g. 14:door-shut or 20:slip@3:4; events: "
+            + "door-shut, blockage, slip, drag";
+
     /**
      * Parses a comma-separated list {@code STEP:EVENT[@X:Y],...}.
      *
-     * @throws IllegalArgumentException with a message in words when the text is malformed or names a
-     *                                  step twice
+     * @throws IllegalArgumentException with a message in words when the text is malformed, names a
+     *                                  step twice or names no event at all
      */
     public static List<ForcedEvent> parseList(String text) {
         TreeMap<Integer, ForcedEvent> byStep = new TreeMap<>();
@@ -41,13 +44,16 @@ public record ForcedEvent(int step, EventKind kind, Cell cell) {
         if (!problems.isEmpty()) {
             throw new IllegalArgumentException(String.join("; ", problems));
         }
+        if (byStep.isEmpty()) {
+            // an empty list would quietly replay something else (the worst case) under a forced-events request
+            throw new IllegalArgumentException("'" + text.trim() + "' names no event; " + HINT);
+        }
         return List.copyOf(byStep.values());
     }
 
     /** Parses one {@code STEP:EVENT[@X:Y]}. */
     public static ForcedEvent parse(String text) {
-        String hint = "write STEP:EVENT or STEP:slip@X:Y, e.g. 14:door-shut or 20:slip@3:4; events: "
-                + "door-shut, blockage, slip, drag";
+        String hint = HINT;
         int colon = text.indexOf(':');
         if (colon <= 0) {
             throw new IllegalArgumentException("'" + text + "' is not a forced event; " + hint);

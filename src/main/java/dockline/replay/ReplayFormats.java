@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
@@ -53,12 +54,22 @@ public final class ReplayFormats {
         return '"' + v.replace("\"", "\"\"") + '"';
     }
 
+    /** The replay as JSON text (the tree of {@link #jsonTree}), ending with a line break. */
     public static String json(Mission mission, Replay replay) {
         ObjectMapper om = new ObjectMapper();
         om.enable(SerializationFeature.INDENT_OUTPUT);
         om.configure(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN, true);
+        try {
+            return om.writeValueAsString(jsonTree(mission, replay)) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** The replay as a JSON tree: the summary, the explanation and one object per step. */
+    public static ObjectNode jsonTree(Mission mission, Replay replay) {
         EnergyScale scale = mission.scale();
-        ObjectNode root = om.createObjectNode();
+        ObjectNode root = JsonNodeFactory.instance.objectNode();
         root.put("mission", mission.name());
         root.put("replay", replay.kind().word());
         root.put("ending", replay.ending().word());
@@ -90,11 +101,7 @@ public final class ReplayFormats {
             o.put("progress", s.progressMask());
             o.put("progressWords", s.progressWords());
         }
-        try {
-            return om.writeValueAsString(root) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return root;
     }
 
     /** The replay as an aligned text table, one row a line. */

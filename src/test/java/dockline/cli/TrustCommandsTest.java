@@ -34,7 +34,7 @@ class TrustCommandsTest {
     void replay_guaranteedMission_isCertified_printsTableExplanationAndCaveats() throws Exception {
         Path csv = tmp.resolve("worst.csv");
         Path json = tmp.resolve("worst.json");
-        Run r = run("replay", "missions/night-round.yaml", "--csv", csv.toString(), "--json", json.toString());
+        Run r = run("replay", "missions/night-round.yaml", "--csv", csv.toString(), "--json-file", json.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("guaranteed").contains("certified: true").contains("Worst case of the certified policy")
                 .contains("step  cell").contains("Safety: ");
@@ -100,7 +100,7 @@ class TrustCommandsTest {
     @Test
     void margin_guaranteed_jsonHasBothMethods() throws Exception {
         Path json = tmp.resolve("m.json");
-        Run r = run("margin", "missions/night-round.yaml", "--json", json.toString());
+        Run r = run("margin", "missions/night-round.yaml", "--json-file", json.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("bisection over the threshold solver").contains("minimum-credit fixpoint")
                 .contains("the two methods agree").contains("Safety: ");
@@ -115,7 +115,7 @@ class TrustCommandsTest {
 
     @Test
     void margin_notGuaranteed_printsSuggestions_exit1() {
-        Run r = run("margin", "missions/late-return.yaml", "--json", "-");
+        Run r = run("margin", "missions/late-return.yaml", "--json");
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
     }

@@ -1,0 +1,38 @@
+package dockline.cli;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.report.Caveats;
+
+/**
+ * The JSON output of the commands, written one way: indented, decimals written out (never
+ * {@code 1E+1}), and the safety caveats as a {@code caveats} array of one sentence each, last.
+ */
+final class Json {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+            .configure(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN, true);
+
+    private Json() {
+    }
+
+    /** A new, empty JSON object. */
+    static ObjectNode object() {
+        return MAPPER.createObjectNode();
+    }
+
+    /** The object as text (no final line break), after adding the {@code caveats} array. */
+    static String withCaveats(ObjectNode o) {
+        ArrayNode caveats = o.putArray("caveats");
+        Caveats.LINES.forEach(caveats::add);
+        try {
+            return MAPPER.writeValueAsString(o);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot write JSON", e);
+        }
+    }
+}
