@@ -10,6 +10,7 @@ import dockline.model.Neighbourhood;
 import dockline.model.RobotProfile;
 import dockline.model.Terrain;
 import dockline.model.Zone;
+import dockline.util.IntArrayList;
 import java.math.BigDecimal;
 import java.util.Arrays;
 import java.util.List;
@@ -144,8 +145,8 @@ public final class ArenaCompiler {
         int kk = budget + 1;
         int robotCount = Math.multiplyExact(freeCount, kk);
 
-        IntList vCell = new IntList(robotCount * 6);
-        IntList vBudget = new IntList(robotCount * 6);
+        IntArrayList vCell = new IntArrayList(robotCount * 6);
+        IntArrayList vBudget = new IntArrayList(robotCount * 6);
         for (int s = 0; s < freeCount; s++) {
             for (int k = 0; k < kk; k++) {
                 vCell.add(slotCell[s]);
@@ -153,9 +154,9 @@ public final class ArenaCompiler {
             }
         }
         // robot edges first (to disturbance vertices numbered on the fly), outcomes after
-        IntList aKind = new IntList(robotCount * 5);
-        IntList aTarget = new IntList(robotCount * 5);
-        IntList robotOutStart = new IntList(robotCount + 1);
+        IntArrayList aKind = new IntArrayList(robotCount * 5);
+        IntArrayList aTarget = new IntArrayList(robotCount * 5);
+        IntArrayList robotOutStart = new IntArrayList(robotCount + 1);
         int next = robotCount;
         int[] nb = new int[8];
         for (int r = 0; r < robotCount; r++) {
@@ -180,11 +181,11 @@ public final class ArenaCompiler {
         int vertexCount = next;
         int distCount = vertexCount - robotCount;
 
-        IntList outStart = new IntList(vertexCount + 1);
-        IntList eTarget = new IntList(vertexCount * 2);
-        IntList eWeight = new IntList(vertexCount * 2);
-        IntList eEvent = new IntList(vertexCount * 2);
-        IntList eRule = new IntList(vertexCount * 2);
+        IntArrayList outStart = new IntArrayList(vertexCount + 1);
+        IntArrayList eTarget = new IntArrayList(vertexCount * 2);
+        IntArrayList eWeight = new IntArrayList(vertexCount * 2);
+        IntArrayList eEvent = new IntArrayList(vertexCount * 2);
+        IntArrayList eRule = new IntArrayList(vertexCount * 2);
         for (int r = 0; r < robotCount; r++) {
             outStart.add(eTarget.size());
             for (int d = robotOutStart.get(r); d < robotOutStart.get(r + 1); d++) {
@@ -271,7 +272,7 @@ public final class ArenaCompiler {
                 zones, dock, slot, slotCell);
     }
 
-    private static void add(IntList t, IntList wt, IntList ev, IntList ru, int target, int weight, int event, int rule) {
+    private static void add(IntArrayList t, IntArrayList wt, IntArrayList ev, IntArrayList ru, int target, int weight, int event, int rule) {
         t.add(target);
         wt.add(weight);
         ev.add(event);
@@ -304,34 +305,5 @@ public final class ArenaCompiler {
         int[] a = new int[n];
         Arrays.fill(a, -1);
         return a;
-    }
-
-    /** A growable int array (no boxing). */
-    static final class IntList {
-        private int[] a;
-        private int n;
-
-        IntList(int cap) {
-            a = new int[Math.max(4, cap)];
-        }
-
-        void add(int v) {
-            if (n == a.length) {
-                a = Arrays.copyOf(a, Math.max(4, a.length + (a.length >> 1)));
-            }
-            a[n++] = v;
-        }
-
-        int get(int i) {
-            return a[i];
-        }
-
-        int size() {
-            return n;
-        }
-
-        int[] toArray() {
-            return Arrays.copyOf(a, n);
-        }
     }
 }

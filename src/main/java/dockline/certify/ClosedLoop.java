@@ -5,6 +5,8 @@ import dockline.arena.Arena;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.solve.Policy;
+import dockline.util.IntArrayList;
+import dockline.util.LongIntMap;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;

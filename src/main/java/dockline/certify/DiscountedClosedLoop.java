@@ -9,6 +9,8 @@ import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.solve.Policy;
 import dockline.solve.PolicyScore;
+import dockline.util.IntArrayList;
+import dockline.util.LongIntMap;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;

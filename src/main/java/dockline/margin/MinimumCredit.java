@@ -6,6 +6,8 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.solve.Policy;
 import dockline.solve.PolicyEntry;
+import dockline.util.IntArrayList;
+import dockline.util.LongIntMap;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;

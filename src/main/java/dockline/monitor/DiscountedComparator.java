@@ -3,6 +3,7 @@ package dockline.monitor;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
+import dockline.util.LongIntMap;
 import java.util.Arrays;
 
 /**

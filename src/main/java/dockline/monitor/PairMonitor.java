@@ -1,5 +1,6 @@
 package dockline.monitor;
 
+import dockline.util.LongIntMap;
 import java.util.Arrays;
 
 /**

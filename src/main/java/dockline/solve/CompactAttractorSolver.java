@@ -1,5 +1,6 @@
 package dockline.solve;
 
+import dockline.util.IntArrayList;
 import java.util.Arrays;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
@@ -100,7 +101,7 @@ public final class CompactAttractorSolver implements GameSolver {
                 counter[v] = owner[v] == GameGraph.ROBOT ? 1 : (byte) (outStart[v + 1] - outStart[v]);
             }
         }
-        layerStarts = new IntList();
+        layerStarts = new IntArrayList();
         layerStarts.add(0);
         layerStarts.add(tail);
         for (int v = 0; v < n; v++) {
@@ -158,7 +159,7 @@ public final class CompactAttractorSolver implements GameSolver {
                 counter[v] = owner[v] == GameGraph.ROBOT ? 1 : outStart[v + 1] - outStart[v];
             }
         }
-        layerStarts = new IntList();
+        layerStarts = new IntArrayList();
         layerStarts.add(0);
         layerStarts.add(tail);
         for (int v = 0; v < n; v++) {
@@ -200,7 +201,7 @@ public final class CompactAttractorSolver implements GameSolver {
         return tail;
     }
 
-    private IntList layerStarts;
+    private IntArrayList layerStarts;
 
     /** Ranks from the layers of the queue, then the chosen edges in vertex order. */
     private Solution finish(int[] queue, int tail) {
@@ -230,30 +231,5 @@ public final class CompactAttractorSolver implements GameSolver {
             }
         }
         return new Solution(rank, strategy);
-    }
-
-    /** A growable int list (no boxing). */
-    private static final class IntList {
-        private int[] a = new int[64];
-        private int size;
-
-        void add(int v) {
-            if (size == a.length) {
-                a = Arrays.copyOf(a, size * 2);
-            }
-            a[size++] = v;
-        }
-
-        int get(int i) {
-            return a[i];
-        }
-
-        int last() {
-            return a[size - 1];
-        }
-
-        int size() {
-            return size;
-        }
     }
 }

@@ -6,7 +6,7 @@ import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
-import dockline.monitor.LongIntMap;
+import dockline.util.LongIntMap;
 import dockline.monitor.Monitor;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;

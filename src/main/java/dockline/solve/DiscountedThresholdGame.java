@@ -2,7 +2,7 @@ package dockline.solve;
 
 import dockline.arena.Arena;
 import dockline.monitor.DiscountedComparator;
-import dockline.monitor.LongIntMap;
+import dockline.util.LongIntMap;
 import dockline.monitor.Monitor;
 import dockline.model.Relation;
 import java.util.Arrays;

@@ -1,0 +1,9 @@
+/**
+ * Primitive collections used by the solver, the certificate checker and the margins alike: a
+ * growable int array and a long-to-int hash map, with no boxing and no per-entry objects.
+ *
+ * <p>Entry points: {@link dockline.util.IntArrayList} and {@link dockline.util.LongIntMap}. This
+ * package depends on nothing else of dockline, so sharing it keeps the certificate checker
+ * independent of the solver (DESIGN.md 2.5): they share containers, never logic.
+ */
+package dockline.util;
