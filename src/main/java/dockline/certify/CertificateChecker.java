@@ -11,10 +11,6 @@ import dockline.model.Mission;
 import dockline.solve.Policy;
 import java.util.ArrayList;
 import java.util.List;
-import org.jgrapht.Graph;
-import org.jgrapht.alg.cycle.CycleDetector;
-import org.jgrapht.graph.DefaultDirectedGraph;
-import org.jgrapht.graph.DefaultEdge;
 
 /**
  * Checks a robot policy against the mission on its own code path, trusting neither the solver nor
@@ -77,7 +73,7 @@ public final class CertificateChecker {
             return new Certificate(false, w.problem(p), loop.nodeCount(), worst, -1, floor, start);
         }
         int[] order = loop.topologicalOrder();
-        Boolean jgraphtCycle = loop.nodeCount() <= JGRAPHT_LIMIT ? jgraphtHasCycle(loop) : null;
+        Boolean jgraphtCycle = loop.nodeCount() <= JGRAPHT_LIMIT ? loop.graph().jgraphtHasCycle(loop.nodeCount()) : null;
         if (jgraphtCycle != null && jgraphtCycle != (order == null)) {
             return new Certificate(false, "internal: the two cycle checks disagree (topological order says "
                     + (order == null ? "cyclic" : "acyclic") + ", jgrapht says " + (jgraphtCycle ? "cyclic" : "acyclic")
@@ -116,20 +112,6 @@ public final class CertificateChecker {
             lo = Math.min(lo, loop.level(v));
         }
         return lo;
-    }
-
-    /** Second opinion on acyclicity from a reference library. */
-    private static boolean jgraphtHasCycle(ClosedLoop loop) {
-        Graph<Integer, DefaultEdge> g = new DefaultDirectedGraph<>(DefaultEdge.class);
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            g.addVertex(v);
-        }
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
-                g.addEdge(v, loop.succNode(s));
-            }
-        }
-        return new CycleDetector<>(g).detectCycles();
     }
 
     /** Wording of states, steps and problems for the certificate's reason. */

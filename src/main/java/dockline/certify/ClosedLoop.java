@@ -7,7 +7,6 @@ import dockline.model.Mission;
 import dockline.solve.Policy;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -71,11 +70,7 @@ public final class ClosedLoop {
     private final IntArrayList nodeLevel = new IntArrayList(1024);
     private final IntArrayList nodeMask = new IntArrayList(1024);
     private final IntArrayList nodeChoice = new IntArrayList(1024);
-    private final IntArrayList nodeParent = new IntArrayList(1024);
-    private final IntArrayList nodeParentEdge = new IntArrayList(1024);
-    private final IntArrayList succStart = new IntArrayList(1024);
-    private final IntArrayList succNode = new IntArrayList(4096);
-    private final IntArrayList succEdge = new IntArrayList(4096);
+    private final LoopGraph graph = new LoopGraph();
     private int expanded;
     private Problem problem;
 
@@ -115,7 +110,7 @@ public final class ClosedLoop {
             return;
         }
         for (int n = 0; n < nodeVertex.size(); n++) {
-            succStart.add(succNode.size());
+            graph.openSuccessors();
             expanded = n + 1;
             int v = nodeVertex.get(n);
             int level = nodeLevel.get(n);
@@ -131,7 +126,7 @@ public final class ClosedLoop {
                 problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);
                 return;
             }
-            int d = legalChoice(v, act.get());
+            int d = LoopGraph.legalChoice(arena, v, act.get());
             nodeChoice.add(d);
             if (d < 0) {
                 problem = new Problem(ProblemKind.ILLEGAL_ACTION, n, -1, level);
@@ -142,15 +137,13 @@ public final class ClosedLoop {
                 long raw = (long) level + arena.weight(e);
                 int next = (int) Math.min(capacity, raw);
                 if (raw < floor) {
-                    succNode.add(LOST_BELOW_FLOOR);
-                    succEdge.add(e);
+                    graph.addSuccessor(LOST_BELOW_FLOOR, e);
                     problem = new Problem(ProblemKind.BELOW_FLOOR, n, e, (int) Math.max(Integer.MIN_VALUE, raw));
                     return;
                 }
                 int nextMask = progress.step(mask, arena.cellZones(arena.cell(u)));
                 if (nextMask == TaskProgress.AVOIDED) {
-                    succNode.add(LOST_AVOIDED_ZONE);
-                    succEdge.add(e);
+                    graph.addSuccessor(LOST_AVOIDED_ZONE, e);
                     problem = new Problem(ProblemKind.AVOIDED_ZONE, n, e, next);
                     return;
                 }
@@ -162,11 +155,10 @@ public final class ClosedLoop {
                     }
                     id = addNode(ids, u, next, nextMask, n, e);
                 }
-                succNode.add(id);
-                succEdge.add(e);
+                graph.addSuccessor(id, e);
             }
         }
-        succStart.add(succNode.size());
+        graph.closeSuccessors();
     }
 
     private int addNode(LongIntMap ids, int v, int level, int mask, int parent, int parentEdge) {
@@ -174,8 +166,7 @@ public final class ClosedLoop {
         nodeVertex.add(v);
         nodeLevel.add(level);
         nodeMask.add(mask);
-        nodeParent.add(parent);
-        nodeParentEdge.add(parentEdge);
+        graph.addNode(parent, parentEdge);
         ids.put(key(v, level, mask), id);
         return id;
     }
@@ -183,17 +174,6 @@ public final class ClosedLoop {
     private long key(int v, int level, int mask) {
         long k = Math.addExact(Math.multiplyExact((long) v, (long) capacity + 1), level);
         return Math.addExact(Math.multiplyExact(k, 1L << progress.taskCount()), mask);
-    }
-
-    /** The disturbance vertex of the robot vertex whose action equals {@code a}, or -1 if none (illegal). */
-    private int legalChoice(int v, Action a) {
-        for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
-            int d = arena.target(e);
-            if (arena.actionKind(d) == a.kind() && arena.action(d).target().equals(a.target())) {
-                return d;
-            }
-        }
-        return -1;
     }
 
     public Arena arena() {
@@ -268,30 +248,30 @@ public final class ClosedLoop {
 
     /** The parent node in the breadth-first tree (-1 for the start). */
     public int parent(int node) {
-        return nodeParent.get(node);
+        return graph.parent(node);
     }
 
     /** The arena edge from the parent (-1 for the start). */
     public int parentEdge(int node) {
-        return nodeParentEdge.get(node);
+        return graph.parentEdge(node);
     }
 
     public int succBegin(int node) {
-        return succStart.get(node);
+        return graph.succBegin(node);
     }
 
     public int succEnd(int node) {
-        return node + 1 < succStart.size() ? succStart.get(node + 1) : succNode.size();
+        return graph.succEnd(node);
     }
 
     /** The successor node of the i-th successor slot, or {@link #LOST_BELOW_FLOOR} / {@link #LOST_AVOIDED_ZONE}. */
     public int succNode(int i) {
-        return succNode.get(i);
+        return graph.succNode(i);
     }
 
     /** The arena outcome edge of the i-th successor slot. */
     public int succEdge(int i) {
-        return succEdge.get(i);
+        return graph.succEdge(i);
     }
 
     /** The level after following outcome edge {@code e} from level {@code level} (saturated at capacity). */
@@ -301,12 +281,7 @@ public final class ClosedLoop {
 
     /** The nodes on the breadth-first path from the start to the node, start first. */
     public List<Integer> pathTo(int node) {
-        List<Integer> path = new ArrayList<>();
-        for (int n = node; n >= 0; n = nodeParent.get(n)) {
-            path.add(n);
-        }
-        java.util.Collections.reverse(path);
-        return path;
+        return graph.pathTo(node);
     }
 
     /**
@@ -318,29 +293,7 @@ public final class ClosedLoop {
      */
     public int[] topologicalOrder() {
         requireComplete();
-        int n = nodeCount();
-        int[] indegree = new int[n];
-        for (int i = 0; i < succNode.size(); i++) {
-            indegree[succNode.get(i)]++;
-        }
-        int[] order = new int[n];
-        int head = 0;
-        int tail = 0;
-        for (int v = 0; v < n; v++) {
-            if (indegree[v] == 0) {
-                order[tail++] = v;
-            }
-        }
-        while (head < tail) {
-            int v = order[head++];
-            for (int i = succBegin(v); i < succEnd(v); i++) {
-                int t = succNode.get(i);
-                if (--indegree[t] == 0) {
-                    order[tail++] = t;
-                }
-            }
-        }
-        return tail == n ? order : null;
+        return graph.topologicalOrder(nodeCount());
     }
 
     /**
@@ -350,78 +303,12 @@ public final class ClosedLoop {
      */
     public List<Integer> findCycle() {
         requireComplete();
-        int n = nodeCount();
-        int[] indegree = new int[n];
-        for (int i = 0; i < succNode.size(); i++) {
-            indegree[succNode.get(i)]++;
-        }
-        int[] queue = new int[n];
-        boolean[] removed = new boolean[n];
-        int head = 0;
-        int tail = 0;
-        for (int v = 0; v < n; v++) {
-            if (indegree[v] == 0) {
-                queue[tail++] = v;
-            }
-        }
-        while (head < tail) {
-            int v = queue[head++];
-            removed[v] = true;
-            for (int i = succBegin(v); i < succEnd(v); i++) {
-                int t = succNode.get(i);
-                if (--indegree[t] == 0) {
-                    queue[tail++] = t;
-                }
-            }
-        }
-        if (tail == n) {
-            return List.of();
-        }
-        // reverse adjacency restricted to the nodes left (each has a predecessor among them)
-        int[] predStart = new int[n + 1];
-        for (int v = 0; v < n; v++) {
-            if (!removed[v]) {
-                for (int i = succBegin(v); i < succEnd(v); i++) {
-                    int t = succNode.get(i);
-                    if (!removed[t]) {
-                        predStart[t + 1]++;
-                    }
-                }
-            }
-        }
-        for (int v = 0; v < n; v++) {
-            predStart[v + 1] += predStart[v];
-        }
-        int[] pred = new int[predStart[n]];
-        int[] fill = java.util.Arrays.copyOf(predStart, n);
-        for (int v = 0; v < n; v++) {
-            if (!removed[v]) {
-                for (int i = succBegin(v); i < succEnd(v); i++) {
-                    int t = succNode.get(i);
-                    if (!removed[t]) {
-                        pred[fill[t]++] = v;
-                    }
-                }
-            }
-        }
-        int first = 0;
-        while (removed[first]) {
-            first++;
-        }
-        int[] seenAt = new int[n];
-        java.util.Arrays.fill(seenAt, -1);
-        List<Integer> back = new ArrayList<>();
-        int v = first;
-        while (seenAt[v] < 0) {
-            seenAt[v] = back.size();
-            back.add(v);
-            v = pred[predStart[v]];
-        }
-        // back[seenAt[v]] .. back[end] walked backwards from v to a predecessor chain that returns to v
-        List<Integer> cycle = new ArrayList<>(back.subList(seenAt[v], back.size()));
-        cycle.add(v);
-        java.util.Collections.reverse(cycle);
-        return cycle;
+        return graph.findCycle(nodeCount());
+    }
+
+    /** The loop's graph, for the checker's second opinion on cycles. */
+    LoopGraph graph() {
+        return graph;
     }
 
     private void requireComplete() {

@@ -13,10 +13,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
-import org.jgrapht.Graph;
-import org.jgrapht.alg.cycle.CycleDetector;
-import org.jgrapht.graph.DefaultDirectedGraph;
-import org.jgrapht.graph.DefaultEdge;
 
 /**
  * Checks a policy for a discounted mission on its own code path, trusting neither the solver, nor
@@ -84,7 +80,7 @@ public final class DiscountedCertificateChecker {
             return fail(loop, w.problem(p), Math.min(p.level(), minLevelSeen(loop)));
         }
         int[] order = loop.topologicalOrder();
-        Boolean jgraphtCycle = loop.nodeCount() <= JGRAPHT_LIMIT ? jgraphtHasCycle(loop) : null;
+        Boolean jgraphtCycle = loop.nodeCount() <= JGRAPHT_LIMIT ? loop.graph().jgraphtHasCycle(loop.nodeCount()) : null;
         if (jgraphtCycle != null && jgraphtCycle != (order == null)) {
             return fail(loop, "internal: the two cycle checks disagree (topological order says "
                     + (order == null ? "cyclic" : "acyclic") + ", jgrapht says " + (jgraphtCycle ? "cyclic" : "acyclic")
@@ -168,20 +164,6 @@ public final class DiscountedCertificateChecker {
             lo = Math.min(lo, loop.level(v));
         }
         return lo;
-    }
-
-    /** Second opinion on acyclicity from a reference library. */
-    private static boolean jgraphtHasCycle(DiscountedClosedLoop loop) {
-        Graph<Integer, DefaultEdge> g = new DefaultDirectedGraph<>(DefaultEdge.class);
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            g.addVertex(v);
-        }
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
-                g.addEdge(v, loop.succNode(s));
-            }
-        }
-        return new CycleDetector<>(g).detectCycles();
     }
 
     /** Wording of situations, steps and problems. */

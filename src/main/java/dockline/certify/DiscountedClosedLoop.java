@@ -14,7 +14,6 @@ import dockline.util.LongIntMap;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 
@@ -115,11 +114,7 @@ public final class DiscountedClosedLoop {
     private final IntArrayList nodeMask = new IntArrayList(1024);
     private final IntArrayList nodeGap = new IntArrayList(1024);
     private final IntArrayList nodeChoice = new IntArrayList(1024);
-    private final IntArrayList nodeParent = new IntArrayList(1024);
-    private final IntArrayList nodeParentEdge = new IntArrayList(1024);
-    private final IntArrayList succStart = new IntArrayList(1024);
-    private final IntArrayList succNode = new IntArrayList(4096);
-    private final IntArrayList succEdge = new IntArrayList(4096);
+    private final LoopGraph graph = new LoopGraph();
     private int[] table = new int[1 << 12];
     private int expanded;
     private Problem problem;
@@ -260,7 +255,7 @@ public final class DiscountedClosedLoop {
             return;
         }
         for (int n = 0; n < nodeVertex.size(); n++) {
-            succStart.add(succNode.size());
+            graph.openSuccessors();
             expanded = n + 1;
             int v = nodeVertex.get(n);
             int level = nodeLevel.get(n);
@@ -276,7 +271,7 @@ public final class DiscountedClosedLoop {
                 problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);
                 return;
             }
-            int dv = legalChoice(v, act.get());
+            int dv = LoopGraph.legalChoice(arena, v, act.get());
             nodeChoice.add(dv);
             if (dv < 0) {
                 problem = new Problem(ProblemKind.ILLEGAL_ACTION, n, -1, level);
@@ -308,28 +303,15 @@ public final class DiscountedClosedLoop {
                     }
                     id = addNode(u, next, nextMask, nextGap, n, e);
                 }
-                succNode.add(id);
-                succEdge.add(e);
+                graph.addSuccessor(id, e);
             }
         }
-        succStart.add(succNode.size());
+        graph.closeSuccessors();
     }
 
     private void lose(int code, int edge, Problem p) {
-        succNode.add(code);
-        succEdge.add(edge);
+        graph.addSuccessor(code, edge);
         problem = p;
-    }
-
-    /** The disturbance vertex of the robot vertex whose action equals {@code a}, or -1 if none (illegal). */
-    private int legalChoice(int v, Action a) {
-        for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
-            int t = arena.target(e);
-            if (arena.actionKind(t) == a.kind() && arena.action(t).target().equals(a.target())) {
-                return t;
-            }
-        }
-        return -1;
     }
 
     // open addressing over (vertex, level, mask, gap); the table holds node id + 1
@@ -372,8 +354,7 @@ public final class DiscountedClosedLoop {
         nodeLevel.add(level);
         nodeMask.add(mask);
         nodeGap.add(gap);
-        nodeParent.add(parent);
-        nodeParentEdge.add(parentEdge);
+        graph.addNode(parent, parentEdge);
         if (2 * (id + 1) > table.length) {
             table = new int[Math.multiplyExact(table.length, 2)];
             for (int k = 0; k < id; k++) {
@@ -465,39 +446,34 @@ public final class DiscountedClosedLoop {
     }
 
     public int parent(int node) {
-        return nodeParent.get(node);
+        return graph.parent(node);
     }
 
     public int parentEdge(int node) {
-        return nodeParentEdge.get(node);
+        return graph.parentEdge(node);
     }
 
     public int succBegin(int node) {
-        return succStart.get(node);
+        return graph.succBegin(node);
     }
 
     public int succEnd(int node) {
-        return node + 1 < succStart.size() ? succStart.get(node + 1) : succNode.size();
+        return graph.succEnd(node);
     }
 
     /** The successor node in slot i, or one of the {@code LOST_*} codes. */
     public int succNode(int i) {
-        return succNode.get(i);
+        return graph.succNode(i);
     }
 
     /** The arena outcome edge of slot i. */
     public int succEdge(int i) {
-        return succEdge.get(i);
+        return graph.succEdge(i);
     }
 
     /** The nodes on the breadth-first path from the start to the node, start first. */
     public List<Integer> pathTo(int node) {
-        List<Integer> path = new ArrayList<>();
-        for (int n = node; n >= 0; n = nodeParent.get(n)) {
-            path.add(n);
-        }
-        Collections.reverse(path);
-        return path;
+        return graph.pathTo(node);
     }
 
     /**
@@ -508,29 +484,7 @@ public final class DiscountedClosedLoop {
      */
     public int[] topologicalOrder() {
         requireComplete();
-        int n = nodeCount();
-        int[] indegree = new int[n];
-        for (int i = 0; i < succNode.size(); i++) {
-            indegree[succNode.get(i)]++;
-        }
-        int[] order = new int[n];
-        int head = 0;
-        int tail = 0;
-        for (int v = 0; v < n; v++) {
-            if (indegree[v] == 0) {
-                order[tail++] = v;
-            }
-        }
-        while (head < tail) {
-            int v = order[head++];
-            for (int i = succBegin(v); i < succEnd(v); i++) {
-                int t = succNode.get(i);
-                if (--indegree[t] == 0) {
-                    order[tail++] = t;
-                }
-            }
-        }
-        return tail == n ? order : null;
+        return graph.topologicalOrder(nodeCount());
     }
 
     /**
@@ -539,62 +493,12 @@ public final class DiscountedClosedLoop {
      */
     public List<Integer> findCycle() {
         requireComplete();
-        int n = nodeCount();
-        int[] indegree = new int[n];
-        for (int i = 0; i < succNode.size(); i++) {
-            indegree[succNode.get(i)]++;
-        }
-        int[] queue = new int[n];
-        boolean[] removed = new boolean[n];
-        int head = 0;
-        int tail = 0;
-        for (int v = 0; v < n; v++) {
-            if (indegree[v] == 0) {
-                queue[tail++] = v;
-            }
-        }
-        while (head < tail) {
-            int v = queue[head++];
-            removed[v] = true;
-            for (int i = succBegin(v); i < succEnd(v); i++) {
-                int t = succNode.get(i);
-                if (--indegree[t] == 0) {
-                    queue[tail++] = t;
-                }
-            }
-        }
-        if (tail == n) {
-            return List.of();
-        }
-        // one predecessor among the nodes left, for each node left
-        int[] pred = new int[n];
-        Arrays.fill(pred, -1);
-        for (int v = 0; v < n; v++) {
-            if (!removed[v]) {
-                for (int i = succBegin(v); i < succEnd(v); i++) {
-                    int t = succNode.get(i);
-                    if (!removed[t] && pred[t] < 0) {
-                        pred[t] = v;
-                    }
-                }
-            }
-        }
-        int v = 0;
-        while (removed[v]) {
-            v++;
-        }
-        int[] seenAt = new int[n];
-        Arrays.fill(seenAt, -1);
-        List<Integer> back = new ArrayList<>();
-        while (seenAt[v] < 0) {
-            seenAt[v] = back.size();
-            back.add(v);
-            v = pred[v];
-        }
-        List<Integer> cycle = new ArrayList<>(back.subList(seenAt[v], back.size()));
-        cycle.add(v);
-        Collections.reverse(cycle);
-        return cycle;
+        return graph.findCycle(nodeCount());
+    }
+
+    /** The loop's graph, for the checker's second opinion on cycles. */
+    LoopGraph graph() {
+        return graph;
     }
 
     private void requireComplete() {
