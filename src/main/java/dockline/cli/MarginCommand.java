@@ -54,21 +54,16 @@ public final class MarginCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             return run(out, err);
-        } catch (TrustOutput.Exit e) {
-            return e.code;
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
         } finally {
             out.flush();
             err.flush();
         }
     }
 
-    private int run(PrintWriter out, PrintWriter err) throws TrustOutput.Exit {
-        Mission m;
-        try {
-            m = mission.load(err);
-        } catch (MissionOptions.BadInput e) {
-            return ExitCodes.BAD_INPUT;
-        }
+    private int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+        Mission m = mission.load(err);
         if (!mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
         }
@@ -104,7 +99,7 @@ public final class MarginCommand implements Callable<Integer> {
     private void print(PrintWriter out, Mission m, MarginReport r) {
         EnergyScale s = m.scale();
         int cap = r.capacityUnits();
-        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
+        out.println(mission.title(m) + ": " + (r.guaranteed() ? "guaranteed" : "NOT guaranteed")
                 + " as written (start " + charge(s, r.startUnits(), cap) + ", reserve floor " + charge(s, r.floorUnits(), cap) + ")");
         if (!(m.objective() instanceof Objective.Reserve)) {
             out.println("note: this mission's objective is a discounted score; the margins are those of the reserve"

@@ -127,6 +127,11 @@ final class MissionOptions {
         }
     }
 
+    /** The mission as the first line of a report names it, e.g. {@code mission 'Night round' (missions/night-round.yaml)}. */
+    String title(Mission m) {
+        return "mission '" + m.name() + "' (" + missionFile + ")";
+    }
+
     /** The memory budget in bytes, 0 for the default. */
     long memoryBudgetBytes() {
         return maxMemoryMb == null ? 0 : Math.multiplyExact(maxMemoryMb, 1L << 20);

@@ -73,15 +73,15 @@ public final class ReplayCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             return run(out, err);
-        } catch (TrustOutput.Exit e) {
-            return e.code;
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
         } finally {
             out.flush();
             err.flush();
         }
     }
 
-    private int run(PrintWriter out, PrintWriter err) throws TrustOutput.Exit {
+    private int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         List<ForcedEvent> forced = List.of();
         if (force != null) {
             if (disturbance == Disturbance.worst) {
@@ -96,7 +96,7 @@ public final class ReplayCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
         }
-        Mission m = loadMission(err);
+        Mission m = mission.load(err);
         if (!mission.outputOk("--csv", csv, m, err) || !mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
         }
@@ -161,14 +161,6 @@ public final class ReplayCommand implements Callable<Integer> {
         return mr.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
-    private Mission loadMission(PrintWriter err) throws TrustOutput.Exit {
-        try {
-            return mission.load(err);
-        } catch (MissionOptions.BadInput e) {
-            throw new TrustOutput.Exit(ExitCodes.BAD_INPUT);
-        }
-    }
-
     /** The replay's JSON with the verdict, the certificate and the caveats. */
     private static String json(Mission m, MissionReplays mr, Replay replay) {
         ObjectNode o = Json.object();
@@ -181,7 +173,7 @@ public final class ReplayCommand implements Callable<Integer> {
     }
 
     private void print(PrintWriter out, Mission m, MissionReplays mr, Replay replay, String what) {
-        out.println(TrustOutput.mission(m, mission.missionFile) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
+        out.println(mission.title(m) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
         mr.certificate().ifPresent(c -> out.println("certified: " + c.ok() + " (" + c.statesChecked()
                 + " situations of the policy checked independently)"));
         if (!mr.guaranteed()) {

@@ -1,5 +1,9 @@
 /**
- * The command line (picocli): one {@code Callable<Integer>} per subcommand returning the exit code.
- * Entry point: {@link dockline.cli.Main}.
+ * The command line (picocli): validate, check, export, replay and margin (and view, render, bench),
+ * one {@code Callable<Integer>} per subcommand returning the exit code of {@link dockline.cli.ExitCodes}.
+ *
+ * <p>Entry point: {@link dockline.cli.Main}. The mission commands share {@code MissionOptions} (the
+ * mission file, the overrides, output-path checks and the mapping of solver failures to exit codes)
+ * and {@code Json} (every {@code --json} output, with its {@code caveats} array).
  */
 package dockline.cli;
