@@ -58,6 +58,9 @@ final class DiscountedCheck {
                     + " score, tasks and battery ignored) and say whether its optimal play completes the mission")
     boolean alsoOptimise;
 
+    /** How a threshold is written: {@code p/q}, a whole number or a decimal. */
+    private static final String THRESHOLD_SYNTAX = "[+-]?\\d+\\s*/\\s*[+-]?\\d+|[+-]?\\d+(\\.\\d+)?";
+
     /** Largest discount factor accepted (as in mission files). */
     static final int MAX_DISCOUNT = 1_000_000;
 
@@ -97,7 +100,10 @@ final class DiscountedCheck {
         if (threshold != null) {
             v = parseThreshold(threshold);
             if (v == null) {
-                err.println("dockline: --threshold '" + threshold + "' is not a rational number (e.g. 3/4, -2, 0.75)");
+                boolean written = threshold.trim().matches(THRESHOLD_SYNTAX);
+                err.println("dockline: --threshold '" + threshold + "' " + (written
+                        ? "is out of range: numerator and denominator are 64-bit whole numbers, the denominator not 0"
+                        : "is not a rational number (e.g. 3/4, -2, 0.75)"));
                 bad = true;
             }
         } else if (v == null) {
@@ -121,7 +127,7 @@ final class DiscountedCheck {
 
     static Rational parseThreshold(String t) {
         String s = t.trim();
-        if (!s.matches("[+-]?\\d+\\s*/\\s*[+-]?\\d+|[+-]?\\d+(\\.\\d+)?")) {
+        if (!s.matches(THRESHOLD_SYNTAX)) {
             return null;
         }
         try {

@@ -35,10 +35,11 @@ import picocli.CommandLine.Option;
  * {@link DiscountedPolicies}); the reserve floor is kept as well, as {@code check} does by default.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
-        description = {"Writes the robot's certified policy for a guaranteed mission: for every situation it can meet"
-                + " (cell, battery level, disturbances left, tasks done, and for a discounted score the score gap) the"
-                + " action to take.",
-                "JSON, or CSV for a .csv name. Nothing is written when the mission is not guaranteed."},
+        description = {"Writes the certified policy of a guaranteed mission: the action to take in every situation the"
+                + " robot can meet.",
+                "A situation is the cell, the battery level, the disturbances left, the tasks done and, for a discounted"
+                + " score, the score gap. JSON, or CSV for a .csv name; nothing is written when the mission is not"
+                + " guaranteed."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:the game is too large for the memory limit",

@@ -10,7 +10,8 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "dockline", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Checks that a battery-powered robot can always finish its tasks and dock without its battery"
-                + " dropping below a reserve floor, under every disturbance the building model allows.")
+                + " dropping below a reserve floor, under every disturbance the building model allows.",
+        footerHeading = "%n", footer = "Run 'dockline COMMAND --help' for the options of a command.")
 public final class Main implements Runnable {
 
     @CommandLine.Spec

@@ -295,4 +295,24 @@ class NewUserRegressionTest {
         }
         assertThat(run("check", "--help").out()).contains("(20%)");
     }
+
+    /**
+     * {@code --threshold 99999999999999999999999} was called "not a rational number (e.g. 3/4, -2,
+     * 0.75)" although it is written like one; it is out of range, and the message says so now.
+     */
+    @Test
+    void threshold_outOfRange_isToldApartFromBadSyntax() {
+        Run big = run("check", "missions/discounted-trap.yaml", "--threshold", "99999999999999999999999");
+        assertThat(big.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(big.err()).contains("is out of range").contains("64-bit").doesNotContain("not a rational");
+        assertThat(run("check", "missions/discounted-trap.yaml", "--threshold", "1/0").err()).contains("denominator not 0");
+        assertThat(run("check", "missions/discounted-trap.yaml", "--threshold", "three").err())
+                .contains("is not a rational number");
+    }
+
+    /** The top-level help ends by saying how to get the options of a command. */
+    @Test
+    void topLevelHelp_pointsToTheCommandsHelp() {
+        assertThat(run("--help").out()).contains("Run 'dockline COMMAND --help' for the options of a command.");
+    }
 }
