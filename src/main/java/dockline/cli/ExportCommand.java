@@ -15,6 +15,7 @@ import dockline.solve.DiscountedSolver;
 import dockline.solve.Policy;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
+import dockline.solve.Verdict;
 import dockline.solve.ReserveSolver;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -152,7 +153,7 @@ public final class ExportCommand implements Callable<Integer> {
             ObjectNode o = Json.object();
             o.put("mission", m.name());
             o.put("file", m.source() == null ? null : m.source().toString());
-            o.put("verdict", "not-guaranteed");
+            o.put("verdict", Verdict.NOT_GUARANTEED.word());
             o.put("written", false);
             o.putNull("policyFile");
             o.put("discretisation", m.scale().describe());
@@ -173,7 +174,7 @@ public final class ExportCommand implements Callable<Integer> {
         ObjectNode o = Json.object();
         o.put("mission", m.name());
         o.put("file", m.source() == null ? null : m.source().toString());
-        o.put("verdict", "guaranteed");
+        o.put("verdict", Verdict.GUARANTEED.word());
         o.put("written", true);
         o.put("policyFile", policyFile.toString());
         o.put("policyRows", p.size());

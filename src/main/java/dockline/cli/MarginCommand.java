@@ -10,6 +10,7 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
+import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
@@ -176,6 +177,7 @@ public final class MarginCommand implements Callable<Integer> {
         ObjectNode root = Json.object();
         root.put("mission", m.name());
         root.put("file", m.source() == null ? null : m.source().toString());
+        root.put("verdict", Verdict.of(r.guaranteed()).word());
         root.put("guaranteed", r.guaranteed());
         root.put("startUnits", r.startUnits());
         root.put("floorUnits", r.floorUnits());

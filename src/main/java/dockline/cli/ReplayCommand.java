@@ -12,6 +12,7 @@ import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.report.Caveats;
 import dockline.solve.ReserveOptions;
+import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -166,7 +167,7 @@ public final class ReplayCommand implements Callable<Integer> {
         ObjectNode o = Json.object();
         o.put("mission", m.name());
         o.put("file", m.source() == null ? null : m.source().toString());
-        o.put("verdict", mr.guaranteed() ? "guaranteed" : "not-guaranteed");
+        o.put("verdict", Verdict.of(mr.guaranteed()).word());
         o.put("certified", mr.certified());
         o.setAll(ReplayFormats.jsonTree(m, replay));
         return Json.withCaveats(o);
