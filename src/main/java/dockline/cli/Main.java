@@ -54,6 +54,8 @@ public final class Main implements Runnable {
             new ExportCommand(),
             new ReplayCommand(),
             new MarginCommand(),
+            new ViewCommand(),
+            new RenderCommand(),
             new BenchCommand(),
         };
     }

@@ -1,0 +1,148 @@
+package dockline.cli;
+
+import dockline.io.InputException;
+import dockline.io.MissionLoader;
+import dockline.io.Problem;
+import dockline.io.Quantities;
+import dockline.model.Charge;
+import dockline.model.Mission;
+import dockline.report.Caveats;
+import dockline.view.Overlay;
+import dockline.view.PictureRenderer;
+import dockline.view.SolverAnalyzer;
+import dockline.view.Verdict;
+import dockline.view.ViewData;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code dockline render MISSION --out PICTURE.png}: solves the mission and draws the map (plain,
+ * heat map or policy), the worst-case or counterexample path, the battery chart and the safety
+ * line into a PNG, with no display (headless toolkit). The file is written atomically.
+ */
+@Command(name = "render", mixinStandardHelpOptions = true,
+        description = {"Solves a mission and draws it as a PNG picture, with no display needed:",
+                "the map with the charge needed per cell (or the policy), the worst-case path, the battery chart",
+                "and the safety caveat."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:picture written; the mission is guaranteed", "1:picture written; the mission is not guaranteed",
+                "2:bad input or usage (nothing written)", "3:over a resource limit (nothing written)",
+                "4:internal error (also: the solver's policy failed the independent certificate check)"})
+public final class RenderCommand implements Callable<Integer> {
+
+    private static final Pattern SIZE = Pattern.compile("(\\d{3,4})[xX](\\d{3,4})");
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "MISSION", description = "the mission file (YAML)")
+    Path mission;
+
+    @Option(names = "--out", required = true, paramLabel = "PNG", description = "the picture to write")
+    Path out;
+
+    @Option(names = "--size", paramLabel = "WxH", defaultValue = "1200x800",
+            description = "picture size in pixels (default: ${DEFAULT-VALUE})")
+    String size;
+
+    @Option(names = "--layer", paramLabel = "LAYER", defaultValue = "heat",
+            description = "what to draw over the map: heat (charge needed), policy or plain (default: ${DEFAULT-VALUE})")
+    String layer;
+
+    @Option(names = "--reserve", paramLabel = "CHARGE", description = "reserve floor instead of the mission's, e.g. 25% or 9 Wh")
+    String reserve;
+
+    @Option(names = "--start", paramLabel = "CHARGE", description = "starting charge instead of the mission's, e.g. 80% or 30 Wh")
+    String start;
+
+    @Override
+    public Integer call() {
+        PrintWriter outw = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Matcher sm = SIZE.matcher(size.trim());
+        Overlay overlay;
+        try {
+            overlay = Overlay.ofOption(layer);
+        } catch (IllegalArgumentException e) {
+            err.println("dockline render: --layer: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        PictureRenderer.Options options;
+        try {
+            if (!sm.matches()) {
+                throw new IllegalArgumentException("write the size as WIDTHxHEIGHT, e.g. 1200x800");
+            }
+            options = new PictureRenderer.Options(Integer.parseInt(sm.group(1)), Integer.parseInt(sm.group(2)), overlay, -1, -1);
+        } catch (IllegalArgumentException e) {
+            err.println("dockline render: --size " + size + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        Mission m;
+        try {
+            m = MissionLoader.load(mission);
+        } catch (InputException e) {
+            for (Problem p : e.problems()) {
+                err.println(p.format());
+            }
+            return ExitCodes.BAD_INPUT;
+        }
+        try {
+            if (reserve != null) {
+                m = m.withReserve(charge("--reserve", reserve, m));
+            }
+            if (start != null) {
+                m = m.withStartCharge(charge("--start", start, m));
+            }
+        } catch (IllegalArgumentException e) {
+            err.println("dockline render: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        ViewData data;
+        try {
+            data = new SolverAnalyzer().analyze(m, () -> false);
+        } catch (IllegalArgumentException e) {
+            boolean limit = e.getCause() instanceof dockline.solve.ProductTooLargeException
+                    || e.getCause() instanceof dockline.certify.ClosedLoop.TooLargeException;
+            err.println("dockline render: " + e.getMessage());
+            return limit ? ExitCodes.RESOURCE_LIMIT : ExitCodes.BAD_INPUT;
+        }
+        try {
+            PictureRenderer.writePng(data, options, out);
+        } catch (IOException e) {
+            err.println("dockline render: cannot write " + out + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        Verdict v = data.verdict();
+        outw.println("wrote " + out + " (" + options.width() + "x" + options.height() + ", " + overlay.word() + ")");
+        outw.println(v.headline());
+        outw.println(Caveats.block());
+        outw.flush();
+        return switch (v.outcome()) {
+            case GUARANTEED -> ExitCodes.OK;
+            case NOT_GUARANTEED -> ExitCodes.NOT_GUARANTEED;
+            case NOT_CHECKED -> ExitCodes.INTERNAL; // the policy failed the independent certificate check
+        };
+    }
+
+    private static Charge charge(String option, String text, Mission m) {
+        Charge c;
+        try {
+            c = Quantities.parseCharge(text);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(option + ": " + e.getMessage());
+        }
+        String wrong = Quantities.checkAgainstCapacity(c, m.robot().capacityWh());
+        if (wrong != null) {
+            throw new IllegalArgumentException(option + ": " + wrong);
+        }
+        return c;
+    }
+}

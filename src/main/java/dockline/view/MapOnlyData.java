@@ -1,0 +1,34 @@
+package dockline.view;
+
+import dockline.arena.Action;
+import dockline.model.Mission;
+import java.util.List;
+import java.util.Optional;
+
+/** View data for a mission that has not been solved: the map is shown, nothing else. */
+public record MapOnlyData(Mission mission, Verdict verdict) implements ViewData {
+
+    public MapOnlyData(Mission mission) {
+        this(mission, Verdict.notChecked("press Check to solve this mission"));
+    }
+
+    @Override
+    public boolean solved() {
+        return false;
+    }
+
+    @Override
+    public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
+        return UNKNOWN;
+    }
+
+    @Override
+    public Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
+        return Optional.empty();
+    }
+
+    @Override
+    public List<ViewReplay> replays() {
+        return List.of();
+    }
+}

@@ -1,0 +1,263 @@
+package dockline.view;
+
+import dockline.arena.Action;
+import dockline.model.Cell;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
+import dockline.monitor.ReserveMonitor;
+import dockline.replay.ForcedEventException;
+import dockline.replay.MissionReplays;
+import dockline.replay.Replay;
+import dockline.solve.ChargeNeeded;
+import dockline.solve.Policy;
+import dockline.solve.PolicyEntry;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.ReserveAnalysis;
+import dockline.solve.ReserveOptions;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
+
+/**
+ * The real {@link Analyzer}: the solver, the independent certificate checker and the replays the
+ * command line uses ({@link MissionReplays}), plus the heat map ({@link ChargeNeeded}), turned into
+ * the view's own {@link ViewData}. The cancellation flag goes down to every solve and is checked
+ * between the stages.
+ */
+public final class SolverAnalyzer implements Analyzer {
+
+    @Override
+    public ViewData analyze(Mission mission, BooleanSupplier cancelled) {
+        ReserveOptions options = ReserveOptions.defaults().withChargeNeeded(false).withCancelled(cancelled);
+        MissionReplays mr;
+        ChargeNeeded heat;
+        try {
+            mr = MissionReplays.of(mission, options);
+            stopIf(cancelled);
+            ReserveAnalysis a = mr.analysis();
+            heat = ChargeNeeded.compute(mr.arena(), a.game().goal(),
+                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product(),
+                    options.solver());
+            stopIf(cancelled);
+        } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
+            throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);
+        }
+        List<ViewReplay> replays = new ArrayList<>();
+        List<String> problems = new ArrayList<>();
+        try {
+            Replay w = mr.worstCase();
+            replays.add(ReplayAdapter.of(mission, w, mr.guaranteed() ? ViewReplay.Kind.WORST_CASE
+                    : ViewReplay.Kind.COUNTEREXAMPLE, title(mission, w, mr.guaranteed() ? "worst case" : "counterexample")));
+        } catch (IllegalStateException e) {
+            problems.add(e.getMessage());
+        }
+        if (mr.policy().isPresent()) {
+            try {
+                Replay n = mr.nominal();
+                replays.add(ReplayAdapter.of(mission, n, ViewReplay.Kind.NOMINAL, title(mission, n, "no disturbance")));
+            } catch (IllegalStateException e) {
+                problems.add(e.getMessage());
+            }
+        }
+        stopIf(cancelled);
+        return new SolvedData(mr, heat, verdictOf(mr, problems), replays);
+    }
+
+    private static void stopIf(BooleanSupplier cancelled) {
+        if (cancelled.getAsBoolean()) {
+            throw new CancellationException("cancelled");
+        }
+    }
+
+    static String title(Mission m, Replay r, String what) {
+        return what + " (" + (r.steps().size() - 1) + " steps, lowest " + Units.wh(m, r.minimumUnits()) + ")";
+    }
+
+    /** The verdict in words, with the certificate status. */
+    static Verdict verdictOf(MissionReplays mr, List<String> problems) {
+        ReserveAnalysis a = mr.analysis();
+        Mission m = a.mission();
+        int k = m.map().disturbances().budget();
+        String floor = Units.both(m, a.reserveUnits());
+        String disturbances = k == 0 ? "with no disturbance" : "under every disturbance the map allows (at most " + k + ")";
+        StringBuilder words = new StringBuilder();
+        if (a.guaranteed()) {
+            words.append("the robot can always finish its tasks and dock without the battery dropping below the floor of ")
+                    .append(floor).append(", ").append(disturbances).append('.');
+            a.worstCaseMinimumUnits().ifPresent(u -> words.append(" Worst case: ").append(Units.both(m, u)).append('.'));
+        } else {
+            words.append(k == 0 ? "even with no disturbance, " : "some sequence of at most " + k + " disturbances can, whatever the robot does, ")
+                    .append("drive the battery below the floor of ").append(floor).append(" before the tasks are done and the robot docks.");
+            if (a.highestGuaranteedReserveUnits().isPresent()) {
+                words.append(" A floor of ").append(Units.both(m, a.highestGuaranteedReserveUnits().getAsInt()))
+                        .append(" can be guaranteed.");
+            } else if (a.highestReserveSearched() || mr.bestEffortFloor() < 0) {
+                words.append(" No floor can be guaranteed from this start.");
+            }
+        }
+        if (m.objective() instanceof Objective.Discounted) {
+            words.append(" (This answers the reserve floor; the mission's discounted objective is checked by 'dockline check'.)");
+        }
+        for (String n : a.notes()) {
+            words.append(" Note: ").append(n).append('.');
+        }
+        String cert;
+        Verdict.Outcome outcome = a.guaranteed() ? Verdict.Outcome.GUARANTEED : Verdict.Outcome.NOT_GUARANTEED;
+        if (a.guaranteed()) {
+            Certificate c = mr.certificate().orElse(null);
+            if (c != null && c.ok()) {
+                cert = "passed \u2014 the policy was re-checked independently of the solver (" + c.statesChecked()
+                        + " situations, every disturbance choice; longest run " + c.longestRunSteps() + " steps)";
+            } else {
+                // never trust a guarantee whose policy failed the check: say so, loudly
+                outcome = Verdict.Outcome.NOT_CHECKED;
+                words.insert(0, "the solver says guaranteed, but its policy FAILED the independent check; do not rely on it. ");
+                cert = "FAILED \u2014 " + (c == null ? "no certificate" : c.reason());
+            }
+        } else {
+            cert = "not applicable (nothing to certify for a verdict of not guaranteed); the counterexample replay shows"
+                    + " the breach" + (mr.bestEffortFloor() >= 0 ? "; the policy shown is the best effort, certified for a floor of "
+                    + Units.both(m, mr.bestEffortFloor()) : "");
+        }
+        for (String p : problems) {
+            cert += "; " + p;
+        }
+        return new Verdict(outcome, words.toString(), cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
+    }
+
+    /** {@link ViewData} over a {@link ReserveAnalysis}; the policy is indexed by cell once, at construction. */
+    static final class SolvedData implements ViewData {
+
+        private final MissionReplays replaysSource;
+        private final ReserveAnalysis analysis;
+        private final ChargeNeeded heat;
+        private final Verdict verdict;
+        private final List<ViewReplay> replays;
+        private final Optional<Policy> policy;
+        private final Map<Long, List<Action>> byCell;
+
+        SolvedData(MissionReplays mr, ChargeNeeded heat, Verdict verdict, List<ViewReplay> replays) {
+            this.replaysSource = mr;
+            this.analysis = mr.analysis();
+            this.heat = heat;
+            this.verdict = verdict;
+            this.replays = List.copyOf(replays);
+            this.policy = mr.policy();
+            this.byCell = indexByCell(policy, analysis.mission().map().width());
+        }
+
+        MissionReplays missionReplays() {
+            return replaysSource;
+        }
+
+        private static long key(int cellIndex, int budgetLeft, int progress) {
+            return ((long) cellIndex << 40) | ((long) budgetLeft << 20) | progress;
+        }
+
+        /** Distinct actions per (cell, budget, progress), most frequent first. O(entries). */
+        private static Map<Long, List<Action>> indexByCell(Optional<Policy> policy, int width) {
+            Map<Long, Map<Action, Integer>> counts = new HashMap<>();
+            policy.ifPresent(p -> {
+                for (PolicyEntry e : p.entries()) {
+                    counts.computeIfAbsent(key(e.cell().index(width), e.budgetLeft(), e.progress()), k -> new LinkedHashMap<>())
+                            .merge(e.action(), 1, Integer::sum);
+                }
+            });
+            Map<Long, List<Action>> out = new HashMap<>();
+            for (Map.Entry<Long, Map<Action, Integer>> e : counts.entrySet()) {
+                List<Map.Entry<Action, Integer>> l = new ArrayList<>(e.getValue().entrySet());
+                l.sort((x, y) -> Integer.compare(y.getValue(), x.getValue()));
+                out.put(e.getKey(), l.stream().map(Map.Entry::getKey).toList());
+            }
+            return out;
+        }
+
+        ReserveAnalysis analysis() {
+            return analysis;
+        }
+
+        @Override
+        public Mission mission() {
+            return analysis.mission();
+        }
+
+        @Override
+        public Verdict verdict() {
+            return verdict;
+        }
+
+        @Override
+        public boolean solved() {
+            return true;
+        }
+
+        @Override
+        public List<ViewReplay> replays() {
+            return replays;
+        }
+
+        @Override
+        public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
+            try {
+                int u = heat.unitsNeeded(cellIndex, budgetLeft, progressMask);
+                return u == ChargeNeeded.IMPOSSIBLE ? IMPOSSIBLE : u;
+            } catch (IllegalArgumentException outOfRange) {
+                return UNKNOWN;
+            }
+        }
+
+        @Override
+        public Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
+            if (policy.isEmpty()) {
+                return Optional.empty();
+            }
+            Cell c = Cell.ofIndex(cellIndex, analysis.mission().map().width());
+            return policy.get().lookup(c, levelUnits, budgetLeft, progressMask);
+        }
+
+        @Override
+        public List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
+            return byCell.getOrDefault(key(cellIndex, budgetLeft, progressMask), List.of());
+        }
+
+        @Override
+        public boolean canForce() {
+            return policy.isPresent();
+        }
+
+        /**
+         * Replays the policy with the given events (nominal outcomes elsewhere).
+         *
+         * @throws IllegalArgumentException when an event cannot happen where it was put
+         */
+        @Override
+        public Optional<ViewReplay> force(List<ForcedEvent> events) {
+            if (policy.isEmpty() || events.isEmpty()) {
+                return Optional.empty();
+            }
+            List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
+            StringBuilder what = new StringBuilder();
+            for (ForcedEvent e : events) {
+                fs.add(new dockline.replay.ForcedEvent(e.step(), e.kind(), e.slipTo()));
+                what.append(what.length() == 0 ? "" : ", ").append(e.step()).append(':').append(e.kind().word())
+                        .append(e.slipTo() != null ? "@" + e.slipTo() : "");
+            }
+            try {
+                Replay r = replaysSource.forced(fs);
+                return Optional.of(ReplayAdapter.of(mission(), r, ViewReplay.Kind.FORCED,
+                        title(mission(), r, "forced " + what)));
+            } catch (ForcedEventException e) {
+                throw new IllegalArgumentException(e.getMessage(), e);
+            } catch (IllegalStateException e) {
+                throw new IllegalArgumentException(e.getMessage(), e);
+            }
+        }
+    }
+}

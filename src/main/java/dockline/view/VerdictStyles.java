@@ -1,0 +1,24 @@
+package dockline.view;
+
+/** CSS style classes for the verdict label (colour and words together: the words carry the meaning). */
+final class VerdictStyles {
+
+    private VerdictStyles() {
+    }
+
+    static String of(Verdict.Outcome o) {
+        return switch (o) {
+            case GUARANTEED -> "verdict-guaranteed";
+            case NOT_GUARANTEED -> "verdict-not-guaranteed";
+            case NOT_CHECKED -> "verdict-not-checked";
+        };
+    }
+
+    static void apply(javafx.scene.control.Label l, Verdict.Outcome o) {
+        l.getStyleClass().removeAll("verdict-guaranteed", "verdict-not-guaranteed", "verdict-not-checked");
+        if (!l.getStyleClass().contains("verdict")) {
+            l.getStyleClass().add("verdict");
+        }
+        l.getStyleClass().add(of(o));
+    }
+}

@@ -1,0 +1,66 @@
+package dockline.view;
+
+import dockline.arena.Action;
+import dockline.model.Mission;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Everything the window and the rendered picture show about one mission: the view's own narrow
+ * model, so that drawing code never reaches into solver or certificate internals. Implementations
+ * are immutable and may be read from any thread.
+ *
+ * <p>Cells are row-major indices ({@code y * width + x}) of the mission's map.
+ */
+public interface ViewData {
+
+    /** {@link #chargeNeeded}: no starting charge at all lets the robot finish from there. */
+    int IMPOSSIBLE = -1;
+    /** {@link #chargeNeeded}: not known (a wall, or the mission was not solved). */
+    int UNKNOWN = -2;
+
+    /** The mission as solved (with the reserve floor and starting charge that were asked). */
+    Mission mission();
+
+    /** The verdict in words, with the certificate status. */
+    Verdict verdict();
+
+    /** Whether there is a solution behind this data (heat map, policy, replays). */
+    boolean solved();
+
+    /**
+     * The least battery level, in units, with which the robot standing on the cell can still be
+     * sure to finish, given the disturbances left and the tasks already done; or {@link #IMPOSSIBLE}
+     * or {@link #UNKNOWN}.
+     */
+    int chargeNeeded(int cellIndex, int budgetLeft, int progressMask);
+
+    /** The policy's action in that situation, if the policy has one. */
+    Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask);
+
+    /**
+     * The distinct actions the policy takes on the cell, at any battery level, with the given
+     * disturbances left and tasks done; the most frequent first. Empty when the policy never
+     * gets there in that situation.
+     */
+    default List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
+        return List.of();
+    }
+
+    /** The runs to play: the worst case (if guaranteed), the counterexample (if not). */
+    List<ViewReplay> replays();
+
+    /**
+     * Plays a scenario with the given disturbances forced, if this data can do that.
+     *
+     * @throws IllegalArgumentException when an event cannot happen where it was put (message in words)
+     */
+    default Optional<ViewReplay> force(List<ForcedEvent> events) {
+        return Optional.empty();
+    }
+
+    /** Whether {@link #force} can run scenarios. */
+    default boolean canForce() {
+        return false;
+    }
+}

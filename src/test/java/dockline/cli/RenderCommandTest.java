@@ -1,0 +1,119 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.image.BufferedImage;
+import java.io.File;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** {@code dockline render}: a PNG of the asked size with no display; bad input writes nothing. */
+class RenderCommandTest {
+
+    @TempDir
+    Path tmp;
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        int code = cl.execute(args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    /**
+     * Runs the command in a fresh JVM whose environment has no display and no JavaFX platform
+     * settings, as on a build server: the command must select the headless glass itself.
+     */
+    @Test
+    void renders_a_png_of_the_asked_size_in_a_jvm_without_a_display() throws Exception {
+        Path png = tmp.resolve("night.png");
+        List<String> cmd = new ArrayList<>();
+        cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
+        cmd.add("-cp");
+        cmd.add(System.getProperty("java.class.path"));
+        cmd.add("dockline.cli.Main");
+        cmd.add("render");
+        cmd.add("missions/night-round.yaml");
+        cmd.add("--out");
+        cmd.add(png.toString());
+        cmd.add("--size");
+        cmd.add("900x600");
+        ProcessBuilder pb = new ProcessBuilder(cmd);
+        pb.environment().remove("DISPLAY");
+        pb.environment().remove("WAYLAND_DISPLAY");
+        pb.environment().remove("JAVA_TOOL_OPTIONS");
+        pb.redirectErrorStream(true);
+        File log = tmp.resolve("log.txt").toFile();
+        pb.redirectOutput(log);
+        Process p = pb.start();
+        boolean done = p.waitFor(5, TimeUnit.MINUTES);
+        if (!done) {
+            p.destroyForcibly();
+        }
+        String text = Files.readString(log.toPath());
+        assertThat(done).as("render finished; output:\n%s", text).isTrue();
+        assertThat(p.exitValue()).as(text).isEqualTo(ExitCodes.OK);
+        assertThat(text).contains("wrote ").contains("Guaranteed").contains("Safety:");
+        BufferedImage img = ImageIO.read(png.toFile());
+        assertThat(img.getWidth()).isEqualTo(900);
+        assertThat(img.getHeight()).isEqualTo(600);
+    }
+
+    @Test
+    void a_bad_size_is_refused_and_nothing_is_written() {
+        Path png = tmp.resolve("x.png");
+        Run r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--size", "big");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--size").contains("WIDTHxHEIGHT");
+        assertThat(png).doesNotExist();
+    }
+
+    @Test
+    void an_unknown_layer_is_refused() {
+        Run r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--layer", "fog");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("unknown overlay 'fog'");
+    }
+
+    @Test
+    void a_broken_mission_gets_file_line_column_messages_and_nothing_is_written() throws Exception {
+        Path bad = tmp.resolve("bad.yaml");
+        Files.writeString(bad, "name: broken\nmap: nowhere.yaml\nrobot: 3\n");
+        Path png = tmp.resolve("x.png");
+        Run r = run("render", bad.toString(), "--out", png.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).containsPattern("bad\\.yaml:\\d+:\\d+: ");
+        assertThat(png).doesNotExist();
+    }
+
+    @Test
+    void a_reserve_above_the_capacity_is_refused() {
+        Run r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--reserve", "70 Wh");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--reserve").contains("capacity");
+    }
+
+    @Test
+    void view_and_render_are_listed_with_help() {
+        Run r = run("--help");
+        assertThat(r.out()).contains("view").contains("render");
+        Run h = run("render", "--help");
+        assertThat(h.out()).contains("--out").contains("--size").contains("--layer");
+        assertThat(h.code()).isEqualTo(ExitCodes.OK);
+    }
+}
