@@ -56,6 +56,7 @@ public final class Main implements Runnable {
             new MarginCommand(),
             new ViewCommand(),
             new RenderCommand(),
+            new BenchCommand(),
         };
     }
 

@@ -1,0 +1,504 @@
+package dockline.bench;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.goal.GoalAutomaton;
+import dockline.model.BuildingMap;
+import dockline.model.Mission;
+import dockline.model.Rational;
+import dockline.model.Relation;
+import dockline.monitor.DiscountedComparator;
+import dockline.monitor.ReserveMonitor;
+import dockline.margin.MinimumCredit;
+import dockline.solve.AttractorSolver;
+import dockline.solve.CompactAttractorSolver;
+import dockline.solve.DiscountedThresholdGame;
+import dockline.solve.DiscountedValueIteration;
+import dockline.solve.ImplicitReserveGame;
+import dockline.solve.MinChargeSolver;
+import dockline.solve.ProductGame;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.ReserveSizeForecast;
+import dockline.solve.SizeEstimate;
+import dockline.solve.Solution;
+import dockline.solve.Verdict;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeSet;
+import java.util.function.BooleanSupplier;
+import java.util.function.Consumer;
+
+/**
+ * Measures every solving method on generated buildings of growing size, one instance at a time, in
+ * one run, and checks that all methods give the same verdict on each instance.
+ *
+ * <p>Instances per floor size (all from {@link BuildingGenerator} and {@link MissionGenerator},
+ * same seed):
+ * <ul>
+ *   <li>{@code reserve}: {@link MissionSpec#docking} (charging on docks, few levels): the product
+ *       with the reserve monitor covers the floor. Methods: {@code attractor} (the main route as
+ *       landed: {@code ProductGame} built from the start in CSR arrays + {@code AttractorSolver}),
+ *       {@code compact} ({@code CompactAttractorSolver} on the same graph), {@code bfs} (plain
+ *       breadth-first search over the same graph: the memory-bound floor), {@code sweep} (naive
+ *       sweeps to the fixpoint on the same graph), {@code implicit} / {@code early} /
+ *       {@code implicit-bfs} (the attractor, the attractor stopping once the start is won, and plain
+ *       BFS, on {@code ImplicitReserveGame}, which stores no product graph), {@code fixpoint}
+ *       (direct optimisation over energy levels on arena × goal, {@code MinimumCredit}).</li>
+ *   <li>{@code consumption}: {@link MissionSpec#consumptionOnly} (no charging, 1,000 levels):
+ *       {@code fast} ({@link MinChargeSolver}, stopping once the start is decided), and the other
+ *       methods where the product fits.</li>
+ *   <li>{@code discounted}: the discounted-sum threshold question (discount 2, threshold the exact
+ *       optimal value, no dock goal) on the consumption instance's arena: {@code attractor} on the
+ *       comparator product ({@code DiscountedThresholdGame}) versus {@code vi} (value iteration,
+ *       then compare: {@code DiscountedValueIteration}).</li>
+ * </ul>
+ *
+ * <p>Before measuring, every method runs a few times on small floors so the JIT compiler has done its
+ * work; each timed solve is the best of {@link Config#reps()} runs (the least disturbed by other
+ * processes on a shared machine; runs over two seconds are not repeated), timed both by the wall
+ * clock and by the solving thread's CPU time plus the collector's pauses (the ratios use the latter,
+ * as other processes on a shared machine hardly change it). The peak heap of a method
+ * is sampled above the baseline taken (after a full collection) with the instance's arena in memory;
+ * for methods on a built product it covers the build too.
+ */
+public final class Benchmark {
+
+    /** Instance names, as in the rows. */
+    public static final String RESERVE = "reserve";
+    public static final String CONSUMPTION = "consumption";
+    public static final String DISCOUNTED = "discounted";
+
+    /**
+     * What to run.
+     *
+     * @param sizes          floor sides on which every instance and method runs (where it fits)
+     * @param fastOnlySizes  floor sides on which only the consumption instance's {@code fast} method runs
+     * @param seed           seed of the generated floors and missions
+     * @param budget         disturbance budget K of every mission
+     * @param reps           timed repetitions per solve (best kept)
+     * @param warmups        warm-up rounds on small floors before measuring
+     * @param sweepCapMillis a naive sweep running longer than this is stopped and reported as such
+     * @param maxProductVertices the CSR product methods are skipped when the forecast product is larger
+     * @param maxImplicitVertices the implicit-product methods are skipped when the full product is larger
+     */
+    public record Config(List<Integer> sizes, List<Integer> fastOnlySizes, long seed, int budget, int reps,
+                         int warmups, long sweepCapMillis, long maxProductVertices, long maxImplicitVertices) {
+
+        public Config {
+            sizes = List.copyOf(sizes);
+            fastOnlySizes = List.copyOf(fastOnlySizes);
+            if (reps < 1 || warmups < 0 || budget < 0) {
+                throw new IllegalArgumentException("reps must be positive, warm-ups and budget not negative");
+            }
+        }
+
+        /** Under a minute on two cores: 32² to 128², and the fast path on 512². */
+        public static Config quick() {
+            return new Config(List.of(32, 64, 128), List.of(512), 7, 2, 3, 1, 8_000, 20_000_000L, 40_000_000L);
+        }
+
+        /** Under ten minutes on two cores: 32² to 512² (product methods where the product fits). */
+        public static Config full() {
+            return new Config(List.of(32, 64, 128, 256, 512), List.of(), 7, 2, 3, 2, 60_000, 400_000_000L,
+                    Integer.MAX_VALUE);
+        }
+    }
+
+    private final Config config;
+    private final Consumer<String> progress;
+
+    public Benchmark(Config config, Consumer<String> progress) {
+        this.config = Objects.requireNonNull(config);
+        this.progress = Objects.requireNonNull(progress);
+    }
+
+    /** Runs the benchmark. */
+    public BenchReport run() {
+        long t0 = System.nanoTime();
+        Map<String, String> machine = MachineFacts.collect();
+        List<BenchRow> rows = new ArrayList<>();
+        try (HeapSampler sampler = new HeapSampler()) {
+            progress.accept("warming up the JIT compiler (" + config.warmups() + " rounds on 32x32 and 48x48 floors)");
+            for (int w = 0; w < config.warmups(); w++) {
+                for (int side : new int[] {32, 48}) {
+                    for (String kind : new String[] {RESERVE, CONSUMPTION, DISCOUNTED}) {
+                        // the consumption products are large even on small floors: the reserve ones warm the same code
+                        measure(instance(side, kind), sampler, 2, !kind.equals(CONSUMPTION), true);
+                    }
+                }
+            }
+            TreeSet<Integer> all = new TreeSet<>(config.sizes());
+            all.addAll(config.fastOnlySizes());
+            for (int side : all) {
+                boolean full = config.sizes().contains(side);
+                for (String kind : full ? new String[] {RESERVE, CONSUMPTION, DISCOUNTED} : new String[] {CONSUMPTION}) {
+                    Instance inst = instance(side, kind);
+                    progress.accept(String.format(java.util.Locale.ROOT,
+                            "%dx%d %s: arena %d vertices, %d edges, goal %d states, compiled in %.0f ms",
+                            side, side, kind, inst.arena.vertexCount(), inst.arena.edgeCount(),
+                            inst.goal.stateCount(), inst.arenaMillis));
+                    for (BenchRow r : measure(inst, sampler, config.reps(), full, false)) {
+                        rows.add(r);
+                        progress.accept(BenchReport.formatRow(r));
+                    }
+                }
+            }
+        }
+        return new BenchReport(machine, rows, (System.nanoTime() - t0) / 1e6);
+    }
+
+    // ------------------------------------------------------------------ instances
+
+    /** One mission on one generated floor, compiled (outside every timing). */
+    record Instance(int side, String kind, Mission mission, Arena arena, GoalAutomaton goal, double arenaMillis,
+                    double generateMillis) {
+    }
+
+    Instance instance(int side, String kind) {
+        long t0 = System.nanoTime();
+        BuildingMap map = BuildingGenerator.generate(side, config.seed(), config.budget());
+        // the discounted question runs on the consumption arena: with charging on the start dock the
+        // best play is to charge for ever and the comparator product collapses to a dozen vertices
+        MissionSpec spec = kind.equals(RESERVE) ? MissionSpec.docking(config.budget())
+                : MissionSpec.consumptionOnly(config.budget());
+        Mission mission = MissionGenerator.generate(map, spec, config.seed());
+        long t1 = System.nanoTime();
+        Arena arena = ArenaCompiler.compile(mission);
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        long t2 = System.nanoTime();
+        return new Instance(side, kind, mission, arena, goal, (t2 - t1) / 1e6, (t1 - t0) / 1e6);
+    }
+
+    // ------------------------------------------------------------------ measuring
+
+    private List<BenchRow> measure(Instance inst, HeapSampler sampler, int reps, boolean products, boolean warmup) {
+        List<BenchRow> rows = new ArrayList<>();
+        switch (inst.kind) {
+            case RESERVE -> {
+                rows.addAll(csrMethods(inst, sampler, reps, warmup));
+                rows.addAll(implicitMethods(inst, sampler, reps));
+                rows.add(fixpoint(inst, sampler, reps));
+            }
+            case CONSUMPTION -> {
+                rows.add(fast(inst, sampler, reps));
+                if (products) {
+                    rows.addAll(csrMethods(inst, sampler, reps, warmup));
+                    rows.addAll(implicitMethods(inst, sampler, reps));
+                    rows.add(fixpoint(inst, sampler, reps));
+                }
+            }
+            case DISCOUNTED -> rows.addAll(discounted(inst, sampler, reps));
+            default -> throw new IllegalStateException(inst.kind);
+        }
+        return rows;
+    }
+
+    /** Something timed; its value is kept from the last run. */
+    @FunctionalInterface
+    private interface Body<T> {
+        T run();
+    }
+
+    /** The value of the last run, the best wall and CPU times over the runs, the peak heap of the first run. */
+    private record Timed<T>(T value, double millis, double cpuMillis, long peak) {
+    }
+
+    private static final java.lang.management.ThreadMXBean THREADS =
+            java.lang.management.ManagementFactory.getThreadMXBean();
+
+    /**
+     * CPU time of this thread plus the garbage collector's pauses so far, in ns (other processes on the
+     * machine do not count); -1 when the platform cannot tell. Thread CPU time has nanosecond
+     * resolution (process CPU time on Linux only clock ticks); the pauses are added because the
+     * collector's work is done by its own threads.
+     */
+    private static long cpuNow() {
+        if (!THREADS.isCurrentThreadCpuTimeSupported()) {
+            return -1;
+        }
+        long gcMillis = 0;
+        for (java.lang.management.GarbageCollectorMXBean gc
+                : java.lang.management.ManagementFactory.getGarbageCollectorMXBeans()) {
+            gcMillis += Math.max(0, gc.getCollectionTime());
+        }
+        return THREADS.getCurrentThreadCpuTime() + gcMillis * 1_000_000L;
+    }
+
+    /** A run longer than this is not repeated (its time is stable enough, and the full run must stay short). */
+    private static final double REPEAT_BELOW_MILLIS = 2_000;
+
+    /**
+     * Runs {@code body} up to {@code reps} times (once when the first run takes over
+     * {@value #REPEAT_BELOW_MILLIS} ms); the heap is sampled during the first run, above {@code base}.
+     */
+    private static <T> Timed<T> time(HeapSampler sampler, long base, int reps, Body<T> body) {
+        double best = Double.MAX_VALUE;
+        double bestCpu = Double.MAX_VALUE;
+        long peak = -1;
+        T value = null;
+        for (int r = 0; r < reps; r++) {
+            if (r == 0) {
+                sampler.start();
+            }
+            long c0 = cpuNow();
+            long t0 = System.nanoTime();
+            value = body.run();
+            double ms = (System.nanoTime() - t0) / 1e6;
+            long c1 = cpuNow();
+            if (r == 0) {
+                peak = sampler.stop() - base;
+            }
+            best = Math.min(best, ms);
+            bestCpu = Math.min(bestCpu, c0 < 0 ? -1 : (c1 - c0) / 1e6);
+            if (ms > REPEAT_BELOW_MILLIS) {
+                break;
+            }
+        }
+        return new Timed<>(value, best, bestCpu, peak);
+    }
+
+    private static final String[] CSR_METHODS = {"attractor", "compact", "bfs", "sweep"};
+
+    /**
+     * The main route as landed (ProductGame: the product built from the start in CSR arrays, solved by
+     * AttractorSolver), then on the same graph CompactAttractorSolver, plain BFS and naive sweeps.
+     */
+    private List<BenchRow> csrMethods(Instance inst, HeapSampler sampler, int reps, boolean warmup) {
+        List<BenchRow> rows = new ArrayList<>();
+        Mission m = inst.mission;
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        SizeEstimate est = ProductGame.estimate(inst.arena, inst.goal, monitor, false);
+        long tf0 = System.nanoTime();
+        ReserveSizeForecast.Forecast forecast = ReserveSizeForecast.of(inst.arena, inst.goal, monitor);
+        double forecastMs = (System.nanoTime() - tf0) / 1e6;
+        long budget = ProductOptions.defaultMemoryBudget();
+        String skip = null;
+        if (forecast.vertices() > config.maxProductVertices()) {
+            skip = "skipped: the forecast (" + forecast.vertices() + " vertices) is over this run's limit of "
+                    + config.maxProductVertices() + " vertices";
+        } else if (est.bytes() > budget) {
+            skip = "does not fit: the estimate (" + est.describe() + ") is over the memory budget of "
+                    + megabytes(budget);
+        }
+        if (skip != null) {
+            for (String method : CSR_METHODS) {
+                rows.add(BenchRow.skipped(inst.side, inst.kind, method, est.vertices(), est.edges(), skip));
+            }
+            return rows;
+        }
+        long base = HeapSampler.settledUsed();
+        sampler.start();
+        ProductGame game;
+        long tb0 = System.nanoTime();
+        try {
+            game = ProductGame.fromStart(inst.arena, inst.goal, monitor, ProductOptions.defaults());
+        } catch (ProductTooLargeException e) {
+            sampler.stop();
+            for (String method : CSR_METHODS) {
+                rows.add(BenchRow.skipped(inst.side, inst.kind, method, est.vertices(), est.edges(),
+                        "does not fit: " + e.getMessage()));
+            }
+            return rows;
+        }
+        double buildMs = (System.nanoTime() - tb0) / 1e6;
+        long buildPeak = sampler.stop() - base;
+        long n = game.vertexCount();
+        long edges = game.edgeCount();
+        double wall0 = inst.arenaMillis + buildMs;
+
+        Timed<Solution> at = time(sampler, base, reps, () -> new AttractorSolver(game.graph()).solve());
+        rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
+                Math.max(buildPeak, at.peak()), Verdict.of(at.value().winning(game.start())).word(), wall0 + at.millis(),
+                est.vertices(), forecast.vertices(), String.format(java.util.Locale.ROOT,
+                        "main route: ProductGame + AttractorSolver; its estimate %.2fx the real size,"
+                                + " ReserveSizeForecast %.2fx (in %.0f ms)",
+                        est.vertices() / (double) n, forecast.vertices() / (double) n, forecastMs)));
+
+        Timed<Solution> ct = time(sampler, base, reps, () -> new CompactAttractorSolver(game.graph()).solve());
+        rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
+                Math.max(buildPeak, ct.peak()), Verdict.of(ct.value().winning(game.start())).word(),
+                wall0 + ct.millis(), -1, -1, "the same product graph, CompactAttractorSolver"));
+
+        Timed<GraphBaselines.Traversal> bt = time(sampler, base, reps, () -> GraphBaselines.bfs(game.graph(), game.start()));
+        rows.add(new BenchRow(inst.side, inst.kind, "bfs", bt.value().vertices(), bt.value().edges(), buildMs,
+                bt.millis(), bt.cpuMillis(), Math.max(buildPeak, bt.peak()), null, wall0 + bt.millis(), -1, -1,
+                "plain BFS over the same product graph, from the start"));
+
+        long cap = warmup ? 2_000 : config.sweepCapMillis();
+        long deadline = System.nanoTime() + cap * 1_000_000L;
+        BooleanSupplier late = () -> System.nanoTime() > deadline;
+        Timed<GraphBaselines.Sweeps> st = time(sampler, base, 1, () -> GraphBaselines.sweep(game.graph(), late));
+        if (st.value() == null) {
+            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, -1, -1, -1, null, -1, -1, -1,
+                    "stopped after " + cap + " ms (the time cap of this run)"));
+        } else {
+            rows.add(new BenchRow(inst.side, inst.kind, "sweep", n, edges, buildMs, st.millis(), st.cpuMillis(),
+                    Math.max(buildPeak, st.peak()), Verdict.of(st.value().won()[game.start()]).word(),
+                    wall0 + st.millis(), -1, -1, st.value().sweeps() + " naive sweeps over the same product graph"));
+        }
+        return rows;
+    }
+
+    private static final String[] IMPLICIT_METHODS = {"implicit", "early", "implicit-bfs"};
+
+    /**
+     * The implicit layout (ImplicitReserveGame: nothing stored but the solver's counters and queue):
+     * the full attractor, the attractor stopping once the start is won, and plain BFS over it.
+     */
+    private List<BenchRow> implicitMethods(Instance inst, HeapSampler sampler, int reps) {
+        List<BenchRow> rows = new ArrayList<>();
+        Mission m = inst.mission;
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        ImplicitReserveGame game;
+        try {
+            game = new ImplicitReserveGame(inst.arena, inst.goal, monitor);
+        } catch (ProductTooLargeException e) {
+            long v = (long) inst.arena.vertexCount() * inst.goal.stateCount() * monitor.stateBound();
+            for (String method : IMPLICIT_METHODS) {
+                rows.add(BenchRow.skipped(inst.side, inst.kind, method, v, v,
+                        "does not fit: more than 2^31 slots in the numbering"));
+            }
+            return rows;
+        }
+        long slots = game.slotCount();
+        if (game.vertexCount() > config.maxImplicitVertices()) {
+            for (String method : IMPLICIT_METHODS) {
+                rows.add(BenchRow.skipped(inst.side, inst.kind, method, game.vertexCount(), 0,
+                        "skipped: " + game.vertexCount() + " vertices is over this run's limit of "
+                                + config.maxImplicitVertices()));
+            }
+            return rows;
+        }
+        if (slots + 4 * game.vertexCount() > Runtime.getRuntime().maxMemory() - HeapSampler.settledUsed()) {
+            for (String method : IMPLICIT_METHODS) {
+                rows.add(BenchRow.skipped(inst.side, inst.kind, method, game.vertexCount(), 0,
+                        "does not fit: " + megabytes(slots + 4 * game.vertexCount()) + " needed at most"));
+            }
+            return rows;
+        }
+        long base = HeapSampler.settledUsed();
+        long all = game.vertexCount();
+        Timed<ImplicitReserveGame.Result> full = time(sampler, base, reps, () -> game.solve(false));
+        Timed<ImplicitReserveGame.Result> early = time(sampler, base, reps, () -> game.solve(true));
+        Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, reps, game::bfs);
+        rows.add(new BenchRow(inst.side, inst.kind, "implicit", all, full.value().edgesScanned(), 0, full.millis(),
+                full.cpuMillis(), full.peak(), Verdict.of(full.value().startWon()).word(), inst.arenaMillis + full.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "implicit product (every triple, %d reachable); won %d",
+                        bfs.value().wonVertices(), full.value().wonVertices())));
+        rows.add(new BenchRow(inst.side, inst.kind, "early", all, early.value().edgesScanned(), 0, early.millis(),
+                early.cpuMillis(), early.peak(), Verdict.of(early.value().startWon()).word(), inst.arenaMillis + early.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "implicit, stops once the start is won: %s; won %d (%.0f%% of"
+                                + " the full attractor's)", early.value().stoppedEarly() ? "stopped early" : "ran to the end",
+                        early.value().wonVertices(),
+                        100.0 * early.value().wonVertices() / Math.max(1, full.value().wonVertices()))));
+        rows.add(new BenchRow(inst.side, inst.kind, "implicit-bfs", bfs.value().wonVertices(),
+                bfs.value().edgesScanned(), 0, bfs.millis(), bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
+                "plain BFS over the implicit product, from the start"));
+        return rows;
+    }
+
+    /**
+     * The direct optimisation over energy levels (MinimumCredit, the margin package's fixpoint): the
+     * least starting level per vertex of arena × goal, then compared with the starting charge.
+     */
+    private BenchRow fixpoint(Instance inst, HeapSampler sampler, int reps) {
+        Mission m = inst.mission;
+        long base = HeapSampler.settledUsed();
+        Timed<MinimumCredit> t = time(sampler, base, reps, () -> MinimumCredit.solve(inst.arena, inst.goal, m.reserveUnits()));
+        MinimumCredit mc = t.value();
+        int need = mc.needAtStart();
+        boolean won = need != MinimumCredit.INFINITE && need <= m.startUnits() && m.startUnits() >= m.reserveUnits();
+        return new BenchRow(inst.side, inst.kind, "fixpoint", mc.productSize(), 0, 0, t.millis(), t.cpuMillis(), t.peak(),
+                Verdict.of(won).word(), inst.arenaMillis + t.millis(), -1, -1,
+                "least starting level over arena x goal (reachable pairs): "
+                        + (need == MinimumCredit.INFINITE ? "none" : need + " units") + " against " + m.startUnits());
+    }
+
+    /** Discount factor of the discounted instance. */
+    static final int DISCOUNT = 2;
+
+    /**
+     * The discounted threshold question DS ≥ v without the dock goal (the question both routes
+     * answer; see DiscountedThresholdGame) on the consumption instance's arena, v the exact optimal value
+     * found by an untimed value-iteration solve first: the hardest threshold for both routes (value
+     * iteration must pin the value, the comparator must track every play that stays near it).
+     */
+    private List<BenchRow> discounted(Instance inst, HeapSampler sampler, int reps) {
+        List<BenchRow> rows = new ArrayList<>();
+        Rational v;
+        try {
+            v = new DiscountedValueIteration(inst.arena, DISCOUNT).solve().exactValue();
+        } catch (ArithmeticException e) {
+            rows.add(BenchRow.skipped(inst.side, inst.kind, "attractor", 0, 0,
+                    "skipped: the optimal value needs more than 64-bit rationals"));
+            rows.add(BenchRow.skipped(inst.side, inst.kind, "vi", 0, 0,
+                    "skipped: the optimal value needs more than 64-bit rationals"));
+            return rows;
+        }
+        int mu = inst.arena.maxAbsWeight();
+        long base = HeapSampler.settledUsed();
+        DiscountedThresholdGame[] built = new DiscountedThresholdGame[1];
+        Timed<Boolean> comp = time(sampler, base, reps, () -> {
+            built[0] = DiscountedThresholdGame.build(inst.arena, new DiscountedComparator(DISCOUNT, mu, v, Relation.AT_LEAST));
+            return built[0].robotWins();
+        });
+        DiscountedThresholdGame game = built[0];
+        built[0] = null;
+        rows.add(new BenchRow(inst.side, inst.kind, "attractor", game.vertexCount(), game.edgeCount(), 0, comp.millis(),
+                comp.cpuMillis(), comp.peak(), Verdict.of(comp.value()).word(), inst.arenaMillis + comp.millis(), -1, -1,
+                "comparator product (" + game.comparatorStates() + " comparator states) built and solved by the attractor;"
+                        + " DS >= " + v + ", d = " + DISCOUNT + ", no dock goal"));
+        Timed<DiscountedValueIteration.Result> vi = time(sampler, base, reps,
+                () -> new DiscountedValueIteration(inst.arena, DISCOUNT).decide(v, Relation.AT_LEAST));
+        rows.add(new BenchRow(inst.side, inst.kind, "vi", inst.arena.vertexCount(), inst.arena.edgeCount(), 0,
+                vi.millis(), vi.cpuMillis(), vi.peak(), Verdict.of(vi.value().holds()).word(),
+                inst.arenaMillis + vi.millis(), -1, -1,
+                "value iteration on the arena, then compare: " + vi.value().sweeps() + " sweeps"));
+        return rows;
+    }
+
+    /** The fast path: arena × goal, stopping once the start is decided. */
+    private BenchRow fast(Instance inst, HeapSampler sampler, int reps) {
+        if (!MinChargeSolver.applicable(inst.arena, inst.goal)) {
+            return BenchRow.skipped(inst.side, inst.kind, "fast", 0, 0, "the robot can charge before completion");
+        }
+        long base = HeapSampler.settledUsed();
+        Timed<MinChargeSolver.Result> t = time(sampler, base, reps, () -> new MinChargeSolver(inst.arena, inst.goal).decide());
+        MinChargeSolver.Result res = t.value();
+        long v = (long) inst.arena.vertexCount() * inst.goal.stateCount();
+        long e = (long) inst.arena.edgeCount() * inst.goal.stateCount();
+        String note = String.format(java.util.Locale.ROOT,
+                "arena x goal; need %s of %d available; explored %d of %d robot vertices (%.0f%%)",
+                res.describeNeed(), res.availableUnits(), res.explored(),
+                (long) inst.arena.robotCount() * inst.goal.stateCount(),
+                100.0 * res.explored() / Math.max(1, (long) inst.arena.robotCount() * inst.goal.stateCount()));
+        return new BenchRow(inst.side, inst.kind, "fast", v, e, 0, t.millis(), t.cpuMillis(), t.peak(),
+                Verdict.of(res.guaranteed()).word(), inst.arenaMillis + t.millis(), -1, -1, note);
+    }
+
+    static String megabytes(long bytes) {
+        return (bytes >> 20) + " MB";
+    }
+
+    /** Verdicts per instance that disagree: "size instance: method=verdict, ...". */
+    static List<String> mismatches(List<BenchRow> rows) {
+        Map<String, Map<String, String>> byInstance = new LinkedHashMap<>();
+        for (BenchRow r : rows) {
+            if (r.verdict() != null) {
+                byInstance.computeIfAbsent(r.size() + "x" + r.size() + " " + r.instance(), k -> new LinkedHashMap<>())
+                        .put(r.method(), r.verdict());
+            }
+        }
+        List<String> out = new ArrayList<>();
+        byInstance.forEach((k, v) -> {
+            if (new TreeSet<>(v.values()).size() > 1) {
+                out.add(k + ": " + v);
+            }
+        });
+        return out;
+    }
+}

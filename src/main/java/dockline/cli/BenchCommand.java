@@ -1,0 +1,85 @@
+package dockline.cli;
+
+import dockline.bench.BenchReport;
+import dockline.bench.Benchmark;
+import dockline.bench.BuildingGenerator;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code dockline bench}: measures every solving method on generated buildings of growing size in
+ * one run and prints the table, the ratios and the targets; {@code --json} prints the same as JSON.
+ * Exit 0 when every method agrees on every instance, 4 when any two disagree (an internal error).
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = {"Measures the solving methods on generated buildings (32x32 up to 512x512 cells) in one run:",
+                "product vertices and edges, build and solve time, edges per second, peak heap, and the ratios",
+                "between methods. Every method must give the same verdict on an instance."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:all methods agree on every instance", "2:bad usage",
+                "4:two methods disagree on an instance (internal error)"})
+public final class BenchCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--quick", description = "a short run (under a minute on two cores): 32x32 to 128x128,"
+            + " and the fast path on 512x512")
+    boolean quick;
+
+    @Option(names = "--json", description = "print the report as JSON on standard output (progress goes to standard error)")
+    boolean json;
+
+    @Option(names = "--seed", paramLabel = "N", description = "seed of the generated buildings and missions (default: ${DEFAULT-VALUE})")
+    long seed = 7;
+
+    @Option(names = "--sizes", paramLabel = "SIDE", split = ",",
+            description = "floor sides to run instead of the default series, e.g. 32,64 (each at least 32)")
+    List<Integer> sizes;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
+        if (sizes != null) {
+            for (int s : sizes) {
+                if (s < BuildingGenerator.MIN_SIDE || s > BuildingGenerator.MAX_SIDE) {
+                    err.println("dockline: --sizes: " + s + " is outside " + BuildingGenerator.MIN_SIDE + ".."
+                            + BuildingGenerator.MAX_SIDE);
+                    err.println("Try 'dockline bench --help'.");
+                    err.flush();
+                    return ExitCodes.BAD_INPUT;
+                }
+            }
+        }
+        Benchmark.Config config = new Benchmark.Config(sizes != null ? sizes : base.sizes(),
+                sizes != null ? List.of() : base.fastOnlySizes(), seed, base.budget(),
+                base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices(),
+                base.maxImplicitVertices());
+        PrintWriter progress = json ? err : out;
+        progress.println(quick ? "dockline bench --quick" : "dockline bench (full run, up to ten minutes)");
+        progress.flush();
+        BenchReport report = new Benchmark(config, line -> {
+            progress.println(line);
+            progress.flush();
+        }).run();
+        if (json) {
+            out.println(report.toJson());
+        } else {
+            out.println();
+            out.print(report.toText());
+        }
+        out.flush();
+        if (!report.mismatches().isEmpty()) {
+            err.println("dockline: internal error: methods disagree on " + report.mismatches());
+            err.flush();
+            return ExitCodes.INTERNAL;
+        }
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,378 @@
+package dockline.solve;
+
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
+import dockline.monitor.Monitor;
+import dockline.monitor.ReserveMonitor;
+import java.util.Arrays;
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
+
+/**
+ * The product arena × goal automaton × {@link ReserveMonitor} with nothing stored but what the
+ * solver writes: vertices are numbered by arithmetic, {@code p = ((a · 2^gb) + g) · 2^lb + s} for
+ * arena vertex a, goal state g &lt; G ≤ 2^gb and monitor state s &lt; L ≤ 2^lb (level minus floor,
+ * L = capacity − floor + 1; padding to powers of two turns the decoding into shifts), and both
+ * the successors and the predecessors of a vertex are generated on demand from the arena's CSR
+ * arrays, the inverted goal step ({@link GoalPredecessors}) and the inverted battery update. No
+ * product CSR, no decoded triples, no index, no per-state objects.
+ *
+ * <p>The game is the one {@link ProductGame} builds (same start, same sinks, same completion on
+ * arrival); a robot triple that completes the mission on a dock plays the part of ProductGame's WIN
+ * sink, an outcome below the floor or into an avoided zone that of LOSE (it is simply never won).
+ * Unlike ProductGame, the numbering covers every triple, reachable from the start or not.
+ *
+ * <p>{@link #solve(boolean)} runs the linear-time backward attractor (a worklist and counters, as in
+ * {@link AttractorSolver}) over that implicit graph: one byte per vertex counts the successors known
+ * to be won, a stack holds the won vertices not yet expanded (the least fixpoint does not depend on
+ * the worklist order, and last-in first-out keeps the search local). O(|V| + |E|) of the full
+ * product; memory one byte per slot of the padded numbering plus the stack; it can stop as soon as the start
+ * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
+ * the start (the memory-bound floor for this layout).
+ *
+ * <p>The inversion of the battery update {@code s' = min(L − 1, s + w)}, below the floor rejected:
+ * for {@code s' < L − 1} the only predecessor state is {@code s = s' − w} (when in range); for
+ * {@code s' = L − 1} (full) they are all {@code s ≥ L − 1 − w} when {@code w ≥ 0}, and none when
+ * {@code w < 0}. Sources: the attractor as in {@link AttractorSolver}; product construction as in
+ * DESIGN.md 2.4.
+ */
+public final class ImplicitReserveGame {
+
+    private final Arena arena;
+    private final GoalAutomaton goal;
+    private final ReserveMonitor monitor;
+    private final int gc;
+    private final int levels;
+    private final int gBits;
+    private final int lBits;
+    private final long slotCount;
+    private final long vertexCount;
+    private final GoalPredecessors inverse;
+    // the arena's reverse CSR with each slot's source, weight and the source's out-degree inline, so
+    // the backward search reads one slot sequentially instead of chasing in-edge -> edge -> source
+    private final int[] revSource;
+    private final int[] revWeight;
+    private final byte[] revNeed;
+
+    /** What a solve found. */
+    public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
+                         long vertexCount) {
+    }
+
+    /**
+     * @throws ProductTooLargeException if the product has more than {@code Integer.MAX_VALUE - 16} vertices
+     */
+    public ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor) {
+        if (arena == null || goal == null || monitor == null) {
+            throw new IllegalArgumentException("arena, goal and monitor are required");
+        }
+        this.arena = arena;
+        this.goal = goal;
+        this.monitor = monitor;
+        this.gc = goal.stateCount();
+        this.levels = (int) monitor.stateBound();
+        this.gBits = bits(gc);
+        this.lBits = bits(levels);
+        this.vertexCount = (long) arena.vertexCount() * gc * levels;
+        this.slotCount = (long) arena.vertexCount() << (gBits + lBits);
+        if (slotCount > Integer.MAX_VALUE - 16) {
+            throw new ProductTooLargeException(SizeEstimate.of(vertexCount, vertexCount, 0), Integer.MAX_VALUE, false);
+        }
+        this.inverse = new GoalPredecessors(arena, goal);
+        int m = arena.edgeCount();
+        this.revSource = new int[m];
+        this.revWeight = new int[m];
+        this.revNeed = new byte[m];
+        for (int i = 0; i < m; i++) {
+            int e = arena.inEdge(i);
+            int d = arena.source(e);
+            int deg = arena.outEnd(d) - arena.outBegin(d);
+            if (deg > 15) {
+                throw new IllegalArgumentException("arena vertex " + d + " has " + deg + " out-edges; at most 15 fit");
+            }
+            revSource[i] = d;
+            revWeight[i] = arena.weight(e);
+            revNeed[i] = (byte) deg;
+        }
+    }
+
+    private static int bits(int n) {
+        return n <= 1 ? 0 : 32 - Integer.numberOfLeadingZeros(n - 1);
+    }
+
+    /** The number of a triple. */
+    int id(int a, int g, int s) {
+        return (((a << gBits) | g) << lBits) | s;
+    }
+
+    /** Slots of the numbering (every triple, padded): the length of the per-vertex arrays. */
+    public long slotCount() {
+        return slotCount;
+    }
+
+    /** Vertices of the full product (every triple). */
+    public long vertexCount() {
+        return vertexCount;
+    }
+
+    /** The start vertex, or -1 when the start is lost (below the floor, avoided zone), -2 when already complete. */
+    public int start() {
+        int a0 = arena.startVertex();
+        int c0 = arena.cell(a0);
+        int g0 = goal.initial(arena.cellZones(c0));
+        int m0 = monitor.initialState();
+        if (g0 == GoalAutomaton.REJECT || m0 == Monitor.REJECT) {
+            return -1;
+        }
+        if (goal.accepting(g0, arena.isDock(c0))) {
+            return -2;
+        }
+        return id(a0, g0, m0);
+    }
+
+    /** The attractor of the completion vertices, stopping once the start is won when {@code stopAtStart}. */
+    public Result solve(boolean stopAtStart) {
+        return solve(stopAtStart, () -> false);
+    }
+
+    public Result solve(boolean stopAtStart, BooleanSupplier cancelled) {
+        return run(stopAtStart, cancelled, null);
+    }
+
+    /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
+    boolean[] wonFlags() {
+        boolean[][] out = new boolean[1][];
+        run(false, () -> false, out);
+        return out[0];
+    }
+
+    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut) {
+        int start = start();
+        if (start < 0 && flagsOut == null) {
+            return new Result(start == -2, 0, 0, false, vertexCount);
+        }
+        final int n = (int) slotCount;
+        final int rc = arena.robotCount();
+        final int top = levels - 1;
+        final int lb = lBits;
+        final int gb = gBits;
+        final int sMask = (1 << lb) - 1;
+        final int gMask = (1 << gb) - 1;
+        // successors known to be won, 4 bits per vertex (out-degrees are at most 15): won when it reaches
+        // the need (1 for a robot triple, the out-degree for a disturbance triple). Half a byte per
+        // vertex keeps the whole table in the last-level cache for products of tens of millions.
+        final byte[] count = new byte[(n >>> 1) + 1];
+        // the worklist is a stack: any order reaches the same least fixpoint, and last-in first-out
+        // keeps the search near the vertices it just won, so the counters it touches are mostly in cache
+        int[] stack = new int[1 << 12];
+        int sp = 0;
+        long wonCount = 0;
+        final boolean[] flags = flagsOut != null ? new boolean[n] : null;
+        // the targets: robot triples completing the mission (any level)
+        for (int slot = 0; slot < arena.freeCellCount(); slot++) {
+            int c = arena.freeCell(slot);
+            boolean dock = arena.isDock(c);
+            for (int g = 0; g < gc; g++) {
+                if (goal.accepting(g, dock)) {
+                    for (int k = 0; k <= arena.budget(); k++) {
+                        int base = id(arena.robotVertex(c, k), g, 0);
+                        for (int s = 0; s < levels; s++) {
+                            int t = base + s;
+                            count[t >>> 1] |= (byte) (1 << ((t & 1) << 2));
+                            if (sp == stack.length) {
+                                stack = Arrays.copyOf(stack, sp * 2);
+                            }
+                            stack[sp++] = base + s;
+                            wonCount++;
+                            if (flags != null) {
+                                flags[base + s] = true;
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        long edges = 0;
+        int steps = 0;
+        boolean stopped = false;
+        while (sp > 0) {
+            int p = stack[--sp];
+            int s2 = p & sMask;
+            int g2 = (p >>> lb) & gMask;
+            int x = p >>> (lb + gb);
+            int from = arena.inBegin(x);
+            int to = arena.inEnd(x);
+            edges += to - from;
+            if (x >= rc) {
+                // a disturbance triple: its only predecessor is its owner, same goal and level; one won action suffices
+                int owner = revSource[from];
+                int q = (((owner << gb) | g2) << lb) | s2;
+                int qs = (q & 1) << 2;
+                if (((count[q >>> 1] >>> qs) & 15) == 0) {
+                    count[q >>> 1] |= (byte) (1 << qs);
+                    if (sp == stack.length) {
+                        stack = Arrays.copyOf(stack, sp * 2);
+                    }
+                    stack[sp++] = q;
+                    wonCount++;
+                    if (flags != null) {
+                        flags[q] = true;
+                    }
+                    if (q == start && stopAtStart) {
+                        stopped = true;
+                        break;
+                    }
+                }
+                continue;
+            }
+            // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
+            int cell = arena.cell(x);
+            int gFrom = inverse.begin(cell, g2);
+            int gTo = inverse.end(cell, g2);
+            for (int i = from; i < to; i++) {
+                int d = revSource[i];
+                int w = revWeight[i];
+                int need = revNeed[i];
+                int sLo;
+                int sHi;
+                if (s2 < top) {
+                    sLo = s2 - w;
+                    sHi = sLo;
+                } else if (w >= 0) {
+                    sLo = Math.max(0, top - w);
+                    sHi = top;
+                } else {
+                    continue;
+                }
+                if (sLo < 0 || sHi > top) {
+                    continue;
+                }
+                int dBase = d << gb;
+                for (int j = gFrom; j < gTo; j++) {
+                    int base = (dBase | inverse.state(j)) << lb;
+                    for (int s = sLo; s <= sHi; s++) {
+                        int q = base + s;
+                        int qs = (q & 1) << 2;
+                        int cell8 = count[q >>> 1];
+                        int c = (cell8 >>> qs) & 15;
+                        if (c < need) {
+                            count[q >>> 1] = (byte) (cell8 + (1 << qs));
+                            if (c + 1 == need) {
+                                if (sp == stack.length) {
+                                    stack = Arrays.copyOf(stack, sp * 2);
+                                }
+                                stack[sp++] = q;
+                                wonCount++;
+                                if (flags != null) {
+                                    flags[q] = true;
+                                }
+                            }
+                        }
+                    }
+                }
+            }
+            if (++steps == AttractorSolver.POLL_INTERVAL) {
+                steps = 0;
+                if (cancelled.getAsBoolean()) {
+                    throw new CancellationException("solving was cancelled");
+                }
+            }
+        }
+        if (flagsOut != null) {
+            flagsOut[0] = flags;
+        }
+        boolean won = start == -2 || start >= 0 && (stopped || ((count[start >>> 1] >>> ((start & 1) << 2)) & 15) > 0);
+        return new Result(won, wonCount, edges, stopped, vertexCount);
+    }
+
+    /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
+    public Result bfs() {
+        int start = start();
+        if (start < 0) {
+            return new Result(start == -2, 0, 0, false, vertexCount);
+        }
+        final int n = (int) slotCount;
+        final int rc = arena.robotCount();
+        final int lb = lBits;
+        final int gb = gBits;
+        final int sMask = (1 << lb) - 1;
+        final int gMask = (1 << gb) - 1;
+        final long[] seen = new long[(n >>> 6) + 1];
+        IntQueue queue = new IntQueue(1 << 16);
+        seen[start >>> 6] |= 1L << start;
+        queue.add(start);
+        long edges = 0;
+        int head = 0;
+        while (head < queue.size()) {
+            int p = queue.get(head++);
+            int s = p & sMask;
+            int g = (p >>> lb) & gMask;
+            int x = p >>> (lb + gb);
+            int from = arena.outBegin(x);
+            int to = arena.outEnd(x);
+            edges += to - from;
+            if (x < rc) {
+                for (int e = from; e < to; e++) {
+                    int q = (((arena.target(e) << gb) | g) << lb) | s;
+                    if ((seen[q >>> 6] & (1L << q)) == 0) {
+                        seen[q >>> 6] |= 1L << q;
+                        queue.add(q);
+                    }
+                }
+                continue;
+            }
+            for (int e = from; e < to; e++) {
+                int s2 = monitor.step(s, arena.weight(e));
+                if (s2 == Monitor.REJECT) {
+                    continue;
+                }
+                int a2 = arena.target(e);
+                int c2 = arena.cell(a2);
+                int g2 = goal.step(g, arena.cellZones(c2));
+                if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
+                    continue; // a sink (LOSE or WIN): nothing to explore
+                }
+                int q = (((a2 << gb) | g2) << lb) | s2;
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    queue.add(q);
+                }
+            }
+        }
+        return new Result(false, queue.size(), edges, false, vertexCount);
+    }
+
+    /**
+     * A growable int queue in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
+     * is its size rather than 2.5 times it).
+     */
+    private static final class IntQueue {
+        private static final int SHIFT = 20;
+        private static final int MASK = (1 << SHIFT) - 1;
+        private int[][] blocks = new int[16][];
+        private int size;
+
+        IntQueue(int ignored) {
+        }
+
+        void add(int v) {
+            int b = size >>> SHIFT;
+            if (b == blocks.length) {
+                blocks = Arrays.copyOf(blocks, b * 2);
+            }
+            if (blocks[b] == null) {
+                blocks[b] = new int[1 << SHIFT];
+            }
+            blocks[b][size & MASK] = v;
+            size++;
+        }
+
+        int get(int i) {
+            return blocks[i >>> SHIFT][i & MASK];
+        }
+
+        int size() {
+            return size;
+        }
+    }
+}
