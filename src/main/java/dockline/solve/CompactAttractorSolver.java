@@ -24,9 +24,10 @@ import java.util.function.BooleanSupplier;
  *       product numbers vertices in discovery order.</li>
  * </ul>
  *
- * <p>O(|V| + |E|) time, 13 bytes per vertex (counter, queue, rank, chosen edge). The winning set and
- * the ranks are those of {@link AttractorSolver}; chosen edges may differ but also strictly decrease
- * the rank. See W. Zielonka (1998), "Infinite games on finitely coloured graphs with applications to
+ * <p>O(|V| + |E| + |V| log R) time for R ranks, 9 bytes per vertex (counter, queue, rank; the
+ * chosen edges reuse the queue). The winning set, the ranks and the chosen edges are those of
+ * {@link AttractorSolver} (property-tested), so policies, worst cases and replays do not depend on
+ * which of the two solved the game. See W. Zielonka (1998), "Infinite games on finitely coloured graphs with applications to
  * automata on infinite trees", Theoretical Computer Science 200; E. Grädel, W. Thomas, T. Wilke
  * (eds., 2002), "Automata, Logics, and Infinite Games", LNCS 2500, chapter 2.
  */
@@ -202,32 +203,48 @@ public final class CompactAttractorSolver implements GameSolver {
 
     private IntList layerStarts;
 
-    /** Ranks from the layers of the queue, then the chosen edges in vertex order. */
+    /**
+     * The chosen edges, then the ranks. The robot's chosen edge is the one {@link AttractorSolver}
+     * takes: the queue order of both solvers is the same (same seeding, same in-edge order, same
+     * joining rule), and AttractorSolver gives a robot vertex the first out-edge into its successor
+     * that left the queue first, i.e. the successor of least queue position. So the positions are
+     * written first (into the rank array), the chosen edges found in vertex order from them (local
+     * reads, because the product numbers vertices in discovery order), and the positions then turned
+     * into ranks by a binary search over the layer boundaries; no array beyond rank and queue.
+     */
     private Solution finish(int[] queue, int tail) {
         final int n = g.n;
+        final int unwon = Integer.MAX_VALUE;
         int[] rank = new int[n];
-        Arrays.fill(rank, Solution.LOSING);
+        Arrays.fill(rank, unwon);
         layerStarts.add(tail);
-        // layer r (rank r) holds queue[layerStarts[r] .. layerStarts[r+1])
-        for (int r = 0; r + 1 < layerStarts.size(); r++) {
-            for (int i = layerStarts.get(r), end = layerStarts.get(r + 1); i < end; i++) {
-                rank[queue[i]] = r;
-            }
+        for (int i = 0; i < tail; i++) {
+            rank[queue[i]] = i; // for now: the queue position
         }
         int[] strategy = queue; // reuse the queue's memory: it is no longer needed
         Arrays.fill(strategy, Solution.NONE);
         final int[] outStart = g.outStart;
         final int[] edgeTarget = g.edgeTarget;
+        final int firstRanked = layerStarts.get(1); // positions below are the targets (rank 0)
         for (int u = 0; u < n; u++) {
-            int r = rank[u];
-            if (r > 0 && g.owner[u] == GameGraph.ROBOT) {
+            int pu = rank[u];
+            if (pu != unwon && pu >= firstRanked && g.owner[u] == GameGraph.ROBOT) {
+                int best = unwon;
+                int bestEdge = Solution.NONE;
                 for (int e = outStart[u]; e < outStart[u + 1]; e++) {
-                    if (rank[edgeTarget[e]] == r - 1) {
-                        strategy[u] = e;
-                        break;
+                    int pt = rank[edgeTarget[e]];
+                    if (pt < best) {
+                        best = pt;
+                        bestEdge = e;
                     }
                 }
+                strategy[u] = bestEdge;
             }
+        }
+        // layer r (rank r) holds positions layerStarts[r] .. layerStarts[r+1]-1
+        for (int v = 0; v < n; v++) {
+            int p = rank[v];
+            rank[v] = p == unwon ? Solution.LOSING : layerStarts.layerOf(p);
         }
         return new Solution(rank, strategy);
     }
@@ -250,6 +267,21 @@ public final class CompactAttractorSolver implements GameSolver {
 
         int last() {
             return a[size - 1];
+        }
+
+        /** The r with a[r] &le; p &lt; a[r + 1] (the list is non-decreasing; the last such r on ties). */
+        int layerOf(int p) {
+            int lo = 0;
+            int hi = size - 2;
+            while (lo < hi) {
+                int mid = (lo + hi + 1) >>> 1;
+                if (a[mid] <= p) {
+                    lo = mid;
+                } else {
+                    hi = mid - 1;
+                }
+            }
+            return lo;
         }
 
         int size() {

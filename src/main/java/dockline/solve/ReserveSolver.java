@@ -98,7 +98,7 @@ public final class ReserveSolver {
         GoalAutomaton goal = GoalAutomaton.of(mission);
         ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
                 mission.startUnits());
-        return wins(arena, goal, monitor, options, AttractorSolver::new);
+        return wins(arena, goal, monitor, options, CompactAttractorSolver::new);
     }
 
     private static boolean wins(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, ProductOptions options,
