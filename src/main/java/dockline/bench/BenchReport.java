@@ -176,6 +176,10 @@ public final class BenchReport {
         targets.add(target("fast path: 512x512, K=2, 1,000 levels decided in <= 3 s wall (arena compile + solve)",
                 fast512.map(r -> fmt(r.wallMillis()) + " ms").orElse("512x512 not run"),
                 fast512.isPresent() && fast512.get().wallMillis() <= 3000));
+        Optional<BenchRow> check512 = row(512, Benchmark.CONSUMPTION, "check");
+        targets.add(target("  the same for check's whole fast route from the mission (need, highest floor, policy, certificate)",
+                check512.map(r -> fmt(r.wallMillis()) + " ms").orElse("512x512 not run"),
+                check512.isPresent() && check512.get().wallMillis() <= 3000));
         double worstEst = est.values().stream().mapToDouble(v -> Math.abs(v - 1)).max().orElse(Double.NaN);
         targets.add(target("pre-build size estimate within 20% of the real product (main route's estimate)",
                 est.toString(), !est.isEmpty() && worstEst <= 0.2));

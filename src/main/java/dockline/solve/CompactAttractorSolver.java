@@ -17,15 +17,16 @@ import java.util.function.BooleanSupplier;
  *       are one load, and a byte array of n entries is a quarter of an int array, so for products of
  *       tens of millions of vertices it largely stays in the last-level cache. (Out-degrees above 127
  *       fall back to an {@code int[]} counter; product games have at most a dozen.)</li>
- *   <li>The main loop writes nothing but the counter and the queue. Ranks follow from the queue,
- *       which holds the won vertices in non-decreasing rank (a breadth-first layering), so they are
- *       written in one pass afterwards; the robot's chosen edge is found in a second pass in vertex
- *       order (the first out-edge into a vertex of rank one less), whose reads are local because the
- *       product numbers vertices in discovery order.</li>
+ *   <li>The main loop writes nothing but the counter, the queue and, once per won vertex, the
+ *       successor that won it. Ranks follow from the queue, which holds the won vertices in
+ *       non-decreasing rank (a breadth-first layering), so they are written in one pass afterwards;
+ *       the robot's chosen edge (the first out-edge into the successor that won it, as in
+ *       {@link AttractorSolver}) is found in a second pass in vertex order, whose reads are local
+ *       because the product numbers vertices in discovery order.</li>
  * </ul>
  *
- * <p>O(|V| + |E| + |V| log R) time for R ranks, 9 bytes per vertex (counter, queue, rank; the
- * chosen edges reuse the queue). The winning set, the ranks and the chosen edges are those of
+ * <p>O(|V| + |E|) time, 13 bytes per vertex (counter, queue, the successor that won each vertex,
+ * rank; the chosen edges reuse the queue), against 16 for {@link AttractorSolver}. The winning set, the ranks and the chosen edges are those of
  * {@link AttractorSolver} (property-tested), so policies, worst cases and replays do not depend on
  * which of the two solved the game. See W. Zielonka (1998), "Infinite games on finitely coloured graphs with applications to
  * automata on infinite trees", Theoretical Computer Science 200; E. Grädel, W. Thomas, T. Wilke
@@ -79,13 +80,14 @@ public final class CompactAttractorSolver implements GameSolver {
             maxDeg = Math.max(maxDeg, outStart[v + 1] - outStart[v]);
         }
         int[] queue = new int[n];
-        int tail = maxDeg <= Byte.MAX_VALUE ? searchBytes(queue) : searchInts(queue);
+        int[] via = new int[n];
+        int tail = maxDeg <= Byte.MAX_VALUE ? searchBytes(queue, via) : searchInts(queue, via);
         wonCount = tail;
-        return finish(queue, tail);
+        return finish(queue, tail, via);
     }
 
     /** Fills the queue with the won vertices in the order they are won, records the layers; returns the count. */
-    private int searchBytes(int[] queue) {
+    private int searchBytes(int[] queue, int[] via) {
         final int n = g.n;
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
@@ -126,6 +128,7 @@ public final class CompactAttractorSolver implements GameSolver {
                     counter[u] = (byte) --c;
                     if (c == 0) {
                         queue[tail++] = u;
+                        via[u] = v; // for a robot vertex: the successor that won it (read by finish)
                         if (u == stopAt) {
                             stopped = true;
                         }
@@ -143,7 +146,7 @@ public final class CompactAttractorSolver implements GameSolver {
         return tail;
     }
 
-    private int searchInts(int[] queue) {
+    private int searchInts(int[] queue, int[] via) {
         final int n = g.n;
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
@@ -184,6 +187,7 @@ public final class CompactAttractorSolver implements GameSolver {
                     counter[u] = --c;
                     if (c == 0) {
                         queue[tail++] = u;
+                        via[u] = v;
                         if (u == stopAt) {
                             stopped = true;
                         }
@@ -204,47 +208,38 @@ public final class CompactAttractorSolver implements GameSolver {
     private IntList layerStarts;
 
     /**
-     * The chosen edges, then the ranks. The robot's chosen edge is the one {@link AttractorSolver}
-     * takes: the queue order of both solvers is the same (same seeding, same in-edge order, same
-     * joining rule), and AttractorSolver gives a robot vertex the first out-edge into its successor
-     * that left the queue first, i.e. the successor of least queue position. So the positions are
-     * written first (into the rank array), the chosen edges found in vertex order from them (local
-     * reads, because the product numbers vertices in discovery order), and the positions then turned
-     * into ranks by a binary search over the layer boundaries; no array beyond rank and queue.
+     * Ranks from the layers of the queue, then the chosen edges in vertex order. A robot vertex's
+     * chosen edge is the one {@link AttractorSolver} takes: the first out-edge into the successor that
+     * won it ({@code via}, the one store the search adds per won vertex), because both solvers take
+     * the vertices from their queues in the same order (same seeding, same in-edge order, same
+     * joining rule). The scan in vertex order reads out-edges locally, since the product numbers
+     * vertices in discovery order.
      */
-    private Solution finish(int[] queue, int tail) {
+    private Solution finish(int[] queue, int tail, int[] via) {
         final int n = g.n;
-        final int unwon = Integer.MAX_VALUE;
         int[] rank = new int[n];
-        Arrays.fill(rank, unwon);
+        Arrays.fill(rank, Solution.LOSING);
         layerStarts.add(tail);
-        for (int i = 0; i < tail; i++) {
-            rank[queue[i]] = i; // for now: the queue position
+        // layer r (rank r) holds queue[layerStarts[r] .. layerStarts[r+1])
+        for (int r = 0; r + 1 < layerStarts.size(); r++) {
+            for (int i = layerStarts.get(r), end = layerStarts.get(r + 1); i < end; i++) {
+                rank[queue[i]] = r;
+            }
         }
         int[] strategy = queue; // reuse the queue's memory: it is no longer needed
         Arrays.fill(strategy, Solution.NONE);
         final int[] outStart = g.outStart;
         final int[] edgeTarget = g.edgeTarget;
-        final int firstRanked = layerStarts.get(1); // positions below are the targets (rank 0)
         for (int u = 0; u < n; u++) {
-            int pu = rank[u];
-            if (pu != unwon && pu >= firstRanked && g.owner[u] == GameGraph.ROBOT) {
-                int best = unwon;
-                int bestEdge = Solution.NONE;
+            if (rank[u] > 0 && g.owner[u] == GameGraph.ROBOT) {
+                int v = via[u];
                 for (int e = outStart[u]; e < outStart[u + 1]; e++) {
-                    int pt = rank[edgeTarget[e]];
-                    if (pt < best) {
-                        best = pt;
-                        bestEdge = e;
+                    if (edgeTarget[e] == v) {
+                        strategy[u] = e;
+                        break;
                     }
                 }
-                strategy[u] = bestEdge;
             }
-        }
-        // layer r (rank r) holds positions layerStarts[r] .. layerStarts[r+1]-1
-        for (int v = 0; v < n; v++) {
-            int p = rank[v];
-            rank[v] = p == unwon ? Solution.LOSING : layerStarts.layerOf(p);
         }
         return new Solution(rank, strategy);
     }
@@ -267,21 +262,6 @@ public final class CompactAttractorSolver implements GameSolver {
 
         int last() {
             return a[size - 1];
-        }
-
-        /** The r with a[r] &le; p &lt; a[r + 1] (the list is non-decreasing; the last such r on ties). */
-        int layerOf(int p) {
-            int lo = 0;
-            int hi = size - 2;
-            while (lo < hi) {
-                int mid = (lo + hi + 1) >>> 1;
-                if (a[mid] <= p) {
-                    lo = mid;
-                } else {
-                    hi = mid - 1;
-                }
-            }
-            return lo;
         }
 
         int size() {
