@@ -318,14 +318,14 @@ public final class Benchmark {
         rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
                 Math.max(buildPeak, at.peak()), Verdict.of(at.value().winning(game.start())).word(), wall0 + at.millis(),
                 est.vertices(), forecast.vertices(), String.format(java.util.Locale.ROOT,
-                        "main route: ProductGame + AttractorSolver; its estimate %.2fx the real size,"
+                        "ProductGame + AttractorSolver (the reference solver); ProductGame's estimate %.2fx the real size,"
                                 + " ReserveSizeForecast %.2fx (in %.0f ms)",
                         est.vertices() / (double) n, forecast.vertices() / (double) n, forecastMs)));
 
         Timed<Solution> ct = time(sampler, base, reps, () -> new CompactAttractorSolver(game.graph()).solve());
         rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
                 Math.max(buildPeak, ct.peak()), Verdict.of(ct.value().winning(game.start())).word(),
-                wall0 + ct.millis(), -1, -1, "the same product graph, CompactAttractorSolver"));
+                wall0 + ct.millis(), -1, -1, "main route: the same product graph, CompactAttractorSolver (ReserveOptions default)"));
 
         Timed<GraphBaselines.Traversal> bt = time(sampler, base, reps, () -> GraphBaselines.bfs(game.graph(), game.start()));
         rows.add(new BenchRow(inst.side, inst.kind, "bfs", bt.value().vertices(), bt.value().edges(), buildMs,
