@@ -1,6 +1,8 @@
 package dockline.bench;
 
 import dockline.arena.Arena;
+import dockline.certify.Certificate;
+import dockline.certify.CertificateChecker;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.BuildingMap;
@@ -15,6 +17,7 @@ import dockline.solve.CompactAttractorSolver;
 import dockline.solve.DiscountedThresholdGame;
 import dockline.solve.DiscountedValueIteration;
 import dockline.solve.ImplicitReserveGame;
+import dockline.solve.FastPath;
 import dockline.solve.MinChargeSolver;
 import dockline.solve.ProductGame;
 import dockline.solve.ProductOptions;
@@ -143,7 +146,7 @@ public final class Benchmark {
                             inst.goal.stateCount(), inst.arenaMillis));
                     for (BenchRow r : measure(inst, sampler, config.reps(), full, false)) {
                         rows.add(r);
-                        progress.accept(BenchReport.formatRow(r));
+                        progress.accept(compact(r));
                     }
                 }
             }
@@ -185,6 +188,7 @@ public final class Benchmark {
             }
             case CONSUMPTION -> {
                 rows.add(fast(inst, sampler, reps));
+                rows.add(fastCheck(inst, sampler, reps));
                 if (products) {
                     rows.addAll(csrMethods(inst, sampler, reps, warmup));
                     rows.addAll(implicitMethods(inst, sampler, reps));
@@ -314,14 +318,14 @@ public final class Benchmark {
         rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
                 Math.max(buildPeak, at.peak()), Verdict.of(at.value().winning(game.start())).word(), wall0 + at.millis(),
                 est.vertices(), forecast.vertices(), String.format(java.util.Locale.ROOT,
-                        "main route: ProductGame + AttractorSolver; its estimate %.2fx the real size,"
+                        "ProductGame + AttractorSolver (the reference solver); ProductGame's estimate %.2fx the real size,"
                                 + " ReserveSizeForecast %.2fx (in %.0f ms)",
                         est.vertices() / (double) n, forecast.vertices() / (double) n, forecastMs)));
 
         Timed<Solution> ct = time(sampler, base, reps, () -> new CompactAttractorSolver(game.graph()).solve());
         rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
                 Math.max(buildPeak, ct.peak()), Verdict.of(ct.value().winning(game.start())).word(),
-                wall0 + ct.millis(), -1, -1, "the same product graph, CompactAttractorSolver"));
+                wall0 + ct.millis(), -1, -1, "main route: the same product graph, CompactAttractorSolver (ReserveOptions default)"));
 
         Timed<GraphBaselines.Traversal> bt = time(sampler, base, reps, () -> GraphBaselines.bfs(game.graph(), game.start()));
         rows.add(new BenchRow(inst.side, inst.kind, "bfs", bt.value().vertices(), bt.value().edges(), buildMs,
@@ -480,8 +484,47 @@ public final class Benchmark {
                 Verdict.of(res.guaranteed()).word(), inst.arenaMillis + t.millis(), -1, -1, note);
     }
 
+    /**
+     * What {@code check} does on the fast path, from the mission: arena compile, the start's need
+     * ({@link FastPath}: verdict and highest floor), the policy rows over the closed loop when it has at
+     * most {@link FastPath#DEFAULT_MAX_POLICY_ROWS} situations, and then the independent certificate.
+     */
+    private BenchRow fastCheck(Instance inst, HeapSampler sampler, int reps) {
+        if (!MinChargeSolver.applicable(inst.arena, inst.goal)) {
+            return BenchRow.skipped(inst.side, inst.kind, "check", 0, 0, "the robot can charge before completion");
+        }
+        long base = HeapSampler.settledUsed();
+        Timed<String[]> t = time(sampler, base, reps, () -> {
+            FastPath.Analysis a = FastPath.analyse(inst.mission, FastPath.DEFAULT_MAX_POLICY_ROWS, false).orElseThrow();
+            String cert;
+            if (a.policy().isPresent()) {
+                Certificate c = CertificateChecker.check(a.arena(), a.policy().get(), a.reserveUnits(), a.startUnits());
+                cert = (c.ok() ? "certified over " : "CERTIFICATE FAILED over ") + c.statesChecked() + " situations";
+            } else if (a.loopTooLarge()) {
+                cert = "not certified: closed loop over " + a.maxPolicyRows() + " situations";
+            } else {
+                cert = "nothing to certify";
+            }
+            return new String[] {a.verdict().word(), cert, a.highestGuaranteedReserveUnits().isPresent()
+                    ? Integer.toString(a.highestGuaranteedReserveUnits().getAsInt()) : "none"};
+        });
+        long v = (long) inst.arena.vertexCount() * inst.goal.stateCount();
+        long e = (long) inst.arena.edgeCount() * inst.goal.stateCount();
+        return new BenchRow(inst.side, inst.kind, "check", v, e, 0, t.millis(), t.cpuMillis(), t.peak(),
+                t.value()[0], t.millis(), -1, -1, "check's fast route from the mission (compile, need, highest floor "
+                + t.value()[2] + ", policy rows, certificate): " + t.value()[1]);
+    }
+
     static String megabytes(long bytes) {
         return (bytes >> 20) + " MB";
+    }
+
+    /** A row as one short progress line (the full row is in the final table). */
+    static String compact(BenchRow r) {
+        return String.format(java.util.Locale.ROOT, "  %s: %s", r.method(), r.ran()
+                ? String.format(java.util.Locale.ROOT, "%.1f ms%s", r.solveMillis(),
+                        r.verdict() == null ? "" : ", " + r.verdict())
+                : "skipped");
     }
 
     /** Verdicts per instance that disagree: "size instance: method=verdict, ...". */

@@ -31,7 +31,7 @@ public final class BenchCommand implements Callable<Integer> {
             + " and the fast path on 512x512")
     boolean quick;
 
-    @Option(names = "--json", description = "print the report as JSON on standard output (progress goes to standard error)")
+    @Option(names = "--json", description = "print the report as JSON on standard output (progress always goes to standard error)")
     boolean json;
 
     @Option(names = "--seed", paramLabel = "N", description = "seed of the generated buildings and missions (default: ${DEFAULT-VALUE})")
@@ -61,7 +61,8 @@ public final class BenchCommand implements Callable<Integer> {
                 sizes != null ? List.of() : base.fastOnlySizes(), seed, base.budget(),
                 base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices(),
                 base.maxImplicitVertices());
-        PrintWriter progress = json ? err : out;
+        // progress in a compact form on standard error, so standard output has the table (or the JSON) once
+        PrintWriter progress = err;
         progress.println(quick ? "dockline bench --quick" : "dockline bench (full run, up to ten minutes)");
         progress.flush();
         BenchReport report = new Benchmark(config, line -> {
@@ -71,7 +72,6 @@ public final class BenchCommand implements Callable<Integer> {
         if (json) {
             out.println(report.toJson());
         } else {
-            out.println();
             out.print(report.toText());
         }
         out.flush();

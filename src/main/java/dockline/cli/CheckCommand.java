@@ -31,7 +31,9 @@ import picocli.CommandLine.Option;
  * policy, the highest floor that can be guaranteed, the size of the game and the time taken.
  * Every "guaranteed" verdict is re-checked by {@link CertificateChecker} before it is reported; a
  * failed certificate is an internal error (exit 4), never a silent "guaranteed". A mission that is
- * not guaranteed gets {@link Suggestions}.
+ * not guaranteed gets {@link Suggestions}. A mission without charging before the end goes by the fast
+ * path instead ({@link CheckRoute}); {@code --method} forces a route, {@code --verdict-only} asks for
+ * the verdict alone.
  * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit, 4 internal error.
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
@@ -59,6 +61,9 @@ public final class CheckCommand implements Callable<Integer> {
     @Mixin
     DiscountedCheck discounted;
 
+    @Mixin
+    CheckRoute route;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -73,8 +78,17 @@ public final class CheckCommand implements Callable<Integer> {
                 err.println("dockline: --safest-policy applies to the reserve objective only");
                 return ExitCodes.BAD_INPUT;
             }
+            if (objective instanceof Objective.Discounted && route.nonDefault()) {
+                err.println("dockline: --method and --verdict-only apply to the reserve objective only");
+                return ExitCodes.BAD_INPUT;
+            }
             if (objective instanceof Objective.Discounted d) {
                 return discounted.run(m.withObjective(d), d, mission.memoryBudgetBytes(), json, out, err);
+            }
+            Integer routed = route.run(m, mission.missionFile, safest.on, mission.memoryBudgetBytes(), json,
+                    out, err);
+            if (routed != null) {
+                return routed; // the fast path or a verdict-only route
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
                     .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(safest.on));
@@ -143,6 +157,7 @@ public final class CheckCommand implements Callable<Integer> {
         }
         out.println("  Start " + amount(a.startUnits(), a) + ", reserve floor " + amount(a.reserveUnits(), a)
                 + ", capacity " + s.formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
+        out.println("  Method: product game (arena x goal x battery levels) and attractor");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
                 + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
         out.println("  Energy: " + s.describe());
@@ -184,6 +199,7 @@ public final class CheckCommand implements Callable<Integer> {
         o.put("mission", m.name());
         o.put("file", m.source() == null ? null : m.source().toString());
         o.put("verdict", a.verdict().word());
+        o.put("method", "product");
         o.put("startUnits", a.startUnits());
         o.put("reserveUnits", a.reserveUnits());
         o.put("capacityUnits", a.capacityUnits());

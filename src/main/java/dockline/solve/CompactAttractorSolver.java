@@ -18,16 +18,18 @@ import java.util.function.BooleanSupplier;
  *       are one load, and a byte array of n entries is a quarter of an int array, so for products of
  *       tens of millions of vertices it largely stays in the last-level cache. (Out-degrees above 127
  *       fall back to an {@code int[]} counter; product games have at most a dozen.)</li>
- *   <li>The main loop writes nothing but the counter and the queue. Ranks follow from the queue,
- *       which holds the won vertices in non-decreasing rank (a breadth-first layering), so they are
- *       written in one pass afterwards; the robot's chosen edge is found in a second pass in vertex
- *       order (the first out-edge into a vertex of rank one less), whose reads are local because the
- *       product numbers vertices in discovery order.</li>
+ *   <li>The main loop writes nothing but the counter, the queue and, once per won vertex, the
+ *       successor that won it. Ranks follow from the queue, which holds the won vertices in
+ *       non-decreasing rank (a breadth-first layering), so they are written in one pass afterwards;
+ *       the robot's chosen edge (the first out-edge into the successor that won it, as in
+ *       {@link AttractorSolver}) is found in a second pass in vertex order, whose reads are local
+ *       because the product numbers vertices in discovery order.</li>
  * </ul>
  *
- * <p>O(|V| + |E|) time, 13 bytes per vertex (counter, queue, rank, chosen edge). The winning set and
- * the ranks are those of {@link AttractorSolver}; chosen edges may differ but also strictly decrease
- * the rank. See W. Zielonka (1998), "Infinite games on finitely coloured graphs with applications to
+ * <p>O(|V| + |E|) time, 13 bytes per vertex (counter, queue, the successor that won each vertex,
+ * rank; the chosen edges reuse the queue), against 16 for {@link AttractorSolver}. The winning set, the ranks and the chosen edges are those of
+ * {@link AttractorSolver} (property-tested), so policies, worst cases and replays do not depend on
+ * which of the two solved the game. See W. Zielonka (1998), "Infinite games on finitely coloured graphs with applications to
  * automata on infinite trees", Theoretical Computer Science 200; E. Grädel, W. Thomas, T. Wilke
  * (eds., 2002), "Automata, Logics, and Infinite Games", LNCS 2500, chapter 2.
  */
@@ -79,13 +81,14 @@ public final class CompactAttractorSolver implements GameSolver {
             maxDeg = Math.max(maxDeg, outStart[v + 1] - outStart[v]);
         }
         int[] queue = new int[n];
-        int tail = maxDeg <= Byte.MAX_VALUE ? searchBytes(queue) : searchInts(queue);
+        int[] via = new int[n];
+        int tail = maxDeg <= Byte.MAX_VALUE ? searchBytes(queue, via) : searchInts(queue, via);
         wonCount = tail;
-        return finish(queue, tail);
+        return finish(queue, tail, via);
     }
 
     /** Fills the queue with the won vertices in the order they are won, records the layers; returns the count. */
-    private int searchBytes(int[] queue) {
+    private int searchBytes(int[] queue, int[] via) {
         final int n = g.n;
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
@@ -126,6 +129,7 @@ public final class CompactAttractorSolver implements GameSolver {
                     counter[u] = (byte) --c;
                     if (c == 0) {
                         queue[tail++] = u;
+                        via[u] = v; // for a robot vertex: the successor that won it (read by finish)
                         if (u == stopAt) {
                             stopped = true;
                         }
@@ -143,7 +147,7 @@ public final class CompactAttractorSolver implements GameSolver {
         return tail;
     }
 
-    private int searchInts(int[] queue) {
+    private int searchInts(int[] queue, int[] via) {
         final int n = g.n;
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
@@ -184,6 +188,7 @@ public final class CompactAttractorSolver implements GameSolver {
                     counter[u] = --c;
                     if (c == 0) {
                         queue[tail++] = u;
+                        via[u] = v;
                         if (u == stopAt) {
                             stopped = true;
                         }
@@ -203,8 +208,15 @@ public final class CompactAttractorSolver implements GameSolver {
 
     private IntArrayList layerStarts;
 
-    /** Ranks from the layers of the queue, then the chosen edges in vertex order. */
-    private Solution finish(int[] queue, int tail) {
+    /**
+     * Ranks from the layers of the queue, then the chosen edges in vertex order. A robot vertex's
+     * chosen edge is the one {@link AttractorSolver} takes: the first out-edge into the successor that
+     * won it ({@code via}, the one store the search adds per won vertex), because both solvers take
+     * the vertices from their queues in the same order (same seeding, same in-edge order, same
+     * joining rule). The scan in vertex order reads out-edges locally, since the product numbers
+     * vertices in discovery order.
+     */
+    private Solution finish(int[] queue, int tail, int[] via) {
         final int n = g.n;
         int[] rank = new int[n];
         Arrays.fill(rank, Solution.LOSING);
@@ -220,10 +232,10 @@ public final class CompactAttractorSolver implements GameSolver {
         final int[] outStart = g.outStart;
         final int[] edgeTarget = g.edgeTarget;
         for (int u = 0; u < n; u++) {
-            int r = rank[u];
-            if (r > 0 && g.owner[u] == GameGraph.ROBOT) {
+            if (rank[u] > 0 && g.owner[u] == GameGraph.ROBOT) {
+                int v = via[u];
                 for (int e = outStart[u]; e < outStart[u + 1]; e++) {
-                    if (rank[edgeTarget[e]] == r - 1) {
+                    if (edgeTarget[e] == v) {
                         strategy[u] = e;
                         break;
                     }

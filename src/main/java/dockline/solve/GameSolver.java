@@ -7,9 +7,10 @@ import java.util.function.BooleanSupplier;
  * target, the attractor rank of each, and a strategy that strictly decreases the rank.
  *
  * <p>Implementations are built with the graph (and a cancellation flag) and answer one query,
- * {@link #solve()}. Two exist: {@link AttractorSolver} (linear time, the one the tool uses) and
- * {@link FixpointSweepSolver} (naive, for cross-checks in tests). Both give the same winning sets
- * and ranks; chosen edges may differ.
+ * {@link #solve()}. Three exist: {@link CompactAttractorSolver} (linear time, the default of
+ * {@link ReserveOptions}), {@link AttractorSolver} (linear time, the reference implementation the
+ * tests compare with) and {@link FixpointSweepSolver} (naive, for cross-checks in tests). All give
+ * the same winning sets and ranks; chosen edges may differ, and each strictly decreases the rank.
  */
 public interface GameSolver {
 

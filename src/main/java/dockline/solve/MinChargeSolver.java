@@ -175,26 +175,66 @@ public final class MinChargeSolver {
 
     /** The start verdict, stopping as soon as it is known (see the class comment). */
     public Result decide() {
-        return run(true).result;
+        return run(Mode.DECIDE).result;
+    }
+
+    /**
+     * The start's need exactly (not capped by the available energy), stopping once the start is
+     * finalised: the values and chosen actions of every vertex taken from the queue so far are
+     * final, which covers the closed loop of the chosen actions from the start (each choice leads
+     * to a disturbance vertex finalised before the chooser). With it the highest floor that can be
+     * guaranteed is {@code s − need(start)} (from the class comment's equivalence, for floor f:
+     * guaranteed ⇔ need ≤ s − f), when the need is at most s; no floor can be guaranteed otherwise.
+     */
+    public Values solveStart() {
+        return run(Mode.START);
     }
 
     /** Every value; {@link Values#need(int, int)} gives the minimum charge per arena vertex and goal state. */
     public Values solveAll() {
-        return run(false);
+        return run(Mode.ALL);
     }
+
+    private enum Mode { DECIDE, START, ALL }
 
     /** The minimum charge needed per robot vertex of arena × goal, from {@link #solveAll()}. */
     public static final class Values {
+        private final Arena arena;
         private final int[] robotNeed;
+        private final byte[] choice;
+        private final boolean[] done;
         private final int goalCount;
         private final int robotCount;
         private final Result result;
 
-        private Values(int[] robotNeed, int goalCount, int robotCount, Result result) {
+        private Values(Arena arena, int[] robotNeed, byte[] choice, boolean[] done, int goalCount, int robotCount,
+                       Result result) {
+            this.arena = arena;
             this.robotNeed = robotNeed;
+            this.choice = choice;
+            this.done = done;
             this.goalCount = goalCount;
             this.robotCount = robotCount;
             this.result = result;
+        }
+
+        /**
+         * The robot's action of least need at robot vertex {@code v} in goal state {@code g}: the arena
+         * edge to the disturbance vertex whose finalised value gave {@code need(v, g)} first (on a tie
+         * the one finalised first, so following the choices never cycles: each leads to a vertex
+         * finalised earlier). -1 when the vertex is not final, is a completion vertex, or cannot force
+         * completion. The choice does not depend on the battery level.
+         */
+        public int chosenEdge(int v, int g) {
+            if (v < 0 || v >= robotCount) {
+                throw new IllegalArgumentException("not a robot vertex: " + v);
+            }
+            if (g == GoalAutomaton.REJECT) {
+                return -1;
+            }
+            int p = v * goalCount + g;
+            int c = choice[p];
+            return done[p] && c > 0 ? arena.outBegin(v) + c - 1 : -1;
         }
 
         /**
@@ -214,7 +254,9 @@ public final class MinChargeSolver {
         }
     }
 
-    private Values run(boolean stopEarly) {
+    private Values run(Mode mode) {
+        final boolean stopEarly = mode == Mode.DECIDE;
+        final boolean stopAtStart = mode != Mode.ALL;
         final int gc = goalCount;
         final int rc = robotCount;
         final int robotN = Math.multiplyExact(rc, gc);
@@ -225,11 +267,13 @@ public final class MinChargeSolver {
         final byte[] processed = new byte[distN];
         final Heap heap = new Heap(Math.min(robotN, 1 << 20));
         final boolean[] done = new boolean[robotN];
+        // the chosen action per robot vertex: 1 + its out-edge offset (0: none); out-degrees are small
+        final byte[] choice = new byte[robotN];
         long explored = 0;
 
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
         boolean feasible = available >= 0 && startP >= 0;
-        if (feasible || !stopEarly) {
+        if (feasible || !stopEarly && startP >= 0 || mode == Mode.ALL) {
             for (int slot = 0; slot < arena.freeCellCount(); slot++) {
                 int c = arena.freeCell(slot);
                 boolean dock = arena.isDock(c);
@@ -257,7 +301,7 @@ public final class MinChargeSolver {
             }
             done[u] = true;
             explored++;
-            if (u == startP && stopEarly) {
+            if (u == startP && stopAtStart) {
                 break;
             }
             int r = u / gc;
@@ -287,10 +331,12 @@ public final class MinChargeSolver {
                     if (++processed[dp] == outdeg) {
                         // every outcome is final: the disturbance vertex is worth distMax; its owner may improve
                         int y = distMax[dp];
-                        int owner = arena.source(arena.inEdge(arena.inBegin(d)));
+                        int ownerEdge = arena.inEdge(arena.inBegin(d));
+                        int owner = arena.source(ownerEdge);
                         int rp = owner * gc + g;
                         if (y < robotNeed[rp] && !done[rp]) {
                             robotNeed[rp] = y;
+                            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
                             heap.push(y, rp);
                         }
                     }
@@ -301,8 +347,8 @@ public final class MinChargeSolver {
         int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
         boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
         long productVertices = (long) arena.vertexCount() * gc;
-        return new Values(robotNeed, gc, rc, new Result(guaranteed, startNeed, available, explored, productVertices,
-                !stopEarly));
+        return new Values(arena, robotNeed, choice, done, gc, rc, new Result(guaranteed, startNeed, available, explored,
+                productVertices, mode == Mode.ALL));
     }
 
     /**

@@ -95,7 +95,9 @@ public final class ProductGame {
      * everywhere) × goal states × monitor states each can hold, plus their out-edges. For the reserve
      * monitor, the levels a vertex can hold are cut from above by the least energy any play spends
      * to reach it from the start or from its last charging step (Dijkstra 1959 on the arena, all
-     * outcomes).
+     * outcomes); and for {@link #fromStart} with the reserve monitor, by the tighter
+     * {@link ReserveSizeForecast} (the highest level each pair of arena × goal can be reached with,
+     * O(arena × goal)), which is exact when waiting costs one unit.
      */
     public static SizeEstimate estimate(Arena arena, GoalAutomaton goal, Monitor monitor, boolean everywhere) {
         return estimate(arena, goal, monitor, everywhere, ProductOptions.IndexKind.AUTO);
@@ -113,6 +115,17 @@ public final class ProductGame {
             long per = SizeEstimate.satMul(goals[arena.cell(a)], levels[a] < 0 ? ms : levels[a]);
             vertices = SizeEstimate.satAdd(vertices, per);
             edges = SizeEstimate.satAdd(edges, SizeEstimate.satMul(per, arena.outEnd(a) - arena.outBegin(a)));
+        }
+        if (!everywhere && monitor instanceof ReserveMonitor rm) {
+            // the forecast over arena x goal with the highest level per pair: also an upper bound, and
+            // exact when waiting costs one unit (the coarse bound above is 1.2-3.7 times the real size)
+            try {
+                ReserveSizeForecast.Forecast f = ReserveSizeForecast.of(arena, goal, rm);
+                vertices = Math.min(vertices, f.vertices());
+                edges = Math.min(edges, f.edges());
+            } catch (ArithmeticException tooManyPairs) {
+                // arena x goal past the int range: keep the coarse bound (the build is refused anyway)
+            }
         }
         long slots = denseSlots(arena, goal, monitor);
         boolean dense = switch (kind) {

@@ -6,7 +6,9 @@ import java.util.function.BooleanSupplier;
  * What {@link ReserveSolver#analyse} computes besides the verdict, and with which limits.
  *
  * @param product         how each product game is built (memory budget, index, cancellation flag)
- * @param solver          the game solver; {@code AttractorSolver::new} unless a test swaps it
+ * @param solver          the game solver; {@code CompactAttractorSolver::new} (same winning set and ranks
+ *                        as the reference {@link AttractorSolver}, 1.4-2 times faster; see DEVELOPERS.md,
+ *                        "Benchmark figures") unless a test swaps it
  * @param highestReserve  also search for the highest reserve floor that can be guaranteed
  * @param chargeNeeded    also compute the heat map ({@link ChargeNeeded}); needs the product over all levels
  * @param safestPolicy    export the policy that keeps the battery at or above the highest guaranteed floor
@@ -21,13 +23,13 @@ public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, 
             product = ProductOptions.defaults();
         }
         if (solver == null) {
-            solver = AttractorSolver::new;
+            solver = CompactAttractorSolver::new;
         }
     }
 
     /** Verdict, policy, worst case and highest guaranteed reserve; no heat map; default memory budget. */
     public static ReserveOptions defaults() {
-        return new ReserveOptions(ProductOptions.defaults(), AttractorSolver::new, true, false, false);
+        return new ReserveOptions(ProductOptions.defaults(), CompactAttractorSolver::new, true, false, false);
     }
 
     public ReserveOptions withMemoryBudget(long bytes) {

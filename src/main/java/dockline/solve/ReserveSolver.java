@@ -98,7 +98,60 @@ public final class ReserveSolver {
         GoalAutomaton goal = GoalAutomaton.of(mission);
         ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
                 mission.startUnits());
-        return wins(arena, goal, monitor, options, AttractorSolver::new);
+        return wins(arena, goal, monitor, options, CompactAttractorSolver::new);
+    }
+
+    /**
+     * The outcome of {@link #decideImplicitly}: the verdict only (no policy, no certificate).
+     *
+     * @param verdict          the start verdict
+     * @param exploredVertices product vertices the backward search won and expanded before it stopped
+     * @param edgesScanned     product edges it scanned
+     * @param forecastVertices the size of the product reachable from the start ({@link ReserveSizeForecast},
+     *                         an upper bound), or -1 when arena × goal is too large to forecast
+     * @param slotCount        slots of the implicit numbering (every triple, padded)
+     * @param stoppedEarly     the search stopped once the start was won
+     * @param millis           arena compile and solve
+     */
+    public record ImplicitVerdict(Verdict verdict, long exploredVertices, long edgesScanned, long forecastVertices,
+                                  long slotCount, boolean stoppedEarly, long millis) {
+    }
+
+    /**
+     * The verdict alone, on the product game without storing it ({@link ImplicitReserveGame}), with
+     * the attractor stopping as soon as the start is won. The same game as {@link #analyse} solves
+     * (property-tested), at half a byte per triple of the full product instead of about 64 bytes per
+     * reachable vertex; no policy comes out of it, so the verdict is not certified.
+     *
+     * @throws ProductTooLargeException if the implicit numbering or its counters do not fit the budget
+     */
+    public static ImplicitVerdict decideImplicitly(Mission mission, ProductOptions options) {
+        long t0 = System.nanoTime();
+        Arena arena = ArenaCompiler.compile(mission);
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
+                mission.startUnits());
+        long forecast;
+        long forecastEdges;
+        try {
+            ReserveSizeForecast.Forecast f = ReserveSizeForecast.of(arena, goal, monitor);
+            forecast = f.vertices();
+            forecastEdges = f.edges();
+        } catch (ArithmeticException tooManyPairs) {
+            forecast = -1;
+            forecastEdges = -1;
+        }
+        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
+        // the counters (half a byte per slot) and the arena's inlined reverse CSR (9 bytes per edge)
+        long bytes = game.slotCount() / 2 + 9L * arena.edgeCount();
+        long budget = options.effectiveMemoryBudget();
+        if (bytes > budget) {
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), Math.max(forecastEdges, 0), bytes,
+                    0), budget, false);
+        }
+        ImplicitReserveGame.Result r = game.solve(true, options.cancelled());
+        return new ImplicitVerdict(Verdict.of(r.startWon()), r.wonVertices(), r.edgesScanned(), forecast,
+                game.slotCount(), r.stoppedEarly(), (System.nanoTime() - t0) / 1_000_000L);
     }
 
     private static boolean wins(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, ProductOptions options,

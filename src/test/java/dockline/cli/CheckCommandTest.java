@@ -91,7 +91,8 @@ class CheckCommandTest {
 
     @Test
     void overMemoryLimit_exitsThreeAndSaysWhatToChange() {
-        Run r = run("check", "missions/late-return.yaml", "--max-memory", "1");
+        // the product route (late-return would take the fast path, whose game is small enough for 1 MB)
+        Run r = run("check", "missions/late-return.yaml", "--max-memory", "1", "--method", "product");
         assertThat(r.code()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(r.err()).contains("vertices", "MB", "coarser energy resolution", "smaller disturbance budget K");
         assertThat(r.out()).isEmpty();

@@ -26,7 +26,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 class SolverAgreementProperties {
 
     static List<GameSolver.Factory> solvers() {
-        return List.of(AttractorSolver::new, FixpointSweepSolver::new);
+        return List.of(AttractorSolver::new, FixpointSweepSolver::new, CompactAttractorSolver::new);
     }
 
     /** A random game graph: random owners, 0..4 out-edges per vertex (parallel edges and self-loops allowed). */
@@ -60,6 +60,45 @@ class SolverAgreementProperties {
         for (int v = 0; v < g.vertexCount(); v++) {
             assertThat(a.rank(v)).as("rank of %d", v).isEqualTo(b.rank(v));
         }
+    }
+
+    /**
+     * The default solver of {@link ReserveOptions}, {@link CompactAttractorSolver}, against the
+     * reference {@link AttractorSolver}: the same winning set and ranks, and a solution that passes
+     * {@link SolutionChecks}, with the very chosen edges of the reference (so policies, worst cases
+     * and replays do not depend on which solver ran).
+     */
+    @Property(tries = 2000)
+    void randomGraphs_compactMatchesTheReference(@ForAll long seed) {
+        GameGraph g = randomGraph(seed);
+        Solution ref = new AttractorSolver(g).solve();
+        Solution c = new CompactAttractorSolver(g).solve();
+        SolutionChecks.assertValidSolution(g, c);
+        for (int v = 0; v < g.vertexCount(); v++) {
+            assertThat(c.rank(v)).as("rank of %d", v).isEqualTo(ref.rank(v));
+            assertThat(c.strategyEdge(v)).as("chosen edge of %d", v).isEqualTo(ref.strategyEdge(v));
+        }
+    }
+
+    @Property(tries = 300)
+    void productGames_compactMatchesTheReference(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        ProductGame game = ProductGame.fromStart(ArenaCompiler.compile(m), GoalAutomaton.of(m), monitor,
+                ProductOptions.defaults());
+        Solution ref = new AttractorSolver(game.graph()).solve();
+        Solution c = new CompactAttractorSolver(game.graph()).solve();
+        SolutionChecks.assertValidSolution(game, c, monitor);
+        for (int v = 0; v < game.vertexCount(); v++) {
+            assertThat(c.rank(v)).isEqualTo(ref.rank(v));
+            assertThat(c.strategyEdge(v)).isEqualTo(ref.strategyEdge(v));
+        }
+        ReserveAnalysis viaReference = ReserveSolver.analyse(m, ReserveOptions.defaults().withSolver(AttractorSolver::new));
+        ReserveAnalysis viaDefault = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        assertThat(viaDefault.verdict()).isEqualTo(viaReference.verdict());
+        assertThat(viaDefault.highestGuaranteedReserveUnits()).isEqualTo(viaReference.highestGuaranteedReserveUnits());
+        assertThat(viaDefault.worstCaseMinimumUnits()).isEqualTo(viaReference.worstCaseMinimumUnits());
+        assertThat(viaDefault.policy().map(Policy::entries)).isEqualTo(viaReference.policy().map(Policy::entries));
     }
 
     @Property(tries = 300)

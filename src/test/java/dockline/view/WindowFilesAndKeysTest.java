@@ -119,6 +119,22 @@ class WindowFilesAndKeysTest {
     }
 
     @Test
+    void the_map_pans_by_dragging_and_zooms_by_scrolling(FxRobot robot) throws Exception {
+        assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
+        waitUntil(this::solved);
+        MapView mv = window.mapView();
+        double x0 = fx(mv::originX);
+        robot.drag("#map").moveBy(60, 0).drop();
+        WaitForAsyncUtils.waitForFxEvents();
+        assertThat(fx(mv::originX)).isGreaterThan(x0 + 30);
+        double s0 = fx(mv::cellPx);
+        robot.moveTo("#map").scroll(3, javafx.geometry.VerticalDirection.UP);
+        WaitForAsyncUtils.waitForFxEvents();
+        double s1 = fx(mv::cellPx);
+        assertThat(s1).isNotEqualTo(s0);
+    }
+
+    @Test
     void the_map_zooms_and_pans_with_keys(FxRobot robot) throws Exception {
         assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
         waitUntil(this::solved);

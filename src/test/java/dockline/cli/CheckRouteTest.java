@@ -1,0 +1,91 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code check}'s choice of route: the fast path on a mission without charging (the night round
+ * with docks that do not charge), the product route otherwise, {@code --method} forcing either, and
+ * {@code --verdict-only}. The product route is the reference the fast path's figures are held to.
+ */
+class CheckRouteTest {
+
+    @TempDir
+    Path dir;
+
+    private Path noCharge;
+
+    @BeforeEach
+    void missionWithoutCharging() throws Exception {
+        String text = Files.readString(Path.of("missions/night-round.yaml"))
+                .replaceAll("charge-rate: 1 .*", "charge-rate: 0")
+                .replace("../maps/clinic-wing.yaml", Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString());
+        noCharge = dir.resolve("no-charge.yaml");
+        Files.writeString(noCharge, text);
+    }
+
+    private static JsonNode json(CheckCommandTest.Run r) throws Exception {
+        return new ObjectMapper().readTree(r.out());
+    }
+
+    @Test
+    void auto_takesTheFastPath_andAgreesWithTheProductRoute() throws Exception {
+        CheckCommandTest.Run fast = CheckCommandTest.run("check", noCharge.toString(), "--json");
+        CheckCommandTest.Run product = CheckCommandTest.run("check", noCharge.toString(), "--json", "--method", "product");
+        assertThat(fast.code()).as(fast.err()).isEqualTo(ExitCodes.OK);
+        assertThat(product.code()).as(product.err()).isEqualTo(ExitCodes.OK);
+        JsonNode f = json(fast);
+        JsonNode p = json(product);
+        assertThat(f.get("method").asText()).isEqualTo("fast");
+        assertThat(p.get("method").asText()).isEqualTo("product");
+        assertThat(f.get("verdict").asText()).isEqualTo(p.get("verdict").asText());
+        assertThat(f.get("highestGuaranteedReserveUnits").asInt()).isEqualTo(p.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(f.get("certified").asBoolean()).isTrue();
+        // the policy of least need is the safest one: its worst level is the highest floor
+        assertThat(f.get("worstCaseMinimumUnits").asInt()).isEqualTo(f.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(f.get("certifiedWorstMinimumUnits").asInt()).isEqualTo(f.get("worstCaseMinimumUnits").asInt());
+        CheckCommandTest.Run text = CheckCommandTest.run("check", noCharge.toString());
+        assertThat(text.out()).contains("Method: fast path", "certified: true", "Highest reserve floor guaranteed:");
+    }
+
+    @Test
+    void chargingMission_takesTheProductRoute_andRefusesAForcedFastPath() throws Exception {
+        CheckCommandTest.Run auto = CheckCommandTest.run("check", "missions/night-round.yaml", "--json");
+        assertThat(json(auto).get("method").asText()).isEqualTo("product");
+        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml").out()).contains("Method: product game");
+        CheckCommandTest.Run forced = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "fast");
+        assertThat(forced.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(forced.err()).contains("--method fast does not apply", "charge").doesNotContain("Exception");
+        assertThat(forced.out()).isEmpty();
+        CheckCommandTest.Run bad = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "quick");
+        assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(bad.err()).contains("auto, fast or product");
+    }
+
+    @Test
+    void verdictOnly_saysItIsNotCertified() throws Exception {
+        for (String[] args : new String[][] {{"check", noCharge.toString(), "--verdict-only"},
+            {"check", "missions/night-round.yaml", "--verdict-only"},
+            {"check", noCharge.toString(), "--verdict-only", "--method", "product"}}) {
+            CheckCommandTest.Run r = CheckCommandTest.run(args);
+            assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+            assertThat(r.out()).startsWith("GUARANTEED: ").contains("Verdict only, not certified").contains("Safety:");
+        }
+        CheckCommandTest.Run implicit = CheckCommandTest.run("check", "missions/night-round.yaml", "--verdict-only", "--json");
+        JsonNode j = json(implicit);
+        assertThat(j.get("method").asText()).isEqualTo("implicit-product");
+        assertThat(j.get("certified").asBoolean()).isFalse();
+        assertThat(j.get("exploredVertices").asLong()).isPositive();
+        assertThat(j.get("forecastVertices").asLong()).isPositive();
+        CheckCommandTest.Run lost = CheckCommandTest.run("check", "missions/late-return.yaml", "--verdict-only");
+        assertThat(lost.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(lost.out()).startsWith("NOT GUARANTEED: ");
+    }
+}
