@@ -131,15 +131,7 @@ public final class CheckCommand implements Callable<Integer> {
     static void human(ReserveAnalysis a, Certificate cert, List<Suggestion> suggestions, PrintWriter out) {
         Mission m = a.mission();
         EnergyScale s = a.scale();
-        int k = m.map().disturbances().budget();
-        String events = k == 0 ? "with no disturbances" : "under up to " + k + " disturbance" + (k == 1 ? "" : "s");
-        if (a.guaranteed()) {
-            out.println("GUARANTEED: " + m.name() + " — the robot can always finish and dock " + events
-                    + " without going below the reserve floor.");
-        } else {
-            out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock " + events
-                    + " while staying at or above the reserve floor.");
-        }
+        verdictLine(m, a.guaranteed(), out);
         if (a.worstCaseMinimumUnits().isPresent()) {
             out.println("  Worst battery level under the policy:  " + amount(a.worstCaseMinimumUnits().getAsInt(), a)
                     + (a.policyFloorUnits() > a.reserveUnits() ? " (the safest policy; it may take more moves)"
@@ -179,14 +171,29 @@ public final class CheckCommand implements Callable<Integer> {
 
     /** E.g. {@code 49 units = 24.5 Wh (40.8%)}. */
     static String amount(int units, ReserveAnalysis a) {
-        return units + " units = " + a.scale().formatWh(units) + " (" + percent(units, a) + "%)";
+        return amount(units, a.mission());
     }
 
-    /** Share of the capacity in Wh, one decimal, for display only. */
-    static String percent(int units, ReserveAnalysis a) {
-        BigDecimal cap = a.mission().robot().capacityWh();
-        return a.scale().toWh(units).multiply(BigDecimal.valueOf(100)).divide(cap, 1, RoundingMode.HALF_UP)
-                .stripTrailingZeros().toPlainString();
+    /** E.g. {@code 49 units = 24.5 Wh (40.8%)}; the share of the capacity in Wh, one decimal, is for display only. */
+    static String amount(int units, Mission m) {
+        EnergyScale s = m.scale();
+        BigDecimal cap = m.robot().capacityWh();
+        String pct = cap.signum() == 0 ? "0" : s.toWh(units).multiply(BigDecimal.valueOf(100))
+                .divide(cap, 1, RoundingMode.HALF_UP).stripTrailingZeros().toPlainString();
+        return units + " units = " + s.formatWh(units) + " (" + pct + "%)";
+    }
+
+    /** The first line of a reserve verdict, e.g. {@code GUARANTEED: Night round — the robot can always ...}. */
+    static void verdictLine(Mission m, boolean guaranteed, PrintWriter out) {
+        int k = m.map().disturbances().budget();
+        String events = k == 0 ? "with no disturbances" : "under up to " + k + " disturbance" + (k == 1 ? "" : "s");
+        if (guaranteed) {
+            out.println("GUARANTEED: " + m.name() + " — the robot can always finish and dock " + events
+                    + " without going below the reserve floor.");
+        } else {
+            out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock " + events
+                    + " while staying at or above the reserve floor.");
+        }
     }
 
     static String json(ReserveAnalysis a) {
@@ -226,14 +233,7 @@ public final class CheckCommand implements Callable<Integer> {
             o.put("certifiedStates", cert.statesChecked());
             o.put("certifiedWorstMinimumUnits", cert.worstMinimumUnits());
         }
-        ArrayNode sug = o.putArray("suggestions");
-        for (Suggestion sg : suggestions) {
-            ObjectNode so = sug.addObject();
-            so.put("kind", sg.kind().word());
-            so.put("from", sg.from());
-            so.put("to", sg.to());
-            so.put("text", sg.text());
-        }
+        Json.putSuggestions(o, suggestions);
         o.put("discretisation", a.scale().describe());
         ArrayNode notes = o.putArray("notes");
         a.notes().forEach(notes::add);

@@ -6,7 +6,6 @@ import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.margin.Suggestion;
 import dockline.margin.Suggestions;
-import dockline.model.EnergyScale;
 import dockline.model.Mission;
 import dockline.report.Caveats;
 import dockline.solve.FastPath;
@@ -15,8 +14,6 @@ import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveSolver;
 import java.io.PrintWriter;
-import java.math.BigDecimal;
-import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -140,7 +137,7 @@ final class CheckRoute {
             o.put("discretisation", m.scale().describe());
             out.println(Json.withCaveats(o));
         } else {
-            verdictLine(m, ok, out);
+            CheckCommand.verdictLine(m, ok, out);
             out.println("  Method: product game without storing it (arena x goal x battery levels), attractor stopped"
                     + " once the start was decided");
             out.println("  Verdict only, not certified: no policy, worst level, highest reserve floor or suggestions"
@@ -193,14 +190,7 @@ final class CheckRoute {
                 o.put("certifiedStates", cert.statesChecked());
                 o.put("certifiedWorstMinimumUnits", cert.worstMinimumUnits());
             }
-            ArrayNode sug = o.putArray("suggestions");
-            for (Suggestion sg : suggestions) {
-                ObjectNode so = sug.addObject();
-                so.put("kind", sg.kind().word());
-                so.put("from", sg.from());
-                so.put("to", sg.to());
-                so.put("text", sg.text());
-            }
+            Json.putSuggestions(o, suggestions);
             o.put("discretisation", m.scale().describe());
             ArrayNode notes = o.putArray("notes");
             if (suggestionNote != null) {
@@ -209,7 +199,7 @@ final class CheckRoute {
             out.println(Json.withCaveats(o));
             return;
         }
-        verdictLine(m, a.guaranteed(), out);
+        CheckCommand.verdictLine(m, a.guaranteed(), out);
         out.println("  Method: fast path (minimum charge on arena x goal, Knuth 1977): the robot cannot charge before"
                 + " the end, so the battery levels need not be in the game");
         if (a.verdictOnly()) {
@@ -217,14 +207,15 @@ final class CheckRoute {
                     + " (run without --verdict-only for them).");
         } else {
             if (a.worstCaseMinimumUnits().isPresent()) {
-                out.println("  Worst battery level under the policy:  " + amount(a.worstCaseMinimumUnits().getAsInt(), m)
+                out.println("  Worst battery level under the policy:  "
+                        + CheckCommand.amount(a.worstCaseMinimumUnits().getAsInt(), m)
                         + " (the policy of least energy needed; it does not depend on the battery level)");
             } else {
                 out.println("  Worst battery level under the policy:  none (there is no safe policy)");
             }
             if (a.highestGuaranteedReserveUnits().isPresent()) {
                 out.println("  Highest reserve floor guaranteed:      "
-                        + amount(a.highestGuaranteedReserveUnits().getAsInt(), m));
+                        + CheckCommand.amount(a.highestGuaranteedReserveUnits().getAsInt(), m));
             } else {
                 out.println("  Highest reserve floor guaranteed:      none (not even a floor of 0 can be guaranteed)");
             }
@@ -233,7 +224,8 @@ final class CheckRoute {
                 ? (a.verdictOnly() ? "more than is available" : "the robot cannot force completion")
                 : a.startNeedUnits() + " units") + " (available above the floor: " + (a.startUnits() - a.reserveUnits())
                 + " units)");
-        out.println("  Start " + amount(a.startUnits(), m) + ", reserve floor " + amount(a.reserveUnits(), m)
+        out.println("  Start " + CheckCommand.amount(a.startUnits(), m) + ", reserve floor "
+                + CheckCommand.amount(a.reserveUnits(), m)
                 + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
         out.println("  Game: " + a.pairVertices() + " vertices of arena x goal, " + a.exploredVertices()
                 + " explored; solved in " + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
@@ -263,23 +255,11 @@ final class CheckRoute {
         }
         if (cert != null) {
             return "certified: " + cert.ok() + " (the policy re-checked independently over " + cert.statesChecked()
-                    + " situations; never below " + amount(cert.worstMinimumUnits(), a.mission()) + ")";
+                    + " situations; never below " + CheckCommand.amount(cert.worstMinimumUnits(), a.mission()) + ")";
         }
         return "not certified: the closed loop is too large (" + (a.loopTooLarge() ? "more than " + a.maxPolicyRows()
                 : Long.toString(a.loopStates())) + " states; the policy rows are written out and re-checked up to "
                 + a.maxPolicyRows() + ")";
-    }
-
-    private static void verdictLine(Mission m, boolean ok, PrintWriter out) {
-        int k = m.map().disturbances().budget();
-        String events = k == 0 ? "with no disturbances" : "under up to " + k + " disturbance" + (k == 1 ? "" : "s");
-        if (ok) {
-            out.println("GUARANTEED: " + m.name() + " — the robot can always finish and dock " + events
-                    + " without going below the reserve floor.");
-        } else {
-            out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock " + events
-                    + " while staying at or above the reserve floor.");
-        }
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method, boolean verdictOnly) {
@@ -298,14 +278,5 @@ final class CheckRoute {
         } else {
             o.putNull(key);
         }
-    }
-
-    /** E.g. {@code 49 units = 24.5 Wh (40.8%)}; the percentage is for display only. */
-    static String amount(int units, Mission m) {
-        EnergyScale s = m.scale();
-        BigDecimal cap = m.robot().capacityWh();
-        String pct = cap.signum() == 0 ? "0" : s.toWh(units).multiply(BigDecimal.valueOf(100))
-                .divide(cap, 1, RoundingMode.HALF_UP).stripTrailingZeros().toPlainString();
-        return units + " units = " + s.formatWh(units) + " (" + pct + "%)";
     }
 }

@@ -6,7 +6,9 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.margin.Suggestion;
 import dockline.report.Caveats;
+import java.util.List;
 
 /**
  * The JSON output of the commands, written one way: indented, decimals written out (never
@@ -23,6 +25,18 @@ final class Json {
     /** A new, empty JSON object. */
     static ObjectNode object() {
         return MAPPER.createObjectNode();
+    }
+
+    /** Puts the {@code suggestions} array: kind, from, to (in units) and the sentence, smallest change first. */
+    static void putSuggestions(ObjectNode o, List<Suggestion> suggestions) {
+        ArrayNode arr = o.putArray("suggestions");
+        for (Suggestion sg : suggestions) {
+            ObjectNode so = arr.addObject();
+            so.put("kind", sg.kind().word());
+            so.put("from", sg.from());
+            so.put("to", sg.to());
+            so.put("text", sg.text());
+        }
     }
 
     /** The object as text (no final line break), after adding the {@code caveats} array. */

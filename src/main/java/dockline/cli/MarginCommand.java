@@ -188,14 +188,7 @@ public final class MarginCommand implements Callable<Integer> {
         root.put("agree", r.agree());
         method(root.putObject("bisection"), r.bisection(), s);
         method(root.putObject("fixpoint"), r.fixpoint(), s);
-        var arr = root.putArray("suggestions");
-        for (Suggestion sg : r.suggestions()) {
-            ObjectNode o = arr.addObject();
-            o.put("kind", sg.kind().word());
-            o.put("from", sg.from());
-            o.put("to", sg.to());
-            o.put("text", sg.text());
-        }
+        Json.putSuggestions(root, r.suggestions());
         root.put("discretisation", s.describe());
         return Json.withCaveats(root) + "\n";
     }
