@@ -41,8 +41,8 @@ import picocli.CommandLine.Option;
                 + " below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
         exitCodeListHeading = "%nExit codes:%n",
-        exitCodeList = {"0:guaranteed (and its policy certified)", "1:not guaranteed", "2:bad input or usage",
-                "3:the game is too large for the memory limit",
+        exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only)", "1:not guaranteed",
+                "2:bad input or usage", "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate)"})
 public final class CheckCommand implements Callable<Integer> {
 

@@ -43,7 +43,7 @@ import picocli.CommandLine.Option;
                 + " guaranteed."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
-                "3:the game is too large for the memory limit",
+                "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate; nothing written)"})
 public final class ExportCommand implements Callable<Integer> {
 

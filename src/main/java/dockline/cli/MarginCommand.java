@@ -34,7 +34,8 @@ import picocli.CommandLine.Mixin;
                 + " two independent ways, and what would make a mission that is not guaranteed guaranteed."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:the mission as written is guaranteed", "1:not guaranteed", "2:bad input or usage",
-                "3:over a resource limit", "4:internal error (the two methods disagree)"})
+                "3:over a resource limit (the game is too large for the memory limit)",
+                "4:internal error (the two methods disagree)"})
 public final class MarginCommand implements Callable<Integer> {
 
     @CommandLine.Spec

@@ -31,8 +31,7 @@ final class MissionOptions {
     Path missionFile;
 
     @Option(names = "--reserve", paramLabel = "CHARGE",
-            description = "reserve floor instead of the mission's: Wh (12, or '12 Wh' in quotes) or %% of the"
-                    + " capacity (20%%)")
+            description = "reserve floor instead of the mission's: Wh (12 or 12Wh) or %% of the capacity (20%%)")
     String reserve;
 
     @Option(names = "--start-charge", paramLabel = "CHARGE",

@@ -34,7 +34,8 @@ import picocli.CommandLine.Mixin;
                 "Guaranteed missions: the certified policy; not guaranteed: the counterexample that defeats every plan."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed (policy certified)", "1:not guaranteed", "2:bad input or usage (also an impossible --force event)",
-                "3:over a resource limit", "4:internal error (e.g. the policy failed its certificate)"})
+                "3:over a resource limit (the game is too large for the memory limit)",
+                "4:internal error (e.g. the policy failed its certificate)"})
 public final class ReplayCommand implements Callable<Integer> {
 
     /** Which disturbance choices to replay. */

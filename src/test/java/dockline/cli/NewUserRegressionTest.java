@@ -209,7 +209,8 @@ class NewUserRegressionTest {
         Path policy = dir.resolve("p.csv");
         String[][] runs = {{"validate", NIGHT, "maps/clinic-wing.yaml", "--json"}, {"check", NIGHT, "--json"},
             {"export", NIGHT, "--policy", policy.toString(), "--json"}, {"replay", NIGHT, "--json"},
-            {"margin", NIGHT, "--json"}, {"export", "missions/late-return.yaml", "--policy", policy + ".x", "--json"}};
+            {"margin", NIGHT, "--json"}, {"export", "missions/late-return.yaml", "--policy", policy + ".x", "--json"},
+            {"check", "missions/late-return.yaml", "--json"}, {"check", "missions/late-return.yaml", "--json", "--verdict-only"}};
         for (String[] args : runs) {
             Run r = run(args);
             assertThat(r.code()).as(String.join(" ", args) + r.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
