@@ -54,7 +54,8 @@ public final class ClosedLoop {
     public static final class TooLargeException extends RuntimeException {
         private static final long serialVersionUID = 1L;
 
-        TooLargeException(int limit) {
+        /** The loop would have more than {@code limit} nodes. */
+        public TooLargeException(int limit) {
             super("the closed loop of the policy has more than " + limit + " states");
         }
     }

@@ -316,4 +316,27 @@ class NewUserRegressionTest {
     void topLevelHelp_pointsToTheCommandsHelp() {
         assertThat(run("--help").out()).contains("Run 'dockline COMMAND --help' for the options of a command.");
     }
+
+    /**
+     * A policy whose closed loop was over the certificate checker's limit made {@code check} say
+     * "internal error: dockline.certify.ClosedLoop$TooLargeException ..." with exit 4: a resource
+     * limit, reported as a bug. Every mission command maps it (and the other limits) to exit 3 now,
+     * in words, and a mission the solver rejects to exit 2.
+     */
+    @Test
+    void solverFailures_mapToTheirExitCodes_inWords() {
+        MissionOptions o = new MissionOptions();
+        o.missionFile = Path.of("missions/x.yaml");
+        java.io.StringWriter text = new java.io.StringWriter();
+        java.io.PrintWriter err = new java.io.PrintWriter(text, true);
+        assertThat(o.failure(new dockline.certify.ClosedLoop.TooLargeException(20), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
+        assertThat(o.failure(new ArithmeticException("integer overflow"), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
+        assertThat(o.failure(new OutOfMemoryError("Java heap space"), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
+        assertThat(o.failure(new IllegalArgumentException("no dock"), err)).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(text.toString()).contains("dockline: missions/x.yaml: the closed loop of the policy has more than 20"
+                + " states, too many to certify").contains("the game is too large: integer overflow")
+                .contains("dockline: missions/x.yaml: no dock").doesNotContain("Exception").doesNotContain("internal");
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> o.failure(new IllegalStateException("bug"), err))
+                .isInstanceOf(IllegalStateException.class); // left for the internal-error handler (exit 4)
+    }
 }
