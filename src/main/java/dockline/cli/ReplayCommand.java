@@ -102,7 +102,8 @@ public final class ReplayCommand implements Callable<Integer> {
         if (!mission.outputOk("--csv", csv, m, err) || !mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
         }
-        if (csv != null && jsonFile != null && csv.toAbsolutePath().normalize().equals(jsonFile.toAbsolutePath().normalize())) {
+        if (csv != null && jsonFile != null
+                && csv.toAbsolutePath().normalize().equals(jsonFile.toAbsolutePath().normalize())) {
             err.println("dockline: --csv and --json-file name the same file " + csv + "; give two names");
             return ExitCodes.BAD_INPUT;
         }
