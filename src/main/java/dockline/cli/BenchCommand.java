@@ -16,8 +16,8 @@ import picocli.CommandLine.Option;
  * Exit 0 when every method agrees on every instance, 4 when any two disagree (an internal error).
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Measures the solving methods on generated buildings (32x32 up to 512x512 cells) in one run:",
-                "product vertices and edges, build and solve time, edges per second, peak heap, and the ratios",
+        description = {"Measures the solving methods on generated buildings, from 32x32 up to 512x512 cells.",
+                "In one run it prints product vertices and edges, build and solve time, edges per second, peak heap, and the ratios",
                 "between methods. Every method must give the same verdict on an instance."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:all methods agree on every instance", "2:bad usage",

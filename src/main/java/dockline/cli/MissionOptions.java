@@ -146,16 +146,26 @@ final class MissionOptions {
         if (target == null) {
             return true;
         }
-        String why = AtomicFiles.problemWith(target);
-        if (why == null && (sameFile(target, missionFile) || (m.map().source() != null
-                && sameFile(target, m.map().source())))) {
-            why = "that is an input file of this mission; choose another name (outputs never overwrite inputs)";
-        }
+        String why = outputProblem(target, missionFile, m);
         if (why != null) {
             err.println("dockline: " + option + " " + (target.toString().isEmpty() ? "''" : target) + ": " + why);
             return false;
         }
         return true;
+    }
+
+    /**
+     * What is wrong with writing {@code target} as an output of the mission read from
+     * {@code missionFile}, or {@code null}: a path that cannot be written, or one of the mission's
+     * input files (an output never overwrites an input).
+     */
+    static String outputProblem(Path target, Path missionFile, Mission m) {
+        String why = AtomicFiles.problemWith(target);
+        if (why == null && (sameFile(target, missionFile) || (m.map().source() != null
+                && sameFile(target, m.map().source())))) {
+            why = "that is an input file of this mission; choose another name (outputs never overwrite inputs)";
+        }
+        return why;
     }
 
     private static boolean sameFile(Path a, Path b) {

@@ -29,9 +29,9 @@ import picocli.CommandLine.Parameters;
  * line into a PNG, with no display (headless toolkit). The file is written atomically.
  */
 @Command(name = "render", mixinStandardHelpOptions = true,
-        description = {"Solves a mission and draws it as a PNG picture, with no display needed:",
-                "the map with the charge needed per cell (or the policy), the worst-case path, the battery chart",
-                "and the safety caveat."},
+        description = {"Solves a mission and draws it as a PNG picture, with no display needed.",
+                "The picture shows the map with the charge needed per cell (or the policy), the worst-case path,",
+                "the battery chart and the safety caveat."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:picture written; the mission is guaranteed", "1:picture written; the mission is not guaranteed",
                 "2:bad input or usage (nothing written)", "3:over a resource limit (nothing written)",
@@ -57,10 +57,11 @@ public final class RenderCommand implements Callable<Integer> {
             description = "what to draw over the map: heat (charge needed), policy or plain (default: ${DEFAULT-VALUE})")
     String layer;
 
-    @Option(names = "--reserve", paramLabel = "CHARGE", description = "reserve floor instead of the mission's, e.g. 25% or 9 Wh")
+    @Option(names = "--reserve", paramLabel = "CHARGE", description = "reserve floor instead of the mission's, e.g. 25%% or '9 Wh'")
     String reserve;
 
-    @Option(names = "--start", paramLabel = "CHARGE", description = "starting charge instead of the mission's, e.g. 80% or 30 Wh")
+    @Option(names = "--start-charge", paramLabel = "CHARGE",
+            description = "starting charge instead of the mission's, e.g. 80%% or '30 Wh'")
     String start;
 
     @Override
@@ -99,10 +100,15 @@ public final class RenderCommand implements Callable<Integer> {
                 m = m.withReserve(charge("--reserve", reserve, m));
             }
             if (start != null) {
-                m = m.withStartCharge(charge("--start", start, m));
+                m = m.withStartCharge(charge("--start-charge", start, m));
             }
         } catch (IllegalArgumentException e) {
             err.println("dockline render: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        String badOut = MissionOptions.outputProblem(out, mission, m);
+        if (badOut != null) {
+            err.println("dockline: --out " + (out.toString().isEmpty() ? "''" : out) + ": " + badOut);
             return ExitCodes.BAD_INPUT;
         }
         ViewData data;

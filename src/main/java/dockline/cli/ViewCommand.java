@@ -17,8 +17,9 @@ import picocli.CommandLine.Parameters;
  * files; it writes nothing but its own recent-files list under the user's home.
  */
 @Command(name = "view", mixinStandardHelpOptions = true,
-        description = {"Opens the desktop window: the map, the charge needed per cell, the policy, the reserve and",
-                "starting-charge controls, and the worst-case replay with its battery chart.",
+        description = {"Opens the desktop window to look at a mission and replay its worst-case runs.",
+                "It shows the map, the charge needed per cell, the policy, the reserve and starting-charge",
+                "controls, and the worst-case replay with its battery chart.",
                 "More missions and maps can be opened from the window."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:the window was closed", "2:the file has problems, or there is no display"})

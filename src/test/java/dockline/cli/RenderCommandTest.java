@@ -116,4 +116,28 @@ class RenderCommandTest {
         assertThat(h.out()).contains("--out").contains("--size").contains("--layer");
         assertThat(h.code()).isEqualTo(ExitCodes.OK);
     }
+
+    /**
+     * Regression: {@code render MISSION --out MISSION} overwrote the mission file with a PNG, and a
+     * mistyped output folder was created silently. Both are now refused before any work, exit 2,
+     * and the mission file is left as it was.
+     */
+    @Test
+    void refuses_to_overwrite_an_input_or_write_into_a_missing_folder() throws Exception {
+        Path mission = tmp.resolve("m.yaml");
+        Path map = tmp.resolve("clinic-wing.yaml");
+        Files.copy(Path.of("maps/clinic-wing.yaml"), map);
+        Files.writeString(mission, Files.readString(Path.of("missions/night-round.yaml"))
+                .replace("../maps/clinic-wing.yaml", "clinic-wing.yaml"));
+        byte[] before = Files.readAllBytes(mission);
+        Run self = run("render", mission.toString(), "--out", mission.toString());
+        assertThat(self.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(self.err()).contains("input file");
+        assertThat(Files.readAllBytes(mission)).isEqualTo(before);
+        Run ofMap = run("render", mission.toString(), "--out", map.toString());
+        assertThat(ofMap.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        Run missing = run("render", mission.toString(), "--out", tmp.resolve("no-such-folder/x.png").toString());
+        assertThat(missing.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(tmp.resolve("no-such-folder")).doesNotExist();
+    }
 }
