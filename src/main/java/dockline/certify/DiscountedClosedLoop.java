@@ -32,9 +32,8 @@ import java.util.Optional;
  * ({@code s >= B} for {@code >=}, {@code s > B} for {@code >}) meets the threshold whatever follows
  * and is kept as "secured" (the policy's {@link PolicyScore#SECURED}); a gap below {@code -B}
  * ({@code <= -B} for {@code >}) can never meet it, which is a failure ({@link ProblemKind#SCORE_OUT_OF_REACH}).
- * This is the bound of the discounted-sum comparator automaton (S. Bansal, S. Chaudhuri, M. Y. Vardi,
- * "Comparator automata in quantitative verification", FoSSaCS 2018), re-derived here from the
- * geometric series, not taken from the solver.
+ * This is the bound of the published discounted-sum comparator automaton construction (2018),
+ * re-derived here from the geometric series, not taken from the solver.
  *
  * <p><b>Completion</b> follows the product's convention (DESIGN.md 2.3, missions/README.md): a
  * situation is complete — absorbing, weight 0 for ever after, so its score is the partial sum — when

@@ -49,12 +49,12 @@ import java.util.Arrays;
  * overflow and throws {@link ArithmeticException} otherwise.
  *
  * <h2>Sources</h2>
- * S. Bansal, S. Chaudhuri, M. Y. Vardi, "Comparator automata in quantitative verification",
- * FoSSaCS 2018 (extended version in Logical Methods in Computer Science, 2022): discounted-sum
- * comparators for integer discount factors are regular, with safety / co-safety acceptance
- * according to the relation. S. Bansal, K. Chatterjee, M. Y. Vardi, "On satisficing in quantitative
- * games", TACAS 2021: the threshold question ("satisficing") is solved by the product of the game
- * with the comparator and a safety or reachability game, without computing the optimal value.
+ * The published work on comparator automata for discounted sums (2018; extended journal version
+ * 2022): for integer discount factors the comparator is a finite deterministic automaton, with
+ * safety / co-safety acceptance according to the relation; and the published work on satisficing
+ * in quantitative games (2021): the threshold question is solved by the product of the game with
+ * the comparator and a safety or reachability game, without computing the optimal value. The
+ * bounds used here are re-derived in this javadoc from the geometric series.
  *
  * <p>State numbers are assigned as states are discovered, so instances are mutable and not
  * thread-safe; a given (state, weight) pair always steps to the same state.

@@ -28,8 +28,8 @@ import java.util.Optional;
  * comparator's losing sink ({@code >=}: the gap fell below {@code -mu/(d-1)}) loses at once. This is
  * reachability of {@link ProductGame#WIN} while avoiding {@link ProductGame#LOSE}, as the generic
  * product builds it; note that, as there, being on a dock with the tasks done while the score is
- * still short does not end the mission: the robot may go on (charge, say) and finish later. See S.
- * Bansal, K. Chatterjee, M. Y. Vardi, "On satisficing in quantitative games", TACAS 2021.
+ * still short does not end the mission: the robot may go on (charge, say) and finish later. The method follows the
+ * published work on satisficing (threshold) problems in quantitative games (2021).
  *
  * <p>The score reads the arena's energy deltas step by step (moves and waits negative, charging
  * positive); it does not know the battery's capacity, so charging on a full battery still scores its

@@ -25,8 +25,8 @@ import java.util.Arrays;
  * {@code >=} the robot must avoid {@link #REJECTED} for ever (safety): the robot wins exactly
  * outside the disturbance's attractor to {@link #REJECTED}, computed by the same linear-time
  * {@link AttractorSolver} with the roles swapped (Grädel, Thomas, Wilke (eds.), "Automata, Logics,
- * and Infinite Games", LNCS 2500, 2002, ch. 2: safety and reachability games are dual). See S.
- * Bansal, K. Chatterjee, M. Y. Vardi, "On satisficing in quantitative games", TACAS 2021.
+ * and Infinite Games", LNCS 2500, 2002, ch. 2: safety and reachability games are dual). The method follows the published work on
+ * satisficing (threshold) problems in quantitative games (2021).
  *
  * <p>Cost: O(|V| + |E|) time and memory in the product, which has at most (arena vertices) x
  * (comparator states) vertices.

@@ -68,7 +68,7 @@ class DiscountedCertificateProperties {
      * Oracles: (1) every guaranteed verdict must pass the independent certificate; (2) the
      * certificate's exact worst score equals the minimum over the closed loop's plays of the finite
      * discounted sum sum w_i / d^i, each play walked on its own by {@link DiscountedPlayEnumerator}
-     * (the definition of the discounted sum, S. Bansal, S. Chaudhuri, M. Y. Vardi, FoSSaCS 2018), and
+     * (the definition of the discounted sum, Zwick & Paterson, TCS 158, 1996, lambda = 1/d), and
      * the worst score the solver reports; (3) the verdict agrees with the naive explicit game
      * {@link ScoreGameBruteForce} (Grädel, Thomas, Wilke 2002, ch. 2) when the floor is kept.
      */

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The bundled demo missions/discounted-trap.yaml (invented data) is certified. The expected worst
  * score is hand-worked with the finite geometric sum (the definition of the discounted sum,
- * DS = sum w_i / d^i, as in Bansal, Chaudhuri, Vardi, FoSSaCS 2018): one charge (+3 units) then 15
+ * DS = sum w_i / d^i, as in Zwick & Paterson, TCS 158, 1996, with lambda = 1/d): one charge (+3 units) then 15
  * moves of -2 units with d = 2 give 3 - 2 (1/2 + ... + 1/2^15) = 3 - 2 (1 - 2^-15) = 16385/16384,
  * the figure missions/README.md quotes.
  */
