@@ -33,6 +33,11 @@ import java.util.function.BooleanSupplier;
  * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
  * the start (the memory-bound floor for this layout).
  *
+ * <p>{@link #solveWithStrategy} also records the robot's choice (a byte per robot slot, written once
+ * when the slot is won), from which {@link #policy} walks the closed loop from the start and
+ * {@link #worstCaseMinimum} evaluates its lowest level (O(closed loop) each); this is the
+ * {@link ReserveOptions.Route#IMPLICIT} route of {@link ReserveSolver#analyse}.
+ *
  * <p>The inversion of the battery update {@code s' = min(L − 1, s + w)}, below the floor rejected:
  * for {@code s' < L − 1} the only predecessor state is {@code s = s' − w} (when in range); for
  * {@code s' = L − 1} (full) they are all {@code s ≥ L − 1 − w} when {@code w ≥ 0}, and none when

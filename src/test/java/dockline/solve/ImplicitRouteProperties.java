@@ -78,9 +78,9 @@ class ImplicitRouteProperties {
     /**
      * The demo missions on the implicit route: the verdict and highest floor quoted in missions/README.md
      * (as the product route gives them), and a policy the checker certifies with the worst case the
-     * implicit route reports. The worst case itself may differ from the product route's (49 units on
-     * night-round): the implicit route's policy wins but does not finish in the fewest moves (83 units on
-     * night-round and 37 on supply-run in this version, against 49 and 24).
+     * implicit route reports. That worst case may differ from the product route's: the implicit policy
+     * wins but need not finish in the fewest moves (in this version 83 units on night-round and 37 on
+     * supply-run, against the product route's 49 and 24).
      */
     @ParameterizedTest
     @CsvSource({"missions/night-round.yaml, true, 83", "missions/supply-run.yaml, true, 40",
