@@ -93,6 +93,9 @@ public final class BenchReport {
         Map<String, Double> implicitOverBfs = ratioPerSize(res, "implicit", "implicit-bfs", false);
         ratios.put("implicitOverImplicitBfs", implicitOverBfs);
         ratios.put("earlyOverImplicit", ratioPerSize(res, "early", "implicit", false));
+        // the implicit route end to end with the policy walk and the worst case, against the BFS and the verdict alone
+        ratios.put("implicitPolicyOverImplicitBfs", ratioPerSize(res, "implicit-policy", "implicit-bfs", false));
+        ratios.put("implicitPolicyOverEarly", ratioPerSize(res, "implicit-policy", "early", false));
         ratios.put("sweepOverAttractor", ratioPerSize(res, "sweep", "attractor", false));
         ratios.put("fixpointOverAttractor", ratioPerSize(res, "fixpoint", "attractor", false));
         Map<String, Double> vi = ratioPerSize(Benchmark.DISCOUNTED, "vi", "attractor", false);

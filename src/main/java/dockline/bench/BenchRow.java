@@ -6,7 +6,7 @@ package dockline.bench;
  * @param size        side of the generated floor in cells (the floor is size × size)
  * @param instance    which mission on it: {@code reserve}, {@code consumption} or {@code discounted}
  * @param method      {@code attractor}, {@code compact}, {@code bfs}, {@code sweep}, {@code implicit},
- *                    {@code early}, {@code implicit-bfs}, {@code fixpoint}, {@code vi} or {@code fast}
+ *                    {@code early}, {@code implicit-bfs}, {@code implicit-policy}, {@code fixpoint}, {@code vi} or {@code fast}
  *                    (see {@link Benchmark})
  * @param vertices    vertices of the graph the method worked on (for a skipped product method: the estimate)
  * @param edges       edges of that graph

@@ -48,8 +48,9 @@ import java.util.function.Consumer;
  *       {@code compact} ({@code CompactAttractorSolver} on the same graph), {@code bfs} (plain
  *       breadth-first search over the same graph: the memory-bound floor), {@code sweep} (naive
  *       sweeps to the fixpoint on the same graph), {@code implicit} / {@code early} /
- *       {@code implicit-bfs} (the attractor, the attractor stopping once the start is won, and plain
- *       BFS, on {@code ImplicitReserveGame}, which stores no product graph), {@code fixpoint}
+ *       {@code implicit-bfs} / {@code implicit-policy} (the attractor, the attractor stopping once the
+ *       start is won, plain BFS, and the route end to end with the robot's choices, the policy walk and
+ *       the worst case, on {@code ImplicitReserveGame}, which stores no product graph), {@code fixpoint}
  *       (direct optimisation over energy levels on arena × goal, {@code MinimumCredit}).</li>
  *   <li>{@code consumption}: {@link MissionSpec#consumptionOnly} (no charging, 1,000 levels):
  *       {@code fast} ({@link MinChargeSolver}, stopping once the start is decided), and the other
@@ -347,7 +348,7 @@ public final class Benchmark {
         return rows;
     }
 
-    private static final String[] IMPLICIT_METHODS = {"implicit", "early", "implicit-bfs"};
+    private static final String[] IMPLICIT_METHODS = {"implicit", "early", "implicit-bfs", "implicit-policy"};
 
     /**
      * The implicit layout (ImplicitReserveGame: nothing stored but the solver's counters and queue):
@@ -389,6 +390,15 @@ public final class Benchmark {
         Timed<ImplicitReserveGame.Result> full = time(sampler, base, reps, () -> game.solve(false));
         Timed<ImplicitReserveGame.Result> early = time(sampler, base, reps, () -> game.solve(true));
         Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, reps, game::bfs);
+        // the implicit route end to end as ReserveSolver's Route.IMPLICIT runs it: the attractor with the
+        // robot's choices (stopping at the start), the policy walk and the worst-case DP over the closed loop
+        Timed<long[]> pol = time(sampler, base, reps, () -> {
+            ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
+            if (!st.startWon()) {
+                return new long[] {0, -1, st.result().edgesScanned(), 0};
+            }
+            return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
+        });
         rows.add(new BenchRow(inst.side, inst.kind, "implicit", all, full.value().edgesScanned(), 0, full.millis(),
                 full.cpuMillis(), full.peak(), Verdict.of(full.value().startWon()).word(), inst.arenaMillis + full.millis(), -1, -1,
                 String.format(java.util.Locale.ROOT, "implicit product (every triple, %d reachable); won %d",
@@ -402,6 +412,11 @@ public final class Benchmark {
         rows.add(new BenchRow(inst.side, inst.kind, "implicit-bfs", bfs.value().wonVertices(),
                 bfs.value().edgesScanned(), 0, bfs.millis(), bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
                 "plain BFS over the implicit product, from the start"));
+        long[] pv = pol.value();
+        rows.add(new BenchRow(inst.side, inst.kind, "implicit-policy", all, pv[2], 0, pol.millis(), pol.cpuMillis(),
+                pol.peak(), Verdict.of(pv[0] == 1).word(), inst.arenaMillis + pol.millis(), -1, -1,
+                pv[0] == 1 ? String.format(java.util.Locale.ROOT, "implicit route with the policy: %d rows, worst case %d units",
+                        pv[3], pv[1]) : "implicit route with the policy: not guaranteed, no policy"));
         return rows;
     }
 

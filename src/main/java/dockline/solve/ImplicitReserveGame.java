@@ -4,7 +4,10 @@ import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.util.LongIntMap;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -29,6 +32,11 @@ import java.util.function.BooleanSupplier;
  * product; memory one byte per slot of the padded numbering plus the stack; it can stop as soon as the start
  * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
  * the start (the memory-bound floor for this layout).
+ *
+ * <p>{@link #solveWithStrategy} also records the robot's choice (a byte per robot slot, written once
+ * when the slot is won), from which {@link #policy} walks the closed loop from the start and
+ * {@link #worstCaseMinimum} evaluates its lowest level (O(closed loop) each); this is the
+ * {@link ReserveOptions.Route#IMPLICIT} route of {@link ReserveSolver#analyse}.
  *
  * <p>The inversion of the battery update {@code s' = min(L − 1, s + w)}, below the floor rejected:
  * for {@code s' < L − 1} the only predecessor state is {@code s = s' − w} (when in range); for
@@ -136,17 +144,202 @@ public final class ImplicitReserveGame {
     }
 
     public Result solve(boolean stopAtStart, BooleanSupplier cancelled) {
-        return run(stopAtStart, cancelled, null);
+        return run(stopAtStart, cancelled, null, null);
+    }
+
+    /**
+     * A solve that also records the robot's choice: per robot slot one byte, the index (among the arena
+     * vertex's out-edges) of the action whose disturbance triple won it, written once, when the slot is
+     * won, by a successor won strictly earlier; so the closed loop of these choices is acyclic and every
+     * play of it reaches completion. Stops once the start is won (the closed loop from the start only
+     * visits vertices won before it). One more byte per robot slot than {@link #solve(boolean)}.
+     */
+    public Strategy solveWithStrategy(BooleanSupplier cancelled) {
+        byte[] choice = new byte[(int) ((long) arena.robotCount() << (gBits + lBits))];
+        Result r = run(true, cancelled, null, choice);
+        return new Strategy(r, choice);
+    }
+
+    /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
+    public static final class Strategy {
+        private final Result result;
+        private final byte[] choice;
+
+        private Strategy(Result result, byte[] choice) {
+            this.result = result;
+            this.choice = choice;
+        }
+
+        public Result result() {
+            return result;
+        }
+
+        public boolean startWon() {
+            return result.startWon();
+        }
+    }
+
+    /**
+     * The policy of the recorded choices: one row per robot triple of the closed loop from the start
+     * (robot follows its choice, disturbance plays every outcome), the same rows as
+     * {@link ProductGame#policy} gives for the same choices. O(closed loop); a bit per slot for the visited set.
+     *
+     * @throws IllegalArgumentException if the robot does not win from the start
+     */
+    public Policy policy(Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+        List<PolicyEntry> entries = new ArrayList<>();
+        int start = start();
+        if (start < 0) {
+            return new Policy(entries);
+        }
+        byte[] choice = strategy.choice;
+        final int rc = arena.robotCount();
+        long[] seen = new long[(int) (slotCount >>> 6) + 1];
+        int[] todo = new int[1 << 10];
+        int tail = 0;
+        seen[start >>> 6] |= 1L << start;
+        todo[tail++] = start;
+        int[] succ = new int[16];
+        while (tail > 0) {
+            int p = todo[--tail];
+            int s = p & ((1 << lBits) - 1);
+            int g = (p >>> lBits) & ((1 << gBits) - 1);
+            int x = p >>> (lBits + gBits);
+            int k;
+            if (x < rc) {
+                int d = arena.target(arena.outBegin(x) + choice[p]);
+                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
+                        goal.progressMask(g), arena.action(d)));
+                succ[0] = id(d, g, s);
+                k = 1;
+            } else {
+                k = outcomes(x, g, s, succ, null);
+            }
+            for (int i = 0; i < k; i++) {
+                int q = succ[i];
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    if (tail == todo.length) {
+                        todo = Arrays.copyOf(todo, tail * 2);
+                    }
+                    todo[tail++] = q;
+                }
+            }
+        }
+        return new Policy(entries);
+    }
+
+    /**
+     * The lowest battery level along any play of the closed loop of the recorded choices from the
+     * start, the level on arrival at completion included: W(robot p) = min(level p, W(chosen
+     * successor)); W(disturbance d) = min(level d, over outcomes W(successor) or the level on arrival
+     * when the outcome completes the mission). The closed loop is acyclic, so a depth-first
+     * post-order evaluates it in O(closed loop) (a hash map holds W).
+     */
+    public int worstCaseMinimum(Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+        int start = start();
+        if (start == -2) {
+            return monitor.level(monitor.initialState());
+        }
+        byte[] choice = strategy.choice;
+        final int rc = arena.robotCount();
+        LongIntMap worst = new LongIntMap(1 << 10);
+        int[] stack = new int[1 << 10];
+        int sp = 0;
+        stack[sp++] = start;
+        int[] succ = new int[16];
+        int[] arrive = new int[16];
+        while (sp > 0) {
+            int p = stack[sp - 1];
+            if (worst.get(p) != LongIntMap.ABSENT) {
+                sp--;
+                continue;
+            }
+            int s = p & ((1 << lBits) - 1);
+            int g = (p >>> lBits) & ((1 << gBits) - 1);
+            int x = p >>> (lBits + gBits);
+            int k;
+            if (x < rc) {
+                int d = arena.target(arena.outBegin(x) + choice[p]);
+                succ[0] = id(d, g, s);
+                arrive[0] = -1;
+                k = 1;
+            } else {
+                k = outcomes(x, g, s, succ, arrive);
+            }
+            int w = monitor.level(s);
+            boolean ready = true;
+            for (int i = 0; i < k; i++) {
+                if (arrive[i] >= 0) {
+                    w = Math.min(w, arrive[i]);
+                    continue;
+                }
+                int v = worst.get(succ[i]);
+                if (v == LongIntMap.ABSENT) {
+                    ready = false;
+                    if (sp == stack.length) {
+                        stack = Arrays.copyOf(stack, sp * 2);
+                    }
+                    stack[sp++] = succ[i];
+                } else {
+                    w = Math.min(w, v);
+                }
+            }
+            if (ready) {
+                worst.put(p, w);
+                sp--;
+            }
+        }
+        return worst.get(start);
+    }
+
+    /**
+     * The outcomes of disturbance triple (x, g, s) into {@code succ}: robot triples, or, for an outcome
+     * that completes the mission on a dock, -1 with the level on arrival in {@code arrive} (when given;
+     * else such outcomes are left out). Returns how many were written.
+     *
+     * @throws IllegalStateException if an outcome loses (the triple was not won)
+     */
+    private int outcomes(int x, int g, int s, int[] succ, int[] arrive) {
+        int k = 0;
+        for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
+            int s2 = monitor.step(s, arena.weight(e));
+            int a2 = arena.target(e);
+            int c2 = arena.cell(a2);
+            int g2 = s2 == Monitor.REJECT ? GoalAutomaton.REJECT : goal.step(g, arena.cellZones(c2));
+            if (g2 == GoalAutomaton.REJECT) {
+                throw new IllegalStateException("a choice of the closed loop leads to a loss");
+            }
+            if (goal.accepting(g2, arena.isDock(c2))) {
+                if (arrive != null) {
+                    succ[k] = -1;
+                    arrive[k++] = monitor.level(s2);
+                }
+                continue;
+            }
+            succ[k] = id(a2, g2, s2);
+            if (arrive != null) {
+                arrive[k] = -1;
+            }
+            k++;
+        }
+        return k;
     }
 
     /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
     boolean[] wonFlags() {
         boolean[][] out = new boolean[1][];
-        run(false, () -> false, out);
+        run(false, () -> false, out, null);
         return out[0];
     }
 
-    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut) {
+    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, byte[] choice) {
         int start = start();
         if (start < 0 && flagsOut == null) {
             return new Result(start == -2, 0, 0, false, vertexCount);
@@ -210,6 +403,10 @@ public final class ImplicitReserveGame {
                 int qs = (q & 1) << 2;
                 if (((count[q >>> 1] >>> qs) & 15) == 0) {
                     count[q >>> 1] |= (byte) (1 << qs);
+                    if (choice != null) {
+                        // p won strictly before q: the index of p's action among the owner's out-edges
+                        choice[q] = (byte) (arena.inEdge(from) - arena.outBegin(owner));
+                    }
                     if (sp == stack.length) {
                         stack = Arrays.copyOf(stack, sp * 2);
                     }

@@ -44,6 +44,9 @@ public final class ReserveSolver {
         int start = mission.startUnits();
         ReserveMonitor monitor = new ReserveMonitor(reserve, capacity, start);
         List<String> notes = new ArrayList<>();
+        if (options.route() == ReserveOptions.Route.IMPLICIT) {
+            return analyseImplicitly(mission, options, arena, goal, monitor, notes, t0);
+        }
 
         ProductGame game = ProductGame.fromStart(arena, goal, monitor, options.product());
         Solution sol = options.solver().create(game.graph(), options.product().cancelled()).solve();
@@ -90,6 +93,86 @@ public final class ReserveSolver {
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, capacity, mission.scale(), worst, highest,
                 searched, game.vertexCount(), game.edgeCount(), game.estimate(), millis(game.buildNanos()),
                 millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes);
+    }
+
+    /**
+     * {@link #analyse} on {@link ImplicitReserveGame} ({@link ReserveOptions.Route#IMPLICIT}): verdict,
+     * policy and worst case from the recorded choices, no stored product; the highest floor by bisection
+     * over implicit verdicts (exact: winning is monotone in the floor); the heat map, when asked for, on
+     * the product as before. The analysis carries no game and no solution (null).
+     */
+    private static ReserveAnalysis analyseImplicitly(Mission mission, ReserveOptions options, Arena arena,
+                                                     GoalAutomaton goal, ReserveMonitor monitor, List<String> notes,
+                                                     long t0) {
+        ProductOptions po = options.product();
+        int start = mission.startUnits();
+        int reserve = monitor.floorUnits();
+        ImplicitReserveGame game = implicitGame(arena, goal, monitor, po);
+        ImplicitReserveGame.Strategy st = game.solveWithStrategy(po.cancelled());
+        long built = System.nanoTime();
+        boolean won = st.startWon();
+        Optional<Policy> policy = Optional.empty();
+        OptionalInt worst = OptionalInt.empty();
+        if (won) {
+            policy = Optional.of(game.policy(st));
+            worst = OptionalInt.of(game.worstCaseMinimum(st));
+        }
+        long solved = System.nanoTime();
+        Optional<ChargeNeeded> heat = Optional.empty();
+        if (options.chargeNeeded()) {
+            heat = Optional.of(ChargeNeeded.compute(arena, goal, monitor, po, options.solver()));
+        }
+        OptionalInt highest = OptionalInt.empty();
+        boolean searched = false;
+        if (options.highestReserve() || options.safestPolicy()) {
+            try {
+                int lo = won ? worst.getAsInt() : -1;
+                int hi = won ? start : Math.min(start, reserve - 1);
+                while (lo < hi) {
+                    int mid = (lo + hi + 1) >>> 1;
+                    if (implicitGame(arena, goal, monitor.withFloor(mid), po).solve(true, po.cancelled()).startWon()) {
+                        lo = mid;
+                    } else {
+                        hi = mid - 1;
+                    }
+                }
+                highest = lo >= 0 ? OptionalInt.of(lo) : OptionalInt.empty();
+                searched = true;
+            } catch (ProductTooLargeException e) {
+                notes.add("highest guaranteed reserve not computed: a lower floor gives a larger game, and "
+                        + e.getMessage());
+            }
+        }
+        int policyFloor = reserve;
+        if (options.safestPolicy() && won && highest.isPresent() && highest.getAsInt() > worst.getAsInt()) {
+            policyFloor = highest.getAsInt();
+            ImplicitReserveGame safest = implicitGame(arena, goal, monitor.withFloor(policyFloor), po);
+            ImplicitReserveGame.Strategy ss = safest.solveWithStrategy(po.cancelled());
+            policy = Optional.of(safest.policy(ss));
+            worst = OptionalInt.of(safest.worstCaseMinimum(ss));
+        }
+        long t1 = System.nanoTime();
+        SizeEstimate size = new SizeEstimate(game.vertexCount(), st.result().edgesScanned(),
+                implicitBytes(game, arena), 0);
+        return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, mission.capacityUnits(), mission.scale(),
+                worst, highest, searched, game.vertexCount(), st.result().edgesScanned(), size,
+                millis(built - t0), millis(solved - t0), millis(t1 - t0), policy, policyFloor, null, null, heat, notes);
+    }
+
+    /** Counters (half a byte per slot), choices (a byte per robot slot) and the inlined reverse CSR (9 B per edge). */
+    private static long implicitBytes(ImplicitReserveGame game, Arena arena) {
+        return game.slotCount() / 2 + game.slotCount() + 9L * arena.edgeCount();
+    }
+
+    private static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
+                                                    ProductOptions po) {
+        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
+        long bytes = implicitBytes(game, arena);
+        long budget = po.effectiveMemoryBudget();
+        if (bytes > budget) {
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), 0, bytes, 0), budget, false);
+        }
+        return game;
     }
 
     /** Verdict only (no policy, no search), for callers that probe many variants. */

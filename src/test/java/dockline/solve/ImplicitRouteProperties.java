@@ -1,0 +1,102 @@
+package dockline.solve;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.bench.TinyMissions;
+import dockline.certify.Certificate;
+import dockline.certify.CertificateChecker;
+import dockline.goal.GoalAutomaton;
+import dockline.io.MissionLoader;
+import dockline.model.Mission;
+import java.nio.file.Path;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * The implicit route of {@link ReserveSolver#analyse} ({@link ReserveOptions.Route#IMPLICIT}) on random
+ * small missions. Oracles: the brute-force solver {@link BruteForceReserve} (the textbook attractor
+ * characterisation, Grädel, Thomas, Wilke (eds.), 2002, "Automata, Logics, and Infinite Games", ch. 2)
+ * for the verdict, and the independent {@link CertificateChecker} for the policy and its worst case
+ * (the checker rebuilds the closed loop from the policy rows alone and computes its own minimum).
+ */
+class ImplicitRouteProperties {
+
+    private static final ReserveOptions IMPLICIT =
+            ReserveOptions.defaults().withHighestReserve(false).withRoute(ReserveOptions.Route.IMPLICIT);
+
+    /** Same verdict as brute force and the product route; a policy the checker certifies, with the checker's worst case. */
+    @Property(tries = 300)
+    void implicitRoute_certifiedPolicyAndWorstCase(@ForAll long seed, @ForAll boolean charging) {
+        Mission m = TinyMissions.random(seed, charging);
+        ReserveAnalysis imp = ReserveSolver.analyse(m, IMPLICIT);
+        ReserveAnalysis ref = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false));
+        Arena arena = ArenaCompiler.compile(m);
+        BruteForceReserve brute = new BruteForceReserve(arena, GoalAutomaton.of(m));
+        assertThat(imp.guaranteed()).isEqualTo(brute.guaranteed());
+        assertThat(imp.verdict()).isEqualTo(ref.verdict());
+        assertThat(imp.policy().isPresent()).isEqualTo(imp.guaranteed());
+        if (!imp.guaranteed()) {
+            assertThat(imp.worstCaseMinimumUnits()).isEmpty();
+            return;
+        }
+        Certificate cert = CertificateChecker.check(arena, imp.policy().orElseThrow(), imp.reserveUnits(),
+                imp.startUnits());
+        assertThat(cert.ok()).as(cert.reason()).isTrue();
+        assertThat(imp.worstCaseMinimumUnits().getAsInt()).isEqualTo(cert.worstMinimumUnits());
+        assertThat(imp.worstCaseMinimumUnits().getAsInt()).isGreaterThanOrEqualTo(imp.reserveUnits());
+    }
+
+    /** The highest guaranteed floor (bisection over implicit verdicts) equals the product route's. */
+    @Property(tries = 150)
+    void implicitRoute_highestFloorAgrees(@ForAll long seed, @ForAll boolean charging) {
+        Mission m = TinyMissions.random(seed, charging);
+        ReserveAnalysis imp = ReserveSolver.analyse(m, ReserveOptions.defaults().withRoute(ReserveOptions.Route.IMPLICIT));
+        ReserveAnalysis ref = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        assertThat(imp.highestGuaranteedReserveUnits()).isEqualTo(ref.highestGuaranteedReserveUnits());
+    }
+
+    /** The safest policy of the implicit route keeps the battery at or above the highest floor (checker). */
+    @Property(tries = 150)
+    void implicitRoute_safestPolicyCertifiedAtTheHighestFloor(@ForAll long seed, @ForAll boolean charging) {
+        Mission m = TinyMissions.random(seed, charging);
+        ReserveAnalysis imp = ReserveSolver.analyse(m, ReserveOptions.defaults().withSafestPolicy(true)
+                .withRoute(ReserveOptions.Route.IMPLICIT));
+        if (!imp.guaranteed()) {
+            return;
+        }
+        Certificate cert = CertificateChecker.check(ArenaCompiler.compile(m), imp.policy().orElseThrow(),
+                imp.policyFloorUnits(), imp.startUnits());
+        assertThat(cert.ok()).as(cert.reason()).isTrue();
+        assertThat(imp.worstCaseMinimumUnits().getAsInt()).isEqualTo(cert.worstMinimumUnits());
+        assertThat(imp.worstCaseMinimumUnits().getAsInt()).isEqualTo(imp.highestGuaranteedReserveUnits().getAsInt());
+    }
+
+    /**
+     * The demo missions on the implicit route: the verdict and highest floor quoted in missions/README.md
+     * (as the product route gives them), and a policy the checker certifies with the worst case the
+     * implicit route reports. That worst case may differ from the product route's: the implicit policy
+     * wins but need not finish in the fewest moves (in this version 83 units on night-round and 37 on
+     * supply-run, against the product route's 49 and 24).
+     */
+    @ParameterizedTest
+    @CsvSource({"missions/night-round.yaml, true, 83", "missions/supply-run.yaml, true, 40",
+            "missions/late-return.yaml, false, 46"})
+    void demoMission_implicitRoute(String file, boolean guaranteed, int highest) throws Exception {
+        Mission m = MissionLoader.load(Path.of(file));
+        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withRoute(ReserveOptions.Route.IMPLICIT));
+        assertThat(a.guaranteed()).as(file).isEqualTo(guaranteed);
+        assertThat(a.highestGuaranteedReserveUnits().orElse(-1)).as(file).isEqualTo(highest);
+        if (guaranteed) {
+            Certificate cert = CertificateChecker.check(ArenaCompiler.compile(m), a.policy().orElseThrow(),
+                    a.reserveUnits(), a.startUnits());
+            assertThat(cert.ok()).as(cert.reason()).isTrue();
+            assertThat(a.worstCaseMinimumUnits().getAsInt()).isEqualTo(cert.worstMinimumUnits());
+            // a policy whose worst level is w guarantees the floor w, so w cannot exceed the highest floor
+            assertThat(a.worstCaseMinimumUnits().getAsInt()).isBetween(a.reserveUnits(), highest);
+        }
+    }
+}
