@@ -216,13 +216,8 @@ public final class CheckCommand implements Callable<Integer> {
         o.put("policyFloorUnits", a.policyFloorUnits());
         o.put("unitWh", a.scale().unitWh().stripTrailingZeros());
         o.put("budget", m.map().disturbances().budget());
-        o.put("productVertices", a.productVertices());
-        o.put("productEdges", a.productEdges());
-        o.put("estimatedVertices", a.estimate().vertices());
-        o.put("estimatedEdges", a.estimate().edges());
-        o.put("buildMillis", a.buildMillis());
-        o.put("solveMillis", a.solveMillis());
-        o.put("totalMillis", a.totalMillis());
+        Json.putGameSize(o, a.productVertices(), a.productEdges(), a.estimate(), a.buildMillis(), a.solveMillis(),
+                a.totalMillis());
         if (a.policy().isPresent()) {
             o.put("policyRows", a.policy().get().size());
         } else {

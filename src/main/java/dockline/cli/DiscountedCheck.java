@@ -311,13 +311,8 @@ final class DiscountedCheck {
         a.nominalPlan().forEach(x -> plan.add(x.toString()));
         o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
         o.put("budget", m.map().disturbances().budget());
-        o.put("productVertices", a.productVertices());
-        o.put("productEdges", a.productEdges());
-        o.put("estimatedVertices", a.estimate().vertices());
-        o.put("estimatedEdges", a.estimate().edges());
-        o.put("buildMillis", a.buildMillis());
-        o.put("solveMillis", a.solveMillis());
-        o.put("totalMillis", a.totalMillis());
+        Json.putGameSize(o, a.productVertices(), a.productEdges(), a.estimate(), a.buildMillis(), a.solveMillis(),
+                a.totalMillis());
         if (a.baseline().isPresent()) {
             DiscountedAnalysis.Baseline b = a.baseline().get();
             ObjectNode bo = o.putObject("optimisationBaseline");

@@ -39,6 +39,22 @@ final class Json {
         }
     }
 
+    /**
+     * Puts the size and timing of a solved product game, the same keys in the same order for every
+     * objective: {@code productVertices}, {@code productEdges}, {@code estimatedVertices},
+     * {@code estimatedEdges}, {@code buildMillis}, {@code solveMillis}, {@code totalMillis}.
+     */
+    static void putGameSize(ObjectNode o, long vertices, long edges, dockline.solve.SizeEstimate estimate,
+                            long buildMillis, long solveMillis, long totalMillis) {
+        o.put("productVertices", vertices);
+        o.put("productEdges", edges);
+        o.put("estimatedVertices", estimate.vertices());
+        o.put("estimatedEdges", estimate.edges());
+        o.put("buildMillis", buildMillis);
+        o.put("solveMillis", solveMillis);
+        o.put("totalMillis", totalMillis);
+    }
+
     /** The object as text (no final line break), after adding the {@code caveats} array. */
     static String withCaveats(ObjectNode o) {
         ArrayNode caveats = o.putArray("caveats");
