@@ -18,13 +18,15 @@ import java.util.Optional;
  * <p>Ratios compare CPU times (the solving thread's, plus the garbage collector's pauses; wall clock
  * where the platform cannot tell), which other processes on a shared machine disturb much less than
  * wall-clock times.
- * Ratios (per floor size unless noted): {@code attractorOverBfs}, {@code sweepOverAttractor},
- * {@code fixpointOverAttractor} (solve times on the reserve instance), {@code viOverComparator}
- * (value iteration against comparator product build + attractor, discounted instance),
- * {@code peakBytesPerVertex} (attractor, reserve instance), {@code estimateOverActual} (the product
- * size estimate against the real size), {@code fastWallMillis} (fast path: arena compile + solve),
- * and one number {@code attractorSlope}: the least-squares slope of log(attractor solve time)
- * against log(product edges) over the reserve sizes that ran.
+ * Ratios (per floor size unless noted): {@code attractorOverBfs} (the main route, the implicit
+ * product, against plain BFS over it), {@code sweepOverAttractor} (naive sweeps against the attractor,
+ * both on the stored product), {@code fixpointOverAttractor} (solve times on the reserve instance),
+ * {@code viOverComparator} (value iteration against comparator product build + attractor, discounted
+ * instance), {@code peakBytesPerVertex} (main route, per product vertex reachable from the start),
+ * {@code estimateOverActual} (the pre-build forecast against the real size), {@code fastWallMillis}
+ * (fast path: arena compile + solve), the {@code stored...} figures of the stored CSR product, and
+ * one number {@code attractorSlope}: the least-squares slope of log(attractor time) against
+ * log(product edges) over the reserve sizes that ran.
  */
 public final class BenchReport {
 
@@ -86,54 +88,51 @@ public final class BenchReport {
 
     private void computeRatios() {
         String res = Benchmark.RESERVE;
-        // the main route solves with CompactAttractorSolver (ReserveOptions' default); AttractorSolver is the reference
-        ratios.put("attractorOverBfs", ratioPerSize(res, "attractor", "bfs", false));
-        Map<String, Double> overBfs = ratioPerSize(res, "compact", "bfs", false);
-        ratios.put("compactOverBfs", overBfs);
-        Map<String, Double> implicitOverBfs = ratioPerSize(res, "implicit", "implicit-bfs", false);
-        ratios.put("implicitOverImplicitBfs", implicitOverBfs);
-        ratios.put("earlyOverImplicit", ratioPerSize(res, "early", "implicit", false));
-        // the implicit route end to end with the policy walk and the worst case, against the BFS and the verdict alone
-        ratios.put("implicitPolicyOverImplicitBfs", ratioPerSize(res, "implicit-policy", "implicit-bfs", false));
-        ratios.put("implicitPolicyOverEarly", ratioPerSize(res, "implicit-policy", "early", false));
-        ratios.put("sweepOverAttractor", ratioPerSize(res, "sweep", "attractor", false));
+        // the main route is the implicit product (ReserveOptions' default); the stored CSR product is the reference
+        Map<String, Double> overBfs = ratioPerSize(res, "attractor", "bfs", false);
+        ratios.put("attractorOverBfs", overBfs);
+        ratios.put("fullOverBfs", ratioPerSize(res, "full", "bfs", false));
+        ratios.put("earlyOverAttractor", ratioPerSize(res, "early", "attractor", false));
+        ratios.put("storedAttractorOverStoredBfs", ratioPerSize(res, "stored-attractor", "stored-bfs", false));
+        ratios.put("storedCompactOverStoredBfs", ratioPerSize(res, "stored-compact", "stored-bfs", false));
+        // the stored route's solve alone (its build excluded) against the main route end to end
+        ratios.put("storedCompactOverAttractor", ratioPerSize(res, "stored-compact", "attractor", false));
+        // naive sweeps against the attractor on the same (stored) graph, as in the reference figures
+        ratios.put("sweepOverAttractor", ratioPerSize(res, "sweep", "stored-attractor", false));
         ratios.put("fixpointOverAttractor", ratioPerSize(res, "fixpoint", "attractor", false));
         Map<String, Double> vi = ratioPerSize(Benchmark.DISCOUNTED, "vi", "attractor", false);
         ratios.put("viOverComparator", vi);
         Map<String, Double> bpv = new LinkedHashMap<>();
         Map<String, Double> est = new LinkedHashMap<>();
-        Map<String, Double> fc = new LinkedHashMap<>();
         List<double[]> pts = new ArrayList<>();
         for (int s : sizes(res, "attractor")) {
             BenchRow a = row(s, res, "attractor").orElseThrow();
-            BenchRow main = row(s, res, "compact").orElse(a);
-            bpv.put(Integer.toString(s), round(main.bytesPerVertex()));
-            if (a.estimatedVertices() > 0) {
-                est.put(Integer.toString(s), round(a.estimatedVertices() / (double) a.vertices()));
-            }
+            bpv.put(Integer.toString(s), round(a.bytesPerVertex()));
             if (a.forecastVertices() > 0) {
-                fc.put(Integer.toString(s), round(a.forecastVertices() / (double) a.vertices()));
+                est.put(Integer.toString(s), round(a.forecastVertices() / (double) a.vertices()));
             }
-            pts.add(new double[] {Math.log(main.edges()), Math.log(Math.max(main.ratioMillis(), 1e-3))});
+            pts.add(new double[] {Math.log(a.edges()), Math.log(Math.max(a.ratioMillis(), 1e-3))});
         }
         ratios.put("peakBytesPerVertex", bpv);
-        Map<String, Double> ibpv = new LinkedHashMap<>();
-        List<double[]> ipts = new ArrayList<>();
-        for (int s : sizes(res, "implicit")) {
-            BenchRow a = row(s, res, "implicit").orElseThrow();
-            Optional<BenchRow> b = row(s, res, "implicit-bfs");
-            if (b.isPresent()) {
-                ibpv.put(Integer.toString(s), round(a.peakBytes() / (double) Math.max(1, b.get().vertices())));
-                ipts.add(new double[] {Math.log(b.get().edges()), Math.log(Math.max(a.ratioMillis(), 1e-3))});
-            }
-        }
-        ratios.put("implicitPeakBytesPerReachableVertex", ibpv);
         ratios.put("estimateOverActual", est);
-        ratios.put("forecastOverActual", fc);
+        Map<String, Double> sbpv = new LinkedHashMap<>();
+        Map<String, Double> sest = new LinkedHashMap<>();
+        List<double[]> spts = new ArrayList<>();
+        for (int s : sizes(res, "stored-attractor")) {
+            BenchRow a = row(s, res, "stored-attractor").orElseThrow();
+            BenchRow c = row(s, res, "stored-compact").orElse(a);
+            sbpv.put(Integer.toString(s), round(c.bytesPerVertex()));
+            if (a.estimatedVertices() > 0) {
+                sest.put(Integer.toString(s), round(a.estimatedVertices() / (double) a.vertices()));
+            }
+            spts.add(new double[] {Math.log(c.edges()), Math.log(Math.max(c.ratioMillis(), 1e-3))});
+        }
+        ratios.put("storedPeakBytesPerVertex", sbpv);
+        ratios.put("storedEstimateOverActual", sest);
         Double slope = pts.size() >= 2 ? round(slope(pts)) : null;
         ratios.put("attractorSlope", slope);
-        Double islope = ipts.size() >= 2 ? round(slope(ipts)) : null;
-        ratios.put("implicitSlope", islope);
+        Double sslope = spts.size() >= 2 ? round(slope(spts)) : null;
+        ratios.put("storedSlope", sslope);
         Map<String, Double> fastWall = new LinkedHashMap<>();
         for (int s : sizes(Benchmark.CONSUMPTION, "fast")) {
             fastWall.put(Integer.toString(s), round(row(s, Benchmark.CONSUMPTION, "fast").orElseThrow().wallMillis()));
@@ -142,16 +141,10 @@ public final class BenchReport {
 
         // targets
         double maxOverBfs = overBfs.values().stream().mapToDouble(Double::doubleValue).max().orElse(Double.NaN);
-        targets.add(target("attractor time <= 1.5x plain BFS over the same product graph at every size (main route: compact)",
+        targets.add(target("attractor time <= 1.5x plain BFS over the same product graph at every size (main route)",
                 "max " + fmt(maxOverBfs) + " " + overBfs, !overBfs.isEmpty() && maxOverBfs <= 1.5));
-        double maxImp = implicitOverBfs.values().stream().mapToDouble(Double::doubleValue).max().orElse(Double.NaN);
-        targets.add(target("  the same with the implicit layout (attractor against BFS over the implicit product)",
-                "max " + fmt(maxImp) + " " + implicitOverBfs, !implicitOverBfs.isEmpty() && maxImp <= 1.5));
-        targets.add(target("log-log slope of attractor time against product edges in 0.9..1.15 (main route: compact)",
+        targets.add(target("log-log slope of attractor time against product edges in 0.9..1.15 (main route)",
                 slope == null ? "fewer than two sizes ran" : fmt(slope), slope != null && slope >= 0.9 && slope <= 1.15));
-        targets.add(target("  the same with the implicit layout (against the reachable product's edges)",
-                islope == null ? "fewer than two sizes ran" : fmt(islope),
-                islope != null && islope >= 0.9 && islope <= 1.15));
         List<Double> from64 = new ArrayList<>();
         vi.forEach((k, v) -> {
             if (Integer.parseInt(k) >= 64) {
@@ -164,19 +157,13 @@ public final class BenchReport {
         }
         targets.add(target("discounted: comparator product + attractor faster than value iteration from 64x64 up,"
                 + " ratio not shrinking", vi.isEmpty() ? "not measured" : vi.toString(), viOk));
-        Optional<BenchRow> largest = rows.stream().filter(r -> r.instance().equals(res) && r.method().equals("compact")
+        Optional<BenchRow> largest = rows.stream().filter(r -> r.instance().equals(res) && r.method().equals("attractor")
                 && r.ran()).max((x, y) -> Long.compare(x.vertices(), y.vertices()));
-        targets.add(target("peak heap <= 64 bytes per product vertex on the largest product that fits (main route: compact)",
+        targets.add(target("peak heap <= 64 bytes per product vertex on the largest product that fits (main route,"
+                        + " per vertex reachable from the start)",
                 largest.map(r -> fmt(r.bytesPerVertex()) + " B/vertex at " + r.size() + "x" + r.size() + " ("
                         + r.vertices() + " vertices)").orElse("no product ran"),
                 largest.isPresent() && largest.get().bytesPerVertex() <= 64));
-        Optional<BenchRow> largestImp = rows.stream().filter(r -> r.instance().equals(res)
-                && r.method().equals("implicit-bfs") && r.ran()).max((x, y) -> Long.compare(x.vertices(), y.vertices()));
-        Optional<Double> impBpv = largestImp.map(r -> ibpv.get(Integer.toString(r.size())));
-        targets.add(target("  the same with the implicit layout (peak of the full attractor per reachable vertex)",
-                largestImp.map(r -> fmt(impBpv.orElse(Double.NaN)) + " B/vertex at " + r.size() + "x" + r.size()
-                        + " (" + r.vertices() + " reachable vertices)").orElse("did not run"),
-                impBpv.isPresent() && impBpv.get() <= 64));
         Optional<BenchRow> fast512 = row(512, Benchmark.CONSUMPTION, "fast");
         targets.add(target("fast path: 512x512, K=2, 1,000 levels decided in <= 3 s wall (arena compile + solve)",
                 fast512.map(r -> fmt(r.wallMillis()) + " ms").orElse("512x512 not run"),
@@ -186,10 +173,8 @@ public final class BenchReport {
                 check512.map(r -> fmt(r.wallMillis()) + " ms").orElse("512x512 not run"),
                 check512.isPresent() && check512.get().wallMillis() <= 3000));
         double worstEst = est.values().stream().mapToDouble(v -> Math.abs(v - 1)).max().orElse(Double.NaN);
-        targets.add(target("pre-build size estimate within 20% of the real product (main route's estimate)",
+        targets.add(target("pre-build size estimate within 20% of the real product (main route: ReserveSizeForecast)",
                 est.toString(), !est.isEmpty() && worstEst <= 0.2));
-        double worstFc = fc.values().stream().mapToDouble(v -> Math.abs(v - 1)).max().orElse(Double.NaN);
-        targets.add(target("  the same with ReserveSizeForecast", fc.toString(), !fc.isEmpty() && worstFc <= 0.2));
         targets.add(target("every method gives the same verdict on each instance",
                 mismatches.isEmpty() ? "all agree" : mismatches.toString(), mismatches.isEmpty()));
     }

@@ -266,7 +266,7 @@ public final class Benchmark {
         return new Timed<>(value, best, bestCpu, peak);
     }
 
-    private static final String[] CSR_METHODS = {"attractor", "compact", "bfs", "sweep"};
+    private static final String[] CSR_METHODS = {"stored-attractor", "stored-compact", "stored-bfs", "sweep"};
 
     /**
      * The main route as landed (ProductGame: the product built from the start in CSR arrays, solved by
@@ -316,7 +316,7 @@ public final class Benchmark {
         double wall0 = inst.arenaMillis + buildMs;
 
         Timed<Solution> at = time(sampler, base, reps, () -> new AttractorSolver(game.graph()).solve());
-        rows.add(new BenchRow(inst.side, inst.kind, "attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
+        rows.add(new BenchRow(inst.side, inst.kind, "stored-attractor", n, edges, buildMs, at.millis(), at.cpuMillis(),
                 Math.max(buildPeak, at.peak()), Verdict.of(at.value().winning(game.start())).word(), wall0 + at.millis(),
                 est.vertices(), forecast.vertices(), String.format(java.util.Locale.ROOT,
                         "ProductGame + AttractorSolver (the reference solver); ProductGame's estimate %.2fx the real size,"
@@ -324,14 +324,14 @@ public final class Benchmark {
                         est.vertices() / (double) n, forecast.vertices() / (double) n, forecastMs)));
 
         Timed<Solution> ct = time(sampler, base, reps, () -> new CompactAttractorSolver(game.graph()).solve());
-        rows.add(new BenchRow(inst.side, inst.kind, "compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
+        rows.add(new BenchRow(inst.side, inst.kind, "stored-compact", n, edges, buildMs, ct.millis(), ct.cpuMillis(),
                 Math.max(buildPeak, ct.peak()), Verdict.of(ct.value().winning(game.start())).word(),
-                wall0 + ct.millis(), -1, -1, "main route: the same product graph, CompactAttractorSolver (ReserveOptions default)"));
+                wall0 + ct.millis(), -1, -1, "the same stored product graph, CompactAttractorSolver (check --method stored)"));
 
         Timed<GraphBaselines.Traversal> bt = time(sampler, base, reps, () -> GraphBaselines.bfs(game.graph(), game.start()));
-        rows.add(new BenchRow(inst.side, inst.kind, "bfs", bt.value().vertices(), bt.value().edges(), buildMs,
+        rows.add(new BenchRow(inst.side, inst.kind, "stored-bfs", bt.value().vertices(), bt.value().edges(), buildMs,
                 bt.millis(), bt.cpuMillis(), Math.max(buildPeak, bt.peak()), null, wall0 + bt.millis(), -1, -1,
-                "plain BFS over the same product graph, from the start"));
+                "plain BFS over the same stored product graph, from the start"));
 
         long cap = warmup ? 2_000 : config.sweepCapMillis();
         long deadline = System.nanoTime() + cap * 1_000_000L;
@@ -348,11 +348,16 @@ public final class Benchmark {
         return rows;
     }
 
-    private static final String[] IMPLICIT_METHODS = {"implicit", "early", "implicit-bfs", "implicit-policy"};
+    private static final String[] IMPLICIT_METHODS = {"attractor", "bfs", "full", "early"};
 
     /**
-     * The implicit layout (ImplicitReserveGame: nothing stored but the solver's counters and queue):
-     * the full attractor, the attractor stopping once the start is won, and plain BFS over it.
+     * The main route (ImplicitReserveGame, ReserveOptions' default: the product's moves generated on
+     * demand, nothing stored but the solver's counters, choices and worklist): {@code attractor} is the
+     * route as check runs it (the first-in first-out attractor recording the robot's choices, stopping
+     * once the start is won, then the policy walk and the worst case over the closed loop); {@code bfs}
+     * is plain BFS over the same product from the start; {@code full} the last-in first-out attractor
+     * to the end (the whole winning region), {@code early} the same stopping once the start is won
+     * (check --verdict-only).
      */
     private List<BenchRow> implicitMethods(Instance inst, HeapSampler sampler, int reps) {
         List<BenchRow> rows = new ArrayList<>();
@@ -385,6 +390,12 @@ public final class Benchmark {
             }
             return rows;
         }
+        long forecast;
+        try {
+            forecast = ReserveSizeForecast.of(inst.arena, inst.goal, monitor).vertices();
+        } catch (ArithmeticException tooManyPairs) {
+            forecast = -1;
+        }
         long base = HeapSampler.settledUsed();
         long all = game.vertexCount();
         Timed<ImplicitReserveGame.Result> full = time(sampler, base, reps, () -> game.solve(false));
@@ -399,24 +410,27 @@ public final class Benchmark {
             }
             return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
         });
-        rows.add(new BenchRow(inst.side, inst.kind, "implicit", all, full.value().edgesScanned(), 0, full.millis(),
+        long[] pv = pol.value();
+        long reachable = bfs.value().wonVertices();
+        rows.add(new BenchRow(inst.side, inst.kind, "attractor", reachable, bfs.value().edgesScanned(), 0, pol.millis(),
+                pol.cpuMillis(), pol.peak(), Verdict.of(pv[0] == 1).word(), inst.arenaMillis + pol.millis(), -1,
+                forecast, String.format(java.util.Locale.ROOT, "main route: implicit product (%d triples, %d reachable),"
+                                + " attractor with the robot's choices, %d edges scanned; %s", all, reachable, pv[2],
+                        pv[0] == 1 ? String.format(java.util.Locale.ROOT, "policy of %d rows, worst case %d units",
+                                pv[3], pv[1]) : "not guaranteed, no policy")));
+        rows.add(new BenchRow(inst.side, inst.kind, "bfs", reachable, bfs.value().edgesScanned(), 0, bfs.millis(),
+                bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
+                "plain BFS over the same implicit product, from the start"));
+        rows.add(new BenchRow(inst.side, inst.kind, "full", all, full.value().edgesScanned(), 0, full.millis(),
                 full.cpuMillis(), full.peak(), Verdict.of(full.value().startWon()).word(), inst.arenaMillis + full.millis(), -1, -1,
-                String.format(java.util.Locale.ROOT, "implicit product (every triple, %d reachable); won %d",
-                        bfs.value().wonVertices(), full.value().wonVertices())));
+                String.format(java.util.Locale.ROOT, "implicit product, last-in first-out attractor to the end: won %d"
+                        + " of %d triples", full.value().wonVertices(), all)));
         rows.add(new BenchRow(inst.side, inst.kind, "early", all, early.value().edgesScanned(), 0, early.millis(),
                 early.cpuMillis(), early.peak(), Verdict.of(early.value().startWon()).word(), inst.arenaMillis + early.millis(), -1, -1,
-                String.format(java.util.Locale.ROOT, "implicit, stops once the start is won: %s; won %d (%.0f%% of"
-                                + " the full attractor's)", early.value().stoppedEarly() ? "stopped early" : "ran to the end",
-                        early.value().wonVertices(),
+                String.format(java.util.Locale.ROOT, "implicit, stops once the start is won (check --verdict-only): %s;"
+                                + " won %d (%.0f%% of the full attractor's)",
+                        early.value().stoppedEarly() ? "stopped early" : "ran to the end", early.value().wonVertices(),
                         100.0 * early.value().wonVertices() / Math.max(1, full.value().wonVertices()))));
-        rows.add(new BenchRow(inst.side, inst.kind, "implicit-bfs", bfs.value().wonVertices(),
-                bfs.value().edgesScanned(), 0, bfs.millis(), bfs.cpuMillis(), bfs.peak(), null, inst.arenaMillis + bfs.millis(), -1, -1,
-                "plain BFS over the implicit product, from the start"));
-        long[] pv = pol.value();
-        rows.add(new BenchRow(inst.side, inst.kind, "implicit-policy", all, pv[2], 0, pol.millis(), pol.cpuMillis(),
-                pol.peak(), Verdict.of(pv[0] == 1).word(), inst.arenaMillis + pol.millis(), -1, -1,
-                pv[0] == 1 ? String.format(java.util.Locale.ROOT, "implicit route with the policy: %d rows, worst case %d units",
-                        pv[3], pv[1]) : "implicit route with the policy: not guaranteed, no policy"));
         return rows;
     }
 

@@ -91,11 +91,12 @@ public final class CheckCommand implements Callable<Integer> {
                 return routed; // the fast path or a verdict-only route
             }
             ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults()
-                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(safest.on));
+                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(safest.on)
+                    .withRoute(route.stored() ? ReserveOptions.Route.PRODUCT : ReserveOptions.Route.IMPLICIT));
             // never a silent "guaranteed": the policy is re-checked on an independent code path
             Certificate cert = null;
             if (a.guaranteed()) {
-                cert = CertificateChecker.check(a.game().arena(), a.policy().orElseThrow(), a.reserveUnits(),
+                cert = CertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
                         a.startUnits());
                 if (!cert.ok()) {
                     err.println("dockline: internal error: the solver says guaranteed, but its policy failed the"
@@ -149,9 +150,16 @@ public final class CheckCommand implements Callable<Integer> {
         }
         out.println("  Start " + amount(a.startUnits(), a) + ", reserve floor " + amount(a.reserveUnits(), a)
                 + ", capacity " + s.formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
-        out.println("  Method: product game (arena x goal x battery levels) and attractor");
-        out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
-                + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
+        if (a.storedProduct()) {
+            out.println("  Method: product game (arena x goal x battery levels) stored in arrays, and attractor");
+            out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
+                    + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
+        } else {
+            out.println("  Method: product game (arena x goal x battery levels) with its moves generated on demand,"
+                    + " and attractor");
+            out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges scanned; solved in "
+                    + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
+        }
         out.println("  Energy: " + s.describe());
         if (cert != null) {
             out.println("  certified: " + cert.ok() + " (the policy re-checked independently over " + cert.statesChecked()
@@ -206,7 +214,7 @@ public final class CheckCommand implements Callable<Integer> {
         o.put("mission", m.name());
         o.put("file", m.source() == null ? null : m.source().toString());
         o.put("verdict", a.verdict().word());
-        o.put("method", "product");
+        o.put("method", a.storedProduct() ? "stored-product" : "product");
         o.put("startUnits", a.startUnits());
         o.put("reserveUnits", a.reserveUnits());
         o.put("capacityUnits", a.capacityUnits());

@@ -30,11 +30,12 @@ import picocli.CommandLine.Option;
 final class CheckRoute {
 
     /** The route asked for on the command line. */
-    enum Method { AUTO, FAST, PRODUCT }
+    enum Method { AUTO, FAST, PRODUCT, STORED }
 
     @Option(names = "--method", paramLabel = "ROUTE", defaultValue = "auto",
             description = "auto (default: the fast path when the robot cannot charge before the end, else the product"
-                    + " game), fast, or product")
+                    + " game with its moves generated on demand), fast, product, or stored (the product game"
+                    + " stored in arrays: the reference route, far more memory)")
     String method;
 
     @Option(names = "--verdict-only",
@@ -48,11 +49,17 @@ final class CheckRoute {
             case "auto" -> Method.AUTO;
             case "fast" -> Method.FAST;
             case "product" -> Method.PRODUCT;
+            case "stored" -> Method.STORED;
             default -> {
-                err.println("dockline: --method must be auto, fast or product, not '" + method + "'");
+                err.println("dockline: --method must be auto, fast, product or stored, not '" + method + "'");
                 yield null;
             }
         };
+    }
+
+    /** Whether {@code --method stored} asks for the product stored in arrays. */
+    boolean stored() {
+        return "stored".equalsIgnoreCase(method == null ? "" : method.trim());
     }
 
     /** Whether the options ask for anything but the default route. */
@@ -70,8 +77,12 @@ final class CheckRoute {
         if (how == null) {
             return ExitCodes.BAD_INPUT;
         }
-        if (how == Method.PRODUCT && !verdictOnly) {
+        if ((how == Method.PRODUCT || how == Method.STORED) && !verdictOnly) {
             return null;
+        }
+        if (how == Method.STORED) {
+            err.println("dockline: --verdict-only decides on the product game without storing it; drop --method stored");
+            return ExitCodes.BAD_INPUT;
         }
         if (verdictOnly && safestPolicy) {
             err.println("dockline: --safest-policy needs a policy; --verdict-only gives none");

@@ -81,7 +81,7 @@ public final class ExportCommand implements Callable<Integer> {
                 return ExitCodes.NOT_GUARANTEED;
             }
             Policy p = a.policy().orElseThrow();
-            Certificate cert = CertificateChecker.check(a.game().arena(), p, a.reserveUnits(), a.startUnits());
+            Certificate cert = CertificateChecker.check(a.arena(), p, a.reserveUnits(), a.startUnits());
             if (!cert.ok()) {
                 return uncertified("its policy failed the independent certificate: " + cert.reason(), err);
             }

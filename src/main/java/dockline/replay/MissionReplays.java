@@ -11,6 +11,7 @@ import dockline.solve.Policy;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import dockline.solve.ReserveSolver;
+import dockline.solve.WinningRegion;
 import java.util.List;
 import java.util.Optional;
 
@@ -56,7 +57,7 @@ public final class MissionReplays {
         if (!a.guaranteed()) {
             a = ReserveSolver.analyse(mission, options.withHighestReserve(true));
         }
-        Arena arena = a.game().arena();
+        Arena arena = a.arena();
         int floor = a.reserveUnits();
         int start = a.startUnits();
         if (a.guaranteed()) {
@@ -67,7 +68,7 @@ public final class MissionReplays {
         }
         int best = a.highestReserveSearched() ? a.highestGuaranteedReserveUnits().orElse(-1)
                 // the solver skipped the search (memory); the fixpoint needs far less
-                : FixpointMargins.highestFloor(arena, a.game().goal(), start);
+                : FixpointMargins.highestFloor(arena, a.goal(), start);
         ClosedLoop loop = null;
         if (best >= 0) {
             Mission lower = mission.withReserve(Charge.wh(mission.scale().toWh(best)));
@@ -136,7 +137,9 @@ public final class MissionReplays {
         if (guaranteed()) {
             throw new IllegalStateException("the mission is guaranteed: there is no counterexample");
         }
-        SolverRegion region = new SolverRegion(analysis.game(), analysis.solution());
+        // not guaranteed: every route solved its game to the end, so the whole winning region is known
+        WinningRegion region = analysis.region().orElseThrow(() -> new IllegalStateException(
+                "internal: the solver did not keep the winning region of a mission that is not guaranteed"));
         return Replayer.counterexample(arena, analysis.reserveUnits(), analysis.startUnits(), region, loop,
                 bestEffortFloor);
     }

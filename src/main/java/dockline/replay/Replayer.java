@@ -10,6 +10,7 @@ import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.solve.Policy;
+import dockline.solve.WinningRegion;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;

@@ -27,9 +27,10 @@ import java.util.function.BooleanSupplier;
  *
  * <p>{@link #solve(boolean)} runs the linear-time backward attractor (a worklist and counters, as in
  * {@link AttractorSolver}) over that implicit graph: one byte per vertex counts the successors known
- * to be won, a stack holds the won vertices not yet expanded (the least fixpoint does not depend on
- * the worklist order, and last-in first-out keeps the search local). O(|V| + |E|) of the full
- * product; memory one byte per slot of the padded numbering plus the stack; it can stop as soon as the start
+ * to be won, a worklist holds the won vertices not yet expanded (the least fixpoint does not depend on
+ * the worklist order: last-in first-out keeps the search local for a verdict, first-in first-out
+ * ranks the vertices for a policy of fewest moves). O(|V| + |E|) of the full
+ * product; memory half a byte per slot of the padded numbering plus the worklist; it can stop as soon as the start
  * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
  * the start (the memory-bound floor for this layout).
  *
@@ -144,7 +145,7 @@ public final class ImplicitReserveGame {
     }
 
     public Result solve(boolean stopAtStart, BooleanSupplier cancelled) {
-        return run(stopAtStart, cancelled, null, null);
+        return run(stopAtStart, cancelled, null, null, null);
     }
 
     /**
@@ -156,18 +157,45 @@ public final class ImplicitReserveGame {
      */
     public Strategy solveWithStrategy(BooleanSupplier cancelled) {
         byte[] choice = new byte[(int) ((long) arena.robotCount() << (gBits + lBits))];
-        Result r = run(true, cancelled, null, choice);
-        return new Strategy(r, choice);
+        byte[][] counts = new byte[1][];
+        Result r = run(true, cancelled, null, choice, counts);
+        return new Strategy(r, choice, counts[0]);
     }
 
     /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
-    public static final class Strategy {
+    public final class Strategy {
         private final Result result;
         private final byte[] choice;
+        private final byte[] count;
 
-        private Strategy(Result result, byte[] choice) {
+        private Strategy(Result result, byte[] choice, byte[] count) {
             this.result = result;
             this.choice = choice;
+            this.count = count;
+        }
+
+        /**
+         * Whether the robot wins from robot triple (robot vertex, goal state, monitor state), by the
+         * counters of this solve; exact only when the solve ran to the end ({@link #complete()}), which
+         * it does whenever the start is not won. O(1).
+         *
+         * @throws IllegalStateException if the solve stopped early
+         */
+        public boolean robotWins(int robotVertex, int goalState, int monitorState) {
+            if (!complete()) {
+                throw new IllegalStateException("the solve stopped once the start was won: the region is partial");
+            }
+            if (robotVertex < 0 || robotVertex >= arena.robotCount() || goalState < 0 || goalState >= gc
+                    || monitorState < 0 || monitorState >= levels) {
+                return false;
+            }
+            int p = id(robotVertex, goalState, monitorState);
+            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) > 0;
+        }
+
+        /** Whether the solve ran to the end, so that {@link #robotWins} is the whole winning region. */
+        public boolean complete() {
+            return !result.stoppedEarly();
         }
 
         public Result result() {
@@ -335,15 +363,25 @@ public final class ImplicitReserveGame {
     /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
     boolean[] wonFlags() {
         boolean[][] out = new boolean[1][];
-        run(false, () -> false, out, null);
+        run(false, () -> false, out, null, null);
         return out[0];
     }
 
-    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, byte[] choice) {
+    /**
+     * The attractor. With {@code choice} (a strategy is recorded) the worklist is first-in first-out,
+     * so vertices are won in order of rank (the number of moves in which the robot can force
+     * completion, as in {@link AttractorSolver}) and each robot triple's recorded choice leads to a
+     * successor of least rank: the policy finishes in the fewest moves in the worst case. Without it
+     * the worklist is last-in first-out, which keeps the search near the counters it just touched
+     * (the least fixpoint does not depend on the order).
+     */
+    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, byte[] choice,
+                       byte[][] countsOut) {
         int start = start();
-        if (start < 0 && flagsOut == null) {
+        if (start < 0 && flagsOut == null && countsOut == null) {
             return new Result(start == -2, 0, 0, false, vertexCount);
         }
+        final boolean fifo = choice != null;
         final int n = (int) slotCount;
         final int rc = arena.robotCount();
         final int top = levels - 1;
@@ -357,8 +395,12 @@ public final class ImplicitReserveGame {
         final byte[] count = new byte[(n >>> 1) + 1];
         // the worklist is a stack: any order reaches the same least fixpoint, and last-in first-out
         // keeps the search near the vertices it just won, so the counters it touches are mostly in cache
-        int[] stack = new int[1 << 12];
-        int sp = 0;
+        // one circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
+        // or at the head (queue); its length is a power of two so indices wrap by a mask
+        int[] wl = new int[1 << 12];
+        int wmask = wl.length - 1;
+        int head = 0;
+        int tail = 0;
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[n] : null;
         // the targets: robot triples completing the mission (any level)
@@ -372,10 +414,13 @@ public final class ImplicitReserveGame {
                         for (int s = 0; s < levels; s++) {
                             int t = base + s;
                             count[t >>> 1] |= (byte) (1 << ((t & 1) << 2));
-                            if (sp == stack.length) {
-                                stack = Arrays.copyOf(stack, sp * 2);
+                            if (tail - head == wl.length) {
+                                wl = grow(wl, head, tail);
+                                wmask = wl.length - 1;
+                                tail -= head;
+                                head = 0;
                             }
-                            stack[sp++] = base + s;
+                            wl[(tail++) & wmask] = base + s;
                             wonCount++;
                             if (flags != null) {
                                 flags[base + s] = true;
@@ -388,8 +433,8 @@ public final class ImplicitReserveGame {
         long edges = 0;
         int steps = 0;
         boolean stopped = false;
-        while (sp > 0) {
-            int p = stack[--sp];
+        while (tail != head) {
+            int p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
             int s2 = p & sMask;
             int g2 = (p >>> lb) & gMask;
             int x = p >>> (lb + gb);
@@ -407,10 +452,13 @@ public final class ImplicitReserveGame {
                         // p won strictly before q: the index of p's action among the owner's out-edges
                         choice[q] = (byte) (arena.inEdge(from) - arena.outBegin(owner));
                     }
-                    if (sp == stack.length) {
-                        stack = Arrays.copyOf(stack, sp * 2);
+                    if (tail - head == wl.length) {
+                        wl = grow(wl, head, tail);
+                        wmask = wl.length - 1;
+                        tail -= head;
+                        head = 0;
                     }
-                    stack[sp++] = q;
+                    wl[(tail++) & wmask] = q;
                     wonCount++;
                     if (flags != null) {
                         flags[q] = true;
@@ -455,10 +503,13 @@ public final class ImplicitReserveGame {
                         if (c < need) {
                             count[q >>> 1] = (byte) (cell8 + (1 << qs));
                             if (c + 1 == need) {
-                                if (sp == stack.length) {
-                                    stack = Arrays.copyOf(stack, sp * 2);
+                                if (tail - head == wl.length) {
+                                    wl = grow(wl, head, tail);
+                                    wmask = wl.length - 1;
+                                    tail -= head;
+                                    head = 0;
                                 }
-                                stack[sp++] = q;
+                                wl[(tail++) & wmask] = q;
                                 wonCount++;
                                 if (flags != null) {
                                     flags[q] = true;
@@ -478,8 +529,21 @@ public final class ImplicitReserveGame {
         if (flagsOut != null) {
             flagsOut[0] = flags;
         }
+        if (countsOut != null) {
+            countsOut[0] = count;
+        }
         boolean won = start == -2 || start >= 0 && (stopped || ((count[start >>> 1] >>> ((start & 1) << 2)) & 15) > 0);
         return new Result(won, wonCount, edges, stopped, vertexCount);
+    }
+
+    /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
+    private static int[] grow(int[] wl, int head, int tail) {
+        int[] out = new int[wl.length * 2];
+        int mask = wl.length - 1;
+        for (int i = head; i != tail; i++) {
+            out[i - head] = wl[i & mask];
+        }
+        return out;
     }
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */

@@ -1,5 +1,7 @@
 package dockline.solve;
 
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
 import java.util.List;
@@ -30,12 +32,19 @@ import java.util.OptionalInt;
  * @param policy                         the robot's policy when guaranteed
  * @param policyFloorUnits               the floor of the game the policy comes from: the reserve, or with
  *                                       {@link ReserveOptions#safestPolicy()} the highest guaranteed floor
- * @param game                           the product game the policy comes from, at {@code policyFloorUnits}
- *                                       (for certificates and replays; when not guaranteed, the game of
- *                                       the verdict, whose solution holds the disturbance's winning moves)
- * @param solution                       its solution
+ * @param game                           on the stored route ({@link ReserveOptions.Route#PRODUCT}) the
+ *                                       product game the policy comes from, at {@code policyFloorUnits}
+ *                                       (when not guaranteed, the game of the verdict); null on the
+ *                                       implicit route (the default), which stores no product
+ * @param solution                       its solution (null when {@code game} is)
  * @param chargeNeeded                   the heat map, when asked for
  * @param notes                          things the reader should know (e.g. a search skipped for memory)
+ * @param arena                          the compiled arena of the mission (for certificates and replays)
+ * @param goal                           the mission's goal automaton
+ * @param region                         the robot's whole winning region at the reserve floor, when the
+ *                                       solve computed all of it: always on the stored route, and on the
+ *                                       implicit route when not guaranteed (there the search stops as soon
+ *                                       as the start is won). The counterexample stays outside it.
  */
 public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, int reserveUnits, int capacityUnits,
                               EnergyScale scale, OptionalInt worstCaseMinimumUnits,
@@ -43,7 +52,8 @@ public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, 
                               long productVertices, long productEdges, SizeEstimate estimate,
                               long buildMillis, long solveMillis, long totalMillis,
                               Optional<Policy> policy, int policyFloorUnits, ProductGame game, Solution solution,
-                              Optional<ChargeNeeded> chargeNeeded, List<String> notes) {
+                              Optional<ChargeNeeded> chargeNeeded, List<String> notes, Arena arena,
+                              GoalAutomaton goal, Optional<WinningRegion> region) {
 
     public ReserveAnalysis {
         notes = List.copyOf(notes);
@@ -51,5 +61,10 @@ public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, 
 
     public boolean guaranteed() {
         return verdict == Verdict.GUARANTEED;
+    }
+
+    /** Whether the stored CSR product route ({@link ReserveOptions.Route#PRODUCT}) produced this analysis. */
+    public boolean storedProduct() {
+        return game != null;
     }
 }

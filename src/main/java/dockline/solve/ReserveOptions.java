@@ -14,19 +14,25 @@ import java.util.function.BooleanSupplier;
  * @param safestPolicy    export the policy that keeps the battery at or above the highest guaranteed floor
  *                        (it may take more moves, e.g. to top up on a dock) instead of the one that
  *                        finishes in the fewest moves at the mission's floor; costs one more solve
- * @param route           how the verdict, policy and worst case are computed ({@link Route#PRODUCT} by default)
+ * @param route           how the verdict, policy and worst case are computed ({@link Route#IMPLICIT} by default)
  */
 public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, boolean highestReserve,
                              boolean chargeNeeded, boolean safestPolicy, Route route) {
 
     /** Where the game of the verdict and policy lives. */
     public enum Route {
-        /** The stored {@link ProductGame}, solved by {@link #solver()}: policy of fewest moves in the worst case. */
+        /**
+         * The product stored in CSR arrays ({@link ProductGame}), solved by {@link #solver()}: the
+         * reference route, kept for cross-checks and the benchmark; its policy finishes in the fewest
+         * moves in the worst case.
+         */
         PRODUCT,
         /**
-         * {@link ImplicitReserveGame}: no stored product, the robot's choice recorded per won robot slot;
-         * its policy is a winning one but not necessarily of fewest moves, so its worst case may differ
-         * from the product route's. The analysis then carries no {@link ProductGame} and no
+         * The default: {@link ImplicitReserveGame}, the same game with its edges generated on demand and
+         * nothing stored but half a byte of counter per vertex and the robot's choice per robot vertex
+         * (first-in first-out attractor, so its policy also finishes in the fewest moves in the worst
+         * case; among equally short choices it may pick another than the stored route, so worst levels
+         * can differ by a few units). The analysis then carries no {@link ProductGame} and no
          * {@link Solution} ({@code game()} and {@code solution()} are null).
          */
         IMPLICIT
@@ -40,13 +46,13 @@ public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, 
             solver = CompactAttractorSolver::new;
         }
         if (route == null) {
-            route = Route.PRODUCT;
+            route = Route.IMPLICIT;
         }
     }
 
     public ReserveOptions(ProductOptions product, GameSolver.Factory solver, boolean highestReserve,
                           boolean chargeNeeded, boolean safestPolicy) {
-        this(product, solver, highestReserve, chargeNeeded, safestPolicy, Route.PRODUCT);
+        this(product, solver, highestReserve, chargeNeeded, safestPolicy, Route.IMPLICIT);
     }
 
     public ReserveOptions withRoute(Route r) {

@@ -17,10 +17,13 @@ import java.util.OptionalInt;
  * <p>{@link #analyse} gives the verdict, the robot's policy (by default the attractor strategy at
  * the mission's floor, which finishes in the fewest moves in the worst case; with
  * {@link ReserveOptions#safestPolicy()} the one at the highest guaranteed floor), the worst level
- * the disturbances can * force under it (dynamic programming over the acyclic closed loop, O(closed loop)), the highest
- * floor that can be guaranteed (a max-min fixpoint over one more product, computed as an
- * incremental attractor while the floor falls; exact because winning is monotone in the floor),
- * and optionally the heat map.
+ * the disturbances can force under it (dynamic programming over the acyclic closed loop, O(closed
+ * loop)), the highest floor that can be guaranteed, and optionally the heat map. By default the
+ * product is not stored ({@link ImplicitReserveGame}, {@link ReserveOptions.Route#IMPLICIT}: half a
+ * byte per vertex, edges generated on demand; the highest floor by bisection over verdicts, exact
+ * because winning is monotone in the floor). The stored route ({@link ReserveOptions.Route#PRODUCT},
+ * {@link ProductGame} in CSR arrays) is the reference: there the highest floor is a max-min fixpoint
+ * over one more product, computed as an incremental attractor while the floor falls.
  */
 public final class ReserveSolver {
 
@@ -92,7 +95,8 @@ public final class ReserveSolver {
         long t1 = System.nanoTime();
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, capacity, mission.scale(), worst, highest,
                 searched, game.vertexCount(), game.edgeCount(), game.estimate(), millis(game.buildNanos()),
-                millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes);
+                millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes,
+                arena, goal, Optional.of(new SolverRegion(game, sol)));
     }
 
     /**
@@ -111,6 +115,23 @@ public final class ReserveSolver {
         ImplicitReserveGame.Strategy st = game.solveWithStrategy(po.cancelled());
         long built = System.nanoTime();
         boolean won = st.startWon();
+        Optional<WinningRegion> region = Optional.empty();
+        if (st.complete()) {
+            region = Optional.of((robotVertex, progressMask, level) -> {
+                if (level < monitor.floorUnits() || level > monitor.capacityUnits()) {
+                    return false;
+                }
+                int g = goal.stateOfMask(progressMask);
+                if (g == GoalAutomaton.REJECT) {
+                    return false;
+                }
+                if (goal.accepting(g, arena.isDock(arena.cell(robotVertex)))) {
+                    return true;
+                }
+                int s = monitor.stateOf(level);
+                return s != dockline.monitor.Monitor.REJECT && st.robotWins(robotVertex, g, s);
+            });
+        }
         Optional<Policy> policy = Optional.empty();
         OptionalInt worst = OptionalInt.empty();
         if (won) {
@@ -156,7 +177,8 @@ public final class ReserveSolver {
                 implicitBytes(game, arena), 0);
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, mission.capacityUnits(), mission.scale(),
                 worst, highest, searched, game.vertexCount(), st.result().edgesScanned(), size,
-                millis(built - t0), millis(solved - t0), millis(t1 - t0), policy, policyFloor, null, null, heat, notes);
+                millis(built - t0), millis(solved - t0), millis(t1 - t0), policy, policyFloor, null, null, heat, notes,
+                arena, goal, region);
     }
 
     /** Counters (half a byte per slot), choices (a byte per robot slot) and the inlined reverse CSR (9 B per edge). */
@@ -175,13 +197,18 @@ public final class ReserveSolver {
         return game;
     }
 
-    /** Verdict only (no policy, no search), for callers that probe many variants. */
+    /**
+     * Verdict only (no policy, no search), for callers that probe many variants: the implicit product
+     * ({@link ImplicitReserveGame}), its attractor stopping as soon as the start is won.
+     *
+     * @throws ProductTooLargeException if the implicit game's counters do not fit the memory budget
+     */
     public static boolean guaranteed(Mission mission, ProductOptions options) {
         Arena arena = ArenaCompiler.compile(mission);
         GoalAutomaton goal = GoalAutomaton.of(mission);
         ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
                 mission.startUnits());
-        return wins(arena, goal, monitor, options, CompactAttractorSolver::new);
+        return implicitGame(arena, goal, monitor, options).solve(true, options.cancelled()).startWon();
     }
 
     /**

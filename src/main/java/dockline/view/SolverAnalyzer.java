@@ -42,7 +42,7 @@ public final class SolverAnalyzer implements Analyzer {
             mr = MissionReplays.of(mission, options);
             stopIf(cancelled);
             ReserveAnalysis a = mr.analysis();
-            heat = ChargeNeeded.compute(mr.arena(), a.game().goal(),
+            heat = ChargeNeeded.compute(mr.arena(), a.goal(),
                     new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product(),
                     options.solver());
             stopIf(cancelled);

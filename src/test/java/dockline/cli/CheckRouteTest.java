@@ -66,7 +66,28 @@ class CheckRouteTest {
         assertThat(forced.out()).isEmpty();
         CheckCommandTest.Run bad = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "quick");
         assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        assertThat(bad.err()).contains("auto, fast or product");
+        assertThat(bad.err()).contains("auto, fast, product or stored");
+    }
+
+    /** The stored product (the reference route) and the default implicit one agree on verdict and figures. */
+    @Test
+    void storedRoute_agreesWithTheDefaultProductRoute() throws Exception {
+        for (String file : new String[] {"missions/night-round.yaml", "missions/late-return.yaml"}) {
+            JsonNode implicit = json(CheckCommandTest.run("check", file, "--json", "--method", "product"));
+            CheckCommandTest.Run storedRun = CheckCommandTest.run("check", file, "--json", "--method", "stored");
+            JsonNode stored = json(storedRun);
+            assertThat(stored.get("method").asText()).isEqualTo("stored-product");
+            assertThat(implicit.get("method").asText()).isEqualTo("product");
+            assertThat(stored.get("verdict")).isEqualTo(implicit.get("verdict"));
+            assertThat(stored.get("highestGuaranteedReserveUnits")).isEqualTo(implicit.get("highestGuaranteedReserveUnits"));
+            assertThat(stored.get("certified")).isEqualTo(implicit.get("certified"));
+        }
+        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "stored").out())
+                .contains("stored in arrays");
+        CheckCommandTest.Run both = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "stored",
+                "--verdict-only");
+        assertThat(both.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(both.err()).contains("drop --method stored");
     }
 
     @Test

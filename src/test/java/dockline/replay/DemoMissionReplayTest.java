@@ -42,7 +42,7 @@ class DemoMissionReplayTest {
             assertThat(nominal.ending()).isEqualTo(Replay.Ending.COMPLETE);
             assertThat(nominal.minimumUnits()).isGreaterThanOrEqualTo(worst.minimumUnits());
         } else {
-            SolverRegion region = new SolverRegion(mr.analysis().game(), mr.analysis().solution());
+            dockline.solve.WinningRegion region = mr.analysis().region().orElseThrow();
             ReplayStep last = worst.last();
             int v = mr.arena().robotVertex(last.cell().index(mr.arena().width()), last.budgetLeft());
             boolean breach = worst.ending() == Replay.Ending.BELOW_FLOOR && last.batteryUnits() < floor;

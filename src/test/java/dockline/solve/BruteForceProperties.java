@@ -10,17 +10,30 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 
 /**
- * The product + attractor route against the brute-force depth-bounded minimax of
- * {@link BruteForceMinimax} (independent oracle, its depth bound justified there) on random tiny
- * missions: at most 8 cells, budget at most 2, capacity at most 12 units, random events and tasks.
+ * Both routes of {@link ReserveSolver#analyse} (the default implicit product and the stored CSR
+ * product) against the brute-force depth-bounded minimax of {@link BruteForceMinimax} (independent
+ * oracle, its depth bound justified there) on random tiny missions: at most 8 cells, budget at most 2,
+ * capacity at most 12 units, random events and tasks.
  */
 class BruteForceProperties {
 
-    @Property(tries = 2000)
-    void verdictAndHighestReserve_matchBruteForceMinimax(@ForAll long seed) {
+    @Property(tries = 1000)
+    void verdictAndHighestReserve_matchBruteForceMinimax_implicitRoute(@ForAll long seed) {
         Mission m = RandomMissions.tiny(seed);
+        check(m, ReserveSolver.analyse(m, ReserveOptions.defaults()));
+    }
+
+    @Property(tries = 1000)
+    void verdictAndHighestReserve_matchBruteForceMinimax_storedRoute(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withRoute(ReserveOptions.Route.PRODUCT));
+        check(m, a);
+        SolutionChecks.assertValidSolution(a.game(), a.solution(),
+                new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits()));
+    }
+
+    private static void check(Mission m, ReserveAnalysis a) {
         BruteForceMinimax oracle = new BruteForceMinimax(m);
-        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults());
         String why = RandomMissions.describe(m);
 
         assertThat(a.guaranteed()).as("verdict\n%s", why).isEqualTo(oracle.wins(m.reserveUnits()));
@@ -34,11 +47,9 @@ class BruteForceProperties {
         } else {
             assertThat(a.worstCaseMinimumUnits()).isEmpty();
         }
-        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
-        SolutionChecks.assertValidSolution(a.game(), a.solution(), monitor);
         if (a.guaranteed()) {
             // the exported policy, run against every disturbance choice by an independent walk
-            PolicyWalk.Result walk = new PolicyWalk(m, a.game().arena(), a.policy().orElseThrow()).run();
+            PolicyWalk.Result walk = new PolicyWalk(m, a.arena(), a.policy().orElseThrow()).run();
             assertThat(walk.lowestLevel()).as("worst case by walking the policy\n%s", why)
                     .isEqualTo(a.worstCaseMinimumUnits().getAsInt());
             assertThat(a.policy().orElseThrow().entries().stream().map(PolicyWalk::key))
@@ -50,7 +61,7 @@ class BruteForceProperties {
     void safestPolicy_keepsTheHighestFloor(@ForAll long seed) {
         Mission m = RandomMissions.tiny(seed);
         ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withSafestPolicy(true)
-                .withHighestReserve(false));
+                .withHighestReserve(false).withRoute(ReserveOptions.Route.PRODUCT));
         if (!a.guaranteed()) {
             return;
         }
@@ -58,7 +69,7 @@ class BruteForceProperties {
         String why = RandomMissions.describe(m);
         assertThat(a.worstCaseMinimumUnits().getAsInt()).as(why).isEqualTo(highest);
         assertThat(a.policyFloorUnits()).as(why).isIn(m.reserveUnits(), highest);
-        PolicyWalk.Result walk = new PolicyWalk(m, a.game().arena(), a.policy().orElseThrow()).run();
+        PolicyWalk.Result walk = new PolicyWalk(m, a.arena(), a.policy().orElseThrow()).run();
         assertThat(walk.lowestLevel()).as(why).isEqualTo(highest);
         SolutionChecks.assertValidSolution(a.game(), a.solution(),
                 new ReserveMonitor(a.policyFloorUnits(), m.capacityUnits(), m.startUnits()));

@@ -64,7 +64,8 @@ class FastPathProperties {
     void implicitVerdict_agreesWithTheProductRoute(@ForAll long seed, @ForAll boolean charging) {
         Mission m = TinyMissions.random(seed, charging);
         ReserveSolver.ImplicitVerdict v = ReserveSolver.decideImplicitly(m, ProductOptions.defaults());
-        ReserveAnalysis ref = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false));
+        ReserveAnalysis ref = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false)
+                .withRoute(ReserveOptions.Route.PRODUCT));
         assertThat(v.verdict()).isEqualTo(ref.verdict());
         assertThat(v.forecastVertices()).isGreaterThanOrEqualTo(ref.productVertices());
     }

@@ -18,6 +18,9 @@ import org.junit.jupiter.api.Test;
 /** The product game's construction: index kinds, the size estimate, the memory guard, the start. */
 class ProductGameProperties {
 
+    /** The stored CSR product route, whose game and solution these tests inspect. */
+    private static final ReserveOptions STORED = ReserveOptions.defaults().withRoute(ReserveOptions.Route.PRODUCT);
+
     private static ReserveMonitor monitorOf(Mission m) {
         return new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
     }
@@ -120,7 +123,7 @@ class ProductGameProperties {
     @Test
     void startOnADockWithoutTasks_isWonAtOnce() {
         Mission m = MissionFixture.grid("D.").startWh(5).reserveWh(3).build();
-        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        ReserveAnalysis a = ReserveSolver.analyse(m, STORED);
         assertThat(a.game().start()).isEqualTo(ProductGame.WIN);
         assertThat(a.guaranteed()).isTrue();
         assertThat(a.worstCaseMinimumUnits()).hasValue(5);
@@ -131,7 +134,7 @@ class ProductGameProperties {
     @Test
     void startBelowTheFloor_isLostAtOnce() {
         Mission m = MissionFixture.grid(".D").startWh(2).reserveWh(3).build();
-        ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        ReserveAnalysis a = ReserveSolver.analyse(m, STORED);
         assertThat(a.game().start()).isEqualTo(ProductGame.LOSE);
         assertThat(a.guaranteed()).isFalse();
         // one tile step costs 1 Wh: from 2 Wh the robot docks at 1 Wh
@@ -141,7 +144,7 @@ class ProductGameProperties {
     @Test
     void startInAnAvoidedZone_isLostAtOnce() {
         Mission m = MissionFixture.grid(".D").zone("wet", new Cell(0, 0)).avoid("wet").build();
-        assertThat(ReserveSolver.analyse(m, ReserveOptions.defaults()).game().start()).isEqualTo(ProductGame.LOSE);
+        assertThat(ReserveSolver.analyse(m, STORED).game().start()).isEqualTo(ProductGame.LOSE);
     }
 
     /**
@@ -159,7 +162,7 @@ class ProductGameProperties {
         assertThat(a.worstCaseMinimumUnits()).hasValue(5);
         assertThat(a.highestGuaranteedReserveUnits()).hasValue(5);
         ReserveAnalysis six = ReserveSolver.analyse(m.withReserve(dockline.model.Charge.wh(java.math.BigDecimal.valueOf(6))),
-                ReserveOptions.defaults());
+                STORED);
         assertThat(six.guaranteed()).isFalse();
         SolutionChecks.assertValidSolution(six.game(), six.solution(), new ReserveMonitor(6, 12, 10));
     }

@@ -1,4 +1,4 @@
-package dockline.replay;
+package dockline.solve;
 
 /**
  * Where the robot wins the reserve game at a given floor: whether, standing at an arena robot vertex

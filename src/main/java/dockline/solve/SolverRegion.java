@@ -1,11 +1,9 @@
-package dockline.replay;
+package dockline.solve;
 
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
-import dockline.solve.ProductGame;
-import dockline.solve.Solution;
 
 /**
  * The robot's winning region as the threshold solver found it: a situation (robot vertex, progress,
