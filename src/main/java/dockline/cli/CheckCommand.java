@@ -157,8 +157,9 @@ public final class CheckCommand implements Callable<Integer> {
         } else {
             out.println("  Method: product game (arena x goal x battery levels) with its moves generated on demand,"
                     + " and attractor");
-            out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges scanned; solved in "
-                    + a.solveMillis() + " ms (" + a.totalMillis() + " ms in all)");
+            out.println("  Game: " + a.productVertices() + " vertices (every place x task progress x battery level), "
+                    + a.productEdges() + " moves scanned until the start was decided; solved in " + a.solveMillis()
+                    + " ms (" + a.totalMillis() + " ms in all)");
         }
         out.println("  Energy: " + s.describe());
         if (cert != null) {
