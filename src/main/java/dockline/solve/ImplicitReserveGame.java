@@ -62,6 +62,9 @@ public final class ImplicitReserveGame {
     private final int[] revSource;
     private final int[] revWeight;
     private final byte[] revNeed;
+    // the most bytes the worklist may take (Long.MAX_VALUE: no limit); see limitWorklist
+    private long worklistBudgetBytes = Long.MAX_VALUE;
+    private long budgetBytes = Long.MAX_VALUE;
 
     /** What a solve found. */
     public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
@@ -103,6 +106,16 @@ public final class ImplicitReserveGame {
             revWeight[i] = arena.weight(e);
             revNeed[i] = (byte) deg;
         }
+    }
+
+    /**
+     * Caps the worklist, whose size is not known before the solve (it holds the won vertices not yet
+     * expanded): a solve whose worklist would pass {@code worklistBytes} stops with a
+     * {@link ProductTooLargeException} against {@code totalBudgetBytes} instead of running out of memory.
+     */
+    void limitWorklist(long worklistBytes, long totalBudgetBytes) {
+        this.worklistBudgetBytes = Math.max(0, worklistBytes);
+        this.budgetBytes = totalBudgetBytes;
     }
 
     private static int bits(int n) {
@@ -537,7 +550,12 @@ public final class ImplicitReserveGame {
     }
 
     /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
-    private static int[] grow(int[] wl, int head, int tail) {
+    private int[] grow(int[] wl, int head, int tail) {
+        long bytes = 8L * wl.length;
+        if (bytes > worklistBudgetBytes || wl.length >= (1 << 30)) {
+            throw new ProductTooLargeException(new SizeEstimate(vertexCount, 0,
+                    slotCount / 2 + 9L * arena.edgeCount() + bytes, 0), budgetBytes, true);
+        }
         int[] out = new int[wl.length * 2];
         int mask = wl.length - 1;
         for (int i = head; i != tail; i++) {

@@ -40,7 +40,7 @@ class CheckCommandTest {
         String[] lines = r.out().split("\\R");
         assertThat(lines[0]).startsWith("GUARANTEED: Night round, clinic east wing");
         assertThat(r.out()).contains("Worst battery level under the policy:  ", " units = ", " Wh (", "%)")
-                .contains("Highest reserve floor guaranteed:").contains("Game: ").contains(" vertices, ")
+                .contains("Highest reserve floor guaranteed:").contains("Game: ").contains(" vertices (")
                 .contains("1 unit = 0.5 Wh; consumption and reserve floor rounded up")
                 .contains(Caveats.block());
     }
