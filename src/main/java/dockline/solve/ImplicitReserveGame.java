@@ -34,8 +34,8 @@ import java.util.function.BooleanSupplier;
  * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
  * the start (the memory-bound floor for this layout).
  *
- * <p>{@link #solveWithStrategy} also records the robot's choice (a byte per robot slot, written once
- * when the slot is won), from which {@link #policy} walks the closed loop from the start and
+ * <p>{@link #solveWithStrategy} also records the robot's choice (in the robot triple's own counter,
+ * written once when the triple is won: no extra memory), from which {@link #policy} walks the closed loop from the start and
  * {@link #worstCaseMinimum} evaluates its lowest level (O(closed loop) each); this is the
  * {@link ReserveOptions.Route#IMPLICIT} route of {@link ReserveSolver#analyse}.
  *
@@ -62,6 +62,9 @@ public final class ImplicitReserveGame {
     private final int[] revSource;
     private final int[] revWeight;
     private final byte[] revNeed;
+    // per disturbance (action) vertex x, the index of x among its owner's out-edges: the robot's choice
+    // recorded in the owner's counter (see run)
+    private final byte[] actionIndex;
     // the most bytes the worklist may take (Long.MAX_VALUE: no limit); see limitWorklist
     private long worklistBudgetBytes = Long.MAX_VALUE;
     private long budgetBytes = Long.MAX_VALUE;
@@ -105,6 +108,16 @@ public final class ImplicitReserveGame {
             revSource[i] = d;
             revWeight[i] = arena.weight(e);
             revNeed[i] = (byte) deg;
+        }
+        int rc = arena.robotCount();
+        this.actionIndex = new byte[arena.vertexCount() - rc];
+        for (int x = rc; x < arena.vertexCount(); x++) {
+            if (arena.inEnd(x) - arena.inBegin(x) != 1) {
+                throw new IllegalArgumentException("disturbance vertex " + x + " must have exactly one way in, from its"
+                        + " robot vertex");
+            }
+            int e = arena.inEdge(arena.inBegin(x));
+            actionIndex[x - rc] = (byte) (e - arena.outBegin(arena.source(e)));
         }
     }
 
@@ -158,33 +171,35 @@ public final class ImplicitReserveGame {
     }
 
     public Result solve(boolean stopAtStart, BooleanSupplier cancelled) {
-        return run(stopAtStart, cancelled, null, null, null);
+        return run(stopAtStart, cancelled, null, false, null);
     }
 
     /**
-     * A solve that also records the robot's choice: per robot slot one byte, the index (among the arena
+     * A solve that also records the robot's choice: per robot triple, in its counter, the index (among the arena
      * vertex's out-edges) of the action whose disturbance triple won it, written once, when the slot is
      * won, by a successor won strictly earlier; so the closed loop of these choices is acyclic and every
      * play of it reaches completion. Stops once the start is won (the closed loop from the start only
-     * visits vertices won before it). One more byte per robot slot than {@link #solve(boolean)}.
+     * visits vertices won before it). The worklist is first-in first-out (see {@link #run}).
      */
     public Strategy solveWithStrategy(BooleanSupplier cancelled) {
-        byte[] choice = new byte[(int) ((long) arena.robotCount() << (gBits + lBits))];
         byte[][] counts = new byte[1][];
-        Result r = run(true, cancelled, null, choice, counts);
-        return new Strategy(r, choice, counts[0]);
+        Result r = run(true, cancelled, null, true, counts);
+        return new Strategy(r, counts[0]);
     }
 
     /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
     public final class Strategy {
         private final Result result;
-        private final byte[] choice;
         private final byte[] count;
 
-        private Strategy(Result result, byte[] choice, byte[] count) {
+        private Strategy(Result result, byte[] count) {
             this.result = result;
-            this.choice = choice;
             this.count = count;
+        }
+
+        /** The robot's recorded choice at won robot triple p: the index of the action among its out-edges. */
+        int choice(int p) {
+            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) - 1;
         }
 
         /**
@@ -236,7 +251,6 @@ public final class ImplicitReserveGame {
         if (start < 0) {
             return new Policy(entries);
         }
-        byte[] choice = strategy.choice;
         final int rc = arena.robotCount();
         long[] seen = new long[(int) (slotCount >>> 6) + 1];
         int[] todo = new int[1 << 10];
@@ -251,7 +265,7 @@ public final class ImplicitReserveGame {
             int x = p >>> (lBits + gBits);
             int k;
             if (x < rc) {
-                int d = arena.target(arena.outBegin(x) + choice[p]);
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
                 entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
                         goal.progressMask(g), arena.action(d)));
                 succ[0] = id(d, g, s);
@@ -288,7 +302,6 @@ public final class ImplicitReserveGame {
         if (start == -2) {
             return monitor.level(monitor.initialState());
         }
-        byte[] choice = strategy.choice;
         final int rc = arena.robotCount();
         LongIntMap worst = new LongIntMap(1 << 10);
         int[] stack = new int[1 << 10];
@@ -307,7 +320,7 @@ public final class ImplicitReserveGame {
             int x = p >>> (lBits + gBits);
             int k;
             if (x < rc) {
-                int d = arena.target(arena.outBegin(x) + choice[p]);
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
                 succ[0] = id(d, g, s);
                 arrive[0] = -1;
                 k = 1;
@@ -376,25 +389,24 @@ public final class ImplicitReserveGame {
     /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
     boolean[] wonFlags() {
         boolean[][] out = new boolean[1][];
-        run(false, () -> false, out, null, null);
+        run(false, () -> false, out, false, null);
         return out[0];
     }
 
     /**
-     * The attractor. With {@code choice} (a strategy is recorded) the worklist is first-in first-out,
+     * The attractor. With {@code fifo} (a strategy is recorded) the worklist is first-in first-out,
      * so vertices are won in order of rank (the number of moves in which the robot can force
      * completion, as in {@link AttractorSolver}) and each robot triple's recorded choice leads to a
      * successor of least rank: the policy finishes in the fewest moves in the worst case. Without it
      * the worklist is last-in first-out, which keeps the search near the counters it just touched
      * (the least fixpoint does not depend on the order).
      */
-    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, byte[] choice,
+    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, boolean fifo,
                        byte[][] countsOut) {
         int start = start();
         if (start < 0 && flagsOut == null && countsOut == null) {
             return new Result(start == -2, 0, 0, false, vertexCount);
         }
-        final boolean fifo = choice != null;
         final int n = (int) slotCount;
         final int rc = arena.robotCount();
         final int top = levels - 1;
@@ -460,11 +472,10 @@ public final class ImplicitReserveGame {
                 int q = (((owner << gb) | g2) << lb) | s2;
                 int qs = (q & 1) << 2;
                 if (((count[q >>> 1] >>> qs) & 15) == 0) {
-                    count[q >>> 1] |= (byte) (1 << qs);
-                    if (choice != null) {
-                        // p won strictly before q: the index of p's action among the owner's out-edges
-                        choice[q] = (byte) (arena.inEdge(from) - arena.outBegin(owner));
-                    }
+                    // a robot triple needs one won successor, so its counter has room for more: it records
+                    // the choice, 1 + the index of p's action among the owner's out-edges (at most 15), and p
+                    // won strictly before q. No separate choice array, no second random access.
+                    count[q >>> 1] |= (byte) ((actionIndex[x - rc] + 1) << qs);
                     if (tail - head == wl.length) {
                         wl = grow(wl, head, tail);
                         wmask = wl.length - 1;

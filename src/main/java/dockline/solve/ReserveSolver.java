@@ -181,9 +181,9 @@ public final class ReserveSolver {
                 arena, goal, region);
     }
 
-    /** Counters (half a byte per slot), choices (a byte per robot slot) and the inlined reverse CSR (9 B per edge). */
+    /** Counters with the choices (half a byte per slot), the policy walk's visited bits (1/8 byte per slot), the inlined reverse CSR and action indices (10 B per arena edge). */
     private static long implicitBytes(ImplicitReserveGame game, Arena arena) {
-        return game.slotCount() / 2 + game.slotCount() + 9L * arena.edgeCount();
+        return game.slotCount() / 2 + game.slotCount() / 8 + 10L * arena.edgeCount();
     }
 
     private static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
