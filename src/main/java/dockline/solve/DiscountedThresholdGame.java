@@ -67,10 +67,12 @@ public final class DiscountedThresholdGame {
     /** In-degree of vertex v at index v + 1 (index 0 is 0): the reverse CSR before its prefix sums. */
     private final int[] inDegree;
     private final int comparatorStates;
+    private final int overflowPairs;
     private final long buildNanos;
 
     private DiscountedThresholdGame(Relation relation, int n, int m, boolean[] robotOwned, int[] outStart,
-                                    int[] edgeTarget, int[] inDegree, int comparatorStates, long buildNanos) {
+                                    int[] edgeTarget, int[] inDegree, int comparatorStates, int overflowPairs,
+                                    long buildNanos) {
         this.relation = relation;
         this.vertexCount = n;
         this.edgeCount = m;
@@ -79,6 +81,7 @@ public final class DiscountedThresholdGame {
         this.edgeTarget = edgeTarget;
         this.inDegree = inDegree;
         this.comparatorStates = comparatorStates;
+        this.overflowPairs = overflowPairs;
         this.buildNanos = buildNanos;
     }
 
@@ -207,7 +210,7 @@ public final class DiscountedThresholdGame {
         }
         outStart[n] = m;
         return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inDegree,
-                comparator.stateCount(), System.nanoTime() - t0);
+                comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
     }
 
     /** The memo with a row for every state discovered so far (up to its cap), new entries unknown. */
@@ -298,6 +301,11 @@ public final class DiscountedThresholdGame {
     /** Comparator states discovered while building (initial state and accepting sink included). */
     public int comparatorStates() {
         return comparatorStates;
+    }
+
+    /** Pairs found through the overflow table (arena vertices with over {@value #CHAIN_LIMIT} comparator states); for tests. */
+    int overflowPairs() {
+        return overflowPairs;
     }
 
     public long buildNanos() {
