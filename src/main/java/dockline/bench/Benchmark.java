@@ -75,6 +75,8 @@ public final class Benchmark {
     public static final String RESERVE = "reserve";
     public static final String CONSUMPTION = "consumption";
     public static final String DISCOUNTED = "discounted";
+    /** Every instance, in the order they run on each floor size. */
+    public static final List<String> INSTANCES = List.of(RESERVE, CONSUMPTION, DISCOUNTED);
 
     /**
      * What to run.
@@ -88,16 +90,30 @@ public final class Benchmark {
      * @param sweepCapMillis a naive sweep running longer than this is stopped and reported as such
      * @param maxProductVertices the CSR product methods are skipped when the forecast product is larger
      * @param maxImplicitVertices the implicit-product methods are skipped when the full product is larger
+     * @param instances      the instances to run and warm up ({@link #INSTANCES} or a part of it; a
+     *                       development aid: ratios between instances are then missing)
      */
     public record Config(List<Integer> sizes, List<Integer> fastOnlySizes, long seed, int budget, int reps,
-                         int warmups, long sweepCapMillis, long maxProductVertices, long maxImplicitVertices) {
+                         int warmups, long sweepCapMillis, long maxProductVertices, long maxImplicitVertices,
+                         List<String> instances) {
 
         public Config {
             sizes = List.copyOf(sizes);
             fastOnlySizes = List.copyOf(fastOnlySizes);
+            instances = List.copyOf(instances);
             if (reps < 1 || warmups < 0 || budget < 0) {
                 throw new IllegalArgumentException("reps must be positive, warm-ups and budget not negative");
             }
+            if (instances.isEmpty() || !INSTANCES.containsAll(instances)) {
+                throw new IllegalArgumentException("instances must be some of " + INSTANCES + ", not " + instances);
+            }
+        }
+
+        /** Every instance. */
+        public Config(List<Integer> sizes, List<Integer> fastOnlySizes, long seed, int budget, int reps,
+                      int warmups, long sweepCapMillis, long maxProductVertices, long maxImplicitVertices) {
+            this(sizes, fastOnlySizes, seed, budget, reps, warmups, sweepCapMillis, maxProductVertices,
+                    maxImplicitVertices, INSTANCES);
         }
 
         /** Under a minute on two cores: 32² to 128², and the fast path on 512². */
@@ -129,7 +145,7 @@ public final class Benchmark {
             progress.accept("warming up the JIT compiler (" + config.warmups() + " rounds on 32x32 and 48x48 floors)");
             for (int w = 0; w < config.warmups(); w++) {
                 for (int side : new int[] {32, 48}) {
-                    for (String kind : new String[] {RESERVE, CONSUMPTION, DISCOUNTED}) {
+                    for (String kind : config.instances()) {
                         // the consumption products are large even on small floors: the reserve ones warm the same code
                         measure(instance(side, kind), sampler, 2, !kind.equals(CONSUMPTION), true);
                     }
@@ -139,7 +155,10 @@ public final class Benchmark {
             all.addAll(config.fastOnlySizes());
             for (int side : all) {
                 boolean full = config.sizes().contains(side);
-                for (String kind : full ? new String[] {RESERVE, CONSUMPTION, DISCOUNTED} : new String[] {CONSUMPTION}) {
+                for (String kind : full ? config.instances() : List.of(CONSUMPTION)) {
+                    if (!config.instances().contains(kind)) {
+                        continue;
+                    }
                     Instance inst = instance(side, kind);
                     progress.accept(String.format(java.util.Locale.ROOT,
                             "%dx%d %s: arena %d vertices, %d edges, goal %d states, compiled in %.0f ms",

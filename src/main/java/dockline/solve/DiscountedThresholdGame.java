@@ -64,14 +64,14 @@ public final class DiscountedThresholdGame {
     private final boolean[] robotOwned;
     private final int[] outStart;
     private final int[] edgeTarget;
-    /** In-degree of vertex v at index v + 1 (index 0 is 0): the reverse CSR before its prefix sums. */
-    private final int[] inDegree;
+    /** Offsets of the predecessor lists (reverse CSR), from the in-degrees counted while building. */
+    private final int[] inStart;
     private final int comparatorStates;
     private final int overflowPairs;
     private final long buildNanos;
 
     private DiscountedThresholdGame(Relation relation, int n, int m, boolean[] robotOwned, int[] outStart,
-                                    int[] edgeTarget, int[] inDegree, int comparatorStates, int overflowPairs,
+                                    int[] edgeTarget, int[] inStart, int comparatorStates, int overflowPairs,
                                     long buildNanos) {
         this.relation = relation;
         this.vertexCount = n;
@@ -79,7 +79,7 @@ public final class DiscountedThresholdGame {
         this.robotOwned = robotOwned;
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
-        this.inDegree = inDegree;
+        this.inStart = inStart;
         this.comparatorStates = comparatorStates;
         this.overflowPairs = overflowPairs;
         this.buildNanos = buildNanos;
@@ -95,11 +95,12 @@ public final class DiscountedThresholdGame {
         long t0 = System.nanoTime();
         int cap = Math.addExact(arena.vertexCount(), START + 1);
         int[] vA = new int[cap];
-        int[] vM = new int[cap];
+        // per pair, side by side: [2 id] its comparator state, [2 id + 1] its in-degree so far (one cache
+        // line serves both the chain test and the count on each edge)
+        int[] pair = new int[Math.multiplyExact(cap, 2)];
         int[] next = new int[cap];
         boolean[] robot = new boolean[cap];
         int[] outStart = new int[cap + 1];
-        int[] inDegree = new int[cap + 1];
         int[] edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
         int[] head = new int[arena.vertexCount()];
         Arrays.fill(head, -1);
@@ -118,7 +119,7 @@ public final class DiscountedThresholdGame {
         int m = 0;
         int x0 = arena.startVertex();
         vA[START] = x0;
-        vM[START] = comparator.initialState();
+        pair[2 * START] = comparator.initialState();
         next[START] = -1;
         robot[START] = arena.isRobot(x0);
         head[x0] = START;
@@ -127,11 +128,11 @@ public final class DiscountedThresholdGame {
             outStart[v] = m;
             if (v < START) {
                 edgeTarget[m++] = v;
-                inDegree[v + 1]++;
+                pair[2 * v + 1]++;
                 continue;
             }
             int x = vA[v];
-            int s = vM[v];
+            int s = pair[2 * v];
             boolean robotMoves = arena.isRobot(x);
             int eEnd = arena.outEnd(x);
             int eBegin = arena.outBegin(x);
@@ -170,7 +171,7 @@ public final class DiscountedThresholdGame {
                 } else {
                     id = head[t];
                     int walked = 0;
-                    while (id >= 0 && vM[id] != s2) {
+                    while (id >= 0 && pair[2 * id] != s2) {
                         id = next[id];
                         walked++;
                     }
@@ -184,15 +185,14 @@ public final class DiscountedThresholdGame {
                         if (n == vA.length) {
                             int c = Math.addExact(n, n / 2);
                             vA = Arrays.copyOf(vA, c);
-                            vM = Arrays.copyOf(vM, c);
+                            pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
                             next = Arrays.copyOf(next, c);
                             robot = Arrays.copyOf(robot, c);
                             outStart = Arrays.copyOf(outStart, c + 1);
-                            inDegree = Arrays.copyOf(inDegree, c + 1);
                         }
                         id = n++;
                         vA[id] = t;
-                        vM[id] = s2;
+                        pair[2 * id] = s2;
                         robot[id] = arena.isRobot(t);
                         if (walked < CHAIN_LIMIT) {
                             next[id] = head[t];
@@ -204,12 +204,19 @@ public final class DiscountedThresholdGame {
                     }
                 }
                 edgeTarget[m] = id;
-                inDegree[id + 1]++;
+                pair[2 * id + 1]++;
                 m++;
             }
         }
         outStart[n] = m;
-        return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inDegree,
+        // the predecessor offsets by prefix sums over the in-degrees, in the queue's array when it is long
+        // enough (the queue is spent: every pair has been expanded)
+        int[] inStart = vA.length > n ? vA : new int[n + 1];
+        inStart[0] = 0;
+        for (int v = 0; v < n; v++) {
+            inStart[v + 1] = inStart[v] + pair[2 * v + 1];
+        }
+        return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inStart,
                 comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
     }
 
@@ -245,11 +252,8 @@ public final class DiscountedThresholdGame {
         final boolean[] robot = robotOwned;
         final int[] out = outStart;
         final int[] to = edgeTarget;
-        // reverse CSR by counting sort on the target: inStart from the in-degrees counted while building
-        int[] inStart = Arrays.copyOf(inDegree, n + 1);
-        for (int v = 0; v < n; v++) {
-            inStart[v + 1] += inStart[v];
-        }
+        // reverse CSR by counting sort on the target, on the offsets computed while building
+        final int[] inStart = this.inStart;
         int[] inSource = new int[m];
         // fill[v] starts at inStart[v]; kept in the array that becomes the counters below
         int[] fill = Arrays.copyOf(inStart, n);
