@@ -63,7 +63,8 @@ import java.util.function.Consumer;
  *
  * <p>Before measuring, every method runs a few times on small floors so the JIT compiler has done its
  * work; each timed solve is the best of {@link Config#reps()} runs (the least disturbed by other
- * processes on a shared machine; runs over two seconds are not repeated), timed both by the wall
+ * processes on a shared machine; runs over two seconds are not repeated; the heap is settled before
+ * each run, outside the timing, so no run pays for an earlier one's garbage), timed both by the wall
  * clock and by the solving thread's CPU time plus the collector's pauses (the ratios use the latter,
  * as other processes on a shared machine hardly change it). The peak heap of a method
  * is sampled above the baseline taken (after a full collection) with the instance's arena in memory;
