@@ -40,7 +40,8 @@ import java.util.Arrays;
  * counting-sort pass and no array is copied to trim it.
  *
  * <p>Cost: O(|V| + |E|) expected time and memory in the product, which has at most (arena vertices)
- * x (comparator states) vertices.
+ * x (comparator states) vertices, plus one int per arena vertex for the chain heads; the attractor
+ * stops as soon as the start is decided.
  */
 public final class DiscountedThresholdGame {
 
