@@ -93,6 +93,14 @@ public final class DiscountedThresholdGame {
      * @throws ArithmeticException      if the product would have more than {@code Integer.MAX_VALUE} vertices or edges
      */
     public static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator) {
+        return build(arena, comparator, true);
+    }
+
+    /**
+     * The same, and with {@code usePrivateActions} false every pair is indexed (as for arenas whose
+     * actions are shared): for tests, which compare both ways.
+     */
+    static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator, boolean usePrivateActions) {
         long t0 = System.nanoTime();
         int cap = Math.addExact(arena.vertexCount(), START + 1);
         int[] vA = new int[cap];
@@ -103,7 +111,9 @@ public final class DiscountedThresholdGame {
         boolean[] robot = new boolean[cap];
         int[] outStart = new int[cap + 1];
         int[] edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
-        int[] head = new int[arena.vertexCount()];
+        boolean privateActions = usePrivateActions && privateActions(arena);
+        // with private actions only robot vertices are ever looked up: the heads cover just those
+        int[] head = new int[privateActions ? arena.robotCount() : arena.vertexCount()];
         Arrays.fill(head, -1);
         LongIntMap overflow = null;
         int mu = comparator.maxAbsWeight();
@@ -170,13 +180,19 @@ public final class DiscountedThresholdGame {
                 } else if (s2 == DiscountedComparator.ACCEPT) {
                     id = ACCEPTED;
                 } else {
-                    id = head[t];
+                    // a robot's move into a private action (see privateActions) reaches a pair that no other
+                    // product edge reaches, as this robot pair is expanded once and moving keeps the state:
+                    // the pair is new and never looked up again, so it is not indexed
+                    boolean fresh = robotMoves && privateActions && !arena.isRobot(t);
+                    id = fresh ? -1 : head[t];
                     int walked = 0;
                     while (id >= 0 && pair[2 * id] != s2) {
                         id = next[id];
                         walked++;
                     }
-                    if (id < 0 && walked == CHAIN_LIMIT) {
+                    if (fresh) {
+                        walked = -1;
+                    } else if (id < 0 && walked == CHAIN_LIMIT) {
                         if (overflow == null) {
                             overflow = new LongIntMap(64);
                         }
@@ -195,7 +211,9 @@ public final class DiscountedThresholdGame {
                         vA[id] = t;
                         pair[2 * id] = s2;
                         robot[id] = arena.isRobot(t);
-                        if (walked < CHAIN_LIMIT) {
+                        if (walked < 0) {
+                            next[id] = -1; // a fresh pair, not indexed
+                        } else if (walked < CHAIN_LIMIT) {
                             next[id] = head[t];
                             head[t] = id;
                         } else {
@@ -219,6 +237,25 @@ public final class DiscountedThresholdGame {
         }
         return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inStart,
                 comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
+    }
+
+    /**
+     * Whether every disturbance vertex of the arena is private to one robot vertex: exactly one
+     * in-edge, from a robot vertex, and the start is a robot vertex. The compiled arenas are so built
+     * (a disturbance vertex is one robot vertex's action); then a disturbance pair is reached only by
+     * the one robot move into it and needs no index. One pass over the disturbance vertices.
+     */
+    static boolean privateActions(Arena arena) {
+        if (!arena.isRobot(arena.startVertex())) {
+            return false;
+        }
+        for (int a = arena.robotCount(); a < arena.vertexCount(); a++) {
+            int i = arena.inBegin(a);
+            if (arena.inEnd(a) - i != 1 || !arena.isRobot(arena.source(arena.inEdge(i)))) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** The memo with a row for every state discovered so far (up to its cap), new entries unknown. */

@@ -17,7 +17,8 @@ import net.jqwik.api.statistics.Statistics;
 
 /**
  * {@link DiscountedThresholdGame}'s own layout (per-arena-vertex chains with an overflow table,
- * memoised comparator steps, arrays that start at the arena's size and grow) gives the same answer
+ * memoised comparator steps, arrays that start at the arena's size and grow, private actions not
+ * indexed, or every pair indexed) gives the same answer
  * as value iteration, an independent computation ({@link DiscountedValueIteration#decide}: the
  * optimal value by value iteration, then compared; discounted games have optimal positional
  * strategies for both players, Shapley 1953 and Zwick &amp; Paterson 1996, so the robot can force
@@ -49,10 +50,17 @@ class ThresholdGameLayoutProperties {
         boolean byValueIteration = new DiscountedValueIteration(a, d).decide(v, rel).holds();
         assertThat(game.robotWins()).as("v=%s %s, d=%d, comparator bound %d", v, rel.symbol(), d, bound)
                 .isEqualTo(byValueIteration);
+        // every pair indexed (the way for arenas whose actions are shared): the same answer and product
+        DiscountedThresholdGame indexed = DiscountedThresholdGame.build(a, new DiscountedComparator(d, bound, v, rel), false);
+        assertThat(indexed.robotWins()).as("every pair indexed").isEqualTo(byValueIteration);
+        assertThat(indexed.vertexCount()).isEqualTo(game.vertexCount());
+        assertThat(indexed.edgeCount()).isEqualTo(game.edgeCount());
         // asking twice gives the same answer (robotWins does not change the game)
         assertThat(game.robotWins()).isEqualTo(byValueIteration);
         Statistics.label("overflow table used").collect(game.overflowPairs() > 0);
         Statistics.label("product larger than the arena").collect(game.vertexCount() > a.vertexCount() + 3);
+        Statistics.label("private actions").collect(DiscountedThresholdGame.privateActions(a));
+        Statistics.label("private actions").coverage(c -> c.check(true).percentage(p -> p >= 50));
         Statistics.label("overflow table used").coverage(c -> c.check(true).percentage(p -> p >= 5));
         Statistics.label("product larger than the arena").coverage(c -> c.check(true).percentage(p -> p >= 5));
     }
