@@ -41,6 +41,11 @@ public final class BenchCommand implements Callable<Integer> {
             description = "floor sides to run instead of the default series, e.g. 32,64 (each at least 32)")
     List<Integer> sizes;
 
+    @Option(names = "--instances", paramLabel = "NAME", split = ",",
+            description = "run only these instances (reserve, consumption, discounted), e.g. discounted;"
+                    + " a development aid: the ratios between instances are then missing")
+    List<String> instances;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -57,10 +62,20 @@ public final class BenchCommand implements Callable<Integer> {
                 }
             }
         }
+        if (instances != null) {
+            for (String i : instances) {
+                if (!Benchmark.INSTANCES.contains(i)) {
+                    err.println("dockline: --instances: '" + i + "' is not one of " + String.join(", ", Benchmark.INSTANCES));
+                    err.println("Try 'dockline bench --help'.");
+                    err.flush();
+                    return ExitCodes.BAD_INPUT;
+                }
+            }
+        }
         Benchmark.Config config = new Benchmark.Config(sizes != null ? sizes : base.sizes(),
                 sizes != null ? List.of() : base.fastOnlySizes(), seed, base.budget(),
                 base.reps(), base.warmups(), base.sweepCapMillis(), base.maxProductVertices(),
-                base.maxImplicitVertices());
+                base.maxImplicitVertices(), instances != null && !instances.isEmpty() ? instances : Benchmark.INSTANCES);
         // progress in a compact form on standard error, so standard output has the table (or the JSON) once
         PrintWriter progress = err;
         progress.println(quick ? "dockline bench --quick" : "dockline bench (full run, up to ten minutes)");

@@ -1,10 +1,10 @@
 package dockline.solve;
 
 import dockline.arena.Arena;
-import dockline.monitor.DiscountedComparator;
-import dockline.util.LongIntMap;
-import dockline.monitor.Monitor;
 import dockline.model.Relation;
+import dockline.monitor.DiscountedComparator;
+import dockline.monitor.Monitor;
+import dockline.util.LongIntMap;
 import java.util.Arrays;
 
 /**
@@ -16,20 +16,32 @@ import java.util.Arrays;
  *
  * <p>Vertices: {@link #ACCEPTED} (the comparator's accepting sink) and {@link #REJECTED} (its
  * losing sink), each with a self-loop, then the pairs (arena vertex, comparator state) reachable
- * from (start, initial), numbered in breadth-first order through an open-addressing table. A
- * robot pair (x, s) has one edge per action, to (action, s): choosing reads no weight. A
- * disturbance pair (a, s) has one edge per outcome a -> x' of weight w, to the sink the comparator
- * reaches on w or to (x', s').
+ * from (start, initial), numbered in breadth-first order. A robot pair (x, s) has one edge per
+ * action, to (action, s): choosing reads no weight. A disturbance pair (a, s) has one edge per
+ * outcome a -> x' of weight w, to the sink the comparator reaches on w or to (x', s').
  *
  * <p>For {@code >} the robot must reach {@link #ACCEPTED} (co-safety): the robot's attractor. For
  * {@code >=} the robot must avoid {@link #REJECTED} for ever (safety): the robot wins exactly
- * outside the disturbance's attractor to {@link #REJECTED}, computed by the same linear-time
- * {@link AttractorSolver} with the roles swapped (Grädel, Thomas, Wilke (eds.), "Automata, Logics,
- * and Infinite Games", LNCS 2500, 2002, ch. 2: safety and reachability games are dual). The method follows the published work on
- * satisficing (threshold) problems in quantitative games (2021).
+ * outside the disturbance's attractor to {@link #REJECTED}; both are the same classical
+ * linear-time backward search with the roles swapped (Grädel, Thomas, Wilke (eds.), "Automata,
+ * Logics, and Infinite Games", LNCS 2500, 2002, ch. 2: safety and reachability games are dual;
+ * the counter-based search as in {@link AttractorSolver}). The method follows the published work
+ * on satisficing (threshold) problems in quantitative games (2021).
  *
- * <p>Cost: O(|V| + |E|) time and memory in the product, which has at most (arena vertices) x
- * (comparator states) vertices.
+ * <p>Layout, for large arenas: the comparator has few states (a handful to a few hundred) while the
+ * arena has millions of vertices, so pairs are found through a per-arena-vertex chain ({@code head}
+ * indexed by the arena vertex, {@code next} by the pair) rather than a hash table over all pairs:
+ * the lookup touches an array in the arena's own order instead of a random slot of a table twice the
+ * product's size. A chain holds at most {@value #CHAIN_LIMIT} pairs; further pairs of the same arena
+ * vertex go to an open-addressing table, so a lookup stays O(1). Comparator steps are memoised per
+ * (state, weight) in an int array. The arrays start at the arena's size (the product is often no
+ * larger: most plays soon leave the comparator's band) and grow by half only when needed; the
+ * in-degrees are counted while building, so {@link #robotWins()} builds the predecessor lists by one
+ * counting-sort pass and no array is copied to trim it.
+ *
+ * <p>Cost: O(|V| + |E|) expected time and memory in the product, which has at most (arena vertices)
+ * x (comparator states) vertices, plus one int per arena vertex for the chain heads; the attractor
+ * stops as soon as the start is decided.
  */
 public final class DiscountedThresholdGame {
 
@@ -37,24 +49,40 @@ public final class DiscountedThresholdGame {
     public static final int REJECTED = 1;
     private static final int START = 2;
 
+    /** Pairs per arena vertex kept in its chain; more go to the overflow table. */
+    static final int CHAIN_LIMIT = 4;
+    /** Memoise comparator steps only when a state's row of weights is at most this long. */
+    private static final int MEMO_MAX_WIDTH = 1 << 12;
+    /** ... and only up to this many (state, weight) entries in all (16 MB). */
+    private static final int MEMO_MAX_ENTRIES = 1 << 22;
+    /** A memo entry not computed yet (states are at least {@link Monitor#REJECT}). */
+    private static final int UNKNOWN = Integer.MIN_VALUE;
+
     private final Relation relation;
     private final int vertexCount;
     private final int edgeCount;
+    // arrays may be longer than vertexCount (+1) / edgeCount: spare capacity is kept rather than copied away
     private final boolean[] robotOwned;
     private final int[] outStart;
     private final int[] edgeTarget;
+    /** Offsets of the predecessor lists (reverse CSR), from the in-degrees counted while building. */
+    private final int[] inStart;
     private final int comparatorStates;
+    private final int overflowPairs;
     private final long buildNanos;
 
     private DiscountedThresholdGame(Relation relation, int n, int m, boolean[] robotOwned, int[] outStart,
-                                    int[] edgeTarget, int comparatorStates, long buildNanos) {
+                                    int[] edgeTarget, int[] inStart, int comparatorStates, int overflowPairs,
+                                    long buildNanos) {
         this.relation = relation;
         this.vertexCount = n;
         this.edgeCount = m;
         this.robotOwned = robotOwned;
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
+        this.inStart = inStart;
         this.comparatorStates = comparatorStates;
+        this.overflowPairs = overflowPairs;
         this.buildNanos = buildNanos;
     }
 
@@ -65,89 +93,243 @@ public final class DiscountedThresholdGame {
      * @throws ArithmeticException      if the product would have more than {@code Integer.MAX_VALUE} vertices or edges
      */
     public static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator) {
+        return build(arena, comparator, true);
+    }
+
+    /**
+     * The same, and with {@code usePrivateActions} false every pair is indexed (as for arenas whose
+     * actions are shared): for tests, which compare both ways.
+     */
+    static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator, boolean usePrivateActions) {
         long t0 = System.nanoTime();
-        int cap = Math.max(16, arena.vertexCount() * 2);
+        int cap = Math.addExact(arena.vertexCount(), START + 1);
         int[] vA = new int[cap];
-        int[] vM = new int[cap];
+        // per pair, side by side: [2 id] its comparator state, [2 id + 1] its in-degree so far (one cache
+        // line serves both the chain test and the count on each edge)
+        int[] pair = new int[Math.multiplyExact(cap, 2)];
+        int[] next = new int[cap];
         boolean[] robot = new boolean[cap];
         int[] outStart = new int[cap + 1];
-        int[] edgeTarget = new int[Math.max(16, arena.edgeCount() * 2)];
-        LongIntMap index = new LongIntMap(cap);
+        int[] edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
+        boolean privateActions = usePrivateActions && privateActions(arena);
+        // with private actions only robot vertices are ever looked up: the heads cover just those
+        int[] head = new int[privateActions ? arena.robotCount() : arena.vertexCount()];
+        Arrays.fill(head, -1);
+        LongIntMap overflow = null;
+        int mu = comparator.maxAbsWeight();
+        int width = 2 * mu + 1;
+        int[] memo = null;
+        if (width <= MEMO_MAX_WIDTH) {
+            memo = new int[width * Math.min(64, MEMO_MAX_ENTRIES / width)];
+            Arrays.fill(memo, UNKNOWN);
+        }
         // sinks: self-loops
         robot[ACCEPTED] = true;
         robot[REJECTED] = false;
         int n = START;
         int m = 0;
-        vA[START] = arena.startVertex();
-        vM[START] = comparator.initialState();
-        robot[START] = arena.isRobot(arena.startVertex());
-        index.put(key(arena.startVertex(), comparator.initialState()), START);
+        int x0 = arena.startVertex();
+        vA[START] = x0;
+        pair[2 * START] = comparator.initialState();
+        next[START] = -1;
+        robot[START] = arena.isRobot(x0);
+        head[x0] = START;
         n++;
         for (int v = 0; v < n; v++) {
             outStart[v] = m;
             if (v < START) {
-                edgeTarget = ensure(edgeTarget, m + 1);
                 edgeTarget[m++] = v;
+                pair[2 * v + 1]++;
                 continue;
             }
             int x = vA[v];
-            int s = vM[v];
-            for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
+            int s = pair[2 * v];
+            boolean robotMoves = arena.isRobot(x);
+            int eEnd = arena.outEnd(x);
+            int eBegin = arena.outBegin(x);
+            if (Math.addExact(m, eEnd - eBegin) > edgeTarget.length) {
+                edgeTarget = Arrays.copyOf(edgeTarget,
+                        Math.max(Math.addExact(m, eEnd - eBegin), Math.addExact(m, m / 2)));
+            }
+            for (int e = eBegin; e < eEnd; e++) {
                 int t = arena.target(e);
-                int s2 = arena.isRobot(x) ? s : comparator.step(s, arena.weight(e));
+                int s2;
+                if (robotMoves) {
+                    s2 = s;
+                } else {
+                    int w = arena.weight(e);
+                    long slot = (long) s * width + (w + mu);
+                    if (memo != null && w >= -mu && w <= mu && slot < memo.length) {
+                        s2 = memo[(int) slot];
+                        if (s2 == UNKNOWN) {
+                            s2 = comparator.step(s, w);
+                            memo[(int) slot] = s2;
+                            memo = growMemo(memo, comparator.stateCount(), width);
+                        }
+                    } else {
+                        // a weight out of bound makes step throw; a state past the memo's cap is stepped directly
+                        s2 = comparator.step(s, w);
+                        if (memo != null) {
+                            memo = growMemo(memo, comparator.stateCount(), width);
+                        }
+                    }
+                }
                 int id;
                 if (s2 == Monitor.REJECT) {
                     id = REJECTED;
                 } else if (s2 == DiscountedComparator.ACCEPT) {
                     id = ACCEPTED;
                 } else {
-                    long k = key(t, s2);
-                    id = index.get(k);
-                    if (id == LongIntMap.ABSENT) {
+                    // a robot's move into a private action (see privateActions) reaches a pair that no other
+                    // product edge reaches, as this robot pair is expanded once and moving keeps the state:
+                    // the pair is new and never looked up again, so it is not indexed
+                    boolean fresh = robotMoves && privateActions && !arena.isRobot(t);
+                    id = fresh ? -1 : head[t];
+                    int walked = 0;
+                    while (id >= 0 && pair[2 * id] != s2) {
+                        id = next[id];
+                        walked++;
+                    }
+                    if (fresh) {
+                        walked = -1;
+                    } else if (id < 0 && walked == CHAIN_LIMIT) {
+                        if (overflow == null) {
+                            overflow = new LongIntMap(64);
+                        }
+                        id = overflow.get(key(t, s2));
+                    }
+                    if (id < 0) {
                         if (n == vA.length) {
                             int c = Math.addExact(n, n / 2);
                             vA = Arrays.copyOf(vA, c);
-                            vM = Arrays.copyOf(vM, c);
+                            pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
+                            next = Arrays.copyOf(next, c);
                             robot = Arrays.copyOf(robot, c);
                             outStart = Arrays.copyOf(outStart, c + 1);
                         }
                         id = n++;
                         vA[id] = t;
-                        vM[id] = s2;
+                        pair[2 * id] = s2;
                         robot[id] = arena.isRobot(t);
-                        index.put(k, id);
+                        if (walked < 0) {
+                            next[id] = -1; // a fresh pair, not indexed
+                        } else if (walked < CHAIN_LIMIT) {
+                            next[id] = head[t];
+                            head[t] = id;
+                        } else {
+                            next[id] = -1;
+                            overflow.put(key(t, s2), id);
+                        }
                     }
                 }
-                edgeTarget = ensure(edgeTarget, m + 1);
                 edgeTarget[m] = id;
-                m = Math.addExact(m, 1);
+                pair[2 * id + 1]++;
+                m++;
             }
         }
-        outStart = Arrays.copyOf(outStart, n + 1);
         outStart[n] = m;
-        return new DiscountedThresholdGame(comparator.relation(), n, m, Arrays.copyOf(robot, n), outStart,
-                Arrays.copyOf(edgeTarget, m), comparator.stateCount(), System.nanoTime() - t0);
+        // the predecessor offsets by prefix sums over the in-degrees, in the queue's array when it is long
+        // enough (the queue is spent: every pair has been expanded)
+        int[] inStart = vA.length > n ? vA : new int[n + 1];
+        inStart[0] = 0;
+        for (int v = 0; v < n; v++) {
+            inStart[v + 1] = inStart[v] + pair[2 * v + 1];
+        }
+        return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inStart,
+                comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
     }
 
-    private static int[] ensure(int[] a, int size) {
-        return size <= a.length ? a : Arrays.copyOf(a, Math.max(size, Math.addExact(a.length, a.length / 2)));
+    /**
+     * Whether every disturbance vertex of the arena is private to one robot vertex: exactly one
+     * in-edge, from a robot vertex, and the start is a robot vertex. The compiled arenas are so built
+     * (a disturbance vertex is one robot vertex's action); then a disturbance pair is reached only by
+     * the one robot move into it and needs no index. One pass over the disturbance vertices.
+     */
+    static boolean privateActions(Arena arena) {
+        if (!arena.isRobot(arena.startVertex())) {
+            return false;
+        }
+        for (int a = arena.robotCount(); a < arena.vertexCount(); a++) {
+            int i = arena.inBegin(a);
+            if (arena.inEnd(a) - i != 1 || !arena.isRobot(arena.source(arena.inEdge(i)))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The memo with a row for every state discovered so far (up to its cap), new entries unknown. */
+    private static int[] growMemo(int[] memo, int states, int width) {
+        long want = (long) states * width;
+        if (want <= memo.length || memo.length >= MEMO_MAX_ENTRIES / width * width) {
+            return memo;
+        }
+        int grown = (int) Math.min(MEMO_MAX_ENTRIES / width * (long) width, Math.max(2L * memo.length, want));
+        int old = memo.length;
+        int[] g = Arrays.copyOf(memo, grown);
+        Arrays.fill(g, old, grown, UNKNOWN);
+        return g;
     }
 
     private static long key(int arenaVertex, int state) {
         return ((long) arenaVertex << 32) | (state & 0xffffffffL);
     }
 
-    /** Whether the robot can force {@code DS relation v} from the start, by one linear-time attractor. */
+    /**
+     * Whether the robot can force {@code DS relation v} from the start, by one linear-time attractor:
+     * the reaching player's attractor to its target sink ({@link #ACCEPTED} for {@code >}, the robot
+     * reaching; {@link #REJECTED} for {@code >=}, the disturbance reaching), on the predecessor lists
+     * built here by a counting sort. The search stops as soon as the start joins, as that already
+     * decides the answer. O(|V| + |E|) time, three int arrays of the product's size besides the graph.
+     * May be called more than once (it does not change the game).
+     */
     public boolean robotWins() {
         boolean safety = relation == Relation.AT_LEAST;
-        boolean[] reacher = new boolean[vertexCount];
-        boolean[] target = new boolean[vertexCount];
-        for (int v = 0; v < vertexCount; v++) {
-            reacher[v] = safety != robotOwned[v];
+        final int n = vertexCount;
+        final int m = edgeCount;
+        final boolean[] robot = robotOwned;
+        final int[] out = outStart;
+        final int[] to = edgeTarget;
+        // reverse CSR by counting sort on the target, on the offsets computed while building
+        final int[] inStart = this.inStart;
+        int[] inSource = new int[m];
+        // fill[v] starts at inStart[v]; kept in the array that becomes the counters below
+        int[] fill = Arrays.copyOf(inStart, n);
+        for (int v = 0; v < n; v++) {
+            for (int e = out[v]; e < out[v + 1]; e++) {
+                inSource[fill[to[e]]++] = v;
+            }
         }
-        target[safety ? REJECTED : ACCEPTED] = true;
-        Solution sol = new AttractorSolver(new GameGraph(reacher, target, outStart, edgeTarget)).solve();
-        return safety != sol.winning(START);
+        // count[v]: moves of v not yet known to enter the attractor that v still needs before it joins
+        // (1 for the reaching player's vertices, all its out-edges for the other player's); 0 once joined
+        int[] count = fill;
+        int[] queue = new int[n];
+        int head = 0;
+        int tail = 0;
+        int goal = safety ? REJECTED : ACCEPTED;
+        for (int v = 0; v < n; v++) {
+            boolean reacher = safety != robot[v];
+            count[v] = v == goal ? 0 : reacher ? 1 : out[v + 1] - out[v];
+            if (count[v] == 0) {
+                // the goal itself, or a vertex of the other player without moves: won vacuously
+                queue[tail++] = v;
+            }
+        }
+        boolean startJoins = count[START] == 0;
+        while (head < tail && !startJoins) {
+            int v = queue[head++];
+            for (int i = inStart[v]; i < inStart[v + 1]; i++) {
+                int u = inSource[i];
+                if (count[u] > 0 && --count[u] == 0) {
+                    queue[tail++] = u;
+                    if (u == START) {
+                        startJoins = true;
+                        break;
+                    }
+                }
+            }
+        }
+        return safety != startJoins;
     }
 
     public int vertexCount() {
@@ -161,6 +343,11 @@ public final class DiscountedThresholdGame {
     /** Comparator states discovered while building (initial state and accepting sink included). */
     public int comparatorStates() {
         return comparatorStates;
+    }
+
+    /** Pairs found through the overflow table (arena vertices with over {@value #CHAIN_LIMIT} comparator states); for tests. */
+    int overflowPairs() {
+        return overflowPairs;
     }
 
     public long buildNanos() {

@@ -48,4 +48,26 @@ class BenchCommandTest {
         assertThat(root.get("mismatches").size()).isZero();
         assertThat(r.err()).contains("32x32 reserve"); // progress goes to standard error with --json
     }
+
+    @Test
+    void unknownInstance_isBadUsage() {
+        Run r = run("bench", "--instances", "discountd");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--instances", "discounted");
+    }
+
+    @Test
+    void oneInstance_runsOnlyThatInstance_andBothRoutesAgree() throws Exception {
+        Run r = run("bench", "--json", "--sizes", "32", "--instances", "discounted");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        assertThat(root.get("rows").size()).isEqualTo(2);
+        for (JsonNode row : root.get("rows")) {
+            assertThat(row.get("instance").asText()).isEqualTo("discounted");
+            // the comparator route and value iteration are independent computations of the same question
+            assertThat(row.get("verdict").asText()).isEqualTo(root.get("rows").get(0).get("verdict").asText());
+        }
+        assertThat(root.get("ratios").get("viOverComparator").has("32")).isTrue();
+        assertThat(r.err()).doesNotContain("32x32 reserve");
+    }
 }
