@@ -65,6 +65,8 @@ public final class ImplicitReserveGame {
     // per disturbance (action) vertex x, the index of x among its owner's out-edges: the robot's choice
     // recorded in the owner's counter (see run)
     private final byte[] actionIndex;
+    // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
+    private final int[] ownerOf;
     // the most bytes the worklist may take (Long.MAX_VALUE: no limit); see limitWorklist
     private long worklistBudgetBytes = Long.MAX_VALUE;
     private long budgetBytes = Long.MAX_VALUE;
@@ -111,6 +113,7 @@ public final class ImplicitReserveGame {
         }
         int rc = arena.robotCount();
         this.actionIndex = new byte[arena.vertexCount() - rc];
+        this.ownerOf = new int[arena.vertexCount() - rc];
         for (int x = rc; x < arena.vertexCount(); x++) {
             if (arena.inEnd(x) - arena.inBegin(x) != 1) {
                 throw new IllegalArgumentException("disturbance vertex " + x + " must have exactly one way in, from its"
@@ -118,6 +121,7 @@ public final class ImplicitReserveGame {
             }
             int e = arena.inEdge(arena.inBegin(x));
             actionIndex[x - rc] = (byte) (e - arena.outBegin(arena.source(e)));
+            ownerOf[x - rc] = arena.source(e);
         }
     }
 
@@ -418,9 +422,10 @@ public final class ImplicitReserveGame {
         // the need (1 for a robot triple, the out-degree for a disturbance triple). Half a byte per
         // vertex keeps the whole table in the last-level cache for products of tens of millions.
         final byte[] count = new byte[(n >>> 1) + 1];
-        // the worklist is a stack: any order reaches the same least fixpoint, and last-in first-out
-        // keeps the search near the vertices it just won, so the counters it touches are mostly in cache
-        // one circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
+        // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
+        // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
+        // keeps the search near the counters it just touched, first-in first-out ranks the triples.
+        // One circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
         // or at the head (queue); its length is a power of two so indices wrap by a mask
         int[] wl = new int[1 << 12];
         int wmask = wl.length - 1;
@@ -458,6 +463,7 @@ public final class ImplicitReserveGame {
         long edges = 0;
         int steps = 0;
         boolean stopped = false;
+        expand:
         while (tail != head) {
             int p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
             int s2 = p & sMask;
@@ -466,34 +472,6 @@ public final class ImplicitReserveGame {
             int from = arena.inBegin(x);
             int to = arena.inEnd(x);
             edges += to - from;
-            if (x >= rc) {
-                // a disturbance triple: its only predecessor is its owner, same goal and level; one won action suffices
-                int owner = revSource[from];
-                int q = (((owner << gb) | g2) << lb) | s2;
-                int qs = (q & 1) << 2;
-                if (((count[q >>> 1] >>> qs) & 15) == 0) {
-                    // a robot triple needs one won successor, so its counter has room for more: it records
-                    // the choice, 1 + the index of p's action among the owner's out-edges (at most 15), and p
-                    // won strictly before q. No separate choice array, no second random access.
-                    count[q >>> 1] |= (byte) ((actionIndex[x - rc] + 1) << qs);
-                    if (tail - head == wl.length) {
-                        wl = grow(wl, head, tail);
-                        wmask = wl.length - 1;
-                        tail -= head;
-                        head = 0;
-                    }
-                    wl[(tail++) & wmask] = q;
-                    wonCount++;
-                    if (flags != null) {
-                        flags[q] = true;
-                    }
-                    if (q == start && stopAtStart) {
-                        stopped = true;
-                        break;
-                    }
-                }
-                continue;
-            }
             // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
             int cell = arena.cell(x);
             int gFrom = inverse.begin(cell, g2);
@@ -517,28 +495,62 @@ public final class ImplicitReserveGame {
                     continue;
                 }
                 int dBase = d << gb;
+                int owner = ownerOf[d - rc];
+                int oBase = owner << gb;
+                int choice = (actionIndex[d - rc] + 1);
                 for (int j = gFrom; j < gTo; j++) {
-                    int base = (dBase | inverse.state(j)) << lb;
+                    int gj = inverse.state(j);
+                    int base = (dBase | gj) << lb;
+                    int ob = (oBase | gj) << lb;
                     for (int s = sLo; s <= sHi; s++) {
-                        int q = base + s;
-                        int qs = (q & 1) << 2;
-                        int cell8 = count[q >>> 1];
-                        int c = (cell8 >>> qs) & 15;
-                        if (c < need) {
-                            count[q >>> 1] = (byte) (cell8 + (1 << qs));
-                            if (c + 1 == need) {
-                                if (tail - head == wl.length) {
-                                    wl = grow(wl, head, tail);
-                                    wmask = wl.length - 1;
-                                    tail -= head;
-                                    head = 0;
-                                }
-                                wl[(tail++) & wmask] = q;
-                                wonCount++;
-                                if (flags != null) {
-                                    flags[q] = true;
-                                }
+                        if (need > 1) {
+                            // an action the disturbance can spoil: won once all its outcomes are
+                            int q = base + s;
+                            int qs = (q & 1) << 2;
+                            int cell8 = count[q >>> 1];
+                            int c = (cell8 >>> qs) & 15;
+                            if (c >= need) {
+                                continue;
                             }
+                            count[q >>> 1] = (byte) (cell8 + (1 << qs));
+                            if (c + 1 < need) {
+                                continue;
+                            }
+                            if (flags != null) {
+                                flags[q] = true;
+                            }
+                        } else if (flags != null) {
+                            flags[base + s] = true;
+                        }
+                        // (d, gj, s) is won now. An action with one outcome needs no counter: its only
+                        // successor is the robot triple just expanded, which is expanded once. Its owner
+                        // (same goal state and level) is won by it unless already won; the owner's counter
+                        // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
+                        // The worklist holds robot triples only, so first-in first-out takes them in
+                        // order of rank and the first won action of an owner is one of least rank.
+                        wonCount++;
+                        edges++;
+                        int o = ob + s;
+                        int os = (o & 1) << 2;
+                        int o8 = count[o >>> 1];
+                        if (((o8 >>> os) & 15) != 0) {
+                            continue;
+                        }
+                        count[o >>> 1] = (byte) (o8 | (choice << os));
+                        if (tail - head == wl.length) {
+                            wl = grow(wl, head, tail);
+                            wmask = wl.length - 1;
+                            tail -= head;
+                            head = 0;
+                        }
+                        wl[(tail++) & wmask] = o;
+                        wonCount++;
+                        if (flags != null) {
+                            flags[o] = true;
+                        }
+                        if (o == start && stopAtStart) {
+                            stopped = true;
+                            break expand;
                         }
                     }
                 }
