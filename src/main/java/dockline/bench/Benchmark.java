@@ -254,6 +254,12 @@ public final class Benchmark {
         return THREADS.getCurrentThreadCpuTime() + gcMillis * 1_000_000L;
     }
 
+    /** A first run shorter than this is repeated (see {@link #time(HeapSampler, long, int, boolean, Body)}). */
+    private static final double SHORT_RUN_MILLIS = 200;
+    private static final int SHORT_RUN_REPS = 7;
+    private static final int SHORT_RUN_MAX = 50;
+    private static final double SHORT_RUN_BUDGET_MILLIS = 300;
+
     /** A run longer than this is not repeated (its time is stable enough, and the full run must stay short). */
     private static final double REPEAT_BELOW_MILLIS = 2_000;
 
@@ -274,10 +280,18 @@ public final class Benchmark {
         double bestCpu = Double.MAX_VALUE;
         long peak = -1;
         T value = null;
-        for (int r = 0; r < reps; r++) {
+        // a method whose first run is under SHORT_RUN_MILLIS is run again until SHORT_RUN_BUDGET_MILLIS
+        // have been spent on it (at least SHORT_RUN_REPS runs, at most SHORT_RUN_MAX): the best of three is
+        // at the mercy of one collection or scheduling hiccup when a run takes a few milliseconds, and the
+        // best of many is a stable estimate of the undisturbed time
+        int tries = reps;
+        double spent = 0;
+        for (int r = 0; r < tries; r++) {
             if (r == 0) {
                 sampler.start();
-            } else {
+            } else if (r < reps) {
+                // (the extra runs of a short method skip this: a collection costs more than such a run,
+                // and the best of many runs leaves out the few a collection falls into)
                 // Settle the heap between repetitions, outside the timing: without this a repetition starts
                 // with the previous one's result still referenced and its garbage uncollected, and pays
                 // (in the collector's pauses counted by cpuNow) for memory it did not allocate; the first
@@ -296,6 +310,13 @@ public final class Benchmark {
             }
             best = Math.min(best, ms);
             bestCpu = Math.min(bestCpu, c0 < 0 ? -1 : (c1 - c0) / 1e6);
+            spent += ms;
+            if (r == 0 && ms < SHORT_RUN_MILLIS && reps > 1) {
+                tries = SHORT_RUN_MAX;
+            }
+            if (tries == SHORT_RUN_MAX && r + 1 >= Math.max(reps, SHORT_RUN_REPS) && spent >= SHORT_RUN_BUDGET_MILLIS) {
+                break;
+            }
             if (ms > REPEAT_BELOW_MILLIS && !repeatLong) {
                 break;
             }
