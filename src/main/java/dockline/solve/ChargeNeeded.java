@@ -53,6 +53,51 @@ public final class ChargeNeeded {
         return of(game, sol, monitor);
     }
 
+    /**
+     * The same table from the product without storing it ({@link ImplicitReserveGame#solveRegion}: half
+     * a byte per triple instead of the stored product's 60 to 170 bytes per vertex); the default of
+     * the solver and the view, property-tested against {@link #compute}. O(product) time.
+     *
+     * @throws ProductTooLargeException if the counters, or the worklist while solving, pass the memory budget
+     */
+    public static ChargeNeeded computeImplicitly(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
+                                                ProductOptions options) {
+        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
+        long bytes = game.fixedBytes() + 4L * arena.robotCount() * goal.stateCount();
+        long budget = options.effectiveMemoryBudget();
+        if (bytes > budget) {
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), 0, bytes, 0), budget, false);
+        }
+        game.limitWorklist(budget - bytes, budget);
+        ImplicitReserveGame.Strategy region = game.solveRegion(options.cancelled());
+        int gs = goal.stateCount();
+        int levels = (int) monitor.stateBound();
+        int[] needed = new int[Math.multiplyExact(arena.robotCount(), gs)];
+        Arrays.fill(needed, IMPOSSIBLE);
+        for (int a = 0; a < arena.robotCount(); a++) {
+            int c = arena.cell(a);
+            long zones = arena.cellZones(c);
+            boolean dock = arena.isDock(c);
+            for (int g = 0; g < gs; g++) {
+                if (goal.step(g, zones) != g) {
+                    continue; // not normalised (or avoided): answered through its normal form
+                }
+                if (goal.accepting(g, dock)) {
+                    needed[a * gs + g] = monitor.floorUnits();
+                    continue;
+                }
+                // winning is monotone in the level: the first winning level is the least
+                for (int m = 0; m < levels; m++) {
+                    if (region.robotWins(a, g, m)) {
+                        needed[a * gs + g] = monitor.level(m);
+                        break;
+                    }
+                }
+            }
+        }
+        return new ChargeNeeded(arena, goal, monitor.floorUnits(), monitor.capacityUnits(), needed);
+    }
+
     /** Reads the table off a solved {@link ProductGame#everywhere} product. */
     static ChargeNeeded of(ProductGame game, Solution sol, ReserveMonitor monitor) {
         Arena arena = game.arena();

@@ -191,6 +191,22 @@ public final class ImplicitReserveGame {
         return new Strategy(r, counts[0]);
     }
 
+    /**
+     * The whole attractor (no early stop, last-in first-out): the robot's winning region over every
+     * triple, for {@link ChargeNeeded}. Same memory as {@link #solve(boolean)}, which it is, keeping
+     * the counters.
+     */
+    public Strategy solveRegion(BooleanSupplier cancelled) {
+        byte[][] counts = new byte[1][];
+        Result r = run(false, cancelled, null, false, counts);
+        return new Strategy(r, counts[0]);
+    }
+
+    /** Bytes a solve needs besides its worklist: the counters and the arrays built from the arena. */
+    public long fixedBytes() {
+        return slotCount / 2 + 10L * arena.edgeCount() + arena.vertexCount();
+    }
+
     /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
     public final class Strategy {
         private final Result result;

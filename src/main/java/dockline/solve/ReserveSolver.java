@@ -141,7 +141,7 @@ public final class ReserveSolver {
         long solved = System.nanoTime();
         Optional<ChargeNeeded> heat = Optional.empty();
         if (options.chargeNeeded()) {
-            heat = Optional.of(ChargeNeeded.compute(arena, goal, monitor, po, options.solver()));
+            heat = Optional.of(ChargeNeeded.computeImplicitly(arena, goal, monitor, po));
         }
         OptionalInt highest = OptionalInt.empty();
         boolean searched = false;

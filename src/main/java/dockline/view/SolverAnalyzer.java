@@ -42,9 +42,8 @@ public final class SolverAnalyzer implements Analyzer {
             mr = MissionReplays.of(mission, options);
             stopIf(cancelled);
             ReserveAnalysis a = mr.analysis();
-            heat = ChargeNeeded.compute(mr.arena(), a.goal(),
-                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product(),
-                    options.solver());
+            heat = ChargeNeeded.computeImplicitly(mr.arena(), a.goal(),
+                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product());
             stopIf(cancelled);
         } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);

@@ -58,4 +58,28 @@ class ChargeNeededProperties {
         assertThat(a.guaranteed()).as(RandomMissions.describe(m))
                 .isEqualTo(startOk && need != ChargeNeeded.IMPOSSIBLE && m.startUnits() >= need);
     }
+
+    /** The implicit table (the default) and the stored product's agree at every position and progress. */
+    @Property(tries = 300)
+    void implicitTable_equalsTheStoredProductsTable(@ForAll long seed, @ForAll boolean charging) {
+        Mission m = dockline.bench.TinyMissions.random(seed, charging);
+        dockline.arena.Arena arena = dockline.arena.ArenaCompiler.compile(m);
+        dockline.goal.GoalAutomaton goal = dockline.goal.GoalAutomaton.of(m);
+        dockline.monitor.ReserveMonitor monitor = new dockline.monitor.ReserveMonitor(m.reserveUnits(),
+                m.capacityUnits(), m.startUnits());
+        ChargeNeeded stored = ChargeNeeded.compute(arena, goal, monitor, ProductOptions.defaults(), AttractorSolver::new);
+        ChargeNeeded implicit = ChargeNeeded.computeImplicitly(arena, goal, monitor, ProductOptions.defaults());
+        int masks = 1 << m.tasks().visit().size();
+        for (int c = 0; c < arena.width() * arena.height(); c++) {
+            for (int k = 0; k <= arena.budget(); k++) {
+                for (int mask = 0; mask < masks; mask++) {
+                    if (goal.stateOfMask(mask) == dockline.goal.GoalAutomaton.REJECT) {
+                        continue;
+                    }
+                    assertThat(implicit.unitsNeeded(c, k, mask)).as("cell %d budget %d mask %d", c, k, mask)
+                            .isEqualTo(stored.unitsNeeded(c, k, mask));
+                }
+            }
+        }
+    }
 }
