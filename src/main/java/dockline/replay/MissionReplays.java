@@ -23,7 +23,7 @@ import java.util.Optional;
  * <p>When the mission is guaranteed, replays run the certified policy; {@link #worstCase()} is the
  * run that drives the battery lowest. When it is not, {@link #worstCase()} is the counterexample, and
  * the nominal and forced replays run the best-effort policy, judged against the mission's floor.
- * The counterexample's disturbance strategy uses the solver's winning region ({@link SolverRegion}).
+ * The counterexample's disturbance strategy uses the solver's winning region ({@link ReserveAnalysis#region()}).
  */
 public final class MissionReplays {
 

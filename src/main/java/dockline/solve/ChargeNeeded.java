@@ -62,46 +62,25 @@ public final class ChargeNeeded {
      */
     public static ChargeNeeded computeImplicitly(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
                                                 ProductOptions options) {
-        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
-        long bytes = game.fixedBytes() + 4L * arena.robotCount() * goal.stateCount();
-        long budget = options.effectiveMemoryBudget();
-        if (bytes > budget) {
-            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), 0, bytes, 0), budget, false);
-        }
-        game.limitWorklist(budget - bytes, budget);
+        ImplicitReserveGame game = ReserveSolver.implicitGame(arena, goal, monitor, options);
         ImplicitReserveGame.Strategy region = game.solveRegion(options.cancelled());
-        int gs = goal.stateCount();
-        int levels = (int) monitor.stateBound();
-        int[] needed = new int[Math.multiplyExact(arena.robotCount(), gs)];
-        Arrays.fill(needed, IMPOSSIBLE);
-        for (int a = 0; a < arena.robotCount(); a++) {
-            int c = arena.cell(a);
-            long zones = arena.cellZones(c);
-            boolean dock = arena.isDock(c);
-            for (int g = 0; g < gs; g++) {
-                if (goal.step(g, zones) != g) {
-                    continue; // not normalised (or avoided): answered through its normal form
-                }
-                if (goal.accepting(g, dock)) {
-                    needed[a * gs + g] = monitor.floorUnits();
-                    continue;
-                }
-                // winning is monotone in the level: the first winning level is the least
-                for (int m = 0; m < levels; m++) {
-                    if (region.robotWins(a, g, m)) {
-                        needed[a * gs + g] = monitor.level(m);
-                        break;
-                    }
-                }
-            }
-        }
-        return new ChargeNeeded(arena, goal, monitor.floorUnits(), monitor.capacityUnits(), needed);
+        return table(arena, goal, monitor, region::robotWins);
     }
 
     /** Reads the table off a solved {@link ProductGame#everywhere} product. */
     static ChargeNeeded of(ProductGame game, Solution sol, ReserveMonitor monitor) {
-        Arena arena = game.arena();
-        GoalAutomaton goal = game.goal();
+        return table(game.arena(), game.goal(), monitor, (a, g, m) -> {
+            int p = game.vertexOf(a, g, m);
+            return p >= 0 && sol.winning(p);
+        });
+    }
+
+    /**
+     * The table from the solver's winning triples: per robot vertex and normalised goal state the least
+     * winning level (winning is monotone in the level, so the first one found upwards).
+     */
+    private static ChargeNeeded table(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
+                                      SolverRegion.TripleWins wins) {
         int gs = goal.stateCount();
         int levels = (int) monitor.stateBound();
         int[] needed = new int[Math.multiplyExact(arena.robotCount(), gs)];
@@ -119,8 +98,7 @@ public final class ChargeNeeded {
                     continue;
                 }
                 for (int m = 0; m < levels; m++) {
-                    int p = game.vertexOf(a, g, m);
-                    if (p >= 0 && sol.winning(p)) {
+                    if (wins.wins(a, g, m)) {
                         needed[a * gs + g] = monitor.level(m);
                         break;
                     }

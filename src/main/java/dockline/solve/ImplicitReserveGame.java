@@ -202,11 +202,6 @@ public final class ImplicitReserveGame {
         return new Strategy(r, counts[0]);
     }
 
-    /** Bytes a solve needs besides its worklist: the counters and the arrays built from the arena. */
-    public long fixedBytes() {
-        return slotCount / 2 + 10L * arena.edgeCount() + arena.vertexCount();
-    }
-
     /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
     public final class Strategy {
         private final Result result;

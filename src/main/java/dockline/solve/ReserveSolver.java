@@ -96,7 +96,7 @@ public final class ReserveSolver {
         return new ReserveAnalysis(mission, Verdict.of(won), start, reserve, capacity, mission.scale(), worst, highest,
                 searched, game.vertexCount(), game.edgeCount(), game.estimate(), millis(game.buildNanos()),
                 millis(solved - t0), millis(t1 - t0), policy, policyFloor, policyGame, policySolution, heat, notes,
-                arena, goal, Optional.of(new SolverRegion(game, sol)));
+                arena, goal, Optional.of(SolverRegion.of(game, sol)));
     }
 
     /**
@@ -115,23 +115,8 @@ public final class ReserveSolver {
         ImplicitReserveGame.Strategy st = game.solveWithStrategy(po.cancelled());
         long built = System.nanoTime();
         boolean won = st.startWon();
-        Optional<WinningRegion> region = Optional.empty();
-        if (st.complete()) {
-            region = Optional.of((robotVertex, progressMask, level) -> {
-                if (level < monitor.floorUnits() || level > monitor.capacityUnits()) {
-                    return false;
-                }
-                int g = goal.stateOfMask(progressMask);
-                if (g == GoalAutomaton.REJECT) {
-                    return false;
-                }
-                if (goal.accepting(g, arena.isDock(arena.cell(robotVertex)))) {
-                    return true;
-                }
-                int s = monitor.stateOf(level);
-                return s != dockline.monitor.Monitor.REJECT && st.robotWins(robotVertex, g, s);
-            });
-        }
+        Optional<WinningRegion> region = st.complete()
+                ? Optional.of(SolverRegion.of(arena, goal, monitor, st)) : Optional.empty();
         Optional<Policy> policy = Optional.empty();
         OptionalInt worst = OptionalInt.empty();
         if (won) {
@@ -186,7 +171,11 @@ public final class ReserveSolver {
         return game.slotCount() / 2 + game.slotCount() / 8 + 10L * arena.edgeCount();
     }
 
-    private static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
+    /**
+     * The implicit game, refused with a {@link ProductTooLargeException} when its counters, the policy
+     * walk's bits and the arena arrays pass the budget, its worklist capped by what is left.
+     */
+    static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
                                                     ProductOptions po) {
         ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
         long bytes = implicitBytes(game, arena);
