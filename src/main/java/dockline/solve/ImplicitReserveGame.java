@@ -429,9 +429,10 @@ public final class ImplicitReserveGame {
         final int gb = gBits;
         final int sMask = (1 << lb) - 1;
         final int gMask = (1 << gb) - 1;
-        // successors known to be won, 4 bits per vertex (out-degrees are at most 15): won when it reaches
-        // the need (1 for a robot triple, the out-degree for a disturbance triple). Half a byte per
-        // vertex keeps the whole table in the last-level cache for products of tens of millions.
+        // 4 bits per vertex (out-degrees are at most 15): for a disturbance triple with several outcomes
+        // the outcomes known to be won (won at its out-degree); for a robot triple 0 while not won, else
+        // 1 + its chosen action's index (targets: 1). Half a byte per vertex keeps the whole table in the
+        // last-level cache for products of tens of millions.
         final byte[] count = new byte[(n >>> 1) + 1];
         // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
         // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
