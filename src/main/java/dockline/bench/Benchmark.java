@@ -288,6 +288,8 @@ public final class Benchmark {
         double spent = 0;
         for (int r = 0; r < tries; r++) {
             if (r == 0) {
+                // settled first, so that the peak is this method's and not also the garbage of the one before
+                System.gc();
                 sampler.start();
             } else if (r < reps) {
                 // (the extra runs of a short method skip this: a collection costs more than such a run,

@@ -67,9 +67,9 @@ public final class ImplicitReserveGame {
     private final byte[] actionIndex;
     // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
     private final int[] ownerOf;
-    // the most bytes the worklist may take (Long.MAX_VALUE: no limit); see limitWorklist
-    private long worklistBudgetBytes = Long.MAX_VALUE;
+    // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
     private long budgetBytes = Long.MAX_VALUE;
+    private long fixedBytes = 0;
 
     /** What a solve found. */
     public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
@@ -127,11 +127,12 @@ public final class ImplicitReserveGame {
 
     /**
      * Caps the worklist, whose size is not known before the solve (it holds the won vertices not yet
-     * expanded): a solve whose worklist would pass {@code worklistBytes} stops with a
-     * {@link ProductTooLargeException} against {@code totalBudgetBytes} instead of running out of memory.
+     * expanded): a solve whose worklist, with the {@code fixedBytes} the rest of the solve takes, would
+     * pass {@code totalBudgetBytes} stops with a {@link ProductTooLargeException} instead of running out
+     * of memory.
      */
-    void limitWorklist(long worklistBytes, long totalBudgetBytes) {
-        this.worklistBudgetBytes = Math.max(0, worklistBytes);
+    void limitWorklist(long fixedBytes, long totalBudgetBytes) {
+        this.fixedBytes = Math.max(0, fixedBytes);
         this.budgetBytes = totalBudgetBytes;
     }
 
@@ -586,10 +587,10 @@ public final class ImplicitReserveGame {
 
     /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
     private int[] grow(int[] wl, int head, int tail) {
-        long bytes = 8L * wl.length;
-        if (bytes > worklistBudgetBytes || wl.length >= (1 << 30)) {
-            throw new ProductTooLargeException(new SizeEstimate(vertexCount, 0,
-                    slotCount / 2 + 9L * arena.edgeCount() + bytes, 0), budgetBytes, true);
+        // while copying, the old buffer and the new one (twice as long) are both live
+        long bytes = fixedBytes + 12L * wl.length;
+        if (bytes > budgetBytes || wl.length >= (1 << 30)) {
+            throw new ProductTooLargeException(new SizeEstimate(vertexCount, 0, bytes, 0), budgetBytes, true);
         }
         int[] out = new int[wl.length * 2];
         int mask = wl.length - 1;

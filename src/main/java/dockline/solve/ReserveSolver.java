@@ -184,7 +184,7 @@ public final class ReserveSolver {
             throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), 0, bytes, 0), budget, false);
         }
         // the worklist's size is only known while solving: it may take the rest of the budget
-        game.limitWorklist(budget - bytes, budget);
+        game.limitWorklist(bytes, budget);
         return game;
     }
 
@@ -250,7 +250,7 @@ public final class ReserveSolver {
             throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), Math.max(forecastEdges, 0), bytes,
                     0), budget, false);
         }
-        game.limitWorklist(budget - bytes, budget);
+        game.limitWorklist(bytes, budget);
         ImplicitReserveGame.Result r = game.solve(true, options.cancelled());
         return new ImplicitVerdict(Verdict.of(r.startWon()), r.wonVertices(), r.edgesScanned(), forecast,
                 game.slotCount(), r.stoppedEarly(), (System.nanoTime() - t0) / 1_000_000L);

@@ -25,7 +25,8 @@ class ImplicitWorklistLimitTest {
         GoalAutomaton goal = GoalAutomaton.of(m);
         ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
         ImplicitReserveGame capped = new ImplicitReserveGame(arena, goal, monitor);
-        capped.limitWorklist(1024, 64L << 20);
+        // the rest of the solve is said to take all but 1 KB of a 64 MB budget
+        capped.limitWorklist((64L << 20) - 1024, 64L << 20);
         assertThatThrownBy(() -> capped.solveWithStrategy(() -> false))
                 .isInstanceOf(ProductTooLargeException.class)
                 .hasMessageContaining("grew past the memory budget").hasMessageContaining("64 MB");
