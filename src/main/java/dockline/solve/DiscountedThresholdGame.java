@@ -62,7 +62,9 @@ public final class DiscountedThresholdGame {
     private final int vertexCount;
     private final int edgeCount;
     // arrays may be longer than vertexCount (+1) / edgeCount: spare capacity is kept rather than copied away
-    private final boolean[] robotOwned;
+    /** Per pair its arena vertex; the pair is the robot's iff that is below {@link #robotCount}. */
+    private final int[] pairVertex;
+    private final int robotCount;
     private final int[] outStart;
     private final int[] edgeTarget;
     /** Offsets of the predecessor lists (reverse CSR), from the in-degrees counted while building. */
@@ -71,13 +73,14 @@ public final class DiscountedThresholdGame {
     private final int overflowPairs;
     private final long buildNanos;
 
-    private DiscountedThresholdGame(Relation relation, int n, int m, boolean[] robotOwned, int[] outStart,
+    private DiscountedThresholdGame(Relation relation, int n, int m, int[] pairVertex, int robotCount, int[] outStart,
                                     int[] edgeTarget, int[] inStart, int comparatorStates, int overflowPairs,
                                     long buildNanos) {
         this.relation = relation;
         this.vertexCount = n;
         this.edgeCount = m;
-        this.robotOwned = robotOwned;
+        this.pairVertex = pairVertex;
+        this.robotCount = robotCount;
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
         this.inStart = inStart;
@@ -103,18 +106,20 @@ public final class DiscountedThresholdGame {
     static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator, boolean usePrivateActions) {
         long t0 = System.nanoTime();
         int cap = Math.addExact(arena.vertexCount(), START + 1);
+        final int robotCount = arena.robotCount();
+        // per pair: its arena vertex (which also tells its owner, so no owner array is written)
         int[] vA = new int[cap];
         // per pair, side by side: [2 id] its comparator state, [2 id + 1] its in-degree so far (one cache
         // line serves both the chain test and the count on each edge)
         int[] pair = new int[Math.multiplyExact(cap, 2)];
+        // chain links, 1-based (0 ends a chain) so that the fresh arrays need no filling
         int[] next = new int[cap];
-        boolean[] robot = new boolean[cap];
         int[] outStart = new int[cap + 1];
         int[] edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
         boolean privateActions = usePrivateActions && privateActions(arena);
-        // with private actions only robot vertices are ever looked up: the heads cover just those
-        int[] head = new int[privateActions ? arena.robotCount() : arena.vertexCount()];
-        Arrays.fill(head, -1);
+        // with private actions only robot vertices are ever looked up: the heads cover just those;
+        // 1-based like next
+        int[] head = new int[privateActions ? robotCount : arena.vertexCount()];
         LongIntMap overflow = null;
         int mu = comparator.maxAbsWeight();
         int width = 2 * mu + 1;
@@ -123,17 +128,15 @@ public final class DiscountedThresholdGame {
             memo = new int[width * Math.min(64, MEMO_MAX_ENTRIES / width)];
             Arrays.fill(memo, UNKNOWN);
         }
-        // sinks: self-loops
-        robot[ACCEPTED] = true;
-        robot[REJECTED] = false;
+        // sinks: self-loops; owners as if robot (ACCEPTED) and disturbance (REJECTED) vertices
+        vA[ACCEPTED] = -1;
+        vA[REJECTED] = Integer.MAX_VALUE;
         int n = START;
         int m = 0;
         int x0 = arena.startVertex();
         vA[START] = x0;
         pair[2 * START] = comparator.initialState();
-        next[START] = -1;
-        robot[START] = arena.isRobot(x0);
-        head[x0] = START;
+        head[x0] = START + 1;
         n++;
         for (int v = 0; v < n; v++) {
             outStart[v] = m;
@@ -144,12 +147,31 @@ public final class DiscountedThresholdGame {
             }
             int x = vA[v];
             int s = pair[2 * v];
-            boolean robotMoves = arena.isRobot(x);
+            boolean robotMoves = x < robotCount;
             int eEnd = arena.outEnd(x);
             int eBegin = arena.outBegin(x);
-            if (Math.addExact(m, eEnd - eBegin) > edgeTarget.length) {
-                edgeTarget = Arrays.copyOf(edgeTarget,
-                        Math.max(Math.addExact(m, eEnd - eBegin), Math.addExact(m, m / 2)));
+            int deg = eEnd - eBegin;
+            if (Math.addExact(m, deg) > edgeTarget.length) {
+                edgeTarget = Arrays.copyOf(edgeTarget, Math.max(Math.addExact(m, deg), Math.addExact(m, m / 2)));
+            }
+            if (robotMoves && privateActions) {
+                // a robot's move into a private action (see privateActions) reaches a pair that no other
+                // product edge reaches, as this robot pair is expanded once and moving keeps the state:
+                // the pair is new and never looked up again, so it is not indexed (and gets no link)
+                if (Math.addExact(n, deg) > vA.length) {
+                    int c = Math.max(Math.addExact(n, deg), Math.addExact(n, n / 2));
+                    vA = Arrays.copyOf(vA, c);
+                    pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
+                    next = Arrays.copyOf(next, c);
+                    outStart = Arrays.copyOf(outStart, c + 1);
+                }
+                for (int e = eBegin; e < eEnd; e++) {
+                    vA[n] = arena.target(e);
+                    pair[2 * n] = s;
+                    pair[2 * n + 1] = 1;
+                    edgeTarget[m++] = n++;
+                }
+                continue;
             }
             for (int e = eBegin; e < eEnd; e++) {
                 int t = arena.target(e);
@@ -180,19 +202,13 @@ public final class DiscountedThresholdGame {
                 } else if (s2 == DiscountedComparator.ACCEPT) {
                     id = ACCEPTED;
                 } else {
-                    // a robot's move into a private action (see privateActions) reaches a pair that no other
-                    // product edge reaches, as this robot pair is expanded once and moving keeps the state:
-                    // the pair is new and never looked up again, so it is not indexed
-                    boolean fresh = robotMoves && privateActions && !arena.isRobot(t);
-                    id = fresh ? -1 : head[t];
+                    id = head[t] - 1;
                     int walked = 0;
                     while (id >= 0 && pair[2 * id] != s2) {
-                        id = next[id];
+                        id = next[id] - 1;
                         walked++;
                     }
-                    if (fresh) {
-                        walked = -1;
-                    } else if (id < 0 && walked == CHAIN_LIMIT) {
+                    if (id < 0 && walked == CHAIN_LIMIT) {
                         if (overflow == null) {
                             overflow = new LongIntMap(64);
                         }
@@ -204,20 +220,15 @@ public final class DiscountedThresholdGame {
                             vA = Arrays.copyOf(vA, c);
                             pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
                             next = Arrays.copyOf(next, c);
-                            robot = Arrays.copyOf(robot, c);
                             outStart = Arrays.copyOf(outStart, c + 1);
                         }
                         id = n++;
                         vA[id] = t;
                         pair[2 * id] = s2;
-                        robot[id] = arena.isRobot(t);
-                        if (walked < 0) {
-                            next[id] = -1; // a fresh pair, not indexed
-                        } else if (walked < CHAIN_LIMIT) {
+                        if (walked < CHAIN_LIMIT) {
                             next[id] = head[t];
-                            head[t] = id;
+                            head[t] = id + 1;
                         } else {
-                            next[id] = -1;
                             overflow.put(key(t, s2), id);
                         }
                     }
@@ -228,14 +239,17 @@ public final class DiscountedThresholdGame {
             }
         }
         outStart[n] = m;
-        // the predecessor offsets by prefix sums over the in-degrees, in the queue's array when it is long
-        // enough (the queue is spent: every pair has been expanded)
-        int[] inStart = vA.length > n ? vA : new int[n + 1];
-        inStart[0] = 0;
+        // the predecessor offsets by prefix sums over the in-degrees, in place in the pair array (it is spent:
+        // step v writes slot v, whose in-degree, if any, was read at step v / 2, and reads slot 2 v + 1 > v)
+        int[] inStart = pair;
+        int acc = 0;
         for (int v = 0; v < n; v++) {
-            inStart[v + 1] = inStart[v] + pair[2 * v + 1];
+            int d = pair[2 * v + 1];
+            inStart[v] = acc;
+            acc += d;
         }
-        return new DiscountedThresholdGame(comparator.relation(), n, m, robot, outStart, edgeTarget, inStart,
+        inStart[n] = acc;
+        return new DiscountedThresholdGame(comparator.relation(), n, m, vA, robotCount, outStart, edgeTarget, inStart,
                 comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
     }
 
@@ -287,7 +301,8 @@ public final class DiscountedThresholdGame {
         boolean safety = relation == Relation.AT_LEAST;
         final int n = vertexCount;
         final int m = edgeCount;
-        final boolean[] robot = robotOwned;
+        final int[] pv = pairVertex;
+        final int robots = robotCount;
         final int[] out = outStart;
         final int[] to = edgeTarget;
         // reverse CSR by counting sort on the target, on the offsets computed while building
@@ -308,7 +323,7 @@ public final class DiscountedThresholdGame {
         int tail = 0;
         int goal = safety ? REJECTED : ACCEPTED;
         for (int v = 0; v < n; v++) {
-            boolean reacher = safety != robot[v];
+            boolean reacher = safety != (pv[v] < robots);
             count[v] = v == goal ? 0 : reacher ? 1 : out[v + 1] - out[v];
             if (count[v] == 0) {
                 // the goal itself, or a vertex of the other player without moves: won vacuously
