@@ -37,7 +37,12 @@ import java.util.Arrays;
  * (state, weight) in an int array. The arrays start at the arena's size (the product is often no
  * larger: most plays soon leave the comparator's band) and grow by half only when needed; the
  * in-degrees are counted while building, so {@link #robotWins()} builds the predecessor lists by one
- * counting-sort pass and no array is copied to trim it.
+ * counting-sort pass and no array is copied to trim it. No owner array is written: a pair is the
+ * robot's iff its arena vertex is, which is kept per pair anyway; the predecessor offsets are summed in
+ * place in the spent per-pair array; chain links are 1-based so that no array needs a fill; a robot
+ * pair's moves into private actions have a loop of their own that neither steps the comparator nor
+ * looks anything up. Each pair is expanded by its own method call, so that the compiled code dropped
+ * when a rare path (overflow, growth) is first taken is compiled again within the same build.
  *
  * <p>Cost: O(|V| + |E|) expected time and memory in the product, which has at most (arena vertices)
  * x (comparator states) vertices, plus one int per arena vertex for the chain heads; the attractor
@@ -105,97 +110,161 @@ public final class DiscountedThresholdGame {
      */
     static DiscountedThresholdGame build(Arena arena, DiscountedComparator comparator, boolean usePrivateActions) {
         long t0 = System.nanoTime();
-        int cap = Math.addExact(arena.vertexCount(), START + 1);
-        final int robotCount = arena.robotCount();
-        // per pair: its arena vertex (which also tells its owner, so no owner array is written)
-        int[] vA = new int[cap];
-        // per pair, side by side: [2 id] its comparator state, [2 id + 1] its in-degree so far (one cache
-        // line serves both the chain test and the count on each edge)
-        int[] pair = new int[Math.multiplyExact(cap, 2)];
-        // chain links, 1-based (0 ends a chain) so that the fresh arrays need no filling
-        int[] next = new int[cap];
-        int[] outStart = new int[cap + 1];
-        int[] edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
-        boolean privateActions = usePrivateActions && privateActions(arena);
-        // with private actions only robot vertices are ever looked up: the heads cover just those;
-        // 1-based like next
-        int[] head = new int[privateActions ? robotCount : arena.vertexCount()];
-        LongIntMap overflow = null;
-        int mu = comparator.maxAbsWeight();
-        int width = 2 * mu + 1;
-        int[] memo = null;
-        if (width <= MEMO_MAX_WIDTH) {
-            memo = new int[width * Math.min(64, MEMO_MAX_ENTRIES / width)];
-            Arrays.fill(memo, UNKNOWN);
-        }
-        // sinks: self-loops; owners as if robot (ACCEPTED) and disturbance (REJECTED) vertices
-        vA[ACCEPTED] = -1;
-        vA[REJECTED] = Integer.MAX_VALUE;
-        int n = START;
-        int m = 0;
-        int x0 = arena.startVertex();
-        vA[START] = x0;
-        pair[2 * START] = comparator.initialState();
-        head[x0] = START + 1;
-        n++;
+        Builder b = new Builder(arena, comparator, usePrivateActions && privateActions(arena));
+        b.run();
+        int n = b.n;
+        int[] pair = b.pair;
+        // the predecessor offsets by prefix sums over the in-degrees, in place in the pair array (it is spent:
+        // step v writes slot v, whose in-degree, if any, was read at step v / 2, and reads slot 2 v + 1 > v)
+        int[] inStart = pair;
+        int acc = 0;
         for (int v = 0; v < n; v++) {
-            outStart[v] = m;
-            if (v < START) {
-                edgeTarget[m++] = v;
-                pair[2 * v + 1]++;
-                continue;
+            int d = pair[2 * v + 1];
+            inStart[v] = acc;
+            acc += d;
+        }
+        inStart[n] = acc;
+        return new DiscountedThresholdGame(comparator.relation(), n, b.m, b.vA, b.robotCount, b.outStart, b.edgeTarget,
+                inStart, comparator.stateCount(), b.overflow == null ? 0 : b.overflow.size(), System.nanoTime() - t0);
+    }
+
+    /**
+     * The product under construction. Each pair is expanded by its own method call rather than in one
+     * loop of one large method: the rare paths (overflow table, growth) are first taken at some size, the
+     * just-in-time compiler then drops its compiled code for the method that holds them, and a method
+     * called once per pair is compiled again within the same build, where a method called once per build
+     * would run slowly for several builds.
+     */
+    private static final class Builder {
+        final Arena arena;
+        final DiscountedComparator comparator;
+        final boolean privateActions;
+        final int robotCount;
+        final int mu;
+        final int width;
+        /** Per pair its arena vertex (which also tells its owner, so no owner array is written). */
+        int[] vA;
+        /**
+         * Per pair, side by side: [2 id] its comparator state, [2 id + 1] its in-degree so far (one cache
+         * line serves both the chain test and the count on each edge).
+         */
+        int[] pair;
+        /** Chain links, 1-based (0 ends a chain) so that the fresh arrays need no filling. */
+        int[] next;
+        int[] outStart;
+        int[] edgeTarget;
+        /** Chain heads per arena vertex, 1-based like next; with private actions robot vertices only. */
+        final int[] head;
+        int[] memo;
+        LongIntMap overflow;
+        int n;
+        int m;
+
+        Builder(Arena arena, DiscountedComparator comparator, boolean privateActions) {
+            this.arena = arena;
+            this.comparator = comparator;
+            this.privateActions = privateActions;
+            this.robotCount = arena.robotCount();
+            int cap = Math.addExact(arena.vertexCount(), START + 1);
+            vA = new int[cap];
+            pair = new int[Math.multiplyExact(cap, 2)];
+            next = new int[cap];
+            outStart = new int[cap + 1];
+            edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
+            // with private actions only robot vertices are ever looked up: the heads cover just those
+            head = new int[privateActions ? robotCount : arena.vertexCount()];
+            mu = comparator.maxAbsWeight();
+            width = 2 * mu + 1;
+            if (width <= MEMO_MAX_WIDTH) {
+                memo = new int[width * Math.min(64, MEMO_MAX_ENTRIES / width)];
+                Arrays.fill(memo, UNKNOWN);
             }
-            int x = vA[v];
+        }
+
+        void run() {
+            // sinks: self-loops; owners as if robot (ACCEPTED) and disturbance (REJECTED) vertices
+            vA[ACCEPTED] = -1;
+            vA[REJECTED] = Integer.MAX_VALUE;
+            for (int v = 0; v < START; v++) {
+                outStart[v] = v;
+                edgeTarget[v] = v;
+                pair[2 * v + 1] = 1;
+            }
+            m = START;
+            int x0 = arena.startVertex();
+            vA[START] = x0;
+            pair[2 * START] = comparator.initialState();
+            head[x0] = START + 1;
+            n = START + 1;
+            for (int v = START; v < n; v++) {
+                int x = vA[v];
+                if (privateActions && x < robotCount) {
+                    expandPrivateMoves(v, x);
+                } else {
+                    expand(v, x);
+                }
+            }
+            outStart[n] = m;
+        }
+
+        /** Room for {@code more} edges after the current ones, and as many pairs after the current ones. */
+        private void ensure(int more) {
+            if (Math.addExact(m, more) > edgeTarget.length) {
+                edgeTarget = Arrays.copyOf(edgeTarget, Math.max(Math.addExact(m, more), Math.addExact(m, m / 2)));
+            }
+            if (Math.addExact(n, more) > vA.length) {
+                int c = Math.max(Math.addExact(n, more), Math.addExact(n, n / 2));
+                vA = Arrays.copyOf(vA, c);
+                pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
+                next = Arrays.copyOf(next, c);
+                outStart = Arrays.copyOf(outStart, c + 1);
+            }
+        }
+
+        /**
+         * A robot pair's moves into private actions (see privateActions): each reaches a pair that no other
+         * product edge reaches, as this robot pair is expanded once and moving keeps the state, so the pair
+         * is new and never looked up again; it is not indexed (and gets no link).
+         */
+        private void expandPrivateMoves(int v, int x) {
+            int eBegin = arena.outBegin(x);
+            int eEnd = arena.outEnd(x);
+            ensure(eEnd - eBegin);
+            int[] vA = this.vA;
+            int[] pair = this.pair;
+            int[] edgeTarget = this.edgeTarget;
+            int n = this.n;
+            int m = this.m;
+            int s = pair[2 * v];
+            outStart[v] = m;
+            for (int e = eBegin; e < eEnd; e++) {
+                vA[n] = arena.target(e);
+                pair[2 * n] = s;
+                pair[2 * n + 1] = 1;
+                edgeTarget[m++] = n++;
+            }
+            this.n = n;
+            this.m = m;
+        }
+
+        /** Any other pair: each move to a sink or to its pair, found in the chain or the overflow table, or new. */
+        private void expand(int v, int x) {
+            int eBegin = arena.outBegin(x);
+            int eEnd = arena.outEnd(x);
+            ensure(eEnd - eBegin);
+            int[] vA = this.vA;
+            int[] pair = this.pair;
+            int[] next = this.next;
+            int[] head = this.head;
+            int[] edgeTarget = this.edgeTarget;
+            int n = this.n;
+            int m = this.m;
             int s = pair[2 * v];
             boolean robotMoves = x < robotCount;
-            int eEnd = arena.outEnd(x);
-            int eBegin = arena.outBegin(x);
-            int deg = eEnd - eBegin;
-            if (Math.addExact(m, deg) > edgeTarget.length) {
-                edgeTarget = Arrays.copyOf(edgeTarget, Math.max(Math.addExact(m, deg), Math.addExact(m, m / 2)));
-            }
-            if (robotMoves && privateActions) {
-                // a robot's move into a private action (see privateActions) reaches a pair that no other
-                // product edge reaches, as this robot pair is expanded once and moving keeps the state:
-                // the pair is new and never looked up again, so it is not indexed (and gets no link)
-                if (Math.addExact(n, deg) > vA.length) {
-                    int c = Math.max(Math.addExact(n, deg), Math.addExact(n, n / 2));
-                    vA = Arrays.copyOf(vA, c);
-                    pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
-                    next = Arrays.copyOf(next, c);
-                    outStart = Arrays.copyOf(outStart, c + 1);
-                }
-                for (int e = eBegin; e < eEnd; e++) {
-                    vA[n] = arena.target(e);
-                    pair[2 * n] = s;
-                    pair[2 * n + 1] = 1;
-                    edgeTarget[m++] = n++;
-                }
-                continue;
-            }
+            outStart[v] = m;
             for (int e = eBegin; e < eEnd; e++) {
                 int t = arena.target(e);
-                int s2;
-                if (robotMoves) {
-                    s2 = s;
-                } else {
-                    int w = arena.weight(e);
-                    long slot = (long) s * width + (w + mu);
-                    if (memo != null && w >= -mu && w <= mu && slot < memo.length) {
-                        s2 = memo[(int) slot];
-                        if (s2 == UNKNOWN) {
-                            s2 = comparator.step(s, w);
-                            memo[(int) slot] = s2;
-                            memo = growMemo(memo, comparator.stateCount(), width);
-                        }
-                    } else {
-                        // a weight out of bound makes step throw; a state past the memo's cap is stepped directly
-                        s2 = comparator.step(s, w);
-                        if (memo != null) {
-                            memo = growMemo(memo, comparator.stateCount(), width);
-                        }
-                    }
-                }
+                int s2 = robotMoves ? s : step(s, arena.weight(e));
                 int id;
                 if (s2 == Monitor.REJECT) {
                     id = REJECTED;
@@ -209,19 +278,10 @@ public final class DiscountedThresholdGame {
                         walked++;
                     }
                     if (id < 0 && walked == CHAIN_LIMIT) {
-                        if (overflow == null) {
-                            overflow = new LongIntMap(64);
-                        }
-                        id = overflow.get(key(t, s2));
+                        id = overflowGet(t, s2);
                     }
                     if (id < 0) {
-                        if (n == vA.length) {
-                            int c = Math.addExact(n, n / 2);
-                            vA = Arrays.copyOf(vA, c);
-                            pair = Arrays.copyOf(pair, Math.multiplyExact(c, 2));
-                            next = Arrays.copyOf(next, c);
-                            outStart = Arrays.copyOf(outStart, c + 1);
-                        }
+                        // room was made for every move of v
                         id = n++;
                         vA[id] = t;
                         pair[2 * id] = s2;
@@ -237,20 +297,37 @@ public final class DiscountedThresholdGame {
                 pair[2 * id + 1]++;
                 m++;
             }
+            this.n = n;
+            this.m = m;
         }
-        outStart[n] = m;
-        // the predecessor offsets by prefix sums over the in-degrees, in place in the pair array (it is spent:
-        // step v writes slot v, whose in-degree, if any, was read at step v / 2, and reads slot 2 v + 1 > v)
-        int[] inStart = pair;
-        int acc = 0;
-        for (int v = 0; v < n; v++) {
-            int d = pair[2 * v + 1];
-            inStart[v] = acc;
-            acc += d;
+
+        /** The comparator's step, memoised per (state, weight). */
+        private int step(int s, int w) {
+            long slot = (long) s * width + (w + mu);
+            int s2;
+            if (memo != null && w >= -mu && w <= mu && slot < memo.length) {
+                s2 = memo[(int) slot];
+                if (s2 == UNKNOWN) {
+                    s2 = comparator.step(s, w);
+                    memo[(int) slot] = s2;
+                    memo = growMemo(memo, comparator.stateCount(), width);
+                }
+            } else {
+                // a weight out of bound makes step throw; a state past the memo's cap is stepped directly
+                s2 = comparator.step(s, w);
+                if (memo != null) {
+                    memo = growMemo(memo, comparator.stateCount(), width);
+                }
+            }
+            return s2;
         }
-        inStart[n] = acc;
-        return new DiscountedThresholdGame(comparator.relation(), n, m, vA, robotCount, outStart, edgeTarget, inStart,
-                comparator.stateCount(), overflow == null ? 0 : overflow.size(), System.nanoTime() - t0);
+
+        private int overflowGet(int t, int s2) {
+            if (overflow == null) {
+                overflow = new LongIntMap(64);
+            }
+            return overflow.get(key(t, s2));
+        }
     }
 
     /**
