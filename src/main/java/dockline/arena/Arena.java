@@ -53,6 +53,10 @@ public final class Arena {
     private final int[] inStart;
     private final int[] inEdge;
     private final int[] edgeSource;
+    // layout facts, found once here so that solvers need not scan the arena per question
+    private final boolean privateActions;
+    private final boolean actionsByEdge;
+    private final int maxOutDegree;
 
     // per cell (row-major index)
     private final long[] cellZones;
@@ -104,6 +108,23 @@ public final class Arena {
         for (int e = 0; e < m; e++) {
             inEdge[fill[edgeTarget[e]]++] = e;
         }
+        int maxDegree = 0;
+        boolean byEdge = true;
+        for (int v = 0; v < vertexCount; v++) {
+            maxDegree = Math.max(maxDegree, outStart[v + 1] - outStart[v]);
+        }
+        for (int x = 0; x < robotCount && byEdge; x++) {
+            for (int e = outStart[x]; e < outStart[x + 1]; e++) {
+                byEdge &= edgeTarget[e] == robotCount + e;
+            }
+        }
+        boolean priv = true;
+        for (int a = robotCount; a < vertexCount && priv; a++) {
+            priv = inStart[a + 1] - inStart[a] == 1 && edgeSource[inEdge[inStart[a]]] < robotCount;
+        }
+        this.maxOutDegree = maxDegree;
+        this.privateActions = priv;
+        this.actionsByEdge = byEdge && priv && outStart[robotCount] == vertexCount - robotCount;
     }
 
     public Mission mission() {
@@ -239,6 +260,29 @@ public final class Arena {
 
     public boolean isDock(int cellIndex) {
         return cellDock[cellIndex];
+    }
+
+    /**
+     * Whether every disturbance vertex is private to one robot vertex: exactly one in-edge, from a
+     * robot vertex (so a disturbance vertex is one robot vertex's action, as compiled arenas are built).
+     */
+    public boolean privateActions() {
+        return privateActions;
+    }
+
+    /**
+     * Whether the disturbance vertices are numbered by the robot edges into them: the target of robot
+     * edge e is {@code robotCount + e} for every e (as compiled arenas are built). Then the action
+     * vertex a belongs to robot vertex {@code source(a - robotCount)} and is its move number
+     * {@code a - robotCount - outBegin(owner)}, both O(1).
+     */
+    public boolean actionsByEdge() {
+        return actionsByEdge;
+    }
+
+    /** The largest out-degree of any vertex. */
+    public int maxOutDegree() {
+        return maxOutDegree;
     }
 
     /** Largest absolute edge weight (the bound mu of the discounted comparator). */

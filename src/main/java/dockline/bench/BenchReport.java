@@ -102,6 +102,8 @@ public final class BenchReport {
         ratios.put("fixpointOverAttractor", ratioPerSize(res, "fixpoint", "attractor", false));
         Map<String, Double> vi = ratioPerSize(Benchmark.DISCOUNTED, "vi", "attractor", false);
         ratios.put("viOverComparator", vi);
+        // the same against the stored comparator product, for comparison with the main route's layout
+        ratios.put("viOverStoredComparator", ratioPerSize(Benchmark.DISCOUNTED, "vi", "stored-attractor", false));
         Map<String, Double> bpv = new LinkedHashMap<>();
         Map<String, Double> est = new LinkedHashMap<>();
         List<double[]> pts = new ArrayList<>();

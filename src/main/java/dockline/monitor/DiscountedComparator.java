@@ -286,6 +286,25 @@ public final class DiscountedComparator implements Monitor {
                 .mod(java.math.BigInteger.valueOf(q)).longValue();
     }
 
+    /**
+     * The gap state whose scaled gap is {@code numerator / q} (q the threshold's denominator), or -1
+     * when no such state has been discovered: the lookup that inverts {@link #step} (for a weight w,
+     * a gap state n steps to {@code d n + w q}), so that a backward search can find a state's
+     * predecessors without storing the product's edges. O(1) expected time.
+     */
+    public int stateWithNumerator(long numerator) {
+        int s = index.get(numerator);
+        return s == LongIntMap.ABSENT ? -1 : s;
+    }
+
+    /** The numerator n of a gap state's scaled gap n/q (see {@link #gap}), without allocating. */
+    public long numerator(int s) {
+        if (!isGapState(s)) {
+            throw new IllegalArgumentException("state " + s + " holds no gap value");
+        }
+        return numerators[s];
+    }
+
     /** Number of states discovered so far, counting {@link #INITIAL} and {@link #ACCEPT}. */
     public int stateCount() {
         return count;

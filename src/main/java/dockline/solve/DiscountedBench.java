@@ -24,7 +24,8 @@ import java.util.Random;
 
 /**
  * Benchmark rows for the discounted objective: on the same generated instances, the comparator
- * route ({@link DiscountedThresholdGame}: product with the comparator, one linear-time attractor)
+ * route ({@link ImplicitDiscountedGame}: product with the comparator, generated on demand, one
+ * linear-time attractor)
  * against the optimisation route ({@link DiscountedValueIteration#decide}: value iteration, then
  * compare), both without the dock goal so that they answer the same question. Not a test: callers
  * (the {@code bench} command) print the rows and the ratios measured in one run.
@@ -98,7 +99,7 @@ public final class DiscountedBench {
         Rational threshold = fixedThreshold != null ? fixedThreshold
                 : new DiscountedValueIteration(arena, discount).solve().exactValue();
         long t0 = System.nanoTime();
-        DiscountedThresholdGame game = DiscountedThresholdGame.build(arena,
+        ImplicitDiscountedGame game = ImplicitDiscountedGame.solve(arena,
                 new dockline.monitor.DiscountedComparator(discount, arena.maxAbsWeight(), threshold, relation));
         boolean byComparator = game.robotWins();
         long t1 = System.nanoTime();

@@ -56,12 +56,6 @@ public final class DiscountedThresholdGame {
 
     /** Pairs per arena vertex kept in its chain; more go to the overflow table. */
     static final int CHAIN_LIMIT = 4;
-    /** Memoise comparator steps only when a state's row of weights is at most this long. */
-    private static final int MEMO_MAX_WIDTH = 1 << 12;
-    /** ... and only up to this many (state, weight) entries in all (16 MB). */
-    private static final int MEMO_MAX_ENTRIES = 1 << 22;
-    /** A memo entry not computed yet (states are at least {@link Monitor#REJECT}). */
-    private static final int UNKNOWN = Integer.MIN_VALUE;
 
     private final Relation relation;
     private final int vertexCount;
@@ -140,8 +134,8 @@ public final class DiscountedThresholdGame {
         final DiscountedComparator comparator;
         final boolean privateActions;
         final int robotCount;
-        final int mu;
-        final int width;
+        /** The comparator's steps, memoised per (state, weight). */
+        final ComparatorSteps steps;
         /** Per pair its arena vertex (which also tells its owner, so no owner array is written). */
         int[] vA;
         /**
@@ -155,7 +149,6 @@ public final class DiscountedThresholdGame {
         int[] edgeTarget;
         /** Chain heads per arena vertex, 1-based like next; with private actions robot vertices only. */
         final int[] head;
-        int[] memo;
         LongIntMap overflow;
         int n;
         int m;
@@ -173,12 +166,7 @@ public final class DiscountedThresholdGame {
             edgeTarget = new int[Math.addExact(arena.edgeCount(), START)];
             // with private actions only robot vertices are ever looked up: the heads cover just those
             head = new int[privateActions ? robotCount : arena.vertexCount()];
-            mu = comparator.maxAbsWeight();
-            width = 2 * mu + 1;
-            if (width <= MEMO_MAX_WIDTH) {
-                memo = new int[width * Math.min(64, MEMO_MAX_ENTRIES / width)];
-                Arrays.fill(memo, UNKNOWN);
-            }
+            steps = new ComparatorSteps(comparator);
         }
 
         void run() {
@@ -264,7 +252,7 @@ public final class DiscountedThresholdGame {
             outStart[v] = m;
             for (int e = eBegin; e < eEnd; e++) {
                 int t = arena.target(e);
-                int s2 = robotMoves ? s : step(s, arena.weight(e));
+                int s2 = robotMoves ? s : steps.step(s, arena.weight(e));
                 int id;
                 if (s2 == Monitor.REJECT) {
                     id = REJECTED;
@@ -301,27 +289,6 @@ public final class DiscountedThresholdGame {
             this.m = m;
         }
 
-        /** The comparator's step, memoised per (state, weight). */
-        private int step(int s, int w) {
-            long slot = (long) s * width + (w + mu);
-            int s2;
-            if (memo != null && w >= -mu && w <= mu && slot < memo.length) {
-                s2 = memo[(int) slot];
-                if (s2 == UNKNOWN) {
-                    s2 = comparator.step(s, w);
-                    memo[(int) slot] = s2;
-                    memo = growMemo(memo, comparator.stateCount(), width);
-                }
-            } else {
-                // a weight out of bound makes step throw; a state past the memo's cap is stepped directly
-                s2 = comparator.step(s, w);
-                if (memo != null) {
-                    memo = growMemo(memo, comparator.stateCount(), width);
-                }
-            }
-            return s2;
-        }
-
         private int overflowGet(int t, int s2) {
             if (overflow == null) {
                 overflow = new LongIntMap(64);
@@ -334,32 +301,10 @@ public final class DiscountedThresholdGame {
      * Whether every disturbance vertex of the arena is private to one robot vertex: exactly one
      * in-edge, from a robot vertex, and the start is a robot vertex. The compiled arenas are so built
      * (a disturbance vertex is one robot vertex's action); then a disturbance pair is reached only by
-     * the one robot move into it and needs no index. One pass over the disturbance vertices.
+     * the one robot move into it and needs no index. O(1): the arena found it when it was built.
      */
     static boolean privateActions(Arena arena) {
-        if (!arena.isRobot(arena.startVertex())) {
-            return false;
-        }
-        for (int a = arena.robotCount(); a < arena.vertexCount(); a++) {
-            int i = arena.inBegin(a);
-            if (arena.inEnd(a) - i != 1 || !arena.isRobot(arena.source(arena.inEdge(i)))) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** The memo with a row for every state discovered so far (up to its cap), new entries unknown. */
-    private static int[] growMemo(int[] memo, int states, int width) {
-        long want = (long) states * width;
-        if (want <= memo.length || memo.length >= MEMO_MAX_ENTRIES / width * width) {
-            return memo;
-        }
-        int grown = (int) Math.min(MEMO_MAX_ENTRIES / width * (long) width, Math.max(2L * memo.length, want));
-        int old = memo.length;
-        int[] g = Arrays.copyOf(memo, grown);
-        Arrays.fill(g, old, grown, UNKNOWN);
-        return g;
+        return arena.isRobot(arena.startVertex()) && arena.privateActions();
     }
 
     private static long key(int arenaVertex, int state) {

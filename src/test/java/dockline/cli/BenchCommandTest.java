@@ -61,13 +61,15 @@ class BenchCommandTest {
         Run r = run("bench", "--json", "--sizes", "32", "--instances", "discounted");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
-        assertThat(root.get("rows").size()).isEqualTo(2);
+        // the comparator product on demand (main route), stored (reference), and value iteration
+        assertThat(root.get("rows").size()).isEqualTo(3);
         for (JsonNode row : root.get("rows")) {
             assertThat(row.get("instance").asText()).isEqualTo("discounted");
-            // the comparator route and value iteration are independent computations of the same question
+            // the comparator routes and value iteration are independent computations of the same question
             assertThat(row.get("verdict").asText()).isEqualTo(root.get("rows").get(0).get("verdict").asText());
         }
         assertThat(root.get("ratios").get("viOverComparator").has("32")).isTrue();
+        assertThat(root.get("ratios").get("viOverStoredComparator").has("32")).isTrue();
         assertThat(r.err()).doesNotContain("32x32 reserve");
     }
 }
