@@ -164,6 +164,11 @@ public final class ImplicitDiscountedGame {
         int na;
         long outcomes;
         int joined;
+        /** Pairs expanded so far. */
+        long expanded;
+        /** Lowest and highest bitmap word marked since the sweep last looked back. */
+        int dirtyLow;
+        int dirtyHigh;
 
         Search(Arena arena, ComparatorSteps steps) {
             this.arena = arena;
@@ -184,25 +189,59 @@ public final class ImplicitDiscountedGame {
         /** Builds and solves; whether the start joined the attractor. */
         boolean run() {
             find(startVertex, initialState, true);
-            long[] pending = this.pending;
             int words = pending.length;
+            // a look-back of a few floor rows: pairs found just behind the sweep are expanded at once, while
+            // their neighbourhood is still in the cache, rather than a whole sweep later
+            int window = Math.max(4, (int) (3L * robots / Math.max(1, arena.height()) / 64) + 1);
             boolean up = true;
-            boolean any = true;
-            while (any) {
-                any = false;
+            while (true) {
+                long before = expanded;
+                dirtyLow = Integer.MAX_VALUE;
+                dirtyHigh = -1;
                 for (int i = 0; i < words; i++) {
                     int w = up ? i : words - 1 - i;
-                    long bits;
-                    while ((bits = pending[w]) != 0) {
-                        int b = up ? Long.numberOfTrailingZeros(bits) : 63 - Long.numberOfLeadingZeros(bits);
-                        pending[w] = bits & ~(1L << b);
-                        if (expandVertex((w << 6) + b)) {
-                            return true;
+                    if (expandWord(w, up)) {
+                        return true;
+                    }
+                    if (up) {
+                        while (dirtyLow < w) {
+                            int from = Math.max(dirtyLow, w - window);
+                            dirtyLow = Integer.MAX_VALUE;
+                            for (int k = from; k < w; k++) {
+                                if (expandWord(k, true)) {
+                                    return true;
+                                }
+                            }
                         }
-                        any = true;
+                    } else {
+                        while (dirtyHigh > w) {
+                            int from = Math.min(dirtyHigh, w + window);
+                            dirtyHigh = -1;
+                            for (int k = from; k > w; k--) {
+                                if (expandWord(k, false)) {
+                                    return true;
+                                }
+                            }
+                        }
                     }
                 }
+                if (expanded == before) {
+                    return false;
+                }
                 up = !up;
+            }
+        }
+
+        /** Expands the pending pairs of the 64 robot vertices of bitmap word w, in the sweep's direction; whether the start joined. */
+        private boolean expandWord(int w, boolean up) {
+            long[] pending = this.pending;
+            long bits;
+            while ((bits = pending[w]) != 0) {
+                int b = up ? Long.numberOfTrailingZeros(bits) : 63 - Long.numberOfLeadingZeros(bits);
+                pending[w] = bits & ~(1L << b);
+                if (expandVertex((w << 6) + b)) {
+                    return true;
+                }
             }
             return false;
         }
@@ -236,6 +275,7 @@ public final class ImplicitDiscountedGame {
         /** Expands robot pair v of arena vertex x; whether the start joined. */
         private boolean expand(int x, int v) {
             final Arena arena = this.arena;
+            expanded++;
             int s = pair[STRIDE * v + STATE] - 1;
             int eBegin = arena.outBegin(x);
             int eEnd = arena.outEnd(x);
@@ -278,6 +318,17 @@ public final class ImplicitDiscountedGame {
             return need == 0 && joins(x, v);
         }
 
+        private void markPending(int t) {
+            int w = t >>> 6;
+            pending[w] |= 1L << t;
+            if (w < dirtyLow) {
+                dirtyLow = w;
+            }
+            if (w > dirtyHigh) {
+                dirtyHigh = w;
+            }
+        }
+
         /**
          * The robot pair (t, s2): found in t's record, the chain after it or the overflow table, or (if
          * {@code add}) new; -1 if absent. A chain holds every pair of its vertex; a lookup walks at most
@@ -296,7 +347,7 @@ public final class ImplicitDiscountedGame {
                 }
                 pair[STRIDE * t + STATE] = key;
                 pair[STRIDE * t + NEED] = -1;
-                pending[t >>> 6] |= 1L << t;
+                markPending(t);
                 n++;
                 return t;
             }
@@ -330,7 +381,7 @@ public final class ImplicitDiscountedGame {
             pair[STRIDE * id + NEXT] = pair[STRIDE * t + NEXT];
             pair[STRIDE * id + NEED] = -1;
             pair[STRIDE * t + NEXT] = id + 1;
-            pending[t >>> 6] |= 1L << t;
+            markPending(t);
             if (longChain) {
                 overflow.put(key(t, s2), id);
             } else if (walked == CHAIN_LIMIT) {
