@@ -105,6 +105,18 @@ final class MissionOptions {
                     + "; give a lower reserve)");
             bad = true;
         }
+        if (!bad && (reserve != null || startCharge != null)
+                && m.reserveUnits() > Math.min(m.capacityUnits(), m.startUnits())) {
+            // the same check as a mission file's (MissionReading): a robot that starts below its floor is
+            // an input mistake, not a question the solver should answer with "not guaranteed"
+            String fix = reserve != null && startCharge != null ? "lower --reserve or raise --start-charge"
+                    : reserve != null ? "lower --reserve" : "raise --start-charge";
+            err.println("dockline: " + missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the starting charge (" + m.scale().formatWh(Math.min(m.capacityUnits(), m.startUnits()))
+                    + ") in whole energy units (hint: " + fix + "; the floor rounds up and the charge down to units of "
+                    + m.scale().formatWh(1) + ")");
+            bad = true;
+        }
         if (bad) {
             throw new BadInput();
         }

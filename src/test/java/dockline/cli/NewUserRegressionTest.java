@@ -85,8 +85,10 @@ class NewUserRegressionTest {
         Path policy = Files.writeString(dir.resolve("policy.json"), "the policy of yesterday");
         assertThat(run("export", NIGHT, "--policy", policy.toString(), "--reserve", "150%").code())
                 .isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("export", NIGHT, "--policy", policy.toString(), "--start-charge", "100%", "--reserve", "59Wh")
+                .code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(run("export", NIGHT, "--policy", policy.toString(), "--start-charge", "1").code())
-                .isEqualTo(ExitCodes.NOT_GUARANTEED);
+                .isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(run("export", "missions/nope.yaml", "--policy", policy.toString()).code())
                 .isEqualTo(ExitCodes.BAD_INPUT);
         Path csv = Files.writeString(dir.resolve("replay.csv"), "old replay");
@@ -130,7 +132,23 @@ class NewUserRegressionTest {
         Run r = run("check", NIGHT, "--start-charge", "10", "Wh");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("Unmatched argument").contains("write 12Wh, or '12 Wh' in quotes");
-        assertThat(run("check", NIGHT, "--start-charge", "10Wh").code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(run("check", NIGHT, "--start-charge", "30Wh").code()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
+    }
+
+    /**
+     * {@code --start-charge} below the reserve floor was answered "not guaranteed", while a mission file
+     * with the same figures is rejected by {@code validate}; the option is now rejected the same way.
+     */
+    @Test
+    void startChargeBelowTheFloor_isBadInputLikeInTheFile() {
+        // night-round: 60 Wh battery, reserve 20 % = 12 Wh
+        Run r = run("check", NIGHT, "--start-charge", "10Wh");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("the reserve floor (12 Wh) is above the starting charge (10 Wh)")
+                .contains("raise --start-charge").doesNotContain("Exception");
+        Run both = run("margin", NIGHT, "--start-charge", "50%", "--reserve", "60%");
+        assertThat(both.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(both.err()).contains("lower --reserve or raise --start-charge");
     }
 
     /**
