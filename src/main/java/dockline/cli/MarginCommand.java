@@ -181,7 +181,7 @@ public final class MarginCommand implements Callable<Integer> {
         root.put("verdict", Verdict.of(r.guaranteed()).word());
         root.put("guaranteed", r.guaranteed());
         root.put("startUnits", r.startUnits());
-        root.put("floorUnits", r.floorUnits());
+        root.put("reserveUnits", r.floorUnits());
         root.put("capacityUnits", r.capacityUnits());
         root.put("energyUnitWh", s.unitWh().stripTrailingZeros());
         units(root, "highestReserve", r.highestReserveUnits(), s);

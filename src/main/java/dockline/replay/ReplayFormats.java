@@ -75,8 +75,8 @@ public final class ReplayFormats {
         root.put("ending", replay.ending().word());
         root.put("minimumUnits", replay.minimumUnits());
         root.put("minimumWh", scale.toWh(replay.minimumUnits()));
-        root.put("floorUnits", replay.floorUnits());
-        root.put("floorWh", scale.toWh(replay.floorUnits()));
+        root.put("reserveUnits", replay.floorUnits());
+        root.put("reserveWh", scale.toWh(replay.floorUnits()));
         root.put("energyUnitWh", scale.unitWh().stripTrailingZeros());
         root.put("rounding", scale.describe());
         ArrayNode ex = root.putArray("explanation");

@@ -357,4 +357,19 @@ class NewUserRegressionTest {
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> o.failure(new IllegalStateException("bug"), err))
                 .isInstanceOf(IllegalStateException.class); // left for the internal-error handler (exit 4)
     }
+
+    /** check said {@code reserveUnits} while margin and replay said {@code floorUnits} for the same figure. */
+    @Test
+    void reserveFloor_hasOneJsonNameInEveryCommand() throws Exception {
+        ObjectMapper om = new ObjectMapper();
+        JsonNode check = om.readTree(run("check", NIGHT, "--json").out());
+        JsonNode margin = om.readTree(run("margin", NIGHT, "--json").out());
+        JsonNode replay = om.readTree(run("replay", NIGHT, "--json").out());
+        // night-round: reserve 20 % of 60 Wh = 12 Wh = 24 units of 0.5 Wh
+        for (JsonNode j : List.of(check, margin, replay)) {
+            assertThat(j.get("reserveUnits").asInt()).isEqualTo(24);
+            assertThat(j.has("floorUnits")).isFalse();
+        }
+        assertThat(replay.get("reserveWh").decimalValue()).isEqualByComparingTo("12");
+    }
 }
