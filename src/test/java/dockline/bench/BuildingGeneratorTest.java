@@ -12,6 +12,7 @@ import dockline.model.Mission;
 import dockline.model.Zone;
 import java.util.HashSet;
 import java.util.Set;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
@@ -19,11 +20,10 @@ import org.jgrapht.Graph;
 import org.jgrapht.alg.connectivity.ConnectivityInspector;
 import org.jgrapht.graph.DefaultEdge;
 import org.jgrapht.graph.SimpleGraph;
-import org.junit.jupiter.api.Test;
 
 class BuildingGeneratorTest {
 
-    @Test
+    @Example
     void sameSeed_sameFloor_otherSeed_otherFloor() {
         BuildingMap a = BuildingGenerator.generate(64, 11, 2);
         BuildingMap b = BuildingGenerator.generate(64, 11, 2);
@@ -34,7 +34,7 @@ class BuildingGeneratorTest {
         assertThat(a.rows()).isNotEqualTo(c.rows());
     }
 
-    @Test
+    @Example
     void everyBenchmarkSize_hasTheAdvertisedFeatures() {
         for (int side : new int[] {32, 64, 128, 256, 512}) {
             BuildingMap m = BuildingGenerator.generate(side, 1, 2);
@@ -130,7 +130,7 @@ class BuildingGeneratorTest {
         assertThat(ArenaCompiler.compile(mi).vertexCount()).isPositive();
     }
 
-    @Test
+    @Example
     void tooSmall_isRejected() {
         assertThatThrownBy(() -> BuildingGenerator.generate(10, 1, 0)).isInstanceOf(IllegalArgumentException.class);
         assertThatThrownBy(() -> BuildingGenerator.generate(64, 1, -1)).isInstanceOf(IllegalArgumentException.class);

@@ -5,15 +5,15 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import dockline.model.Charge;
 import java.math.BigDecimal;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.BigRange;
 import net.jqwik.api.constraints.Scale;
-import org.junit.jupiter.api.Test;
 
 class QuantitiesTest {
 
-    @Test
+    @Example
     void charges_as_written_on_a_command_line() {
         assertThat(Quantities.parseCharge("20%")).isEqualTo(Charge.percent(new BigDecimal("20")));
         assertThat(Quantities.parseCharge(" 7.5 % ")).isEqualTo(Charge.percent(new BigDecimal("7.5")));
@@ -24,7 +24,7 @@ class QuantitiesTest {
         assertThat(Quantities.parseCharge("100%").percent()).isTrue();
     }
 
-    @Test
+    @Example
     void bad_charges_say_what_is_wrong() {
         assertThatThrownBy(() -> Quantities.parseCharge("120%")).isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("'120%' is above 100% of the battery");
@@ -37,7 +37,7 @@ class QuantitiesTest {
         assertThatThrownBy(() -> Quantities.parseCharge(null)).isInstanceOf(IllegalArgumentException.class);
     }
 
-    @Test
+    @Example
     void decimals_are_exact_and_strict() {
         assertThat(Quantities.parseDecimal("0.1").toPlainString()).isEqualTo("0.1");
         assertThat(Quantities.parseDecimal("-0.75")).isEqualByComparingTo("-0.75");
@@ -51,7 +51,7 @@ class QuantitiesTest {
         assertThatThrownBy(() -> Quantities.parseDecimal("0.0000000001")).hasMessageContaining("too many decimals");
     }
 
-    @Test
+    @Example
     void wh_accepts_a_unit_and_rejects_percent_and_negatives() {
         assertThat(Quantities.parseWh("0.5 Wh")).isEqualByComparingTo("0.5");
         assertThat(Quantities.parseWh("2")).isEqualByComparingTo("2");
@@ -59,7 +59,7 @@ class QuantitiesTest {
         assertThatThrownBy(() -> Quantities.parseWh("-1")).hasMessageContaining("negative");
     }
 
-    @Test
+    @Example
     void check_against_capacity() {
         BigDecimal cap = new BigDecimal("60");
         assertThat(Quantities.checkAgainstCapacity(Charge.wh(new BigDecimal("60")), cap)).isNull();

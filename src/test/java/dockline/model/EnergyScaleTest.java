@@ -7,10 +7,10 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /**
  * The energy discretisation of DESIGN.md 2.2: every rounding is against the robot. The expected
@@ -26,7 +26,7 @@ class EnergyScaleTest {
         return new BigDecimal(s);
     }
 
-    @Test
+    @Example
     void consumption_rounds_up_and_gain_rounds_down() {
         EnergyScale s = at("0.1");
         assertThat(s.consumption(wh("0.5"))).isEqualTo(5);      // 0.5 / 0.1 = 5 exactly
@@ -40,7 +40,7 @@ class EnergyScaleTest {
         assertThat(half.gain(wh("1.2"))).isEqualTo(2);          // 2.4 -> 2
     }
 
-    @Test
+    @Example
     void capacity_and_start_round_down_reserve_rounds_up() {
         EnergyScale s = at("0.5");
         assertThat(s.capacity(wh("60.4"))).isEqualTo(120);      // 120.8 -> 120
@@ -49,7 +49,7 @@ class EnergyScaleTest {
         assertThat(s.reserve(wh("12"))).isEqualTo(24);          // exact
     }
 
-    @Test
+    @Example
     void diagonal_moves_cost_sqrt2_rounded_up_hand_worked() {
         // 0.5 Wh at 0.1 Wh: 5 units straight; diagonal 5*sqrt(2) = 7.07...; least u with u^2 >= 50:
         // 7^2 = 49 < 50 <= 64 = 8^2, so 8 units
@@ -86,7 +86,7 @@ class EnergyScaleTest {
         assertThat(u).isEqualTo(ref.intValueExact());
     }
 
-    @Test
+    @Example
     void percentages_are_exact() {
         // 20% of 60 Wh = 12 Wh; 12.5% of 150 Wh = 18.75 Wh; 33% of 0.1 Wh = 0.033 Wh
         assertThat(Charge.percent(wh("20")).toWh(wh("60"))).isEqualByComparingTo("12");
@@ -99,7 +99,7 @@ class EnergyScaleTest {
         assertThat(s.start(Charge.percent(wh("33.3")).toWh(wh("100")))).isEqualTo(66);
     }
 
-    @Test
+    @Example
     void mission_start_is_capped_at_capacity() {
         // 60.4 Wh capacity at 0.5 Wh is 120 units (down); a start of 100% = 60.4 Wh is also 120
         RobotProfile r = new RobotProfile(wh("60.4"), wh("0.5"), java.util.Map.of("tile", wh("0.5")), wh("0.5"), wh("1"),
@@ -112,7 +112,7 @@ class EnergyScaleTest {
         assertThat(m.reserveUnits()).isEqualTo(25);
     }
 
-    @Test
+    @Example
     void overflow_is_an_error_not_a_wrap() {
         EnergyScale s = at("0.001");
         assertThat(s.capacity(wh("2147483.647"))).isEqualTo(Integer.MAX_VALUE);
@@ -122,7 +122,7 @@ class EnergyScaleTest {
         assertThatThrownBy(() -> new EnergyScale(BigDecimal.ZERO)).isInstanceOf(IllegalArgumentException.class);
     }
 
-    @Test
+    @Example
     void describe_states_the_rounding() {
         assertThat(at("0.50").describe()).startsWith("1 unit = 0.5 Wh").contains("rounded up").contains("rounded down");
         assertThat(at("0.5").formatWh(25)).isEqualTo("12.5 Wh");

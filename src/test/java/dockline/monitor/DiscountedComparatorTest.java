@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import net.jqwik.api.Example;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
@@ -17,7 +18,6 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /**
  * The discounted comparator against exact rational arithmetic on closed forms of discounted sums.
@@ -135,7 +135,7 @@ class DiscountedComparatorTest {
         }
     }
 
-    @Test
+    @Example
     void constantSequence_hasClosedForm_c_d_over_d_minus_1() {
         // DS(c^omega, d) = c d/(d-1) (geometric series): c = 3, d = 2 gives exactly 6
         DiscountedComparator atLeast6 = new DiscountedComparator(2, 3, Rational.of(6), Relation.AT_LEAST);
@@ -149,7 +149,7 @@ class DiscountedComparatorTest {
         assertThat(verdictOnLasso(m2, new int[0], new int[] {-1})).isFalse();
     }
 
-    @Test
+    @Example
     void firstWeight_isNotDiscounted() {
         // DS(5, 0, 0, ...) = 5 with w_0 undiscounted: >= 5 holds, > 5 fails
         assertThat(verdictOnLasso(new DiscountedComparator(2, 5, Rational.of(5), Relation.AT_LEAST),
@@ -158,13 +158,13 @@ class DiscountedComparatorTest {
                 new int[] {5}, new int[] {0})).isFalse();
     }
 
-    @Test
+    @Example
     void weightAboveBound_isRefused() {
         DiscountedComparator c = new DiscountedComparator(2, 3, Rational.of(3, 4), Relation.AT_LEAST);
         assertThatThrownBy(() -> c.step(c.initialState(), 4)).isInstanceOf(IllegalArgumentException.class);
     }
 
-    @Test
+    @Example
     void hugeThreshold_isAResourceLimitNotAWrap() {
         assertThatThrownBy(() -> new DiscountedComparator(4, 1000, Rational.of(1, Long.MAX_VALUE / 3), Relation.ABOVE))
                 .isInstanceOf(ArithmeticException.class);
@@ -189,7 +189,7 @@ class DiscountedComparatorTest {
         return new int[] {pre, i - pre};
     }
 
-    @Test
+    @Example
     void longDivision_knownExpansions() {
         // 1/7 in base 10 = 0.(142857): period 6 (textbook); 1/6 = 0.1(6): preperiod 1, period 1
         assertThat(prePeriodAndPeriod(1, 7, 10)).containsExactly(0, 6);
@@ -252,7 +252,7 @@ class DiscountedComparatorTest {
         assertThat(DiscountedComparator.expansionLength(p, q, d, 1 << 20)).isEqualTo(pp[0] + pp[1]);
     }
 
-    @Test
+    @Example
     void states_areNumberedDenselyInDiscoveryOrder() {
         DiscountedComparator c = new DiscountedComparator(2, 2, Rational.of(3, 4), Relation.AT_LEAST);
         List<Integer> found = new ArrayList<>();

@@ -5,10 +5,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import java.util.Random;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /**
  * The pair monitor against its definition, the synchronous product of two deterministic automata
@@ -47,7 +47,7 @@ class PairMonitorTest {
         }
     }
 
-    @Test
+    @Example
     void batteryBelowTheFloorAtTheStart_rejectsAtOnce() {
         PairMonitor pair = new PairMonitor(new ReserveMonitor(10, 30, 5),
                 new DiscountedComparator(2, 3, Rational.of(0), Relation.AT_LEAST));

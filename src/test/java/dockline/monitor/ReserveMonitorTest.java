@@ -3,15 +3,15 @@ package dockline.monitor;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /** The battery automaton of DESIGN.md 2.3: level ← min(capacity, level + delta), lost below the floor. */
 class ReserveMonitorTest {
 
-    @Test
+    @Example
     void stepsSaturateAtCapacityAndRejectBelowTheFloor() {
         ReserveMonitor m = new ReserveMonitor(20, 100, 57);
         int s = m.initialState();
@@ -23,13 +23,13 @@ class ReserveMonitorTest {
         assertThat(m.acceptsAtCompletion(0)).isTrue();
     }
 
-    @Test
+    @Example
     void startBelowTheFloorIsRejectedAtOnce_andAboveCapacityIsCut() {
         assertThat(new ReserveMonitor(5, 10, 4).initialState()).isEqualTo(Monitor.REJECT);
         assertThat(new ReserveMonitor(5, 10, 40).startUnits()).isEqualTo(10);
     }
 
-    @Test
+    @Example
     void floorAboveCapacityOrNegative_isRefused() {
         assertThatThrownBy(() -> new ReserveMonitor(11, 10, 10)).isInstanceOf(IllegalArgumentException.class);
         assertThatThrownBy(() -> new ReserveMonitor(-1, 10, 10)).isInstanceOf(IllegalArgumentException.class);

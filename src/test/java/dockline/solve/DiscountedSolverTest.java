@@ -13,10 +13,10 @@ import dockline.monitor.DiscountedComparator;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;
 import java.util.Random;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /**
  * The discounted solver with the tasks and the dock: the generic product and linear-time attractor
@@ -69,7 +69,7 @@ class DiscountedSolverTest {
         }
     }
 
-    @Test
+    @Example
     void trapCorridor_guaranteedWithAPlanThatChargesThenDocks() {
         Mission m = DiscountedTrapExampleTest.corridor(Rational.of(3, 4));
         Objective.Discounted o = (Objective.Discounted) m.objective();

@@ -19,10 +19,10 @@ import dockline.model.Terrain;
 import java.math.BigDecimal;
 import java.util.List;
 import java.util.Map;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
-import org.junit.jupiter.api.Test;
 
 /** The value-iteration baseline against closed forms and exact finite-horizon values. */
 class DiscountedValueIterationTest {
@@ -39,7 +39,7 @@ class DiscountedValueIterationTest {
                 Charge.wh(BigDecimal.ZERO), Tasks.justDock(), new Objective.Reserve());
     }
 
-    @Test
+    @Example
     void chargingForever_hasTheGeometricValue() {
         // one dock cell, charge 3 per step: the best play charges forever, DS = 3 d/(d-1) (geometric series)
         Arena a = ArenaCompiler.compile(corridor("C", 1, 1, 3));
@@ -47,7 +47,7 @@ class DiscountedValueIterationTest {
         assertThat(new DiscountedValueIteration(a, 3).solve().exactValue()).isEqualTo(Rational.of(9, 2));
     }
 
-    @Test
+    @Example
     void walkingToTheDock_thenCharging() {
         // ".C", start at 0:0: move (-2), then charge 3 forever: -2 + (1/2) * 6 = 1 with d = 2;
         // waiting forever costs -1 * 2 = -2; so the value is 1 (hand-worked with the geometric series)

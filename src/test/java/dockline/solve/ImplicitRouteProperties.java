@@ -11,10 +11,9 @@ import dockline.goal.GoalAutomaton;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import java.nio.file.Path;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
-import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * The implicit route of {@link ReserveSolver#analyse} ({@link ReserveOptions.Route#IMPLICIT}) on random
@@ -122,10 +121,15 @@ class ImplicitRouteProperties {
      * route reports. The worst level may differ from the stored route's by tie-breaking among equally
      * short choices (night-round: 47 units here, 49 on the stored route; supply-run: 24 on both).
      */
-    @ParameterizedTest
-    @CsvSource({"missions/night-round.yaml, true, 47, 83", "missions/supply-run.yaml, true, 24, 40",
-            "missions/late-return.yaml, false, -1, 46"})
-    void demoMission_implicitRoute(String file, boolean guaranteed, int worst, int highest) throws Exception {
+    @Example
+    void demoMissions_implicitRoute() throws Exception {
+        demoMission_implicitRoute("missions/night-round.yaml", true, 47, 83);
+        demoMission_implicitRoute("missions/supply-run.yaml", true, 24, 40);
+        demoMission_implicitRoute("missions/late-return.yaml", false, -1, 46);
+    }
+
+    private static void demoMission_implicitRoute(String file, boolean guaranteed, int worst, int highest)
+            throws Exception {
         Mission m = MissionLoader.load(Path.of(file));
         ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withRoute(ReserveOptions.Route.IMPLICIT));
         assertThat(a.guaranteed()).as(file).isEqualTo(guaranteed);

@@ -13,13 +13,13 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
 import java.math.BigDecimal;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import org.jgrapht.Graph;
 import org.jgrapht.alg.shortestpath.DijkstraShortestPath;
 import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.DirectedWeightedPseudograph;
-import org.junit.jupiter.api.Test;
 
 class MinChargeSolverTest {
 
@@ -170,7 +170,7 @@ class MinChargeSolverTest {
      * A hand-checked corridor: a 1 × 4 strip {@code k . . .} on tile at 1 unit a cell, no
      * disturbances, task zone on the far cell, finish on the dock: out 3 cells and back 3 = 6 units.
      */
-    @Test
+    @Example
     void straightCorridor_outAndBack_needsSixUnits() {
         Mission m = TinyMissions.strip();
         Arena arena = ArenaCompiler.compile(m);
@@ -182,7 +182,7 @@ class MinChargeSolverTest {
         assertThat(new MinChargeSolver(ArenaCompiler.compile(tight), goal).decide().guaranteed()).isFalse();
     }
 
-    @Test
+    @Example
     void generatedFloor_earlyExit_exploresLessThanTheWholeProduct() {
         Mission m = MissionGenerator.generate(BuildingGenerator.generate(128, 3, 2), MissionSpec.consumptionOnly(2), 3);
         Arena arena = ArenaCompiler.compile(m);

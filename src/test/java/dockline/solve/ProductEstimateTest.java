@@ -15,11 +15,9 @@ import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
 import java.math.BigDecimal;
 import java.nio.file.Path;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
-import org.junit.jupiter.api.Test;
-import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Issue 7's target for the pre-build size estimate of the main route ({@link ProductGame#estimate},
@@ -44,14 +42,15 @@ class ProductEstimateTest {
         assertThat((double) e.edges() / game.edgeCount()).as("edges of %s", what).isBetween(1.0, 1.2);
     }
 
-    @ParameterizedTest
-    @ValueSource(strings = {"missions/night-round.yaml", "missions/supply-run.yaml", "missions/late-return.yaml",
-        "missions/discounted-trap.yaml"})
-    void demoMissions_estimateWithinTwentyPercent(String file) throws Exception {
-        assertWithinTwentyPercent(MissionLoader.load(Path.of(file)), file);
+    @Example
+    void demoMissions_estimateWithinTwentyPercent() throws Exception {
+        for (String file : new String[] {"missions/night-round.yaml", "missions/supply-run.yaml",
+            "missions/late-return.yaml", "missions/discounted-trap.yaml"}) {
+            assertWithinTwentyPercent(MissionLoader.load(Path.of(file)), file);
+        }
     }
 
-    @Test
+    @Example
     void generatedBuildings_estimateWithinTwentyPercent() {
         for (int side : new int[] {32, 64}) {
             for (MissionSpec spec : new MissionSpec[] {MissionSpec.docking(2),

@@ -11,9 +11,9 @@ import dockline.model.Mission;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
 import java.util.concurrent.CancellationException;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
-import org.junit.jupiter.api.Test;
 
 /** The product game's construction: index kinds, the size estimate, the memory guard, the start. */
 class ProductGameProperties {
@@ -88,7 +88,7 @@ class ProductGameProperties {
         }
     }
 
-    @Test
+    @Example
     void overTheMemoryBudget_isRefusedBeforeBuilding() {
         Mission m = MissionFixture.grid("........", "........", "D.......").capacity(200).startWh(200).budget(2)
                 .resolution("0.1").build();
@@ -105,14 +105,14 @@ class ProductGameProperties {
         assertThat(g.vertexCount()).isPositive();
     }
 
-    @Test
+    @Example
     void analyse_propagatesTheRefusal() {
         Mission m = MissionFixture.grid("....", "D...").capacity(50).startWh(50).build();
         assertThatThrownBy(() -> ReserveSolver.analyse(m, ReserveOptions.defaults().withMemoryBudget(1000)))
                 .isInstanceOf(ProductTooLargeException.class);
     }
 
-    @Test
+    @Example
     void raisedCancellationFlag_stopsTheBuild() {
         Mission m = MissionFixture.grid("........", "........", "D.......").capacity(100).startWh(100).budget(2)
                 .resolution("0.1").build();
@@ -120,7 +120,7 @@ class ProductGameProperties {
                 .isInstanceOf(CancellationException.class);
     }
 
-    @Test
+    @Example
     void startOnADockWithoutTasks_isWonAtOnce() {
         Mission m = MissionFixture.grid("D.").startWh(5).reserveWh(3).build();
         ReserveAnalysis a = ReserveSolver.analyse(m, STORED);
@@ -131,7 +131,7 @@ class ProductGameProperties {
         assertThat(a.policy().orElseThrow().size()).isZero();
     }
 
-    @Test
+    @Example
     void startBelowTheFloor_isLostAtOnce() {
         Mission m = MissionFixture.grid(".D").startWh(2).reserveWh(3).build();
         ReserveAnalysis a = ReserveSolver.analyse(m, STORED);
@@ -141,7 +141,7 @@ class ProductGameProperties {
         assertThat(a.highestGuaranteedReserveUnits()).hasValue(1);
     }
 
-    @Test
+    @Example
     void startInAnAvoidedZone_isLostAtOnce() {
         Mission m = MissionFixture.grid(".D").zone("wet", new Cell(0, 0)).avoid("wet").build();
         assertThat(ReserveSolver.analyse(m, STORED).game().start()).isEqualTo(ProductGame.LOSE);
@@ -153,7 +153,7 @@ class ProductGameProperties {
      * 1 Wh wait, then passes). Worst case: 10 − 1 (door shut) − 4 = 5 Wh; so floor 5 is guaranteed,
      * floor 6 is not.
      */
-    @Test
+    @Example
     void corridorWithOneShutDoor_handChecked() {
         Mission m = MissionFixture.grid("..d.D").startWh(10).reserveWh(5)
                 .event(dockline.model.EventKind.DOOR_SHUT, 0, new Cell(2, 0)).budget(1).build();
@@ -167,7 +167,7 @@ class ProductGameProperties {
         SolutionChecks.assertValidSolution(six.game(), six.solution(), new ReserveMonitor(6, 12, 10));
     }
 
-    @Test
+    @Example
     void everywhereBuild_usesTheDirectIndexForTheReserveMonitor() {
         // every (vertex, level) pair but the dock's is a triple, so the direct index is barely larger than the game
         Mission m = MissionFixture.grid("...", "..D").build();
@@ -177,7 +177,7 @@ class ProductGameProperties {
         assertThat(g.vertexCount()).isEqualTo(g.estimate().vertices());
     }
 
-    @Test
+    @Example
     void anyMonitor_buildsThroughTheHashIndex() {
         // a monitor that counts outcomes up to 3 and accepts at completion only in state 2 or 3
         Monitor counter = new Monitor() {

@@ -13,9 +13,9 @@ import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
 import java.math.BigDecimal;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
-import org.junit.jupiter.api.Test;
 
 /** The size forecast against the product actually built (issue 7: within 20% before the build). */
 class ReserveSizeForecastTest {
@@ -41,7 +41,7 @@ class ReserveSizeForecastTest {
     }
 
     /** Within 20% on the generated buildings, with and without charging (exact, in fact: waiting costs 1 unit). */
-    @Test
+    @Example
     void generatedBuildings_forecastWithinTwentyPercent() {
         for (int side : new int[] {32, 48, 64}) {
             for (MissionSpec spec : new MissionSpec[] {MissionSpec.docking(2),

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import net.jqwik.api.Example;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
@@ -14,7 +15,6 @@ import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Size;
-import org.junit.jupiter.api.Test;
 
 /**
  * The primitive collections against the JDK's own collections as the reference ({@link HashMap},
@@ -75,7 +75,7 @@ class PrimitiveCollectionsProperties {
         }
     }
 
-    @Test
+    @Example
     void negativeValues_areRejected_soTheyCannotPassForEmptySlots() {
         assertThatThrownBy(() -> new LongIntMap(4).put(1, -1)).isInstanceOf(IllegalArgumentException.class);
     }
