@@ -36,10 +36,13 @@ import java.util.Arrays;
  * The method follows the published work on satisficing (threshold) problems in quantitative games
  * (2021).
  *
- * <p>Cost: O(|V| + |E|) expected time in the product; memory one int per arena robot vertex (chain
- * heads) plus the per-pair arrays above, grown by half when the product outgrows the arena. Requires
- * {@link #applicable}: private disturbance vertices and out-degrees of at most {@value #MAX_DEGREE}
- * (counters are bytes).
+ * <p>Cost: O(|V| + |E| + k |R| / 64) expected time, for the product's vertices V and edges E, the
+ * arena's robot vertices R and k sweeps (each reads a bit per robot vertex; k is at most the number of
+ * robot pairs, and a handful on floor plans, where the look-back catches pairs found just behind).
+ * Memory: a 16-byte record per arena robot vertex (its first pair's, used or not) and per further pair,
+ * one byte per disturbance pair and one bit per robot vertex, grown by half when the product outgrows
+ * the arena. Requires {@link #applicable}: private disturbance vertices and out-degrees of at most
+ * {@value #MAX_DEGREE} (counters are bytes).
  */
 public final class ImplicitDiscountedGame {
 
@@ -103,8 +106,10 @@ public final class ImplicitDiscountedGame {
      * pairs still to expand), rather than in the order they are found: a compiled arena numbers robot
      * vertices by cell, row by row, so a sweep reads the arena's arrays and the pairs' records almost
      * in order, where a breadth-first order from the start jumps a row's length between consecutive
-     * pairs and misses the cache at every step once the arena outgrows it. Pairs found behind a sweep
-     * wait for the next one; on the generated floors a handful of sweeps suffice.
+     * pairs and misses the cache at every step once the arena outgrows it. Pairs found a few floor
+     * rows behind the sweep are expanded at once (a look-back, while their neighbourhood is still in
+     * the cache); pairs found further behind wait for the next sweep. On the generated floors a
+     * handful of sweeps suffice.
      *
      * <p>The attractor is computed on the fly (the counter-based search, run while the product is
      * found): an expansion counts the moves into pairs already joined, and a pair that joins at once
