@@ -87,6 +87,37 @@ class ImplicitDiscountedGameProperties {
         });
     }
 
+    /**
+     * Generated buildings (hundreds of robot vertices, so dozens of bitmap words): the sweeps in both
+     * directions, the look-back and joins told across rows are taken here, which the small random
+     * arenas above (one bitmap word) never reach. Thresholds at, just below and just above the exact
+     * optimal value, and a few units away, for both relations, against value iteration.
+     */
+    @Property(tries = 24)
+    void generatedBuildings_sweepsAndLookBack_sameAnswerAsValueIteration(
+            @ForAll @IntRange(min = 0, max = 1000) int seed,
+            @ForAll @IntRange(min = 0, max = 2) int budget,
+            @ForAll @IntRange(min = -2, max = 2) int offset,
+            @ForAll boolean strict) {
+        Arena a = ArenaCompiler.compile(dockline.bench.MissionGenerator.generate(
+                dockline.bench.BuildingGenerator.generate(32, seed, budget),
+                dockline.bench.MissionSpec.consumptionOnly(budget), seed));
+        Assume.that(ImplicitDiscountedGame.applicable(a));
+        Rational val = new DiscountedValueIteration(a, 2).solve().exactValue();
+        // offsets of 1/64 pin the knife's edge, 2 units leave it
+        Rational v = Math.abs(offset) == 2 ? val.add(Rational.of(offset, 1)) : val.add(Rational.of(offset, 64));
+        Relation rel = strict ? Relation.ABOVE : Relation.AT_LEAST;
+        boolean expected = new DiscountedValueIteration(a, 2).decide(v, rel).holds();
+        ImplicitDiscountedGame g = ImplicitDiscountedGame.solve(a, new DiscountedComparator(2, a.maxAbsWeight(), v, rel));
+        assertThat(g.robotWins()).as("seed %d, K %d, DS %s %s", seed, budget, rel.symbol(), v).isEqualTo(expected);
+        assertThat(a.robotCount()).isGreaterThan(64 * 8);
+        Statistics.label("answer").collect(expected);
+        Statistics.label("answer").coverage(c -> {
+            c.check(true).percentage(p -> p >= 15);
+            c.check(false).percentage(p -> p >= 15);
+        });
+    }
+
     @Example
     void generatedFloors_agreeWithValueIterationAndTheStoredProduct() {
         for (int size : new int[] {4, 8, 12}) {
