@@ -67,6 +67,26 @@ class ArenaCompilerTest {
         assertThat(a.weight(a.outBegin(wait))).isEqualTo(-1);
     }
 
+    /** The layout facts the solvers rely on hold for compiled arenas, and fail where they should. */
+    @Test
+    void layoutFacts_compiledArena_andShuffledOne() {
+        EventRule door = new EventRule(EventKind.DOOR_SHUT, "door D1", List.of(new Cell(1, 0)), BigDecimal.ZERO);
+        Arena a = ArenaCompiler.compile(mission(List.of(".DC"), new DisturbanceModel(1, List.of(door)),
+                Neighbourhood.FOUR, new Cell(0, 0)));
+        assertThat(a.privateActions()).isTrue();
+        assertThat(a.actionsByEdge()).isTrue();
+        // the largest out-degree, counted here independently
+        int most = 0;
+        for (int v = 0; v < a.vertexCount(); v++) {
+            most = Math.max(most, a.outEnd(v) - a.outBegin(v));
+        }
+        assertThat(a.maxOutDegree()).isEqualTo(most).isPositive();
+        // a fixed seed whose permutation is not the identity
+        Arena shuffled = RandomGameArenas.arenaWithShuffledActions(new java.util.Random(3), 6, 2);
+        assertThat(shuffled.privateActions()).isTrue();
+        assertThat(shuffled.actionsByEdge()).isFalse();
+    }
+
     @Test
     void doorShut_and_drag_spendBudgetAndStayOrPayExtra() {
         EventRule door = new EventRule(EventKind.DOOR_SHUT, "door D1", List.of(new Cell(1, 0)), BigDecimal.ZERO);

@@ -56,4 +56,57 @@ public final class RandomGameArenas {
         return new Arena(null, 1, 1, 0, robots, n, rnd.nextInt(robots), new int[n], new int[n], kinds, actionTarget,
                 outStart, target, weight, event, rule, new long[1], new boolean[1], new int[] {0}, new int[] {0});
     }
+
+    /**
+     * The same kind of arena with its disturbance vertices numbered in a random order, so that they are
+     * still private to one robot vertex each but not numbered by the robot edges into them
+     * ({@link Arena#actionsByEdge()} false): for the solvers' paths that must not assume that layout.
+     */
+    public static Arena arenaWithShuffledActions(Random rnd, int robots, int mu) {
+        Arena a = arena(rnd, robots, mu);
+        int n = a.vertexCount();
+        int dist = n - robots;
+        int[] perm = new int[dist];
+        for (int i = 0; i < dist; i++) {
+            perm[i] = i;
+        }
+        for (int i = dist - 1; i > 0; i--) {
+            int j = rnd.nextInt(i + 1);
+            int t = perm[i];
+            perm[i] = perm[j];
+            perm[j] = t;
+        }
+        int[] oldOf = new int[dist];
+        for (int i = 0; i < dist; i++) {
+            oldOf[perm[i]] = i;
+        }
+        int m = a.edgeCount();
+        int[] outStart = new int[n + 1];
+        int[] target = new int[m];
+        int[] weight = new int[m];
+        int e = 0;
+        for (int r = 0; r < robots; r++) {
+            outStart[r] = e;
+            for (int f = a.outBegin(r); f < a.outEnd(r); f++) {
+                target[e++] = robots + perm[a.target(f) - robots];
+            }
+        }
+        for (int j = 0; j < dist; j++) {
+            outStart[robots + j] = e;
+            int old = robots + oldOf[j];
+            for (int f = a.outBegin(old); f < a.outEnd(old); f++) {
+                target[e] = a.target(f);
+                weight[e] = a.weight(f);
+                e++;
+            }
+        }
+        outStart[n] = e;
+        byte[] event = new byte[m];
+        int[] rule = new int[m];
+        java.util.Arrays.fill(event, (byte) Arena.NOMINAL);
+        java.util.Arrays.fill(rule, -1);
+        return new Arena(null, 1, 1, 0, robots, n, a.startVertex(), new int[n], new int[n], new byte[dist],
+                new int[dist], outStart, target, weight, event, rule, new long[1], new boolean[1], new int[] {0},
+                new int[] {0});
+    }
 }

@@ -41,9 +41,12 @@ class ImplicitDiscountedGameProperties {
             @ForAll @IntRange(min = 0, max = 12) int extraBound,
             @ForAll @IntRange(min = 1, max = 400) int q,
             @ForAll boolean strict,
-            @ForAll boolean nearValue) {
+            @ForAll boolean nearValue,
+            @ForAll boolean shuffledActions) {
         Random rnd = new Random(seed);
-        Arena a = RandomGameArenas.arena(rnd, robots, mu);
+        // shuffled: the actions are not numbered by their robot edges, so the owner is found by the in-edge
+        Arena a = shuffledActions ? RandomGameArenas.arenaWithShuffledActions(rnd, robots, mu)
+                : RandomGameArenas.arena(rnd, robots, mu);
         Assume.that(ImplicitDiscountedGame.applicable(a));
         int bound = a.maxAbsWeight() + extraBound;
         Rational v;
@@ -74,6 +77,11 @@ class ImplicitDiscountedGameProperties {
         Statistics.label("answer").collect(byValueIteration);
         Statistics.label("decided by the backward search").collect(implicit.joinedRobotPairs() > 1);
         Statistics.label("stopped early").collect(implicit.stoppedEarly());
+        Statistics.label("actions numbered by edge").collect(a.actionsByEdge());
+        Statistics.label("actions numbered by edge").coverage(c -> {
+            c.check(true).percentage(p -> p >= 20);
+            c.check(false).percentage(p -> p >= 20);
+        });
         Statistics.label("many states on one vertex").collect(stored.overflowPairs() > 0);
         Statistics.label("answer").coverage(c -> {
             c.check(true).percentage(p -> p >= 20);
