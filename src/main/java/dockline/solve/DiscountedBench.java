@@ -25,7 +25,7 @@ import java.util.Random;
 /**
  * Benchmark rows for the discounted objective: on the same generated instances, the comparator
  * route ({@link ImplicitDiscountedGame}: product with the comparator, generated on demand, one
- * linear-time attractor)
+ * linear-time attractor; {@link DiscountedThresholdGame} on arenas it does not apply to)
  * against the optimisation route ({@link DiscountedValueIteration#decide}: value iteration, then
  * compare), both without the dock goal so that they answer the same question. Not a test: callers
  * (the {@code bench} command) print the rows and the ratios measured in one run.
@@ -99,14 +99,27 @@ public final class DiscountedBench {
         Rational threshold = fixedThreshold != null ? fixedThreshold
                 : new DiscountedValueIteration(arena, discount).solve().exactValue();
         long t0 = System.nanoTime();
-        ImplicitDiscountedGame game = ImplicitDiscountedGame.solve(arena,
-                new dockline.monitor.DiscountedComparator(discount, arena.maxAbsWeight(), threshold, relation));
-        boolean byComparator = game.robotWins();
+        dockline.monitor.DiscountedComparator comparator =
+                new dockline.monitor.DiscountedComparator(discount, arena.maxAbsWeight(), threshold, relation);
+        boolean byComparator;
+        int productVertices;
+        int productEdges;
+        if (ImplicitDiscountedGame.applicable(arena)) {
+            ImplicitDiscountedGame game = ImplicitDiscountedGame.solve(arena, comparator);
+            byComparator = game.robotWins();
+            productVertices = game.vertexCount();
+            productEdges = game.edgeCount();
+        } else {
+            DiscountedThresholdGame game = DiscountedThresholdGame.build(arena, comparator);
+            byComparator = game.robotWins();
+            productVertices = game.vertexCount();
+            productEdges = game.edgeCount();
+        }
         long t1 = System.nanoTime();
         DiscountedValueIteration.Result vi = new DiscountedValueIteration(arena, discount).decide(threshold, relation);
         long t2 = System.nanoTime();
-        return new Row(size, threshold, arena.vertexCount(), arena.edgeCount(), game.vertexCount(), game.edgeCount(),
-                game.comparatorStates(), t1 - t0, t2 - t1, vi.sweeps(), byComparator, vi.holds());
+        return new Row(size, threshold, arena.vertexCount(), arena.edgeCount(), productVertices, productEdges,
+                comparator.stateCount(), t1 - t0, t2 - t1, vi.sweeps(), byComparator, vi.holds());
     }
 
     /** A generated square floor of {@code size x size} cells (size at least 2), deterministic in the seed. */
