@@ -67,7 +67,8 @@ import java.util.function.Consumer;
  * <p>Before measuring, every method runs a few times on small floors so the JIT compiler has done its
  * work; each timed solve is the best of {@link Config#reps()} runs (the least disturbed by other
  * processes on a shared machine; runs over two seconds are not repeated, except for the discounted
- * instance's two routes, which always get the same number of runs; the heap is settled before
+ * instance's three routes, which are measured in {@link Config#reps()} interleaved rounds, so all
+ * get the same number of runs (see timeInterleaved); the heap is settled before
  * each run, outside the timing, so no run pays for an earlier one's garbage), timed both by the wall
  * clock and by the solving thread's CPU time plus the collector's pauses (the ratios use the latter,
  * as other processes on a shared machine hardly change it). The peak heap of a method
@@ -262,7 +263,7 @@ public final class Benchmark {
         return THREADS.getCurrentThreadCpuTime() + gcMillis * 1_000_000L;
     }
 
-    /** A first run shorter than this is repeated (see {@link #time(HeapSampler, long, int, boolean, Body)}). */
+    /** A first run shorter than this is repeated (see {@link #time(HeapSampler, long, int, Body)}). */
     private static final double SHORT_RUN_MILLIS = 200;
     private static final int SHORT_RUN_REPS = 7;
     private static final int SHORT_RUN_MAX = 50;
@@ -276,14 +277,6 @@ public final class Benchmark {
      * {@value #REPEAT_BELOW_MILLIS} ms); the heap is sampled during the first run, above {@code base}.
      */
     private static <T> Timed<T> time(HeapSampler sampler, long base, int reps, Body<T> body) {
-        return time(sampler, base, reps, false, body);
-    }
-
-    /**
-     * The same; with {@code repeatLong} every run is repeated {@code reps} times however long it takes
-     * (for two methods whose ratio is a target, so both get the same number of tries).
-     */
-    private static <T> Timed<T> time(HeapSampler sampler, long base, int reps, boolean repeatLong, Body<T> body) {
         double best = Double.MAX_VALUE;
         double bestCpu = Double.MAX_VALUE;
         long peak = -1;
@@ -327,7 +320,7 @@ public final class Benchmark {
             if (tries == SHORT_RUN_MAX && r + 1 >= Math.max(reps, SHORT_RUN_REPS) && spent >= SHORT_RUN_BUDGET_MILLIS) {
                 break;
             }
-            if (ms > REPEAT_BELOW_MILLIS && !repeatLong) {
+            if (ms > REPEAT_BELOW_MILLIS) {
                 break;
             }
         }
