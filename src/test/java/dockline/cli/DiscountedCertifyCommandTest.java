@@ -46,9 +46,9 @@ class DiscountedCertifyCommandTest {
         CheckCommandTest.Run json = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--json");
         JsonNode j = new ObjectMapper().readTree(json.out());
         assertThat(j.get("certified").asBoolean()).isTrue();
-        assertThat(j.get("certifiedWorstScore").asText()).isEqualTo(j.get("worstCaseScore").asText())
+        assertThat(j.get("certifiedLowestScore").asText()).isEqualTo(j.get("lowestScore").asText())
                 .isEqualTo("16385/16384");
-        assertThat(j.get("certifiedWorstMinimumUnits").asInt()).isGreaterThanOrEqualTo(j.get("reserveUnits").asInt());
+        assertThat(j.get("certifiedLowestLevelUnits").asInt()).isGreaterThanOrEqualTo(j.get("reserveUnits").asInt());
     }
 
     @Test
@@ -61,7 +61,7 @@ class DiscountedCertifyCommandTest {
             assertThat(r.code()).as(String.join(" ", extra) + r.err()).isEqualTo(ExitCodes.OK);
             JsonNode j = new ObjectMapper().readTree(r.out());
             assertThat(j.get("certified").asBoolean()).as(String.join(" ", extra)).isTrue();
-            assertThat(j.get("certifiedWorstScore").asText()).isEqualTo(j.get("worstCaseScore").asText());
+            assertThat(j.get("certifiedLowestScore").asText()).isEqualTo(j.get("lowestScore").asText());
         }
         CheckCommandTest.Run no = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--threshold", "6",
                 "--json");
