@@ -1,34 +1,20 @@
 package dockline.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.arena.Action;
 import dockline.arena.ActionKind;
-import dockline.certify.DiscountedCertificate;
-import dockline.certify.DiscountedCertificateChecker;
-import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
-import dockline.report.Caveats;
-import dockline.solve.DiscountedAnalysis;
-import dockline.solve.DiscountedOptions;
-import dockline.solve.DiscountedPolicies;
-import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
-import java.util.OptionalInt;
 import picocli.CommandLine.Option;
 
 /**
- * The discounted-objective part of {@code check} (a picocli mixin): the options that choose or
- * override the objective, and the report of {@link DiscountedSolver#analyse}, as text or JSON.
- * Every guaranteed verdict is re-checked by {@link DiscountedCertificateChecker} on the exported
- * policy ({@link DiscountedPolicies}) before it is reported, and the worst score the solver reports
- * must equal the certificate's exact worst score; otherwise exit 4, never a silent "guaranteed".
+ * The discounted-objective options of {@code check} (a picocli mixin): the options that choose or
+ * override the objective, turned into the objective and the core's {@link dockline.plan.Route.Discounted};
+ * and the wording of scores and plans that {@link CheckReport} and {@code export} print.
  */
 final class DiscountedCheck {
 
