@@ -6,6 +6,11 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PolicyChoice;
+import dockline.plan.Route;
 import dockline.monitor.ReserveMonitor;
 import java.util.List;
 import java.util.Random;
@@ -91,12 +96,15 @@ class SolverAgreementProperties {
             assertThat(c.rank(v)).isEqualTo(ref.rank(v));
             assertThat(c.strategyEdge(v)).isEqualTo(ref.strategyEdge(v));
         }
-        ReserveAnalysis viaReference = ReserveSolver.analyse(m, ReserveOptions.defaults().withSolver(AttractorSolver::new));
-        ReserveAnalysis viaDefault = ReserveSolver.analyse(m, ReserveOptions.defaults());
-        assertThat(viaDefault.verdict()).isEqualTo(viaReference.verdict());
-        assertThat(viaDefault.highestGuaranteedReserveUnits()).isEqualTo(viaReference.highestGuaranteedReserveUnits());
-        assertThat(viaDefault.worstCaseMinimumUnits()).isEqualTo(viaReference.worstCaseMinimumUnits());
-        assertThat(viaDefault.policy().map(Policy::entries)).isEqualTo(viaReference.policy().map(Policy::entries));
+        // the stored route with each solver (the solver is a setting of that route only, Route.Stored)
+        Plan viaReference = MissionPlanner.plan(m, PlanOptions.of(new Route.Stored(PolicyChoice.FEWEST_MOVES,
+                AttractorSolver::new)));
+        Plan viaCompact = MissionPlanner.plan(m, PlanOptions.of(new Route.Stored(PolicyChoice.FEWEST_MOVES,
+                CompactAttractorSolver::new)));
+        assertThat(viaCompact.verdict()).isEqualTo(viaReference.verdict());
+        assertThat(viaCompact.highestFloorUnits()).isEqualTo(viaReference.highestFloorUnits());
+        assertThat(viaCompact.lowestLevelUnits()).isEqualTo(viaReference.lowestLevelUnits());
+        assertThat(viaCompact.policy().map(Policy::entries)).isEqualTo(viaReference.policy().map(Policy::entries));
     }
 
     @Property(tries = 300)
@@ -112,10 +120,13 @@ class SolverAgreementProperties {
         for (int v = 0; v < game.vertexCount(); v++) {
             assertThat(a.rank(v)).isEqualTo(b.rank(v));
         }
-        ReserveAnalysis viaSweep = ReserveSolver.analyse(m, ReserveOptions.defaults().withSolver(FixpointSweepSolver::new));
-        ReserveAnalysis viaAttractor = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        // the stored route solved by the naive sweeps against the default route (the implicit product)
+        Plan viaSweep = MissionPlanner.plan(m, PlanOptions.of(new Route.Stored(PolicyChoice.SAFEST,
+                FixpointSweepSolver::new)));
+        Plan viaAttractor = MissionPlanner.plan(m, PlanOptions.of(Route.Product.of(PolicyChoice.SAFEST)));
         assertThat(viaSweep.verdict()).isEqualTo(viaAttractor.verdict());
-        assertThat(viaSweep.highestGuaranteedReserveUnits()).isEqualTo(viaAttractor.highestGuaranteedReserveUnits());
+        assertThat(viaSweep.highestFloorUnits()).isEqualTo(viaAttractor.highestFloorUnits());
+        assertThat(viaSweep.lowestLevelUnits()).isEqualTo(viaAttractor.lowestLevelUnits());
     }
 
     /**
