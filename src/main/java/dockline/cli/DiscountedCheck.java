@@ -15,7 +15,7 @@ import dockline.solve.DiscountedAnalysis;
 import dockline.solve.DiscountedOptions;
 import dockline.solve.DiscountedPolicies;
 import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.MathContext;

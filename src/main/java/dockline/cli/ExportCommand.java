@@ -12,7 +12,7 @@ import dockline.solve.DiscountedAnalysis;
 import dockline.solve.DiscountedOptions;
 import dockline.solve.DiscountedPolicies;
 import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import dockline.solve.Verdict;

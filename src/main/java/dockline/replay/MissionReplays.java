@@ -7,7 +7,7 @@ import dockline.certify.ClosedLoop;
 import dockline.margin.FixpointMargins;
 import dockline.model.Charge;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import dockline.solve.ReserveSolver;

@@ -9,7 +9,7 @@ import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.solve.WinningRegion;
 import java.util.ArrayList;
 import java.util.HashSet;

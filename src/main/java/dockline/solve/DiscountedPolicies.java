@@ -1,5 +1,8 @@
 package dockline.solve;
 
+import dockline.policy.PolicyScore;
+import dockline.policy.PolicyEntry;
+import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.model.Mission;
 import dockline.model.Objective;

@@ -1,5 +1,7 @@
 package dockline.solve;
 
+import dockline.policy.PolicyEntry;
+import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;

@@ -1,5 +1,6 @@
 package dockline.solve;
 
+import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.EnergyScale;

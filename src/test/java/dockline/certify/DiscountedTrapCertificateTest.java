@@ -10,7 +10,7 @@ import dockline.solve.DiscountedAnalysis;
 import dockline.solve.DiscountedOptions;
 import dockline.solve.DiscountedPolicies;
 import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 

@@ -13,7 +13,7 @@ import dockline.margin.FixpointMargins;
 import dockline.margin.MinimumCredit;
 import dockline.model.EventKind;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.math.BigDecimal;
 import java.util.List;
 import org.junit.jupiter.api.Test;

@@ -1,5 +1,7 @@
 package dockline.solve;
 
+import dockline.policy.PolicyEntry;
+import dockline.policy.Policy;
 import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.Cell;

@@ -1,5 +1,6 @@
 package dockline.solve;
 
+import dockline.policy.Policy;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 

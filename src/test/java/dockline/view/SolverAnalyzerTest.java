@@ -54,7 +54,7 @@ class SolverAnalyzerTest {
             assertThat(shown).isEqualTo(expected == dockline.solve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
         }
         // every policy entry is found again, by exact look-up and among the cell's actions
-        for (dockline.solve.PolicyEntry e : a.policy().orElseThrow().entries()) {
+        for (dockline.policy.PolicyEntry e : a.policy().orElseThrow().entries()) {
             int ci = e.cell().index(w);
             assertThat(d.policyAction(ci, e.level(), e.budgetLeft(), e.progress())).contains(e.action());
             assertThat(d.policyActions(ci, e.budgetLeft(), e.progress())).contains(e.action());

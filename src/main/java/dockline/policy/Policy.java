@@ -1,4 +1,4 @@
-package dockline.solve;
+package dockline.policy;
 
 import dockline.arena.Action;
 import dockline.model.Cell;

@@ -1,4 +1,4 @@
-package dockline.solve;
+package dockline.policy;
 
 import dockline.model.Rational;
 import java.util.Objects;
