@@ -1,5 +1,6 @@
 package dockline.bench;
 
+import dockline.solve.game.ReserveSizeForecast;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;

@@ -11,7 +11,7 @@ import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.report.Caveats;
-import dockline.solve.ReserveOptions;
+import dockline.solve.reserve.ReserveOptions;
 import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;

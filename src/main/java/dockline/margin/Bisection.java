@@ -3,7 +3,7 @@ package dockline.margin;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.solve.ProductOptions;
-import dockline.solve.ReserveSolver;
+import dockline.solve.reserve.ReserveSolver;
 
 /**
  * The margins by bisection over the threshold solver (satisficing): each probe asks the solver

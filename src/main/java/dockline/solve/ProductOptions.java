@@ -1,5 +1,6 @@
 package dockline.solve;
 
+import dockline.solve.game.ProductGame;
 import java.util.function.BooleanSupplier;
 
 /**

@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.fixtures.ReplayChecks;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
-import dockline.solve.ReserveOptions;
+import dockline.solve.reserve.ReserveOptions;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

@@ -27,7 +27,7 @@ import java.util.List;
  * best lowest-level-along-the-play the robot can force (with floor 0), or -1. For each threshold f
  * this is the reachability game above, so the same depth bound holds.
  */
-final class BruteForceMinimax {
+public final class BruteForceMinimax {
 
     private final Mission mission;
     private final Arena arena;
@@ -37,7 +37,7 @@ final class BruteForceMinimax {
     private final int tasks;
     private final int masks;
 
-    BruteForceMinimax(Mission mission) {
+    public BruteForceMinimax(Mission mission) {
         this.mission = mission;
         this.arena = ArenaCompiler.compile(mission);
         this.cap = mission.capacityUnits();
@@ -80,7 +80,7 @@ final class BruteForceMinimax {
     }
 
     /** Whether the robot can guarantee the mission with the given floor from the mission's start. */
-    boolean wins(int floor) {
+    public boolean wins(int floor) {
         int start = mission.startUnits();
         if (start < floor) {
             return false;
@@ -138,7 +138,7 @@ final class BruteForceMinimax {
     }
 
     /** The highest floor that can be guaranteed from the start (the max-min lowest level), or -1. */
-    int highestFloor() {
+    public int highestFloor() {
         int start = mission.startUnits();
         int p0 = progress(0, mission.start());
         if (p0 < 0) {

@@ -13,7 +13,7 @@ import dockline.model.Mission;
  * reachability games (Grädel, Thomas, Wilke (eds.), 2002, "Automata, Logics, and Infinite Games",
  * ch. 2), computed in the slowest, most obviously correct way. For small instances only.
  */
-final class BruteForceReserve {
+public final class BruteForceReserve {
 
     private final Arena arena;
     private final GoalAutomaton goal;
@@ -23,7 +23,7 @@ final class BruteForceReserve {
     private final int gc;
     private final boolean[] win;
 
-    BruteForceReserve(Arena arena, GoalAutomaton goal) {
+    public BruteForceReserve(Arena arena, GoalAutomaton goal) {
         this.arena = arena;
         this.goal = goal;
         Mission m = arena.mission();
@@ -81,12 +81,12 @@ final class BruteForceReserve {
     }
 
     /** Whether the robot wins from robot vertex v in goal state g with battery level l. */
-    boolean winsAt(int v, int g, int level) {
+    public boolean winsAt(int v, int g, int level) {
         return level >= floor && level <= cap && win[index(v, g, level)];
     }
 
     /** The start verdict. */
-    boolean guaranteed() {
+    public boolean guaranteed() {
         Mission m = arena.mission();
         int s = arena.startVertex();
         int g0 = goal.initial(arena.cellZones(arena.cell(s)));
@@ -94,11 +94,11 @@ final class BruteForceReserve {
         return g0 != GoalAutomaton.REJECT && l0 >= floor && l0 <= cap && win[index(s, g0, l0)];
     }
 
-    int floor() {
+    public int floor() {
         return floor;
     }
 
-    int cap() {
+    public int cap() {
         return cap;
     }
 }

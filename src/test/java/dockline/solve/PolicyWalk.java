@@ -20,9 +20,9 @@ import java.util.Set;
  * not cover, a level below the floor, an avoided zone, or a cycle (a play that never completes).
  * Reports the lowest level over all plays and the situations met.
  */
-final class PolicyWalk {
+public final class PolicyWalk {
 
-    record Result(int lowestLevel, Set<String> situations) {
+    public record Result(int lowestLevel, Set<String> situations) {
     }
 
     private final Mission mission;
@@ -33,7 +33,7 @@ final class PolicyWalk {
     private final Map<String, Integer> done = new HashMap<>();
     private final Set<String> onPath = new HashSet<>();
 
-    PolicyWalk(Mission mission, Arena arena, Policy policy) {
+    public PolicyWalk(Mission mission, Arena arena, Policy policy) {
         this.mission = mission;
         this.arena = arena;
         this.policy = policy;
@@ -41,7 +41,7 @@ final class PolicyWalk {
         this.cap = mission.capacityUnits();
     }
 
-    Result run() {
+    public Result run() {
         Cell s = mission.start();
         int p = progress(0, s);
         int level = mission.startUnits();
@@ -123,7 +123,7 @@ final class PolicyWalk {
     }
 
     /** The situation key of a policy entry, as {@link #visit} writes it. */
-    static String key(PolicyEntry e) {
+    public static String key(PolicyEntry e) {
         return e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress();
     }
 }

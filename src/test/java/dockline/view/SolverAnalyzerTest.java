@@ -35,7 +35,7 @@ class SolverAnalyzerTest {
         SolverAnalyzer.SolvedData d = (SolverAnalyzer.SolvedData) new SolverAnalyzer().analyze(m, () -> false);
         var a = d.analysis();
         // the heat map the solver gives on its own (ReserveSolver with the heat map switched on)
-        var heat = dockline.solve.ReserveSolver.analyse(m, dockline.solve.ReserveOptions.defaults().withChargeNeeded(true))
+        var heat = dockline.solve.reserve.ReserveSolver.analyse(m, dockline.solve.reserve.ReserveOptions.defaults().withChargeNeeded(true))
                 .chargeNeeded().orElseThrow();
         assertThat(d.verdict().outcome() == Verdict.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
         assertThat(d.verdict().worstCaseMinimumUnits()).isEqualTo(a.worstCaseMinimumUnits());
@@ -51,7 +51,7 @@ class SolverAnalyzerTest {
         for (int c = 0; c < m.map().cellCount(); c++) {
             int expected = heat.unitsNeeded(c, k, 0);
             int shown = d.chargeNeeded(c, k, 0);
-            assertThat(shown).isEqualTo(expected == dockline.solve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
+            assertThat(shown).isEqualTo(expected == dockline.solve.reserve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
         }
         // every policy entry is found again, by exact look-up and among the cell's actions
         for (dockline.policy.PolicyEntry e : a.policy().orElseThrow().entries()) {

@@ -1,0 +1,100 @@
+package dockline.solve.reserve;
+
+import dockline.solve.game.GameSolver;
+import dockline.solve.game.Solution;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.CompactAttractorSolver;
+import dockline.solve.game.ProductGame;
+import dockline.solve.ProductOptions;
+import java.util.function.BooleanSupplier;
+
+/**
+ * What {@link ReserveSolver#analyse} computes besides the verdict, and with which limits.
+ *
+ * @param product         how each product game is built (memory budget, index, cancellation flag)
+ * @param solver          the game solver; {@code CompactAttractorSolver::new} (same winning set and ranks
+ *                        as the reference {@link AttractorSolver}, 1.4-2 times faster; see DEVELOPERS.md,
+ *                        "Benchmark figures") unless a test swaps it
+ * @param highestReserve  also search for the highest reserve floor that can be guaranteed
+ * @param chargeNeeded    also compute the heat map ({@link ChargeNeeded}); needs the product over all levels
+ * @param safestPolicy    export the policy that keeps the battery at or above the highest guaranteed floor
+ *                        (it may take more moves, e.g. to top up on a dock) instead of the one that
+ *                        finishes in the fewest moves at the mission's floor; costs one more solve
+ * @param route           how the verdict, policy and worst case are computed ({@link Route#IMPLICIT} by default)
+ */
+public record ReserveOptions(ProductOptions product, GameSolver.Factory solver, boolean highestReserve,
+                             boolean chargeNeeded, boolean safestPolicy, Route route) {
+
+    /** Where the game of the verdict and policy lives. */
+    public enum Route {
+        /**
+         * The product stored in CSR arrays ({@link ProductGame}), solved by {@link #solver()}: the
+         * reference route, kept for cross-checks and the benchmark; its policy finishes in the fewest
+         * moves in the worst case.
+         */
+        PRODUCT,
+        /**
+         * The default: {@link ImplicitReserveGame}, the same game with its edges generated on demand and
+         * nothing stored but half a byte of counter per vertex and the robot's choice per robot vertex
+         * (first-in first-out attractor, so its policy also finishes in the fewest moves in the worst
+         * case; among equally short choices it may pick another than the stored route, so worst levels
+         * can differ by a few units). The analysis then carries no {@link ProductGame} and no
+         * {@link Solution} ({@code game()} and {@code solution()} are null).
+         */
+        IMPLICIT
+    }
+
+    public ReserveOptions {
+        if (product == null) {
+            product = ProductOptions.defaults();
+        }
+        if (solver == null) {
+            solver = CompactAttractorSolver::new;
+        }
+        if (route == null) {
+            route = Route.IMPLICIT;
+        }
+    }
+
+    public ReserveOptions(ProductOptions product, GameSolver.Factory solver, boolean highestReserve,
+                          boolean chargeNeeded, boolean safestPolicy) {
+        this(product, solver, highestReserve, chargeNeeded, safestPolicy, Route.IMPLICIT);
+    }
+
+    public ReserveOptions withRoute(Route r) {
+        return new ReserveOptions(product, solver, highestReserve, chargeNeeded, safestPolicy, r);
+    }
+
+    /** Verdict, policy, worst case and highest guaranteed reserve; no heat map; default memory budget. */
+    public static ReserveOptions defaults() {
+        return new ReserveOptions(ProductOptions.defaults(), CompactAttractorSolver::new, true, false, false);
+    }
+
+    public ReserveOptions withMemoryBudget(long bytes) {
+        return new ReserveOptions(product.withMemoryBudget(bytes), solver, highestReserve, chargeNeeded, safestPolicy, route);
+    }
+
+    public ReserveOptions withCancelled(BooleanSupplier flag) {
+        return new ReserveOptions(product.withCancelled(flag), solver, highestReserve, chargeNeeded, safestPolicy, route);
+    }
+
+    public ReserveOptions withSolver(GameSolver.Factory factory) {
+        return new ReserveOptions(product, factory, highestReserve, chargeNeeded, safestPolicy, route);
+    }
+
+    public ReserveOptions withIndex(ProductOptions.IndexKind kind) {
+        return new ReserveOptions(product.withIndex(kind), solver, highestReserve, chargeNeeded, safestPolicy, route);
+    }
+
+    public ReserveOptions withHighestReserve(boolean on) {
+        return new ReserveOptions(product, solver, on, chargeNeeded, safestPolicy, route);
+    }
+
+    public ReserveOptions withSafestPolicy(boolean on) {
+        return new ReserveOptions(product, solver, highestReserve, chargeNeeded, on, route);
+    }
+
+    public ReserveOptions withChargeNeeded(boolean on) {
+        return new ReserveOptions(product, solver, highestReserve, on, safestPolicy, route);
+    }
+}
