@@ -18,6 +18,9 @@ import java.util.Arrays;
  *
  * <p>Memory: at most {@value #MEMO_MAX_ENTRIES} ints per direction (16 MB); a state or weight past
  * the memo's reach is stepped directly. Not thread-safe, like the comparator.
+ *
+ * <p>Source: the comparator automaton for discounted sums (published work on comparator automata,
+ * 2018); memoisation, O(1) per memoised step.
  */
 final class ComparatorSteps {
 

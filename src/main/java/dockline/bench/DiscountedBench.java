@@ -1,6 +1,5 @@
 package dockline.bench;
 
-import dockline.solve.discounted.DiscountedValueIteration;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.model.BuildingMap;
@@ -17,6 +16,7 @@ import dockline.model.Relation;
 import dockline.model.RobotProfile;
 import dockline.model.Tasks;
 import dockline.model.Terrain;
+import dockline.solve.discounted.DiscountedValueIteration;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -35,6 +35,9 @@ import java.util.Random;
  * cell in ten a wall, docks in two opposite corners, the start beside one of them, doors that may
  * shut along a middle row and a disturbance budget of 1; generated from a fixed seed per size, so
  * every run measures the same arenas.
+ *
+ * <p>No algorithm of its own: a timing harness, one run of each route per instance (the routes'
+ * class comments name their algorithms and sources).
  */
 public final class DiscountedBench {
 

@@ -1,13 +1,13 @@
 package dockline.bench;
 
-import dockline.solve.game.AttractorSolver;
-import dockline.solve.game.ProductGame;
-import dockline.solve.discounted.DiscountedSolver;
-import dockline.solve.discounted.DiscountedValueIteration;
 import dockline.arena.Arena;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
 import dockline.monitor.Monitor;
+import dockline.solve.discounted.DiscountedSolver;
+import dockline.solve.discounted.DiscountedValueIteration;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.ProductGame;
 import dockline.util.LongIntMap;
 import java.util.Arrays;
 

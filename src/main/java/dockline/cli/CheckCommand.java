@@ -20,10 +20,10 @@ import java.math.RoundingMode;
 import java.util.List;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /**
  * {@code dockline check MISSION}: decides whether the robot can always complete the mission

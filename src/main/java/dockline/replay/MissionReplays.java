@@ -8,10 +8,10 @@ import dockline.margin.FixpointMargins;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.policy.Policy;
+import dockline.solve.WinningRegion;
 import dockline.solve.reserve.ReserveAnalysis;
 import dockline.solve.reserve.ReserveOptions;
 import dockline.solve.reserve.ReserveSolver;
-import dockline.solve.WinningRegion;
 import java.util.List;
 import java.util.Optional;
 

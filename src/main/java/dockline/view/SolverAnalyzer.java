@@ -1,19 +1,19 @@
 package dockline.view;
 
 import dockline.arena.Action;
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
-import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import dockline.replay.ForcedEventException;
 import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
-import dockline.solve.reserve.ChargeNeeded;
-import dockline.policy.Policy;
-import dockline.policy.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
+import dockline.solve.reserve.ChargeNeeded;
 import dockline.solve.reserve.ReserveAnalysis;
 import dockline.solve.reserve.ReserveOptions;
 import java.util.ArrayList;

@@ -1,8 +1,5 @@
 package dockline.bench;
 
-import dockline.solve.RandomArenas;
-import dockline.solve.TinyProductGame;
-import dockline.solve.discounted.DiscountedValueIteration;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -10,6 +7,9 @@ import dockline.arena.RandomGameArenas;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
+import dockline.solve.RandomArenas;
+import dockline.solve.TinyProductGame;
+import dockline.solve.discounted.DiscountedValueIteration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;

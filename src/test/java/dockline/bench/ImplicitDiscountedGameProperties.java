@@ -1,6 +1,5 @@
 package dockline.bench;
 
-import dockline.solve.discounted.DiscountedValueIteration;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -10,6 +9,7 @@ import dockline.arena.RandomGameArenas;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
+import dockline.solve.discounted.DiscountedValueIteration;
 import java.util.Random;
 import net.jqwik.api.Assume;
 import net.jqwik.api.Example;

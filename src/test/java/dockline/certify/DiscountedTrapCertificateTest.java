@@ -6,11 +6,11 @@ import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
+import dockline.policy.Policy;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.solve.discounted.DiscountedOptions;
 import dockline.solve.discounted.DiscountedPolicies;
 import dockline.solve.discounted.DiscountedSolver;
-import dockline.policy.Policy;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 

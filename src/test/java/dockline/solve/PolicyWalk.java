@@ -1,11 +1,11 @@
 package dockline.solve;
 
-import dockline.policy.PolicyEntry;
-import dockline.policy.Policy;
 import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.Cell;
 import dockline.model.Mission;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;

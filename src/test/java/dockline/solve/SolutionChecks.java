@@ -1,8 +1,5 @@
 package dockline.solve;
 
-import dockline.solve.game.GameGraph;
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.fail;
 
@@ -11,6 +8,9 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 
 /**
  * Invariant checks run after every solver test (the "validation listener" habit): whatever the

@@ -1,13 +1,13 @@
 package dockline.solve.discounted;
 
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.Verdict;
-import dockline.solve.SizeEstimate;
 import dockline.arena.Action;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
+import dockline.solve.SizeEstimate;
+import dockline.solve.Verdict;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import java.util.List;
 import java.util.Optional;
 

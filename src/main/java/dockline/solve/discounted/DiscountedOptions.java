@@ -1,8 +1,8 @@
 package dockline.solve.discounted;
 
-import dockline.solve.game.GameSolver;
-import dockline.solve.game.AttractorSolver;
 import dockline.solve.ProductOptions;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.GameSolver;
 import java.util.function.BooleanSupplier;
 
 /**

@@ -1,21 +1,21 @@
 package dockline.solve.discounted;
 
-import dockline.solve.game.GameGraph;
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.policy.PolicyScore;
-import dockline.policy.PolicyEntry;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
-import dockline.util.LongIntMap;
 import dockline.monitor.Monitor;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.policy.PolicyScore;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
+import dockline.util.LongIntMap;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -41,6 +41,9 @@ import java.util.Set;
  * per edge. Two product vertices with the same row key can only be the start and a vertex with
  * the same gap as {@code -v/d}; they have the same successors, hence the same attractor rank, so
  * one never lies in the other's closed loop — checked, and an {@link IllegalStateException} if not.
+ *
+ * <p>Source: attractor strategies lower the rank at every robot step (Grädel, Thomas, Wilke 2002,
+ * "Automata, Logics, and Infinite Games", ch. 2), which is why the walk ends.
  */
 public final class DiscountedPolicies {
 

@@ -1,9 +1,5 @@
 package dockline.solve.discounted;
 
-import dockline.solve.game.GameGraph;
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.Verdict;
 import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
@@ -15,6 +11,10 @@ import dockline.monitor.DiscountedComparator;
 import dockline.monitor.Monitor;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.Verdict;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;

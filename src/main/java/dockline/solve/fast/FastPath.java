@@ -1,12 +1,12 @@
 package dockline.solve.fast;
 
-import dockline.solve.Verdict;
-import dockline.policy.PolicyEntry;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.Verdict;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;

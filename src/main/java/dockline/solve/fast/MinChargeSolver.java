@@ -1,10 +1,10 @@
 package dockline.solve.fast;
 
-import dockline.solve.game.GoalPredecessors;
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
+import dockline.solve.game.GoalPredecessors;
 import java.util.Arrays;
 
 /**

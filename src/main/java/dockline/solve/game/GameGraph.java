@@ -15,6 +15,10 @@ import java.util.Arrays;
  *
  * <p>Immutable after construction. Package-private fields let the solvers' hot loops run on the
  * arrays directly.
+ *
+ * <p>Data structure: compressed-sparse-row adjacency arrays, the reverse built by a counting sort
+ * (common practice; counting sort as in Cormen, Leiserson, Rivest and Stein, "Introduction to
+ * Algorithms", 3rd ed. 2009, section 8.2, from memory).
  */
 public final class GameGraph {
 

@@ -1,6 +1,5 @@
 package dockline.solve.game;
 
-import dockline.solve.reserve.ReserveOptions;
 import java.util.function.BooleanSupplier;
 
 /**
@@ -8,10 +7,13 @@ import java.util.function.BooleanSupplier;
  * target, the attractor rank of each, and a strategy that strictly decreases the rank.
  *
  * <p>Implementations are built with the graph (and a cancellation flag) and answer one query,
- * {@link #solve()}. Three exist: {@link CompactAttractorSolver} (linear time, the default of
- * {@link ReserveOptions}), {@link AttractorSolver} (linear time, the reference implementation the
- * tests compare with) and {@link FixpointSweepSolver} (naive, for cross-checks in tests). All give
+ * {@link #solve()}. Two exist here: {@link CompactAttractorSolver} (linear time, the default of
+ * the stored reserve route), {@link AttractorSolver} (linear time, the reference implementation the
+ * tests compare with); the tests add a naive fixpoint sweep for cross-checks. All give
  * the same winning sets and ranks; chosen edges may differ, and each strictly decreases the rank.
+ *
+ * <p>Algorithm: the attractor of a reachability game (Grädel, Thomas, Wilke 2002, "Automata, Logics,
+ * and Infinite Games", ch. 2), O(|V| + |E|) in both implementations.
  */
 public interface GameSolver {
 

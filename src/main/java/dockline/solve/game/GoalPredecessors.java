@@ -14,6 +14,9 @@ import java.util.Map;
  *
  * <p>Built in O(F + Z·G) for F free cells, Z distinct zone masks and G goal states; each query is
  * O(1) plus the answer, read from int arrays (no allocation).
+ *
+ * <p>Algorithm: the inverse of a deterministic transition function, tabulated per zone mask
+ * (common practice).
  */
 public final class GoalPredecessors {
 

@@ -1,15 +1,15 @@
 package dockline.solve.game;
 
-import dockline.solve.SizeEstimate;
-import dockline.solve.ProductOptions;
-import dockline.solve.ProductTooLargeException;
-import dockline.policy.PolicyEntry;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -44,6 +44,10 @@ import java.util.function.IntUnaryOperator;
  * edge), plus a counting sort for the reverse CSR. The size is estimated before building
  * ({@link #estimate}) and the build is refused when the estimate, or the part built so far, is over
  * the memory budget ({@link ProductTooLargeException}).
+ *
+ * <p>Source: the product of a game arena with deterministic automata that reduces an automaton
+ * objective to reachability (Grädel, Thomas, Wilke 2002, "Automata, Logics, and Infinite Games",
+ * ch. 2); the monitor is a comparator automaton (published work on comparator automata, 2018).
  */
 public final class ProductGame {
 

@@ -1,14 +1,14 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.GameSolver;
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.ProductOptions;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.model.EnergyScale;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.ProductOptions;
+import dockline.solve.game.GameSolver;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import java.util.Arrays;
 
 /**
@@ -24,6 +24,10 @@ import java.util.Arrays;
  * <p>Positions are read as "the robot occupies this cell with this progress": the progress is first
  * updated with the cell's own zones (as the product does on arrival). A position in an avoided zone
  * is {@link #IMPOSSIBLE}; a position that already completes the mission needs only the floor.
+ *
+ * <p>Algorithm: one attractor over every triple (Grädel, Thomas, Wilke 2002, "Automata, Logics, and
+ * Infinite Games", ch. 2), then a minimum per position; the least winning level is the minimum
+ * initial credit of energy games (Brim, Chaloupka, Doyen, Gentilini and Raskin 2011).
  */
 public final class ChargeNeeded {
 

@@ -1,16 +1,16 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.AttractorSolver;
-import dockline.solve.game.ProductGame;
-import dockline.solve.game.GoalPredecessors;
-import dockline.solve.SizeEstimate;
-import dockline.solve.ProductTooLargeException;
-import dockline.policy.PolicyEntry;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.GoalPredecessors;
+import dockline.solve.game.ProductGame;
 import dockline.util.LongIntMap;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -49,8 +49,8 @@ import java.util.function.BooleanSupplier;
  * <p>The inversion of the battery update {@code s' = min(L − 1, s + w)}, below the floor rejected:
  * for {@code s' < L − 1} the only predecessor state is {@code s = s' − w} (when in range); for
  * {@code s' = L − 1} (full) they are all {@code s ≥ L − 1 − w} when {@code w ≥ 0}, and none when
- * {@code w < 0}. Sources: the attractor as in {@link AttractorSolver}; product construction as in
- * DESIGN.md 2.4.
+ * {@code w < 0}. Sources: the attractor of Grädel, Thomas and Wilke (2002, "Automata, Logics, and
+ * Infinite Games", ch. 2), as in {@link AttractorSolver}; the product as {@link ProductGame} builds it.
  */
 public final class ImplicitReserveGame {
 

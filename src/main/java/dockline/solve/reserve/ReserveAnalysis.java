@@ -1,15 +1,15 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.Verdict;
-import dockline.solve.WinningRegion;
-import dockline.solve.SizeEstimate;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
+import dockline.policy.Policy;
+import dockline.solve.SizeEstimate;
+import dockline.solve.Verdict;
+import dockline.solve.WinningRegion;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;

@@ -1,11 +1,11 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.GameSolver;
-import dockline.solve.game.Solution;
+import dockline.solve.ProductOptions;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.CompactAttractorSolver;
+import dockline.solve.game.GameSolver;
 import dockline.solve.game.ProductGame;
-import dockline.solve.ProductOptions;
+import dockline.solve.game.Solution;
 import java.util.function.BooleanSupplier;
 
 /**

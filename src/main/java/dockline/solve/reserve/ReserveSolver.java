@@ -1,21 +1,21 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.GameGraph;
-import dockline.solve.game.GameSolver;
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.game.ReserveSizeForecast;
-import dockline.solve.Verdict;
-import dockline.solve.WinningRegion;
-import dockline.solve.SizeEstimate;
-import dockline.solve.ProductOptions;
-import dockline.solve.ProductTooLargeException;
-import dockline.policy.Policy;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
+import dockline.solve.Verdict;
+import dockline.solve.WinningRegion;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.ReserveSizeForecast;
+import dockline.solve.game.Solution;
+import dockline.util.MonotoneSearch;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -35,6 +35,11 @@ import java.util.OptionalInt;
  * because winning is monotone in the floor). The stored route ({@link ReserveOptions.Route#PRODUCT},
  * {@link ProductGame} in CSR arrays) is the reference: there the highest floor is a max-min fixpoint
  * over one more product, computed as an incremental attractor while the floor falls.
+ *
+ * <p>Sources: the attractor of Grädel, Thomas, Wilke (2002, "Automata, Logics, and Infinite Games",
+ * ch. 2); the threshold question decided by a comparator automaton on the weights (published work on
+ * comparator automata, 2018). Cost: O(|V| + |E|) of the product per solve; the highest floor takes
+ * O(log capacity) solves on the default route.
  */
 public final class ReserveSolver {
 
@@ -143,16 +148,8 @@ public final class ReserveSolver {
         boolean searched = false;
         if (options.highestReserve() || options.safestPolicy()) {
             try {
-                int lo = won ? worst.getAsInt() : -1;
-                int hi = won ? start : Math.min(start, reserve - 1);
-                while (lo < hi) {
-                    int mid = (lo + hi + 1) >>> 1;
-                    if (implicitGame(arena, goal, monitor.withFloor(mid), po).solve(true, po.cancelled()).startWon()) {
-                        lo = mid;
-                    } else {
-                        hi = mid - 1;
-                    }
-                }
+                int lo = MonotoneSearch.highest(won ? worst.getAsInt() : -1, won ? start : Math.min(start, reserve - 1),
+                        f -> implicitGame(arena, goal, monitor.withFloor(f), po).solve(true, po.cancelled()).startWon());
                 highest = lo >= 0 ? OptionalInt.of(lo) : OptionalInt.empty();
                 searched = true;
             } catch (ProductTooLargeException e) {
@@ -267,12 +264,6 @@ public final class ReserveSolver {
                 game.slotCount(), r.stoppedEarly(), (System.nanoTime() - t0) / 1_000_000L);
     }
 
-    private static boolean wins(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, ProductOptions options,
-                                GameSolver.Factory solver) {
-        ProductGame game = ProductGame.fromStart(arena, goal, monitor, options);
-        return solver.create(game.graph(), options.cancelled()).solve().winning(game.start());
-    }
-
     /**
      * The lowest battery level along any play of the closed loop of the solution from the start
      * (robot follows its chosen edges, disturbance plays every outcome), the level on arrival at
@@ -371,7 +362,7 @@ public final class ReserveSolver {
      * successors is zero). The answer is the first f at which the start joins.
      *
      * <p>O(|V| + |E| + start) for the product at f0. Checked in tests against
-     * {@link #highestFloorByBisection} and an independent brute force.
+     * a bisection over stored products and an independent brute force.
      */
     static int highestFloorByThresholds(Arena arena, GoalAutomaton goal, ReserveMonitor base, ProductOptions options) {
         ProductGame game = ProductGame.fromStart(arena, goal, base, options);
@@ -492,29 +483,6 @@ public final class ReserveSolver {
             }
         }
         return -1;
-    }
-
-    /**
-     * The highest floor f in 0..start such that the robot wins with floor f, or -1 if none, by
-     * bisection with one product and one attractor per probe; kept as a cross-check.
-     * Winning is monotone (a strategy that keeps the level at or above f keeps it at or above any
-     * lower floor), so bisection is exact. {@code knownTrue} is a floor already known to win, or -1;
-     * the search runs over [knownTrue, start] when knownTrue &ge; 0, else over
-     * [-1, min(below, start)] where {@code below} is the highest floor not yet known to lose.
-     */
-    static int highestFloorByBisection(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, int knownTrue,
-                                    int below, ReserveOptions options) {
-        int lo = knownTrue; // wins at lo (or lo == -1: nothing known)
-        int hi = knownTrue >= 0 ? monitor.startUnits() : Math.min(below, monitor.startUnits());
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (wins(arena, goal, monitor.withFloor(mid), options.product(), options.solver())) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
     }
 
     private static long millis(long nanos) {

@@ -1,12 +1,12 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.Solution;
-import dockline.solve.game.ProductGame;
-import dockline.solve.WinningRegion;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.WinningRegion;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 
 /**
  * The robot's winning region as the threshold solver found it: a situation (robot vertex, progress,
@@ -14,6 +14,9 @@ import dockline.monitor.ReserveMonitor;
  * triple is in the solver's winning region. On the stored route a situation the product build did not
  * reach from the start counts as not winning (the counterexample only asks about reached ones); the
  * implicit route's region covers every triple. O(1) per question.
+ *
+ * <p>No algorithm of its own: a look-up in the solver's result (Grädel, Thomas, Wilke 2002, ch. 2,
+ * for the attractor that made it).
  */
 final class SolverRegion implements WinningRegion {
 

@@ -1,7 +1,5 @@
 package dockline.solve.discounted;
 
-import dockline.solve.RandomArenas;
-import dockline.solve.TinyProductGame;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -14,6 +12,8 @@ import dockline.model.Relation;
 import dockline.monitor.DiscountedComparator;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.RandomArenas;
+import dockline.solve.TinyProductGame;
 import java.util.Random;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;

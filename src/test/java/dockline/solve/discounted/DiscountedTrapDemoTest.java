@@ -1,6 +1,5 @@
 package dockline.solve.discounted;
 
-import dockline.solve.TinyProductGame;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.ActionKind;
@@ -14,6 +13,7 @@ import dockline.model.Rational;
 import dockline.monitor.DiscountedComparator;
 import dockline.monitor.PairMonitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.TinyProductGame;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 

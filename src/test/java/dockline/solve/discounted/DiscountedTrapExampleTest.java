@@ -1,6 +1,5 @@
 package dockline.solve.discounted;
 
-import dockline.solve.TinyProductGame;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -22,6 +21,7 @@ import dockline.model.Tasks;
 import dockline.model.Terrain;
 import dockline.model.Zone;
 import dockline.monitor.DiscountedComparator;
+import dockline.solve.TinyProductGame;
 import java.math.BigDecimal;
 import java.util.List;
 import java.util.Map;

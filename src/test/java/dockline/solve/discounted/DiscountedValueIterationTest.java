@@ -1,6 +1,5 @@
 package dockline.solve.discounted;
 
-import dockline.solve.RandomArenas;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -17,6 +16,7 @@ import dockline.model.Relation;
 import dockline.model.RobotProfile;
 import dockline.model.Tasks;
 import dockline.model.Terrain;
+import dockline.solve.RandomArenas;
 import java.math.BigDecimal;
 import java.util.List;
 import java.util.Map;

@@ -1,15 +1,15 @@
 package dockline.solve.fast;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.reserve.ReserveSolver;
-import dockline.solve.reserve.ReserveAnalysis;
-import dockline.solve.reserve.ReserveOptions;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.bench.TinyMissions;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.model.Mission;
+import dockline.solve.ProductOptions;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.util.Optional;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;

@@ -1,10 +1,5 @@
 package dockline.solve.fast;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.BruteForceReserve;
-import dockline.solve.game.AttractorSolver;
-import dockline.solve.game.ProductGame;
-import dockline.solve.reserve.ChargeNeeded;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -17,6 +12,11 @@ import dockline.bench.TinyMissions;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.BruteForceReserve;
+import dockline.solve.ProductOptions;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.ProductGame;
+import dockline.solve.reserve.ChargeNeeded;
 import java.math.BigDecimal;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;

@@ -1,7 +1,5 @@
 package dockline.solve.game;
 
-import dockline.solve.SizeEstimate;
-import dockline.solve.ProductOptions;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -15,6 +13,8 @@ import dockline.io.MissionLoader;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.ProductOptions;
+import dockline.solve.SizeEstimate;
 import java.math.BigDecimal;
 import java.nio.file.Path;
 import net.jqwik.api.Example;

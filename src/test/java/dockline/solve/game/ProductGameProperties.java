@@ -1,14 +1,5 @@
 package dockline.solve.game;
 
-import dockline.solve.SizeEstimate;
-import dockline.solve.ProductOptions;
-import dockline.solve.ProductTooLargeException;
-import dockline.solve.MissionFixture;
-import dockline.solve.RandomMissions;
-import dockline.solve.SolutionChecks;
-import dockline.solve.reserve.ReserveSolver;
-import dockline.solve.reserve.ReserveAnalysis;
-import dockline.solve.reserve.ReserveOptions;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -19,6 +10,15 @@ import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.MissionFixture;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.RandomMissions;
+import dockline.solve.SizeEstimate;
+import dockline.solve.SolutionChecks;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.util.concurrent.CancellationException;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;

@@ -1,6 +1,5 @@
 package dockline.solve.game;
 
-import dockline.solve.ProductOptions;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -13,6 +12,7 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.ProductOptions;
 import java.math.BigDecimal;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;

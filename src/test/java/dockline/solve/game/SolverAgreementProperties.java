@@ -1,12 +1,5 @@
 package dockline.solve.game;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.RandomMissions;
-import dockline.solve.SolutionChecks;
-import dockline.solve.reserve.ReserveSolver;
-import dockline.solve.reserve.ReserveAnalysis;
-import dockline.solve.reserve.ReserveOptions;
-import dockline.policy.Policy;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -14,6 +7,13 @@ import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.solve.ProductOptions;
+import dockline.solve.RandomMissions;
+import dockline.solve.SolutionChecks;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.util.List;
 import java.util.Random;
 import java.util.concurrent.CancellationException;

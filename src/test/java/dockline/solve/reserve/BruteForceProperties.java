@@ -1,19 +1,19 @@
 package dockline.solve.reserve;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.BruteForceMinimax;
-import dockline.solve.PolicyWalk;
-import dockline.solve.RandomMissions;
-import dockline.solve.SolutionChecks;
-import dockline.solve.game.Solution;
-import dockline.solve.game.AttractorSolver;
-import dockline.solve.game.ProductGame;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.BruteForceMinimax;
+import dockline.solve.PolicyWalk;
+import dockline.solve.ProductOptions;
+import dockline.solve.RandomMissions;
+import dockline.solve.SolutionChecks;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 

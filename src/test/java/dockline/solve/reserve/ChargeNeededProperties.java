@@ -1,14 +1,14 @@
 package dockline.solve.reserve;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.BruteForceMinimax;
-import dockline.solve.RandomMissions;
-import dockline.solve.game.AttractorSolver;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Cell;
 import dockline.model.Charge;
 import dockline.model.Mission;
+import dockline.solve.BruteForceMinimax;
+import dockline.solve.ProductOptions;
+import dockline.solve.RandomMissions;
+import dockline.solve.game.AttractorSolver;
 import java.math.BigDecimal;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;

@@ -1,12 +1,12 @@
 package dockline.solve.reserve;
 
-import dockline.solve.PolicyWalk;
-import dockline.solve.SolutionChecks;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.PolicyWalk;
+import dockline.solve.SolutionChecks;
 import java.nio.file.Path;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;

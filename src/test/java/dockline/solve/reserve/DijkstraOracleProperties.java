@@ -1,10 +1,10 @@
 package dockline.solve.reserve;
 
-import dockline.solve.MissionFixture;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Cell;
 import dockline.model.Mission;
+import dockline.solve.MissionFixture;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;

@@ -1,7 +1,5 @@
 package dockline.solve.reserve;
 
-import dockline.solve.WinningRegion;
-import dockline.solve.BruteForceReserve;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -12,6 +10,8 @@ import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
+import dockline.solve.BruteForceReserve;
+import dockline.solve.WinningRegion;
 import java.nio.file.Path;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;

@@ -1,6 +1,5 @@
 package dockline.solve.reserve;
 
-import dockline.solve.ProductTooLargeException;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -10,6 +9,7 @@ import dockline.goal.GoalAutomaton;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.ProductTooLargeException;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 

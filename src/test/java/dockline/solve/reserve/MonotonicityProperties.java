@@ -1,11 +1,11 @@
 package dockline.solve.reserve;
 
-import dockline.solve.ProductOptions;
-import dockline.solve.RandomMissions;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Charge;
 import dockline.model.Mission;
+import dockline.solve.ProductOptions;
+import dockline.solve.RandomMissions;
 import java.math.BigDecimal;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;

@@ -1,12 +1,5 @@
 package dockline.solve.reserve;
 
-import dockline.solve.game.ProductGame;
-import dockline.solve.game.Solution;
-import dockline.solve.game.AttractorSolver;
-import dockline.solve.game.CompactAttractorSolver;
-import dockline.solve.game.GameGraph;
-import dockline.solve.ProductOptions;
-import dockline.solve.BruteForceReserve;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
@@ -15,6 +8,13 @@ import dockline.bench.TinyMissions;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.BruteForceReserve;
+import dockline.solve.ProductOptions;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.CompactAttractorSolver;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 

@@ -1,6 +1,5 @@
 package dockline.solve.reserve;
 
-import dockline.solve.RandomMissions;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.BuildingMap;
@@ -8,6 +7,7 @@ import dockline.model.Cell;
 import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.model.Zone;
+import dockline.solve.RandomMissions;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.UnaryOperator;
