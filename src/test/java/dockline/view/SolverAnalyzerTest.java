@@ -17,7 +17,7 @@ class SolverAnalyzerTest {
         // missions/README.md lists late-return as not guaranteed
         Mission m = MissionLoader.load(Path.of("missions/late-return.yaml"));
         ViewData d = new SolverAnalyzer().analyze(m, () -> false);
-        assertThat(d.verdict().outcome()).isEqualTo(Verdict.Outcome.NOT_GUARANTEED);
+        assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.NOT_GUARANTEED);
         ViewReplay ce = d.replays().get(0);
         assertThat(ce.kind()).isEqualTo(ViewReplay.Kind.COUNTEREXAMPLE);
         assertThat(ce.minimumUnits()).isLessThan(m.reserveUnits());
@@ -37,7 +37,7 @@ class SolverAnalyzerTest {
         // the heat map the solver gives on its own (ReserveSolver with the heat map switched on)
         var heat = dockline.solve.reserve.ReserveSolver.analyse(m, dockline.solve.reserve.ReserveOptions.defaults().withChargeNeeded(true))
                 .chargeNeeded().orElseThrow();
-        assertThat(d.verdict().outcome() == Verdict.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
+        assertThat(d.verdict().outcome() == VerdictSummary.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
         assertThat(d.verdict().worstCaseMinimumUnits()).isEqualTo(a.worstCaseMinimumUnits());
         assertThat(d.verdict().highestReserveUnits()).isEqualTo(a.highestGuaranteedReserveUnits());
         // the certified worst case is the first replay, and its lowest level is the solver's worst-case minimum

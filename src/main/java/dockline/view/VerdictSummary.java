@@ -14,7 +14,7 @@ import java.util.OptionalInt;
  *                              while it follows the policy; empty when not guaranteed or not known
  * @param highestReserveUnits   the highest reserve floor (units) that can be guaranteed; empty when none or not known
  */
-public record Verdict(Outcome outcome, String words, String certificate, OptionalInt worstCaseMinimumUnits,
+public record VerdictSummary(Outcome outcome, String words, String certificate, OptionalInt worstCaseMinimumUnits,
                       OptionalInt highestReserveUnits) {
 
     /** The three states a verdict can be in. */
@@ -35,7 +35,7 @@ public record Verdict(Outcome outcome, String words, String certificate, Optiona
         }
     }
 
-    public Verdict {
+    public VerdictSummary {
         Objects.requireNonNull(outcome, "outcome");
         Objects.requireNonNull(words, "words");
         Objects.requireNonNull(certificate, "certificate");
@@ -44,8 +44,8 @@ public record Verdict(Outcome outcome, String words, String certificate, Optiona
     }
 
     /** The verdict of a mission nobody solved yet. */
-    public static Verdict notChecked(String why) {
-        return new Verdict(Outcome.NOT_CHECKED, why, "no certificate", OptionalInt.empty(), OptionalInt.empty());
+    public static VerdictSummary notChecked(String why) {
+        return new VerdictSummary(Outcome.NOT_CHECKED, why, "no certificate", OptionalInt.empty(), OptionalInt.empty());
     }
 
     /** Heading and words on one line, e.g. {@code Guaranteed — the robot ...}. */

@@ -12,9 +12,9 @@ import java.util.Objects;
  * @param kind   the event
  * @param slipTo for a slip, the cell to slip to; {@code null} for "the only possible one" or other events
  */
-public record ForcedEvent(int step, EventKind kind, Cell slipTo) {
+public record ScenarioEvent(int step, EventKind kind, Cell slipTo) {
 
-    public ForcedEvent {
+    public ScenarioEvent {
         if (step < 1) {
             throw new IllegalArgumentException("a forced event needs a step of 1 or more");
         }
