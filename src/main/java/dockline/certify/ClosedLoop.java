@@ -17,7 +17,8 @@ import java.util.Optional;
  *
  * <p>Built by breadth-first search from the start, so the first problem found (a missing or illegal
  * policy entry, a level below the floor, an avoided zone) has a shortest trace. Complete situations
- * (all tasks done, on a dock when required) have no successors. Battery levels follow DESIGN.md 2.3:
+ * (all tasks done, on a dock when required) have no successors. Battery levels follow maps/README.md, "Game
+ * semantics":
  * {@code level' = min(capacity, level + delta)}; a successor below the floor is not a node.
  *
  * <p>Cost: O(N + E) time and memory plus one policy lookup per node, for N nodes and E edges of the

@@ -14,7 +14,8 @@ import java.util.List;
 
 /**
  * The minimum initial credit of the reserve objective, computed directly by a fixpoint over energy
- * levels (the optimisation baseline of DESIGN.md 2.4): for every vertex of arena × goal automaton
+ * levels (the optimisation baseline, kept as a cross-check of the threshold solver): for every vertex of arena
+ * × goal automaton
  * reachable from the start, {@code need(x)} is the least battery level with which the robot, standing
  * at x, can force mission completion while the level never drops below the floor.
  *

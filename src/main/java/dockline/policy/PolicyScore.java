@@ -5,7 +5,8 @@ import java.util.Objects;
 import java.util.regex.Pattern;
 
 /**
- * The score memory of one row of a policy for a discounted mission (DESIGN.md 2.4): the scaled gap
+ * The score memory of one row of a policy for a discounted mission (missions/README.md, "The discounted
+ * objective"): the scaled gap
  * between the robot's discounted score so far and the threshold, which is all the robot must
  * remember of its past energy changes to act on the threshold question.
  *

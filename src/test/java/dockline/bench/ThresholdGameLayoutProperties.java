@@ -71,7 +71,8 @@ class ThresholdGameLayoutProperties {
         Arena a = RandomGameArenas.arena(new Random(11), 4, 3);
         int w = a.maxAbsWeight();
         assertThat(w).isPositive();
-        // the bound mu is what makes the comparator's early verdicts sound (DESIGN.md 2.4), so a
+        // the bound mu is what makes the comparator's early verdicts sound (missions/README.md, "The
+        // discounted objective"), so a
         // weight above it must not be read, memoised or not
         assertThatThrownBy(() -> DiscountedThresholdGame.build(a, new DiscountedComparator(2, w - 1, Rational.of(0, 1),
                 Relation.AT_LEAST))).isInstanceOf(IllegalArgumentException.class);

@@ -13,7 +13,7 @@ import java.util.List;
  * ("what can the robot force within d of its moves"). It reads only the compiled arena's moves,
  * outcomes and weights and the mission's zone names; it shares no code with the product game, the
  * goal automaton, the monitors or the solvers (task progress and battery arithmetic are redone here
- * from DESIGN.md 2.3).
+ * from maps/README.md, "Game semantics").
  *
  * <p><b>Depth bound.</b> Reaching "mission complete" while staying at or above a floor is a
  * reachability game on the finite set S of states; such games are positionally determined, and a

@@ -6,7 +6,7 @@ import dockline.model.Mission;
 
 /**
  * Test oracle: the reserve game solved by brute force on the explicit product arena × goal ×
- * battery level, straight from the reference semantics of DESIGN.md 2.3 (level ← min(capacity,
+ * battery level, straight from the reference semantics of maps/README.md, "Game semantics" (level ← min(capacity,
  * level + delta), lost below the floor, lost in an avoided zone, won on completion), by naive
  * repetition of the one-step rule until nothing changes: a robot vertex wins if some action wins,
  * a disturbance vertex if every outcome wins. This is the textbook attractor characterisation of

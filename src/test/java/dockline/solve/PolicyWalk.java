@@ -16,7 +16,7 @@ import java.util.Set;
 /**
  * Runs an exported {@link Policy} against every disturbance choice, by depth-first search over
  * situations (cell, level, budget left, tasks done), with the battery and the task progress redone
- * here from DESIGN.md 2.3 (independent of the product game). Fails on a situation the policy does
+ * here from maps/README.md, "Game semantics" (independent of the product game). Fails on a situation the policy does
  * not cover, a level below the floor, an avoided zone, or a cycle (a play that never completes).
  * Reports the lowest level over all plays and the situations met.
  */

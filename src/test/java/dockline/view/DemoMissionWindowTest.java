@@ -157,7 +157,8 @@ class DemoMissionWindowTest {
         robot.clickOn("#check");
         Mission high = m.withReserve(dockline.model.Charge.percent(new java.math.BigDecimal("90")));
         waitUntil(() -> solvedWithReserve(high.reserveUnits()));
-        // a floor above the starting level loses at once (DESIGN.md 2.3: the start must be at or above the floor)
+        // a floor above the starting level loses at once (maps/README.md, "Game semantics": the start must be
+        // at or above the floor)
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
     }
 }

@@ -20,7 +20,8 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * The threshold solver for the discounted objective (DESIGN.md 2.4): arena x goal automaton x
+ * The threshold solver for the discounted objective (missions/README.md, "The discounted objective"): arena x
+ * goal automaton x
  * {@link DiscountedComparator} (and, by default, x {@link ReserveMonitor}, side by side in a
  * {@link PairMonitor}), solved as one reachability game by the linear-time attractor.
  *

@@ -6,7 +6,8 @@ import dockline.model.Relation;
 import java.util.Arrays;
 
 /**
- * The optimisation baseline for the discounted objective (DESIGN.md 2.4): value iteration for the
+ * The optimisation baseline for the discounted objective (missions/README.md, "The discounted objective"):
+ * value iteration for the
  * optimal discounted value of the arena game, then a comparison with the threshold. The robot
  * maximises and the disturbance minimises {@code DS = sum_i w_i / d^i} over infinite plays, where
  * {@code w_i} is the energy delta of the i-th step (an action and its outcome). The dock goal is

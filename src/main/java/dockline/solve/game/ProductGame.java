@@ -18,7 +18,7 @@ import java.util.function.BooleanSupplier;
 import java.util.function.IntUnaryOperator;
 
 /**
- * The product arena × goal automaton × monitor (DESIGN.md 2.4) as a reachability game: the robot
+ * The product arena × goal automaton × monitor (README.md, "How it decides") as a reachability game: the robot
  * wants to reach {@link #WIN} (mission complete, accepted by the monitor), the disturbance wants to
  * reach {@link #LOSE} or to keep the play away from {@code WIN} for ever. Generic over any
  * {@link Monitor}.

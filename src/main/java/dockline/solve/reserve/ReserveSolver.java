@@ -23,7 +23,7 @@ import java.util.OptionalInt;
 
 /**
  * The threshold solver for the reserve objective: arena × goal automaton × {@link ReserveMonitor},
- * solved as a reachability game by the linear-time attractor (DESIGN.md 2.4).
+ * solved as a reachability game by the linear-time attractor (README.md, "How it decides").
  *
  * <p>{@link #analyse} gives the verdict, the robot's policy (by default the attractor strategy at
  * the mission's floor, which finishes in the fewest moves in the worst case; with

@@ -21,7 +21,7 @@ import org.jgrapht.graph.SimpleDirectedWeightedGraph;
  * below the reserve" is guaranteed exactly when start − (least energy to a dock) ≥ reserve. The
  * least energy is computed by jgrapht's {@link DijkstraShortestPath} (Dijkstra 1959, "A note on two
  * problems in connexion with graphs") on the map graph: vertices are free cells, an edge to a
- * 4-neighbour weighs the units to enter it, ⌈Wh / unit⌉ (rounding up, DESIGN.md 2.2).
+ * 4-neighbour weighs the units to enter it, ⌈Wh / unit⌉ (rounding up, missions/README.md, "robot").
  */
 class DijkstraOracleProperties {
 
@@ -82,7 +82,8 @@ class DijkstraOracleProperties {
                 best = Math.min(best, dsp.getPathWeight(start, c));
             }
         }
-        // units: start rounds down, reserve rounds up (DESIGN.md 2.2); here both are whole multiples of 0.5 Wh
+        // units: start rounds down, reserve rounds up (missions/README.md, "robot"); here both are whole
+        // multiples of 0.5 Wh
         int startUnits = startWh * 2;
         int reserveUnits = reserveWh * 2;
         boolean expected = best != Double.POSITIVE_INFINITY && startUnits - best >= reserveUnits;

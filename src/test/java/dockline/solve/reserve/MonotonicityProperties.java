@@ -12,7 +12,7 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 
 /**
- * Monotonicity of the threshold question (DESIGN.md 2.4): a fuller battery stays at least as full
+ * Monotonicity of the threshold question (README.md, "How it decides"): a fuller battery stays at least as full
  * after any step (saturation included), a lower floor rejects fewer plays, and a smaller budget K
  * leaves the disturbance a subset of its plays. So none of these changes may turn "guaranteed" into
  * "not guaranteed".
