@@ -12,6 +12,7 @@ import dockline.solve.SizeEstimate;
 import dockline.solve.Verdict;
 import dockline.solve.WinningRegion;
 import dockline.solve.game.GameGraph;
+import dockline.solve.game.GameSolver;
 import dockline.solve.game.ProductGame;
 import dockline.solve.game.ReserveSizeForecast;
 import dockline.solve.game.Solution;
@@ -63,12 +64,13 @@ public final class ReserveSolver {
         int start = mission.startUnits();
         ReserveMonitor monitor = new ReserveMonitor(reserve, capacity, start);
         List<String> notes = new ArrayList<>();
-        if (options.route() == ReserveOptions.Route.IMPLICIT) {
+        if (!(options.route() instanceof ReserveOptions.Stored stored)) {
             return analyseImplicitly(mission, options, arena, goal, monitor, notes, t0);
         }
+        GameSolver.Factory solver = stored.solver();
 
         ProductGame game = ProductGame.fromStart(arena, goal, monitor, options.product());
-        Solution sol = options.solver().create(game.graph(), options.product().cancelled()).solve();
+        Solution sol = solver.create(game.graph(), options.product().cancelled()).solve();
         boolean won = sol.winning(game.start());
         Optional<Policy> policy = Optional.empty();
         OptionalInt worst = OptionalInt.empty();
@@ -80,7 +82,7 @@ public final class ReserveSolver {
 
         Optional<ChargeNeeded> heat = Optional.empty();
         if (options.chargeNeeded()) {
-            heat = Optional.of(ChargeNeeded.compute(arena, goal, monitor, options.product(), options.solver()));
+            heat = Optional.of(ChargeNeeded.compute(arena, goal, monitor, options.product(), solver));
         }
 
         OptionalInt highest = OptionalInt.empty();
@@ -104,7 +106,7 @@ public final class ReserveSolver {
             policyFloor = highest.getAsInt();
             ReserveMonitor safest = monitor.withFloor(policyFloor);
             policyGame = ProductGame.fromStart(arena, goal, safest, options.product());
-            policySolution = options.solver().create(policyGame.graph(), options.product().cancelled()).solve();
+            policySolution = solver.create(policyGame.graph(), options.product().cancelled()).solve();
             policy = Optional.of(policyGame.policy(policySolution, safest::level));
             worst = OptionalInt.of(worstCaseMinimum(policyGame, policySolution, safest));
         }

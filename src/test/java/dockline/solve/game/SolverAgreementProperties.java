@@ -98,8 +98,12 @@ class SolverAgreementProperties {
             assertThat(c.rank(v)).isEqualTo(ref.rank(v));
             assertThat(c.strategyEdge(v)).isEqualTo(ref.strategyEdge(v));
         }
-        ReserveAnalysis viaReference = ReserveSolver.analyse(m, ReserveOptions.defaults().withSolver(AttractorSolver::new));
-        ReserveAnalysis viaDefault = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        // two runs of the stored route that differ only in the solver (the implicit route runs none)
+        ReserveAnalysis viaReference = ReserveSolver.analyse(m,
+                ReserveOptions.defaults().withRoute(ReserveOptions.Route.stored(AttractorSolver::new)));
+        ReserveAnalysis viaDefault = ReserveSolver.analyse(m, ReserveOptions.defaults().withRoute(ReserveOptions.Route.PRODUCT));
+        assertThat(viaReference.storedProduct()).isTrue();
+        assertThat(viaDefault.storedProduct()).isTrue();
         assertThat(viaDefault.verdict()).isEqualTo(viaReference.verdict());
         assertThat(viaDefault.highestGuaranteedReserveUnits()).isEqualTo(viaReference.highestGuaranteedReserveUnits());
         assertThat(viaDefault.worstCaseMinimumUnits()).isEqualTo(viaReference.worstCaseMinimumUnits());
@@ -119,8 +123,12 @@ class SolverAgreementProperties {
         for (int v = 0; v < game.vertexCount(); v++) {
             assertThat(a.rank(v)).isEqualTo(b.rank(v));
         }
-        ReserveAnalysis viaSweep = ReserveSolver.analyse(m, ReserveOptions.defaults().withSolver(FixpointSweepSolver::new));
+        // the stored route solved by the naive sweep against the default route (implicit product, its own attractor)
+        ReserveAnalysis viaSweep = ReserveSolver.analyse(m,
+                ReserveOptions.defaults().withRoute(ReserveOptions.Route.stored(FixpointSweepSolver::new)));
         ReserveAnalysis viaAttractor = ReserveSolver.analyse(m, ReserveOptions.defaults());
+        assertThat(viaSweep.storedProduct()).isTrue();
+        assertThat(viaAttractor.storedProduct()).isFalse();
         assertThat(viaSweep.verdict()).isEqualTo(viaAttractor.verdict());
         assertThat(viaSweep.highestGuaranteedReserveUnits()).isEqualTo(viaAttractor.highestGuaranteedReserveUnits());
     }
