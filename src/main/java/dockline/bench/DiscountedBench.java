@@ -39,7 +39,7 @@ import java.util.Random;
  * <p>No algorithm of its own: a timing harness, one run of each route per instance (the routes'
  * class comments name their algorithms and sources).
  */
-public final class DiscountedBench {
+final class DiscountedBench {
 
     private DiscountedBench() {
     }

@@ -52,7 +52,7 @@ import java.util.Arrays;
  * x (comparator states) vertices, plus one int per arena vertex for the chain heads; the attractor
  * stops as soon as the start is decided.
  */
-public final class DiscountedThresholdGame {
+final class DiscountedThresholdGame {
 
     public static final int ACCEPTED = 0;
     public static final int REJECTED = 1;

@@ -44,7 +44,7 @@ import java.util.Arrays;
  * the arena. Requires {@link #applicable}: private disturbance vertices and out-degrees of at most
  * {@value #MAX_DEGREE} (counters are bytes).
  */
-public final class ImplicitDiscountedGame {
+final class ImplicitDiscountedGame {
 
     /** Pairs per arena vertex kept in its chain; more go to the overflow table. */
     static final int CHAIN_LIMIT = 4;
