@@ -22,7 +22,7 @@ public interface GameSolver {
      */
     Solution solve();
 
-    /** Makes a solver for a graph; {@code AttractorSolver::new} and {@code FixpointSweepSolver::new} fit. */
+    /** Makes a solver for a graph; {@code AttractorSolver::new} and {@code CompactAttractorSolver::new} fit. */
     @FunctionalInterface
     interface Factory {
         GameSolver create(GameGraph graph, BooleanSupplier cancelled);
