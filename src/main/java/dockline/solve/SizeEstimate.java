@@ -1,15 +1,15 @@
 package dockline.solve;
 
-import dockline.solve.game.ProductGame;
-
 /**
  * An upper estimate of a product game's size, made before it is built (see
- * {@link ProductGame#estimate}).
+ * {@link dockline.solve.game.ProductGame#estimate}).
  *
  * @param vertices   product vertices, including the two sinks
  * @param edges      product edges
  * @param bytes      memory for building and solving it
  * @param denseSlots slots of the direct index if one would be used, else 0
+ *
+ * <p>Data only, with saturating arithmetic; O(1).
  */
 public record SizeEstimate(long vertices, long edges, long bytes, long denseSlots) {
 

@@ -37,6 +37,8 @@ import java.util.Optional;
  * @param game                 the product game
  * @param solution             its solution
  * @param notes                things the reader should know
+ *
+ * <p>Data only (an immutable result).
  */
 public record DiscountedAnalysis(Mission mission, Objective.Discounted objective, Verdict verdict, int maxAbsWeight,
                                  boolean reserveKept, int comparatorStates, long comparatorStateBound,

@@ -14,6 +14,8 @@ import java.util.function.BooleanSupplier;
  *                     reserve monitor side by side, {@link dockline.monitor.PairMonitor}); on by default
  * @param alsoOptimise also run the optimisation baseline ({@link DiscountedValueIteration}) on the
  *                     arena without the tasks, and report whether its value-optimal play completes the mission
+ *
+ * <p>Data only (settings).
  */
 public record DiscountedOptions(ProductOptions product, GameSolver.Factory solver, boolean keepReserve,
                                 boolean alsoOptimise) {

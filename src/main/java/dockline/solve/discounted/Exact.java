@@ -4,6 +4,8 @@ package dockline.solve.discounted;
  * Exact integer helpers for the discounted baseline: sign of a difference of two 64-bit products
  * computed in 128 bits ({@link Math#multiplyHigh}), so comparisons never overflow, and gcd
  * reduction of long fractions.
+ *
+ * <p>Exact integer arithmetic (common practice), O(1) per call.
  */
 final class Exact {
 

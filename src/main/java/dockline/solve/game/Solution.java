@@ -9,6 +9,9 @@ package dockline.solve.game;
  * robot vertex of rank r &gt; 0 the chosen edge leads to a vertex of rank &lt; r, so the closed
  * loop of the strategy is acyclic and every play in it reaches the target; other vertices have
  * chosen edge {@link #NONE}.
+ *
+ * <p>Data only: the attractor ranks and choices of Grädel, Thomas, Wilke (2002, "Automata, Logics,
+ * and Infinite Games", ch. 2), in int arrays; O(1) per query.
  */
 public final class Solution {
 

@@ -51,6 +51,8 @@ import java.util.OptionalInt;
  *                                       solve computed all of it: always on the stored route, and on the
  *                                       implicit route when not guaranteed (there the search stops as soon
  *                                       as the start is won). The counterexample stays outside it.
+ *
+ * <p>Data only (an immutable result).
  */
 public record ReserveAnalysis(Mission mission, Verdict verdict, int startUnits, int reserveUnits, int capacityUnits,
                               EnergyScale scale, OptionalInt worstCaseMinimumUnits,
