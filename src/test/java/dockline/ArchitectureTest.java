@@ -2,6 +2,7 @@ package dockline;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
@@ -50,4 +51,21 @@ class ArchitectureTest {
     static final ArchRule onlyView_usesJavaFx = noClasses().that().resideOutsideOfPackage("dockline.view..")
             .should().dependOnClassesThat().resideInAPackage("javafx..")
             .because("everything but the view is testable without a display");
+
+    @ArchTest
+    static final ArchRule solvePackages_formNoCycle = slices().matching("dockline.solve.(*)..").should()
+            .beFreeOfCycles().because("the routes build on the shared game package, never the other way round");
+
+    @ArchTest
+    static final ArchRule reserveRoute_usesNoOtherRoute = noClasses().that().resideInAPackage("dockline.solve.reserve..")
+            .should().dependOnClassesThat().resideInAnyPackage("dockline.solve.fast..", "dockline.solve.discounted..");
+
+    @ArchTest
+    static final ArchRule fastPath_usesNoOtherRoute = noClasses().that().resideInAPackage("dockline.solve.fast..")
+            .should().dependOnClassesThat().resideInAnyPackage("dockline.solve.reserve..", "dockline.solve.discounted..");
+
+    @ArchTest
+    static final ArchRule discountedRoute_usesNoOtherRoute = noClasses().that()
+            .resideInAPackage("dockline.solve.discounted..").should().dependOnClassesThat()
+            .resideInAnyPackage("dockline.solve.reserve..", "dockline.solve.fast..");
 }
