@@ -150,7 +150,7 @@ public final class MissionWindow {
     private final ChoiceBox<EventKind> forceKind = new ChoiceBox<>();
     private final TextField forceSlipTo = new TextField();
     private final Spinner<Integer> forceStep = new Spinner<>(1, 10_000, 1);
-    private final ListView<ForcedEvent> forcedList = new ListView<>();
+    private final ListView<ScenarioEvent> forcedList = new ListView<>();
     private final Button forceAdd = new Button("Add");
     private final Button forceRun = new Button("Run _scenario");
     private final VBox forceBox = new VBox(4);
@@ -183,7 +183,7 @@ public final class MissionWindow {
 
         verdict.setId("verdict");
         verdict.setMaxWidth(Double.MAX_VALUE);
-        VerdictStyles.apply(verdict, Verdict.Outcome.NOT_CHECKED);
+        VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
         certificate.setId("certificate");
         certificate.getStyleClass().add("certificate");
         figures.setId("figures");
@@ -779,10 +779,10 @@ public final class MissionWindow {
                 return;
             }
         }
-        ForcedEvent f = new ForcedEvent(s, k, to);
+        ScenarioEvent f = new ScenarioEvent(s, k, to);
         forcedList.getItems().removeIf(e -> e.step() == f.step());
         forcedList.getItems().add(f);
-        forcedList.getItems().sort(java.util.Comparator.comparingInt(ForcedEvent::step));
+        forcedList.getItems().sort(java.util.Comparator.comparingInt(ScenarioEvent::step));
     }
 
     private void runScenario() {
@@ -790,7 +790,7 @@ public final class MissionWindow {
         if (d == null || !d.canForce() || forcedList.getItems().isEmpty()) {
             return;
         }
-        List<ForcedEvent> events = List.copyOf(forcedList.getItems());
+        List<ScenarioEvent> events = List.copyOf(forcedList.getItems());
         Optional<ViewReplay> r;
         try {
             r = d.force(events);
@@ -827,7 +827,7 @@ public final class MissionWindow {
             } else {
                 mapView.layersProperty().set(null);
             }
-            VerdictStyles.apply(verdict, Verdict.Outcome.NOT_CHECKED);
+            VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
             certificate.setText("");
             figures.setText("");
             forceBox.setDisable(true);
@@ -836,7 +836,7 @@ public final class MissionWindow {
         }
         updatingControls = true;
         try {
-            Verdict v = d.verdict();
+            VerdictSummary v = d.verdict();
             verdict.setText(v.headline());
             VerdictStyles.apply(verdict, v.outcome());
             certificate.setText("Certificate: " + v.certificate());
@@ -887,7 +887,7 @@ public final class MissionWindow {
         refreshLayers();
     }
 
-    private static String figuresText(Mission m, Verdict v) {
+    private static String figuresText(Mission m, VerdictSummary v) {
         StringBuilder sb = new StringBuilder();
         sb.append("Reserve floor ").append(Units.both(m, m.reserveUnits()));
         sb.append(" \u00b7 starting charge ").append(Units.both(m, m.startUnits()));
