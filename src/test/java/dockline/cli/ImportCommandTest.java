@@ -82,7 +82,8 @@ class ImportCommandTest {
         // missions/README.md: guaranteed from 35 %, 47 units needed; not from 30 %
         Run ok = run("check", "missions/aisle-return.yaml", "--json");
         assertThat(ok.exit()).as(ok.err()).isEqualTo(ExitCodes.OK);
-        assertThat(ok.out()).contains("\"startNeedUnits\" : 47");
+        assertThat(ok.out()).contains("\"startNeedUnits\" : 47").contains("\"worstCaseMinimumUnits\" : 23")
+                .contains("\"highestGuaranteedReserveUnits\" : 23");
         assertThat(run("check", "missions/aisle-return.yaml", "--start-charge", "30%").exit()).isEqualTo(ExitCodes.NOT_GUARANTEED);
     }
 
