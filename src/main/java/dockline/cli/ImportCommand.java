@@ -132,8 +132,8 @@ public final class ImportCommand implements Callable<Integer> {
         if (outWhy == null && sameFile(out, image)) {
             outWhy = "that is the input image; choose another name (outputs never overwrite inputs)";
         }
-        if (outWhy == null && !out.toString().endsWith(".yaml")) {
-            outWhy = "a map file's name ends in .yaml (the loader tells maps by their keys, the tools by the ending)";
+        if (outWhy == null && !out.toString().endsWith(".yaml") && !out.toString().endsWith(".yml")) {
+            outWhy = "a map file's name ends in .yaml (like the maps in maps/), so that it is not taken for an image";
         }
         if (outWhy != null) {
             bad.add("--out " + (out.toString().isEmpty() ? "''" : out) + ": " + outWhy);
@@ -163,9 +163,9 @@ public final class ImportCommand implements Callable<Integer> {
             return done(outw, err, ExitCodes.BAD_INPUT, List.of(), List.of(msg));
         }
         if (json) {
-            outw.println(Json.withCaveats(toJson(src, result, radius)));
+            outw.println(Json.withCaveats(toJson(src, result, cell, radius)));
         } else {
-            printSummary(outw, src, result, radius);
+            printSummary(outw, src, result, cell, radius);
         }
         outw.flush();
         err.flush();
@@ -197,11 +197,11 @@ public final class ImportCommand implements Callable<Integer> {
         return code;
     }
 
-    private void printSummary(PrintWriter o, SourceImage src, ImportResult r, BigDecimal radius) {
+    private void printSummary(PrintWriter o, SourceImage src, ImportResult r, BigDecimal cell, BigDecimal radius) {
         GreyImage img = src.image();
         o.println("imported " + image + " (" + img.format() + ", " + img.width() + " x " + img.height() + " pixels, maxval "
                 + img.maxval() + ") into " + out);
-        o.println("map: " + r.width() + " x " + r.height() + " cells of " + cellSize.strip() + " m (" + r.pixelsPerCell()
+        o.println("map: " + r.width() + " x " + r.height() + " cells of " + Downsampler.plain(cell) + " m (" + r.pixelsPerCell()
                 + " x " + r.pixelsPerCell() + " pixels each); occupied at or below grey " + r.levels().occupiedAtMost()
                 + ", free at or above " + r.levels().freeAtLeast() + (invert ? " (inverted)" : "") + ", unknown between");
         o.println("free cells: " + r.free() + " (" + r.freeInImage() + " free in the image, " + r.lostToFootprint()
@@ -237,7 +237,7 @@ public final class ImportCommand implements Callable<Integer> {
         return sb.toString();
     }
 
-    private ObjectNode toJson(SourceImage src, ImportResult r, BigDecimal radius) {
+    private ObjectNode toJson(SourceImage src, ImportResult r, BigDecimal cell, BigDecimal radius) {
         GreyImage img = src.image();
         ObjectNode o = Json.object();
         o.put("imported", true);
@@ -250,7 +250,7 @@ public final class ImportCommand implements Callable<Integer> {
         o.put("out", out.toString());
         o.put("width", r.width());
         o.put("height", r.height());
-        o.put("cellSize", new BigDecimal(cellSize.strip().replace("m", "").strip()).stripTrailingZeros());
+        o.put("cellSize", cell.stripTrailingZeros());
         o.put("pixelsPerCell", r.pixelsPerCell());
         o.put("occupiedAtMost", r.levels().occupiedAtMost());
         o.put("freeAtLeast", r.levels().freeAtLeast());

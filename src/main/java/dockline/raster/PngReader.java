@@ -47,8 +47,8 @@ public final class PngReader {
     public static GreyImage read(Path file, byte[] data) throws RasterException {
         BufferedImage img;
         try (ImageInputStream in = ImageIO.createImageInputStream(new ByteArrayInputStream(data))) {
-            Iterator<ImageReader> readers = ImageIO.getImageReaders(in);
-            if (in == null || !readers.hasNext()) {
+            Iterator<ImageReader> readers = in == null ? null : ImageIO.getImageReaders(in);
+            if (readers == null || !readers.hasNext()) {
                 throw bad(file, "the PNG image cannot be decoded: no reader accepts it", null);
             }
             ImageReader reader = readers.next();

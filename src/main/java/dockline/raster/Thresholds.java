@@ -28,8 +28,12 @@ public record Thresholds(String occupiedAtMost, String freeAtLeast, boolean inve
     public static final byte OCCUPIED = 1;
     public static final byte UNKNOWN = 2;
 
-    /** The levels for an image with this maxval, or a message saying what is wrong. */
-    public Levels levels(int maxval) throws IllegalArgumentException {
+    /**
+     * The levels for an image with this maxval.
+     *
+     * @throws IllegalArgumentException saying what is wrong: a level above maxval, or bounds that cross
+     */
+    public Levels levels(int maxval) {
         int occ = level("--occupied-at-most", occupiedAtMost, maxval, RoundingMode.FLOOR);
         int free = level("--free-at-least", freeAtLeast, maxval, RoundingMode.CEILING);
         if (occ >= free) {
@@ -39,15 +43,17 @@ public record Thresholds(String occupiedAtMost, String freeAtLeast, boolean inve
         return new Levels(occ, free, maxval, invert);
     }
 
-    /** Checks the syntax only (before the image is read); a message, or {@code null}. */
+    /**
+     * Checks what can be checked before the image is read (the form of both bounds and a
+     * percentage's range); a message, or {@code null}. Whether a level fits the image's maxval is
+     * checked by {@link #levels}.
+     */
     public String syntaxProblem() {
         for (String[] t : new String[][] {{"--occupied-at-most", occupiedAtMost}, {"--free-at-least", freeAtLeast}}) {
             try {
-                level(t[0], t[1], 65535, RoundingMode.FLOOR);
+                level(t[0], t[1], Integer.MAX_VALUE, RoundingMode.FLOOR);
             } catch (IllegalArgumentException e) {
-                if (!e.getMessage().contains("above the image's maxval")) {
-                    return e.getMessage();
-                }
+                return e.getMessage();
             }
         }
         return null;
