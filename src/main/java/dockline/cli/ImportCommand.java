@@ -2,13 +2,12 @@ package dockline.cli;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dockline.io.AtomicFiles;
 import dockline.model.Cell;
 import dockline.raster.Downsampler;
 import dockline.raster.GreyImage;
 import dockline.raster.ImportResult;
 import dockline.raster.ImportSettings;
-import dockline.raster.Importer;
+import dockline.raster.ImportRequest;
 import dockline.raster.RasterException;
 import dockline.raster.RasterProblem;
 import dockline.raster.SourceImage;
@@ -17,13 +16,10 @@ import dockline.report.Caveats;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -43,10 +39,6 @@ import picocli.CommandLine.Parameters;
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:map written", "2:bad image, option or output path (nothing written)"})
 public final class ImportCommand implements Callable<Integer> {
-
-    private static final Pattern METRES = Pattern.compile("([0-9]{1,12}(\\.[0-9]{1,9})?|\\.[0-9]{1,9})\\s*m?");
-    private static final Pattern DOCK = Pattern.compile("\\s*(-?[0-9]{1,9})\\s*[,:]\\s*(-?[0-9]{1,9})\\s*");
-    private static final BigDecimal MAX_CELL = BigDecimal.valueOf(1000);
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -100,41 +92,10 @@ public final class ImportCommand implements Callable<Integer> {
         PrintWriter outw = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         List<String> bad = new ArrayList<>();
-        BigDecimal pixel = metres("--pixel-size", pixelSize, false, bad);
-        BigDecimal cell = metres("--cell-size", cellSize, false, bad);
-        BigDecimal radius = robotRadius == null ? null : metres("--robot-radius", robotRadius, true, bad);
-        if (cell != null && cell.compareTo(MAX_CELL) > 0) {
-            bad.add("--cell-size " + cellSize + ": a map cell is at most 1000 m (maps/README.md)");
-            cell = null;
-        }
-        if (pixel != null && cell != null) {
-            try {
-                Downsampler.factor(pixel, cell);
-            } catch (IllegalArgumentException e) {
-                bad.add("--cell-size " + cellSize + ": " + e.getMessage());
-            }
-        }
-        List<Cell> dockCells = parseDocks(bad);
-        Thresholds thresholds = new Thresholds(occupiedAtMost, freeAtLeast, invert);
-        String tp = thresholds.syntaxProblem();
-        if (tp != null) {
-            bad.add(tp);
-        }
-        if (!surface.matches("[A-Za-z][A-Za-z0-9_-]{0,39}")) {
-            bad.add("--surface '" + surface + "': a surface name is a letter followed by letters, digits, '-' or '_'"
-                    + " (at most 40)");
-        }
-        String mapName = name != null ? name : defaultName(image);
-        if (mapName.isBlank() || mapName.length() > 200 || mapName.codePoints().anyMatch(Character::isISOControl)) {
-            bad.add("--name: give a name of 1 to 200 characters without control characters");
-        }
-        String outWhy = AtomicFiles.problemWith(out);
-        if (outWhy == null && sameFile(out, image)) {
-            outWhy = "that is the input image; choose another name (outputs never overwrite inputs)";
-        }
-        if (outWhy == null && !out.toString().endsWith(".yaml") && !out.toString().endsWith(".yml")) {
-            outWhy = "a map file's name ends in .yaml (like the maps in maps/), so that it is not taken for an image";
-        }
+        ImportRequest request = new ImportRequest(image, pixelSize, cellSize, robotRadius, docks, occupiedAtMost,
+                freeAtLeast, invert, surface, name);
+        ImportSettings settings = request.settings(bad);
+        String outWhy = request.outputProblem(out);
         if (outWhy != null) {
             bad.add("--out " + (out.toString().isEmpty() ? "''" : out) + ": " + outWhy);
         }
@@ -144,24 +105,23 @@ public final class ImportCommand implements Callable<Integer> {
             }
             return done(outw, err, ExitCodes.BAD_INPUT, List.of(), bad);
         }
-        SourceImage src;
-        ImportResult result;
+        ImportRequest.Done done;
         try {
-            src = SourceImage.read(image);
-            result = Importer.run(src, new ImportSettings(pixel, cell, radius, thresholds, dockCells, surface, mapName));
+            done = ImportRequest.run(image, settings, out);
         } catch (RasterException e) {
             for (RasterProblem p : e.problems()) {
                 err.println(p.format());
             }
             return done(outw, err, ExitCodes.BAD_INPUT, e.problems(), List.of());
-        }
-        try {
-            AtomicFiles.writeString(out, result.mapText());
         } catch (IOException e) {
             String msg = "--out " + out + ": cannot write the map: " + e.getMessage();
             err.println("dockline import: " + msg);
             return done(outw, err, ExitCodes.BAD_INPUT, List.of(), List.of(msg));
         }
+        SourceImage src = done.source();
+        ImportResult result = done.result();
+        BigDecimal cell = settings.cellSize();
+        BigDecimal radius = settings.radius();
         if (json) {
             outw.println(Json.withCaveats(toJson(src, result, cell, radius)));
         } else {
@@ -270,71 +230,5 @@ public final class ImportCommand implements Callable<Integer> {
         o.put("docksInLargestArea", r.warnings().stream().noneMatch(w -> w.contains("not connected to the largest")));
         r.warnings().forEach(o.putArray("warnings")::add);
         return o;
-    }
-
-    private static BigDecimal metres(String option, String text, boolean zeroOk, List<String> bad) {
-        Matcher m = METRES.matcher(text.strip());
-        if (!m.matches()) {
-            bad.add(option + " '" + text + "': give metres as a decimal, e.g. 0.05 (at most 12 digits before and 9 after"
-                    + " the point)");
-            return null;
-        }
-        BigDecimal v = new BigDecimal(m.group(1));
-        if (v.signum() == 0 && !zeroOk) {
-            bad.add(option + " " + text + ": must be more than 0");
-            return null;
-        }
-        return v;
-    }
-
-    private List<Cell> parseDocks(List<String> bad) {
-        List<Cell> cells = new ArrayList<>();
-        if (docks == null) {
-            return cells;
-        }
-        for (String part : docks.split(";", -1)) {
-            if (part.isBlank()) {
-                continue;
-            }
-            Matcher m = DOCK.matcher(part);
-            if (!m.matches()) {
-                bad.add("--docks '" + part.strip() + "': a dock is x,y in cells (e.g. 2,3); several are separated by ';'");
-                continue;
-            }
-            int x = Integer.parseInt(m.group(1));
-            int y = Integer.parseInt(m.group(2));
-            if (x < 0 || y < 0) {
-                bad.add("--docks " + part.strip() + ": cells are counted from 0 at the top-left; negative is outside the map");
-                continue;
-            }
-            Cell c = new Cell(x, y);
-            if (cells.contains(c)) {
-                bad.add("--docks " + part.strip() + ": this dock is given twice");
-                continue;
-            }
-            cells.add(c);
-        }
-        if (cells.isEmpty() && bad.stream().noneMatch(b -> b.startsWith("--docks"))) {
-            bad.add("--docks '" + docks + "': no dock given; write x,y;x,y or leave the option out");
-        }
-        return cells;
-    }
-
-    private static String defaultName(Path image) {
-        Path f = image.getFileName();
-        String n = f == null ? "imported map" : f.toString();
-        int dot = n.lastIndexOf('.');
-        return dot > 0 ? n.substring(0, dot) : n;
-    }
-
-    private static boolean sameFile(Path a, Path b) {
-        try {
-            if (Files.exists(a) && Files.exists(b)) {
-                return Files.isSameFile(a, b);
-            }
-        } catch (IOException e) {
-            // fall through to the name comparison
-        }
-        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
     }
 }
