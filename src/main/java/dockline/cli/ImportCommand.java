@@ -33,9 +33,10 @@ import picocli.CommandLine.Parameters;
  * map is written atomically; on any problem nothing is written (exit 2).
  */
 @Command(name = "import", mixinStandardHelpOptions = true,
-        description = {"Turns an occupancy image (PGM P2/P5, PBM P1/P4 or PNG; dark = occupied, light = free) into a map file.",
-                "A cell is free only if every pixel in it is free (unknown counts as occupied); with --robot-radius,",
-                "cells whose centre is closer than the radius to an obstacle become walls. No zones or doors are added."},
+        description = {"Turns an occupancy image (PGM P2/P5, PBM P1/P4 or PNG; dark = occupied, light = free) into a map.",
+                "A cell is free only if every pixel in it is free (unknown counts as occupied).",
+                "With --robot-radius, cells whose centre is closer than the radius to an obstacle become walls.",
+                "No zones or doors are added; see maps/README.md, \"Imported maps\"."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:map written", "2:bad image, option or output path (nothing written)"})
 public final class ImportCommand implements Callable<Integer> {

@@ -112,7 +112,7 @@ public record ImportRequest(Path image, String pixelSize, String cellSize, Strin
 
     private List<Cell> parseDocks(List<String> bad) {
         List<Cell> cells = new ArrayList<>();
-        if (docks == null || docks.isBlank() && docks.isEmpty()) {
+        if (docks == null) {
             return cells;
         }
         for (String part : docks.split(";", -1)) {
