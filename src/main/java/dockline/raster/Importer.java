@@ -61,16 +61,16 @@ public final class Importer {
         int freeCount = count(free);
         for (Cell d : s.docks()) {
             if (d.x() < 0 || d.y() < 0 || d.x() >= w || d.y() >= h) {
-                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + "," + d.y() + " is outside the map of " + w + " x "
+                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + ":" + d.y() + " is outside the map of " + w + " x "
                         + h + " cells", "x is 0 to " + (w - 1) + " and y 0 to " + (h - 1) + ", counted in cells from the"
                         + " top-left corner"));
             } else if (!inImage[d.y() * w + d.x()]) {
-                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + "," + d.y() + " is on an occupied cell: pixels "
+                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + ":" + d.y() + " is on an occupied cell: pixels "
                         + d.x() * k + ".." + (Math.min((d.x() + 1) * k, img.width()) - 1) + " by " + d.y() * k + ".."
                         + (Math.min((d.y() + 1) * k, img.height()) - 1) + " are not all free",
                         "put the dock on a free cell, or check the thresholds and --invert"));
             } else if (!free[d.y() * w + d.x()]) {
-                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + "," + d.y() + " is on a cell the robot does not"
+                problems.add(RasterProblem.of(src.file(), "dock " + d.x() + ":" + d.y() + " is on a cell the robot does not"
                         + " fit in (closer than " + Downsampler.plain(s.radius()) + " m to an obstacle)",
                         "put the dock further from walls, or check --robot-radius"));
             }
@@ -91,7 +91,7 @@ public final class Importer {
         for (Cell d : s.docks()) {
             int a = areas.label()[d.y() * w + d.x()];
             if (a != 0) {
-                warnings.add("dock " + d.x() + "," + d.y() + " is in a free area of " + areas.sizes()[a]
+                warnings.add("dock " + d.x() + ":" + d.y() + " is in a free area of " + areas.sizes()[a]
                         + " cells, not connected to the largest free area (" + areas.sizes()[0] + " cells)");
             }
         }

@@ -100,7 +100,7 @@ class ImportCommandTest {
         assertThat(j.get("lostToFootprint").asInt()).isEqualTo(315);
         assertThat(j.get("areas").asInt()).isEqualTo(2);
         assertThat(j.get("docksInLargestArea").asBoolean()).isFalse();
-        assertThat(j.get("warnings").get(0).asText()).isEqualTo("dock 3,10 is in a free area of 51 cells, not connected to"
+        assertThat(j.get("warnings").get(0).asText()).isEqualTo("dock 3:10 is in a free area of 51 cells, not connected to"
                 + " the largest free area (283 cells)");
         assertThat(j.get("caveats")).hasSize(Caveats.LINES.size());
         assertThat(j.get("sha256").asText()).isEqualTo(sha256(Path.of("maps/depot-annex.pgm")));
@@ -335,18 +335,18 @@ class ImportCommandTest {
                 "--docks", "0,0;14,2;1,1;6,4;3,3");
         List<String> lines = docks.err().lines().toList();
         assertThat(lines).containsExactly(
-                img + ": dock 0,0 is on an occupied cell: pixels 0..3 by 0..3 are not all free (hint: put the dock on a free"
+                img + ": dock 0:0 is on an occupied cell: pixels 0..3 by 0..3 are not all free (hint: put the dock on a free"
                         + " cell, or check the thresholds and --invert)",
-                img + ": dock 14,2 is outside the map of 14 x 9 cells (hint: x is 0 to 13 and y 0 to 8, counted in cells"
+                img + ": dock 14:2 is outside the map of 14 x 9 cells (hint: x is 0 to 13 and y 0 to 8, counted in cells"
                         + " from the top-left corner)",
-                img + ": dock 1,1 is on a cell the robot does not fit in (closer than 0.15 m to an obstacle) (hint: put the"
+                img + ": dock 1:1 is on a cell the robot does not fit in (closer than 0.15 m to an obstacle) (hint: put the"
                         + " dock further from walls, or check --robot-radius)",
-                img + ": dock 6,4 is on an occupied cell: pixels 24..27 by 16..19 are not all free (hint: put the dock on a"
+                img + ": dock 6:4 is on an occupied cell: pixels 24..27 by 16..19 are not all free (hint: put the dock on a"
                         + " free cell, or check the thresholds and --invert)");
         Run json = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--docks", "0,0", "--json");
         JsonNode j = JSON.readTree(json.out());
         assertThat(j.get("imported").asBoolean()).isFalse();
-        assertThat(j.get("problems").get(0).get("message").asText()).startsWith("dock 0,0 is on an occupied cell");
+        assertThat(j.get("problems").get(0).get("message").asText()).startsWith("dock 0:0 is on an occupied cell");
         assertThat(j.get("caveats")).isNotEmpty();
     }
 

@@ -83,7 +83,7 @@ class ImportDialogTest {
             return first + "\n" + d.problems.getText();
         });
         assertThat(shown).contains("--cell-size 0.3: the cell size 0.3 m is not a whole multiple of the pixel size 0.2 m")
-                .contains("maps/depot-annex.pgm: dock 0,0 is on an occupied cell");
+                .contains("maps/depot-annex.pgm: dock 0:0 is on an occupied cell");
         assertThat(out).doesNotExist();
     }
 }
