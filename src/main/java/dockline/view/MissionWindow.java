@@ -259,7 +259,8 @@ public final class MissionWindow {
                 stage.close();
             }
         });
-        Menu fileMenu = new Menu("_File", null, open, recentMenu, reload, new SeparatorMenuItem(), close);
+        MenuItem importImage = item("_Import occupancy image\u2026", null, this::importImage);
+        Menu fileMenu = new Menu("_File", null, open, recentMenu, importImage, reload, new SeparatorMenuItem(), close);
         fileMenu.setOnShowing(e -> rebuildRecentMenu());
         rebuildRecentMenu();
 
@@ -533,6 +534,13 @@ public final class MissionWindow {
         if (f != null) {
             open(f.toPath());
         }
+    }
+
+    /** The import dialog ({@link ImportDialog}); the map it writes is opened. */
+    private void importImage() {
+        Path folder = file != null && file.toAbsolutePath().getParent() != null ? file.toAbsolutePath().getParent() : null;
+        Window owner = root.getScene() != null ? root.getScene().getWindow() : null;
+        new ImportDialog(owner, folder).showAndWait().ifPresent(this::open);
     }
 
     private void rebuildRecentMenu() {
