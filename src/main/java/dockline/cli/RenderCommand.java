@@ -11,7 +11,7 @@ import dockline.report.Caveats;
 import dockline.view.Overlay;
 import dockline.view.PictureRenderer;
 import dockline.view.SolverAnalyzer;
-import dockline.view.Verdict;
+import dockline.view.VerdictSummary;
 import dockline.view.ViewData;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -132,7 +132,7 @@ public final class RenderCommand implements Callable<Integer> {
             err.println("dockline render: cannot write " + out + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        Verdict v = data.verdict();
+        VerdictSummary v = data.verdict();
         if (json) {
             ObjectNode o = Json.object();
             o.put("mission", m.name());

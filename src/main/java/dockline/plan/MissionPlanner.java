@@ -17,18 +17,18 @@ import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.monitor.ReserveMonitor;
-import dockline.solve.ChargeNeeded;
-import dockline.solve.DiscountedAnalysis;
-import dockline.solve.DiscountedOptions;
-import dockline.solve.DiscountedPolicies;
-import dockline.solve.DiscountedSolver;
-import dockline.solve.FastPath;
-import dockline.solve.Policy;
+import dockline.solve.reserve.ChargeNeeded;
+import dockline.solve.discounted.DiscountedAnalysis;
+import dockline.solve.discounted.DiscountedOptions;
+import dockline.solve.discounted.DiscountedPolicies;
+import dockline.solve.discounted.DiscountedSolver;
+import dockline.solve.fast.FastPath;
+import dockline.policy.Policy;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
-import dockline.solve.ReserveAnalysis;
-import dockline.solve.ReserveOptions;
-import dockline.solve.ReserveSolver;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import dockline.solve.SizeEstimate;
 import dockline.solve.Verdict;
 import java.util.ArrayList;
@@ -201,24 +201,23 @@ public final class MissionPlanner {
     // ---- product routes
 
     private static Plan product(Context c, Route.Product p, String reason) {
-        return product(c, p.policy(), ReserveOptions.Route.IMPLICIT, null, p.highestFloor(), p.suggestions(),
+        return product(c, p.policy(), false, null, p.highestFloor(), p.suggestions(),
                 p.replays(), p.heatMap(), reason);
     }
 
     private static Plan product(Context c, Route.Stored s, String reason) {
-        return product(c, s.policy(), ReserveOptions.Route.PRODUCT, s.solver(), true, true, false, false, reason);
+        return product(c, s.policy(), true, s.solver(), true, true, false, false, reason);
     }
 
-    private static Plan product(Context c, PolicyChoice choice, ReserveOptions.Route route,
-                                dockline.solve.GameSolver.Factory solver, boolean highestFloor, boolean wantSuggestions,
+    private static Plan product(Context c, PolicyChoice choice, boolean stored,
+                                dockline.solve.game.GameSolver.Factory solver, boolean highestFloor, boolean wantSuggestions,
                                 boolean wantReplays, boolean wantHeatMap, String reason) {
         Mission m = c.mission();
         ReserveOptions ro = ReserveOptions.defaults().withMemoryBudget(c.options().memoryBudgetBytes())
                 .withCancelled(c.options().cancelled()).withHighestReserve(highestFloor)
-                .withSafestPolicy(choice == PolicyChoice.SAFEST).withRoute(route);
-        if (solver != null) {
-            ro = ro.withSolver(solver);
-        }
+                .withSafestPolicy(choice == PolicyChoice.SAFEST)
+                .withRoute(!stored ? ReserveOptions.Route.IMPLICIT : solver == null ? ReserveOptions.Route.PRODUCT
+                        : ReserveOptions.Route.stored(solver));
         ReserveAnalysis a = ReserveSolver.analyse(m, c.arena(), c.goal(), ro);
         if (wantReplays && !a.guaranteed() && !highestFloor) {
             // the best effort of the replays needs the highest guaranteed floor

@@ -6,7 +6,7 @@ import dockline.replay.ForcedEvent;
 import dockline.replay.ForcedEventException;
 import dockline.replay.Replay;
 import dockline.replay.Replayer;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.solve.WinningRegion;
 import java.util.List;
 import java.util.Optional;

@@ -1,7 +1,7 @@
 package dockline.plan;
 
-import dockline.solve.FastPath;
-import dockline.solve.GameSolver;
+import dockline.solve.fast.FastPath;
+import dockline.solve.game.GameSolver;
 
 /**
  * How {@link MissionPlanner#plan} answers the mission. Each route is a record with only the settings
@@ -50,7 +50,7 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Product, Rou
      *                     and for the replays of a mission that is not guaranteed)
      * @param suggestions  when not guaranteed, find what would make it guaranteed
      * @param replays      also make the worst-case, nominal and forced replays ({@link PlanReplays})
-     * @param heatMap      also compute the charge needed from every situation ({@link dockline.solve.ChargeNeeded})
+     * @param heatMap      also compute the charge needed from every situation ({@link dockline.solve.reserve.ChargeNeeded})
      */
     record Product(PolicyChoice policy, boolean highestFloor, boolean suggestions, boolean replays, boolean heatMap)
             implements Route {

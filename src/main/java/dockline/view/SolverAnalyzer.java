@@ -15,9 +15,9 @@ import dockline.plan.PlanReplays;
 import dockline.plan.PolicyChoice;
 import dockline.plan.Route;
 import dockline.replay.Replay;
-import dockline.solve.ChargeNeeded;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
+import dockline.solve.reserve.ChargeNeeded;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -78,7 +78,7 @@ public final class SolverAnalyzer implements Analyzer {
     }
 
     /** The verdict in words, with the certificate status. */
-    static Verdict verdictOf(Plan a, List<String> problems) {
+    static VerdictSummary verdictOf(Plan a, List<String> problems) {
         PlanReplays mr = a.replays().orElseThrow();
         Mission m = a.mission();
         int k = m.map().disturbances().budget();
@@ -106,7 +106,7 @@ public final class SolverAnalyzer implements Analyzer {
             words.append(" Note: ").append(n).append('.');
         }
         String cert;
-        Verdict.Outcome outcome = a.guaranteed() ? Verdict.Outcome.GUARANTEED : Verdict.Outcome.NOT_GUARANTEED;
+        VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED : VerdictSummary.Outcome.NOT_GUARANTEED;
         if (a.guaranteed()) {
             Certificate c = a.certification() instanceof Certification.Reserve r ? r.certificate() : null;
             if (c != null && c.ok()) {
@@ -114,7 +114,7 @@ public final class SolverAnalyzer implements Analyzer {
                         + " situations, every disturbance choice; longest run " + c.longestRunSteps() + " steps)";
             } else {
                 // never trust a guarantee whose policy failed the check: say so, loudly
-                outcome = Verdict.Outcome.NOT_CHECKED;
+                outcome = VerdictSummary.Outcome.NOT_CHECKED;
                 words.insert(0, "the solver says guaranteed, but its policy FAILED the independent check; do not rely on it. ");
                 cert = "FAILED \u2014 " + (c == null ? "no certificate" : c.reason());
             }
@@ -126,7 +126,7 @@ public final class SolverAnalyzer implements Analyzer {
         for (String p : problems) {
             cert += "; " + p;
         }
-        return new Verdict(outcome, words.toString(), cert, a.lowestLevelUnits(), a.highestFloorUnits());
+        return new VerdictSummary(outcome, words.toString(), cert, a.lowestLevelUnits(), a.highestFloorUnits());
     }
 
     /** {@link ViewData} over a {@link Plan}; the policy is indexed by cell once, at construction. */
@@ -135,12 +135,12 @@ public final class SolverAnalyzer implements Analyzer {
         private final PlanReplays replaysSource;
         private final Plan plan;
         private final ChargeNeeded heat;
-        private final Verdict verdict;
+        private final VerdictSummary verdict;
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
         private final Map<Long, List<Action>> byCell;
 
-        SolvedData(Plan plan, Verdict verdict, List<ViewReplay> replays) {
+        SolvedData(Plan plan, VerdictSummary verdict, List<ViewReplay> replays) {
             this.replaysSource = plan.replays().orElseThrow();
             this.plan = plan;
             this.heat = plan.heatMap().orElseThrow();
@@ -182,7 +182,7 @@ public final class SolverAnalyzer implements Analyzer {
         }
 
         @Override
-        public Verdict verdict() {
+        public VerdictSummary verdict() {
             return verdict;
         }
 
@@ -231,13 +231,13 @@ public final class SolverAnalyzer implements Analyzer {
          * @throws IllegalArgumentException when an event cannot happen where it was put
          */
         @Override
-        public Optional<ViewReplay> force(List<ForcedEvent> events) {
+        public Optional<ViewReplay> force(List<ScenarioEvent> events) {
             if (policy.isEmpty() || events.isEmpty()) {
                 return Optional.empty();
             }
             List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
             StringBuilder what = new StringBuilder();
-            for (ForcedEvent e : events) {
+            for (ScenarioEvent e : events) {
                 fs.add(new dockline.replay.ForcedEvent(e.step(), e.kind(), e.slipTo()));
                 what.append(what.length() == 0 ? "" : ", ").append(e.step()).append(':').append(e.kind().word())
                         .append(e.slipTo() != null ? "@" + e.slipTo() : "");

@@ -9,7 +9,7 @@ import dockline.model.Mission;
 import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.replay.ReplayStep;
-import dockline.solve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveAnalysis;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

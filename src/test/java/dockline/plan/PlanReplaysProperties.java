@@ -8,7 +8,7 @@ import dockline.fixtures.ReplayChecks;
 import dockline.model.Mission;
 import dockline.replay.Replay;
 import dockline.replay.ReplayStep;
-import dockline.solve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveAnalysis;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
