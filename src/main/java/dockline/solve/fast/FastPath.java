@@ -99,8 +99,18 @@ public final class FastPath {
      */
     public static Optional<Analysis> analyse(Mission mission, int maxPolicyRows, boolean verdictOnly) {
         long t0 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
+        return analyse(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), maxPolicyRows, verdictOnly,
+                t0);
+    }
+
+    /** As {@link #analyse(Mission, int, boolean)} on an arena and goal already compiled from the mission. */
+    public static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                             boolean verdictOnly) {
+        return analyse(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime());
+    }
+
+    private static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                              boolean verdictOnly, long t0) {
         if (!MinChargeSolver.applicable(arena, goal)) {
             return Optional.empty();
         }
