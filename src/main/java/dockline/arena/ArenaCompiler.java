@@ -19,8 +19,12 @@ import java.util.List;
  * Compiles a mission (map + robot + disturbance model) into its {@link Arena}, following the
  * reference semantics of DESIGN.md 2.3 and maps/README.md.
  *
- * <p>Cost: O(F · (K+1) · A · S) time and memory, where F is the number of free cells, K the budget,
- * A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action; in practice linear in the plan.
+ * <p>A robot vertex is (free cell, disturbance state) ({@link DisturbanceStates}: budget left, doors and
+ * zones closed by lasting events, events used per {@code at-most} entry); with no lasting rule and no
+ * {@code at-most} the states are just the budget left 0..K and the numbering is the reference one.
+ *
+ * <p>Cost: O(F · D · A · S) time and memory, where F is the number of free cells, D the disturbance
+ * states (K+1 without lasting rules), A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action.
  * Energy figures are turned into units by {@link EnergyScale}, rounding against the robot.
  */
 public final class ArenaCompiler {
@@ -142,17 +146,21 @@ public final class ArenaCompiler {
         if (!map.isFree(start)) {
             throw new IllegalArgumentException("start cell " + start + " is not a free cell");
         }
-        int kk = budget + 1;
+        DisturbanceStates states = DisturbanceStates.of(map, budget, doorRule, blockRule);
+        int kk = states.count();
         int robotCount = Math.multiplyExact(freeCount, kk);
 
         IntArrayList vCell = new IntArrayList(robotCount * 6);
         IntArrayList vBudget = new IntArrayList(robotCount * 6);
+        IntArrayList vState = new IntArrayList(robotCount * 6);
         for (int s = 0; s < freeCount; s++) {
             for (int k = 0; k < kk; k++) {
                 vCell.add(slotCell[s]);
-                vBudget.add(k);
+                vBudget.add(states.budgetLeft(k));
+                vState.add(k);
             }
         }
+        boolean closable = states.itemCount() > 0;
         // robot edges first (to disturbance vertices numbered on the fly), outcomes after
         IntArrayList aKind = new IntArrayList(robotCount * 5);
         IntArrayList aTarget = new IntArrayList(robotCount * 5);
@@ -162,7 +170,8 @@ public final class ArenaCompiler {
         for (int r = 0; r < robotCount; r++) {
             robotOutStart.add(next - robotCount);
             int c = vCell.get(r);
-            int n = neighbours(c, w, h, free, dirs, nb);
+            int n = closable ? neighbours(c, w, h, free, dirs, nb, states, vState.get(r))
+                    : neighbours(c, w, h, free, dirs, nb);
             for (int i = 0; i < n; i++) {
                 aKind.add(ActionKind.MOVE.ordinal());
                 aTarget.add(nb[i]);
@@ -206,7 +215,7 @@ public final class ArenaCompiler {
             outStart.add(eTarget.size());
             int owner = ownerOfD[d];
             int c = vCell.get(owner);
-            int k = vBudget.get(owner);
+            int k = vState.get(owner);
             int kind = aKind.get(d);
             int t = aTarget.get(d);
             int sOwn = slot[c];
@@ -222,30 +231,45 @@ public final class ArenaCompiler {
             int enter = diagonal ? diagCost[t] : cost[t];
             int sT = slot[t];
             add(eTarget, eWeight, eEvent, eRule, sT * kk + k, -enter, Arena.NOMINAL, -1);
-            if (k == 0) {
+            if (states.budgetLeft(k) == 0) {
                 continue;
             }
-            int k1 = k - 1;
-            if (doorRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), doorRule[t]);
+            int dr = doorRule[t];
+            if (dr >= 0) {
+                int k1 = states.after(k, dr, rules.get(dr).lasting() ? states.doorItem(t) : -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), dr);
+                }
             }
-            if (blockRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), blockRule[t]);
+            int br = blockRule[t];
+            if (br >= 0) {
+                int k1 = states.after(k, br, rules.get(br).lasting() ? states.blockageItem(br) : -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), br);
+                }
             }
             int slip = slipRule[c] >= 0 ? slipRule[c] : slipRule[t];
             if (slip >= 0) {
-                int mn = neighbours(t, w, h, free, dirs, mb);
-                for (int i = 0; i < mn; i++) {
-                    int m = mb[i];
-                    if (m == c) {
-                        continue;
+                int k1 = states.after(k, slip, -1);
+                if (k1 >= 0) {
+                    // a slip never lands on a closed cell: it is an obstacle like a wall
+                    int mn = closable ? neighbours(t, w, h, free, dirs, mb, states, k) : neighbours(t, w, h, free, dirs, mb);
+                    for (int i = 0; i < mn; i++) {
+                        int m = mb[i];
+                        if (m == c) {
+                            continue;
+                        }
+                        add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
                     }
-                    add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
                 }
             }
-            if (dragRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
-                        EventKind.DRAG.ordinal(), dragRule[t]);
+            int gr = dragRule[t];
+            if (gr >= 0) {
+                int k1 = states.after(k, gr, -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
+                            EventKind.DRAG.ordinal(), gr);
+                }
             }
         }
         outStart.add(eTarget.size());
@@ -266,8 +290,12 @@ public final class ArenaCompiler {
             cellArr[robotCount + d] = vCell.get(owner);
             budgetArr[robotCount + d] = vBudget.get(owner);
         }
+        int[] stateArr = Arrays.copyOf(vState.toArray(), vertexCount);
+        for (int d = 0; d < distCount; d++) {
+            stateArr[robotCount + d] = vState.get(ownerOfD[d]);
+        }
         int startVertex = slot[start.index(w)] * kk + budget;
-        return new Arena(mission, w, h, budget, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
+        return new Arena(mission, w, h, budget, states, stateArr, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
                 aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),
                 zones, dock, slot, slotCell);
     }
@@ -299,6 +327,32 @@ public final class ArenaCompiler {
             out[n++] = ny * w + nx;
         }
         return n;
+    }
+
+    /**
+     * Free neighbours of cell c that are not closed in the disturbance state: a closed door or zone
+     * is an obstacle like a wall, also for the corner rule of diagonals.
+     */
+    static int neighbours(int c, int w, int h, boolean[] free, int dirs, int[] out, DisturbanceStates st, int state) {
+        int x = c % w;
+        int y = c / w;
+        int n = 0;
+        for (int i = 0; i < dirs; i++) {
+            int nx = x + DX[i];
+            int ny = y + DY[i];
+            if (nx < 0 || ny < 0 || nx >= w || ny >= h || !open(ny * w + nx, free, st, state)) {
+                continue;
+            }
+            if (i >= 4 && (!open(y * w + nx, free, st, state) || !open(ny * w + x, free, st, state))) {
+                continue;
+            }
+            out[n++] = ny * w + nx;
+        }
+        return n;
+    }
+
+    private static boolean open(int cell, boolean[] free, DisturbanceStates st, int state) {
+        return free[cell] && !st.isClosed(state, cell);
     }
 
     private static int[] filled(int n) {
