@@ -33,6 +33,12 @@ public final class ArenaCompiler {
     static final int[] DX = {0, 1, 0, -1, 1, 1, -1, -1};
     static final int[] DY = {-1, 0, 1, 0, -1, 1, 1, -1};
 
+    /**
+     * Heap per robot vertex while compiling, about: its actions and outcomes in the growing lists and
+     * the final forward and reverse CSR arrays (measured on the generated buildings, rounded up).
+     */
+    static final long BYTES_PER_ROBOT_VERTEX = 600;
+
     /** Most zones a map may have (zone sets are 64-bit masks). */
     public static final int MAX_ZONES = 63;
 
@@ -148,6 +154,16 @@ public final class ArenaCompiler {
         }
         DisturbanceStates states = DisturbanceStates.of(map, budget, doorRule, blockRule);
         int kk = states.count();
+        if (!states.plain()) {
+            // without lasting events the arena is as before (its size was never checked here); with them
+            // the states multiply the cells, so refuse before allocating what cannot fit
+            long robots = (long) freeCount * kk;
+            long bytes = robots * BYTES_PER_ROBOT_VERTEX;
+            long limit = Runtime.getRuntime().maxMemory() / 2;
+            if (bytes > limit || robots > Integer.MAX_VALUE / 16) {
+                throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit);
+            }
+        }
         int robotCount = Math.multiplyExact(freeCount, kk);
 
         IntArrayList vCell = new IntArrayList(robotCount * 6);
