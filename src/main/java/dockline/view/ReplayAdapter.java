@@ -22,7 +22,7 @@ final class ReplayAdapter {
             ReplayEvent e = s.event() == null ? ReplayEvent.NONE : s.event();
             steps.add(new ViewStep(s.step(), s.cell(), action(s.action(), s.cell(), steps.isEmpty() ? null
                     : steps.get(steps.size() - 1).cell()), e.kind(), e.describe(), e.cell(), s.batteryUnits(),
-                    s.budgetLeft(), s.progressMask()));
+                    s.budgetLeft(), s.progressMask(), e.closedCells()));
         }
         List<String> notes = new ArrayList<>(r.explanation());
         notes.add(0, "Ends: " + endingWords(r.ending()) + "; lowest battery " + Units.both(m, r.minimumUnits())
