@@ -46,6 +46,34 @@ public final class ArenaCompiler {
     }
 
     /**
+     * The number of disturbance states of the mission's arena ({@link DisturbanceStates}), without
+     * building the arena: O(cells + states · rules). The arena has this many robot vertices per free cell.
+     */
+    public static int disturbanceStateCount(Mission mission) {
+        BuildingMap map = mission.map();
+        int w = map.width();
+        int cells = w * map.height();
+        List<EventRule> rules = map.disturbances().rules();
+        int[] doorRule = filled(cells);
+        int[] blockRule = filled(cells);
+        for (int r = 0; r < rules.size(); r++) {
+            EventRule rule = rules.get(r);
+            for (Cell c : rule.cells()) {
+                if (!map.inside(c)) {
+                    continue;
+                }
+                int ci = c.index(w);
+                if (rule.kind() == EventKind.DOOR_SHUT && doorRule[ci] < 0 && map.terrainAt(c).door()) {
+                    doorRule[ci] = r;
+                } else if (rule.kind() == EventKind.BLOCKAGE && blockRule[ci] < 0) {
+                    blockRule[ci] = r;
+                }
+            }
+        }
+        return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule).count();
+    }
+
+    /**
      * Builds the arena.
      *
      * @throws IllegalArgumentException if the mission breaks an invariant the loader checks

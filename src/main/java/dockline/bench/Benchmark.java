@@ -211,7 +211,9 @@ public final class Benchmark {
                 rows.addAll(csrMethods(inst, sampler, reps, warmup));
                 rows.addAll(implicitMethods(inst, sampler, reps));
                 rows.add(fixpoint(inst, sampler, reps));
-                rows.add(lasting(inst, sampler, reps));
+                if (!warmup) {
+                    rows.add(lasting(inst, sampler, reps));
+                }
             }
             case CONSUMPTION -> {
                 rows.add(fast(inst, sampler, reps));
@@ -549,6 +551,14 @@ public final class Benchmark {
         return rows;
     }
 
+    /** The lasting row is skipped above this many robot vertices of its arena (compile time and heap). */
+    static final long LASTING_ROBOT_VERTEX_LIMIT = 1_500_000;
+
+    /** Disturbance states of a mission, counted on a one-row copy of nothing but its rules (cheap). */
+    private static long lastingStates(Mission m) {
+        return dockline.arena.ArenaCompiler.disturbanceStateCount(m);
+    }
+
     /**
      * The main route on the same instance with its door-shut events lasting (a shut door stays shut):
      * the arena then carries the closed doors, found only as event sequences can close them. The row's
@@ -566,6 +576,13 @@ public final class Benchmark {
         Mission lm = new Mission(m.name(), m.source(), m.map().withDisturbances(
                 new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
                 m.startCharge(), m.reserve(), m.tasks(), m.objective());
+        long states = lastingStates(lm);
+        long robots = states * inst.arena.freeCellCount();
+        if (robots > LASTING_ROBOT_VERTEX_LIMIT) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting", robots, 0, "skipped: the arena with lasting doors"
+                    + " would have " + robots + " robot vertices (" + states + " disturbance states), over this run's"
+                    + " limit of " + LASTING_ROBOT_VERTEX_LIMIT);
+        }
         long t0 = System.nanoTime();
         Arena arena;
         try {

@@ -20,7 +20,7 @@ class EventDurationLoaderTest {
     @TempDir
     Path dir;
 
-    private static final String GATE = "                - kind: door-shut\n                  where: gate\n";
+    private static final String GATE = "    - kind: door-shut\n      where: gate\n";
 
     private String withGate(String extra) {
         return edit(Fixtures.MAP, GATE, GATE + extra);
@@ -38,8 +38,8 @@ class EventDurationLoaderTest {
 
     @Test
     void momentaryAndAtMost_areRead() throws Exception {
-        BuildingMap m = MapLoader.load(write(dir, "m.yaml", withGate("                  duration: momentary\n"
-                + "                  at-most: 1\n")));
+        BuildingMap m = MapLoader.load(write(dir, "m.yaml", withGate("      duration: momentary\n"
+                + "      at-most: 1\n")));
         EventRule door = m.disturbances().rules().get(0);
         assertThat(door.duration()).isEqualTo(EventDuration.MOMENTARY);
         assertThat(door.atMost()).isEqualTo(1);
@@ -47,7 +47,7 @@ class EventDurationLoaderTest {
 
     @Test
     void misspelledDuration_getsTheAllowedValues() throws Exception {
-        String text = withGate("                  duration: rest-of-misson\n");
+        String text = withGate("      duration: rest-of-misson\n");
         List<Problem> ps = mapProblems(write(dir, "m.yaml", text));
         assertThat(ps).hasSize(1);
         assertThat(ps.get(0).message()).contains("unknown duration 'rest-of-misson'", "did you mean 'rest-of-mission'");
@@ -58,14 +58,14 @@ class EventDurationLoaderTest {
 
     @Test
     void misspelledKey_getsADidYouMean() throws Exception {
-        List<Problem> ps = mapProblems(write(dir, "m.yaml", withGate("                  duraton: momentary\n")));
+        List<Problem> ps = mapProblems(write(dir, "m.yaml", withGate("      duraton: momentary\n")));
         assertThat(ps).anyMatch(p -> p.message().contains("did you mean 'duration'"));
     }
 
     @Test
     void durationOnDrag_isAnError_withAHint() throws Exception {
-        String text = edit(Fixtures.MAP, "                  extra: 0.5\n",
-                "                  extra: 0.5\n                  duration: momentary\n");
+        String text = edit(Fixtures.MAP, "      extra: 0.5\n",
+                "      extra: 0.5\n      duration: momentary\n");
         List<Problem> ps = mapProblems(write(dir, "m.yaml", text));
         assertThat(ps).hasSize(1);
         assertThat(ps.get(0).message()).contains("'duration' applies only to kind: door-shut and kind: blockage",
@@ -76,7 +76,7 @@ class EventDurationLoaderTest {
     @Test
     void atMostAboveTheBudgetOrNegative_isAnError_namingTheRange() throws Exception {
         for (String v : List.of("2", "-1")) {
-            List<Problem> ps = mapProblems(write(dir, "m.yaml", withGate("                  at-most: " + v + "\n")));
+            List<Problem> ps = mapProblems(write(dir, "m.yaml", withGate("      at-most: " + v + "\n")));
             assertThat(ps).as(v).hasSize(1);
             assertThat(ps.get(0).message()).contains("at-most must be between 0 and the budget (1), not " + v);
             assertThat(ps.get(0).hint()).contains("from 0 to 1");
@@ -85,8 +85,8 @@ class EventDurationLoaderTest {
 
     @Test
     void everyProblemAtOnce() throws Exception {
-        String text = edit(withGate("                  duration: forever\n                  at-most: 7\n"),
-                "                  extra: 0.5\n", "                  extra: 0.5\n                  duration: momentary\n");
+        String text = edit(withGate("      duration: forever\n      at-most: 7\n"),
+                "      extra: 0.5\n", "      extra: 0.5\n      duration: momentary\n");
         assertThat(mapProblems(write(dir, "m.yaml", text))).hasSize(3);
     }
 }
