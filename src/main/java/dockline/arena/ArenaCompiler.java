@@ -48,8 +48,9 @@ public final class ArenaCompiler {
     /**
      * The number of disturbance states of the mission's arena ({@link DisturbanceStates}), without
      * building the arena: O(cells + states · rules). The arena has this many robot vertices per free cell.
+     * -1 when there are more than {@code maxStates}.
      */
-    public static int disturbanceStateCount(Mission mission) {
+    public static int disturbanceStateCount(Mission mission, int maxStates) {
         BuildingMap map = mission.map();
         int w = map.width();
         int cells = w * map.height();
@@ -70,7 +71,11 @@ public final class ArenaCompiler {
                 }
             }
         }
-        return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule).count();
+        try {
+            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates).count();
+        } catch (DisturbanceStates.TooManyStates e) {
+            return -1;
+        }
     }
 
     /**
@@ -180,16 +185,23 @@ public final class ArenaCompiler {
         if (!map.isFree(start)) {
             throw new IllegalArgumentException("start cell " + start + " is not a free cell");
         }
-        DisturbanceStates states = DisturbanceStates.of(map, budget, doorRule, blockRule);
+        long limit = Runtime.getRuntime().maxMemory() / 2;
+        int maxStates = (int) Math.min(Integer.MAX_VALUE / 16, limit / BYTES_PER_ROBOT_VERTEX / Math.max(1, freeCount) + 1);
+        DisturbanceStates states;
+        try {
+            states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1));
+        } catch (DisturbanceStates.TooManyStates e) {
+            long robots = (long) freeCount * e.found;
+            throw new ArenaTooLargeException(freeCount, e.found, robots, robots * BYTES_PER_ROBOT_VERTEX, limit, true);
+        }
         int kk = states.count();
         if (!states.plain()) {
             // without lasting events the arena is as before (its size was never checked here); with them
             // the states multiply the cells, so refuse before allocating what cannot fit
             long robots = (long) freeCount * kk;
             long bytes = robots * BYTES_PER_ROBOT_VERTEX;
-            long limit = Runtime.getRuntime().maxMemory() / 2;
             if (bytes > limit || robots > Integer.MAX_VALUE / 16) {
-                throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit);
+                throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit, false);
             }
         }
         int robotCount = Math.multiplyExact(freeCount, kk);

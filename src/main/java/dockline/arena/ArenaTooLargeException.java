@@ -11,8 +11,13 @@ public final class ArenaTooLargeException extends ArithmeticException {
     private final long robotVertices;
     private final int states;
 
-    public ArenaTooLargeException(int freeCells, int states, long robotVertices, long bytes, long limitBytes) {
-        super("the arena would have " + robotVertices + " robot vertices (" + freeCells + " free cells x " + states
+    /**
+     * @param atLeast whether the counting stopped at the limit, so the figures are lower bounds
+     */
+    public ArenaTooLargeException(int freeCells, int states, long robotVertices, long bytes, long limitBytes,
+                                  boolean atLeast) {
+        super("the arena would have " + (atLeast ? "more than " : "") + robotVertices + " robot vertices ("
+                + freeCells + " free cells x " + (atLeast ? "more than " : "") + states
                 + " disturbance states: budget left, doors and zones closed by lasting events, at-most counts),"
                 + " about " + bytes / (1024 * 1024) + " MB, over the " + limitBytes / (1024 * 1024) + " MB it may use;"
                 + " make some door-shut or blockage events 'duration: momentary', give them 'at-most' limits,"

@@ -25,8 +25,9 @@ import java.util.Map;
  * that may still happen; only states an event sequence can produce are kept (a door item is only
  * closed by the robot trying to enter that door, so the sets found are those of at most K items).
  *
- * <p>Cost: O(S · R) time for S states and R rules, plus O(S · K) memory; S is at most
- * sum over j ≤ K of (items choose j) times the count tuples.
+ * <p>Cost: O(S · (R + C)) time for S states, R rules and C door cells of lasting rules, plus
+ * O(S · K) memory; S is at most the sum over j ≤ K of (items choose j), times the count tuples of the
+ * at-most entries. A limit on S makes a model far too large fail fast ({@link TooManyStates}).
  */
 public final class DisturbanceStates {
 
@@ -82,6 +83,24 @@ public final class DisturbanceStates {
      * @throws ArithmeticException if there would be more than {@code Integer.MAX_VALUE / 2} states
      */
     static DisturbanceStates of(BuildingMap map, int budget, int[] doorRule, int[] blockRule) {
+        return of(map, budget, doorRule, blockRule, Integer.MAX_VALUE / 2);
+    }
+
+    /** Thrown when more than the allowed number of states would be found; says how many were found. */
+    static final class TooManyStates extends ArithmeticException {
+        final int found;
+
+        TooManyStates(int found) {
+            super("more than " + found + " disturbance states");
+            this.found = found;
+        }
+    }
+
+    /**
+     * The states, or {@link TooManyStates} as soon as more than {@code maxStates} are found (so that a
+     * model far too large is refused in time proportional to the limit, not to its own size).
+     */
+    static DisturbanceStates of(BuildingMap map, int budget, int[] doorRule, int[] blockRule, int maxStates) {
         int w = map.width();
         int cells = doorRule.length;
         List<EventRule> rules = map.disturbances().rules();
@@ -203,8 +222,8 @@ public final class DisturbanceStates {
                             }
                         }
                     }
-                    if (sb.size() > Integer.MAX_VALUE / 2) {
-                        throw new ArithmeticException("too many disturbance states");
+                    if (sb.size() > maxStates) {
+                        throw new TooManyStates(maxStates);
                     }
                 }
             }

@@ -556,7 +556,8 @@ public final class Benchmark {
 
     /** Disturbance states of a mission, counted on a one-row copy of nothing but its rules (cheap). */
     private static long lastingStates(Mission m) {
-        return dockline.arena.ArenaCompiler.disturbanceStateCount(m);
+        int n = dockline.arena.ArenaCompiler.disturbanceStateCount(m, 1_000_000);
+        return n < 0 ? Long.MAX_VALUE / 4 : n;
     }
 
     /**
@@ -577,7 +578,7 @@ public final class Benchmark {
                 new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
                 m.startCharge(), m.reserve(), m.tasks(), m.objective());
         long states = lastingStates(lm);
-        long robots = states * inst.arena.freeCellCount();
+        long robots = states >= Long.MAX_VALUE / 4 ? states : states * inst.arena.freeCellCount();
         if (robots > LASTING_ROBOT_VERTEX_LIMIT) {
             return BenchRow.skipped(inst.side, inst.kind, "lasting", robots, 0, "skipped: the arena with lasting doors"
                     + " would have " + robots + " robot vertices (" + states + " disturbance states), over this run's"
