@@ -116,6 +116,33 @@ class LastingDemoTest {
         assertThat(forced.last().cell().toString()).isEqualTo("1:2");
     }
 
+    /**
+     * One map entry naming two doors with {@code at-most: 1} shares one count (maps/README.md): with
+     * budget 2 the building may still shut only one of them, so the robot always gets round the wall;
+     * without the limit both can stay shut and the lab is cut off. Oracle: that hand reasoning, and
+     * {@link LastingBruteForce} for the unlimited case (it counts per rule, so it is not asked about
+     * the shared count).
+     */
+    @Test
+    void atMost_isSharedByTheRulesOfOneEntry() {
+        Mission two = ring().withBudget(2);
+        assertThat(ReserveSolver.analyse(two, ReserveOptions.defaults()).guaranteed()).isFalse();
+        assertThat(new LastingBruteForce(two).guaranteed()).isFalse();
+        java.util.List<dockline.model.EventRule> rules = new java.util.ArrayList<>();
+        for (dockline.model.EventRule r : two.map().disturbances().rules()) {
+            // one rule per door, both in entry 0, as the loader makes them from `where: [north, south]`
+            for (dockline.model.Cell c : r.cells()) {
+                rules.add(new dockline.model.EventRule(r.kind(), "door " + c, List.of(c), r.extraWh(), r.duration(), 1, 0));
+            }
+        }
+        assertThat(rules).hasSize(2);
+        Mission shared = LastingMissions.withRules(two, rules);
+        ReserveAnalysis a = ReserveSolver.analyse(shared, ReserveOptions.defaults());
+        assertThat(a.guaranteed()).isTrue();
+        assertThat(a.arena().states().limitCount()).isEqualTo(1);
+        assertThat(CertificateChecker.check(a.arena(), a.policy().orElseThrow(), shared.reserveUnits()).ok()).isTrue();
+    }
+
     /** Oracle: the format of missions/POLICY-FORMAT.md, read back by the reader (round trip). */
     @Test
     void policyFiles_carryTheClosures_inJsonAndCsv() throws Exception {
