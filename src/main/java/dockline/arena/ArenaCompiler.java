@@ -17,7 +17,7 @@ import java.util.List;
 
 /**
  * Compiles a mission (map + robot + disturbance model) into its {@link Arena}, following the
- * reference semantics of DESIGN.md 2.3 and maps/README.md.
+ * reference semantics of maps/README.md ("Game semantics").
  *
  * <p>A robot vertex is (free cell, disturbance state) ({@link DisturbanceStates}: budget left, doors and
  * zones closed by lasting events, events used per {@code at-most} entry); with no lasting rule and no
