@@ -59,7 +59,9 @@ public final class ReplayCommand implements Callable<Integer> {
     Disturbance disturbance;
 
     @Option(names = "--force", paramLabel = "STEP:EVENT,...",
-            description = "force events at steps, nominal elsewhere, e.g. 14:door-shut,20:slip@3:4"
+            description = "force events at steps, nominal elsewhere, e.g. 14:door-shut,20:slip@3:4; or at a named"
+                    + " door or zone the first time the robot tries to enter it, e.g. door-shut@west-fire-door"
+                    + " (a lasting rule closes it for the rest of the mission)"
                     + " (events: door-shut, blockage, slip, drag; a slip may name its cell)")
     String force;
 

@@ -150,11 +150,17 @@ public final class PolicyFiles {
             "to");
     private static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
             "action", "to");
+    /** The situation's closures (lasting events and at-most counts); written only when some row has them. */
+    private static final String CLOSED = "closed";
+    private static final List<String> JSON_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
+            "action", "to", CLOSED);
     private static final String CSV_HEADER = String.join(",", ROW_KEYS);
     private static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
     /** The header rows of versions 1 and 2. */
     private static final String OLD_CSV_HEADER = "cell,level,budget-left,progress,action,to";
     private static final String OLD_CSV_SCORE_HEADER = "cell,level,budget-left,progress,score,action,to";
+    private static final String CSV_CLOSED_HEADER = CSV_HEADER + "," + CLOSED;
+    private static final String CSV_SCORE_CLOSED_HEADER = CSV_SCORE_HEADER + "," + CLOSED;
     private static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
 
     private PolicyFiles() {
@@ -234,6 +240,9 @@ public final class PolicyFiles {
             if (e.action().kind() == ActionKind.MOVE) {
                 g.writeStringField("to", e.action().target().toString());
             }
+            if (!e.closures().isEmpty()) {
+                g.writeStringField(CLOSED, e.closures());
+            }
             g.writeEndObject();
         }
         return sw.toString();
@@ -268,7 +277,8 @@ public final class PolicyFiles {
             w.write("# reserveKept: " + t.reserveKept() + nl);
         }
         boolean scored = h.score().isPresent();
-        w.write((scored ? CSV_SCORE_HEADER : CSV_HEADER) + nl);
+        boolean closed = policy.entries().stream().anyMatch(e -> !e.closures().isEmpty());
+        w.write((scored ? closed ? CSV_SCORE_CLOSED_HEADER : CSV_SCORE_HEADER : closed ? CSV_CLOSED_HEADER : CSV_HEADER) + nl);
         StringBuilder sb = new StringBuilder();
         for (PolicyEntry e : policy.entries()) {
             sb.setLength(0);
@@ -280,6 +290,10 @@ public final class PolicyFiles {
             sb.append(e.action().kind().word()).append(',');
             if (e.action().kind() == ActionKind.MOVE) {
                 sb.append(e.action().target());
+            }
+            if (closed) {
+                // the last column: it may hold commas, the reader takes the rest of the line
+                sb.append(',').append(e.closures().replace('\n', ' ').replace('\r', ' '));
             }
             w.write(sb.append(nl).toString());
         }
@@ -321,10 +335,10 @@ public final class PolicyFiles {
 
         void add(Pos pos, PolicyEntry e) {
             String key = e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress()
-                    + (e.scored() ? "/" + e.score().text() : "");
+                    + (e.scored() ? "/" + e.score().text() : "") + "/" + e.closures();
             if (!seen.add(key)) {
                 problems.add(pos, "a second row for cell " + e.cell() + ", level " + e.level() + ", budget left "
-                        + e.budgetLeft() + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
+                        + e.budgetLeft() + (e.closures().isEmpty() ? "" : " (" + e.closures() + ")") + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
                         "keep one action per situation");
                 return;
             }
@@ -412,7 +426,8 @@ public final class PolicyFiles {
             p.add(at.get("to"), "'" + kind.word() + "' stays on its cell and takes no 'to'", "leave 'to' out");
             return null;
         }
-        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score) : null;
+        String closures = values.getOrDefault(CLOSED, "").trim();
+        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score, closures) : null;
     }
 
     private static boolean knownVersion(String v) {
@@ -648,8 +663,8 @@ public final class PolicyFiles {
                 Pos kp = pos(j.currentTokenLocation());
                 JsonToken t = j.nextToken();
                 Pos vp = pos(j.currentTokenLocation());
-                if (!SCORE_ROW_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, SCORE_ROW_KEYS);
+                if (!JSON_ROW_KEYS.contains(key)) {
+                    String near = Spelling.closest(key, JSON_ROW_KEYS);
                     p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : null);
                     j.skipChildren();
                     bad = true;
@@ -741,9 +756,11 @@ public final class PolicyFiles {
                     String hr = line.trim();
                     if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
                         columns = SCORE_ROW_KEYS;
+                    } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
+                        columns = List.of(hr.split(","));
                     } else if (!hr.equals(CSV_HEADER) && !hr.equals(OLD_CSV_HEADER)) {
                         p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
-                                + "' for a discounted mission)");
+                                + "' for a discounted mission; either followed by '," + CLOSED + "' with lasting events)");
                         return null;
                     }
                     continue;
@@ -769,7 +786,11 @@ public final class PolicyFiles {
             Map<String, Pos> at = new LinkedHashMap<>();
             int field = 0;
             int start = 0;
+            boolean restIsClosed = columns.get(columns.size() - 1).equals(CLOSED);
             for (int i = 0; i <= line.length(); i++) {
+                if (restIsClosed && field == columns.size() - 1) {
+                    i = line.length(); // the closures column takes the rest of the line, commas and all
+                }
                 if (i == line.length() || line.charAt(i) == ',') {
                     if (field < columns.size()) {
                         String v = line.substring(start, i);

@@ -94,6 +94,9 @@ public final class ReplayFormats {
                     o.put("door", s.event().doorName());
                 }
                 o.put("eventCell", s.event().cell().toString());
+                if (s.event().lasting()) {
+                    o.put("closedForGood", s.event().closed());
+                }
             }
             o.put("levelUnits", s.batteryUnits());
             o.put("levelWh", s.batteryWh());

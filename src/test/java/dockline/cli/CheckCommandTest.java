@@ -73,11 +73,14 @@ class CheckCommandTest {
 
     @Test
     void overrides_changeTheVerdict() {
-        // a fuller battery and a lower floor make the late return safe
+        // no charge beats a bridge fire door that stays shut (lasting, the map's default) ...
         Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%");
-        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("reserve floor 30 units = 15 Wh (10%)");
-        Run none = run("check", "missions/late-return.yaml", "--budget", "0", "--json");
+        // ... but with no disturbance at all the fuller battery and the lower floor make it safe
+        Run none = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%", "--budget",
+                "0", "--json");
+        assertThat(none.code()).as(none.err()).isEqualTo(ExitCodes.OK);
         assertThat(none.out()).contains("\"budget\" : 0");
     }
 

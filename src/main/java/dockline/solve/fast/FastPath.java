@@ -214,7 +214,7 @@ public final class FastPath {
             int g = p - v * gc;
             int d = arena.target(values.chosenEdge(v, g));
             entries.add(new PolicyEntry(arena.cellOf(v), level, arena.budgetLeft(v), goal.progressMask(g),
-                    arena.action(d)));
+                    arena.action(d), null, arena.closures(v)));
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
                 int r = arena.target(e);
                 int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
