@@ -38,7 +38,7 @@ public enum InputKind {
                 String near = Spelling.closest(k, all);
                 if (near != null && !near.equals(k)) {
                     problems.add(m.entries().get(keys.indexOf(k)).keyPos(), "unknown key '" + Loading.shorten(k)
-                            + "', did you mean '" + near + "'?", null);
+                            + "', did you mean '" + near + "'?", "correct the spelling of the key");
                 }
             }
         }

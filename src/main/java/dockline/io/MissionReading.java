@@ -20,12 +20,14 @@ import java.io.IOException;
 import java.math.BigDecimal;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
@@ -150,7 +152,16 @@ final class MissionReading {
         try {
             mapPath = doc.file().resolveSibling(rel).normalize();
         } catch (java.nio.file.InvalidPathException e) {
-            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path", null);
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path",
+                    "give the map file's path relative to the mission file, e.g. ../maps/clinic-wing.yaml");
+            mapBroken = true;
+            return;
+        }
+        String fileName = mapPath.getFileName() == null ? "" : mapPath.getFileName().toString().toLowerCase(Locale.ROOT);
+        if (!fileName.endsWith(".yaml") && !fileName.endsWith(".yml")) {
+            // a mission may name any path; reading only YAML files keeps it from showing other files' content
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a .yaml or .yml file",
+                    "name the building map's YAML file, e.g. map: ../maps/clinic-wing.yaml");
             mapBroken = true;
             return;
         }
@@ -160,9 +171,15 @@ final class MissionReading {
             mapBroken = true;
             return;
         }
-        if (!Files.isRegularFile(mapPath)) {
+        if (!Files.exists(mapPath, LinkOption.NOFOLLOW_LINKS)) {
             problems.add(mapNode.pos(), "map file '" + Loading.shorten(rel) + "' not found (looked for " + mapPath + ")",
                     nearbyFiles(mapPath));
+            mapBroken = true;
+            return;
+        }
+        YamlReader.Refusal refused = YamlReader.refusal(mapPath);
+        if (refused != null) {
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "': " + refused.message(), refused.hint());
             mapBroken = true;
             return;
         }
@@ -196,6 +213,7 @@ final class MissionReading {
                 return "the path is relative to the mission file's folder";
             }
         }
+        names.remove(base); // the wanted name itself may be listed (e.g. a dangling link): never suggest it back
         String near = Spelling.closest(base, names);
         return near != null ? "did you mean '" + near + "'? the path is relative to the mission file's folder"
                 : "the path is relative to the mission file's folder";
@@ -523,7 +541,8 @@ final class MissionReading {
         }
         for (Loading.Named a : nodes.avoid) {
             if (visit.contains(a.name())) {
-                problems.add(a.pos(), "zone '" + Loading.shorten(a.name()) + "' is both to visit and to avoid", null);
+                problems.add(a.pos(), "zone '" + Loading.shorten(a.name()) + "' is both to visit and to avoid",
+                        "remove it from one of the two lists");
                 ok = false;
             }
         }

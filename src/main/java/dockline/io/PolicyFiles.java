@@ -341,7 +341,7 @@ public final class PolicyFiles {
         boolean ok = true;
         for (String k : List.of("cell", "level", "budget-left", "progress", "action")) {
             if (!values.containsKey(k)) {
-                p.add(rowPos, "row has no '" + k + "'");
+                p.addPolicy(rowPos, "row has no '" + k + "'");
                 ok = false;
             }
         }
@@ -377,7 +377,7 @@ public final class PolicyFiles {
         Cell target = c;
         if (kind == ActionKind.MOVE) {
             if (to == null || to.isBlank()) {
-                p.add(at.getOrDefault("to", rowPos), "a move needs 'to', the cell it goes to");
+                p.addPolicy(at.getOrDefault("to", rowPos), "a move needs 'to', the cell it goes to");
                 return null;
             }
             target = cell(to);
@@ -400,7 +400,7 @@ public final class PolicyFiles {
     private static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
         String v = values.get(key).trim();
         if (!v.matches("\\d{1,9}")) {
-            p.add(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
+            p.addPolicy(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
             return -1;
         }
         return Integer.parseInt(v);
@@ -410,7 +410,7 @@ public final class PolicyFiles {
                                  List<String> tasks) {
         for (String k : List.of("mission", "unit-wh", "floor-units", "capacity-units", "budget")) {
             if (!values.containsKey(k)) {
-                p.add(pos, "no '" + k + "' in the policy file");
+                p.addPolicy(pos, "no '" + k + "' in the policy file");
                 return null;
             }
         }
@@ -418,11 +418,11 @@ public final class PolicyFiles {
         try {
             unit = Quantities.parseDecimal(values.get("unit-wh"));
             if (unit.signum() <= 0) {
-                p.add(at.get("unit-wh"), "'unit-wh' must be positive");
+                p.addPolicy(at.get("unit-wh"), "'unit-wh' must be positive");
                 return null;
             }
         } catch (IllegalArgumentException e) {
-            p.add(at.get("unit-wh"), e.getMessage());
+            p.addPolicy(at.get("unit-wh"), e.getMessage());
             return null;
         }
         int floor = nonNegative(p, values, at, "floor-units");
@@ -453,19 +453,19 @@ public final class PolicyFiles {
             return Optional.empty();
         }
         if (!kind.trim().equals("discounted")) {
-            p.add(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
+            p.addPolicy(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
             return null;
         }
         for (String k : List.of("discount", "threshold", "weight-bound")) {
             if (!values.containsKey(k)) {
-                p.add(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
+                p.addPolicy(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
                 return null;
             }
         }
         boolean ok = true;
         int d = nonNegative(p, values, at, "discount");
         if (d >= 0 && d < 2) {
-            p.add(at.get("discount"), "'discount' must be a whole number of at least 2");
+            p.addPolicy(at.get("discount"), "'discount' must be a whole number of at least 2");
             ok = false;
         }
         int mu = nonNegative(p, values, at, "weight-bound");
@@ -480,7 +480,7 @@ public final class PolicyFiles {
             }
         }
         if (v == null) {
-            p.add(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
+            p.addPolicy(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
             ok = false;
         }
         Relation rel = Relation.AT_LEAST;
@@ -491,7 +491,7 @@ public final class PolicyFiles {
                 default -> null;
             };
             if (rel == null) {
-                p.add(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
+                p.addPolicy(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
                 ok = false;
             }
         }
@@ -499,7 +499,7 @@ public final class PolicyFiles {
         if (values.containsKey("reserve-kept")) {
             String k = values.get("reserve-kept").trim();
             if (!k.equals("true") && !k.equals("false")) {
-                p.add(at.get("reserve-kept"), "'reserve-kept' must be true or false");
+                p.addPolicy(at.get("reserve-kept"), "'reserve-kept' must be true or false");
                 ok = false;
             }
             kept = k.equals("true");
@@ -548,13 +548,13 @@ public final class PolicyFiles {
                     switch (key) {
                         case "tasks" -> {
                             if (t != JsonToken.START_ARRAY) {
-                                p.add(vp, "'tasks' must be a list of zone names");
+                                p.addPolicy(vp, "'tasks' must be a list of zone names");
                                 j.skipChildren();
                                 continue;
                             }
                             while (j.nextToken() != JsonToken.END_ARRAY) {
                                 if (j.currentToken() != JsonToken.VALUE_STRING) {
-                                    p.add(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
+                                    p.addPolicy(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
                                     j.skipChildren();
                                 } else {
                                     tasks.add(j.getText());
@@ -564,7 +564,7 @@ public final class PolicyFiles {
                         case "rows" -> {
                             sawRows = true;
                             if (t != JsonToken.START_ARRAY) {
-                                p.add(vp, "'rows' must be a list of rows");
+                                p.addPolicy(vp, "'rows' must be a list of rows");
                                 j.skipChildren();
                                 continue;
                             }
@@ -574,7 +574,7 @@ public final class PolicyFiles {
                         }
                         default -> {
                             if (!t.isScalarValue()) {
-                                p.add(vp, "'" + key + "' must be a single value");
+                                p.addPolicy(vp, "'" + key + "' must be a single value");
                                 j.skipChildren();
                                 continue;
                             }
@@ -584,14 +584,14 @@ public final class PolicyFiles {
                     }
                 }
                 if (!FORMAT.equals(values.get("format"))) {
-                    p.add(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
+                    p.addPolicy(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
                 }
                 if (values.containsKey("version") && !knownVersion(values.get("version"))) {
-                    p.add(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
+                    p.addPolicy(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
                             + " is not known (this dockline reads versions " + VERSION + " and " + VERSION_WITH_SCORE + ")");
                 }
                 if (!sawRows) {
-                    p.add(top, "no 'rows' in the policy file");
+                    p.addPolicy(top, "no 'rows' in the policy file");
                 }
                 Header h = header(p, top, values, at, tasks);
                 if (h == null) {
@@ -600,10 +600,10 @@ public final class PolicyFiles {
                 Policy policy = rows.policy(h);
                 return policy == null || p.any() ? null : new Document(h, policy);
             } catch (JsonParseException e) {
-                p.add(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
+                p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
                 return null;
             } catch (IOException e) {
-                p.add(Pos.START, "cannot read the file: " + e.getMessage());
+                p.addPolicy(Pos.START, "cannot read the file: " + e.getMessage());
                 return null;
             }
         }
@@ -611,7 +611,7 @@ public final class PolicyFiles {
         private void readRow(JsonParser j, Rows rows) throws IOException {
             Pos rp = pos(j.currentTokenLocation());
             if (j.currentToken() != JsonToken.START_OBJECT) {
-                p.add(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
+                p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
                 j.skipChildren();
                 return;
             }
@@ -631,7 +631,7 @@ public final class PolicyFiles {
                     continue;
                 }
                 if (!t.isScalarValue()) {
-                    p.add(vp, "'" + key + "' must be a single value");
+                    p.addPolicy(vp, "'" + key + "' must be a single value");
                     j.skipChildren();
                     bad = true;
                     continue;
@@ -678,7 +678,7 @@ public final class PolicyFiles {
                     if (!formatLine && !headerRow) {
                         formatLine = true;
                         if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
-                            p.add(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
+                            p.addPolicy(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
                                     + VERSION + "' (or '# " + FORMAT + " " + VERSION_WITH_SCORE + "' with a score memory)");
                         }
                         continue;
@@ -713,7 +713,7 @@ public final class PolicyFiles {
                     if (line.trim().equals(CSV_SCORE_HEADER)) {
                         columns = SCORE_ROW_KEYS;
                     } else if (!line.trim().equals(CSV_HEADER)) {
-                        p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
+                        p.addPolicy(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
                                 + "' for a discounted mission)");
                         return null;
                     }
@@ -722,10 +722,10 @@ public final class PolicyFiles {
                 readRow(line, ln, rows);
             }
             if (!formatLine) {
-                p.add(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
+                p.addPolicy(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
             }
             if (!headerRow) {
-                p.add(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
+                p.addPolicy(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
             }
             Header h = header(p, Pos.START, values, at, tasks);
             if (h == null) {
@@ -754,7 +754,7 @@ public final class PolicyFiles {
                 }
             }
             if (field != columns.size()) {
-                p.add(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
+                p.addPolicy(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
                         + "), this one has " + field);
                 return;
             }
