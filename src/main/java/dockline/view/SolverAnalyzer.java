@@ -5,7 +5,6 @@ import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.monitor.ReserveMonitor;
 import dockline.replay.ForcedEventException;
 import dockline.replay.MissionReplays;
@@ -13,7 +12,6 @@ import dockline.replay.Replay;
 import dockline.solve.ChargeNeeded;
 import dockline.solve.Policy;
 import dockline.solve.PolicyEntry;
-import dockline.solve.ProductTooLargeException;
 import dockline.solve.ReserveAnalysis;
 import dockline.solve.ReserveOptions;
 import java.util.ArrayList;
@@ -45,8 +43,8 @@ public final class SolverAnalyzer implements Analyzer {
             heat = ChargeNeeded.computeImplicitly(mr.arena(), a.goal(),
                     new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product());
             stopIf(cancelled);
-        } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
-            throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);
+        } catch (dockline.model.ResourceLimitException e) {
+            throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
         List<ViewReplay> replays = new ArrayList<>();
         List<String> problems = new ArrayList<>();
@@ -126,6 +124,11 @@ public final class SolverAnalyzer implements Analyzer {
                     + Units.both(m, mr.bestEffortFloor()) : "");
         }
         for (String p : problems) {
+            if (p != null && p.startsWith("internal")) {
+                // a defect of the tool is an error, never a footnote: the verdict is not to be relied on
+                outcome = Verdict.Outcome.NOT_CHECKED;
+                words.insert(0, "INTERNAL ERROR: " + p + "; do not rely on this result and please report it. ");
+            }
             cert += "; " + p;
         }
         return new Verdict(outcome, words.toString(), cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
