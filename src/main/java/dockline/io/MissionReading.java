@@ -49,6 +49,8 @@ final class MissionReading {
     private final Problems problems;
     private final Loading in;
     private BuildingMap map;
+    /** Where the discounted objective's threshold is written, for the range check after loading. */
+    private Pos thresholdPos;
     private boolean mapBroken;
 
     MissionReading(YamlReader.Document doc, Problems problems) {
@@ -137,7 +139,34 @@ final class MissionReading {
                 || start == null || startCharge == null || reserve == null || tasks == null || objective == null) {
             return null;
         }
-        return new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+        Mission mission = new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+        return objective instanceof Objective.Discounted d && !discountedFits(mission, d) ? null : mission;
+    }
+
+    /**
+     * Whether the discounted comparator's exact 64-bit arithmetic fits this threshold and the largest
+     * energy change of this mission's moves (what {@code check} would otherwise refuse after loading);
+     * a problem at the threshold if not. A game too large to compile is left to {@code check}'s
+     * own limits.
+     */
+    private boolean discountedFits(Mission mission, Objective.Discounted d) {
+        int mu;
+        try {
+            mu = dockline.arena.ArenaCompiler.compile(mission).maxAbsWeight();
+        } catch (dockline.model.ResourceLimitException tooLarge) {
+            return true;
+        }
+        try {
+            dockline.monitor.DiscountedComparator.of(d, mu);
+            return true;
+        } catch (ArithmeticException e) {
+            problems.add(thresholdPos != null ? thresholdPos : Pos.START, "threshold " + Loading.shorten(d.threshold().toString())
+                            + " is too large for exact arithmetic: with energy changes of up to " + mu + " units per step"
+                            + " and discount " + d.discount() + ", the comparator's numbers would pass the 64-bit range",
+                    "give a threshold with a smaller numerator and denominator (e.g. \"3/4\"); a coarser energy"
+                            + " resolution does not help much, as the threshold is counted in energy units");
+            return false;
+        }
     }
 
     // ---------------------------------------------------------------- map
@@ -611,6 +640,7 @@ final class MissionReading {
             d = in.integer(dn, "discount (a whole number, at least 2)", 2, MAX_DISCOUNT);
         }
         Rational threshold = null;
+        thresholdPos = tn == null ? null : tn.pos();
         if (tn instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
             String t = s.text().trim();
             try {
