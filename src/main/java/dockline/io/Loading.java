@@ -114,7 +114,12 @@ final class Loading {
         List<String> k = Arrays.asList(known);
         for (Node.Entry e : m.entries()) {
             if (!k.contains(e.key())) {
-                unknown.computeIfAbsent(m, x -> new ArrayList<>()).add(e.key());
+                List<String> u = unknown.computeIfAbsent(m, x -> new ArrayList<>());
+                if (problems.count() >= Problems.LIMIT) {
+                    problems.dropOne(); // the report is full: count it without the cost of wording it
+                    continue;
+                }
+                u.add(e.key());
                 String near = Spelling.closest(e.key(), k);
                 problems.add(e.keyPos(), near != null
                                 ? "unknown key '" + shorten(e.key()) + "', did you mean '" + near + "'?"

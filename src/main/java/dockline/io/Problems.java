@@ -88,6 +88,12 @@ final class Problems {
         return sb.toString();
     }
 
+    /** A "N more ..." line: kept even though its position is explained by the problems it sums up. */
+    void addSummary(Pos pos, String message, String hint) {
+        attempts++;
+        add(new Problem(file, pos.line(), pos.column(), safe(message), safe(hint)));
+    }
+
     /** A problem that explains its position: later problems at the very same position are dropped. */
     void addExplaining(Pos pos, String message, String hint) {
         add(pos, message, hint);
@@ -115,6 +121,12 @@ final class Problems {
         dropped += other.dropped + other.list.size() - taken;
         attempts += other.attempts;
         explained.addAll(other.explained);
+    }
+
+    /** Counts a problem that is not worded because the report is full ({@link #LIMIT}). */
+    void dropOne() {
+        attempts++;
+        dropped++;
     }
 
     void addAll(List<Problem> ps) {

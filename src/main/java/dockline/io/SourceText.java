@@ -120,7 +120,7 @@ final class SourceText {
             }
         }
         if (controls.size() > SHOWN) {
-            problems.add(src.posOf(controls.get(SHOWN)), (controls.size() - SHOWN) + " more control characters",
+            problems.addSummary(src.posOf(controls.get(SHOWN)), (controls.size() - SHOWN) + " more control characters",
                     "remove them; dockline files are plain text");
         }
         for (int k = 0; k < bad.size(); k++) {
@@ -134,7 +134,7 @@ final class SourceText {
             }
         }
         if (bad.size() > SHOWN) {
-            problems.add(src.posOf(bad.get(SHOWN)[0]), (bad.size() - SHOWN) + " more bytes that are not valid UTF-8",
+            problems.addSummary(src.posOf(bad.get(SHOWN)[0]), (bad.size() - SHOWN) + " more bytes that are not valid UTF-8",
                     "save the file as UTF-8 text");
         }
         for (int k = 0; k < tabs.size(); k++) {
@@ -147,7 +147,7 @@ final class SourceText {
             }
         }
         if (tabs.size() > SHOWN) {
-            problems.add(src.posOf(tabs.get(SHOWN)), (tabs.size() - SHOWN) + " more tab characters",
+            problems.addSummary(src.posOf(tabs.get(SHOWN)), (tabs.size() - SHOWN) + " more tab characters",
                     "use spaces: tabs are not allowed in dockline files");
         }
         return src;
