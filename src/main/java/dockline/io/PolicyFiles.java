@@ -278,7 +278,7 @@ public final class PolicyFiles {
         } catch (NoSuchFileException e) {
             throw new InputException(new Problem(file, 1, 1, "no such file", "check the path"));
         } catch (IOException e) {
-            throw new InputException(new Problem(file, 1, 1, "cannot read the file: " + e.getMessage()));
+            throw new InputException(new Problem(file, 1, 1, "cannot read the file: " + e.getMessage(), "check the path and the file's permissions"));
         }
         Document d = isCsv(file) ? new CsvReading(problems, bytes).read() : new JsonReading(problems, bytes).read();
         problems.throwIfAny();
@@ -541,7 +541,7 @@ public final class PolicyFiles {
                     Pos vp = pos(j.currentTokenLocation());
                     if (!TOP_KEYS.contains(key)) {
                         String near = Spelling.closest(key, TOP_KEYS);
-                        p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : null);
+                        p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
                         j.skipChildren();
                         continue;
                     }
@@ -625,7 +625,7 @@ public final class PolicyFiles {
                 Pos vp = pos(j.currentTokenLocation());
                 if (!SCORE_ROW_KEYS.contains(key)) {
                     String near = Spelling.closest(key, SCORE_ROW_KEYS);
-                    p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : null);
+                    p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
                     j.skipChildren();
                     bad = true;
                     continue;
@@ -693,7 +693,7 @@ public final class PolicyFiles {
                     if (!TOP_KEYS.contains(key)) {
                         String near = Spelling.closest(key, TOP_KEYS);
                         p.add(new Pos(ln, line.indexOf(key) + 1), "unknown key '" + Loading.shorten(key) + "'",
-                                near != null ? "did you mean '" + near + "'?" : null);
+                                near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
                         continue;
                     }
                     if (key.equals("tasks")) {
