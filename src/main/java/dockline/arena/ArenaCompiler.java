@@ -55,7 +55,7 @@ public final class ArenaCompiler {
      * Refuses, before anything is allocated, an arena whose estimated peak is more than the JVM's
      * maximum heap: the refusal names the size and the heap, instead of an out-of-memory error midway.
      */
-    static void refuseIfTooLarge(int freeCells, int budgetLevels) {
+    public static void refuseIfTooLarge(int freeCells, int budgetLevels) {
         long robots = (long) freeCells * budgetLevels;
         long need = robots * PEAK_BYTES_PER_ROBOT_VERTEX;
         long heap = Runtime.getRuntime().maxMemory();
