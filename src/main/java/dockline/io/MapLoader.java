@@ -47,9 +47,17 @@ public final class MapLoader {
      * gets one problem that quotes none of its content.
      */
     static BuildingMap read(Path file, Problems problems) {
+        return read(file, problems, false);
+    }
+
+    /**
+     * As {@link #read(Path, Problems)}; {@code namedByMission}: the path comes from a mission's
+     * {@code map:}, so a file that is not a map at all is refused in one line that quotes none of it.
+     */
+    static BuildingMap read(Path file, Problems problems, boolean namedByMission) {
         Problems own = new Problems(file);
         YamlReader.Document doc = YamlReader.read(file, own);
-        if (doc != null && !looksLikeMap(doc)) {
+        if (namedByMission && doc != null && !looksLikeMap(doc)) {
             problems.add(Pos.START, NOT_A_MAP, "a map has 'cell-size:', 'legend:' and 'plan:' (see maps/README.md);"
                     + " check the path in the mission's 'map:'");
             return null;
@@ -76,16 +84,15 @@ public final class MapLoader {
         if (doc.root() != null) {
             return false; // a single value or a list
         }
-        if (doc.source() == null || doc.source().text().isBlank()) {
-            return true; // empty, or refused before decoding: its own message says so
-        }
-        for (int l = 1; l <= doc.source().lineCount(); l++) {
+        boolean content = false;
+        for (int l = 1; doc.source() != null && l <= doc.source().lineCount(); l++) {
             String line = doc.source().line(l).strip();
+            content |= !line.isEmpty() && !line.startsWith("#");
             int colon = line.indexOf(':');
             if (colon > 0 && keys.contains(line.substring(0, colon).strip().replace("\"", ""))) {
                 return true;
             }
         }
-        return false;
+        return !content; // empty or only comments: "the file is empty" says it without quoting
     }
 }

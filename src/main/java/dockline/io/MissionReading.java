@@ -186,17 +186,17 @@ final class MissionReading {
             mapBroken = true;
             return;
         }
+        if (Files.isDirectory(mapPath)) {
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is a folder, not a map file (" + mapPath + ")",
+                    "name the map's .yaml file in that folder");
+            mapBroken = true;
+            return;
+        }
         String fileName = mapPath.getFileName() == null ? "" : mapPath.getFileName().toString().toLowerCase(Locale.ROOT);
         if (!fileName.endsWith(".yaml") && !fileName.endsWith(".yml")) {
             // a mission may name any path; reading only YAML files keeps it from showing other files' content
             problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a .yaml or .yml file",
                     "name the building map's YAML file, e.g. map: ../maps/clinic-wing.yaml");
-            mapBroken = true;
-            return;
-        }
-        if (Files.isDirectory(mapPath)) {
-            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is a folder, not a map file (" + mapPath + ")",
-                    "name the map's .yaml file in that folder");
             mapBroken = true;
             return;
         }
@@ -213,7 +213,7 @@ final class MissionReading {
             return;
         }
         Problems mapProblems = new Problems(mapPath);
-        map = MapLoader.read(mapPath, mapProblems);
+        map = MapLoader.read(mapPath, mapProblems, true);
         if (mapProblems.any() || map == null) {
             try {
                 mapProblems.throwIfAny();

@@ -116,7 +116,7 @@ final class YamlReader {
             return null;
         }
         if (a.isDirectory()) {
-            return new Refusal("this is a folder, not a file", "name a .yaml file in that folder");
+            return new Refusal("this is a directory, not a file", "name a .yaml file in that folder");
         }
         return new Refusal("this is " + specialKind(file) + ", not a regular file; only files saved on disk are read",
                 "give the path of a map or mission file (.yaml)");

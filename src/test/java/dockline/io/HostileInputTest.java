@@ -72,7 +72,7 @@ class HostileInputTest {
             assertThat(mapProblems(Path.of("/dev/zero"))).singleElement()
                     .satisfies(p -> assertThat(p.message()).contains("device"));
         }
-        assertThat(mapProblems(dir)).singleElement().satisfies(p -> assertThat(p.message()).contains("folder"));
+        assertThat(mapProblems(dir)).singleElement().satisfies(p -> assertThat(p.message()).contains("directory"));
         Path a = dir.resolve("a.yaml");
         Path b = dir.resolve("b.yaml");
         try {
