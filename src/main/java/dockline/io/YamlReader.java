@@ -240,6 +240,9 @@ final class YamlReader {
                     }
                     String key = parser.currentName();
                     Pos keyPos = here();
+                    if (key != null && !plainText(key, keyPos)) {
+                        key = Loading.shorten(key); // reported; the escaped form keeps the rest of the checks going
+                    }
                     Node v = value(parser.nextToken(), depth + 1);
                     Node.Entry first = seen.get(key == null ? "" : key);
                     if (first != null) {
@@ -266,6 +269,9 @@ final class YamlReader {
                 return new Node.SeqNode(items, pos);
             }
             case VALUE_STRING:
+                if (!plainText(parser.getText(), pos)) {
+                    return new Node.Bad(pos);
+                }
                 return new Node.Scalar(parser.getText(), Node.Kind.STRING, pos);
             case VALUE_NUMBER_INT:
                 return new Node.Scalar(parser.getText(), Node.Kind.INTEGER, pos);
@@ -280,6 +286,32 @@ final class YamlReader {
                 problems.add(pos, "unsupported YAML value (a tag such as '!!binary'?)", "write plain text or numbers");
                 return new Node.Bad(pos);
         }
+    }
+
+    /** Longest text value or key: names and surfaces are short, and every output repeats them. */
+    static final int MAX_TEXT = 1000;
+
+    /**
+     * Whether a text value or key may be used as written: at most {@link #MAX_TEXT} characters (on one
+     * line) and
+     * without bidirectional controls (U+202A..U+202E, U+2066..U+2069, U+200E, U+200F, U+061C), which
+     * would reorder every report line that names it. A problem if not.
+     */
+    private boolean plainText(String t, Pos pos) {
+        if (t.length() > MAX_TEXT && t.indexOf('\n') < 0) { // a plan is a long text of many lines
+            problems.add(pos, "a text of " + t.length() + " characters (at most " + MAX_TEXT + "): '"
+                    + Loading.shorten(t) + "'", "names and values in dockline files are short; shorten it");
+            return false;
+        }
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (c >= 0x202A && c <= 0x202E || c >= 0x2066 && c <= 0x2069 || c == 0x200E || c == 0x200F || c == 0x061C) {
+                problems.add(pos, String.format("the text '%s' contains the bidirectional control U+%04X",
+                        Loading.shorten(t), (int) c), "remove it: it would reorder the lines that show this text");
+                return false;
+            }
+        }
+        return true;
     }
 
     private void checkDepth(int depth, Pos pos) {
