@@ -272,6 +272,11 @@ public final class PolicyFiles {
      */
     public static Document read(Path file) throws InputException {
         Problems problems = new Problems(file);
+        YamlReader.Refusal refused = YamlReader.refusal(file);
+        if (refused != null && Files.exists(file)) {
+            // a pipe or a device is refused before it is opened (reading one could block or never end)
+            throw new InputException(new Problem(file, 1, 1, refused.message(), refused.hint()));
+        }
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
