@@ -150,6 +150,7 @@ public final class Main implements Runnable {
             new ViewCommand(),
             new RenderCommand(),
             new BenchCommand(),
+            new ImportCommand(),
         };
     }
 

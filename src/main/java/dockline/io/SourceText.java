@@ -1,5 +1,6 @@
 package dockline.io;
 
+import dockline.util.MonotoneSearch;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
 import java.nio.charset.CharsetDecoder;
@@ -223,16 +224,7 @@ final class SourceText {
      * all, even on a file that is one long line.
      */
     Pos posOf(int index) {
-        int lo = 0;
-        int hi = lineStart.length - 1;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (lineStart[mid] <= index) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
+        int lo = MonotoneSearch.highest(0, lineStart.length - 1, i -> lineStart[i] <= index); // line 0 starts at 0
         int to = Math.min(Math.max(index, lineStart[lo]), text.length());
         int col;
         if (memoIndex >= 0 && memoLine == lo && memoIndex <= to) {
