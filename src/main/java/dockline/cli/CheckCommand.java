@@ -74,6 +74,15 @@ public final class CheckCommand implements Callable<Integer> {
             if (objective == null) {
                 return ExitCodes.BAD_INPUT;
             }
+            if (m.beyondOneTrip()) {
+                String refused = RoundsCheck.refusedOption(safest.on, route.nonDefault(),
+                        objective instanceof Objective.Discounted);
+                if (refused != null) {
+                    err.println("dockline: " + refused);
+                    return ExitCodes.BAD_INPUT;
+                }
+                return RoundsCheck.run(m, mission.memoryBudgetBytes(), json, out, err);
+            }
             if (objective instanceof Objective.Discounted && safest.on) {
                 err.println("dockline: --safest-policy applies to the reserve objective only");
                 return ExitCodes.BAD_INPUT;
