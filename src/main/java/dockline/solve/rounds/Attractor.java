@@ -82,6 +82,45 @@ final class Attractor {
         return rank;
     }
 
+    /**
+     * Re-chooses, at every robot vertex with a choice, among the edges to successors of the least rank (the
+     * same number of moves to the target), one whose worst outcome leaves the most charge: ties between
+     * equally short plans are broken towards the battery. Ranks, and so the fewest-moves promise, are kept.
+     * O(M).
+     *
+     * @param alive the subgame the successors must lie in
+     */
+    static void preferCharge(RoundsProduct p, boolean[] alive, int[] rank, int[] choice) {
+        for (int v = 0; v < p.vertexCount(); v++) {
+            if (!p.isRobot(v) || choice[v] < 0) {
+                continue;
+            }
+            int bestRank = rank[p.target(choice[v])];
+            int best = choice[v];
+            int bestLevel = worstLevel(p, p.target(best));
+            for (int e = p.outBegin(v); e < p.outEnd(v); e++) {
+                int d = p.target(e);
+                if (alive[d] && rank[d] == bestRank) {
+                    int l = worstLevel(p, d);
+                    if (l > bestLevel) {
+                        best = e;
+                        bestLevel = l;
+                    }
+                }
+            }
+            choice[v] = best;
+        }
+    }
+
+    private static int worstLevel(RoundsProduct p, int d) {
+        int low = Integer.MAX_VALUE;
+        for (int e = p.outBegin(d); e < p.outEnd(d); e++) {
+            int u = p.target(e);
+            low = Math.min(low, u == RoundsProduct.LOST ? Integer.MIN_VALUE : p.level(u));
+        }
+        return low;
+    }
+
     /** The first edge from v to u (there is one: u is a successor of v). */
     private static int edgeTo(RoundsProduct p, int v, int u, boolean[] alive) {
         for (int e = p.outBegin(v); e < p.outEnd(v); e++) {

@@ -82,6 +82,7 @@ public final class DeadlineSolver {
         }
         int[] choice = new int[n];
         int[] rank = Attractor.of(p, true, alive, target, choice);
+        Attractor.preferCharge(p, alive, rank, choice);
         int r = p.start() == RoundsProduct.LOST ? Attractor.OUT : rank[p.start()];
         // ranks count edges; a turn is two (the robot's action, then the building's outcome)
         return new Solved(p, choice, r == Attractor.OUT ? -1 : r / 2);

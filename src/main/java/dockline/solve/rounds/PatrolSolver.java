@@ -114,6 +114,7 @@ public final class PatrolSolver {
             }
             if (!any) {
                 finishChoice(p, alive, rank, choice);
+                Attractor.preferCharge(p, alive, rank, choice);
                 return new Solved(p, alive, choice, removedIn, firstRank, round);
             }
             int[] lost = Attractor.of(p, false, alive, trap, null);

@@ -1,0 +1,111 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Bad patrol and deadline input: exit 2, located as file:line:column, with a hint, never a stack trace; and
+ * the demo missions of patrols and deadlines give their documented verdicts (missions/README.md).
+ */
+class RoundsInputTest {
+
+    @TempDir
+    Path dir;
+
+    private Path mission(String tail, String robotExtra) throws Exception {
+        Path map = Path.of("maps/clinic-wing.yaml").toAbsolutePath();
+        String text = "name: test\nmap: " + map + "\nrobot:\n  capacity: 60\n  resolution: 0.5\n  move-energy:\n"
+                + "    tile: 0.5\n    carpet: 1\n    ramp: 1.5\n  wait-energy: 0.5\n  charge-rate: 1\n" + robotExtra
+                + "start:\n  cell: [1, 6]\n  charge: 80%\nreserve: 20%\n" + tail;
+        Path p = dir.resolve("m.yaml");
+        Files.writeString(p, text);
+        return p;
+    }
+
+    private static CheckCommandTest.Run check(Path p) {
+        return CheckCommandTest.run("check", p.toString());
+    }
+
+    private static void badAt(CheckCommandTest.Run r, Path p, int line, String message) {
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains(p + ":" + line + ":").contains(message).contains("hint:")
+                .doesNotContain("Exception").doesNotContain("\tat ");
+    }
+
+    @Test
+    void emptyPatrol() throws Exception {
+        Path p = mission("tasks:\n  patrol: []\n", "");
+        badAt(check(p), p, 17, "the patrol has no checkpoints");
+    }
+
+    @Test
+    void checkpointAlsoAvoided() throws Exception {
+        Path p = mission("tasks:\n  patrol: [ward-a, sluice]\n  avoid: [sluice]\n", "");
+        badAt(check(p), p, 18, "both a checkpoint of the patrol and avoided");
+    }
+
+    @Test
+    void deadlineBelowOneTick() throws Exception {
+        Path p = mission("deadline: 3 s\ntasks:\n  visit: [ward-a]\n", "  tick: 4 s\n");
+        badAt(check(p), p, 17, "shorter than one tick");
+    }
+
+    @Test
+    void deadlineWithoutTick() throws Exception {
+        Path p = mission("deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "");
+        badAt(check(p), p, 16, "a deadline needs the robot's tick");
+    }
+
+    @Test
+    void tickZero() throws Exception {
+        Path p = mission("deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "  tick: 0 s\n");
+        badAt(check(p), p, 12, "tick must be more than 0 s");
+    }
+
+    @Test
+    void tickWithoutUnit() throws Exception {
+        Path p = mission("tasks:\n  visit: [ward-a]\n", "  tick: 4\n");
+        badAt(check(p), p, 12, "has no unit");
+    }
+
+    @Test
+    void budgetPerUnknown() throws Exception {
+        String map = Files.readString(Path.of("maps/clinic-wing.yaml")).replace("  budget: 1 ",
+                "  budget-per: night\n  budget: 1 ");
+        Path mp = dir.resolve("map.yaml");
+        Files.writeString(mp, map);
+        Path p = mission("tasks:\n  patrol: [ward-a]\n", "").toAbsolutePath();
+        Files.writeString(p, Files.readString(p).replace(Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString(),
+                mp.toString()));
+        CheckCommandTest.Run r = check(p);
+        int line = map.lines().toList().indexOf("  budget-per: night") + 1;
+        badAt(r, mp, line, "budget-per must be 'mission' or 'lap', not 'night'");
+    }
+
+    @Test
+    void allProblemsAtOnce() throws Exception {
+        Path p = mission("deadline: 45 min\ntasks:\n  patrol: []\n", "  tick: 0 s\n");
+        CheckCommandTest.Run r = check(p);
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("tick must be more than 0 s").contains("the patrol has no checkpoints");
+    }
+
+    @Test
+    void demoNightPatrol_isGuaranteedAndCertified() {
+        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/night-patrol.yaml");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).startsWith("GUARANTEED: Night patrol").contains("Longest lap in the worst case:")
+                .contains("certified: true").contains("Safety:");
+    }
+
+    @Test
+    void demoEarlyClean_failsOnlyBecauseOfTheDeadline() {
+        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/early-clean.yaml");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(r.out()).contains("Only the deadline is missed").contains("43 turns = 2 min 52 s");
+    }
+}
