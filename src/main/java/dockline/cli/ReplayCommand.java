@@ -107,6 +107,10 @@ public final class ReplayCommand implements Callable<Integer> {
             err.println("dockline: --csv and --json-file name the same file " + csv + "; give two names");
             return ExitCodes.BAD_INPUT;
         }
+        if (m.beyondOneTrip()) {
+            return RoundsReplayCommand.run(m, mission, force != null || disturbance == Disturbance.nominal, safest.on,
+                    json, csv, jsonFile, out, err);
+        }
         MissionReplays mr;
         try {
             mr = MissionReplays.of(m, ReserveOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes())

@@ -71,10 +71,12 @@ public final class PatrolSolver {
      * @param choice   the robot's edge per winning robot vertex
      * @param removedIn per vertex: the round (1, 2, ...) in which it left the subgame, 0 if winning
      * @param firstRank the first round's attractor ranks (towards a completed lap, in the whole product)
+     * @param oppChoice per disturbance vertex outside the winning region: the building's winning edge (into
+     *                 the trap of its round, or one step closer to it); -1 elsewhere
      * @param rounds   the rounds of the fixpoint
      */
     record Solved(RoundsProduct product, boolean[] alive, int[] choice, int[] removedIn, int[] firstRank,
-                  int rounds) {
+                  int[] oppChoice, int rounds) {
         boolean guaranteed() {
             return product.start() != RoundsProduct.LOST && alive[product.start()];
         }
@@ -96,6 +98,8 @@ public final class PatrolSolver {
             accepting[v] = p.lapDone(v);
         }
         int[] choice = new int[n];
+        int[] oppChoice = new int[n];
+        java.util.Arrays.fill(oppChoice, -1);
         int[] firstRank = null;
         int round = 0;
         while (true) {
@@ -115,9 +119,21 @@ public final class PatrolSolver {
             if (!any) {
                 finishChoice(p, alive, rank, choice);
                 Attractor.preferCharge(p, alive, rank, choice);
-                return new Solved(p, alive, choice, removedIn, firstRank, round);
+                return new Solved(p, alive, choice, removedIn, firstRank, oppChoice, round);
             }
             int[] lost = Attractor.of(p, false, alive, trap, null);
+            for (int v = 0; v < n; v++) {
+                if (alive[v] && lost[v] != Attractor.OUT && !p.isRobot(v)) {
+                    // the building's strategy of this round: stay in the trap, or get one step closer to it
+                    for (int e = p.outBegin(v); e < p.outEnd(v); e++) {
+                        int u = p.target(e);
+                        if (alive[u] && (lost[v] == 0 ? trap[u] : lost[u] == lost[v] - 1)) {
+                            oppChoice[v] = e;
+                            break;
+                        }
+                    }
+                }
+            }
             for (int v = 0; v < n; v++) {
                 if (alive[v] && lost[v] != Attractor.OUT) {
                     alive[v] = false;
