@@ -108,4 +108,31 @@ class RoundsInputTest {
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("Only the deadline is missed").contains("43 turns = 2 min 52 s");
     }
+
+    @Test
+    void patrolReplay_marksTheLoopInJsonAndCsv() throws Exception {
+        Path csv = dir.resolve("lap.csv");
+        CheckCommandTest.Run r = CheckCommandTest.run("replay", "missions/night-patrol.yaml", "--json", "--csv",
+                csv.toString());
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        com.fasterxml.jackson.databind.JsonNode j = new com.fasterxml.jackson.databind.ObjectMapper().readTree(r.out());
+        int start = j.get("loop").get("startStep").asInt();
+        int length = j.get("loop").get("length").asInt();
+        int steps = j.get("steps").size();
+        assertThat(start + length).isEqualTo(steps);
+        assertThat(j.get("lapSteps").size()).isPositive();
+        java.util.List<String> lines = Files.readAllLines(csv);
+        assertThat(lines.get(0)).endsWith(",part");
+        assertThat(lines.get(1 + start)).endsWith(",loop");
+        assertThat(lines.get(start)).endsWith(",way-in");
+        assertThat(j.get("caveats").size()).isPositive();
+    }
+
+    @Test
+    void patrolReplay_text_marksTheLoop() {
+        CheckCommandTest.Run r = CheckCommandTest.run("replay", "missions/night-patrol.yaml");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("---- the loop: steps ").contains("repeat for ever ----").contains("---- back to step ")
+                .contains("Safety:");
+    }
 }
