@@ -67,6 +67,15 @@ public final class DeadlineSolver {
                 s.product.vertexCount(), s.product.edgeCount(), s.product.bound().vertices(), millis);
     }
 
+    /**
+     * Builds the product at one floor and solves it: the fewest turns the robot can guarantee to finish in
+     * (-1: never) and the product's size, as {vertices, edges, turns}. No policy, no bisection. O(N + M).
+     */
+    public static long[] decide(Arena arena, int floor, int startLevel, long budgetBytes) {
+        Solved s = solve(arena, floor, startLevel, budgetBytes);
+        return new long[] {s.product.vertexCount(), s.product.edgeCount(), s.turns};
+    }
+
     /** The solved battery product: the start's rank in turns (-1: the robot cannot force completion). */
     record Solved(RoundsProduct product, int[] choice, int turns) {
     }

@@ -63,6 +63,16 @@ public final class PatrolSolver {
                 loopSize, millis);
     }
 
+    /** The verdict alone and the size of the product it was decided on (for benchmarks). */
+    public record Decision(boolean guaranteed, long vertices, long edges, int rounds) {
+    }
+
+    /** Builds the product at one floor and solves it: no policy, no bisection. O(N · M) at worst. */
+    public static Decision decide(Arena arena, int floor, int startLevel, long budgetBytes) {
+        Solved s = solve(arena, floor, startLevel, budgetBytes);
+        return new Decision(s.guaranteed(), s.product().vertexCount(), s.product().edgeCount(), s.rounds());
+    }
+
     /**
      * The solved product.
      *
