@@ -43,6 +43,17 @@ final class RoundsCheck {
         return null;
     }
 
+    /** The refusal of a command that handles one-trip missions only, or null when the mission is one. */
+    static String oneTripOnly(Mission m, String command) {
+        if (!m.beyondOneTrip()) {
+            return null;
+        }
+        return "dockline " + command + ": " + (m.source() == null ? "the mission" : m.source()) + " is a "
+                + (m.tasks().patrols() ? "patrol" : "mission with a deadline") + "; " + command + " handles one-trip"
+                + " missions only (hint: 'dockline check' decides it, with its highest floor, and certifies its policy;"
+                + " 'dockline replay' shows its " + (m.tasks().patrols() ? "lasso" : "slowest play") + ")";
+    }
+
     static long budget(long memoryBudgetBytes) {
         return ProductOptions.defaults().withMemoryBudget(memoryBudgetBytes).effectiveMemoryBudget();
     }

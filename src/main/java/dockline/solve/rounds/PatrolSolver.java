@@ -64,13 +64,16 @@ public final class PatrolSolver {
     }
 
     /** The verdict alone and the size of the product it was decided on (for benchmarks). */
-    public record Decision(boolean guaranteed, long vertices, long edges, int rounds) {
+    public record Decision(boolean guaranteed, long vertices, long edges, int rounds, double buildMillis) {
     }
 
     /** Builds the product at one floor and solves it: no policy, no bisection. O(N · M) at worst. */
     public static Decision decide(Arena arena, int floor, int startLevel, long budgetBytes) {
-        Solved s = solve(arena, floor, startLevel, budgetBytes);
-        return new Decision(s.guaranteed(), s.product().vertexCount(), s.product().edgeCount(), s.rounds());
+        long t0 = System.nanoTime();
+        RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.PATROL, floor, startLevel, budgetBytes);
+        double build = (System.nanoTime() - t0) / 1e6;
+        Solved s = solve(p);
+        return new Decision(s.guaranteed(), p.vertexCount(), p.edgeCount(), s.rounds(), build);
     }
 
     /**
