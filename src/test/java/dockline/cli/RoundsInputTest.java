@@ -135,4 +135,16 @@ class RoundsInputTest {
         assertThat(r.out()).contains("---- the loop: steps ").contains("repeat for ever ----").contains("---- back to step ")
                 .contains("Safety:");
     }
+
+    @Test
+    void earlyClean_withThreeMinutes_isGuaranteed() throws Exception {
+        // 3 min at 4 s is 45 turns, at least the 43 turns the worst case needs (missions/README.md)
+        Path p = dir.resolve("early-clean-3min.yaml");
+        Files.writeString(p, Files.readString(Path.of("missions/early-clean.yaml"))
+                .replace("../maps/clinic-wing.yaml", Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString())
+                .replaceFirst("deadline: 2.5 min", "deadline: 3 min"));
+        CheckCommandTest.Run r = check(p);
+        assertThat(r.code()).as(r.out() + r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("Worst finishing time under the policy:  43 turns").contains("certified: true");
+    }
 }
