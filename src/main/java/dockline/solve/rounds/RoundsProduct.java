@@ -130,13 +130,15 @@ public final class RoundsProduct {
     }
 
     private void explore(int startLevel, long budgetBytes) {
-        IntArrayList va = new IntArrayList(1 << 12);
-        IntArrayList vg = new IntArrayList(1 << 12);
-        IntArrayList vl = new IntArrayList(1 << 12);
-        IntArrayList out = new IntArrayList(1 << 12);
-        IntArrayList tgt = new IntArrayList(1 << 13);
-        IntArrayList ea = new IntArrayList(1 << 13);
-        LongIntMap ids = new LongIntMap(1 << 12);
+        // sized from the bound (capped), so that small games stay small and large ones grow less often
+        int guess = (int) Math.max(16, Math.min(bound.vertices() / 4, 1 << 21));
+        IntArrayList va = new IntArrayList(guess);
+        IntArrayList vg = new IntArrayList(guess);
+        IntArrayList vl = new IntArrayList(guess);
+        IntArrayList out = new IntArrayList(guess);
+        IntArrayList tgt = new IntArrayList(2 * guess);
+        IntArrayList ea = new IntArrayList(2 * guess);
+        LongIntMap ids = new LongIntMap(guess);
         va.add(-1);
         vg.add(-1);
         vl.add(-1);
