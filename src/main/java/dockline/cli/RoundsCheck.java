@@ -133,6 +133,7 @@ final class RoundsCheck {
                     + " the building wins (the battery or a checkpoint is lost).");
         }
         highest(a.highestGuaranteedReserveUnits(), m, out, "");
+        changesText(changes(a), out);
         out.println("  Start " + CheckCommand.amount(a.startUnits(), m) + ", reserve floor "
                 + CheckCommand.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
                 + a.capacityUnits() + " units)");
@@ -157,6 +158,7 @@ final class RoundsCheck {
         o.put("reserveUnits", a.reserveUnits());
         o.put("capacityUnits", a.capacityUnits());
         put(o, "lowestLevelUnits", a.lowestLevelUnits());
+        put(o, "worstCaseMinimumUnits", a.lowestLevelUnits());
         put(o, "longestLapTicks", a.longestLapTicks());
         put(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
@@ -168,6 +170,7 @@ final class RoundsCheck {
         o.put("fixpointRounds", a.rounds());
         o.put("totalMillis", a.millis());
         certificate(o, cert);
+        changesJson(o, changes(a));
         o.put("discretisation", m.scale().describe());
         return Json.withCaveats(o);
     }
@@ -202,6 +205,7 @@ final class RoundsCheck {
             out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
         }
         highest(a.highestGuaranteedReserveUnits(), m, out, " (within the deadline)");
+        changesText(changes(a), out);
         out.println("  Start " + CheckCommand.amount(a.startUnits(), m) + ", reserve floor "
                 + CheckCommand.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
                 + a.capacityUnits() + " units)");
@@ -238,11 +242,67 @@ final class RoundsCheck {
         o.put("timedVertices", a.timedVertices());
         o.put("totalMillis", a.millis());
         certificate(o, cert);
+        changesJson(o, changes(a));
         o.put("discretisation", m.scale().describe());
         return Json.withCaveats(o);
     }
 
     // ---------------------------------------------------------------- shared
+
+    /** A change that makes the mission guaranteed: kind, from, to (units or turns) and the sentence. */
+    record Change(String kind, long from, long to, String text) {
+    }
+
+    static java.util.List<Change> changes(PatrolAnalysis a) {
+        java.util.List<Change> out = new java.util.ArrayList<>();
+        if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
+            int h = a.highestGuaranteedReserveUnits().getAsInt();
+            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
+                    + CheckCommand.amount(h, a.mission()) + " (from " + CheckCommand.amount(a.reserveUnits(), a.mission())
+                    + ")"));
+        }
+        return out;
+    }
+
+    static java.util.List<Change> changes(DeadlineAnalysis a) {
+        java.util.List<Change> out = new java.util.ArrayList<>();
+        if (a.guaranteed()) {
+            return out;
+        }
+        Timing t = a.mission().timing();
+        if (a.tightestTicks().isPresent()) {
+            int k = a.tightestTicks().getAsInt();
+            out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least " + Timing.clock(t.seconds(k))
+                    + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
+        }
+        if (a.highestGuaranteedReserveUnits().isPresent()) {
+            int h = a.highestGuaranteedReserveUnits().getAsInt();
+            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
+                    + CheckCommand.amount(h, a.mission()) + " (from " + CheckCommand.amount(a.reserveUnits(), a.mission())
+                    + "), which keeps the deadline"));
+        }
+        return out;
+    }
+
+    private static void changesText(java.util.List<Change> changes, PrintWriter out) {
+        if (!changes.isEmpty()) {
+            out.println("  To make it guaranteed, change one of:");
+            for (Change c : changes) {
+                out.println("    - " + c.text());
+            }
+        }
+    }
+
+    private static void changesJson(ObjectNode o, java.util.List<Change> changes) {
+        com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
+        for (Change c : changes) {
+            ObjectNode so = arr.addObject();
+            so.put("kind", c.kind());
+            so.put("from", c.from());
+            so.put("to", c.to());
+            so.put("text", c.text());
+        }
+    }
 
     private static void highest(OptionalInt h, Mission m, PrintWriter out, String what) {
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
