@@ -10,7 +10,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 
 /**
- * Every package of the program has a {@code package-info.java} (STYLE.md: what it computes and which
+ * Every package of the program has a {@code package-info.java} (DEVELOPERS.md: what it computes and which
  * class is the entry point) that links to at least one class of its own package.
  */
 class PackageInfoTest {

@@ -5,7 +5,7 @@ import dockline.model.EventKind;
 import dockline.model.Mission;
 
 /**
- * The compiled two-player arena of one mission (DESIGN.md 2.3), in compressed-sparse-row int
+ * The compiled two-player arena of one mission (maps/README.md, "Game semantics"), in compressed-sparse-row int
  * arrays, forward and reverse.
  *
  * <p>Vertices {@code 0 .. robotCount-1} belong to the robot: (cell, budget left). Vertices

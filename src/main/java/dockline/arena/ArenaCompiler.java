@@ -17,7 +17,7 @@ import java.util.List;
 
 /**
  * Compiles a mission (map + robot + disturbance model) into its {@link Arena}, following the
- * reference semantics of DESIGN.md 2.3 and maps/README.md.
+ * reference semantics of maps/README.md ("Game semantics").
  *
  * <p>Cost: O(F · (K+1) · A · S) time and memory, where F is the number of free cells, K the budget,
  * A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action; in practice linear in the plan.

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dockline.report.Caveats;
+import dockline.solve.game.ReserveSizeForecast;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;

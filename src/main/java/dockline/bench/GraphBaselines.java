@@ -1,6 +1,6 @@
 package dockline.bench;
 
-import dockline.solve.GameGraph;
+import dockline.solve.game.GameGraph;
 import java.util.function.BooleanSupplier;
 
 /**

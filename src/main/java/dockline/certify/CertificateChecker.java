@@ -8,7 +8,7 @@ import dockline.model.EnergyScale;
 import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.util.ArrayList;
 import java.util.List;
 

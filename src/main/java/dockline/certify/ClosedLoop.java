@@ -4,7 +4,7 @@ import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.Cell;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
 import java.util.List;
@@ -17,7 +17,8 @@ import java.util.Optional;
  *
  * <p>Built by breadth-first search from the start, so the first problem found (a missing or illegal
  * policy entry, a level below the floor, an avoided zone) has a shortest trace. Complete situations
- * (all tasks done, on a dock when required) have no successors. Battery levels follow DESIGN.md 2.3:
+ * (all tasks done, on a dock when required) have no successors. Battery levels follow maps/README.md, "Game
+ * semantics":
  * {@code level' = min(capacity, level + delta)}; a successor below the floor is not a node.
  *
  * <p>Cost: O(N + E) time and memory plus one policy lookup per node, for N nodes and E edges of the

@@ -1,7 +1,7 @@
 package dockline.certify;
 
 import dockline.arena.Arena;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 
 /**
  * Checks a deadline mission's policy on its own code path: the closed loop of the policy against every

@@ -7,7 +7,7 @@ import dockline.model.EventKind;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Relation;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;

@@ -7,8 +7,8 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
-import dockline.solve.Policy;
-import dockline.solve.PolicyScore;
+import dockline.policy.Policy;
+import dockline.policy.PolicyScore;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
 import java.math.BigInteger;
@@ -35,7 +35,7 @@ import java.util.Optional;
  * This is the bound of the published discounted-sum comparator automaton construction (2018),
  * re-derived here from the geometric series, not taken from the solver.
  *
- * <p><b>Completion</b> follows the product's convention (DESIGN.md 2.3, missions/README.md): a
+ * <p><b>Completion</b> follows the product's convention (maps/README.md, "Game semantics"; missions/README.md): a
  * situation is complete — absorbing, weight 0 for ever after, so its score is the partial sum — when
  * all tasks are done, the robot is on a dock (if the mission says so) and the score is met
  * ({@code s >= 0} for {@code >=}, {@code s > 0} for {@code >}, or secured). A docked robot with its

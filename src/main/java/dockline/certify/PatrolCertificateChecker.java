@@ -4,7 +4,7 @@ import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
 import java.util.List;

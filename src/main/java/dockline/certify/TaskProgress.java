@@ -6,7 +6,8 @@ import dockline.model.Tasks;
 import java.util.List;
 
 /**
- * The checker's own task bookkeeping, read straight from the mission's tasks (DESIGN.md 2.3), so that
+ * The checker's own task bookkeeping, read straight from the mission's tasks (maps/README.md, "Game
+ * semantics"), so that
  * the certificate does not trust the goal automaton the solver uses.
  *
  * <p>Progress is a bit mask: bit i is set when task i of the visit list is done. With tasks in the

@@ -11,19 +11,19 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
-import dockline.solve.ReserveAnalysis;
-import dockline.solve.ReserveOptions;
-import dockline.solve.ReserveSolver;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.List;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /**
  * {@code dockline check MISSION}: decides whether the robot can always complete the mission

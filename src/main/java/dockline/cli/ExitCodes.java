@@ -1,6 +1,6 @@
 package dockline.cli;
 
-/** Exit codes, as documented in README.md and DESIGN.md section 4. */
+/** Exit codes, as documented in README.md. */
 public final class ExitCodes {
     public static final int OK = 0;
     public static final int NOT_GUARANTEED = 1;

@@ -7,24 +7,24 @@ import dockline.certify.DiscountedCertificate;
 import dockline.io.PolicyFiles;
 import dockline.model.Mission;
 import dockline.model.Objective;
+import dockline.policy.Policy;
 import dockline.report.Caveats;
-import dockline.solve.DiscountedAnalysis;
-import dockline.solve.DiscountedOptions;
-import dockline.solve.DiscountedPolicies;
-import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
-import dockline.solve.ReserveAnalysis;
-import dockline.solve.ReserveOptions;
 import dockline.solve.Verdict;
-import dockline.solve.ReserveSolver;
+import dockline.solve.discounted.DiscountedAnalysis;
+import dockline.solve.discounted.DiscountedOptions;
+import dockline.solve.discounted.DiscountedPolicies;
+import dockline.solve.discounted.DiscountedSolver;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /**
  * {@code dockline export MISSION --policy FILE}: solves the mission and writes the robot's policy,

@@ -63,6 +63,7 @@ public final class Main implements Runnable {
             new ViewCommand(),
             new RenderCommand(),
             new BenchCommand(),
+            new ImportCommand(),
         };
     }
 

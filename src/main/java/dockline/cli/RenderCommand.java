@@ -10,7 +10,7 @@ import dockline.report.Caveats;
 import dockline.view.Overlay;
 import dockline.view.PictureRenderer;
 import dockline.view.SolverAnalyzer;
-import dockline.view.Verdict;
+import dockline.view.VerdictSummary;
 import dockline.view.ViewData;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -18,10 +18,10 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /**
  * {@code dockline render MISSION --out PICTURE.png}: solves the mission and draws the map (plain,
@@ -130,7 +130,7 @@ public final class RenderCommand implements Callable<Integer> {
             err.println("dockline render: cannot write " + out + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        Verdict v = data.verdict();
+        VerdictSummary v = data.verdict();
         outw.println("wrote " + out + " (" + options.width() + "x" + options.height() + ", " + overlay.word() + ")");
         outw.println(v.headline());
         outw.println(Caveats.block());

@@ -11,17 +11,17 @@ import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.report.Caveats;
-import dockline.solve.ReserveOptions;
 import dockline.solve.Verdict;
+import dockline.solve.reserve.ReserveOptions;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /**
  * {@code dockline replay MISSION}: one run of the robot's policy, step by step. For a guaranteed

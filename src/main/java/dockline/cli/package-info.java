@@ -1,5 +1,6 @@
 /**
- * The command line (picocli): validate, check, export, replay and margin (and view, render, bench),
+ * The command line (picocli): validate, check, export, replay and margin (and view, render, bench,
+ * import),
  * one {@code Callable<Integer>} per subcommand returning the exit code of {@link dockline.cli.ExitCodes}.
  *
  * <p>Entry point: {@link dockline.cli.Main}. The mission commands share {@code MissionOptions} (the

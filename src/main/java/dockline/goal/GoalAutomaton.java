@@ -7,7 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Deterministic automaton over the zone sets of the cells the robot occupies (DESIGN.md 2.4).
+ * Deterministic automaton over the zone sets of the cells the robot occupies (README.md, "How it decides").
  *
  * <p>States are {@code 0 .. stateCount()-1}; {@link #REJECT} is the losing sink (an avoided zone
  * was occupied). With tasks in any order a state is the bit mask of the tasks done (2^n states);

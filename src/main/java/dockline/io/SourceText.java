@@ -1,5 +1,6 @@
 package dockline.io;
 
+import dockline.util.MonotoneSearch;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
 import java.nio.charset.CharsetDecoder;
@@ -195,16 +196,7 @@ final class SourceText {
 
     /** Position of a char index in {@link #text()}. O(log lines + line length). */
     Pos posOf(int index) {
-        int lo = 0;
-        int hi = lineStart.length - 1;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (lineStart[mid] <= index) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
+        int lo = MonotoneSearch.highest(0, lineStart.length - 1, i -> lineStart[i] <= index); // line 0 starts at 0
         int col = text.codePointCount(lineStart[lo], Math.min(Math.max(index, lineStart[lo]), text.length())) + 1;
         return new Pos(lo + 1, col);
     }

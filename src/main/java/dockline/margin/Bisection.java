@@ -3,7 +3,8 @@ package dockline.margin;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.solve.ProductOptions;
-import dockline.solve.ReserveSolver;
+import dockline.solve.reserve.ReserveSolver;
+import dockline.util.MonotoneSearch;
 
 /**
  * The margins by bisection over the threshold solver (satisficing): each probe asks the solver
@@ -41,17 +42,7 @@ public final class Bisection {
     /** The highest floor in 0..start that is guaranteed from {@code start}, or -1. */
     public int highestFloor(int start) {
         int k = mission.map().disturbances().budget();
-        int lo = -1;
-        int hi = Math.min(start, mission.capacityUnits());
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (guaranteed(mid, start, k)) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return MonotoneSearch.highest(-1, Math.min(start, mission.capacityUnits()), f -> guaranteed(f, start, k));
     }
 
     /** The lowest start level in floor..capacity that is guaranteed at {@code floor}, or -1. */
@@ -61,31 +52,11 @@ public final class Bisection {
         if (floor > cap || !guaranteed(floor, cap, k)) {
             return -1;
         }
-        int lo = floor;
-        int hi = cap; // guaranteed at hi
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (guaranteed(floor, mid, k)) {
-                hi = mid;
-            } else {
-                lo = mid + 1;
-            }
-        }
-        return hi;
+        return MonotoneSearch.lowest(floor, cap, s -> guaranteed(floor, s, k)); // guaranteed at cap
     }
 
     /** The largest budget in 0..K-1 that is guaranteed at this floor and start, or -1. */
     public int largestBudgetBelow(int floor, int start) {
-        int lo = -1;
-        int hi = mission.map().disturbances().budget() - 1;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (guaranteed(floor, start, mid)) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return MonotoneSearch.highest(-1, mission.map().disturbances().budget() - 1, k -> guaranteed(floor, start, k));
     }
 }

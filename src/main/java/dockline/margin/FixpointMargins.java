@@ -2,6 +2,7 @@ package dockline.margin;
 
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
+import dockline.util.MonotoneSearch;
 
 /**
  * The margins of a mission from the minimum-credit fixpoint ({@link MinimumCredit}) alone.
@@ -29,16 +30,6 @@ public final class FixpointMargins {
 
     /** The highest floor in 0..start that can be guaranteed from {@code start} units, or -1 if none. */
     public static int highestFloor(Arena arena, GoalAutomaton goal, int start) {
-        int lo = -1; // wins at lo, or -1
-        int hi = start; // candidates up to hi
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (wins(arena, goal, mid, start)) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return MonotoneSearch.highest(-1, start, f -> wins(arena, goal, f, start));
     }
 }

@@ -4,8 +4,8 @@ import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
 import java.util.ArrayList;
@@ -14,7 +14,8 @@ import java.util.List;
 
 /**
  * The minimum initial credit of the reserve objective, computed directly by a fixpoint over energy
- * levels (the optimisation baseline of DESIGN.md 2.4): for every vertex of arena × goal automaton
+ * levels (the optimisation baseline, kept as a cross-check of the threshold solver): for every vertex of arena
+ * × goal automaton
  * reachable from the start, {@code need(x)} is the least battery level with which the robot, standing
  * at x, can force mission completion while the level never drops below the floor.
  *

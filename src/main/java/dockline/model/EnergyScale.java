@@ -5,7 +5,7 @@ import java.math.BigInteger;
 import java.math.RoundingMode;
 
 /**
- * Turns Wh figures into integer energy units, always rounding against the robot (DESIGN.md 2.2):
+ * Turns Wh figures into integer energy units, always rounding against the robot (missions/README.md, "robot"):
  * consumption and the reserve floor round <b>up</b>; capacity, starting charge and charging round
  * <b>down</b>. A "guaranteed" verdict in units is therefore guaranteed in Wh.
  *

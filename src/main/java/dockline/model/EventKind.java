@@ -1,7 +1,7 @@
 package dockline.model;
 
 /**
- * The kinds of disturbance the building can throw at a move (DESIGN.md 2.3).
+ * The kinds of disturbance the building can throw at a move (maps/README.md, "Game semantics").
  * Each spends one unit of the mission's disturbance budget.
  */
 public enum EventKind {

@@ -7,7 +7,8 @@ import dockline.util.LongIntMap;
 import java.util.Arrays;
 
 /**
- * The comparator automaton for a discounted sum against a rational threshold (DESIGN.md 2.4): a
+ * The comparator automaton for a discounted sum against a rational threshold (missions/README.md, "The
+ * discounted objective"): a
  * deterministic automaton over integer weights that accepts an infinite weight sequence w exactly
  * when {@code DS(w, d) R v}, for R one of {@code >=} and {@code >}.
  *

@@ -1,7 +1,7 @@
 package dockline.monitor;
 
 /**
- * The battery as a deterministic safety automaton (DESIGN.md 2.4): the state is the battery level
+ * The battery as a deterministic safety automaton (README.md, "How it decides"): the state is the battery level
  * in units minus the reserve floor, so states run from {@code 0} (exactly at the floor) to
  * {@code capacity - floor} (full). Reading a weight adds it, saturates at the capacity, and goes to
  * {@link #REJECT} the moment the level is below the floor.

@@ -1,5 +1,6 @@
 package dockline.replay;
 
+import dockline.arena.ActionKind;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.EnergyScale;
@@ -113,7 +114,7 @@ final class Explanation {
         int cost = before.batteryUnits() - s.batteryUnits();
         String paid = cost > 0 ? "; the step cost " + units(cost) : "";
         String from = place(before.cell());
-        String target = s.action().startsWith("move ") ? s.action().substring(5) : "";
+        String target = s.action().filter(a -> a.kind() == ActionKind.MOVE).map(a -> a.target().toString()).orElse("");
         return switch (e.kind()) {
             case DOOR_SHUT -> (e.doorName().startsWith("door ") ? e.doorName() : "door " + e.doorName()) + " at "
                     + e.cell() + " shut " + rule + " as the robot tried to go through it from " + from

@@ -7,11 +7,11 @@ import dockline.certify.ClosedLoop;
 import dockline.margin.FixpointMargins;
 import dockline.model.Charge;
 import dockline.model.Mission;
-import dockline.solve.Policy;
-import dockline.solve.ReserveAnalysis;
-import dockline.solve.ReserveOptions;
-import dockline.solve.ReserveSolver;
+import dockline.policy.Policy;
 import dockline.solve.WinningRegion;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
 import java.util.List;
 import java.util.Optional;
 

@@ -32,7 +32,7 @@ public final class ReplayFormats {
         StringBuilder sb = new StringBuilder();
         sb.append(String.join(",", CSV_COLUMNS)).append(CRLF);
         for (ReplayStep s : replay.steps()) {
-            List<String> f = List.of(Integer.toString(s.step()), s.cell().toString(), s.action(), s.event().word(),
+            List<String> f = List.of(Integer.toString(s.step()), s.cell().toString(), s.actionText(), s.event().word(),
                     s.event().describe(), Integer.toString(s.batteryUnits()), s.batteryWh().toPlainString(),
                     Integer.toString(s.budgetLeft()), Integer.toString(s.progressMask()), s.progressWords());
             for (int i = 0; i < f.size(); i++) {
@@ -86,7 +86,7 @@ public final class ReplayFormats {
             ObjectNode o = steps.addObject();
             o.put("step", s.step());
             o.put("cell", s.cell().toString());
-            o.put("action", s.action());
+            o.put("action", s.actionText());
             o.put("event", s.event().word());
             if (!s.event().nominal()) {
                 o.put("rule", s.event().ruleLabel());
@@ -110,7 +110,7 @@ public final class ReplayFormats {
         rows.add(new String[] {"step", "cell", "action", "event", "battery", "budget", "tasks"});
         for (ReplayStep s : replay.steps()) {
             String ev = s.event().nominal() ? "-" : s.event().describe();
-            rows.add(new String[] {Integer.toString(s.step()), s.cell().toString(), s.action(), ev,
+            rows.add(new String[] {Integer.toString(s.step()), s.cell().toString(), s.actionText(), ev,
                 s.batteryUnits() + " (" + s.batteryWh().toPlainString() + " Wh)", Integer.toString(s.budgetLeft()),
                 s.progressWords()});
         }

@@ -1,5 +1,6 @@
 package dockline.replay;
 
+import dockline.arena.Action;
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.certify.CertificateChecker;
@@ -9,7 +10,7 @@ import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import dockline.solve.WinningRegion;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -247,7 +248,7 @@ public final class Replayer {
         Explainer ex = new Explainer(arena, floor);
         if (start < floor || g0 == GoalAutomaton.REJECT) {
             Walk w = new Walk();
-            w.rows.add(ex.row(0, arena.startVertex(), "start", ReplayEvent.NONE, start,
+            w.rows.add(ex.row(0, arena.startVertex(), null, ReplayEvent.NONE, start,
                     g0 == GoalAutomaton.REJECT ? 0 : goal.progressMask(g0)));
             w.ending = start < floor ? Replay.Ending.BELOW_FLOOR : Replay.Ending.AVOIDED_ZONE;
             return ex.finish(Replay.Kind.COUNTEREXAMPLE, w, bestEffortFloor);
@@ -301,7 +302,7 @@ public final class Replayer {
         int v = arena.startVertex();
         int g = goal.initial(arena.cellZones(arena.cell(v)));
         int level = start;
-        w.rows.add(ex.row(0, v, "start", ReplayEvent.NONE, level, goal.progressMask(g)));
+        w.rows.add(ex.row(0, v, null, ReplayEvent.NONE, level, goal.progressMask(g)));
         Set<List<Integer>> seen = new HashSet<>();
         seen.add(List.of(v, g, level));
         for (int step = 1; ; step++) {
@@ -326,7 +327,7 @@ public final class Replayer {
             int u = arena.target(bestE);
             int l2 = (int) Math.min(cap, (long) level + arena.weight(bestE));
             int g2 = goal.step(g, arena.cellZones(arena.cell(u)));
-            w.rows.add(ex.row(step, u, arena.action(bestD).toString(), ex.event(bestE), l2,
+            w.rows.add(ex.row(step, u, arena.action(bestD), ex.event(bestE), l2,
                     g2 == GoalAutomaton.REJECT ? goal.progressMask(g) : goal.progressMask(g2)));
             if (l2 < floor) {
                 w.ending = Replay.Ending.BELOW_FLOOR;
@@ -394,7 +395,7 @@ public final class Replayer {
         Explainer ex = new Explainer(arena, judgeFloor);
         Walk w = new Walk();
         int node = 0;
-        w.rows.add(ex.row(0, loop.vertex(0), "start", ReplayEvent.NONE, loop.level(0), loop.progress(0)));
+        w.rows.add(ex.row(0, loop.vertex(0), null, ReplayEvent.NONE, loop.level(0), loop.progress(0)));
         for (int step = 1; ; step++) {
             if (loop.isComplete(node)) {
                 w.ending = Replay.Ending.COMPLETE;
@@ -403,7 +404,7 @@ public final class Replayer {
             int s = chooser.slot(node, step);
             int e = loop.succEdge(s);
             int t = loop.succNode(s);
-            w.rows.add(ex.row(step, loop.vertex(t), arena.action(loop.choice(node)).toString(), ex.event(e),
+            w.rows.add(ex.row(step, loop.vertex(t), arena.action(loop.choice(node)), ex.event(e),
                     loop.level(t), loop.progress(t)));
             if (loop.level(t) < judgeFloor) {
                 w.ending = Replay.Ending.BELOW_FLOOR;
@@ -425,7 +426,8 @@ public final class Replayer {
             this.floor = floor;
         }
 
-        ReplayStep row(int step, int vertex, String action, ReplayEvent event, int level, int mask) {
+        /** A row; {@code action} is {@code null} for the start row. */
+        ReplayStep row(int step, int vertex, Action action, ReplayEvent event, int level, int mask) {
             return new ReplayStep(step, arena.cellOf(vertex), action, event, level, mission.scale().toWh(level),
                     arena.budgetLeft(vertex), mask, progressWords(mission, mask));
         }

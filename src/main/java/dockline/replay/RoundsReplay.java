@@ -60,7 +60,7 @@ public record RoundsReplay(Replay replay, int loopStart, int loopLength, List<In
         int full = (1 << m.tasks().patrol().size()) - 1;
         int min = Integer.MAX_VALUE;
         for (int i = 0; i < play.rows(); i++) {
-            String action = i == 0 ? "start" : arena.action(play.action()[i]).toString();
+            dockline.arena.Action action = i == 0 ? null : arena.action(play.action()[i]);
             ReplayEvent ev = i == 0 ? ReplayEvent.NONE : ex.event(play.edge()[i]);
             int level = play.level()[i];
             min = Math.min(min, level);

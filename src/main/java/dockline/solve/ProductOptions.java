@@ -3,13 +3,15 @@ package dockline.solve;
 import java.util.function.BooleanSupplier;
 
 /**
- * How a {@link ProductGame} is built.
+ * How a {@link dockline.solve.game.ProductGame} is built.
  *
  * @param memoryBudgetBytes refuse to build a product estimated (or found) to need more than this;
  *                          0 means {@link #defaultMemoryBudget()}
  * @param index             how (arena vertex, goal state, monitor state) triples are numbered
  * @param cancelled         polled every few thousand steps; when it returns {@code true} the build stops
  *                          with {@link java.util.concurrent.CancellationException}
+ *
+ * <p>Data only (settings); validated in the constructor.
  */
 public record ProductOptions(long memoryBudgetBytes, IndexKind index, BooleanSupplier cancelled) {
 

@@ -2,12 +2,14 @@ package dockline.solve;
 
 /**
  * An upper estimate of a product game's size, made before it is built (see
- * {@link ProductGame#estimate}).
+ * {@link dockline.solve.game.ProductGame#estimate}).
  *
  * @param vertices   product vertices, including the two sinks
  * @param edges      product edges
  * @param bytes      memory for building and solving it
  * @param denseSlots slots of the direct index if one would be used, else 0
+ *
+ * <p>Data only, with saturating arithmetic; O(1).
  */
 public record SizeEstimate(long vertices, long edges, long bytes, long denseSlots) {
 
@@ -22,14 +24,14 @@ public record SizeEstimate(long vertices, long edges, long bytes, long denseSlot
     /** Bytes per slot of the direct index. */
     public static final long BYTES_PER_DENSE_SLOT = 4;
 
-    static SizeEstimate of(long vertices, long edges, long denseSlots) {
+    public static SizeEstimate of(long vertices, long edges, long denseSlots) {
         long bytes = satAdd(satMul(vertices, BYTES_PER_VERTEX), satAdd(satMul(edges, BYTES_PER_EDGE),
                 satMul(denseSlots, BYTES_PER_DENSE_SLOT)));
         return new SizeEstimate(vertices, edges, bytes, denseSlots);
     }
 
     /** Saturating arithmetic: an estimate past Long.MAX_VALUE is simply "too big". */
-    static long satMul(long a, long b) {
+    public static long satMul(long a, long b) {
         long hi = Math.multiplyHigh(a, b);
         long lo = a * b;
         if ((hi == 0 && lo >= 0) || (hi == -1 && lo < 0)) {
@@ -38,7 +40,7 @@ public record SizeEstimate(long vertices, long edges, long bytes, long denseSlot
         return Long.MAX_VALUE;
     }
 
-    static long satAdd(long a, long b) {
+    public static long satAdd(long a, long b) {
         long r = a + b;
         return ((a ^ r) & (b ^ r)) < 0 ? Long.MAX_VALUE : r;
     }

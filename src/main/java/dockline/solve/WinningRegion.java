@@ -5,6 +5,8 @@ package dockline.solve;
  * with the given task progress and battery level, the robot can force mission completion without
  * the level ever dropping below the floor. The counterexample's disturbance strategy stays outside
  * this region.
+ *
+ * <p>No algorithm of its own: a question answered from a solver's result, O(1) per question.
  */
 @FunctionalInterface
 public interface WinningRegion {

@@ -1,14 +1,9 @@
 /**
- * Solving the product game arena × goal automaton × monitor by linear-time attractors, strategy
- * extraction, and the policy the robot runs.
+ * Solving a mission as a two-player game: the words every route shares (the {@link dockline.solve.Verdict},
+ * the {@link dockline.solve.WinningRegion}, the size limits) and one sub-package per route.
  *
- * <p>Entry point for the reserve objective: {@link dockline.solve.ReserveSolver#analyse} (verdict,
- * policy, worst case, highest guaranteed floor, heat map {@link dockline.solve.ChargeNeeded}). For
- * any other {@link dockline.monitor.Monitor}: {@link dockline.solve.ProductGame#fromStart}, then
- * {@link dockline.solve.AttractorSolver} on its {@link dockline.solve.GameGraph}.
- *
- * <p>Entry point for the discounted objective: {@link dockline.solve.DiscountedSolver#analyse}; its
- * optimisation baseline is {@link dockline.solve.DiscountedValueIteration}, and
- * {@link dockline.solve.DiscountedBench} measures the two routes on the same instances.
+ * <p>Entry points: {@link dockline.solve.reserve.ReserveSolver#analyse} (reserve floor; the default),
+ * {@link dockline.solve.fast.FastPath} (no charging before the end), {@link dockline.solve.discounted.DiscountedSolver#analyse}
+ * (discounted score); {@link dockline.solve.game} holds the stored product and the attractor solvers they share.
  */
 package dockline.solve;

@@ -4,6 +4,6 @@
  *
  * <p>Entry points: {@link dockline.util.IntArrayList} and {@link dockline.util.LongIntMap}. This
  * package depends on nothing else of dockline, so sharing it keeps the certificate checker
- * independent of the solver (DESIGN.md 2.5): they share containers, never logic.
+ * independent of the solver (DEVELOPERS.md, "Layout"): they share containers, never logic.
  */
 package dockline.util;

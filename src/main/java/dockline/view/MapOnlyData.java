@@ -6,10 +6,10 @@ import java.util.List;
 import java.util.Optional;
 
 /** View data for a mission that has not been solved: the map is shown, nothing else. */
-public record MapOnlyData(Mission mission, Verdict verdict) implements ViewData {
+public record MapOnlyData(Mission mission, VerdictSummary verdict) implements ViewData {
 
     public MapOnlyData(Mission mission) {
-        this(mission, Verdict.notChecked("press Check to solve this mission"));
+        this(mission, VerdictSummary.notChecked("press Check to solve this mission"));
     }
 
     @Override

@@ -150,7 +150,7 @@ public final class MissionWindow {
     private final ChoiceBox<EventKind> forceKind = new ChoiceBox<>();
     private final TextField forceSlipTo = new TextField();
     private final Spinner<Integer> forceStep = new Spinner<>(1, 10_000, 1);
-    private final ListView<ForcedEvent> forcedList = new ListView<>();
+    private final ListView<ScenarioEvent> forcedList = new ListView<>();
     private final Button forceAdd = new Button("Add");
     private final Button forceRun = new Button("Run _scenario");
     private final VBox forceBox = new VBox(4);
@@ -183,7 +183,7 @@ public final class MissionWindow {
 
         verdict.setId("verdict");
         verdict.setMaxWidth(Double.MAX_VALUE);
-        VerdictStyles.apply(verdict, Verdict.Outcome.NOT_CHECKED);
+        VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
         certificate.setId("certificate");
         certificate.getStyleClass().add("certificate");
         figures.setId("figures");
@@ -259,7 +259,8 @@ public final class MissionWindow {
                 stage.close();
             }
         });
-        Menu fileMenu = new Menu("_File", null, open, recentMenu, reload, new SeparatorMenuItem(), close);
+        MenuItem importImage = item("_Import occupancy image\u2026", null, this::importImage);
+        Menu fileMenu = new Menu("_File", null, open, recentMenu, importImage, reload, new SeparatorMenuItem(), close);
         fileMenu.setOnShowing(e -> rebuildRecentMenu());
         rebuildRecentMenu();
 
@@ -535,6 +536,13 @@ public final class MissionWindow {
         }
     }
 
+    /** The import dialog ({@link ImportDialog}); the map it writes is opened. */
+    private void importImage() {
+        Path folder = file != null && file.toAbsolutePath().getParent() != null ? file.toAbsolutePath().getParent() : null;
+        Window owner = root.getScene() != null ? root.getScene().getWindow() : null;
+        new ImportDialog(owner, folder).showAndWait().ifPresent(this::open);
+    }
+
     private void rebuildRecentMenu() {
         recentMenu.getItems().clear();
         for (Path p : recent.files()) {
@@ -779,10 +787,10 @@ public final class MissionWindow {
                 return;
             }
         }
-        ForcedEvent f = new ForcedEvent(s, k, to);
+        ScenarioEvent f = new ScenarioEvent(s, k, to);
         forcedList.getItems().removeIf(e -> e.step() == f.step());
         forcedList.getItems().add(f);
-        forcedList.getItems().sort(java.util.Comparator.comparingInt(ForcedEvent::step));
+        forcedList.getItems().sort(java.util.Comparator.comparingInt(ScenarioEvent::step));
     }
 
     private void runScenario() {
@@ -790,7 +798,7 @@ public final class MissionWindow {
         if (d == null || !d.canForce() || forcedList.getItems().isEmpty()) {
             return;
         }
-        List<ForcedEvent> events = List.copyOf(forcedList.getItems());
+        List<ScenarioEvent> events = List.copyOf(forcedList.getItems());
         Optional<ViewReplay> r;
         try {
             r = d.force(events);
@@ -827,7 +835,7 @@ public final class MissionWindow {
             } else {
                 mapView.layersProperty().set(null);
             }
-            VerdictStyles.apply(verdict, Verdict.Outcome.NOT_CHECKED);
+            VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
             certificate.setText("");
             figures.setText("");
             forceBox.setDisable(true);
@@ -836,7 +844,7 @@ public final class MissionWindow {
         }
         updatingControls = true;
         try {
-            Verdict v = d.verdict();
+            VerdictSummary v = d.verdict();
             verdict.setText(v.headline());
             VerdictStyles.apply(verdict, v.outcome());
             certificate.setText("Certificate: " + v.certificate());
@@ -887,7 +895,7 @@ public final class MissionWindow {
         refreshLayers();
     }
 
-    private static String figuresText(Mission m, Verdict v) {
+    private static String figuresText(Mission m, VerdictSummary v) {
         StringBuilder sb = new StringBuilder();
         sb.append("Reserve floor ").append(Units.both(m, m.reserveUnits()));
         sb.append(" \u00b7 starting charge ").append(Units.both(m, m.startUnits()));

@@ -131,7 +131,7 @@ public final class PictureRenderer {
 
         Label title = new Label(m.name() + "  \u00b7  " + map.name());
         title.getStyleClass().add("picture-title");
-        Verdict v = data.verdict();
+        VerdictSummary v = data.verdict();
         Label verdict = new Label(v.headline());
         verdict.getStyleClass().addAll("verdict", VerdictStyles.of(v.outcome()));
         verdict.setMaxWidth(Double.MAX_VALUE);

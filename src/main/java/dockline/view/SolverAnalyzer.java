@@ -1,21 +1,22 @@
 package dockline.view;
 
 import dockline.arena.Action;
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
-import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.replay.ForcedEvent;
 import dockline.replay.ForcedEventException;
 import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
-import dockline.solve.ChargeNeeded;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
-import dockline.solve.ReserveAnalysis;
-import dockline.solve.ReserveOptions;
+import dockline.solve.reserve.ChargeNeeded;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -80,7 +81,7 @@ public final class SolverAnalyzer implements Analyzer {
     }
 
     /** The verdict in words, with the certificate status. */
-    static Verdict verdictOf(MissionReplays mr, List<String> problems) {
+    static VerdictSummary verdictOf(MissionReplays mr, List<String> problems) {
         ReserveAnalysis a = mr.analysis();
         Mission m = a.mission();
         int k = m.map().disturbances().budget();
@@ -108,7 +109,8 @@ public final class SolverAnalyzer implements Analyzer {
             words.append(" Note: ").append(n).append('.');
         }
         String cert;
-        Verdict.Outcome outcome = a.guaranteed() ? Verdict.Outcome.GUARANTEED : Verdict.Outcome.NOT_GUARANTEED;
+        VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED
+                : VerdictSummary.Outcome.NOT_GUARANTEED;
         if (a.guaranteed()) {
             Certificate c = mr.certificate().orElse(null);
             if (c != null && c.ok()) {
@@ -116,7 +118,7 @@ public final class SolverAnalyzer implements Analyzer {
                         + " situations, every disturbance choice; longest run " + c.longestRunSteps() + " steps)";
             } else {
                 // never trust a guarantee whose policy failed the check: say so, loudly
-                outcome = Verdict.Outcome.NOT_CHECKED;
+                outcome = VerdictSummary.Outcome.NOT_CHECKED;
                 words.insert(0, "the solver says guaranteed, but its policy FAILED the independent check; do not rely on it. ");
                 cert = "FAILED \u2014 " + (c == null ? "no certificate" : c.reason());
             }
@@ -128,7 +130,8 @@ public final class SolverAnalyzer implements Analyzer {
         for (String p : problems) {
             cert += "; " + p;
         }
-        return new Verdict(outcome, words.toString(), cert, a.worstCaseMinimumUnits(), a.highestGuaranteedReserveUnits());
+        return new VerdictSummary(outcome, words.toString(), cert, a.worstCaseMinimumUnits(),
+                a.highestGuaranteedReserveUnits());
     }
 
     /** {@link ViewData} over a {@link ReserveAnalysis}; the policy is indexed by cell once, at construction. */
@@ -137,12 +140,12 @@ public final class SolverAnalyzer implements Analyzer {
         private final MissionReplays replaysSource;
         private final ReserveAnalysis analysis;
         private final ChargeNeeded heat;
-        private final Verdict verdict;
+        private final VerdictSummary verdict;
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
         private final Map<Long, List<Action>> byCell;
 
-        SolvedData(MissionReplays mr, ChargeNeeded heat, Verdict verdict, List<ViewReplay> replays) {
+        SolvedData(MissionReplays mr, ChargeNeeded heat, VerdictSummary verdict, List<ViewReplay> replays) {
             this.replaysSource = mr;
             this.analysis = mr.analysis();
             this.heat = heat;
@@ -188,7 +191,7 @@ public final class SolverAnalyzer implements Analyzer {
         }
 
         @Override
-        public Verdict verdict() {
+        public VerdictSummary verdict() {
             return verdict;
         }
 
@@ -237,14 +240,14 @@ public final class SolverAnalyzer implements Analyzer {
          * @throws IllegalArgumentException when an event cannot happen where it was put
          */
         @Override
-        public Optional<ViewReplay> force(List<ForcedEvent> events) {
+        public Optional<ViewReplay> force(List<ScenarioEvent> events) {
             if (policy.isEmpty() || events.isEmpty()) {
                 return Optional.empty();
             }
-            List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
+            List<ForcedEvent> fs = new ArrayList<>();
             StringBuilder what = new StringBuilder();
-            for (ForcedEvent e : events) {
-                fs.add(new dockline.replay.ForcedEvent(e.step(), e.kind(), e.slipTo()));
+            for (ScenarioEvent e : events) {
+                fs.add(new ForcedEvent(e.step(), e.kind(), e.slipTo()));
                 what.append(what.length() == 0 ? "" : ", ").append(e.step()).append(':').append(e.kind().word())
                         .append(e.slipTo() != null ? "@" + e.slipTo() : "");
             }

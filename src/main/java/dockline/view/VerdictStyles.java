@@ -6,7 +6,7 @@ final class VerdictStyles {
     private VerdictStyles() {
     }
 
-    static String of(Verdict.Outcome o) {
+    static String of(VerdictSummary.Outcome o) {
         return switch (o) {
             case GUARANTEED -> "verdict-guaranteed";
             case NOT_GUARANTEED -> "verdict-not-guaranteed";
@@ -14,7 +14,7 @@ final class VerdictStyles {
         };
     }
 
-    static void apply(javafx.scene.control.Label l, Verdict.Outcome o) {
+    static void apply(javafx.scene.control.Label l, VerdictSummary.Outcome o) {
         l.getStyleClass().removeAll("verdict-guaranteed", "verdict-not-guaranteed", "verdict-not-checked");
         if (!l.getStyleClass().contains("verdict")) {
             l.getStyleClass().add("verdict");

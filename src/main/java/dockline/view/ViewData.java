@@ -23,7 +23,7 @@ public interface ViewData {
     Mission mission();
 
     /** The verdict in words, with the certificate status. */
-    Verdict verdict();
+    VerdictSummary verdict();
 
     /** Whether there is a solution behind this data (heat map, policy, replays). */
     boolean solved();
@@ -55,7 +55,7 @@ public interface ViewData {
      *
      * @throws IllegalArgumentException when an event cannot happen where it was put (message in words)
      */
-    default Optional<ViewReplay> force(List<ForcedEvent> events) {
+    default Optional<ViewReplay> force(List<ScenarioEvent> events) {
         return Optional.empty();
     }
 

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Hand-worked arenas: every expected count and weight below was worked out by hand from the
- * reference semantics in DESIGN.md 2.3 (no outside source; the semantics are ours).
+ * reference semantics in maps/README.md, "Game semantics" (no outside source; the semantics are ours).
  */
 class ArenaCompilerTest {
 

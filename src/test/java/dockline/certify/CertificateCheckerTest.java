@@ -10,8 +10,8 @@ import dockline.fixtures.TinyMission;
 import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -49,7 +49,8 @@ class CertificateCheckerTest {
     }
 
     /**
-     * Worked by hand from the step semantics of DESIGN.md 2.3: nominal run 10 → 8 → 7 → 6; with the
+     * Worked by hand from the step semantics of maps/README.md, "Game semantics": nominal run 10 → 8 → 7 → 6;
+     * with the
      * drag on entering the carpet 10 → 5 → 4 → 3. So 7 situations, longest run 3 steps, worst minimum 3.
      */
     @Test

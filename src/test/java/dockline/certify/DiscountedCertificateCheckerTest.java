@@ -11,9 +11,9 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
-import dockline.solve.PolicyScore;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.policy.PolicyScore;
 import java.math.BigDecimal;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -21,7 +21,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Hand-worked examples of the discounted certificate (invented data, 1 unit = 1 Wh). Scores are
  * worked with the finite discounted sum DS = sum w_i / 2^i (the definition, weights 0 after
- * completion) and the gaps with s_{-1} = -v/d, s_{i+1} = d s_i + w_{i+1} (DESIGN.md 2.4).
+ * completion) and the gaps with s_{-1} = -v/d, s_{i+1} = d s_i + w_{i+1} (missions/README.md, "The discounted
+ * objective").
  */
 class DiscountedCertificateCheckerTest {
 

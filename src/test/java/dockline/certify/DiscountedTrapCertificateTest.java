@@ -6,11 +6,11 @@ import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
-import dockline.solve.DiscountedAnalysis;
-import dockline.solve.DiscountedOptions;
-import dockline.solve.DiscountedPolicies;
-import dockline.solve.DiscountedSolver;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
+import dockline.solve.discounted.DiscountedAnalysis;
+import dockline.solve.discounted.DiscountedOptions;
+import dockline.solve.discounted.DiscountedPolicies;
+import dockline.solve.discounted.DiscountedSolver;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 

@@ -19,7 +19,7 @@ import picocli.CommandLine;
 /**
  * Regression tests from a session of using the commands as a new user would, following README.md:
  * each test retells what went wrong. Checked against the documented contract (README.md,
- * DESIGN.md section 4): bad input is one clear line and exit 2, a limit is exit 3, outputs are
+ * README.md, "What you can ask"): bad input is one clear line and exit 2, a limit is exit 3, outputs are
  * never half-written, clobbered or written over an input, and every output carries the caveats.
  */
 class NewUserRegressionTest {

@@ -13,7 +13,7 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 
 /**
- * The energy discretisation of DESIGN.md 2.2: every rounding is against the robot. The expected
+ * The energy discretisation of missions/README.md, "robot": every rounding is against the robot. The expected
  * values below are hand-worked (the working is in the comments).
  */
 class EnergyScaleTest {

@@ -8,7 +8,8 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 
-/** The battery automaton of DESIGN.md 2.3: level ← min(capacity, level + delta), lost below the floor. */
+/** The battery automaton of maps/README.md, "Game semantics": level ← min(capacity, level + delta), lost below
+ * the floor. */
 class ReserveMonitorTest {
 
     @Example
@@ -35,7 +36,7 @@ class ReserveMonitorTest {
         assertThatThrownBy(() -> new ReserveMonitor(-1, 10, 10)).isInstanceOf(IllegalArgumentException.class);
     }
 
-    /** The step agrees with the formula of DESIGN.md 2.3 and stays inside 0 .. stateBound-1. */
+    /** The step agrees with the formula of maps/README.md, "Game semantics" and stays inside 0 .. stateBound-1. */
     @Property(tries = 500)
     void stepMatchesTheFormula(@ForAll @IntRange(min = 0, max = 50) int floor, @ForAll @IntRange(min = 0, max = 50) int extra,
                                @ForAll @IntRange(min = 0, max = 100) int level, @ForAll @IntRange(min = -120, max = 120) int w) {

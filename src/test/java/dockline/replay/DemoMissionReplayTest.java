@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.fixtures.ReplayChecks;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
-import dockline.solve.ReserveOptions;
+import dockline.solve.reserve.ReserveOptions;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,7 +22,7 @@ class DemoMissionReplayTest {
 
     /**
      * Oracles: the threshold solver's own worst case (ReserveSolver's dynamic programme over its
-     * ranks) for the worst-case replay; the arena's step semantics (DESIGN.md 2.3) for every row.
+     * ranks) for the worst-case replay; the arena's step semantics (maps/README.md, "Game semantics") for every row.
      */
     @ParameterizedTest
     @MethodSource("demoMissions")

@@ -6,7 +6,7 @@ import dockline.fixtures.BruteForce;
 import dockline.fixtures.RandomMissions;
 import dockline.fixtures.ReplayChecks;
 import dockline.model.Mission;
-import dockline.solve.ReserveOptions;
+import dockline.solve.reserve.ReserveOptions;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;

@@ -13,7 +13,7 @@ import dockline.margin.FixpointMargins;
 import dockline.margin.MinimumCredit;
 import dockline.model.EventKind;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.math.BigDecimal;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -35,7 +35,7 @@ class ReplayerTest {
         return CertificateChecker.closedLoop(a, p, floor, m.startUnits());
     }
 
-    /** Worked by hand (DESIGN.md 2.3): the drag on the carpet gives 10 → 5 → 4 → 3. */
+    /** Worked by hand (maps/README.md, "Game semantics"): the drag on the carpet gives 10 → 5 → 4 → 3. */
     @Test
     void worstCase_corridor_isTheDragRun() {
         Replay r = Replayer.worstCase(loop(corridor()));

@@ -1,7 +1,7 @@
 package dockline.solve;
 
-import dockline.arena.Arena;
-import dockline.arena.ArenaCompiler;
+import dockline.fixtures.ModelMoves;
+import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import java.util.Arrays;
@@ -9,11 +9,11 @@ import java.util.List;
 
 /**
  * An independent test oracle for the reserve objective: depth-bounded minimax over explicit game
- * states (robot vertex of the arena, battery level, tasks done), evaluated layer by layer
- * ("what can the robot force within d of its moves"). It reads only the compiled arena's moves,
- * outcomes and weights and the mission's zone names; it shares no code with the product game, the
- * goal automaton, the monitors or the solvers (task progress and battery arithmetic are redone here
- * from DESIGN.md 2.3).
+ * states (cell, events left, battery level, tasks done), evaluated layer by layer ("what can the
+ * robot force within d of its moves"). It reads only the map and mission records: the moves come
+ * from {@link ModelMoves} (not the arena compiler), and task progress and battery arithmetic are
+ * redone here from maps/README.md, "Game semantics"; it shares no code with the arena compiler,
+ * the product game, the goal automaton, the monitors or the solvers.
  *
  * <p><b>Depth bound.</b> Reaching "mission complete" while staying at or above a floor is a
  * reachability game on the finite set S of states; such games are positionally determined, and a
@@ -27,24 +27,46 @@ import java.util.List;
  * best lowest-level-along-the-play the robot can force (with floor 0), or -1. For each threshold f
  * this is the reachability game above, so the same depth bound holds.
  */
-final class BruteForceMinimax {
+public final class BruteForceMinimax {
 
     private final Mission mission;
-    private final Arena arena;
+    private final BuildingMap map;
     private final int cap;
+    private final int budget;
+    private final int cells;
+    /** Per (cell index, events left): the actions, each a list of outcomes (from the model). */
+    private final List<List<ModelMoves.Outcome>>[] actions;
     private final List<String> visit;
     private final List<String> avoid;
     private final int tasks;
     private final int masks;
 
-    BruteForceMinimax(Mission mission) {
+    public BruteForceMinimax(Mission mission) {
         this.mission = mission;
-        this.arena = ArenaCompiler.compile(mission);
+        this.map = mission.map();
         this.cap = mission.capacityUnits();
+        this.budget = map.disturbances().budget();
+        this.cells = map.cellCount();
         this.visit = mission.tasks().visit();
         this.avoid = mission.tasks().avoid();
         this.tasks = visit.size();
         this.masks = 1 << tasks;
+        @SuppressWarnings("unchecked")
+        List<List<ModelMoves.Outcome>>[] a = new List[cells * (budget + 1)];
+        ModelMoves moves = new ModelMoves(mission);
+        for (int i = 0; i < cells; i++) {
+            Cell c = Cell.ofIndex(i, map.width());
+            if (map.isFree(c)) {
+                for (int k = 0; k <= budget; k++) {
+                    a[i * (budget + 1) + k] = moves.actions(c, k);
+                }
+            }
+        }
+        this.actions = a;
+    }
+
+    private int robot(Cell c, int k) {
+        return c.index(map.width()) * (budget + 1) + k;
     }
 
     /** Progress after occupying a cell, or -1 if the cell lies in an avoided zone. */
@@ -76,11 +98,12 @@ final class BruteForceMinimax {
     }
 
     private int state(int robotVertex, int level, int mask) {
+        // robotVertex = cell index * (budget + 1) + events left
         return (robotVertex * (cap + 1) + level) * masks + mask;
     }
 
     /** Whether the robot can guarantee the mission with the given floor from the mission's start. */
-    boolean wins(int floor) {
+    public boolean wins(int floor) {
         int start = mission.startUnits();
         if (start < floor) {
             return false;
@@ -92,26 +115,34 @@ final class BruteForceMinimax {
         if (complete(p0, mission.start())) {
             return true;
         }
-        int n = arena.robotCount() * (cap + 1) * masks;
+        int n = actions.length * (cap + 1) * masks;
         boolean[] cur = new boolean[n];
         boolean[] next = new boolean[n];
         for (int d = 0; d <= n; d++) {
             boolean changed = false;
-            for (int a = 0; a < arena.robotCount(); a++) {
+            for (int a = 0; a < actions.length; a++) {
+                if (actions[a] == null) {
+                    continue;
+                }
                 for (int level = floor; level <= cap; level++) {
                     for (int mask = 0; mask < masks; mask++) {
                         boolean any = false;
-                        for (int e = arena.outBegin(a); e < arena.outEnd(a) && !any; e++) {
-                            int x = arena.target(e);
+                        for (List<ModelMoves.Outcome> action : actions[a]) {
+                            if (any) {
+                                break;
+                            }
                             boolean all = true;
-                            for (int o = arena.outBegin(x); o < arena.outEnd(x) && all; o++) {
-                                int to = arena.target(o);
-                                int l2 = Math.min(cap, level + arena.weight(o));
+                            for (ModelMoves.Outcome o : action) {
+                                if (!all) {
+                                    break;
+                                }
+                                int to = robot(o.to(), o.budgetLeft());
+                                int l2 = Math.min(cap, level + o.delta());
                                 if (l2 < floor) {
                                     all = false;
                                     break;
                                 }
-                                Cell c2 = arena.cellOf(to);
+                                Cell c2 = o.to();
                                 int m2 = progress(mask, c2);
                                 if (m2 < 0) {
                                     all = false;
@@ -131,14 +162,14 @@ final class BruteForceMinimax {
             cur = next;
             next = t;
             if (!changed) {
-                return cur[state(arena.startVertex(), start, p0)];
+                return cur[state(robot(mission.start(), budget), start, p0)];
             }
         }
         throw new AssertionError("no fixpoint within |S|+1 layers: the depth bound argument is broken");
     }
 
     /** The highest floor that can be guaranteed from the start (the max-min lowest level), or -1. */
-    int highestFloor() {
+    public int highestFloor() {
         int start = mission.startUnits();
         int p0 = progress(0, mission.start());
         if (p0 < 0) {
@@ -147,27 +178,32 @@ final class BruteForceMinimax {
         if (complete(p0, mission.start())) {
             return start;
         }
-        int n = arena.robotCount() * (cap + 1) * masks;
+        int n = actions.length * (cap + 1) * masks;
         int[] cur = new int[n];
         int[] next = new int[n];
         Arrays.fill(cur, -1);
         for (int d = 0; d <= n; d++) {
             boolean changed = false;
-            for (int a = 0; a < arena.robotCount(); a++) {
+            for (int a = 0; a < actions.length; a++) {
+                if (actions[a] == null) {
+                    continue;
+                }
                 for (int level = 0; level <= cap; level++) {
                     for (int mask = 0; mask < masks; mask++) {
                         int best = -1;
-                        for (int e = arena.outBegin(a); e < arena.outEnd(a); e++) {
-                            int x = arena.target(e);
+                        for (List<ModelMoves.Outcome> action : actions[a]) {
                             int worst = level;
-                            for (int o = arena.outBegin(x); o < arena.outEnd(x) && worst >= 0; o++) {
-                                int to = arena.target(o);
-                                int l2 = Math.min(cap, level + arena.weight(o));
+                            for (ModelMoves.Outcome o : action) {
+                                if (worst < 0) {
+                                    break;
+                                }
+                                int to = robot(o.to(), o.budgetLeft());
+                                int l2 = Math.min(cap, level + o.delta());
                                 if (l2 < 0) {
                                     worst = -1;
                                     break;
                                 }
-                                Cell c2 = arena.cellOf(to);
+                                Cell c2 = o.to();
                                 int m2 = progress(mask, c2);
                                 int v;
                                 if (m2 < 0) {
@@ -191,7 +227,7 @@ final class BruteForceMinimax {
             cur = next;
             next = t;
             if (!changed) {
-                return cur[state(arena.startVertex(), start, p0)];
+                return cur[state(robot(mission.start(), budget), start, p0)];
             }
         }
         throw new AssertionError("no fixpoint within |S|+1 layers: the depth bound argument is broken");

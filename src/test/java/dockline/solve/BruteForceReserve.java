@@ -6,14 +6,14 @@ import dockline.model.Mission;
 
 /**
  * Test oracle: the reserve game solved by brute force on the explicit product arena × goal ×
- * battery level, straight from the reference semantics of DESIGN.md 2.3 (level ← min(capacity,
+ * battery level, straight from the reference semantics of maps/README.md, "Game semantics" (level ← min(capacity,
  * level + delta), lost below the floor, lost in an avoided zone, won on completion), by naive
  * repetition of the one-step rule until nothing changes: a robot vertex wins if some action wins,
  * a disturbance vertex if every outcome wins. This is the textbook attractor characterisation of
  * reachability games (Grädel, Thomas, Wilke (eds.), 2002, "Automata, Logics, and Infinite Games",
  * ch. 2), computed in the slowest, most obviously correct way. For small instances only.
  */
-final class BruteForceReserve {
+public final class BruteForceReserve {
 
     private final Arena arena;
     private final GoalAutomaton goal;
@@ -23,7 +23,7 @@ final class BruteForceReserve {
     private final int gc;
     private final boolean[] win;
 
-    BruteForceReserve(Arena arena, GoalAutomaton goal) {
+    public BruteForceReserve(Arena arena, GoalAutomaton goal) {
         this.arena = arena;
         this.goal = goal;
         Mission m = arena.mission();
@@ -81,12 +81,12 @@ final class BruteForceReserve {
     }
 
     /** Whether the robot wins from robot vertex v in goal state g with battery level l. */
-    boolean winsAt(int v, int g, int level) {
+    public boolean winsAt(int v, int g, int level) {
         return level >= floor && level <= cap && win[index(v, g, level)];
     }
 
     /** The start verdict. */
-    boolean guaranteed() {
+    public boolean guaranteed() {
         Mission m = arena.mission();
         int s = arena.startVertex();
         int g0 = goal.initial(arena.cellZones(arena.cell(s)));
@@ -94,11 +94,11 @@ final class BruteForceReserve {
         return g0 != GoalAutomaton.REJECT && l0 >= floor && l0 <= cap && win[index(s, g0, l0)];
     }
 
-    int floor() {
+    public int floor() {
         return floor;
     }
 
-    int cap() {
+    public int cap() {
         return cap;
     }
 }

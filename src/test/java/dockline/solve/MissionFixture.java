@@ -24,7 +24,7 @@ import java.util.Map;
  * Builds missions programmatically for tests (invented data). Legend: {@code #} wall, {@code .}
  * tile, {@code c} carpet, {@code D} dock on tile, {@code d} door on tile.
  */
-final class MissionFixture {
+public final class MissionFixture {
 
     private final List<String> rows;
     private final Map<String, BigDecimal> moveWh = new HashMap<>(Map.of("tile", BigDecimal.ONE,
@@ -49,11 +49,11 @@ final class MissionFixture {
         this.rows = List.of(rows);
     }
 
-    static MissionFixture grid(String... rows) {
+    public static MissionFixture grid(String... rows) {
         return new MissionFixture(rows);
     }
 
-    static Map<Character, Terrain> legend() {
+    public static Map<Character, Terrain> legend() {
         return Map.of('#', Terrain.wall('#'), '.', new Terrain('.', "tile", false, false),
                 'c', new Terrain('c', "carpet", false, false), 'D', new Terrain('D', "tile", true, false),
                 'd', new Terrain('d', "tile", false, true));
@@ -64,22 +64,22 @@ final class MissionFixture {
         return this;
     }
 
-    MissionFixture capacity(long wh) {
+    public MissionFixture capacity(long wh) {
         capacity = BigDecimal.valueOf(wh);
         return this;
     }
 
-    MissionFixture resolution(String wh) {
+    public MissionFixture resolution(String wh) {
         resolution = new BigDecimal(wh);
         return this;
     }
 
-    MissionFixture waitWh(long wh) {
+    public MissionFixture waitWh(long wh) {
         waitWh = BigDecimal.valueOf(wh);
         return this;
     }
 
-    MissionFixture chargeWh(long wh) {
+    public MissionFixture chargeWh(long wh) {
         chargeWh = BigDecimal.valueOf(wh);
         return this;
     }
@@ -89,27 +89,27 @@ final class MissionFixture {
         return this;
     }
 
-    MissionFixture start(int x, int y) {
+    public MissionFixture start(int x, int y) {
         start = new Cell(x, y);
         return this;
     }
 
-    MissionFixture startWh(long wh) {
+    public MissionFixture startWh(long wh) {
         startCharge = Charge.wh(BigDecimal.valueOf(wh));
         return this;
     }
 
-    MissionFixture reserveWh(long wh) {
+    public MissionFixture reserveWh(long wh) {
         reserve = Charge.wh(BigDecimal.valueOf(wh));
         return this;
     }
 
-    MissionFixture zone(String name, Cell... cells) {
+    public MissionFixture zone(String name, Cell... cells) {
         zones.put(name, List.of(cells));
         return this;
     }
 
-    MissionFixture zone(String name, List<Cell> cells) {
+    public MissionFixture zone(String name, List<Cell> cells) {
         zones.put(name, List.copyOf(cells));
         return this;
     }
@@ -120,7 +120,7 @@ final class MissionFixture {
         return this;
     }
 
-    MissionFixture avoid(String... names) {
+    public MissionFixture avoid(String... names) {
         avoid.addAll(List.of(names));
         return this;
     }
@@ -130,22 +130,22 @@ final class MissionFixture {
         return this;
     }
 
-    MissionFixture event(EventKind kind, long extraWh, Cell... cells) {
+    public MissionFixture event(EventKind kind, long extraWh, Cell... cells) {
         rules.add(new EventRule(kind, kind.word(), List.of(cells), BigDecimal.valueOf(extraWh)));
         return this;
     }
 
-    MissionFixture event(EventKind kind, long extraWh, List<Cell> cells) {
+    public MissionFixture event(EventKind kind, long extraWh, List<Cell> cells) {
         rules.add(new EventRule(kind, kind.word(), cells, BigDecimal.valueOf(extraWh)));
         return this;
     }
 
-    MissionFixture budget(int k) {
+    public MissionFixture budget(int k) {
         budget = k;
         return this;
     }
 
-    Mission build() {
+    public Mission build() {
         List<Zone> zs = new ArrayList<>();
         zones.forEach((n, cs) -> zs.add(new Zone(n, cs)));
         Map<Cell, String> doorNames = new HashMap<>();

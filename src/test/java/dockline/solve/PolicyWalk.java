@@ -4,6 +4,8 @@ import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.Cell;
 import dockline.model.Mission;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -14,13 +16,13 @@ import java.util.Set;
 /**
  * Runs an exported {@link Policy} against every disturbance choice, by depth-first search over
  * situations (cell, level, budget left, tasks done), with the battery and the task progress redone
- * here from DESIGN.md 2.3 (independent of the product game). Fails on a situation the policy does
+ * here from maps/README.md, "Game semantics" (independent of the product game). Fails on a situation the policy does
  * not cover, a level below the floor, an avoided zone, or a cycle (a play that never completes).
  * Reports the lowest level over all plays and the situations met.
  */
-final class PolicyWalk {
+public final class PolicyWalk {
 
-    record Result(int lowestLevel, Set<String> situations) {
+    public record Result(int lowestLevel, Set<String> situations) {
     }
 
     private final Mission mission;
@@ -31,7 +33,7 @@ final class PolicyWalk {
     private final Map<String, Integer> done = new HashMap<>();
     private final Set<String> onPath = new HashSet<>();
 
-    PolicyWalk(Mission mission, Arena arena, Policy policy) {
+    public PolicyWalk(Mission mission, Arena arena, Policy policy) {
         this.mission = mission;
         this.arena = arena;
         this.policy = policy;
@@ -39,7 +41,7 @@ final class PolicyWalk {
         this.cap = mission.capacityUnits();
     }
 
-    Result run() {
+    public Result run() {
         Cell s = mission.start();
         int p = progress(0, s);
         int level = mission.startUnits();
@@ -121,7 +123,7 @@ final class PolicyWalk {
     }
 
     /** The situation key of a policy entry, as {@link #visit} writes it. */
-    static String key(PolicyEntry e) {
+    public static String key(PolicyEntry e) {
         return e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress();
     }
 }

@@ -26,7 +26,7 @@ import java.util.Random;
  * cells with walls, two surfaces, docks and doors, random energy figures in whole units, a budget of
  * 0..2 and random disturbance rules.
  */
-final class RandomArenas {
+public final class RandomArenas {
 
     private static final Map<Character, Terrain> LEGEND = Map.of(
             '#', Terrain.wall('#'),
@@ -38,11 +38,11 @@ final class RandomArenas {
     private RandomArenas() {
     }
 
-    static Mission mission(long seed, int maxW, int maxH) {
+    public static Mission mission(long seed, int maxW, int maxH) {
         return mission(new Random(seed), maxW, maxH, true);
     }
 
-    static Mission mission(Random rnd, int maxW, int maxH, boolean withTask) {
+    public static Mission mission(Random rnd, int maxW, int maxH, boolean withTask) {
         int w = 1 + rnd.nextInt(maxW);
         int h = 1 + rnd.nextInt(maxH);
         char[] kinds = {'.', '.', '.', ',', ',', '#', 'D', 'C'};
@@ -92,7 +92,7 @@ final class RandomArenas {
                 Charge.wh(BigDecimal.ZERO), new Tasks(visit, true, List.of(), true), new Objective.Reserve());
     }
 
-    static Arena arena(long seed, int maxW, int maxH) {
+    public static Arena arena(long seed, int maxW, int maxH) {
         return ArenaCompiler.compile(mission(seed, maxW, maxH));
     }
 }

@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Random;
 
 /** Random small missions for property tests (invented data, reproducible from a seed). */
-final class RandomMissions {
+public final class RandomMissions {
 
     private RandomMissions() {
     }
@@ -17,7 +17,7 @@ final class RandomMissions {
      * A tiny mission: at most 8 cells, budget at most 2, capacity at most 12 units, random surfaces,
      * docks, doors, events, tasks (visit in order or any order, avoid) and charging.
      */
-    static Mission tiny(long seed) {
+    public static Mission tiny(long seed) {
         Random r = new Random(seed);
         int w = 1 + r.nextInt(4);
         int h = 1 + r.nextInt(Math.min(4, 8 / w));
@@ -98,7 +98,7 @@ final class RandomMissions {
         return f.build();
     }
 
-    static List<Cell> pick(Random r, List<Cell> from, int k) {
+    public static List<Cell> pick(Random r, List<Cell> from, int k) {
         List<Cell> out = new ArrayList<>();
         for (int i = 0; i < k; i++) {
             out.add(from.get(r.nextInt(from.size())));
@@ -107,7 +107,7 @@ final class RandomMissions {
     }
 
     /** The mission in a few lines, for failure messages. */
-    static String describe(Mission m) {
+    public static String describe(Mission m) {
         StringBuilder sb = new StringBuilder();
         m.map().rows().forEach(row -> sb.append(row).append('\n'));
         sb.append("start ").append(m.start()).append(" charge ").append(m.startUnits()).append(" reserve ")

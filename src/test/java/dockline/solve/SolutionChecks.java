@@ -8,13 +8,16 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
+import dockline.solve.game.GameGraph;
+import dockline.solve.game.ProductGame;
+import dockline.solve.game.Solution;
 
 /**
  * Invariant checks run after every solver test (the "validation listener" habit): whatever the
  * instance, a solution must satisfy the defining properties of an attractor and its strategy
  * (Grädel, Thomas, Wilke (eds., 2002), LNCS 2500, ch. 2).
  */
-final class SolutionChecks {
+public final class SolutionChecks {
 
     private SolutionChecks() {
     }
@@ -25,7 +28,7 @@ final class SolutionChecks {
      * winning disturbance vertex is winning with smaller rank; a losing robot vertex has only losing
      * successors, a losing disturbance vertex has a losing one (so nothing more could be won).
      */
-    static void assertValidSolution(GameGraph g, Solution s) {
+    public static void assertValidSolution(GameGraph g, Solution s) {
         check(s.vertexCount() == g.vertexCount(), "solution covers %d vertices, graph has %d", s.vertexCount(),
                 g.vertexCount());
         for (int v = 0; v < g.vertexCount(); v++) {
@@ -77,7 +80,7 @@ final class SolutionChecks {
      * drops below the floor, every product edge lands on the level so computed, the loop never
      * enters LOSE, and every entry into WIN completes the mission on a dock.
      */
-    static void assertValidSolution(ProductGame game, Solution s, ReserveMonitor monitor) {
+    public static void assertValidSolution(ProductGame game, Solution s, ReserveMonitor monitor) {
         GameGraph g = game.graph();
         assertValidSolution(g, s);
         assertThat(s.winning(ProductGame.LOSE)).isFalse();

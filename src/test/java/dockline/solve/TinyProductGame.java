@@ -17,7 +17,7 @@ import java.util.Map;
  * Grädel, Thomas, Wilke (eds.), "Automata, Logics, and Infinite Games", LNCS 2500, 2002, ch. 2),
  * O(n * m) per round and at most n rounds. Only for tiny arenas.
  */
-final class TinyProductGame {
+public final class TinyProductGame {
 
     private static final int LOSE = -1;
     private static final int WIN = -2;
@@ -94,7 +94,7 @@ final class TinyProductGame {
      * Without a goal: the robot keeps the monitor out of REJECT forever (safety, for {@code >=}) or
      * forces the comparator's accepting sink (reachability, for {@code >}).
      */
-    static boolean robotWinsWithoutGoal(Arena a, Monitor m, boolean safety) {
+    public static boolean robotWinsWithoutGoal(Arena a, Monitor m, boolean safety) {
         return new TinyProductGame(a, m, null).solve(safety);
     }
 
@@ -103,7 +103,7 @@ final class TinyProductGame {
      * accepts at completion; never REJECT. As in the product the tool uses, being on a dock with the
      * tasks done but the monitor not (yet) accepting does not end the play: the robot may go on.
      */
-    static boolean robotWinsWithGoal(Arena a, Monitor m, GoalAutomaton goal) {
+    public static boolean robotWinsWithGoal(Arena a, Monitor m, GoalAutomaton goal) {
         return new TinyProductGame(a, m, goal).solve(false);
     }
 

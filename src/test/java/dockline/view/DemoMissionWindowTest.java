@@ -68,7 +68,7 @@ class DemoMissionWindowTest {
         waitUntil(() -> solvedWithReserve(m.reserveUnits()));
         ViewData d = fx(() -> window.dataProperty().get());
         // missions/README.md lists this demo as guaranteed
-        assertThat(d.verdict().outcome()).isEqualTo(Verdict.Outcome.GUARANTEED);
+        assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.GUARANTEED);
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Guaranteed");
         // the start cell needs no more than the starting charge (else the verdict could not be "guaranteed")
         int w = m.map().width();
@@ -119,7 +119,7 @@ class DemoMissionWindowTest {
         assertThat(d.canForce()).isTrue();
         // force the event the worst case itself suffers, at its step: the forced run must replay it
         ViewStep ev = d.replays().get(0).steps().stream().filter(ViewStep::hasEvent).findFirst().orElseThrow();
-        ViewReplay forced = d.force(java.util.List.of(new ForcedEvent(ev.step(), ev.event(),
+        ViewReplay forced = d.force(java.util.List.of(new ScenarioEvent(ev.step(), ev.event(),
                 ev.event() == dockline.model.EventKind.SLIP ? ev.cell() : null))).orElseThrow();
         assertThat(forced.kind()).isEqualTo(ViewReplay.Kind.FORCED);
         assertThat(forced.steps().get(ev.step()).event()).isEqualTo(ev.event());
@@ -145,7 +145,7 @@ class DemoMissionWindowTest {
         assertThat(fx(() -> window.chart().minimumUnits())).isEqualTo(fx(() -> runs.getValue().minimumUnits()));
         // an event where it cannot happen is refused in words
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> d.force(java.util.List.of(
-                new ForcedEvent(1, dockline.model.EventKind.BLOCKAGE, null)))).isInstanceOf(IllegalArgumentException.class);
+                new ScenarioEvent(1, dockline.model.EventKind.BLOCKAGE, null)))).isInstanceOf(IllegalArgumentException.class);
     }
 
     @Test
@@ -157,7 +157,8 @@ class DemoMissionWindowTest {
         robot.clickOn("#check");
         Mission high = m.withReserve(dockline.model.Charge.percent(new java.math.BigDecimal("90")));
         waitUntil(() -> solvedWithReserve(high.reserveUnits()));
-        // a floor above the starting level loses at once (DESIGN.md 2.3: the start must be at or above the floor)
+        // a floor above the starting level loses at once (maps/README.md, "Game semantics": the start must be
+        // at or above the floor)
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
     }
 }

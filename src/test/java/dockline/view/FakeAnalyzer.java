@@ -115,10 +115,10 @@ final class FakeAnalyzer implements Analyzer {
         ViewReplay worst = new ViewReplay(ViewReplay.Kind.WORST_CASE, "worst case", steps);
         int min = worst.minimumUnits();
         boolean ok = min >= reserve && need[m.start().index(w)] >= 0 && m.startUnits() >= need[m.start().index(w)];
-        Verdict v = ok
-                ? new Verdict(Verdict.Outcome.GUARANTEED, "the robot keeps at least " + Units.both(m, reserve),
+        VerdictSummary v = ok
+                ? new VerdictSummary(VerdictSummary.Outcome.GUARANTEED, "the robot keeps at least " + Units.both(m, reserve),
                         "checked by the test stand-in", OptionalInt.of(min), OptionalInt.of(min))
-                : new Verdict(Verdict.Outcome.NOT_GUARANTEED, "the battery can drop below " + Units.both(m, reserve),
+                : new VerdictSummary(VerdictSummary.Outcome.NOT_GUARANTEED, "the battery can drop below " + Units.both(m, reserve),
                         "counterexample replayed by the test stand-in", OptionalInt.empty(), OptionalInt.empty());
         ViewReplay shown = ok ? worst : new ViewReplay(ViewReplay.Kind.COUNTEREXAMPLE, "counterexample", steps);
         return new ViewData() {
@@ -128,7 +128,7 @@ final class FakeAnalyzer implements Analyzer {
             }
 
             @Override
-            public Verdict verdict() {
+            public VerdictSummary verdict() {
                 return v;
             }
 

@@ -127,7 +127,7 @@ class MissionWindowTest {
     @Test
     void the_chart_minimum_is_the_worst_case_minimum(FxRobot robot) throws Exception {
         waitUntil(this::idleAndSolved);
-        Verdict v = window.dataProperty().get().verdict();
+        VerdictSummary v = window.dataProperty().get().verdict();
         assertThat(v.worstCaseMinimumUnits()).isPresent();
         assertThat(window.chart().minimumUnits()).isEqualTo(v.worstCaseMinimumUnits().getAsInt());
         // the floor line is drawn at the reserve floor

@@ -88,7 +88,7 @@ class PictureRendererTest {
                 return m;
             }
 
-            public Verdict verdict() {
+            public VerdictSummary verdict() {
                 return base.verdict();
             }
 

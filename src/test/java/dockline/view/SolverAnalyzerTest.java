@@ -17,7 +17,7 @@ class SolverAnalyzerTest {
         // missions/README.md lists late-return as not guaranteed
         Mission m = MissionLoader.load(Path.of("missions/late-return.yaml"));
         ViewData d = new SolverAnalyzer().analyze(m, () -> false);
-        assertThat(d.verdict().outcome()).isEqualTo(Verdict.Outcome.NOT_GUARANTEED);
+        assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.NOT_GUARANTEED);
         ViewReplay ce = d.replays().get(0);
         assertThat(ce.kind()).isEqualTo(ViewReplay.Kind.COUNTEREXAMPLE);
         assertThat(ce.minimumUnits()).isLessThan(m.reserveUnits());
@@ -35,9 +35,9 @@ class SolverAnalyzerTest {
         SolverAnalyzer.SolvedData d = (SolverAnalyzer.SolvedData) new SolverAnalyzer().analyze(m, () -> false);
         var a = d.analysis();
         // the heat map the solver gives on its own (ReserveSolver with the heat map switched on)
-        var heat = dockline.solve.ReserveSolver.analyse(m, dockline.solve.ReserveOptions.defaults().withChargeNeeded(true))
+        var heat = dockline.solve.reserve.ReserveSolver.analyse(m, dockline.solve.reserve.ReserveOptions.defaults().withChargeNeeded(true))
                 .chargeNeeded().orElseThrow();
-        assertThat(d.verdict().outcome() == Verdict.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
+        assertThat(d.verdict().outcome() == VerdictSummary.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
         assertThat(d.verdict().worstCaseMinimumUnits()).isEqualTo(a.worstCaseMinimumUnits());
         assertThat(d.verdict().highestReserveUnits()).isEqualTo(a.highestGuaranteedReserveUnits());
         // the certified worst case is the first replay, and its lowest level is the solver's worst-case minimum
@@ -51,10 +51,10 @@ class SolverAnalyzerTest {
         for (int c = 0; c < m.map().cellCount(); c++) {
             int expected = heat.unitsNeeded(c, k, 0);
             int shown = d.chargeNeeded(c, k, 0);
-            assertThat(shown).isEqualTo(expected == dockline.solve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
+            assertThat(shown).isEqualTo(expected == dockline.solve.reserve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
         }
         // every policy entry is found again, by exact look-up and among the cell's actions
-        for (dockline.solve.PolicyEntry e : a.policy().orElseThrow().entries()) {
+        for (dockline.policy.PolicyEntry e : a.policy().orElseThrow().entries()) {
             int ci = e.cell().index(w);
             assertThat(d.policyAction(ci, e.level(), e.budgetLeft(), e.progress())).contains(e.action());
             assertThat(d.policyActions(ci, e.budgetLeft(), e.progress())).contains(e.action());

@@ -2,7 +2,7 @@ package dockline.solve.rounds;
 
 import dockline.arena.Arena;
 import dockline.model.Mission;
-import dockline.solve.Policy;
+import dockline.policy.Policy;
 import java.util.Optional;
 import java.util.OptionalInt;
 

@@ -2,8 +2,8 @@ package dockline.solve.rounds;
 
 import dockline.arena.Arena;
 import dockline.model.Cell;
-import dockline.solve.Policy;
-import dockline.solve.PolicyEntry;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
 import dockline.util.IntArrayList;
 import java.util.ArrayList;
 import java.util.Arrays;

@@ -1,0 +1,277 @@
+package dockline.solve.fast;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.goal.GoalAutomaton;
+import dockline.model.Mission;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.Verdict;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
+
+/**
+ * The reserve question for missions without charging before the end, answered on arena × goal by
+ * {@link MinChargeSolver} (Knuth 1977) instead of the product with the battery levels: the verdict,
+ * the highest floor that can be guaranteed, the robot's policy of least need and the worst battery
+ * level under it.
+ *
+ * <p><b>The figures</b> (start level s, floor f, n = need of the start, from
+ * {@link MinChargeSolver#solveStart()}): guaranteed ⇔ s ≥ f and n ≤ s − f; the highest floor that can
+ * be guaranteed is s − n when n ≤ s, none otherwise. The policy picks at every robot vertex the action
+ * of least need (it does not depend on the level); its closed loop never cycles (each choice leads to a
+ * vertex finalised earlier), and the most any play of it spends is exactly n, so the worst level under
+ * it is s − n, reached at the end of the worst play (the level only falls). This is the safest policy:
+ * its worst level is the highest floor itself.
+ *
+ * <p><b>The policy as rows.</b> A {@link Policy} row is a situation (cell, level, budget, tasks), so
+ * the policy is written out for the situations its closed loop reaches from the start, found by a
+ * search over (arena vertex, goal state, level). That loop can be far larger than arena × goal (one
+ * situation per level a pair is reached with), so the rows are written only when the loop has at most
+ * {@code maxPolicyRows} robot situations; otherwise the analysis says so ({@link Analysis#loopTooLarge()})
+ * and no policy is given, never a policy that was not checked. A first search over the pairs alone
+ * (no levels, a lower bound of the situations) skips the full search when it is already too large.
+ *
+ * <p>Cost: O(m·G·log(n·G)) for the solve (see {@link MinChargeSolver}), O(pairs of the loop) for the
+ * first search, O(situations × out-degree) expected for the second (an open-addressing hash set of
+ * packed longs).
+ */
+public final class FastPath {
+
+    /** The default bound on the policy's rows (robot situations of its closed loop). */
+    public static final int DEFAULT_MAX_POLICY_ROWS = 2_000_000;
+
+    private FastPath() {
+    }
+
+    /**
+     * What the fast path found. Energy figures in units of the mission's scale.
+     *
+     * @param mission                       the mission as analysed
+     * @param arena                         its compiled arena (for certificates)
+     * @param verdict                       the start verdict
+     * @param startUnits                    starting level
+     * @param reserveUnits                  reserve floor
+     * @param capacityUnits                 capacity
+     * @param startNeedUnits                the least energy the robot must be able to spend to finish from the
+     *                                      start, {@link MinChargeSolver#INFINITE} when it cannot force completion
+     *                                      (verdict only: also when it exceeds the energy available)
+     * @param highestGuaranteedReserveUnits s − need, when need ≤ s (empty when verdict only)
+     * @param worstCaseMinimumUnits         the worst level under the policy of least need, s − need, when guaranteed
+     *                                      (empty when verdict only)
+     * @param policy                        the policy's rows over its closed loop from the start, when guaranteed
+     *                                      and the loop has at most {@code maxPolicyRows} robot situations
+     * @param loopStates                    robot situations of the closed loop (when too large: the count at which
+     *                                      the search stopped, a lower bound); 0 when not searched
+     * @param loopTooLarge                  the loop has more than {@code maxPolicyRows} robot situations
+     * @param maxPolicyRows                 the bound in force
+     * @param exploredVertices              robot vertices of arena × goal the solver finalised
+     * @param pairVertices                  vertices of arena × goal
+     * @param verdictOnly                   only the verdict was asked ({@link MinChargeSolver#decide()})
+     * @param solveMillis                   arena compile and solve
+     * @param totalMillis                   everything, the policy rows included
+     */
+    public record Analysis(Mission mission, Arena arena, Verdict verdict, int startUnits, int reserveUnits,
+                           int capacityUnits, int startNeedUnits, OptionalInt highestGuaranteedReserveUnits,
+                           OptionalInt worstCaseMinimumUnits, Optional<Policy> policy, long loopStates,
+                           boolean loopTooLarge, int maxPolicyRows, long exploredVertices, long pairVertices,
+                           boolean verdictOnly, long solveMillis, long totalMillis) {
+
+        public boolean guaranteed() {
+            return verdict == Verdict.GUARANTEED;
+        }
+    }
+
+    /** Whether the fast path applies to the mission (see {@link MinChargeSolver#applicable}). */
+    public static boolean applies(Mission mission) {
+        return MinChargeSolver.applicable(ArenaCompiler.compile(mission), GoalAutomaton.of(mission));
+    }
+
+    /**
+     * Analyses the mission by the fast path; empty when it does not apply (the robot can charge
+     * before the mission is complete).
+     *
+     * @param verdictOnly stop as soon as the verdict is known: no need, no highest floor, no policy
+     * @throws ArithmeticException if arena × goal has more than {@code Integer.MAX_VALUE} vertices
+     */
+    public static Optional<Analysis> analyse(Mission mission, int maxPolicyRows, boolean verdictOnly) {
+        long t0 = System.nanoTime();
+        Arena arena = ArenaCompiler.compile(mission);
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        if (!MinChargeSolver.applicable(arena, goal)) {
+            return Optional.empty();
+        }
+        int s = mission.startUnits();
+        int f = mission.reserveUnits();
+        int cap = mission.capacityUnits();
+        MinChargeSolver solver = new MinChargeSolver(arena, goal);
+        if (verdictOnly) {
+            MinChargeSolver.Result r = solver.decide();
+            long ms = (System.nanoTime() - t0) / 1_000_000L;
+            return Optional.of(new Analysis(mission, arena, Verdict.of(r.guaranteed()), s, f, cap, r.startNeed(),
+                    OptionalInt.empty(), OptionalInt.empty(), Optional.empty(), 0, false, maxPolicyRows,
+                    r.explored(), r.productVertices(), true, ms, ms));
+        }
+        MinChargeSolver.Values values = solver.solveStart();
+        MinChargeSolver.Result r = values.result();
+        long solved = System.nanoTime();
+        int need = r.startNeed();
+        OptionalInt highest = need != MinChargeSolver.INFINITE && need <= s ? OptionalInt.of(s - need)
+                : OptionalInt.empty();
+        OptionalInt worst = OptionalInt.empty();
+        Optional<Policy> policy = Optional.empty();
+        long states = 0;
+        boolean tooLarge = false;
+        if (r.guaranteed()) {
+            worst = OptionalInt.of(s - need);
+            Rows rows = rows(arena, goal, values, s, maxPolicyRows);
+            states = rows.states;
+            tooLarge = rows.entries == null;
+            if (!tooLarge) {
+                policy = Optional.of(new Policy(rows.entries));
+            }
+        }
+        long t1 = System.nanoTime();
+        return Optional.of(new Analysis(mission, arena, Verdict.of(r.guaranteed()), s, f, cap, need, highest, worst,
+                policy, states, tooLarge, maxPolicyRows, r.explored(), r.productVertices(), false,
+                (solved - t0) / 1_000_000L, (t1 - t0) / 1_000_000L));
+    }
+
+    private record Rows(List<PolicyEntry> entries, long states) {
+    }
+
+    /**
+     * The rows of the policy of least need over its closed loop from the start at level s, or
+     * {@code entries == null} when the loop has more than {@code max} robot situations.
+     */
+    static Rows rows(Arena arena, GoalAutomaton goal, MinChargeSolver.Values values, int s, int max) {
+        int gc = goal.stateCount();
+        int a0 = arena.startVertex();
+        int g0 = goal.initial(arena.cellZones(arena.cell(a0)));
+        if (goal.accepting(g0, arena.isDock(arena.cell(a0)))) {
+            return new Rows(List.of(), 0); // complete at the start: nothing to do
+        }
+        // 1. the pairs (robot vertex, goal state) of the loop, without levels: a lower bound of its situations
+        boolean[] seenPair = new boolean[Math.multiplyExact(arena.robotCount(), gc)];
+        int[] queue = new int[1024];
+        int head = 0;
+        int tail = 0;
+        seenPair[a0 * gc + g0] = true;
+        queue[tail++] = a0 * gc + g0;
+        while (head < tail) {
+            int p = queue[head++];
+            int v = p / gc;
+            int g = p - v * gc;
+            int d = arena.target(values.chosenEdge(v, g));
+            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+                int r = arena.target(e);
+                int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
+                if (goal.accepting(g2, arena.isDock(arena.cell(r)))) {
+                    continue;
+                }
+                int q = r * gc + g2;
+                if (!seenPair[q]) {
+                    seenPair[q] = true;
+                    if (tail == queue.length) {
+                        queue = Arrays.copyOf(queue, tail * 2);
+                    }
+                    queue[tail++] = q;
+                    if (tail > max) {
+                        return new Rows(null, tail);
+                    }
+                }
+            }
+        }
+        seenPair = null;
+        // 2. the situations (pair, level); level = s − spent, packed as pair · (s + 1) + level
+        long span = (long) s + 1;
+        LongSet seen = new LongSet();
+        long[] todo = new long[1024];
+        head = 0;
+        tail = 0;
+        long k0 = (long) (a0 * gc + g0) * span + s;
+        seen.add(k0);
+        todo[tail++] = k0;
+        List<PolicyEntry> entries = new ArrayList<>();
+        while (head < tail) {
+            long key = todo[head++];
+            int p = (int) (key / span);
+            int level = (int) (key - p * span);
+            int v = p / gc;
+            int g = p - v * gc;
+            int d = arena.target(values.chosenEdge(v, g));
+            entries.add(new PolicyEntry(arena.cellOf(v), level, arena.budgetLeft(v), goal.progressMask(g),
+                    arena.action(d)));
+            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+                int r = arena.target(e);
+                int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
+                int l2 = level + arena.weight(e); // weights are never positive on the fast path's choices
+                if (goal.accepting(g2, arena.isDock(arena.cell(r))) || g2 == GoalAutomaton.REJECT || l2 < 0) {
+                    continue; // complete, or a breach the certificate will find (it cannot happen when guaranteed)
+                }
+                long k = (long) (r * gc + g2) * span + l2;
+                if (seen.add(k)) {
+                    if (tail == todo.length) {
+                        todo = Arrays.copyOf(todo, tail * 2);
+                    }
+                    todo[tail++] = k;
+                    if (tail > max) {
+                        return new Rows(null, tail);
+                    }
+                }
+            }
+        }
+        return new Rows(entries, tail);
+    }
+
+    /** An open-addressing hash set of non-negative longs (linear probing, load at most 1/2). */
+    private static final class LongSet {
+        private long[] slots = filled(1 << 10);
+        private int size;
+
+        private static long[] filled(int n) {
+            long[] a = new long[n];
+            Arrays.fill(a, -1L);
+            return a;
+        }
+
+        /** Adds k; whether it was new. */
+        boolean add(long k) {
+            if (2 * (size + 1) > slots.length) {
+                long[] old = slots;
+                slots = filled(old.length * 2);
+                for (long x : old) {
+                    if (x >= 0) {
+                        insert(x);
+                    }
+                }
+            }
+            if (insert(k)) {
+                size++;
+                return true;
+            }
+            return false;
+        }
+
+        private boolean insert(long k) {
+            int mask = slots.length - 1;
+            int i = (int) (mix(k) & mask);
+            while (slots[i] >= 0) {
+                if (slots[i] == k) {
+                    return false;
+                }
+                i = (i + 1) & mask;
+            }
+            slots[i] = k;
+            return true;
+        }
+
+        private static long mix(long k) {
+            k *= 0x9E3779B97F4A7C15L;
+            return k ^ (k >>> 29);
+        }
+    }
+}

@@ -1,0 +1,426 @@
+package dockline.solve.fast;
+
+import dockline.arena.ActionKind;
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
+import dockline.model.Mission;
+import dockline.solve.game.GoalPredecessors;
+import java.util.Arrays;
+
+/**
+ * The fast path for missions without charging before the end: the minimum charge needed at every
+ * vertex of arena × goal automaton, by the generalisation of Dijkstra's algorithm to AND-OR graphs
+ * with superior cost functions (D. E. Knuth, 1977, "A generalization of Dijkstra's algorithm",
+ * Information Processing Letters 6(1):1-5).
+ *
+ * <p><b>What it computes.</b> For a robot vertex u = (arena vertex, goal state) the value
+ * {@code need(u)} is the least amount of energy E (in units) such that the robot has a strategy
+ * that, against every disturbance choice, completes the mission from u spending at most E in total;
+ * {@link #INFINITE} if no strategy forces completion. Robot vertices take the minimum over their
+ * actions (robot edges cost 0), disturbance vertices the maximum over their outcomes of
+ * (consumption of the outcome + need of its target), and completion vertices (all tasks done, on a
+ * dock if required) are worth 0. Plays that never complete, or that occupy an avoided zone, are
+ * worth {@link #INFINITE}. This is the least fixpoint of those equations; a disturbance vertex is
+ * finalised when all its successors are, a robot vertex when it leaves the priority queue.
+ *
+ * <p><b>Why it decides the reserve question.</b> Without charging every outcome has a delta w ≤ 0,
+ * so the battery after a step is {@code min(capacity, level + w) = level + w}: levels never saturate
+ * (the starting charge is already clamped to the capacity, see {@link Mission#startUnits()}), and
+ * the level only falls. A play keeps the level at or above the floor at every step iff it does at
+ * its last step, i.e. iff {@code start − (energy spent) ≥ floor}. Hence, with start level s,
+ * floor f and initial goal state g0 (after occupying the start cell):
+ * <pre>
+ *   guaranteed  ⇔  s ≥ f  and  g0 is not the reject sink  and  need(start, g0) ≤ s − f.
+ * </pre>
+ * The capacity plays no further part. The result is independent of the energy resolution in
+ * cost (values are plain ints): O(m·G·log(n·G)) time for an arena of n vertices and m edges and a
+ * goal automaton of G states, with a 4-ary heap on a primitive long array (key and vertex packed in
+ * one entry, lazy deletion); memory about 5 bytes per disturbance vertex of arena × goal (a 4-byte
+ * running maximum and a 1-byte counter) and 5 bytes per robot vertex (value and a final flag), plus
+ * 8 bytes per heap entry (at most one per improvement), on top of the arena.
+ *
+ * <p><b>When it applies.</b> When the arena has no charge action (charge rate 0), or no robot
+ * vertex reachable from the start before completion can charge (see {@link #applicable}). Charge
+ * outcomes are left out of the computation: {@code need} is exact on every vertex when the charge
+ * rate is 0, and on every vertex reachable from the start otherwise (elsewhere it is an upper
+ * bound, because an option of the robot was dropped).
+ *
+ * <p>{@link #decide()} stops as soon as the start vertex is finalised or the smallest value in
+ * the queue exceeds {@code s − f} (values leave the queue in increasing order), so it explores only
+ * the vertices that need at most the available energy; {@link #solveAll()} computes every value.
+ */
+public final class MinChargeSolver {
+
+    /** Value of a vertex from which the robot cannot force completion. */
+    public static final int INFINITE = Integer.MAX_VALUE;
+
+    private final Arena arena;
+    private final GoalAutomaton goal;
+    private final int goalCount;
+    private final int robotCount;
+    private final int startGoal;
+    private final int available;
+    private final GoalPredecessors inverse;
+
+    /**
+     * The outcome of a run.
+     *
+     * @param guaranteed      the start verdict
+     * @param startNeed       the start vertex's need; from {@link #decide()}, {@link #INFINITE} also when it
+     *                        exceeds the available energy (the search stopped before it)
+     * @param availableUnits  starting level minus floor (negative: the start is already below the floor)
+     * @param explored        robot vertices of arena × goal taken from the queue
+     * @param productVertices vertices of arena × goal
+     * @param complete        every value was computed ({@link #solveAll()})
+     */
+    public record Result(boolean guaranteed, int startNeed, int availableUnits, long explored, long productVertices,
+                         boolean complete) {
+        /** The start need as text: units, or "never" when the robot cannot force completion. */
+        public String describeNeed() {
+            return startNeed == INFINITE ? "never" : startNeed + " units";
+        }
+    }
+
+    /**
+     * @throws IllegalArgumentException if the mission can charge before completion ({@link #applicable} is false)
+     *                                  or arena × goal has more than {@code Integer.MAX_VALUE} vertices
+     */
+    public MinChargeSolver(Arena arena, GoalAutomaton goal) {
+        if (!applicable(arena, goal)) {
+            throw new IllegalArgumentException("the robot can charge before the mission is complete:"
+                    + " the minimum-charge fast path does not apply; use the product solver");
+        }
+        this.arena = arena;
+        this.goal = goal;
+        this.goalCount = goal.stateCount();
+        Math.multiplyExact(arena.vertexCount(), goalCount);
+        this.robotCount = arena.robotCount();
+        Mission mission = arena.mission();
+        int s = arena.startVertex();
+        this.startGoal = goal.initial(arena.cellZones(arena.cell(s)));
+        this.available = mission.startUnits() - mission.reserveUnits();
+
+        this.inverse = new GoalPredecessors(arena, goal);
+    }
+
+    /**
+     * Whether the fast path is exact for the start verdict: the arena has no charge action, or no
+     * robot vertex of arena × goal reachable from the start, other than completion vertices, has
+     * one. O(m·G) time when charging exists (a forward search ignoring energy), O(1) otherwise.
+     */
+    public static boolean applicable(Arena arena, GoalAutomaton goal) {
+        boolean anyCharge = false;
+        for (int slot = 0; slot < arena.freeCellCount() && !anyCharge; slot++) {
+            int c = arena.freeCell(slot);
+            if (arena.isDock(c)) {
+                int r = arena.robotVertex(c, 0);
+                for (int e = arena.outBegin(r); e < arena.outEnd(r); e++) {
+                    if (arena.actionKind(arena.target(e)) == ActionKind.CHARGE) {
+                        anyCharge = true;
+                    }
+                }
+            }
+        }
+        if (!anyCharge) {
+            return true;
+        }
+        int gc = goal.stateCount();
+        int s = arena.startVertex();
+        int g0 = goal.initial(arena.cellZones(arena.cell(s)));
+        if (g0 == GoalAutomaton.REJECT) {
+            return true;
+        }
+        long n = Math.multiplyExact((long) arena.vertexCount(), gc);
+        boolean[] seen = new boolean[Math.toIntExact(n)];
+        int[] queue = new int[Math.toIntExact(n)];
+        int head = 0;
+        int tail = 0;
+        seen[s * gc + g0] = true;
+        queue[tail++] = s * gc + g0;
+        while (head < tail) {
+            int p = queue[head++];
+            int v = p / gc;
+            int g = p % gc;
+            if (arena.isRobot(v)) {
+                if (goal.accepting(g, arena.isDock(arena.cell(v)))) {
+                    continue;
+                }
+                for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
+                    int d = arena.target(e);
+                    if (arena.actionKind(d) == ActionKind.CHARGE) {
+                        return false;
+                    }
+                    int q = d * gc + g;
+                    if (!seen[q]) {
+                        seen[q] = true;
+                        queue[tail++] = q;
+                    }
+                }
+            } else {
+                for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
+                    int r = arena.target(e);
+                    int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
+                    if (g2 == GoalAutomaton.REJECT) {
+                        continue;
+                    }
+                    int q = r * gc + g2;
+                    if (!seen[q]) {
+                        seen[q] = true;
+                        queue[tail++] = q;
+                    }
+                }
+            }
+        }
+        return true;
+    }
+
+    /** The start verdict, stopping as soon as it is known (see the class comment). */
+    public Result decide() {
+        return run(Mode.DECIDE).result;
+    }
+
+    /**
+     * The start's need exactly (not capped by the available energy), stopping once the start is
+     * finalised: the values and chosen actions of every vertex taken from the queue so far are
+     * final, which covers the closed loop of the chosen actions from the start (each choice leads
+     * to a disturbance vertex finalised before the chooser). With it the highest floor that can be
+     * guaranteed is {@code s − need(start)} (from the class comment's equivalence, for floor f:
+     * guaranteed ⇔ need ≤ s − f), when the need is at most s; no floor can be guaranteed otherwise.
+     */
+    public Values solveStart() {
+        return run(Mode.START);
+    }
+
+    /** Every value; {@link Values#need(int, int)} gives the minimum charge per arena vertex and goal state. */
+    public Values solveAll() {
+        return run(Mode.ALL);
+    }
+
+    private enum Mode { DECIDE, START, ALL }
+
+    /** The minimum charge needed per robot vertex of arena × goal, from {@link #solveAll()}. */
+    public static final class Values {
+        private final Arena arena;
+        private final int[] robotNeed;
+        private final byte[] choice;
+        private final boolean[] done;
+        private final int goalCount;
+        private final int robotCount;
+        private final Result result;
+
+        private Values(Arena arena, int[] robotNeed, byte[] choice, boolean[] done, int goalCount, int robotCount,
+                       Result result) {
+            this.arena = arena;
+            this.robotNeed = robotNeed;
+            this.choice = choice;
+            this.done = done;
+            this.goalCount = goalCount;
+            this.robotCount = robotCount;
+            this.result = result;
+        }
+
+        /**
+         * The robot's action of least need at robot vertex {@code v} in goal state {@code g}: the arena
+         * edge to the disturbance vertex whose finalised value gave {@code need(v, g)} first (on a tie
+         * the one finalised first, so following the choices never cycles: each leads to a vertex
+         * finalised earlier). -1 when the vertex is not final, is a completion vertex, or cannot force
+         * completion. The choice does not depend on the battery level.
+         */
+        public int chosenEdge(int v, int g) {
+            if (v < 0 || v >= robotCount) {
+                throw new IllegalArgumentException("not a robot vertex: " + v);
+            }
+            if (g == GoalAutomaton.REJECT) {
+                return -1;
+            }
+            int p = v * goalCount + g;
+            int c = choice[p];
+            return done[p] && c > 0 ? arena.outBegin(v) + c - 1 : -1;
+        }
+
+        /**
+         * The least energy (units) the robot must be able to spend to complete the mission from robot
+         * vertex {@code v} in goal state {@code g}; {@link #INFINITE} when it cannot force completion
+         * or {@code g} is the reject sink.
+         */
+        public int need(int v, int g) {
+            if (v < 0 || v >= robotCount) {
+                throw new IllegalArgumentException("not a robot vertex: " + v);
+            }
+            return g == GoalAutomaton.REJECT ? INFINITE : robotNeed[v * goalCount + g];
+        }
+
+        public Result result() {
+            return result;
+        }
+    }
+
+    private Values run(Mode mode) {
+        final boolean stopEarly = mode == Mode.DECIDE;
+        final boolean stopAtStart = mode != Mode.ALL;
+        final int gc = goalCount;
+        final int rc = robotCount;
+        final int robotN = Math.multiplyExact(rc, gc);
+        final int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
+        final int[] robotNeed = new int[robotN];
+        Arrays.fill(robotNeed, INFINITE);
+        final int[] distMax = new int[distN];
+        final byte[] processed = new byte[distN];
+        final Heap heap = new Heap(Math.min(robotN, 1 << 20));
+        final boolean[] done = new boolean[robotN];
+        // the chosen action per robot vertex: 1 + its out-edge offset (0: none); out-degrees are small
+        final byte[] choice = new byte[robotN];
+        long explored = 0;
+
+        int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
+        boolean feasible = available >= 0 && startP >= 0;
+        if (feasible || !stopEarly && startP >= 0 || mode == Mode.ALL) {
+            for (int slot = 0; slot < arena.freeCellCount(); slot++) {
+                int c = arena.freeCell(slot);
+                boolean dock = arena.isDock(c);
+                for (int g = 0; g < gc; g++) {
+                    if (goal.accepting(g, dock)) {
+                        for (int k = 0; k <= arena.budget(); k++) {
+                            int p = arena.robotVertex(c, k) * gc + g;
+                            robotNeed[p] = 0;
+                            heap.push(0, p);
+                        }
+                    }
+                }
+            }
+        }
+        while (!heap.isEmpty()) {
+            long top = heap.peek();
+            int x = (int) (top >>> 32);
+            if (stopEarly && x > available) {
+                break;
+            }
+            heap.poll();
+            int u = (int) top;
+            if (done[u] || x != robotNeed[u]) {
+                continue; // a stale entry: u was final, or improved after this entry was pushed
+            }
+            done[u] = true;
+            explored++;
+            if (u == startP && stopAtStart) {
+                break;
+            }
+            int r = u / gc;
+            int g2 = u - r * gc;
+            int cellR = arena.cell(r);
+            int gFrom = inverse.begin(cellR, g2);
+            int gTo = inverse.end(cellR, g2);
+            if (gFrom == gTo) {
+                continue;
+            }
+            for (int i = arena.inBegin(r), end = arena.inEnd(r); i < end; i++) {
+                int e = arena.inEdge(i);
+                int d = arena.source(e);
+                int w = arena.weight(e);
+                if (w > 0) {
+                    continue; // a charge outcome: outside the fast path (see the class comment)
+                }
+                int cost = Math.addExact(x, -w);
+                int dIdx = (d - rc) * gc;
+                int outdeg = arena.outEnd(d) - arena.outBegin(d);
+                for (int j = gFrom; j < gTo; j++) {
+                    int g = inverse.state(j);
+                    int dp = dIdx + g;
+                    if (cost > distMax[dp]) {
+                        distMax[dp] = cost;
+                    }
+                    if (++processed[dp] == outdeg) {
+                        // every outcome is final: the disturbance vertex is worth distMax; its owner may improve
+                        int y = distMax[dp];
+                        int ownerEdge = arena.inEdge(arena.inBegin(d));
+                        int owner = arena.source(ownerEdge);
+                        int rp = owner * gc + g;
+                        if (y < robotNeed[rp] && !done[rp]) {
+                            robotNeed[rp] = y;
+                            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
+                            heap.push(y, rp);
+                        }
+                    }
+                }
+            }
+        }
+        // after a full run every vertex left with a value is final; in decide() mode an undecided start needs more
+        int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
+        boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
+        long productVertices = (long) arena.vertexCount() * gc;
+        return new Values(arena, robotNeed, choice, done, gc, rc, new Result(guaranteed, startNeed, available, explored,
+                productVertices, mode == Mode.ALL));
+    }
+
+    /**
+     * Min-heap of robot product vertices with their keys packed into one long ({@code key << 32 | vertex}),
+     * 4-ary, with lazy deletion instead of decrease-key: an improved vertex is pushed again and stale
+     * entries are skipped when they surface. Keys live inside the heap entries, so sifting reads one
+     * array with good locality instead of chasing a key array at random; a 4-ary heap has half the levels
+     * of a binary one. O(log n) per operation, at most one entry per improvement.
+     */
+    private static final class Heap {
+        private long[] heap;
+        private int size;
+
+        Heap(int capacity) {
+            this.heap = new long[Math.max(16, capacity)];
+        }
+
+        boolean isEmpty() {
+            return size == 0;
+        }
+
+        long peek() {
+            return heap[0];
+        }
+
+        void push(int key, int v) {
+            if (size == heap.length) {
+                heap = Arrays.copyOf(heap, Math.addExact(heap.length, heap.length >> 1));
+            }
+            long x = ((long) key << 32) | v;
+            int i = size++;
+            while (i > 0) {
+                int parent = (i - 1) >>> 2;
+                long p = heap[parent];
+                if (p <= x) {
+                    break;
+                }
+                heap[i] = p;
+                i = parent;
+            }
+            heap[i] = x;
+        }
+
+        long poll() {
+            long top = heap[0];
+            long x = heap[--size];
+            int n = size;
+            int i = 0;
+            while (true) {
+                int c = 4 * i + 1;
+                if (c >= n) {
+                    break;
+                }
+                int best = c;
+                long bv = heap[c];
+                int last = Math.min(c + 4, n);
+                for (int j = c + 1; j < last; j++) {
+                    long hv = heap[j];
+                    if (hv < bv) {
+                        bv = hv;
+                        best = j;
+                    }
+                }
+                if (x <= bv) {
+                    break;
+                }
+                heap[i] = bv;
+                i = best;
+            }
+            heap[i] = x;
+            return top;
+        }
+    }
+}

@@ -1,0 +1,700 @@
+package dockline.solve.reserve;
+
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
+import dockline.monitor.Monitor;
+import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
+import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.GoalPredecessors;
+import dockline.solve.game.ProductGame;
+import dockline.util.LongIntMap;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
+
+/**
+ * The product arena × goal automaton × {@link ReserveMonitor} with nothing stored but what the
+ * solver writes: vertices are numbered by arithmetic, {@code p = ((a · 2^gb) + g) · 2^lb + s} for
+ * arena vertex a, goal state g &lt; G ≤ 2^gb and monitor state s &lt; L ≤ 2^lb (level minus floor,
+ * L = capacity − floor + 1; padding to powers of two turns the decoding into shifts), and both
+ * the successors and the predecessors of a vertex are generated on demand from the arena's CSR
+ * arrays, the inverted goal step ({@link GoalPredecessors}) and the inverted battery update. No
+ * product CSR, no decoded triples, no index, no per-state objects.
+ *
+ * <p>The game is the one {@link ProductGame} builds (same start, same sinks, same completion on
+ * arrival); a robot triple that completes the mission on a dock plays the part of ProductGame's WIN
+ * sink, an outcome below the floor or into an avoided zone that of LOSE (it is simply never won).
+ * Unlike ProductGame, the numbering covers every triple, reachable from the start or not.
+ *
+ * <p>{@link #solve(boolean)} runs the linear-time backward attractor (a worklist and counters, as in
+ * {@link AttractorSolver}) over that implicit graph: one byte per vertex counts the successors known
+ * to be won, a worklist holds the won vertices not yet expanded (the least fixpoint does not depend on
+ * the worklist order: last-in first-out keeps the search local for a verdict, first-in first-out
+ * ranks the vertices for a policy of fewest moves). O(|V| + |E|) of the full
+ * product; memory half a byte per slot of the padded numbering plus the worklist; it can stop as soon as the start
+ * vertex is won. {@link #bfs()} is the plain breadth-first search over the same implicit graph from
+ * the start (the memory-bound floor for this layout).
+ *
+ * <p>{@link #solveWithStrategy} also records the robot's choice (in the robot triple's own counter,
+ * written once when the triple is won: no extra memory), from which {@link #policy} walks the closed loop from the start and
+ * {@link #worstCaseMinimum} evaluates its lowest level (O(closed loop) each); this is the
+ * {@link ReserveOptions.Route#IMPLICIT} route of {@link ReserveSolver#analyse}.
+ *
+ * <p>The inversion of the battery update {@code s' = min(L − 1, s + w)}, below the floor rejected:
+ * for {@code s' < L − 1} the only predecessor state is {@code s = s' − w} (when in range); for
+ * {@code s' = L − 1} (full) they are all {@code s ≥ L − 1 − w} when {@code w ≥ 0}, and none when
+ * {@code w < 0}. Sources: the attractor of Grädel, Thomas and Wilke (2002, "Automata, Logics, and
+ * Infinite Games", ch. 2), as in {@link AttractorSolver}; the product as {@link ProductGame} builds it.
+ */
+public final class ImplicitReserveGame {
+
+    private final Arena arena;
+    private final GoalAutomaton goal;
+    private final ReserveMonitor monitor;
+    private final int gc;
+    private final int levels;
+    private final int gBits;
+    private final int lBits;
+    private final long slotCount;
+    private final long vertexCount;
+    private final GoalPredecessors inverse;
+    // the arena's reverse CSR with each slot's source, weight and the source's out-degree inline, so
+    // the backward search reads one slot sequentially instead of chasing in-edge -> edge -> source
+    private final int[] revSource;
+    private final int[] revWeight;
+    private final byte[] revNeed;
+    // per disturbance (action) vertex x, the index of x among its owner's out-edges: the robot's choice
+    // recorded in the owner's counter (see run)
+    private final byte[] actionIndex;
+    // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
+    private final int[] ownerOf;
+    // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
+    private long budgetBytes = Long.MAX_VALUE;
+    private long fixedBytes = 0;
+
+    /** What a solve found. */
+    public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
+                         long vertexCount) {
+    }
+
+    /**
+     * @throws ProductTooLargeException if the product has more than {@code Integer.MAX_VALUE - 16} vertices
+     */
+    public ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor) {
+        if (arena == null || goal == null || monitor == null) {
+            throw new IllegalArgumentException("arena, goal and monitor are required");
+        }
+        this.arena = arena;
+        this.goal = goal;
+        this.monitor = monitor;
+        this.gc = goal.stateCount();
+        this.levels = (int) monitor.stateBound();
+        this.gBits = bits(gc);
+        this.lBits = bits(levels);
+        this.vertexCount = (long) arena.vertexCount() * gc * levels;
+        this.slotCount = (long) arena.vertexCount() << (gBits + lBits);
+        if (slotCount > Integer.MAX_VALUE - 16) {
+            throw new ProductTooLargeException(SizeEstimate.of(vertexCount, vertexCount, 0), Integer.MAX_VALUE, false);
+        }
+        this.inverse = new GoalPredecessors(arena, goal);
+        int m = arena.edgeCount();
+        this.revSource = new int[m];
+        this.revWeight = new int[m];
+        this.revNeed = new byte[m];
+        for (int i = 0; i < m; i++) {
+            int e = arena.inEdge(i);
+            int d = arena.source(e);
+            int deg = arena.outEnd(d) - arena.outBegin(d);
+            if (deg > 15) {
+                throw new IllegalArgumentException("arena vertex " + d + " has " + deg + " out-edges; at most 15 fit");
+            }
+            revSource[i] = d;
+            revWeight[i] = arena.weight(e);
+            revNeed[i] = (byte) deg;
+        }
+        int rc = arena.robotCount();
+        this.actionIndex = new byte[arena.vertexCount() - rc];
+        this.ownerOf = new int[arena.vertexCount() - rc];
+        for (int x = rc; x < arena.vertexCount(); x++) {
+            if (arena.inEnd(x) - arena.inBegin(x) != 1) {
+                throw new IllegalArgumentException("disturbance vertex " + x + " must have exactly one way in, from its"
+                        + " robot vertex");
+            }
+            int e = arena.inEdge(arena.inBegin(x));
+            actionIndex[x - rc] = (byte) (e - arena.outBegin(arena.source(e)));
+            ownerOf[x - rc] = arena.source(e);
+        }
+    }
+
+    /**
+     * Caps the worklist, whose size is not known before the solve (it holds the won vertices not yet
+     * expanded): a solve whose worklist, with the {@code fixedBytes} the rest of the solve takes, would
+     * pass {@code totalBudgetBytes} stops with a {@link ProductTooLargeException} instead of running out
+     * of memory.
+     */
+    void limitWorklist(long fixedBytes, long totalBudgetBytes) {
+        this.fixedBytes = Math.max(0, fixedBytes);
+        this.budgetBytes = totalBudgetBytes;
+    }
+
+    private static int bits(int n) {
+        return n <= 1 ? 0 : 32 - Integer.numberOfLeadingZeros(n - 1);
+    }
+
+    /** The number of a triple. */
+    int id(int a, int g, int s) {
+        return (((a << gBits) | g) << lBits) | s;
+    }
+
+    /** Slots of the numbering (every triple, padded): the length of the per-vertex arrays. */
+    public long slotCount() {
+        return slotCount;
+    }
+
+    /** Vertices of the full product (every triple). */
+    public long vertexCount() {
+        return vertexCount;
+    }
+
+    /** The start vertex, or -1 when the start is lost (below the floor, avoided zone), -2 when already complete. */
+    public int start() {
+        int a0 = arena.startVertex();
+        int c0 = arena.cell(a0);
+        int g0 = goal.initial(arena.cellZones(c0));
+        int m0 = monitor.initialState();
+        if (g0 == GoalAutomaton.REJECT || m0 == Monitor.REJECT) {
+            return -1;
+        }
+        if (goal.accepting(g0, arena.isDock(c0))) {
+            return -2;
+        }
+        return id(a0, g0, m0);
+    }
+
+    /** The attractor of the completion vertices, stopping once the start is won when {@code stopAtStart}. */
+    public Result solve(boolean stopAtStart) {
+        return solve(stopAtStart, () -> false);
+    }
+
+    public Result solve(boolean stopAtStart, BooleanSupplier cancelled) {
+        return run(stopAtStart, cancelled, null, false, null);
+    }
+
+    /**
+     * A solve that also records the robot's choice: per robot triple, in its counter, the index (among the arena
+     * vertex's out-edges) of the action whose disturbance triple won it, written once, when the slot is
+     * won, by a successor won strictly earlier; so the closed loop of these choices is acyclic and every
+     * play of it reaches completion. Stops once the start is won (the closed loop from the start only
+     * visits vertices won before it). The worklist is first-in first-out (see {@link #run}).
+     */
+    public Strategy solveWithStrategy(BooleanSupplier cancelled) {
+        byte[][] counts = new byte[1][];
+        Result r = run(true, cancelled, null, true, counts);
+        return new Strategy(r, counts[0]);
+    }
+
+    /**
+     * The whole attractor (no early stop, last-in first-out): the robot's winning region over every
+     * triple, for {@link ChargeNeeded}. Same memory as {@link #solve(boolean)}, which it is, keeping
+     * the counters.
+     */
+    public Strategy solveRegion(BooleanSupplier cancelled) {
+        byte[][] counts = new byte[1][];
+        Result r = run(false, cancelled, null, false, counts);
+        return new Strategy(r, counts[0]);
+    }
+
+    /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
+    public final class Strategy {
+        private final Result result;
+        private final byte[] count;
+
+        private Strategy(Result result, byte[] count) {
+            this.result = result;
+            this.count = count;
+        }
+
+        /** The robot's recorded choice at won robot triple p: the index of the action among its out-edges. */
+        int choice(int p) {
+            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) - 1;
+        }
+
+        /**
+         * Whether the robot wins from robot triple (robot vertex, goal state, monitor state), by the
+         * counters of this solve; exact only when the solve ran to the end ({@link #complete()}), which
+         * it does whenever the start is not won. O(1).
+         *
+         * @throws IllegalStateException if the solve stopped early
+         */
+        public boolean robotWins(int robotVertex, int goalState, int monitorState) {
+            if (!complete()) {
+                throw new IllegalStateException("the solve stopped once the start was won: the region is partial");
+            }
+            if (robotVertex < 0 || robotVertex >= arena.robotCount() || goalState < 0 || goalState >= gc
+                    || monitorState < 0 || monitorState >= levels) {
+                return false;
+            }
+            int p = id(robotVertex, goalState, monitorState);
+            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) > 0;
+        }
+
+        /** Whether the solve ran to the end, so that {@link #robotWins} is the whole winning region. */
+        public boolean complete() {
+            return !result.stoppedEarly();
+        }
+
+        public Result result() {
+            return result;
+        }
+
+        public boolean startWon() {
+            return result.startWon();
+        }
+    }
+
+    /**
+     * The policy of the recorded choices: one row per robot triple of the closed loop from the start
+     * (robot follows its choice, disturbance plays every outcome), the same rows as
+     * {@link ProductGame#policy} gives for the same choices. O(closed loop); a bit per slot for the visited set.
+     *
+     * @throws IllegalArgumentException if the robot does not win from the start
+     */
+    public Policy policy(Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+        List<PolicyEntry> entries = new ArrayList<>();
+        int start = start();
+        if (start < 0) {
+            return new Policy(entries);
+        }
+        final int rc = arena.robotCount();
+        long[] seen = new long[(int) (slotCount >>> 6) + 1];
+        int[] todo = new int[1 << 10];
+        int tail = 0;
+        seen[start >>> 6] |= 1L << start;
+        todo[tail++] = start;
+        int[] succ = new int[16];
+        while (tail > 0) {
+            int p = todo[--tail];
+            int s = p & ((1 << lBits) - 1);
+            int g = (p >>> lBits) & ((1 << gBits) - 1);
+            int x = p >>> (lBits + gBits);
+            int k;
+            if (x < rc) {
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
+                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
+                        goal.progressMask(g), arena.action(d)));
+                succ[0] = id(d, g, s);
+                k = 1;
+            } else {
+                k = outcomes(x, g, s, succ, null);
+            }
+            for (int i = 0; i < k; i++) {
+                int q = succ[i];
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    if (tail == todo.length) {
+                        todo = Arrays.copyOf(todo, tail * 2);
+                    }
+                    todo[tail++] = q;
+                }
+            }
+        }
+        return new Policy(entries);
+    }
+
+    /**
+     * The lowest battery level along any play of the closed loop of the recorded choices from the
+     * start, the level on arrival at completion included: W(robot p) = min(level p, W(chosen
+     * successor)); W(disturbance d) = min(level d, over outcomes W(successor) or the level on arrival
+     * when the outcome completes the mission). The closed loop is acyclic, so a depth-first
+     * post-order evaluates it in O(closed loop) (a hash map holds W).
+     */
+    public int worstCaseMinimum(Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+        int start = start();
+        if (start == -2) {
+            return monitor.level(monitor.initialState());
+        }
+        final int rc = arena.robotCount();
+        LongIntMap worst = new LongIntMap(1 << 10);
+        int[] stack = new int[1 << 10];
+        int sp = 0;
+        stack[sp++] = start;
+        int[] succ = new int[16];
+        int[] arrive = new int[16];
+        while (sp > 0) {
+            int p = stack[sp - 1];
+            if (worst.get(p) != LongIntMap.ABSENT) {
+                sp--;
+                continue;
+            }
+            int s = p & ((1 << lBits) - 1);
+            int g = (p >>> lBits) & ((1 << gBits) - 1);
+            int x = p >>> (lBits + gBits);
+            int k;
+            if (x < rc) {
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
+                succ[0] = id(d, g, s);
+                arrive[0] = -1;
+                k = 1;
+            } else {
+                k = outcomes(x, g, s, succ, arrive);
+            }
+            int w = monitor.level(s);
+            boolean ready = true;
+            for (int i = 0; i < k; i++) {
+                if (arrive[i] >= 0) {
+                    w = Math.min(w, arrive[i]);
+                    continue;
+                }
+                int v = worst.get(succ[i]);
+                if (v == LongIntMap.ABSENT) {
+                    ready = false;
+                    if (sp == stack.length) {
+                        stack = Arrays.copyOf(stack, sp * 2);
+                    }
+                    stack[sp++] = succ[i];
+                } else {
+                    w = Math.min(w, v);
+                }
+            }
+            if (ready) {
+                worst.put(p, w);
+                sp--;
+            }
+        }
+        return worst.get(start);
+    }
+
+    /**
+     * The outcomes of disturbance triple (x, g, s) into {@code succ}: robot triples, or, for an outcome
+     * that completes the mission on a dock, -1 with the level on arrival in {@code arrive} (when given;
+     * else such outcomes are left out). Returns how many were written.
+     *
+     * @throws IllegalStateException if an outcome loses (the triple was not won)
+     */
+    private int outcomes(int x, int g, int s, int[] succ, int[] arrive) {
+        int k = 0;
+        for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
+            int s2 = monitor.step(s, arena.weight(e));
+            int a2 = arena.target(e);
+            int c2 = arena.cell(a2);
+            int g2 = s2 == Monitor.REJECT ? GoalAutomaton.REJECT : goal.step(g, arena.cellZones(c2));
+            if (g2 == GoalAutomaton.REJECT) {
+                throw new IllegalStateException("a choice of the closed loop leads to a loss");
+            }
+            if (goal.accepting(g2, arena.isDock(c2))) {
+                if (arrive != null) {
+                    succ[k] = -1;
+                    arrive[k++] = monitor.level(s2);
+                }
+                continue;
+            }
+            succ[k] = id(a2, g2, s2);
+            if (arrive != null) {
+                arrive[k] = -1;
+            }
+            k++;
+        }
+        return k;
+    }
+
+    /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
+    boolean[] wonFlags() {
+        boolean[][] out = new boolean[1][];
+        run(false, () -> false, out, false, null);
+        return out[0];
+    }
+
+    /**
+     * The attractor. With {@code fifo} (a strategy is recorded) the worklist is first-in first-out,
+     * so vertices are won in order of rank (the number of moves in which the robot can force
+     * completion, as in {@link AttractorSolver}) and each robot triple's recorded choice leads to a
+     * successor of least rank: the policy finishes in the fewest moves in the worst case. Without it
+     * the worklist is last-in first-out, which keeps the search near the counters it just touched
+     * (the least fixpoint does not depend on the order).
+     */
+    private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, boolean fifo,
+                       byte[][] countsOut) {
+        int start = start();
+        if (start < 0 && flagsOut == null && countsOut == null) {
+            return new Result(start == -2, 0, 0, false, vertexCount);
+        }
+        final int n = (int) slotCount;
+        final int rc = arena.robotCount();
+        final int top = levels - 1;
+        final int lb = lBits;
+        final int gb = gBits;
+        final int sMask = (1 << lb) - 1;
+        final int gMask = (1 << gb) - 1;
+        // 4 bits per vertex (out-degrees are at most 15): for a disturbance triple with several outcomes
+        // the outcomes known to be won (won at its out-degree); for a robot triple 0 while not won, else
+        // 1 + its chosen action's index (targets: 1). Half a byte per vertex keeps the whole table in the
+        // last-level cache for products of tens of millions.
+        final byte[] count = new byte[(n >>> 1) + 1];
+        // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
+        // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
+        // keeps the search near the counters it just touched, first-in first-out ranks the triples.
+        // One circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
+        // or at the head (queue); its length is a power of two so indices wrap by a mask
+        int[] wl = new int[1 << 12];
+        int wmask = wl.length - 1;
+        int head = 0;
+        int tail = 0;
+        long wonCount = 0;
+        final boolean[] flags = flagsOut != null ? new boolean[n] : null;
+        // the targets: robot triples completing the mission (any level)
+        for (int slot = 0; slot < arena.freeCellCount(); slot++) {
+            int c = arena.freeCell(slot);
+            boolean dock = arena.isDock(c);
+            for (int g = 0; g < gc; g++) {
+                if (goal.accepting(g, dock)) {
+                    for (int k = 0; k <= arena.budget(); k++) {
+                        int base = id(arena.robotVertex(c, k), g, 0);
+                        for (int s = 0; s < levels; s++) {
+                            int t = base + s;
+                            count[t >>> 1] |= (byte) (1 << ((t & 1) << 2));
+                            if (tail - head == wl.length) {
+                                wl = grow(wl, head, tail);
+                                wmask = wl.length - 1;
+                                tail -= head;
+                                head = 0;
+                            }
+                            wl[(tail++) & wmask] = base + s;
+                            wonCount++;
+                            if (flags != null) {
+                                flags[base + s] = true;
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        long edges = 0;
+        int steps = 0;
+        boolean stopped = false;
+        expand:
+        while (tail != head) {
+            int p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
+            int s2 = p & sMask;
+            int g2 = (p >>> lb) & gMask;
+            int x = p >>> (lb + gb);
+            int from = arena.inBegin(x);
+            int to = arena.inEnd(x);
+            edges += to - from;
+            // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
+            int cell = arena.cell(x);
+            int gFrom = inverse.begin(cell, g2);
+            int gTo = inverse.end(cell, g2);
+            for (int i = from; i < to; i++) {
+                int d = revSource[i];
+                int w = revWeight[i];
+                int need = revNeed[i];
+                int sLo;
+                int sHi;
+                if (s2 < top) {
+                    sLo = s2 - w;
+                    sHi = sLo;
+                } else if (w >= 0) {
+                    sLo = Math.max(0, top - w);
+                    sHi = top;
+                } else {
+                    continue;
+                }
+                if (sLo < 0 || sHi > top) {
+                    continue;
+                }
+                int dBase = d << gb;
+                int owner = ownerOf[d - rc];
+                int oBase = owner << gb;
+                int choice = (actionIndex[d - rc] + 1);
+                for (int j = gFrom; j < gTo; j++) {
+                    int gj = inverse.state(j);
+                    int base = (dBase | gj) << lb;
+                    int ob = (oBase | gj) << lb;
+                    for (int s = sLo; s <= sHi; s++) {
+                        if (need > 1) {
+                            // an action the disturbance can spoil: won once all its outcomes are
+                            int q = base + s;
+                            int qs = (q & 1) << 2;
+                            int cell8 = count[q >>> 1];
+                            int c = (cell8 >>> qs) & 15;
+                            if (c >= need) {
+                                continue;
+                            }
+                            count[q >>> 1] = (byte) (cell8 + (1 << qs));
+                            if (c + 1 < need) {
+                                continue;
+                            }
+                            if (flags != null) {
+                                flags[q] = true;
+                            }
+                        } else if (flags != null) {
+                            flags[base + s] = true;
+                        }
+                        // (d, gj, s) is won now. An action with one outcome needs no counter: its only
+                        // successor is the robot triple just expanded, which is expanded once. Its owner
+                        // (same goal state and level) is won by it unless already won; the owner's counter
+                        // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
+                        // The worklist holds robot triples only, so first-in first-out takes them in
+                        // order of rank and the first won action of an owner is one of least rank.
+                        wonCount++;
+                        edges++;
+                        int o = ob + s;
+                        int os = (o & 1) << 2;
+                        int o8 = count[o >>> 1];
+                        if (((o8 >>> os) & 15) != 0) {
+                            continue;
+                        }
+                        count[o >>> 1] = (byte) (o8 | (choice << os));
+                        if (tail - head == wl.length) {
+                            wl = grow(wl, head, tail);
+                            wmask = wl.length - 1;
+                            tail -= head;
+                            head = 0;
+                        }
+                        wl[(tail++) & wmask] = o;
+                        wonCount++;
+                        if (flags != null) {
+                            flags[o] = true;
+                        }
+                        if (o == start && stopAtStart) {
+                            stopped = true;
+                            break expand;
+                        }
+                    }
+                }
+            }
+            if (++steps == AttractorSolver.POLL_INTERVAL) {
+                steps = 0;
+                if (cancelled.getAsBoolean()) {
+                    throw new CancellationException("solving was cancelled");
+                }
+            }
+        }
+        if (flagsOut != null) {
+            flagsOut[0] = flags;
+        }
+        if (countsOut != null) {
+            countsOut[0] = count;
+        }
+        boolean won = start == -2 || start >= 0 && (stopped || ((count[start >>> 1] >>> ((start & 1) << 2)) & 15) > 0);
+        return new Result(won, wonCount, edges, stopped, vertexCount);
+    }
+
+    /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
+    private int[] grow(int[] wl, int head, int tail) {
+        // while copying, the old buffer and the new one (twice as long) are both live
+        long bytes = fixedBytes + 12L * wl.length;
+        if (bytes > budgetBytes || wl.length >= (1 << 30)) {
+            throw new ProductTooLargeException(new SizeEstimate(vertexCount, 0, bytes, 0), budgetBytes, true);
+        }
+        int[] out = new int[wl.length * 2];
+        int mask = wl.length - 1;
+        for (int i = head; i != tail; i++) {
+            out[i - head] = wl[i & mask];
+        }
+        return out;
+    }
+
+    /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
+    public Result bfs() {
+        int start = start();
+        if (start < 0) {
+            return new Result(start == -2, 0, 0, false, vertexCount);
+        }
+        final int n = (int) slotCount;
+        final int rc = arena.robotCount();
+        final int lb = lBits;
+        final int gb = gBits;
+        final int sMask = (1 << lb) - 1;
+        final int gMask = (1 << gb) - 1;
+        final long[] seen = new long[(n >>> 6) + 1];
+        IntQueue queue = new IntQueue(1 << 16);
+        seen[start >>> 6] |= 1L << start;
+        queue.add(start);
+        long edges = 0;
+        int head = 0;
+        while (head < queue.size()) {
+            int p = queue.get(head++);
+            int s = p & sMask;
+            int g = (p >>> lb) & gMask;
+            int x = p >>> (lb + gb);
+            int from = arena.outBegin(x);
+            int to = arena.outEnd(x);
+            edges += to - from;
+            if (x < rc) {
+                for (int e = from; e < to; e++) {
+                    int q = (((arena.target(e) << gb) | g) << lb) | s;
+                    if ((seen[q >>> 6] & (1L << q)) == 0) {
+                        seen[q >>> 6] |= 1L << q;
+                        queue.add(q);
+                    }
+                }
+                continue;
+            }
+            for (int e = from; e < to; e++) {
+                int s2 = monitor.step(s, arena.weight(e));
+                if (s2 == Monitor.REJECT) {
+                    continue;
+                }
+                int a2 = arena.target(e);
+                int c2 = arena.cell(a2);
+                int g2 = goal.step(g, arena.cellZones(c2));
+                if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
+                    continue; // a sink (LOSE or WIN): nothing to explore
+                }
+                int q = (((a2 << gb) | g2) << lb) | s2;
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    queue.add(q);
+                }
+            }
+        }
+        return new Result(false, queue.size(), edges, false, vertexCount);
+    }
+
+    /**
+     * A growable int queue in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
+     * is its size rather than 2.5 times it).
+     */
+    private static final class IntQueue {
+        private static final int SHIFT = 20;
+        private static final int MASK = (1 << SHIFT) - 1;
+        private int[][] blocks = new int[16][];
+        private int size;
+
+        IntQueue(int ignored) {
+        }
+
+        void add(int v) {
+            int b = size >>> SHIFT;
+            if (b == blocks.length) {
+                blocks = Arrays.copyOf(blocks, b * 2);
+            }
+            if (blocks[b] == null) {
+                blocks[b] = new int[1 << SHIFT];
+            }
+            blocks[b][size & MASK] = v;
+            size++;
+        }
+
+        int get(int i) {
+            return blocks[i >>> SHIFT][i & MASK];
+        }
+
+        int size() {
+            return size;
+        }
+    }
+}
