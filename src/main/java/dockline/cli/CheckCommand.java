@@ -81,7 +81,7 @@ public final class CheckCommand implements Callable<Integer> {
                     err.println("dockline: " + refused);
                     return ExitCodes.BAD_INPUT;
                 }
-                return RoundsCheck.run(m, mission.memoryBudgetBytes(), json, out, err);
+                return RoundsCheck.run(m, mission.memoryBudgetBytes(), safest.on, json, out, err);
             }
             if (objective instanceof Objective.Discounted && safest.on) {
                 err.println("dockline: --safest-policy applies to the reserve objective only");

@@ -32,10 +32,6 @@ final class RoundsCheck {
         if (discounted) {
             return "a patrol or a deadline is checked with the reserve objective only";
         }
-        if (safest) {
-            return "--safest-policy applies to one-trip missions; a patrol or deadline check already reports the"
-                    + " highest floor it can guarantee";
-        }
         if (nonDefaultRoute) {
             return "--method and --verdict-only apply to one-trip missions; a patrol or deadline mission has one"
                     + " route (the stored product)";
@@ -59,9 +55,9 @@ final class RoundsCheck {
     }
 
     /** Runs the check, prints the result, returns the exit code. */
-    static int run(Mission m, long memoryBudgetBytes, boolean json, PrintWriter out, PrintWriter err) {
+    static int run(Mission m, long memoryBudgetBytes, boolean safest, boolean json, PrintWriter out, PrintWriter err) {
         if (m.tasks().patrols()) {
-            PatrolAnalysis a = PatrolSolver.analyse(m, budget(memoryBudgetBytes));
+            PatrolAnalysis a = PatrolSolver.analyse(m, budget(memoryBudgetBytes), safest);
             RoundsCertificate cert = null;
             if (a.guaranteed()) {
                 cert = PatrolCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
@@ -78,7 +74,7 @@ final class RoundsCheck {
             }
             return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
         }
-        DeadlineAnalysis a = DeadlineSolver.analyse(m, budget(memoryBudgetBytes));
+        DeadlineAnalysis a = DeadlineSolver.analyse(m, budget(memoryBudgetBytes), safest);
         RoundsCertificate cert = null;
         if (a.guaranteed()) {
             cert = DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
@@ -123,7 +119,8 @@ final class RoundsCheck {
             out.println("GUARANTEED: " + m.name() + " — the robot can visit every checkpoint (" + cps + ") again and"
                     + " again for ever " + events(m) + " without going below the reserve floor.");
             out.println("  Lowest battery level ever reached under the policy: "
-                    + CheckCommand.amount(a.lowestLevelUnits().getAsInt(), m));
+                    + CheckCommand.amount(a.lowestLevelUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    ? " (the safest policy; its laps may be longer)" : " (the policy of shortest laps)"));
             out.println("  Longest lap in the worst case:  " + t.describeTicks(a.longestLapTicks().getAsInt())
                     + "; the first lap is complete within " + t.describeTicks(a.wayInTicks().getAsInt()));
         } else {
@@ -159,6 +156,7 @@ final class RoundsCheck {
         o.put("capacityUnits", a.capacityUnits());
         put(o, "lowestLevelUnits", a.lowestLevelUnits());
         put(o, "worstCaseMinimumUnits", a.lowestLevelUnits());
+        o.put("policyFloorUnits", a.policyFloorUnits());
         put(o, "longestLapTicks", a.longestLapTicks());
         put(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
@@ -187,7 +185,8 @@ final class RoundsCheck {
                     + events(m) + " without going below the reserve floor.");
             out.println("  Worst finishing time under the policy:  " + t.describeTicks(a.worstFinishTicks().getAsInt()));
             out.println("  Worst battery level under the policy:   "
-                    + CheckCommand.amount(a.worstCaseMinimumUnits().getAsInt(), m));
+                    + CheckCommand.amount(a.worstCaseMinimumUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    ? " (the safest policy that keeps the deadline)" : " (the policy of fewest turns)"));
         } else {
             out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock within " + deadline
                     + " " + events(m) + " while staying at or above the reserve floor.");
@@ -236,6 +235,7 @@ final class RoundsCheck {
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
         put(o, "worstCaseMinimumUnits", a.worstCaseMinimumUnits());
         put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        o.put("policyFloorUnits", a.policyFloorUnits());
         o.put("productVertices", a.productVertices());
         o.put("productEdges", a.productEdges());
         o.put("boundVertices", a.boundVertices());

@@ -32,8 +32,18 @@ public final class DeadlineSolver {
     private DeadlineSolver() {
     }
 
-    /** The analysis of a visit mission with a deadline at its own floor and starting charge. */
+    /** The analysis of a visit mission with a deadline at its own floor and starting charge (fewest turns). */
     public static DeadlineAnalysis analyse(Mission m, long budgetBytes) {
+        return analyse(m, budgetBytes, false);
+    }
+
+    /**
+     * The analysis of a visit mission with a deadline at its own floor and starting charge.
+     *
+     * @param safest take the policy of the highest floor that still keeps the deadline (it never goes below that
+     *               floor; it may take more turns, never more than the deadline) instead of the one of fewest turns
+     */
+    public static DeadlineAnalysis analyse(Mission m, long budgetBytes, boolean safest) {
         if (!m.timing().hasDeadline() || m.tasks().patrols()) {
             throw new IllegalArgumentException("not a visit mission with a deadline");
         }
@@ -61,9 +71,18 @@ public final class DeadlineSolver {
             }
         }
         OptionalInt highest = highestFloor(arena, start, deadline, budgetBytes, ok ? floor : -1);
+        int policyFloor = floor;
+        if (safest && ok && highest.getAsInt() > floor) {
+            policyFloor = highest.getAsInt();
+            Solved hs = solve(arena, policyFloor, start, budgetBytes);
+            PolicyLoop loop = PolicyLoop.of(hs.product, hs.choice);
+            policy = Optional.of(loop.policy(hs.choice));
+            worstLevel = OptionalInt.of(loop.lowestLevel());
+            worstTurns = OptionalInt.of(loop.firstStretch());
+        }
         long millis = (System.nanoTime() - t0) / 1_000_000;
         return new DeadlineAnalysis(m, arena, ok, deadline, floor, start, m.capacityUnits(), s.turns < 0
-                ? OptionalInt.empty() : OptionalInt.of(s.turns), worstTurns, policy, worstLevel, highest,
+                ? OptionalInt.empty() : OptionalInt.of(s.turns), worstTurns, policy, worstLevel, highest, policyFloor,
                 s.product.vertexCount(), s.product.edgeCount(), s.product.bound().vertices(), millis);
     }
 

@@ -20,6 +20,7 @@ import java.util.OptionalInt;
  * @param longestLapTicks the most turns one lap of the policy can take (from one completed lap to the next)
  * @param wayInTicks      the most turns until the first lap is complete
  * @param highestGuaranteedReserveUnits the highest floor at which the patrol is still guaranteed
+ * @param policyFloorUnits the floor the policy was made for: the mission's, or the highest one (the safest policy)
  * @param productVertices vertices of the stored product
  * @param productEdges    its edges
  * @param boundVertices   the upper bound stated before the build
@@ -30,6 +31,7 @@ import java.util.OptionalInt;
 public record PatrolAnalysis(Mission mission, Arena arena, boolean guaranteed, int reserveUnits, int startUnits,
                              int capacityUnits, Optional<Policy> policy, OptionalInt lowestLevelUnits,
                              OptionalInt longestLapTicks, OptionalInt wayInTicks,
-                             OptionalInt highestGuaranteedReserveUnits, long productVertices, long productEdges,
+                             OptionalInt highestGuaranteedReserveUnits, int policyFloorUnits, long productVertices,
+                             long productEdges,
                              long boundVertices, int rounds, int loopStates, long millis) {
 }

@@ -33,8 +33,18 @@ public final class PatrolSolver {
     private PatrolSolver() {
     }
 
-    /** The analysis of a patrol at its own floor and starting charge. */
+    /** The analysis of a patrol at its own floor and starting charge, with the policy of shortest laps. */
     public static PatrolAnalysis analyse(Mission m, long budgetBytes) {
+        return analyse(m, budgetBytes, false);
+    }
+
+    /**
+     * The analysis of a patrol at its own floor and starting charge.
+     *
+     * @param safest take the policy of the highest floor that can be guaranteed (it never goes below that floor;
+     *               its laps may be longer) instead of the one of shortest laps at the mission's floor
+     */
+    public static PatrolAnalysis analyse(Mission m, long budgetBytes, boolean safest) {
         if (!m.tasks().patrols()) {
             throw new IllegalArgumentException("not a patrol");
         }
@@ -57,10 +67,21 @@ public final class PatrolSolver {
             loopSize = loop.size();
         }
         OptionalInt highest = highestFloor(arena, start, budgetBytes, s.guaranteed() ? floor : -1);
+        int policyFloor = floor;
+        if (safest && s.guaranteed() && highest.getAsInt() > floor) {
+            policyFloor = highest.getAsInt();
+            Solved hs = solve(arena, policyFloor, start, budgetBytes);
+            PolicyLoop loop = PolicyLoop.of(hs.product, hs.choice);
+            policy = Optional.of(loop.policy(hs.choice));
+            lowest = OptionalInt.of(loop.lowestLevel());
+            lap = OptionalInt.of(loop.longestLap());
+            wayIn = OptionalInt.of(hs.product.lapDone(hs.product.start()) ? 0 : loop.firstStretch());
+            loopSize = loop.size();
+        }
         long millis = (System.nanoTime() - t0) / 1_000_000;
         return new PatrolAnalysis(m, arena, s.guaranteed(), floor, start, m.capacityUnits(), policy, lowest, lap,
-                wayIn, highest, s.product.vertexCount(), s.product.edgeCount(), s.product.bound().vertices(), s.rounds,
-                loopSize, millis);
+                wayIn, highest, policyFloor, s.product.vertexCount(), s.product.edgeCount(), s.product.bound().vertices(),
+                s.rounds, loopSize, millis);
     }
 
     /** The verdict alone and the size of the product it was decided on (for benchmarks). */

@@ -144,4 +144,31 @@ class RoundsAgreementProperties {
         });
         Statistics.label("missed only by the deadline").coverage(c -> c.check(true).percentage(p -> p >= 5));
     }
+
+    // Oracle: the certificate checkers (independent closed loops) and the brute force's highest floor above.
+    @Property(tries = 300)
+    void safestPolicies_neverGoBelowTheHighestFloor(@ForAll long seed) {
+        Mission p = patrolOf(seed);
+        PatrolAnalysis a = PatrolSolver.analyse(p, BUDGET, true);
+        if (a.guaranteed()) {
+            int h = a.highestGuaranteedReserveUnits().getAsInt();
+            assertThat(a.policyFloorUnits()).isEqualTo(h);
+            RoundsCertificate c = PatrolCertificateChecker.check(a.arena(), a.policy().orElseThrow(), h, a.startUnits());
+            assertThat(c.ok()).as(c.reason()).isTrue();
+            assertThat(a.lowestLevelUnits().getAsInt()).isEqualTo(c.worstMinimumUnits()).isGreaterThanOrEqualTo(h);
+        }
+        Mission d = deadlineOf(seed);
+        DeadlineAnalysis b = DeadlineSolver.analyse(d, BUDGET, true);
+        if (b.guaranteed()) {
+            int h = b.highestGuaranteedReserveUnits().getAsInt();
+            RoundsCertificate c = DeadlineCertificateChecker.check(b.arena(), b.policy().orElseThrow(), h, b.startUnits(),
+                    b.deadlineTicks());
+            assertThat(c.ok()).as(c.reason()).isTrue();
+            assertThat(b.worstCaseMinimumUnits().getAsInt()).isGreaterThanOrEqualTo(h);
+            assertThat(b.worstFinishTicks().getAsInt()).isLessThanOrEqualTo(b.deadlineTicks());
+        }
+        Statistics.label("safest above the mission's floor").collect(a.guaranteed()
+                && a.policyFloorUnits() > a.reserveUnits());
+        Statistics.label("safest above the mission's floor").coverage(c -> c.check(true).percentage(q -> q >= 10));
+    }
 }
