@@ -24,7 +24,8 @@ import java.util.OptionalInt;
  * O(N) memory besides the product.
  *
  * <p>The policy follows the last round's attractor: an action of least rank towards the next completed lap,
- * and at a completed lap the action of least rank towards the one after. The lowest level ever reached and
+ * and at a completed lap the action of least rank towards the one after; ties between equally short choices go
+ * to the one whose worst outcome leaves the most charge. The safest policy is that of the highest floor. The lowest level ever reached and
  * the longest lap are read off its closed loop ({@link PolicyLoop}). The highest floor is found by bisection
  * over the floor, one product per step.
  */
