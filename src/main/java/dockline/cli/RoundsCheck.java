@@ -119,7 +119,7 @@ final class RoundsCheck {
             out.println("GUARANTEED: " + m.name() + " — the robot can visit every checkpoint (" + cps + ") again and"
                     + " again for ever " + events(m) + " without going below the reserve floor.");
             out.println("  Lowest battery level ever reached under the policy: "
-                    + CheckCommand.amount(a.lowestLevelUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    + CheckReport.amount(a.lowestLevelUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
                     ? " (the safest policy; its laps may be longer)" : " (the policy of shortest laps)"));
             out.println("  Longest lap in the worst case:  " + t.describeTicks(a.longestLapTicks().getAsInt())
                     + "; the first lap is complete within " + t.describeTicks(a.wayInTicks().getAsInt()));
@@ -131,8 +131,8 @@ final class RoundsCheck {
         }
         highest(a.highestGuaranteedReserveUnits(), m, out, "");
         changesText(changes(a), out);
-        out.println("  Start " + CheckCommand.amount(a.startUnits(), m) + ", reserve floor "
-                + CheckCommand.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
+        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
+                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
                 + a.capacityUnits() + " units)");
         out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
                 + " checkpoints of the lap x battery levels)");
@@ -155,8 +155,8 @@ final class RoundsCheck {
         o.put("reserveUnits", a.reserveUnits());
         o.put("capacityUnits", a.capacityUnits());
         put(o, "lowestLevelUnits", a.lowestLevelUnits());
-        put(o, "worstCaseMinimumUnits", a.lowestLevelUnits());
-        o.put("policyFloorUnits", a.policyFloorUnits());
+        o.put("policyReserveUnits", a.policyFloorUnits());
+        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
         put(o, "longestLapTicks", a.longestLapTicks());
         put(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
@@ -185,7 +185,7 @@ final class RoundsCheck {
                     + events(m) + " without going below the reserve floor.");
             out.println("  Worst finishing time under the policy:  " + t.describeTicks(a.worstFinishTicks().getAsInt()));
             out.println("  Worst battery level under the policy:   "
-                    + CheckCommand.amount(a.worstCaseMinimumUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    + CheckReport.amount(a.worstCaseMinimumUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
                     ? " (the safest policy that keeps the deadline)" : " (the policy of fewest turns)"));
         } else {
             out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock within " + deadline
@@ -205,8 +205,8 @@ final class RoundsCheck {
         }
         highest(a.highestGuaranteedReserveUnits(), m, out, " (within the deadline)");
         changesText(changes(a), out);
-        out.println("  Start " + CheckCommand.amount(a.startUnits(), m) + ", reserve floor "
-                + CheckCommand.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
+        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
+                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
                 + a.capacityUnits() + " units)");
         out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
                 + " stand for the ticks-left monitor");
@@ -233,9 +233,10 @@ final class RoundsCheck {
         seconds(o, "worstFinishSeconds", m, a.worstFinishTicks());
         put(o, "tightestDeadlineTicks", a.tightestTicks());
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
-        put(o, "worstCaseMinimumUnits", a.worstCaseMinimumUnits());
+        put(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
         put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
-        o.put("policyFloorUnits", a.policyFloorUnits());
+        o.put("policyReserveUnits", a.policyFloorUnits());
+        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
         o.put("productVertices", a.productVertices());
         o.put("productEdges", a.productEdges());
         o.put("boundVertices", a.boundVertices());
@@ -258,7 +259,7 @@ final class RoundsCheck {
         if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
             int h = a.highestGuaranteedReserveUnits().getAsInt();
             out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckCommand.amount(h, a.mission()) + " (from " + CheckCommand.amount(a.reserveUnits(), a.mission())
+                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
                     + ")"));
         }
         return out;
@@ -278,7 +279,7 @@ final class RoundsCheck {
         if (a.highestGuaranteedReserveUnits().isPresent()) {
             int h = a.highestGuaranteedReserveUnits().getAsInt();
             out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckCommand.amount(h, a.mission()) + " (from " + CheckCommand.amount(a.reserveUnits(), a.mission())
+                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
                     + "), which keeps the deadline"));
         }
         return out;
@@ -306,7 +307,7 @@ final class RoundsCheck {
 
     private static void highest(OptionalInt h, Mission m, PrintWriter out, String what) {
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
-                ? CheckCommand.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
+                ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method) {
@@ -341,7 +342,7 @@ final class RoundsCheck {
         o.put("certified", cert != null && cert.ok());
         if (cert != null) {
             o.put("certifiedStates", cert.statesChecked());
-            o.put("certifiedWorstMinimumUnits", cert.worstMinimumUnits());
+            o.put("certifiedLowestLevelUnits", cert.worstMinimumUnits());
             o.put("certification", cert.reason());
         }
     }

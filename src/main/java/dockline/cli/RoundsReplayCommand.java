@@ -23,18 +23,18 @@ final class RoundsReplayCommand {
 
     static int run(Mission m, MissionOptions mission, boolean nonWorst, boolean safest, boolean json, Path csv,
                    Path jsonFile, PrintWriter out, PrintWriter err) {
-        if (nonWorst || safest) {
+        if (nonWorst) {
             err.println("dockline: a patrol or deadline replay shows the worst case (or the counterexample) of the"
-                    + " checked policy; --disturbance nominal, --force and --safest-policy apply to one-trip missions");
+                    + " checked policy; --disturbance nominal and --force apply to one-trip missions");
             return ExitCodes.BAD_INPUT;
         }
         RoundsReplay r;
         try {
             long budget = RoundsCheck.budget(mission.memoryBudgetBytes());
             if (m.tasks().patrols()) {
-                r = RoundsReplay.patrol(m, budget);
+                r = RoundsReplay.patrol(m, budget, safest);
             } else {
-                Optional<RoundsReplay> d = RoundsReplay.deadline(m, budget);
+                Optional<RoundsReplay> d = RoundsReplay.deadline(m, budget, safest);
                 if (d.isEmpty()) {
                     err.println("dockline: " + mission.missionFile + ": the robot cannot always finish this mission at"
                             + " its floor, deadline or not; for the play that defeats it, check the mission without"

@@ -31,9 +31,12 @@ public record RoundsReplay(Replay replay, int loopStart, int loopLength, List<In
         lapSteps = List.copyOf(lapSteps);
     }
 
-    /** The replay of a patrol: its worst lasso when guaranteed, else the building's winning play. */
-    public static RoundsReplay patrol(Mission m, long budgetBytes) {
-        RoundsPlays.PatrolPlay pp = RoundsPlays.patrol(m, budgetBytes);
+    /**
+     * The replay of a patrol: its worst lasso when guaranteed (of the safest policy, or of the one of shortest
+     * laps), else the building's winning play.
+     */
+    public static RoundsReplay patrol(Mission m, long budgetBytes, boolean safest) {
+        RoundsPlays.PatrolPlay pp = RoundsPlays.patrol(m, budgetBytes, safest);
         Arena arena = ArenaCompiler.compile(m);
         return of(m, arena, pp.play(), pp.guaranteed());
     }
@@ -42,8 +45,8 @@ public record RoundsReplay(Replay replay, int loopStart, int loopLength, List<In
      * The slowest play of a deadline mission's policy (guaranteed or late), or empty when the robot cannot
      * finish at all at this floor (then the one-trip counterexample applies).
      */
-    public static Optional<RoundsReplay> deadline(Mission m, long budgetBytes) {
-        Optional<RoundsPlay> play = RoundsPlays.deadline(m, budgetBytes);
+    public static Optional<RoundsReplay> deadline(Mission m, long budgetBytes, boolean safest) {
+        Optional<RoundsPlay> play = RoundsPlays.deadline(m, budgetBytes, safest);
         if (play.isEmpty()) {
             return Optional.empty();
         }

@@ -143,8 +143,13 @@ class RoundsInputTest {
         Files.writeString(p, Files.readString(Path.of("missions/early-clean.yaml"))
                 .replace("../maps/clinic-wing.yaml", Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString())
                 .replaceFirst("deadline: 2.5 min", "deadline: 3 min"));
-        CheckCommandTest.Run r = check(p);
+        CheckCommandTest.Run r = CheckCommandTest.run("check", p.toString(), "--fewest-moves");
         assertThat(r.code()).as(r.out() + r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("Worst finishing time under the policy:  43 turns").contains("certified: true");
+        // the default, the safest policy, keeps the highest floor that still meets the deadline (45 turns)
+        CheckCommandTest.Run safest = check(p);
+        assertThat(safest.code()).isEqualTo(ExitCodes.OK);
+        assertThat(safest.out()).contains("Worst finishing time under the policy:  45 turns")
+                .contains("(the safest policy that keeps the deadline)").contains("certified: true");
     }
 }

@@ -43,7 +43,7 @@ class RoundsReplayProperties {
     @Property(tries = 400)
     void lasso_keepsItsPromises(@ForAll long seed) {
         Mission m = patrolOf(seed);
-        RoundsReplay r = RoundsReplay.patrol(m, 1L << 28);
+        RoundsReplay r = RoundsReplay.patrol(m, 1L << 28, seed % 3 == 0);
         List<ReplayStep> rows = r.replay().steps();
         List<String> cps = m.tasks().patrol();
         int full = (1 << cps.size()) - 1;

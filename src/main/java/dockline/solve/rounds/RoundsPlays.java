@@ -32,9 +32,17 @@ public final class RoundsPlays {
     public record PatrolPlay(boolean guaranteed, RoundsPlay play) {
     }
 
-    public static PatrolPlay patrol(Mission m, long budgetBytes) {
+    /**
+     * @param safest for a guaranteed patrol, the lasso of the safest policy (that of the highest floor), else of
+     *               the policy of shortest laps at the mission's floor
+     */
+    public static PatrolPlay patrol(Mission m, long budgetBytes, boolean safest) {
         Arena arena = ArenaCompiler.compile(m);
         PatrolSolver.Solved s = PatrolSolver.solve(arena, m.reserveUnits(), m.startUnits(), budgetBytes);
+        if (safest && s.guaranteed()) {
+            int h = PatrolSolver.highestFloor(arena, m.startUnits(), budgetBytes, m.reserveUnits()).getAsInt();
+            s = PatrolSolver.solve(arena, h, m.startUnits(), budgetBytes);
+        }
         RoundsProduct p = s.product();
         if (p.start() == RoundsProduct.LOST) {
             return new PatrolPlay(false, startLost(m, arena));
@@ -47,10 +55,21 @@ public final class RoundsPlays {
     }
 
     /** The deadline mission's slowest play under its policy, or empty when the robot cannot force completion. */
-    public static Optional<RoundsPlay> deadline(Mission m, long budgetBytes) {
+    /**
+     * @param safest when the deadline is kept, the play of the safest policy (that of the highest floor that
+     *               keeps it), else of the policy of fewest turns at the mission's floor
+     */
+    public static Optional<RoundsPlay> deadline(Mission m, long budgetBytes, boolean safest) {
         Arena arena = ArenaCompiler.compile(m);
-        RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, m.reserveUnits(), m.startUnits(),
-                budgetBytes);
+        int floor = m.reserveUnits();
+        if (safest) {
+            DeadlineSolver.Solved s = DeadlineSolver.solve(arena, floor, m.startUnits(), budgetBytes);
+            if (s.turns() >= 0 && s.turns() <= m.timing().deadlineTicks()) {
+                floor = DeadlineSolver.highestFloor(arena, m.startUnits(), m.timing().deadlineTicks(), budgetBytes,
+                        floor).getAsInt();
+            }
+        }
+        RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, floor, m.startUnits(), budgetBytes);
         int n = p.vertexCount();
         boolean[] alive = new boolean[n];
         boolean[] target = new boolean[n];
