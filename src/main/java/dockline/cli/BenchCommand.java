@@ -47,10 +47,20 @@ public final class BenchCommand implements Callable<Integer> {
                     + " a development aid: the ratios between instances are then missing")
     List<String> instances;
 
+    @Option(names = "--reading", description = "run only the reading section: 8 MiB map files on one line, in short"
+            + " lines and in the longest lines read (reading must be linear in the file size)")
+    boolean reading;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        if (reading) {
+            dockline.bench.ReadingBench.Result r = dockline.bench.ReadingBench.run(3);
+            out.print(json ? Json.readingJson(r) : r.toText());
+            out.flush();
+            return ExitCodes.OK;
+        }
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
         if (sizes != null) {
             for (int s : sizes) {

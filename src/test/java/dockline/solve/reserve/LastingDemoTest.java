@@ -12,6 +12,12 @@ import dockline.model.EventDuration;
 import dockline.model.EventKind;
 import dockline.model.Mission;
 import dockline.replay.ForcedEvent;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PlanReplays;
+import dockline.plan.PolicyChoice;
+import dockline.plan.Route;
 import dockline.replay.Replay;
 import dockline.replay.ReplayStep;
 import java.math.BigDecimal;
@@ -96,11 +102,11 @@ class LastingDemoTest {
     @Test
     void worstCaseReplay_saysWhichDoorStaysShut_andTheForcedFormNamesTheDoor() throws Exception {
         Mission m = ring();
-        dockline.plan.Plan plan = dockline.plan.MissionPlanner.plan(m, dockline.plan.PlanOptions.of(
-                new dockline.plan.Route.Product(dockline.plan.PolicyChoice.FEWEST_MOVES, false, false, true, false)));
-        dockline.plan.PlanReplays mr = plan.replays().orElseThrow();
+        Plan plan = MissionPlanner.plan(m, PlanOptions.of(
+                new Route.Product(PolicyChoice.FEWEST_MOVES, false, false, true, false)));
         assertThat(plan.guaranteed()).isTrue();
-        assertThat(plan.certification().problem()).isEmpty();
+        assertThat(plan.certification().ok()).isTrue();
+        PlanReplays mr = plan.replays().orElseThrow();
         Replay worst = mr.worstCase();
         assertThat(String.join("\n", worst.explanation())).contains("stays closed for the rest of the mission");
         ReplayStep shut = worst.steps().stream().filter(s -> !s.event().nominal()).findFirst().orElseThrow();
