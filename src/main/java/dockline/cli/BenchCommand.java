@@ -43,6 +43,7 @@ public final class BenchCommand implements Callable<Integer> {
 
     @Option(names = "--instances", paramLabel = "NAME", split = ",",
             description = "run only these instances (reserve, consumption, discounted), e.g. discounted;"
+                    + " or patrol and/or deadline (their own rows and slope, on small floors);"
                     + " a development aid: the ratios between instances are then missing")
     List<String> instances;
 
@@ -72,10 +73,14 @@ public final class BenchCommand implements Callable<Integer> {
                 }
             }
         }
+        if (instances != null && !instances.isEmpty() && dockline.bench.RoundsBench.INSTANCES.containsAll(instances)) {
+            return RoundsBenchRun.run(sizes, instances, seed, json, out, err);
+        }
         if (instances != null) {
             for (String i : instances) {
                 if (!Benchmark.INSTANCES.contains(i)) {
-                    err.println("dockline: --instances: '" + i + "' is not one of " + String.join(", ", Benchmark.INSTANCES));
+                    err.println("dockline: --instances: '" + i + "' is not one of " + String.join(", ", Benchmark.INSTANCES)
+                            + " (or patrol, deadline on their own)");
                     err.println("Try 'dockline bench --help'.");
                     err.flush();
                     return ExitCodes.BAD_INPUT;

@@ -61,6 +61,16 @@ public final class CheckCommand implements Callable<Integer> {
             if (objective == null) {
                 return ExitCodes.BAD_INPUT;
             }
+            if (m.beyondOneTrip()) {
+                String refused = RoundsCheck.refusedOption(false, route.nonDefault(),
+                        objective instanceof Objective.Discounted);
+                if (refused != null) {
+                    err.println("dockline: " + refused);
+                    return ExitCodes.BAD_INPUT;
+                }
+                return RoundsCheck.run(m, mission.memoryBudgetBytes(), policy.choice() == dockline.plan.PolicyChoice.SAFEST, json,
+                        out, err);
+            }
             Route r;
             if (objective instanceof Objective.Discounted d) {
                 if (policy.given()) {

@@ -66,6 +66,10 @@ public final class ExportCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             Mission m = mission.load(err);
+            if (RoundsCheck.oneTripOnly(m, "export") != null) {
+                err.println(RoundsCheck.oneTripOnly(m, "export"));
+                return ExitCodes.BAD_INPUT;
+            }
             if (!mission.outputOk("--policy", policyFile, m, err)) {
                 return ExitCodes.BAD_INPUT;
             }

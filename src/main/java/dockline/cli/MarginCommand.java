@@ -69,6 +69,10 @@ public final class MarginCommand implements Callable<Integer> {
 
     private int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         Mission m = mission.load(err);
+        if (RoundsCheck.oneTripOnly(m, "margin") != null) {
+            err.println(RoundsCheck.oneTripOnly(m, "margin"));
+            return ExitCodes.BAD_INPUT;
+        }
         if (!mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
         }

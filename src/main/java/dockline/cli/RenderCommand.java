@@ -95,6 +95,10 @@ public final class RenderCommand implements Callable<Integer> {
         Mission m;
         try {
             m = MissionLoader.load(mission);
+            if (RoundsCheck.oneTripOnly(m, "render") != null) {
+                err.println(RoundsCheck.oneTripOnly(m, "render"));
+                return ExitCodes.BAD_INPUT;
+            }
         } catch (InputException e) {
             for (Problem p : e.problems()) {
                 err.println(p.format());

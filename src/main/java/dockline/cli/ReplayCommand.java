@@ -112,6 +112,10 @@ public final class ReplayCommand implements Callable<Integer> {
             err.println("dockline: --csv and --json-file name the same file " + csv + "; give two names");
             return ExitCodes.BAD_INPUT;
         }
+        if (m.beyondOneTrip()) {
+            return RoundsReplayCommand.run(m, mission, force != null || disturbance == Disturbance.nominal,
+                    policy.choice() == dockline.plan.PolicyChoice.SAFEST, json, csv, jsonFile, out, err);
+        }
         Plan plan;
         try {
             plan = MissionPlanner.plan(m, PlanOptions.of(new Route.Product(policy.choice(), false, false, true, false))

@@ -128,13 +128,25 @@ public final class ValidateCommand implements Callable<Integer> {
         Tasks t = m.tasks();
         int n = t.visit().size();
         String head = "mission '" + m.name() + "' on " + (m.map().source() != null ? m.map().source() : m.map().name())
-                + ", " + count(n, "zone") + " to visit" + (n > 1 ? (t.ordered() ? " in order" : " in any order") : "")
+                + ", " + (t.patrols() ? "a patrol of " + count(t.patrol().size(), "checkpoint")
+                : count(n, "zone") + " to visit" + (n > 1 ? (t.ordered() ? " in order" : " in any order") : ""))
                 + ", disturbance budget " + m.map().disturbances().budget();
-        String tasks = n == 0 ? "no zones to visit" : "visit " + String.join(", ", t.visit());
+        String tasks = t.patrols() ? "patrol " + String.join(", ", t.patrol()) + " on every lap, for ever (budget "
+                + (m.map().disturbances().budgetPerLap() ? "per lap" : "for the whole night") + ")"
+                : n == 0 ? "no zones to visit" : "visit " + String.join(", ", t.visit());
         if (!t.avoid().isEmpty()) {
             tasks += "; avoid " + String.join(", ", t.avoid());
         }
-        tasks += t.finishOnDock() ? "; finish on a dock" : "; no need to finish on a dock";
+        if (!t.patrols()) {
+            tasks += t.finishOnDock() ? "; finish on a dock" : "; no need to finish on a dock";
+        }
+        if (m.timing().hasTick()) {
+            tasks += "; one turn takes " + dockline.model.Timing.clock(m.timing().tickSeconds());
+        }
+        if (m.timing().hasDeadline()) {
+            tasks += "; deadline " + dockline.model.Timing.clock(m.timing().deadlineSeconds()) + " = "
+                    + m.timing().deadlineTicks() + " turns (rounded down)";
+        }
         String objective = m.objective() instanceof Objective.Discounted d
                 ? "discounted sum of energy deltas (discount " + d.discount() + ") " + d.relation().symbol() + " " + d.threshold()
                 : "never below the reserve floor";

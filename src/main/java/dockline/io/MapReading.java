@@ -549,7 +549,7 @@ final class MapReading {
         if (m == null) {
             return null;
         }
-        in.onlyKeys(m, "disturbances", "budget", "events");
+        in.onlyKeys(m, "disturbances", "budget", "events", "budget-per");
         int budget = 0;
         boolean ok = true;
         if (m.get("budget") != null) {
@@ -570,7 +570,25 @@ final class MapReading {
                     "e.g. events: [{kind: door-shut, where: all-doors}]");
             ok = false;
         }
-        return ok ? new DisturbanceModel(budget, rules) : null;
+        Boolean perLap = m.get("budget-per") == null ? Boolean.FALSE : budgetPer(m.get("budget-per"));
+        return ok && perLap != null ? new DisturbanceModel(budget, rules, perLap) : null;
+    }
+
+    /** {@code budget-per: mission} (the default: the budget is for the whole mission, or night) or {@code lap}. */
+    private Boolean budgetPer(Node n) {
+        String v = in.string(n, "budget-per");
+        if (v == null) {
+            return null;
+        }
+        if (v.equals("lap") || v.equals("mission")) {
+            return v.equals("lap");
+        }
+        String near = Spelling.closest(v, List.of("lap", "mission"));
+        problems.add(n.pos(), "budget-per must be 'mission' or 'lap', not '" + Loading.shorten(v) + "'"
+                        + (near != null ? " (did you mean '" + near + "'?)" : ""),
+                "mission: at most budget events in the whole mission (a patrol: the whole night); lap: the budget"
+                        + " starts afresh on every lap of a patrol");
+        return null;
     }
 
     private boolean event(Node n, List<EventRule> rules, int entry, int budget) {

@@ -15,6 +15,7 @@ import dockline.model.Relation;
 import dockline.model.RobotProfile;
 import dockline.model.Tasks;
 import dockline.model.Terrain;
+import dockline.model.Timing;
 import dockline.model.Zone;
 import java.io.IOException;
 import java.math.BigDecimal;
@@ -39,8 +40,8 @@ import java.util.TreeSet;
  */
 final class MissionReading {
 
-    static final String[] KEYS = {"name", "map", "robot", "start", "reserve", "tasks", "objective"};
-    static final String[] ROBOT_KEYS = {"capacity", "resolution", "move-energy", "wait-energy", "charge-rate", "neighbourhood"};
+    static final String[] KEYS = {"name", "map", "robot", "start", "reserve", "tasks", "objective", "deadline"};
+    static final String[] ROBOT_KEYS = {"capacity", "resolution", "move-energy", "wait-energy", "charge-rate", "neighbourhood", "tick"};
     /** Largest discount factor accepted (the comparator's numbers grow with it). */
     static final int MAX_DISCOUNT = 1_000_000;
     private static final BigDecimal HUNDRED = BigDecimal.valueOf(100);
@@ -115,6 +116,8 @@ final class MissionReading {
         if (root.get("objective") != null) {
             objective = objective(in.map(root.get("objective"), "objective"));
         }
+        Timing timing = ClockReading.timing(robot == null ? null : robot.tick, robot == null ? null : robot.tickNode,
+                root.get("deadline"), rn == null ? null : rn.pos(), tasks != null && tasks.patrols(), problems);
 
         // checks across sections
         if (robot != null && robot.profile != null) {
@@ -136,10 +139,12 @@ final class MissionReading {
                     "mark a dock in the map's legend, e.g. C: {surface: tile, dock: true}");
         }
         if (problems.raised() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
-                || start == null || startCharge == null || reserve == null || tasks == null || objective == null) {
+                || start == null || startCharge == null || reserve == null || tasks == null || objective == null
+                || timing == null) {
             return null;
         }
-        Mission mission = new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+        Mission mission = new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective,
+                timing);
         return objective instanceof Objective.Discounted d && !discountedFits(mission, d) ? null : mission;
     }
 
@@ -258,6 +263,8 @@ final class MissionReading {
         Node resolution;
         Pos moveKey;
         Map<String, Node> moveNodes = new LinkedHashMap<>();
+        BigDecimal tick;
+        Node tickNode;
     }
 
     private Robot robot(Node.Entry entry) {
@@ -267,6 +274,8 @@ final class MissionReading {
         }
         in.onlyKeys(m, "robot", ROBOT_KEYS);
         Robot r = new Robot();
+        r.tickNode = m.get("tick");
+        r.tick = r.tickNode == null ? null : ClockReading.tick(r.tickNode, problems);
         r.capacity = in.require(m, "capacity", "robot");
         r.resolution = in.require(m, "resolution", "robot");
         Node moveNode = in.require(m, "move-energy", "robot");
@@ -506,7 +515,7 @@ final class MissionReading {
             return null;
         }
         nodes.tasksKey = keyPos;
-        in.onlyKeys(m, "tasks", "visit", "order", "avoid", "finish-on-dock");
+        in.onlyKeys(m, "tasks", "visit", "order", "avoid", "finish-on-dock", "patrol");
         boolean ok = true;
         List<String> visit = List.of();
         if (m.get("visit") != null) {
@@ -574,6 +583,14 @@ final class MissionReading {
                         "remove it from one of the two lists");
                 ok = false;
             }
+        }
+        if (m.get("patrol") != null) {
+            List<Loading.Named> p = in.named(m.get("patrol"), "patrol");
+            if (p == null || !ClockReading.patrol(m.get("patrol"), p, nodes.avoid, m, problems)) {
+                return null;
+            }
+            nodes.visit = p; // checked against the map's zones like visit
+            return Tasks.patrol(p.stream().map(Loading.Named::name).toList(), avoid);
         }
         if (ok && visit.isEmpty() && !finish) {
             problems.add(m.pos(), "the mission has nothing to do: no zone to visit and finish-on-dock is false",

@@ -4,9 +4,15 @@ import java.util.List;
 
 /**
  * What the building can do to the robot: the event rules, and the budget (at most {@code budget}
- * events in one mission).
+ * events in one mission; with {@code budgetPerLap}, at most {@code budget} events in each lap of a
+ * patrol, the count starting afresh whenever a lap is complete).
  */
-public record DisturbanceModel(int budget, List<EventRule> rules) {
+public record DisturbanceModel(int budget, List<EventRule> rules, boolean budgetPerLap) {
+
+    /** A budget for the whole mission (or the whole night of a patrol). */
+    public DisturbanceModel(int budget, List<EventRule> rules) {
+        this(budget, rules, false);
+    }
 
     public DisturbanceModel {
         if (budget < 0) {
@@ -41,6 +47,6 @@ public record DisturbanceModel(int budget, List<EventRule> rules) {
 
     /** The same rules with another budget (a `--budget` override). */
     public DisturbanceModel withBudget(int k) {
-        return new DisturbanceModel(k, rules);
+        return new DisturbanceModel(k, rules, budgetPerLap);
     }
 }

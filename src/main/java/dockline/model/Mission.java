@@ -15,9 +15,31 @@ import java.nio.file.Path;
  * @param reserve     reserve floor (Wh or % of capacity)
  * @param tasks       the tasks
  * @param objective   the objective
+ * @param timing      the robot's tick and the mission's deadline ({@link Timing#NONE}: neither)
  */
 public record Mission(String name, Path source, BuildingMap map, RobotProfile robot, Cell start,
-                      Charge startCharge, Charge reserve, Tasks tasks, Objective objective) {
+                      Charge startCharge, Charge reserve, Tasks tasks, Objective objective, Timing timing) {
+
+    public Mission {
+        if (timing == null) {
+            timing = Timing.NONE;
+        }
+    }
+
+    /** A mission without a clock. */
+    public Mission(String name, Path source, BuildingMap map, RobotProfile robot, Cell start,
+                   Charge startCharge, Charge reserve, Tasks tasks, Objective objective) {
+        this(name, source, map, robot, start, startCharge, reserve, tasks, objective, Timing.NONE);
+    }
+
+    /** Whether the mission goes beyond one trip: a patrol, or a visit mission with a deadline. */
+    public boolean beyondOneTrip() {
+        return tasks.patrols() || timing.hasDeadline();
+    }
+
+    public Mission withTiming(Timing t) {
+        return new Mission(name, source, map, robot, start, startCharge, reserve, tasks, objective, t);
+    }
 
     public EnergyScale scale() {
         return robot.scale();
@@ -36,15 +58,15 @@ public record Mission(String name, Path source, BuildingMap map, RobotProfile ro
     }
 
     public Mission withReserve(Charge r) {
-        return new Mission(name, source, map, robot, start, startCharge, r, tasks, objective);
+        return new Mission(name, source, map, robot, start, startCharge, r, tasks, objective, timing);
     }
 
     public Mission withStartCharge(Charge c) {
-        return new Mission(name, source, map, robot, start, c, reserve, tasks, objective);
+        return new Mission(name, source, map, robot, start, c, reserve, tasks, objective, timing);
     }
 
     public Mission withBudget(int k) {
-        return new Mission(name, source, map.withBudget(k), robot, start, startCharge, reserve, tasks, objective);
+        return new Mission(name, source, map.withBudget(k), robot, start, startCharge, reserve, tasks, objective, timing);
     }
 
     /** The same mission with every door-shut and blockage of its map given duration {@code d}. */
@@ -54,6 +76,6 @@ public record Mission(String name, Path source, BuildingMap map, RobotProfile ro
     }
 
     public Mission withObjective(Objective o) {
-        return new Mission(name, source, map, robot, start, startCharge, reserve, tasks, o);
+        return new Mission(name, source, map, robot, start, startCharge, reserve, tasks, o, timing);
     }
 }

@@ -25,6 +25,11 @@ public final class FileMissionSource implements MissionSource {
                 return new Opened(file, null, map);
             }
             Mission m = MissionLoader.load(file);
+            if (m.beyondOneTrip()) {
+                throw new OpenException(List.of(file + ": a " + (m.tasks().patrols() ? "patrol" : "mission with a deadline")
+                        + " is decided by 'dockline check' and shown by 'dockline replay'; this window shows one-trip"
+                        + " missions"));
+            }
             return new Opened(file, m, m.map());
         } catch (InputException e) {
             List<String> lines = new ArrayList<>();

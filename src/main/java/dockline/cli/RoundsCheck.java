@@ -1,0 +1,357 @@
+package dockline.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dockline.certify.DeadlineCertificateChecker;
+import dockline.certify.PatrolCertificateChecker;
+import dockline.certify.RoundsCertificate;
+import dockline.model.Mission;
+import dockline.model.Timing;
+import dockline.report.Caveats;
+import dockline.solve.ProductOptions;
+import dockline.solve.rounds.DeadlineAnalysis;
+import dockline.solve.rounds.DeadlineSolver;
+import dockline.solve.rounds.PatrolAnalysis;
+import dockline.solve.rounds.PatrolSolver;
+import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.util.OptionalInt;
+
+/**
+ * {@code check} for the missions beyond one trip: a patrol ({@link PatrolSolver}) or a visit mission with a
+ * deadline ({@link DeadlineSolver}). Every "guaranteed" is re-checked by the independent certificate
+ * ({@link PatrolCertificateChecker}, {@link DeadlineCertificateChecker}); a failed certificate, or one whose
+ * figures differ from the solver's, is exit 4.
+ */
+final class RoundsCheck {
+
+    private RoundsCheck() {
+    }
+
+    /** Options that apply to one-trip missions only, which a patrol or deadline check refuses. */
+    static String refusedOption(boolean safest, boolean nonDefaultRoute, boolean discounted) {
+        if (discounted) {
+            return "a patrol or a deadline is checked with the reserve objective only";
+        }
+        if (nonDefaultRoute) {
+            return "--method and --verdict-only apply to one-trip missions; a patrol or deadline mission has one"
+                    + " route (the stored product)";
+        }
+        return null;
+    }
+
+    /** The refusal of a command that handles one-trip missions only, or null when the mission is one. */
+    static String oneTripOnly(Mission m, String command) {
+        if (!m.beyondOneTrip()) {
+            return null;
+        }
+        return "dockline " + command + ": " + (m.source() == null ? "the mission" : m.source()) + " is a "
+                + (m.tasks().patrols() ? "patrol" : "mission with a deadline") + "; " + command + " handles one-trip"
+                + " missions only (hint: 'dockline check' decides it, with its highest floor, and certifies its policy;"
+                + " 'dockline replay' shows its " + (m.tasks().patrols() ? "lasso" : "slowest play") + ")";
+    }
+
+    static long budget(long memoryBudgetBytes) {
+        return ProductOptions.defaults().withMemoryBudget(memoryBudgetBytes).effectiveMemoryBudget();
+    }
+
+    /** Runs the check, prints the result, returns the exit code. */
+    static int run(Mission m, long memoryBudgetBytes, boolean safest, boolean json, PrintWriter out, PrintWriter err) {
+        if (m.tasks().patrols()) {
+            PatrolAnalysis a = PatrolSolver.analyse(m, budget(memoryBudgetBytes), safest);
+            RoundsCertificate cert = null;
+            if (a.guaranteed()) {
+                cert = PatrolCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
+                        a.startUnits());
+                if (!cert.ok() || cert.worstMinimumUnits() != a.lowestLevelUnits().getAsInt()
+                        || cert.longestLapTicks() != a.longestLapTicks().getAsInt()) {
+                    return internal(err, cert);
+                }
+            }
+            if (json) {
+                out.println(patrolJson(a, cert));
+            } else {
+                patrolText(a, cert, out);
+            }
+            return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+        }
+        DeadlineAnalysis a = DeadlineSolver.analyse(m, budget(memoryBudgetBytes), safest);
+        RoundsCertificate cert = null;
+        if (a.guaranteed()) {
+            cert = DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
+                    a.startUnits(), a.deadlineTicks());
+            if (!cert.ok() || cert.worstMinimumUnits() != a.worstCaseMinimumUnits().getAsInt()
+                    || cert.longestLapTicks() != a.worstFinishTicks().getAsInt()) {
+                return internal(err, cert);
+            }
+        }
+        if (json) {
+            out.println(deadlineJson(a, cert));
+        } else {
+            deadlineText(a, cert, out);
+        }
+        return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    private static int internal(PrintWriter err, RoundsCertificate cert) {
+        err.println("dockline: internal error: the solver says guaranteed, but its policy " + (cert.ok()
+                ? "has other figures under" : "failed") + " the independent certificate: " + cert.reason());
+        err.println("No verdict is given. Please report this with the input files.");
+        return ExitCodes.INTERNAL;
+    }
+
+    private static String events(Mission m) {
+        int k = m.map().disturbances().budget();
+        if (k == 0) {
+            return "with no disturbances";
+        }
+        return "under up to " + k + " disturbance" + (k == 1 ? "" : "s")
+                + (m.tasks().patrols() ? (m.map().disturbances().budgetPerLap() ? " per lap" : " in the whole night")
+                : "");
+    }
+
+    // ---------------------------------------------------------------- patrol
+
+    static void patrolText(PatrolAnalysis a, RoundsCertificate cert, PrintWriter out) {
+        Mission m = a.mission();
+        Timing t = m.timing();
+        String cps = String.join(", ", m.tasks().patrol());
+        if (a.guaranteed()) {
+            out.println("GUARANTEED: " + m.name() + " — the robot can visit every checkpoint (" + cps + ") again and"
+                    + " again for ever " + events(m) + " without going below the reserve floor.");
+            out.println("  Lowest battery level ever reached under the policy: "
+                    + CheckReport.amount(a.lowestLevelUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    ? " (the safest policy; its laps may be longer)" : " (the policy of shortest laps)"));
+            out.println("  Longest lap in the worst case:  " + t.describeTicks(a.longestLapTicks().getAsInt())
+                    + "; the first lap is complete within " + t.describeTicks(a.wayInTicks().getAsInt()));
+        } else {
+            out.println("NOT GUARANTEED: " + m.name() + " — no policy can visit every checkpoint (" + cps + ") again"
+                    + " and again " + events(m) + " while staying at or above the reserve floor.");
+            out.println("  Run 'dockline replay " + (m.source() == null ? "MISSION" : m.source()) + "' for a lap where"
+                    + " the building wins (the battery or a checkpoint is lost).");
+        }
+        highest(a.highestGuaranteedReserveUnits(), m, out, "");
+        changesText(changes(a), out);
+        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
+                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
+                + a.capacityUnits() + " units)");
+        out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
+                + " checkpoints of the lap x battery levels)");
+        out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
+                + a.boundVertices() + " vertices); " + a.rounds() + " round" + (a.rounds() == 1 ? "" : "s")
+                + " of the fixpoint; " + a.millis() + " ms in all (the highest floor included)");
+        out.println("  Energy: " + m.scale().describe());
+        if (cert != null) {
+            out.println("  certified: " + cert.ok() + " (" + cert.reason() + ")");
+        }
+        out.println(Caveats.block());
+    }
+
+    static String patrolJson(PatrolAnalysis a, RoundsCertificate cert) {
+        Mission m = a.mission();
+        ObjectNode o = header(m, a.guaranteed(), "patrol");
+        o.putPOJO("checkpoints", m.tasks().patrol());
+        o.put("budgetPer", m.map().disturbances().budgetPerLap() ? "lap" : "mission");
+        o.put("startUnits", a.startUnits());
+        o.put("reserveUnits", a.reserveUnits());
+        o.put("capacityUnits", a.capacityUnits());
+        put(o, "lowestLevelUnits", a.lowestLevelUnits());
+        o.put("policyReserveUnits", a.policyFloorUnits());
+        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
+        put(o, "longestLapTicks", a.longestLapTicks());
+        put(o, "wayInTicks", a.wayInTicks());
+        seconds(o, "longestLapSeconds", m, a.longestLapTicks());
+        put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        tick(o, m);
+        o.put("productVertices", a.productVertices());
+        o.put("productEdges", a.productEdges());
+        o.put("boundVertices", a.boundVertices());
+        o.put("fixpointRounds", a.rounds());
+        o.put("totalMillis", a.millis());
+        certificate(o, cert);
+        changesJson(o, changes(a));
+        o.put("discretisation", m.scale().describe());
+        return Json.withCaveats(o);
+    }
+
+    // ---------------------------------------------------------------- deadline
+
+    static void deadlineText(DeadlineAnalysis a, RoundsCertificate cert, PrintWriter out) {
+        Mission m = a.mission();
+        Timing t = m.timing();
+        String deadline = Timing.clock(t.deadlineSeconds()) + " (" + a.deadlineTicks() + " turns of "
+                + Timing.clock(t.tickSeconds()) + ", rounded down)";
+        if (a.guaranteed()) {
+            out.println("GUARANTEED: " + m.name() + " — the robot can always finish and dock within " + deadline + " "
+                    + events(m) + " without going below the reserve floor.");
+            out.println("  Worst finishing time under the policy:  " + t.describeTicks(a.worstFinishTicks().getAsInt()));
+            out.println("  Worst battery level under the policy:   "
+                    + CheckReport.amount(a.worstCaseMinimumUnits().getAsInt(), m) + (a.policyFloorUnits() > a.reserveUnits()
+                    ? " (the safest policy that keeps the deadline)" : " (the policy of fewest turns)"));
+        } else {
+            out.println("NOT GUARANTEED: " + m.name() + " — no policy can always finish and dock within " + deadline
+                    + " " + events(m) + " while staying at or above the reserve floor.");
+            if (a.tightestTicks().isPresent()) {
+                out.println("  Only the deadline is missed: at this floor the robot can always finish, but it needs up"
+                        + " to " + t.describeTicks(a.tightestTicks().getAsInt()) + " in the worst case.");
+            } else {
+                out.println("  Not even without the deadline: the robot cannot always finish and dock at this floor.");
+            }
+        }
+        if (a.tightestTicks().isPresent()) {
+            out.println("  Tightest deadline still guaranteed:     " + t.describeTicks(a.tightestTicks().getAsInt())
+                    + " (at this floor)");
+        } else {
+            out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
+        }
+        highest(a.highestGuaranteedReserveUnits(), m, out, " (within the deadline)");
+        changesText(changes(a), out);
+        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
+                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
+                + a.capacityUnits() + " units)");
+        out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
+                + " stand for the ticks-left monitor");
+        out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
+                + a.boundVertices() + "); with ticks left " + a.timedVertices() + " vertices, kept as one rank per"
+                + " vertex; " + a.millis() + " ms in all (the highest floor included)");
+        out.println("  Energy: " + m.scale().describe());
+        if (cert != null) {
+            out.println("  certified: " + cert.ok() + " (" + cert.reason() + ")");
+        }
+        out.println(Caveats.block());
+    }
+
+    static String deadlineJson(DeadlineAnalysis a, RoundsCertificate cert) {
+        Mission m = a.mission();
+        ObjectNode o = header(m, a.guaranteed(), "deadline");
+        o.put("startUnits", a.startUnits());
+        o.put("reserveUnits", a.reserveUnits());
+        o.put("capacityUnits", a.capacityUnits());
+        tick(o, m);
+        o.put("deadlineSeconds", m.timing().deadlineSeconds().stripTrailingZeros());
+        o.put("deadlineTicks", a.deadlineTicks());
+        put(o, "worstFinishTicks", a.worstFinishTicks());
+        seconds(o, "worstFinishSeconds", m, a.worstFinishTicks());
+        put(o, "tightestDeadlineTicks", a.tightestTicks());
+        seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
+        put(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
+        put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        o.put("policyReserveUnits", a.policyFloorUnits());
+        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
+        o.put("productVertices", a.productVertices());
+        o.put("productEdges", a.productEdges());
+        o.put("boundVertices", a.boundVertices());
+        o.put("timedVertices", a.timedVertices());
+        o.put("totalMillis", a.millis());
+        certificate(o, cert);
+        changesJson(o, changes(a));
+        o.put("discretisation", m.scale().describe());
+        return Json.withCaveats(o);
+    }
+
+    // ---------------------------------------------------------------- shared
+
+    /** A change that makes the mission guaranteed: kind, from, to (units or turns) and the sentence. */
+    record Change(String kind, long from, long to, String text) {
+    }
+
+    static java.util.List<Change> changes(PatrolAnalysis a) {
+        java.util.List<Change> out = new java.util.ArrayList<>();
+        if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
+            int h = a.highestGuaranteedReserveUnits().getAsInt();
+            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
+                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
+                    + ")"));
+        }
+        return out;
+    }
+
+    static java.util.List<Change> changes(DeadlineAnalysis a) {
+        java.util.List<Change> out = new java.util.ArrayList<>();
+        if (a.guaranteed()) {
+            return out;
+        }
+        Timing t = a.mission().timing();
+        if (a.tightestTicks().isPresent()) {
+            int k = a.tightestTicks().getAsInt();
+            out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least " + Timing.clock(t.seconds(k))
+                    + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
+        }
+        if (a.highestGuaranteedReserveUnits().isPresent()) {
+            int h = a.highestGuaranteedReserveUnits().getAsInt();
+            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
+                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
+                    + "), which keeps the deadline"));
+        }
+        return out;
+    }
+
+    private static void changesText(java.util.List<Change> changes, PrintWriter out) {
+        if (!changes.isEmpty()) {
+            out.println("  To make it guaranteed, change one of:");
+            for (Change c : changes) {
+                out.println("    - " + c.text());
+            }
+        }
+    }
+
+    private static void changesJson(ObjectNode o, java.util.List<Change> changes) {
+        com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
+        for (Change c : changes) {
+            ObjectNode so = arr.addObject();
+            so.put("kind", c.kind());
+            so.put("from", c.from());
+            so.put("to", c.to());
+            so.put("text", c.text());
+        }
+    }
+
+    private static void highest(OptionalInt h, Mission m, PrintWriter out, String what) {
+        out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
+                ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
+    }
+
+    private static ObjectNode header(Mission m, boolean ok, String method) {
+        ObjectNode o = Json.object();
+        o.put("mission", m.name());
+        o.put("file", m.source() == null ? null : m.source().toString());
+        o.put("verdict", ok ? "guaranteed" : "not-guaranteed");
+        o.put("method", method);
+        o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
+        o.put("budget", m.map().disturbances().budget());
+        return o;
+    }
+
+    private static void tick(ObjectNode o, Mission m) {
+        if (m.timing().hasTick()) {
+            o.put("tickSeconds", m.timing().tickSeconds().stripTrailingZeros());
+        } else {
+            o.putNull("tickSeconds");
+        }
+    }
+
+    private static void seconds(ObjectNode o, String key, Mission m, OptionalInt ticks) {
+        if (m.timing().hasTick() && ticks.isPresent()) {
+            BigDecimal s = m.timing().seconds(ticks.getAsInt()).stripTrailingZeros();
+            o.put(key, s);
+        } else {
+            o.putNull(key);
+        }
+    }
+
+    private static void certificate(ObjectNode o, RoundsCertificate cert) {
+        o.put("certified", cert != null && cert.ok());
+        if (cert != null) {
+            o.put("certifiedStates", cert.statesChecked());
+            o.put("certifiedLowestLevelUnits", cert.worstMinimumUnits());
+            o.put("certification", cert.reason());
+        }
+    }
+
+    private static void put(ObjectNode o, String key, OptionalInt v) {
+        if (v.isPresent()) {
+            o.put(key, v.getAsInt());
+        } else {
+            o.putNull(key);
+        }
+    }
+}
