@@ -3,6 +3,7 @@ package dockline.cli;
 import dockline.bench.BenchReport;
 import dockline.bench.Benchmark;
 import dockline.bench.BuildingGenerator;
+import dockline.bench.ResolutionBench;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -46,10 +47,28 @@ public final class BenchCommand implements Callable<Integer> {
                     + " a development aid: the ratios between instances are then missing")
     List<String> instances;
 
+    @Option(names = "--resolution-row", description = "run only the row \"resolution independence\": the charging"
+            + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
+    boolean resolutionRow;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        if (resolutionRow) {
+            int side = sizes != null && !sizes.isEmpty() ? sizes.get(0) : 256;
+            if (side < BuildingGenerator.MIN_SIDE || side > BuildingGenerator.MAX_SIDE) {
+                err.println("dockline: --sizes: " + side + " is outside " + BuildingGenerator.MIN_SIDE + ".."
+                        + BuildingGenerator.MAX_SIDE);
+                err.println("Try 'dockline bench --help'.");
+                err.flush();
+                return ExitCodes.BAD_INPUT;
+            }
+            ResolutionBench.Row row = ResolutionBench.run(side, seed, 2, 3);
+            out.print(row.toText());
+            out.flush();
+            return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
+        }
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
         if (sizes != null) {
             for (int s : sizes) {
