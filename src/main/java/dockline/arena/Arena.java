@@ -8,7 +8,8 @@ import dockline.model.Mission;
  * The compiled two-player arena of one mission (maps/README.md, "Game semantics"), in compressed-sparse-row int
  * arrays, forward and reverse.
  *
- * <p>Vertices {@code 0 .. robotCount-1} belong to the robot: (cell, budget left). Vertices
+ * <p>Vertices {@code 0 .. robotCount-1} belong to the robot: (cell, disturbance state), the state
+ * being the budget left plus, with lasting events, the doors and zones closed so far. Vertices
  * {@code robotCount .. vertexCount-1} belong to the disturbance: (cell, action, budget left). Every
  * robot edge goes to a disturbance vertex and carries weight 0; every disturbance edge (an
  * outcome) goes to a robot vertex and carries the energy delta in units (negative = consumption,
@@ -16,7 +17,8 @@ import dockline.model.Mission;
  * {@link #cellZones(int)} is a bit mask over the map's zones in file order.
  *
  * <p>Numbering is deterministic: robot vertex of free-cell slot s (row-major order of free cells)
- * and budget k is {@code s * (K + 1) + k}; disturbance vertices follow in the order of their robot
+ * and disturbance state d ({@link DisturbanceStates}) is {@code s * D + d} for D states; without lasting
+ * rules and at-most limits d is the budget left k and D = K + 1, so it is {@code s * (K + 1) + k}; disturbance vertices follow in the order of their robot
  * vertex and, within it, of the actions (moves in neighbour order N, E, S, W, NE, SE, SW, NW, then
  * wait, then charge).
  *
@@ -32,6 +34,9 @@ public final class Arena {
     private final int width;
     private final int height;
     private final int budget;
+    private final DisturbanceStates states;
+    private final int stateCount;
+    private final int[] vertexState;
     private final int robotCount;
     private final int vertexCount;
     private final int startVertex;
@@ -68,10 +73,22 @@ public final class Arena {
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
+        this(mission, width, height, budget, DisturbanceStates.plain(budget), vertexBudget, robotCount, vertexCount,
+                startVertex, vertexCell, vertexBudget, actionKind, actionTarget, outStart, edgeTarget, edgeWeight,
+                edgeEvent, edgeRule, cellZones, cellDock, cellSlot, slotCell);
+    }
+
+    Arena(Mission mission, int width, int height, int budget, DisturbanceStates states, int[] vertexState, int robotCount, int vertexCount, int startVertex,
+          int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
+          int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
+          long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
         this.mission = mission;
         this.width = width;
         this.height = height;
         this.budget = budget;
+        this.states = states;
+        this.stateCount = states.count();
+        this.vertexState = vertexState;
         this.robotCount = robotCount;
         this.vertexCount = vertexCount;
         this.startVertex = startVertex;
@@ -179,10 +196,60 @@ public final class Arena {
         return vertexBudget[v];
     }
 
-    /** The robot vertex of a free cell (row-major index) and budget left, or -1 if the cell is a wall. */
+    /**
+     * The robot vertex of a free cell (row-major index) and budget left with nothing closed and no
+     * {@code at-most} entry used, or -1 if the cell is a wall.
+     */
     public int robotVertex(int cellIndex, int budgetLeft) {
         int s = cellSlot[cellIndex];
-        return s < 0 ? -1 : s * (budget + 1) + budgetLeft;
+        return s < 0 ? -1 : s * stateCount + budgetLeft;
+    }
+
+    /** The robot vertex of a free cell (row-major index) in a disturbance state, or -1 if the cell is a wall. */
+    public int robotVertexInState(int cellIndex, int state) {
+        int s = cellSlot[cellIndex];
+        return s < 0 ? -1 : s * stateCount + state;
+    }
+
+    /** The disturbance state of the vertex (an id of {@link #states()}; equal to the budget left when plain). */
+    public int state(int v) {
+        return vertexState[v];
+    }
+
+    /** The disturbance states: budget left, closed doors and zones, events per at-most entry. */
+    public DisturbanceStates states() {
+        return states;
+    }
+
+    /** Number of disturbance states (K + 1 without lasting rules and at-most limits). */
+    public int stateCount() {
+        return stateCount;
+    }
+
+    /** The situation key of the vertex beyond the budget ({@link DisturbanceStates#key}); "" when plain. */
+    public String closures(int v) {
+        return states.plain() ? "" : states.key(vertexState[v]);
+    }
+
+    /**
+     * The closure item an outcome edge closes (a lasting door shut or blockage), or -1. O(K).
+     */
+    public int closedBy(int e) {
+        int ev = edgeEvent[e];
+        if (ev != EventKind.DOOR_SHUT.ordinal() && ev != EventKind.BLOCKAGE.ordinal() || states.itemCount() == 0) {
+            return -1;
+        }
+        int[] before = states.closed(vertexState[edgeSource[e]]);
+        int[] after = states.closed(vertexState[edgeTarget[e]]);
+        if (after.length == before.length) {
+            return -1;
+        }
+        for (int i = 0; i < after.length; i++) {
+            if (i >= before.length || before[i] != after[i]) {
+                return after[i];
+            }
+        }
+        return -1;
     }
 
     /** Number of free cells. */

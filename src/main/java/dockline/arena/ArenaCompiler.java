@@ -19,8 +19,12 @@ import java.util.List;
  * Compiles a mission (map + robot + disturbance model) into its {@link Arena}, following the
  * reference semantics of maps/README.md ("Game semantics").
  *
- * <p>Cost: O(F · (K+1) · A · S) time and memory, where F is the number of free cells, K the budget,
- * A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action; in practice linear in the plan.
+ * <p>A robot vertex is (free cell, disturbance state) ({@link DisturbanceStates}: budget left, doors and
+ * zones closed by lasting events, events used per {@code at-most} entry); with no lasting rule and no
+ * {@code at-most} the states are just the budget left 0..K and the numbering is the reference one.
+ *
+ * <p>Cost: O(F · D · A · S) time and memory, where F is the number of free cells, D the disturbance
+ * states (K+1 without lasting rules), A ≤ 10 the actions per cell and S ≤ 8 the outcomes per action.
  * Energy figures are turned into units by {@link EnergyScale}, rounding against the robot.
  */
 public final class ArenaCompiler {
@@ -29,10 +33,49 @@ public final class ArenaCompiler {
     static final int[] DX = {0, 1, 0, -1, 1, 1, -1, -1};
     static final int[] DY = {-1, 0, 1, 0, -1, 1, 1, -1};
 
+    /**
+     * Heap per robot vertex while compiling, about: its actions and outcomes in the growing lists and
+     * the final forward and reverse CSR arrays (measured on the generated buildings, rounded up).
+     */
+    static final long BYTES_PER_ROBOT_VERTEX = 600;
+
     /** Most zones a map may have (zone sets are 64-bit masks). */
     public static final int MAX_ZONES = 63;
 
     private ArenaCompiler() {
+    }
+
+    /**
+     * The number of disturbance states of the mission's arena ({@link DisturbanceStates}), without
+     * building the arena: O(cells + states · rules). The arena has this many robot vertices per free cell.
+     * -1 when there are more than {@code maxStates}.
+     */
+    public static int disturbanceStateCount(Mission mission, int maxStates) {
+        BuildingMap map = mission.map();
+        int w = map.width();
+        int cells = w * map.height();
+        List<EventRule> rules = map.disturbances().rules();
+        int[] doorRule = filled(cells);
+        int[] blockRule = filled(cells);
+        for (int r = 0; r < rules.size(); r++) {
+            EventRule rule = rules.get(r);
+            for (Cell c : rule.cells()) {
+                if (!map.inside(c)) {
+                    continue;
+                }
+                int ci = c.index(w);
+                if (rule.kind() == EventKind.DOOR_SHUT && doorRule[ci] < 0 && map.terrainAt(c).door()) {
+                    doorRule[ci] = r;
+                } else if (rule.kind() == EventKind.BLOCKAGE && blockRule[ci] < 0) {
+                    blockRule[ci] = r;
+                }
+            }
+        }
+        try {
+            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates).count();
+        } catch (DisturbanceStates.TooManyStates e) {
+            return -1;
+        }
     }
 
     /**
@@ -142,17 +185,38 @@ public final class ArenaCompiler {
         if (!map.isFree(start)) {
             throw new IllegalArgumentException("start cell " + start + " is not a free cell");
         }
-        int kk = budget + 1;
+        long limit = Runtime.getRuntime().maxMemory() / 2;
+        int maxStates = (int) Math.min(Integer.MAX_VALUE / 16, limit / BYTES_PER_ROBOT_VERTEX / Math.max(1, freeCount) + 1);
+        DisturbanceStates states;
+        try {
+            states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1));
+        } catch (DisturbanceStates.TooManyStates e) {
+            long robots = (long) freeCount * e.found;
+            throw new ArenaTooLargeException(freeCount, e.found, robots, robots * BYTES_PER_ROBOT_VERTEX, limit, true);
+        }
+        int kk = states.count();
+        if (!states.plain()) {
+            // without lasting events the arena is as before (its size was never checked here); with them
+            // the states multiply the cells, so refuse before allocating what cannot fit
+            long robots = (long) freeCount * kk;
+            long bytes = robots * BYTES_PER_ROBOT_VERTEX;
+            if (bytes > limit || robots > Integer.MAX_VALUE / 16) {
+                throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit, false);
+            }
+        }
         int robotCount = Math.multiplyExact(freeCount, kk);
 
         IntArrayList vCell = new IntArrayList(robotCount * 6);
         IntArrayList vBudget = new IntArrayList(robotCount * 6);
+        IntArrayList vState = new IntArrayList(robotCount * 6);
         for (int s = 0; s < freeCount; s++) {
             for (int k = 0; k < kk; k++) {
                 vCell.add(slotCell[s]);
-                vBudget.add(k);
+                vBudget.add(states.budgetLeft(k));
+                vState.add(k);
             }
         }
+        boolean closable = states.itemCount() > 0;
         // robot edges first (to disturbance vertices numbered on the fly), outcomes after
         IntArrayList aKind = new IntArrayList(robotCount * 5);
         IntArrayList aTarget = new IntArrayList(robotCount * 5);
@@ -162,7 +226,8 @@ public final class ArenaCompiler {
         for (int r = 0; r < robotCount; r++) {
             robotOutStart.add(next - robotCount);
             int c = vCell.get(r);
-            int n = neighbours(c, w, h, free, dirs, nb);
+            int n = closable ? neighbours(c, w, h, free, dirs, nb, states, vState.get(r))
+                    : neighbours(c, w, h, free, dirs, nb);
             for (int i = 0; i < n; i++) {
                 aKind.add(ActionKind.MOVE.ordinal());
                 aTarget.add(nb[i]);
@@ -206,7 +271,7 @@ public final class ArenaCompiler {
             outStart.add(eTarget.size());
             int owner = ownerOfD[d];
             int c = vCell.get(owner);
-            int k = vBudget.get(owner);
+            int k = vState.get(owner);
             int kind = aKind.get(d);
             int t = aTarget.get(d);
             int sOwn = slot[c];
@@ -222,30 +287,45 @@ public final class ArenaCompiler {
             int enter = diagonal ? diagCost[t] : cost[t];
             int sT = slot[t];
             add(eTarget, eWeight, eEvent, eRule, sT * kk + k, -enter, Arena.NOMINAL, -1);
-            if (k == 0) {
+            if (states.budgetLeft(k) == 0) {
                 continue;
             }
-            int k1 = k - 1;
-            if (doorRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), doorRule[t]);
+            int dr = doorRule[t];
+            if (dr >= 0) {
+                int k1 = states.after(k, dr, rules.get(dr).lasting() ? states.doorItem(t) : -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), dr);
+                }
             }
-            if (blockRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), blockRule[t]);
+            int br = blockRule[t];
+            if (br >= 0) {
+                int k1 = states.after(k, br, rules.get(br).lasting() ? states.blockageItem(br) : -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), br);
+                }
             }
             int slip = slipRule[c] >= 0 ? slipRule[c] : slipRule[t];
             if (slip >= 0) {
-                int mn = neighbours(t, w, h, free, dirs, mb);
-                for (int i = 0; i < mn; i++) {
-                    int m = mb[i];
-                    if (m == c) {
-                        continue;
+                int k1 = states.after(k, slip, -1);
+                if (k1 >= 0) {
+                    // a slip never lands on a closed cell: it is an obstacle like a wall
+                    int mn = closable ? neighbours(t, w, h, free, dirs, mb, states, k) : neighbours(t, w, h, free, dirs, mb);
+                    for (int i = 0; i < mn; i++) {
+                        int m = mb[i];
+                        if (m == c) {
+                            continue;
+                        }
+                        add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
                     }
-                    add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
                 }
             }
-            if (dragRule[t] >= 0) {
-                add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
-                        EventKind.DRAG.ordinal(), dragRule[t]);
+            int gr = dragRule[t];
+            if (gr >= 0) {
+                int k1 = states.after(k, gr, -1);
+                if (k1 >= 0) {
+                    add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
+                            EventKind.DRAG.ordinal(), gr);
+                }
             }
         }
         outStart.add(eTarget.size());
@@ -266,8 +346,12 @@ public final class ArenaCompiler {
             cellArr[robotCount + d] = vCell.get(owner);
             budgetArr[robotCount + d] = vBudget.get(owner);
         }
+        int[] stateArr = Arrays.copyOf(vState.toArray(), vertexCount);
+        for (int d = 0; d < distCount; d++) {
+            stateArr[robotCount + d] = vState.get(ownerOfD[d]);
+        }
         int startVertex = slot[start.index(w)] * kk + budget;
-        return new Arena(mission, w, h, budget, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
+        return new Arena(mission, w, h, budget, states, stateArr, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
                 aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),
                 zones, dock, slot, slotCell);
     }
@@ -299,6 +383,32 @@ public final class ArenaCompiler {
             out[n++] = ny * w + nx;
         }
         return n;
+    }
+
+    /**
+     * Free neighbours of cell c that are not closed in the disturbance state: a closed door or zone
+     * is an obstacle like a wall, also for the corner rule of diagonals.
+     */
+    static int neighbours(int c, int w, int h, boolean[] free, int dirs, int[] out, DisturbanceStates st, int state) {
+        int x = c % w;
+        int y = c / w;
+        int n = 0;
+        for (int i = 0; i < dirs; i++) {
+            int nx = x + DX[i];
+            int ny = y + DY[i];
+            if (nx < 0 || ny < 0 || nx >= w || ny >= h || !open(ny * w + nx, free, st, state)) {
+                continue;
+            }
+            if (i >= 4 && (!open(y * w + nx, free, st, state) || !open(ny * w + x, free, st, state))) {
+                continue;
+            }
+            out[n++] = ny * w + nx;
+        }
+        return n;
+    }
+
+    private static boolean open(int cell, boolean[] free, DisturbanceStates st, int state) {
+        return free[cell] && !st.isClosed(state, cell);
     }
 
     private static int[] filled(int n) {

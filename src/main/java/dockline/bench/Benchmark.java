@@ -209,6 +209,9 @@ public final class Benchmark {
                 rows.addAll(csrMethods(inst, sampler, reps, warmup));
                 rows.addAll(implicitMethods(inst, sampler, reps));
                 rows.add(fixpoint(inst, sampler, reps));
+                if (!warmup) {
+                    rows.add(lasting(inst, sampler, reps));
+                }
             }
             case CONSUMPTION -> {
                 rows.add(fast(inst, sampler, reps));
@@ -544,6 +547,92 @@ public final class Benchmark {
                         early.value().stoppedEarly() ? "stopped early" : "ran to the end", early.value().wonVertices(),
                         100.0 * early.value().wonVertices() / Math.max(1, full.value().wonVertices()))));
         return rows;
+    }
+
+    /** The lasting row is skipped above this many robot vertices of its arena (compile time and heap). */
+    static final long LASTING_ROBOT_VERTEX_LIMIT = 1_500_000;
+
+    /** Disturbance states of a mission, counted on a one-row copy of nothing but its rules (cheap). */
+    private static long lastingStates(Mission m) {
+        int n = dockline.arena.ArenaCompiler.disturbanceStateCount(m, 1_000_000);
+        return n < 0 ? Long.MAX_VALUE / 4 : n;
+    }
+
+    /**
+     * The main route on the same instance with its door-shut events lasting (a shut door stays shut):
+     * the arena then carries the closed doors, found only as event sequences can close them. The row's
+     * note gives the ratio of its solve time to the momentary {@code attractor}'s (both CPU, the same
+     * work: implicit product, attractor with the robot's choices, policy and worst case), the arena sizes
+     * and compile times of both, and the size forecast against the reachable product.
+     */
+    private BenchRow lasting(Instance inst, HeapSampler sampler, int reps) {
+        Mission m = inst.mission;
+        List<dockline.model.EventRule> rules = new ArrayList<>();
+        for (dockline.model.EventRule r : m.map().disturbances().rules()) {
+            rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
+                    ? r.withDuration(dockline.model.EventDuration.REST_OF_MISSION) : r);
+        }
+        Mission lm = new Mission(m.name(), m.source(), m.map().withDisturbances(
+                new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
+                m.startCharge(), m.reserve(), m.tasks(), m.objective());
+        long states = lastingStates(lm);
+        long robots = states >= Long.MAX_VALUE / 4 ? states : states * inst.arena.freeCellCount();
+        if (robots > LASTING_ROBOT_VERTEX_LIMIT) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting", robots, 0, "skipped: the arena with lasting doors"
+                    + " would have " + robots + " robot vertices (" + states + " disturbance states), over this run's"
+                    + " limit of " + LASTING_ROBOT_VERTEX_LIMIT);
+        }
+        long t0 = System.nanoTime();
+        Arena arena;
+        try {
+            arena = ArenaCompiler.compile(lm);
+        } catch (ArithmeticException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting", 0, 0, "does not fit: " + e.getMessage());
+        }
+        double compileMs = (System.nanoTime() - t0) / 1e6;
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        ImplicitReserveGame game;
+        try {
+            game = new ImplicitReserveGame(arena, inst.goal, monitor);
+        } catch (ProductTooLargeException e) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting", arena.vertexCount(), arena.edgeCount(),
+                    "does not fit: more than 2^31 slots in the numbering");
+        }
+        if (game.slotCount() + 4 * game.vertexCount() > Runtime.getRuntime().maxMemory() - HeapSampler.settledUsed()) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting", game.vertexCount(), 0,
+                    "does not fit: " + megabytes(game.slotCount() + 4 * game.vertexCount()) + " needed at most");
+        }
+        long forecast;
+        try {
+            forecast = ReserveSizeForecast.of(arena, inst.goal, monitor).vertices();
+        } catch (ArithmeticException tooManyPairs) {
+            forecast = -1;
+        }
+        long base = HeapSampler.settledUsed();
+        Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, 1, game::bfs);
+        Timed<long[]> pol = time(sampler, base, reps, () -> {
+            ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
+            if (!st.startWon()) {
+                return new long[] {0, -1, st.result().edgesScanned(), 0};
+            }
+            return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
+        });
+        long[] pv = pol.value();
+        long reachable = bfs.value().wonVertices();
+        // the momentary main route on the same instance, for the ratio (timed here again, back to back)
+        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena, inst.goal, monitor);
+        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
+        double ratio = pol.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
+        return new BenchRow(inst.side, inst.kind, "lasting", reachable, bfs.value().edgesScanned(), 0, pol.millis(),
+                pol.cpuMillis(), pol.peak(), Verdict.of(pv[0] == 1).word(), compileMs + pol.millis(), -1, forecast,
+                String.format(java.util.Locale.ROOT, "door-shut events lasting: %d disturbance states (%d closable"
+                                + " doors) against %d; arena %d vertices compiled in %.0f ms (momentary %d in %.0f ms);"
+                                + " solve %.2f x the momentary attractor's CPU time (%.1f ms); forecast / reachable"
+                                + " product %.3f; %s", arena.stateCount(), arena.states().itemCount(),
+                        inst.arena.stateCount(), arena.vertexCount(), compileMs, inst.arena.vertexCount(),
+                        inst.arenaMillis, ratio, mom.cpuMillis(), forecast / (double) Math.max(1, reachable),
+                        pv[0] == 1 ? "policy of " + pv[3] + " rows, worst case " + pv[1] + " units"
+                                : "not guaranteed"));
     }
 
     /**

@@ -135,6 +135,7 @@ public final class CertificateChecker {
 
         String state(int node) {
             return loop.cell(node) + " with " + units(loop.level(node)) + ", budget left " + loop.budgetLeft(node)
+                    + (loop.closures(node).isEmpty() ? "" : " (" + loop.closures(node) + ")")
                     + ", " + tasks(loop.progress(node));
         }
 
@@ -204,7 +205,8 @@ public final class CertificateChecker {
                 case START_IN_AVOIDED_ZONE -> "the start cell " + loop.cell(0) + " lies in an avoided zone";
                 case MISSING_ENTRY -> "the policy has no entry for a situation the robot can reach: " + where;
                 case ILLEGAL_ACTION -> {
-                    var a = loop.policy().lookup(loop.cell(n), loop.level(n), loop.budgetLeft(n), loop.progress(n));
+                    var a = loop.policy().lookup(loop.cell(n), loop.level(n), loop.budgetLeft(n), loop.progress(n), null,
+                            loop.closures(n));
                     yield "the policy's action '" + a.map(Object::toString).orElse("?") + "' is not allowed " + where;
                 }
                 case BELOW_FLOOR -> where + ": the policy says '" + arena.action(loop.choice(n)) + "' and "

@@ -122,7 +122,7 @@ public final class ClosedLoop {
                 nodeChoice.add(-1);
                 continue;
             }
-            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask);
+            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, null, arena.closures(v));
             if (act.isEmpty()) {
                 nodeChoice.add(-1);
                 problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);
@@ -231,6 +231,11 @@ public final class ClosedLoop {
 
     public int budgetLeft(int node) {
         return arena.budgetLeft(nodeVertex.get(node));
+    }
+
+    /** The doors and zones closed at the node ({@link dockline.solve.PolicyEntry#closures}). */
+    public String closures(int node) {
+        return arena.closures(nodeVertex.get(node));
     }
 
     /** Task progress mask: bit i set when task i of the visit list is done. */

@@ -264,7 +264,8 @@ public final class DiscountedClosedLoop {
                 nodeChoice.add(-1);
                 continue;
             }
-            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, score(gap));
+            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, score(gap),
+                    arena.closures(v));
             if (act.isEmpty()) {
                 nodeChoice.add(-1);
                 problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);

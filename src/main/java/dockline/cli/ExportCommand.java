@@ -1,39 +1,37 @@
 package dockline.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dockline.certify.Certificate;
-import dockline.certify.CertificateChecker;
-import dockline.certify.DiscountedCertificate;
 import dockline.io.PolicyFiles;
 import dockline.model.Mission;
 import dockline.model.Objective;
-import dockline.policy.Policy;
+import dockline.plan.Certification;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PolicyChoice;
+import dockline.plan.Route;
 import dockline.report.Caveats;
-import dockline.solve.Verdict;
 import dockline.solve.discounted.DiscountedAnalysis;
-import dockline.solve.discounted.DiscountedOptions;
-import dockline.solve.discounted.DiscountedPolicies;
-import dockline.solve.discounted.DiscountedSolver;
-import dockline.solve.reserve.ReserveAnalysis;
-import dockline.solve.reserve.ReserveOptions;
-import dockline.solve.reserve.ReserveSolver;
+import dockline.policy.Policy;
+import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine;
 
 /**
- * {@code dockline export MISSION --policy FILE}: solves the mission and writes the robot's policy,
+ * {@code dockline export MISSION --policy FILE}: plans the mission ({@link MissionPlanner#plan}, the
+ * product route with the safest policy unless {@code --fewest-moves}) and writes the robot's policy,
  * one row per situation it can meet (format: missions/POLICY-FORMAT.md; CSV for a {@code .csv}
  * name, else JSON), atomically. Nothing is written when the mission is not guaranteed, and nothing
- * is written unless the policy passes its independent certificate ({@link CertificateChecker}, or
- * the discounted checker for a discounted objective): a failed certificate is exit 4. For a
+ * is written unless the policy passed its independent certificate (in the plan): a failed certificate is exit 4. For a
  * mission with a discounted objective the rows carry the robot's score memory (format version 2,
- * {@link DiscountedPolicies}); the reserve floor is kept as well, as {@code check} does by default.
+ * see missions/POLICY-FORMAT.md); the reserve floor is kept as well, as {@code check} does by default.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
         description = {"Writes the certified policy of a guaranteed mission: the action to take in every situation the"
@@ -54,7 +52,7 @@ public final class ExportCommand implements Callable<Integer> {
     MissionOptions mission;
 
     @Mixin
-    SafestPolicyOption safest;
+    PolicyOption policy;
 
     @Option(names = "--policy", required = true, paramLabel = "FILE", description = "where to write the policy (.json or .csv)")
     Path policyFile;
@@ -71,33 +69,60 @@ public final class ExportCommand implements Callable<Integer> {
             if (!mission.outputOk("--policy", policyFile, m, err)) {
                 return ExitCodes.BAD_INPUT;
             }
-            if (m.objective() instanceof Objective.Discounted o) {
-                return exportDiscounted(m, o, out, err);
+            boolean discounted = m.objective() instanceof Objective.Discounted;
+            if (discounted && policy.given()) {
+                err.println("dockline: " + policy.name() + " applies to the reserve objective only");
+                return ExitCodes.BAD_INPUT;
             }
-            ReserveAnalysis a = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false)
-                    .withMemoryBudget(mission.memoryBudgetBytes()).withSafestPolicy(safest.on));
-            if (!a.guaranteed()) {
-                notGuaranteed(m, "there is no safe policy to export", out);
+            Route route = discounted ? Route.Discounted.defaults()
+                    : new Route.Product(policy.choice(), false, false, false, false);
+            Plan p = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
+            if (!p.guaranteed()) {
+                notGuaranteed(m, discounted ? "there is no policy meeting "
+                        + DiscountedCheck.condition((Objective.Discounted) m.objective()) + " to export"
+                        : "there is no safe policy to export", out);
                 return ExitCodes.NOT_GUARANTEED;
             }
-            Policy p = a.policy().orElseThrow();
-            Certificate cert = CertificateChecker.check(a.arena(), p, a.reserveUnits(), a.startUnits());
-            if (!cert.ok()) {
-                return uncertified("its policy failed the independent certificate: " + cert.reason(), err);
+            Optional<String> problem = p.certification().problem();
+            if (problem.isPresent()) {
+                err.println("dockline: internal error: " + problem.get());
+                err.println("No policy is written. Please report this with the input files.");
+                return ExitCodes.INTERNAL;
             }
-            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), p);
-            String worst = CheckCommand.amount(a.worstCaseMinimumUnits().getAsInt(), a);
+            Policy pol = p.policy().orElseThrow();
+            int states = p.certification() instanceof Certification.Reserve r ? r.certificate().statesChecked()
+                    : ((Certification.Discounted) p.certification()).certificate().statesChecked();
+            if (p.detail() instanceof Plan.Detail.Discounted dd) {
+                DiscountedAnalysis a = dd.analysis();
+                Objective.Discounted o = a.objective();
+                PolicyFiles.write(policyFile, PolicyFiles.Header.of(m, o, a.maxAbsWeight(), a.reserveKept()), pol);
+                if (json) {
+                    ObjectNode j = summary(m, pol, states);
+                    j.put("lowestScore", ((Certification.Discounted) p.certification()).certificate().worstScore()
+                            .map(Object::toString).orElse(null));
+                    out.println(Json.withCaveats(j));
+                } else {
+                    String worst = a.worstCaseScore().map(DiscountedCheck::show).orElse("not shown");
+                    out.println("Wrote the policy for " + m.name() + " to " + policyFile + ": " + pol.size()
+                            + " rows with the score memory; worst score " + worst + " against "
+                            + DiscountedCheck.condition(o) + ".");
+                    certifiedLines(m, states, out);
+                }
+                return ExitCodes.OK;
+            }
+            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
+            int lowest = p.lowestLevelUnits().getAsInt();
             if (json) {
-                ObjectNode o = summary(m, p, cert.statesChecked());
-                o.put("worstCaseMinimumUnits", a.worstCaseMinimumUnits().getAsInt());
+                ObjectNode o = summary(m, pol, states);
+                o.put("lowestLevelUnits", lowest);
+                o.put("policyChoice", p.policyChoice() == PolicyChoice.SAFEST ? "safest" : "fewest-moves");
                 out.println(Json.withCaveats(o));
             } else {
-                out.println("Wrote the policy for " + m.name() + " to " + policyFile + ": " + p.size()
-                        + " rows; battery never below " + worst + ".");
-                out.println("  certified: true (the policy re-checked independently over " + cert.statesChecked()
-                        + " situations)");
-                out.println("  Energy: " + a.scale().describe());
-                out.println(Caveats.block());
+                out.println("Wrote the policy for " + m.name() + " to " + policyFile + ": " + pol.size()
+                        + " rows; battery never below " + CheckReport.amount(lowest, m) + " ("
+                        + (p.policyChoice() == PolicyChoice.SAFEST ? "the safest policy" : "the policy of fewest moves")
+                        + ").");
+                certifiedLines(m, states, out);
             }
             return ExitCodes.OK;
         } catch (MissionOptions.BadInput e) {
@@ -113,50 +138,19 @@ public final class ExportCommand implements Callable<Integer> {
         }
     }
 
-    private int exportDiscounted(Mission m, Objective.Discounted o, PrintWriter out, PrintWriter err)
-            throws IOException {
-        if (safest.on) {
-            err.println("dockline: --safest-policy applies to the reserve objective only");
-            return ExitCodes.BAD_INPUT;
-        }
-        DiscountedAnalysis a = DiscountedSolver.analyse(m, o,
-                DiscountedOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
-        if (!a.guaranteed()) {
-            notGuaranteed(m, "there is no policy meeting " + DiscountedCheck.condition(o) + " to export", out);
-            return ExitCodes.NOT_GUARANTEED;
-        }
-        Policy p = DiscountedPolicies.of(a);
-        DiscountedCertificate cert = DiscountedCheck.certify(a, p);
-        String problem = DiscountedCheck.certificateProblem(a, cert);
-        if (problem != null) {
-            return uncertified(problem, err);
-        }
-        PolicyFiles.write(policyFile, PolicyFiles.Header.of(m, o, a.maxAbsWeight(), a.reserveKept()), p);
-        String worst = a.worstCaseScore().map(DiscountedCheck::show).orElse("not shown");
-        if (json) {
-            ObjectNode j = summary(m, p, cert.statesChecked());
-            j.put("worstCaseScore", cert.worstScore().map(Object::toString).orElse(null));
-            out.println(Json.withCaveats(j));
-        } else {
-            out.println("Wrote the policy for " + m.name() + " to " + policyFile + ": " + p.size() + " rows with the"
-                    + " score memory; worst score " + worst + " against " + DiscountedCheck.condition(o) + ".");
-            out.println("  certified: true (the policy re-checked independently over " + cert.statesChecked()
-                    + " situations)");
-            out.println("  Energy: " + m.scale().describe());
-            out.println(Caveats.block());
-        }
-        return ExitCodes.OK;
+    private static void certifiedLines(Mission m, int states, PrintWriter out) {
+        out.println("  certified: true (the policy re-checked independently over " + states + " situations)");
+        out.println("  Energy: " + m.scale().describe());
+        out.println(Caveats.block());
     }
 
     private void notGuaranteed(Mission m, String why, PrintWriter out) {
         if (json) {
-            ObjectNode o = Json.object();
-            o.put("mission", m.name());
-            o.put("file", m.source() == null ? null : m.source().toString());
-            o.put("verdict", Verdict.NOT_GUARANTEED.word());
+            ObjectNode o = Json.header(m, Verdict.NOT_GUARANTEED);
             o.put("written", false);
             o.putNull("policyFile");
-            o.put("discretisation", m.scale().describe());
+            o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
+            o.put("rounding", m.scale().describe());
             out.println(Json.withCaveats(o));
         } else {
             out.println("NOT GUARANTEED: " + m.name() + " — " + why + "; nothing written.");
@@ -164,24 +158,15 @@ public final class ExportCommand implements Callable<Integer> {
         }
     }
 
-    private static int uncertified(String problem, PrintWriter err) {
-        err.println("dockline: internal error: the solver says guaranteed, but " + problem);
-        err.println("No policy is written. Please report this with the input files.");
-        return ExitCodes.INTERNAL;
-    }
-
     private ObjectNode summary(Mission m, Policy p, int certifiedStates) {
-        ObjectNode o = Json.object();
-        o.put("mission", m.name());
-        o.put("file", m.source() == null ? null : m.source().toString());
-        o.put("verdict", Verdict.GUARANTEED.word());
+        ObjectNode o = Json.header(m, Verdict.GUARANTEED);
         o.put("written", true);
         o.put("policyFile", policyFile.toString());
         o.put("policyRows", p.size());
         o.put("certified", true);
         o.put("certifiedStates", certifiedStates);
         o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
-        o.put("discretisation", m.scale().describe());
+        o.put("rounding", m.scale().describe());
         return o;
     }
 }

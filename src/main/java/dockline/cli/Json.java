@@ -42,17 +42,34 @@ final class Json {
     /**
      * Puts the size and timing of a solved product game, the same keys in the same order for every
      * objective: {@code productVertices}, {@code productEdges}, {@code estimatedVertices},
-     * {@code estimatedEdges}, {@code buildMillis}, {@code solveMillis}, {@code totalMillis}.
+     * {@code estimatedEdges}, {@code buildMillis}, {@code solveMillis} (the plan adds {@code totalMillis}).
      */
     static void putGameSize(ObjectNode o, long vertices, long edges, dockline.solve.SizeEstimate estimate,
-                            long buildMillis, long solveMillis, long totalMillis) {
+                            long buildMillis, long solveMillis) {
         o.put("productVertices", vertices);
         o.put("productEdges", edges);
         o.put("estimatedVertices", estimate.vertices());
         o.put("estimatedEdges", estimate.edges());
         o.put("buildMillis", buildMillis);
         o.put("solveMillis", solveMillis);
-        o.put("totalMillis", totalMillis);
+    }
+
+    /** The keys every command's object starts with: {@code mission}, {@code file}, {@code verdict}. */
+    static ObjectNode header(dockline.model.Mission m, dockline.solve.Verdict verdict) {
+        ObjectNode o = object();
+        o.put("mission", m.name());
+        o.put("file", m.source() == null ? null : m.source().toString());
+        o.put("verdict", verdict.word());
+        return o;
+    }
+
+    /** Puts the value, or null when empty. */
+    static void putOptional(ObjectNode o, String key, java.util.OptionalInt v) {
+        if (v.isPresent()) {
+            o.put(key, v.getAsInt());
+        } else {
+            o.putNull(key);
+        }
     }
 
     /** The object as text (no final line break), after adding the {@code caveats} array. */

@@ -3,13 +3,15 @@ package dockline.cli;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.io.AtomicFiles;
 import dockline.margin.MarginReport;
-import dockline.margin.Margins;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.Route;
 import dockline.margin.Suggestion;
 import dockline.model.EnergyScale;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.report.Caveats;
-import dockline.solve.ProductOptions;
 import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -24,7 +26,8 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Mixin;
 
 /**
- * {@code dockline margin MISSION}: the highest reserve floor that can be guaranteed from the
+ * {@code dockline margin MISSION}: asks the core for the margins ({@link Route.Margins}) and prints
+ * them: the highest reserve floor that can be guaranteed from the
  * mission's starting charge and the lowest starting charge that guarantees its floor, each computed
  * by bisection over the threshold solver and by the minimum-credit fixpoint, with both timings. The
  * two must agree; if they do not, that is an internal error (exit 4).
@@ -71,7 +74,9 @@ public final class MarginCommand implements Callable<Integer> {
         }
         MarginReport r;
         try {
-            r = Margins.compute(m, ProductOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes()));
+            Plan plan = MissionPlanner.plan(m, PlanOptions.of(new Route.Margins())
+                    .withMemoryBudget(mission.memoryBudgetBytes()));
+            r = ((Plan.Detail.Margins) plan.detail()).report();
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }
@@ -175,22 +180,20 @@ public final class MarginCommand implements Callable<Integer> {
 
     static String json(Mission m, MarginReport r) {
         EnergyScale s = m.scale();
-        ObjectNode root = Json.object();
-        root.put("mission", m.name());
-        root.put("file", m.source() == null ? null : m.source().toString());
-        root.put("verdict", Verdict.of(r.guaranteed()).word());
+        ObjectNode root = Json.header(m, Verdict.of(r.guaranteed()));
         root.put("guaranteed", r.guaranteed());
         root.put("startUnits", r.startUnits());
         root.put("reserveUnits", r.floorUnits());
         root.put("capacityUnits", r.capacityUnits());
-        root.put("energyUnitWh", s.unitWh().stripTrailingZeros());
+        root.put("unitWh", s.unitWh().stripTrailingZeros());
+        root.put("budget", m.map().disturbances().budget());
         units(root, "highestReserve", r.highestReserveUnits(), s);
         units(root, "lowestStart", r.lowestStartUnits(), s);
         root.put("agree", r.agree());
         method(root.putObject("bisection"), r.bisection(), s);
         method(root.putObject("fixpoint"), r.fixpoint(), s);
         Json.putSuggestions(root, r.suggestions());
-        root.put("discretisation", s.describe());
+        root.put("rounding", s.describe());
         return Json.withCaveats(root) + "\n";
     }
 

@@ -1,5 +1,6 @@
 package dockline.cli;
 
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.io.InputException;
 import dockline.io.MissionLoader;
 import dockline.io.Problem;
@@ -18,15 +19,17 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine;
 
 /**
  * {@code dockline render MISSION --out PICTURE.png}: solves the mission and draws the map (plain,
  * heat map or policy), the worst-case or counterexample path, the battery chart and the safety
- * line into a PNG, with no display (headless toolkit). The file is written atomically.
+ * line into a PNG, with no display (headless toolkit). The file is written atomically. The solving is
+ * the core's ({@link dockline.plan.MissionPlanner}, through the view's {@link SolverAnalyzer}); with
+ * {@code --json} the result is one JSON object (src/main/resources/dockline/schemas/render.schema.json).
  */
 @Command(name = "render", mixinStandardHelpOptions = true,
         description = {"Solves a mission and draws it as a PNG picture, with no display needed.",
@@ -63,6 +66,9 @@ public final class RenderCommand implements Callable<Integer> {
     @Option(names = "--start-charge", paramLabel = "CHARGE",
             description = "starting charge instead of the mission's, e.g. 80%% or '30 Wh'")
     String start;
+
+    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
+    boolean json;
 
     @Override
     public Integer call() {
@@ -127,9 +133,28 @@ public final class RenderCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         VerdictSummary v = data.verdict();
-        outw.println("wrote " + out + " (" + options.width() + "x" + options.height() + ", " + overlay.word() + ")");
-        outw.println(v.headline());
-        outw.println(Caveats.block());
+        if (json) {
+            ObjectNode o = Json.object();
+            o.put("mission", m.name());
+            o.put("file", m.source() == null ? null : m.source().toString());
+            o.put("verdict", switch (v.outcome()) {
+                case GUARANTEED -> dockline.solve.Verdict.GUARANTEED.word();
+                case NOT_GUARANTEED -> dockline.solve.Verdict.NOT_GUARANTEED.word();
+                case NOT_CHECKED -> "not-certified";
+            });
+            o.put("picture", out.toString());
+            o.put("width", options.width());
+            o.put("height", options.height());
+            o.put("layer", overlay.name().toLowerCase(java.util.Locale.ROOT));
+            o.put("headline", v.headline());
+            Json.putOptional(o, "lowestLevelUnits", v.worstCaseMinimumUnits());
+            Json.putOptional(o, "highestReserveUnits", v.highestReserveUnits());
+            outw.println(Json.withCaveats(o));
+        } else {
+            outw.println("wrote " + out + " (" + options.width() + "x" + options.height() + ", " + overlay.word() + ")");
+            outw.println(v.headline());
+            outw.println(Caveats.block());
+        }
         outw.flush();
         return switch (v.outcome()) {
             case GUARANTEED -> ExitCodes.OK;

@@ -7,21 +7,24 @@ import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.replay.ForcedEvent;
 import dockline.replay.ForcedEventException;
-import dockline.replay.MissionReplays;
 import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.report.Caveats;
-import dockline.solve.Verdict;
-import dockline.solve.reserve.ReserveOptions;
+import dockline.plan.Certification;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PlanReplays;
+import dockline.plan.Route;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Mixin;
 
 /**
  * {@code dockline replay MISSION}: one run of the robot's policy, step by step. For a guaranteed
@@ -48,7 +51,7 @@ public final class ReplayCommand implements Callable<Integer> {
     MissionOptions mission;
 
     @Mixin
-    SafestPolicyOption safest;
+    PolicyOption policy;
 
     @Option(names = "--disturbance", paramLabel = "nominal|worst",
             description = "nominal: no events; worst (default): the events that drive the battery lowest,"
@@ -56,7 +59,9 @@ public final class ReplayCommand implements Callable<Integer> {
     Disturbance disturbance;
 
     @Option(names = "--force", paramLabel = "STEP:EVENT,...",
-            description = "force events at steps, nominal elsewhere, e.g. 14:door-shut,20:slip@3:4"
+            description = "force events at steps, nominal elsewhere, e.g. 14:door-shut,20:slip@3:4; or at a named"
+                    + " door or zone the first time the robot tries to enter it, e.g. door-shut@west-fire-door"
+                    + " (a lasting rule closes it for the rest of the mission)"
                     + " (events: door-shut, blockage, slip, drag; a slip may name its cell)")
     String force;
 
@@ -107,19 +112,19 @@ public final class ReplayCommand implements Callable<Integer> {
             err.println("dockline: --csv and --json-file name the same file " + csv + "; give two names");
             return ExitCodes.BAD_INPUT;
         }
-        MissionReplays mr;
+        Plan plan;
         try {
-            mr = MissionReplays.of(m, ReserveOptions.defaults().withMemoryBudget(mission.memoryBudgetBytes())
-                    .withSafestPolicy(safest.on));
+            plan = MissionPlanner.plan(m, PlanOptions.of(new Route.Product(policy.choice(), false, false, true, false))
+                    .withMemoryBudget(mission.memoryBudgetBytes()));
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }
-        if (mr.guaranteed() && !mr.certified()) {
-            err.println("dockline: internal error: the solver says guaranteed but its policy failed the independent"
-                    + " certificate: " + mr.certificate().map(Certificate::reason).orElse("?"));
+        if (plan.certification().problem().isPresent()) {
+            err.println("dockline: internal error: " + plan.certification().problem().get());
             err.println("No replay is shown; please report this with the input files.");
             return ExitCodes.INTERNAL;
         }
+        PlanReplays mr = plan.replays().orElseThrow();
         Replay replay;
         String what;
         try {
@@ -131,7 +136,7 @@ public final class ReplayCommand implements Callable<Integer> {
                 what = "nominal (no events)";
             } else {
                 replay = mr.worstCase();
-                what = mr.guaranteed() ? "worst case (the events that drive the battery lowest)"
+                what = plan.guaranteed() ? "worst case (the events that drive the battery lowest)"
                         : "counterexample (the disturbance's winning strategy)";
             }
         } catch (ForcedEventException e) {
@@ -139,9 +144,9 @@ public final class ReplayCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         } catch (IllegalStateException e) {
             err.println("dockline: " + e.getMessage());
-            return mr.guaranteed() ? ExitCodes.INTERNAL : ExitCodes.NOT_GUARANTEED;
+            return plan.guaranteed() ? ExitCodes.INTERNAL : ExitCodes.NOT_GUARANTEED;
         }
-        String jsonText = json || jsonFile != null ? json(m, mr, replay) : null;
+        String jsonText = json || jsonFile != null ? json(m, plan, replay) : null;
         Path writing = null;
         try {
             if (csv != null) {
@@ -159,27 +164,27 @@ public final class ReplayCommand implements Callable<Integer> {
         if (json) {
             out.println(jsonText);
         } else {
-            print(out, m, mr, replay, what);
+            print(out, m, plan, mr, replay, what);
         }
-        return mr.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+        return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
     /** The replay's JSON with the verdict, the certificate and the caveats. */
-    private static String json(Mission m, MissionReplays mr, Replay replay) {
-        ObjectNode o = Json.object();
-        o.put("mission", m.name());
-        o.put("file", m.source() == null ? null : m.source().toString());
-        o.put("verdict", Verdict.of(mr.guaranteed()).word());
-        o.put("certified", mr.certified());
+    private static String json(Mission m, Plan plan, Replay replay) {
+        ObjectNode o = Json.header(m, plan.verdict());
+        o.put("certified", plan.certification().ok());
         o.setAll(ReplayFormats.jsonTree(m, replay));
         return Json.withCaveats(o);
     }
 
-    private void print(PrintWriter out, Mission m, MissionReplays mr, Replay replay, String what) {
-        out.println(mission.title(m) + ": " + (mr.guaranteed() ? "guaranteed" : "NOT guaranteed"));
-        mr.certificate().ifPresent(c -> out.println("certified: " + c.ok() + " (" + c.statesChecked()
-                + " situations of the policy checked independently)"));
-        if (!mr.guaranteed()) {
+    private void print(PrintWriter out, Mission m, Plan plan, PlanReplays mr, Replay replay, String what) {
+        out.println(mission.title(m) + ": " + (plan.guaranteed() ? "guaranteed" : "NOT guaranteed"));
+        if (plan.certification() instanceof Certification.Reserve r) {
+            Certificate c = r.certificate();
+            out.println("certified: " + c.ok() + " (" + c.statesChecked()
+                    + " situations of the policy checked independently)");
+        }
+        if (!plan.guaranteed()) {
             out.println(mr.bestEffortFloor() >= 0
                     ? "best effort: the policy for the highest reserve that can be guaranteed, " + mr.bestEffortFloor()
                             + " units (" + m.scale().formatWh(mr.bestEffortFloor()) + ")"

@@ -1,14 +1,18 @@
 package dockline.cli;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.view.FileMissionSource;
 import dockline.view.MissionSource;
 import dockline.view.SolverAnalyzer;
 import dockline.view.ViewLauncher;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
@@ -31,6 +35,10 @@ public final class ViewCommand implements Callable<Integer> {
     @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "a mission or map file to open (YAML)")
     Path file;
 
+    @Option(names = "--json", description = "print the messages (the problems that stopped it, or none once the"
+            + " window is closed) as one JSON object on standard output instead of text")
+    boolean json;
+
     @Override
     public Integer call() throws InterruptedException {
         PrintWriter err = spec.commandLine().getErr();
@@ -39,18 +47,32 @@ public final class ViewCommand implements Callable<Integer> {
             try {
                 source.open(file);
             } catch (MissionSource.OpenException e) {
-                for (String line : e.messages()) {
-                    err.println(line);
-                }
-                return ExitCodes.BAD_INPUT;
+                return finish(false, e.messages(), err);
             }
         }
         try {
             ViewLauncher.show(file, new SolverAnalyzer(), source);
         } catch (ViewLauncher.NoDisplayException e) {
-            err.println("dockline view: " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return finish(false, List.of("dockline view: " + e.getMessage()), err);
         }
-        return ExitCodes.OK;
+        return finish(true, List.of(), err);
+    }
+
+    /** Prints the messages (as text on stderr, or one JSON object on stdout) and returns the exit code. */
+    private int finish(boolean ok, List<String> messages, PrintWriter err) {
+        if (json) {
+            PrintWriter out = spec.commandLine().getOut();
+            ObjectNode o = Json.object();
+            o.put("ok", ok);
+            o.put("file", file == null ? null : file.toString());
+            ArrayNode a = o.putArray("messages");
+            messages.forEach(a::add);
+            out.println(Json.withCaveats(o));
+            out.flush();
+        } else {
+            messages.forEach(err::println);
+            err.flush();
+        }
+        return ok ? ExitCodes.OK : ExitCodes.BAD_INPUT;
     }
 }

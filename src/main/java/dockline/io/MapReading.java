@@ -4,6 +4,7 @@ import dockline.arena.ArenaCompiler;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.DisturbanceModel;
+import dockline.model.EventDuration;
 import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Terrain;
@@ -552,8 +553,9 @@ final class MapReading {
         List<EventRule> rules = new ArrayList<>();
         Node events = m.get("events");
         if (events instanceof Node.SeqNode s) {
+            int entry = 0;
             for (Node ev : s.items()) {
-                ok &= event(ev, rules);
+                ok &= event(ev, rules, entry++, budget);
             }
         } else if (events != null && !(events instanceof Node.Bad)
                 && !(events instanceof Node.Scalar sc && sc.kind() == Node.Kind.NULL)) {
@@ -564,12 +566,12 @@ final class MapReading {
         return ok ? new DisturbanceModel(budget, rules) : null;
     }
 
-    private boolean event(Node n, List<EventRule> rules) {
+    private boolean event(Node n, List<EventRule> rules, int entry, int budget) {
         Node.MapNode m = in.map(n, "an event");
         if (m == null) {
             return false;
         }
-        in.onlyKeys(m, "an event", "kind", "where", "extra");
+        in.onlyKeys(m, "an event", "kind", "where", "extra", "duration", "at-most");
         Node kn = in.require(m, "kind", "an event");
         Node wn = in.require(m, "where", "an event");
         EventKind kind = null;
@@ -604,8 +606,23 @@ final class MapReading {
             problems.add(xn.pos(), "'extra' applies only to kind: drag", "remove it");
             return false;
         }
+        EventDuration duration = duration(m.get("duration"), kind);
+        boolean limitOk = true;
+        int atMost = -1;
+        Node an = m.get("at-most");
+        if (an != null) {
+            Integer a = in.integer(an, "at-most (events of this entry per mission)", -MapLoader.MAX_BUDGET * 1000L,
+                    MapLoader.MAX_BUDGET * 1000L);
+            if (a != null && (a < 0 || a > budget)) {
+                problems.add(an.pos(), "at-most must be between 0 and the budget (" + budget + "), not " + a,
+                        "a whole number from 0 to " + budget + ", or leave at-most out (then only the budget limits this event)");
+                a = null;
+            }
+            limitOk = a != null;
+            atMost = a == null ? -1 : a;
+        }
         List<String> where = wn == null ? null : in.names(wn, "where");
-        if (kind == null || where == null) {
+        if (kind == null || where == null || duration == null || !limitOk) {
             return false;
         }
         if (where.isEmpty()) {
@@ -613,10 +630,43 @@ final class MapReading {
             return false;
         }
         boolean ok = true;
+        int first = rules.size();
         for (String w : where) {
             ok &= place(kind, w, wn.pos(), extra, rules);
         }
+        for (int i = first; i < rules.size(); i++) {
+            rules.set(i, rules.get(i).withDuration(duration).withAtMost(atMost, entry));
+        }
         return ok;
+    }
+
+    /**
+     * The duration of an event entry: {@code rest-of-mission} (the default) or {@code momentary} for
+     * door-shut and blockage; slip and drag take no {@code duration}. {@code null} after a problem.
+     */
+    private EventDuration duration(Node dn, EventKind kind) {
+        boolean closes = kind == EventKind.DOOR_SHUT || kind == EventKind.BLOCKAGE;
+        List<String> words = Arrays.stream(EventDuration.values()).map(EventDuration::word).toList();
+        if (dn == null) {
+            return closes || kind == null ? EventDuration.REST_OF_MISSION : EventDuration.MOMENTARY;
+        }
+        if (kind != null && !closes) {
+            problems.add(dn.pos(), "'duration' applies only to kind: door-shut and kind: blockage; a "
+                    + kind.word() + " is momentary by nature", "remove it");
+            return null;
+        }
+        String d = in.string(dn, "duration");
+        if (d == null) {
+            return null;
+        }
+        EventDuration out = EventDuration.ofWord(d);
+        if (out == null) {
+            String near = Spelling.closest(d, words);
+            problems.add(dn.pos(), "unknown duration '" + Loading.shorten(d) + "'"
+                    + (near != null ? ", did you mean '" + near + "'?" : ""), "durations: " + String.join(", ", words));
+            return null;
+        }
+        return closes || kind == null ? out : EventDuration.MOMENTARY;
     }
 
     private boolean place(EventKind kind, String w, Pos pos, BigDecimal extra, List<EventRule> rules) {

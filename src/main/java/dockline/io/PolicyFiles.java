@@ -42,9 +42,10 @@ import java.util.regex.Pattern;
  * the file name's extension; both are documented in missions/POLICY-FORMAT.md. One row per
  * situation the robot can meet while following the policy: cell, battery level (units), budget
  * left, task progress (bit mask over the mission's visit list), for a discounted mission the score
- * memory ({@link PolicyScore}), and the action. Reserve policies are written as format version 1,
- * exactly as before the score memory existed; policies with a score memory as version 2 (with the
- * objective in the header and a {@code score} per row). Both versions are read.
+ * memory ({@link PolicyScore}), and the action. Policies are written as format version 3, whose keys
+ * are those of the output vocabulary (DEVELOPERS.md); a policy with a score memory has the objective
+ * in the header and a {@code score} per row. Versions 1 (reserve) and 2 (score memory), with their
+ * earlier key names, are still read: their keys are renamed on the way in.
  *
  * <p>Writing is atomic ({@link AtomicFiles}). Reading checks the format (not whether the policy is
  * any good: that is the certificate checker's job) and reports every problem at once as
@@ -54,10 +55,28 @@ public final class PolicyFiles {
 
     /** The value of the {@code format} key (JSON) / the first comment line (CSV). */
     public static final String FORMAT = "dockline-policy";
-    /** The format version of reserve policies (no score memory). */
-    public static final int VERSION = 1;
-    /** The format version of policies with a score memory (discounted missions). */
+    /**
+     * The format version written: the keys of the output vocabulary (DEVELOPERS.md), with or without a
+     * score memory.
+     */
+    public static final int VERSION = 3;
+    /** The first format version, reserve policies, with the earlier key names (still read). */
+    public static final int VERSION_1 = 1;
+    /** The second format version, policies with a score memory, with the earlier key names (still read). */
     public static final int VERSION_WITH_SCORE = 2;
+
+    /**
+     * The key names of versions 1 and 2 and their names since version 3; files of the earlier
+     * versions are read by renaming their keys on the way in.
+     */
+    private static final Map<String, String> OLD_KEYS = Map.of("unit-wh", "unitWh", "floor-units", "reserveUnits",
+            "capacity-units", "capacityUnits", "weight-bound", "weightBoundUnits", "reserve-kept", "reserveKept",
+            "level", "levelUnits", "budget-left", "budgetLeft");
+
+    /** The name of a key since version 3 (keys of versions 1 and 2 renamed, others unchanged). */
+    private static String canonical(String key) {
+        return OLD_KEYS.getOrDefault(key, key);
+    }
 
     /**
      * The discounted objective a policy with a score memory was computed for: what a robot needs to
@@ -114,7 +133,7 @@ public final class PolicyFiles {
         }
 
         int version() {
-            return score.isPresent() ? VERSION_WITH_SCORE : VERSION;
+            return VERSION;
         }
     }
 
@@ -123,15 +142,25 @@ public final class PolicyFiles {
     }
 
     private static final List<String> SCORE_KEYS = List.of("objective", "discount", "threshold", "relation",
-            "weight-bound", "reserve-kept");
-    private static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unit-wh", "floor-units",
-            "capacity-units", "budget", "tasks", "objective", "discount", "threshold", "relation", "weight-bound",
-            "reserve-kept", "rows");
-    private static final List<String> ROW_KEYS = List.of("cell", "level", "budget-left", "progress", "action", "to");
-    private static final List<String> SCORE_ROW_KEYS = List.of("cell", "level", "budget-left", "progress", "score",
+            "weightBoundUnits", "reserveKept");
+    private static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unitWh", "reserveUnits",
+            "capacityUnits", "budget", "tasks", "objective", "discount", "threshold", "relation", "weightBoundUnits",
+            "reserveKept", "rows");
+    private static final List<String> ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "action",
+            "to");
+    private static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
             "action", "to");
+    /** The situation's closures (lasting events and at-most counts); written only when some row has them. */
+    private static final String CLOSED = "closed";
+    private static final List<String> JSON_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
+            "action", "to", CLOSED);
     private static final String CSV_HEADER = String.join(",", ROW_KEYS);
     private static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
+    /** The header rows of versions 1 and 2. */
+    private static final String OLD_CSV_HEADER = "cell,level,budget-left,progress,action,to";
+    private static final String OLD_CSV_SCORE_HEADER = "cell,level,budget-left,progress,score,action,to";
+    private static final String CSV_CLOSED_HEADER = CSV_HEADER + "," + CLOSED;
+    private static final String CSV_SCORE_CLOSED_HEADER = CSV_SCORE_HEADER + "," + CLOSED;
     private static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
 
     private PolicyFiles() {
@@ -167,9 +196,9 @@ public final class PolicyFiles {
             g.writeStringField("format", FORMAT);
             g.writeNumberField("version", h.version());
             g.writeStringField("mission", h.mission());
-            g.writeStringField("unit-wh", h.unitWh().stripTrailingZeros().toPlainString());
-            g.writeNumberField("floor-units", h.floorUnits());
-            g.writeNumberField("capacity-units", h.capacityUnits());
+            g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
+            g.writeNumberField("reserveUnits", h.floorUnits());
+            g.writeNumberField("capacityUnits", h.capacityUnits());
             g.writeNumberField("budget", h.budget());
             g.writeArrayFieldStart("tasks");
             for (String t : h.tasks()) {
@@ -182,8 +211,8 @@ public final class PolicyFiles {
                 g.writeNumberField("discount", t.discount());
                 g.writeStringField("threshold", t.threshold().toString());
                 g.writeStringField("relation", t.relation().symbol());
-                g.writeNumberField("weight-bound", t.weightBound());
-                g.writeBooleanField("reserve-kept", t.reserveKept());
+                g.writeNumberField("weightBoundUnits", t.weightBound());
+                g.writeBooleanField("reserveKept", t.reserveKept());
             }
             g.writeArrayFieldStart("rows");
             for (PolicyEntry e : policy.entries()) {
@@ -201,8 +230,8 @@ public final class PolicyFiles {
         try (JsonGenerator g = f.createGenerator(sw)) {
             g.writeStartObject();
             g.writeStringField("cell", e.cell().toString());
-            g.writeNumberField("level", e.level());
-            g.writeNumberField("budget-left", e.budgetLeft());
+            g.writeNumberField("levelUnits", e.level());
+            g.writeNumberField("budgetLeft", e.budgetLeft());
             g.writeNumberField("progress", e.progress());
             if (e.scored()) {
                 g.writeStringField("score", e.score().text());
@@ -210,6 +239,9 @@ public final class PolicyFiles {
             g.writeStringField("action", e.action().kind().word());
             if (e.action().kind() == ActionKind.MOVE) {
                 g.writeStringField("to", e.action().target().toString());
+            }
+            if (!e.closures().isEmpty()) {
+                g.writeStringField(CLOSED, e.closures());
             }
             g.writeEndObject();
         }
@@ -230,9 +262,9 @@ public final class PolicyFiles {
         String nl = "\n";
         w.write("# " + FORMAT + " " + h.version() + nl);
         w.write("# mission: " + h.mission().replace('\n', ' ').replace('\r', ' ') + nl);
-        w.write("# unit-wh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
-        w.write("# floor-units: " + h.floorUnits() + nl);
-        w.write("# capacity-units: " + h.capacityUnits() + nl);
+        w.write("# unitWh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
+        w.write("# reserveUnits: " + h.floorUnits() + nl);
+        w.write("# capacityUnits: " + h.capacityUnits() + nl);
         w.write("# budget: " + h.budget() + nl);
         w.write("# tasks: " + String.join(" ", h.tasks()) + nl);
         if (h.score().isPresent()) {
@@ -241,11 +273,12 @@ public final class PolicyFiles {
             w.write("# discount: " + t.discount() + nl);
             w.write("# threshold: " + t.threshold() + nl);
             w.write("# relation: " + t.relation().symbol() + nl);
-            w.write("# weight-bound: " + t.weightBound() + nl);
-            w.write("# reserve-kept: " + t.reserveKept() + nl);
+            w.write("# weightBoundUnits: " + t.weightBound() + nl);
+            w.write("# reserveKept: " + t.reserveKept() + nl);
         }
         boolean scored = h.score().isPresent();
-        w.write((scored ? CSV_SCORE_HEADER : CSV_HEADER) + nl);
+        boolean closed = policy.entries().stream().anyMatch(e -> !e.closures().isEmpty());
+        w.write((scored ? closed ? CSV_SCORE_CLOSED_HEADER : CSV_SCORE_HEADER : closed ? CSV_CLOSED_HEADER : CSV_HEADER) + nl);
         StringBuilder sb = new StringBuilder();
         for (PolicyEntry e : policy.entries()) {
             sb.setLength(0);
@@ -257,6 +290,10 @@ public final class PolicyFiles {
             sb.append(e.action().kind().word()).append(',');
             if (e.action().kind() == ActionKind.MOVE) {
                 sb.append(e.action().target());
+            }
+            if (closed) {
+                // the last column: it may hold commas, the reader takes the rest of the line
+                sb.append(',').append(e.closures().replace('\n', ' ').replace('\r', ' '));
             }
             w.write(sb.append(nl).toString());
         }
@@ -298,10 +335,10 @@ public final class PolicyFiles {
 
         void add(Pos pos, PolicyEntry e) {
             String key = e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress()
-                    + (e.scored() ? "/" + e.score().text() : "");
+                    + (e.scored() ? "/" + e.score().text() : "") + "/" + e.closures();
             if (!seen.add(key)) {
                 problems.add(pos, "a second row for cell " + e.cell() + ", level " + e.level() + ", budget left "
-                        + e.budgetLeft() + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
+                        + e.budgetLeft() + (e.closures().isEmpty() ? "" : " (" + e.closures() + ")") + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
                         "keep one action per situation");
                 return;
             }
@@ -339,7 +376,7 @@ public final class PolicyFiles {
     /** Checks the fields of one row; reports problems at the given positions; null when bad. */
     private static PolicyEntry row(Problems p, Pos rowPos, Map<String, String> values, Map<String, Pos> at) {
         boolean ok = true;
-        for (String k : List.of("cell", "level", "budget-left", "progress", "action")) {
+        for (String k : List.of("cell", "levelUnits", "budgetLeft", "progress", "action")) {
             if (!values.containsKey(k)) {
                 p.add(rowPos, "row has no '" + k + "'");
                 ok = false;
@@ -353,8 +390,8 @@ public final class PolicyFiles {
             p.add(at.get("cell"), "'" + Loading.shorten(values.get("cell")) + "' is not a cell", "write x:y, e.g. 3:4");
             ok = false;
         }
-        int level = nonNegative(p, values, at, "level");
-        int budget = nonNegative(p, values, at, "budget-left");
+        int level = nonNegative(p, values, at, "levelUnits");
+        int budget = nonNegative(p, values, at, "budgetLeft");
         int progress = nonNegative(p, values, at, "progress");
         ok &= level >= 0 && budget >= 0 && progress >= 0;
         PolicyScore score = null;
@@ -389,12 +426,14 @@ public final class PolicyFiles {
             p.add(at.get("to"), "'" + kind.word() + "' stays on its cell and takes no 'to'", "leave 'to' out");
             return null;
         }
-        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score) : null;
+        String closures = values.getOrDefault(CLOSED, "").trim();
+        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score, closures) : null;
     }
 
     private static boolean knownVersion(String v) {
         String t = v.trim();
-        return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_WITH_SCORE));
+        return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_1))
+                || t.equals(String.valueOf(VERSION_WITH_SCORE));
     }
 
     private static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
@@ -408,7 +447,7 @@ public final class PolicyFiles {
 
     private static Header header(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at,
                                  List<String> tasks) {
-        for (String k : List.of("mission", "unit-wh", "floor-units", "capacity-units", "budget")) {
+        for (String k : List.of("mission", "unitWh", "reserveUnits", "capacityUnits", "budget")) {
             if (!values.containsKey(k)) {
                 p.add(pos, "no '" + k + "' in the policy file");
                 return null;
@@ -416,17 +455,17 @@ public final class PolicyFiles {
         }
         BigDecimal unit;
         try {
-            unit = Quantities.parseDecimal(values.get("unit-wh"));
+            unit = Quantities.parseDecimal(values.get("unitWh"));
             if (unit.signum() <= 0) {
-                p.add(at.get("unit-wh"), "'unit-wh' must be positive");
+                p.add(at.get("unitWh"), "'unitWh' must be positive");
                 return null;
             }
         } catch (IllegalArgumentException e) {
-            p.add(at.get("unit-wh"), e.getMessage());
+            p.add(at.get("unitWh"), e.getMessage());
             return null;
         }
-        int floor = nonNegative(p, values, at, "floor-units");
-        int cap = nonNegative(p, values, at, "capacity-units");
+        int floor = nonNegative(p, values, at, "reserveUnits");
+        int cap = nonNegative(p, values, at, "capacityUnits");
         int budget = nonNegative(p, values, at, "budget");
         if (floor < 0 || cap < 0 || budget < 0) {
             return null;
@@ -456,7 +495,7 @@ public final class PolicyFiles {
             p.add(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
             return null;
         }
-        for (String k : List.of("discount", "threshold", "weight-bound")) {
+        for (String k : List.of("discount", "threshold", "weightBoundUnits")) {
             if (!values.containsKey(k)) {
                 p.add(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
                 return null;
@@ -468,7 +507,7 @@ public final class PolicyFiles {
             p.add(at.get("discount"), "'discount' must be a whole number of at least 2");
             ok = false;
         }
-        int mu = nonNegative(p, values, at, "weight-bound");
+        int mu = nonNegative(p, values, at, "weightBoundUnits");
         ok &= d >= 0 && mu >= 0;
         Rational v = null;
         String t = values.get("threshold").trim();
@@ -496,10 +535,10 @@ public final class PolicyFiles {
             }
         }
         boolean kept = true;
-        if (values.containsKey("reserve-kept")) {
-            String k = values.get("reserve-kept").trim();
+        if (values.containsKey("reserveKept")) {
+            String k = values.get("reserveKept").trim();
             if (!k.equals("true") && !k.equals("false")) {
-                p.add(at.get("reserve-kept"), "'reserve-kept' must be true or false");
+                p.add(at.get("reserveKept"), "'reserveKept' must be true or false");
                 ok = false;
             }
             kept = k.equals("true");
@@ -535,7 +574,7 @@ public final class PolicyFiles {
                 boolean sawRows = false;
                 Pos top = pos(j.currentTokenLocation());
                 while (j.nextToken() == JsonToken.FIELD_NAME) {
-                    String key = j.currentName();
+                    String key = canonical(j.currentName());
                     Pos kp = pos(j.currentTokenLocation());
                     JsonToken t = j.nextToken();
                     Pos vp = pos(j.currentTokenLocation());
@@ -588,7 +627,8 @@ public final class PolicyFiles {
                 }
                 if (values.containsKey("version") && !knownVersion(values.get("version"))) {
                     p.add(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
-                            + " is not known (this dockline reads versions " + VERSION + " and " + VERSION_WITH_SCORE + ")");
+                            + " is not known (this dockline reads versions " + VERSION_1 + ", " + VERSION_WITH_SCORE
+                            + " and " + VERSION + ")");
                 }
                 if (!sawRows) {
                     p.add(top, "no 'rows' in the policy file");
@@ -619,12 +659,12 @@ public final class PolicyFiles {
             Map<String, Pos> at = new LinkedHashMap<>();
             boolean bad = false;
             while (j.nextToken() == JsonToken.FIELD_NAME) {
-                String key = j.currentName();
+                String key = canonical(j.currentName());
                 Pos kp = pos(j.currentTokenLocation());
                 JsonToken t = j.nextToken();
                 Pos vp = pos(j.currentTokenLocation());
-                if (!SCORE_ROW_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, SCORE_ROW_KEYS);
+                if (!JSON_ROW_KEYS.contains(key)) {
+                    String near = Spelling.closest(key, JSON_ROW_KEYS);
                     p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : null);
                     j.skipChildren();
                     bad = true;
@@ -677,9 +717,11 @@ public final class PolicyFiles {
                     String c = line.substring(1).trim();
                     if (!formatLine && !headerRow) {
                         formatLine = true;
-                        if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
+                        if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_1)
+                                && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
                             p.add(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
-                                    + VERSION + "' (or '# " + FORMAT + " " + VERSION_WITH_SCORE + "' with a score memory)");
+                                    + VERSION + "' (versions " + VERSION_1 + " and " + VERSION_WITH_SCORE
+                                    + " are read as well)");
                         }
                         continue;
                     }
@@ -687,12 +729,13 @@ public final class PolicyFiles {
                     if (colon < 0) {
                         continue; // a plain comment
                     }
-                    String key = c.substring(0, colon).trim();
+                    String written = c.substring(0, colon).trim();
+                    String key = canonical(written);
                     String value = c.substring(colon + 1).trim();
                     int col = line.indexOf(':') + 2;
                     if (!TOP_KEYS.contains(key)) {
                         String near = Spelling.closest(key, TOP_KEYS);
-                        p.add(new Pos(ln, line.indexOf(key) + 1), "unknown key '" + Loading.shorten(key) + "'",
+                        p.add(new Pos(ln, line.indexOf(written) + 1), "unknown key '" + Loading.shorten(key) + "'",
                                 near != null ? "did you mean '" + near + "'?" : null);
                         continue;
                     }
@@ -710,11 +753,14 @@ public final class PolicyFiles {
                 }
                 if (!headerRow) {
                     headerRow = true;
-                    if (line.trim().equals(CSV_SCORE_HEADER)) {
+                    String hr = line.trim();
+                    if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
                         columns = SCORE_ROW_KEYS;
-                    } else if (!line.trim().equals(CSV_HEADER)) {
+                    } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
+                        columns = List.of(hr.split(","));
+                    } else if (!hr.equals(CSV_HEADER) && !hr.equals(OLD_CSV_HEADER)) {
                         p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
-                                + "' for a discounted mission)");
+                                + "' for a discounted mission; either followed by '," + CLOSED + "' with lasting events)");
                         return null;
                     }
                     continue;
@@ -740,7 +786,11 @@ public final class PolicyFiles {
             Map<String, Pos> at = new LinkedHashMap<>();
             int field = 0;
             int start = 0;
+            boolean restIsClosed = columns.get(columns.size() - 1).equals(CLOSED);
             for (int i = 0; i <= line.length(); i++) {
+                if (restIsClosed && field == columns.size() - 1) {
+                    i = line.length(); // the closures column takes the rest of the line, commas and all
+                }
                 if (i == line.length() || line.charAt(i) == ',') {
                     if (field < columns.size()) {
                         String v = line.substring(start, i);

@@ -26,6 +26,14 @@ public final class Margins {
     }
 
     public static MarginReport compute(Mission mission, ProductOptions options) {
+        return compute(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), options);
+    }
+
+    /**
+     * As {@link #compute(Mission, ProductOptions)}, the fixpoint on an arena and goal already compiled
+     * from the mission (the bisection solves mission variants, each compiled on its own).
+     */
+    public static MarginReport compute(Mission mission, Arena arena, GoalAutomaton goal, ProductOptions options) {
         int floor = mission.reserveUnits();
         int start = mission.startUnits();
         int cap = mission.capacityUnits();
@@ -36,8 +44,6 @@ public final class Margins {
         int bHigh = b.highestFloor(start);
         int bLow = b.lowestStart(floor);
         long t1 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
         int fHigh = FixpointMargins.highestFloor(arena, goal, start);
         int fLow = floor > cap ? -1 : FixpointMargins.lowestStart(arena, goal, floor);
         long t2 = System.nanoTime();

@@ -345,7 +345,7 @@ public final class MinimumCredit {
             }
             Cell c = arena.cellOf(v);
             Action a = arena.action(d);
-            entries.add(new PolicyEntry(c, l, arena.budgetLeft(v), goal.progressMask(g), a));
+            entries.add(new PolicyEntry(c, l, arena.budgetLeft(v), goal.progressMask(g), a, null, arena.closures(v)));
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
                 int u = arena.target(e);
                 int g2 = goal.step(g, arena.cellZones(arena.cell(u)));

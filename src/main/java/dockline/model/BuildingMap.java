@@ -106,6 +106,11 @@ public record BuildingMap(String name, Path source, BigDecimal cellSizeMetres, L
     }
 
     /** The same map with another disturbance budget. */
+    /** The same map with another disturbance model. */
+    public BuildingMap withDisturbances(DisturbanceModel d) {
+        return new BuildingMap(name, source, cellSizeMetres, rows, legend, zones, doorNames, d);
+    }
+
     public BuildingMap withBudget(int k) {
         return new BuildingMap(name, source, cellSizeMetres, rows, legend, zones, doorNames, disturbances.withBudget(k));
     }

@@ -19,6 +19,26 @@ public record DisturbanceModel(int budget, List<EventRule> rules) {
         return new DisturbanceModel(0, List.of());
     }
 
+    /**
+     * The same model with every door-shut and blockage rule given duration {@code d} (slip and drag
+     * stay momentary): the momentary or the lasting reading of one map.
+     */
+    public DisturbanceModel withDoorsAndBlockages(EventDuration d) {
+        return new DisturbanceModel(budget, rules.stream()
+                .map(r -> r.kind() == EventKind.DOOR_SHUT || r.kind() == EventKind.BLOCKAGE ? r.withDuration(d) : r)
+                .toList());
+    }
+
+    /** Whether some rule closes a door or zone for the rest of the mission. */
+    public boolean anyLasting() {
+        return rules.stream().anyMatch(EventRule::lasting);
+    }
+
+    /** Whether some rule has an {@code at-most} limit of its own. */
+    public boolean anyLimited() {
+        return rules.stream().anyMatch(EventRule::limited);
+    }
+
     /** The same rules with another budget (a `--budget` override). */
     public DisturbanceModel withBudget(int k) {
         return new DisturbanceModel(k, rules);

@@ -47,6 +47,12 @@ public record Mission(String name, Path source, BuildingMap map, RobotProfile ro
         return new Mission(name, source, map.withBudget(k), robot, start, startCharge, reserve, tasks, objective);
     }
 
+    /** The same mission with every door-shut and blockage of its map given duration {@code d}. */
+    public Mission withDoorsAndBlockages(EventDuration d) {
+        return new Mission(name, source, map.withDisturbances(map.disturbances().withDoorsAndBlockages(d)), robot, start,
+                startCharge, reserve, tasks, objective);
+    }
+
     public Mission withObjective(Objective o) {
         return new Mission(name, source, map, robot, start, startCharge, reserve, tasks, o);
     }

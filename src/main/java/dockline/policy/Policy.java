@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * A robot policy: an action for every situation (cell, battery level, budget left, task progress,
+ * A robot policy: an action for every situation (cell, battery level, budget left, closures, task progress,
  * and for a discounted mission the score memory {@link PolicyScore}) the robot can reach while
  * following it. This is what is exported, certified and replayed; it depends on the model and
  * arena only, never on solver internals.
@@ -24,7 +24,7 @@ public final class Policy {
     private final Map<Key, Action> index;
     private final boolean scored;
 
-    private record Key(Cell cell, int level, int budgetLeft, int progress, PolicyScore score) {
+    private record Key(Cell cell, int level, int budgetLeft, int progress, PolicyScore score, String closures) {
     }
 
     /**
@@ -35,6 +35,7 @@ public final class Policy {
         List<PolicyEntry> sorted = new ArrayList<>(entries);
         sorted.sort(Comparator.comparingInt(PolicyEntry::progress).reversed()
                 .thenComparing(PolicyEntry::budgetLeft, Comparator.reverseOrder())
+                .thenComparing(PolicyEntry::closures)
                 .thenComparing(PolicyEntry::cell)
                 .thenComparing(PolicyEntry::level, Comparator.reverseOrder())
                 .thenComparing(PolicyEntry::score, Comparator.nullsFirst(Comparator.naturalOrder())));
@@ -47,9 +48,11 @@ public final class Policy {
         }
         this.scored = withScore > 0;
         for (PolicyEntry e : sorted) {
-            if (index.put(new Key(e.cell(), e.level(), e.budgetLeft(), e.progress(), e.score()), e.action()) != null) {
+            if (index.put(new Key(e.cell(), e.level(), e.budgetLeft(), e.progress(), e.score(), e.closures()),
+                    e.action()) != null) {
                 throw new IllegalArgumentException("two policy entries for " + e.cell() + " level " + e.level()
-                        + " budget " + e.budgetLeft() + " progress " + e.progress()
+                        + " budget " + e.budgetLeft() + (e.closures().isEmpty() ? "" : " (" + e.closures() + ")")
+                        + " progress " + e.progress()
                         + (e.scored() ? " score " + e.score() : ""));
             }
         }
@@ -76,6 +79,15 @@ public final class Policy {
 
     /** The action of a row with the given score memory ({@code null}: a reserve policy's row). */
     public Optional<Action> lookup(Cell cell, int level, int budgetLeft, int progress, PolicyScore score) {
-        return Optional.ofNullable(index.get(new Key(cell, level, budgetLeft, progress, score)));
+        return lookup(cell, level, budgetLeft, progress, score, "");
+    }
+
+    /**
+     * The action of a row with the given score memory and closures ({@link PolicyEntry#closures};
+     * {@code ""}: nothing closed).
+     */
+    public Optional<Action> lookup(Cell cell, int level, int budgetLeft, int progress, PolicyScore score,
+                                   String closures) {
+        return Optional.ofNullable(index.get(new Key(cell, level, budgetLeft, progress, score, closures)));
     }
 }

@@ -13,12 +13,28 @@ import dockline.model.Cell;
  * @param action     what to do
  * @param score      for a discounted mission: the robot's score memory ({@link PolicyScore}, the scaled
  *                   gap to the threshold); {@code null} in a reserve policy
+ * @param closures   what the robot has observed of lasting events and at-most entries: the doors and
+ *                   zones closed so far and the events used per at-most entry
+ *                   ({@link dockline.arena.DisturbanceStates#key}); {@code ""} when nothing is closed
+ *                   and the map has no at-most entry
  */
-public record PolicyEntry(Cell cell, int level, int budgetLeft, int progress, Action action, PolicyScore score) {
+public record PolicyEntry(Cell cell, int level, int budgetLeft, int progress, Action action, PolicyScore score,
+                          String closures) {
 
-    /** A row of a reserve policy (no score memory). */
+    public PolicyEntry {
+        if (closures == null) {
+            closures = "";
+        }
+    }
+
+    /** A row without closures. */
+    public PolicyEntry(Cell cell, int level, int budgetLeft, int progress, Action action, PolicyScore score) {
+        this(cell, level, budgetLeft, progress, action, score, "");
+    }
+
+    /** A row of a reserve policy (no score memory, no closures). */
     public PolicyEntry(Cell cell, int level, int budgetLeft, int progress, Action action) {
-        this(cell, level, budgetLeft, progress, action, null);
+        this(cell, level, budgetLeft, progress, action, null, "");
     }
 
     /** Whether the row carries a score memory (a discounted policy). */
@@ -28,6 +44,11 @@ public record PolicyEntry(Cell cell, int level, int budgetLeft, int progress, Ac
 
     /** The same situation with another action. */
     public PolicyEntry withAction(Action a) {
-        return new PolicyEntry(cell, level, budgetLeft, progress, a, score);
+        return new PolicyEntry(cell, level, budgetLeft, progress, a, score, closures);
+    }
+
+    /** The same row with closures. */
+    public PolicyEntry withClosures(String c) {
+        return new PolicyEntry(cell, level, budgetLeft, progress, action, score, c);
     }
 }

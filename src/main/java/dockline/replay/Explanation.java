@@ -115,12 +115,14 @@ final class Explanation {
         String paid = cost > 0 ? "; the step cost " + units(cost) : "";
         String from = place(before.cell());
         String target = s.action().filter(a -> a.kind() == ActionKind.MOVE).map(a -> a.target().toString()).orElse("");
+        String stays = e.lasting() ? "; " + e.closed() + " stays closed for the rest of the mission, the robot stays"
+                + " and must find another way" : "; it stays";
         return switch (e.kind()) {
             case DOOR_SHUT -> (e.doorName().startsWith("door ") ? e.doorName() : "door " + e.doorName()) + " at "
                     + e.cell() + " shut " + rule + " as the robot tried to go through it from " + from
-                    + "; it stays" + paid;
+                    + stays + paid;
             case BLOCKAGE -> place(e.cell()) + " blocked " + rule + " as the robot tried to enter it from " + from
-                    + "; it stays" + paid;
+                    + stays + paid;
             case SLIP -> "the wheels slipped " + rule + ": on the way from " + from + " to " + target
                     + " the robot ended at " + place(e.cell()) + paid;
             case DRAG -> "drag entering " + place(e.cell()) + " " + rule + ", coming from " + before.cell() + paid;

@@ -7,16 +7,29 @@ import java.util.List;
 import java.util.TreeMap;
 
 /**
- * An event the user forces at a step of a replay, e.g. {@code 14:door-shut} or {@code 20:slip@3:4}.
+ * An event the user forces in a replay: at a step, e.g. {@code 14:door-shut} or {@code 20:slip@3:4}, or
+ * at a named door or zone, e.g. {@code door-shut@west-fire-door} or {@code blockage@east-hall} (the first
+ * time the policy's move tries to enter it). A lasting rule closes the door or zone for good.
  *
- * @param step  the step (1 = the robot's first action)
+ * @param step  the step (1 = the robot's first action); 0 for an event at a named place
  * @param kind  the event
  * @param cell  for a slip, the cell to slip to ({@code null}: the only possible one)
+ * @param place for an event at a named place: the door or zone name; {@code null} otherwise
  */
-public record ForcedEvent(int step, EventKind kind, Cell cell) {
+public record ForcedEvent(int step, EventKind kind, Cell cell, String place) {
 
-    private static final String HINT = "write STEP:EVENT or STEP:slip@X:Y, e.g. 14:door-shut or 20:slip@3:4; events: "
-            + "door-shut, blockage, slip, drag";
+    private static final String HINT = "write STEP:EVENT, STEP:slip@X:Y or door-shut@DOOR / blockage@ZONE, e.g. "
+            + "14:door-shut, 20:slip@3:4 or door-shut@west-fire-door; events: door-shut, blockage, slip, drag";
+
+    /** An event at a step. */
+    public ForcedEvent(int step, EventKind kind, Cell cell) {
+        this(step, kind, cell, null);
+    }
+
+    /** Whether the event is put at a named door or zone rather than at a step. */
+    public boolean atPlace() {
+        return place != null;
+    }
 
     /**
      * Parses a comma-separated list {@code STEP:EVENT[@X:Y],...}.
@@ -26,6 +39,7 @@ public record ForcedEvent(int step, EventKind kind, Cell cell) {
      */
     public static List<ForcedEvent> parseList(String text) {
         TreeMap<Integer, ForcedEvent> byStep = new TreeMap<>();
+        List<ForcedEvent> placed = new ArrayList<>();
         List<String> problems = new ArrayList<>();
         for (String part : text.split(",")) {
             String p = part.trim();
@@ -34,6 +48,10 @@ public record ForcedEvent(int step, EventKind kind, Cell cell) {
             }
             try {
                 ForcedEvent f = parse(p);
+                if (f.atPlace()) {
+                    placed.add(f);
+                    continue;
+                }
                 if (byStep.put(f.step(), f) != null) {
                     problems.add("step " + f.step() + " is named twice");
                 }
@@ -44,16 +62,32 @@ public record ForcedEvent(int step, EventKind kind, Cell cell) {
         if (!problems.isEmpty()) {
             throw new IllegalArgumentException(String.join("; ", problems));
         }
-        if (byStep.isEmpty()) {
+        if (byStep.isEmpty() && placed.isEmpty()) {
             // an empty list would quietly replay something else (the worst case) under a forced-events request
             throw new IllegalArgumentException("'" + text.trim() + "' names no event; " + HINT);
         }
-        return List.copyOf(byStep.values());
+        List<ForcedEvent> out = new ArrayList<>(byStep.values());
+        out.addAll(placed);
+        return List.copyOf(out);
     }
 
     /** Parses one {@code STEP:EVENT[@X:Y]}. */
     public static ForcedEvent parse(String text) {
         String hint = HINT;
+        int at0 = text.indexOf('@');
+        String head = at0 >= 0 ? text.substring(0, at0).trim() : "";
+        EventKind placeKind = EventKind.ofWord(head);
+        if (placeKind == EventKind.DOOR_SHUT || placeKind == EventKind.BLOCKAGE) {
+            String name = text.substring(at0 + 1).trim();
+            if (name.isEmpty()) {
+                throw new IllegalArgumentException("'" + text + "': name the door or zone after '@'; " + hint);
+            }
+            return new ForcedEvent(0, placeKind, null, name);
+        }
+        if (placeKind != null) {
+            throw new IllegalArgumentException("'" + text + "': only door-shut and blockage can be put at a named place; "
+                    + hint);
+        }
         int colon = text.indexOf(':');
         if (colon <= 0) {
             throw new IllegalArgumentException("'" + text + "' is not a forced event; " + hint);
@@ -95,6 +129,9 @@ public record ForcedEvent(int step, EventKind kind, Cell cell) {
 
     @Override
     public String toString() {
+        if (place != null) {
+            return kind.word() + "@" + place;
+        }
         return step + ":" + kind.word() + (cell != null ? "@" + cell : "");
     }
 }

@@ -15,13 +15,13 @@ import java.util.List;
 /**
  * A replay as CSV (RFC 4180: comma-separated, fields with a comma, quote or line break quoted, CRLF
  * line ends), as JSON, and as a text table. Output depends only on the replay, so the same input
- * gives byte-identical files.
+ * gives byte-identical files. Keys and columns follow the output vocabulary of DEVELOPERS.md.
  */
 public final class ReplayFormats {
 
     /** The CSV header (column names). */
     public static final List<String> CSV_COLUMNS = List.of("step", "cell", "action", "event", "eventDetail",
-            "batteryUnits", "batteryWh", "budgetLeft", "progress", "progressWords");
+            "levelUnits", "levelWh", "budgetLeft", "progress", "progressWords");
 
     private static final String CRLF = "\r\n";
 
@@ -73,11 +73,11 @@ public final class ReplayFormats {
         root.put("mission", mission.name());
         root.put("replay", replay.kind().word());
         root.put("ending", replay.ending().word());
-        root.put("minimumUnits", replay.minimumUnits());
-        root.put("minimumWh", scale.toWh(replay.minimumUnits()));
+        root.put("lowestLevelUnits", replay.minimumUnits());
+        root.put("lowestLevelWh", scale.toWh(replay.minimumUnits()));
         root.put("reserveUnits", replay.floorUnits());
         root.put("reserveWh", scale.toWh(replay.floorUnits()));
-        root.put("energyUnitWh", scale.unitWh().stripTrailingZeros());
+        root.put("unitWh", scale.unitWh().stripTrailingZeros());
         root.put("rounding", scale.describe());
         ArrayNode ex = root.putArray("explanation");
         replay.explanation().forEach(ex::add);
@@ -94,9 +94,12 @@ public final class ReplayFormats {
                     o.put("door", s.event().doorName());
                 }
                 o.put("eventCell", s.event().cell().toString());
+                if (s.event().lasting()) {
+                    o.put("closedForGood", s.event().closed());
+                }
             }
-            o.put("batteryUnits", s.batteryUnits());
-            o.put("batteryWh", s.batteryWh());
+            o.put("levelUnits", s.batteryUnits());
+            o.put("levelWh", s.batteryWh());
             o.put("budgetLeft", s.budgetLeft());
             o.put("progress", s.progressMask());
             o.put("progressWords", s.progressWords());

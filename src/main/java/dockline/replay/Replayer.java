@@ -120,7 +120,12 @@ public final class Replayer {
     public static Replay forced(ClosedLoop loop, List<ForcedEvent> events, int judgeFloor) throws ForcedEventException {
         requireAcyclic(loop);
         TreeMap<Integer, ForcedEvent> byStep = new TreeMap<>();
+        List<ForcedEvent> placed = new ArrayList<>();
         for (ForcedEvent f : events) {
+            if (f.atPlace()) {
+                placed.add(f);
+                continue;
+            }
             if (byStep.put(f.step(), f) != null) {
                 throw new ForcedEventException("step " + f.step() + " is named twice");
             }
@@ -131,9 +136,21 @@ public final class Replayer {
         int step = 1;
         int lastStep = byStep.isEmpty() ? 0 : byStep.lastKey();
         boolean breached = false;
+        List<ForcedEvent> pending = new ArrayList<>(placed);
         while (!loop.isComplete(node) && !breached) {
             ForcedEvent f = byStep.get(step);
-            int slot = f == null ? nominalSlot(loop, node) : forcedSlot(loop, node, f);
+            int slot = -1;
+            if (f == null) {
+                for (int i = 0; i < pending.size() && slot < 0; i++) {
+                    slot = placedSlot(loop, node, pending.get(i));
+                    if (slot >= 0) {
+                        pending.remove(i);
+                    }
+                }
+            }
+            if (slot < 0) {
+                slot = f == null ? nominalSlot(loop, node) : forcedSlot(loop, node, f);
+            }
             slots.add(slot);
             node = loop.succNode(slot);
             breached = loop.level(node) < judgeFloor;
@@ -143,6 +160,15 @@ public final class Replayer {
             throw new ForcedEventException("step " + lastStep + ": the run is already over ("
                     + (breached ? "below the reserve floor" : "mission complete") + " at step " + (step - 1) + " at "
                     + arena.cellOf(loop.vertex(node)) + ")");
+        }
+        if (!pending.isEmpty()) {
+            List<String> names = new ArrayList<>();
+            for (ForcedEvent p : pending) {
+                names.add(p.toString());
+            }
+            throw new ForcedEventException(String.join(", ", names) + ": the policy's run never tries to enter "
+                    + (pending.size() == 1 ? "that place" : "those places") + " while the event can still happen"
+                    + " (check the name against the map's doors and zones, and the budget)");
         }
         Walk w = walkLoop(loop, (n, s) -> slots.get(s - 1), judgeFloor);
         return new Explainer(arena, judgeFloor).finish(Replay.Kind.FORCED, w,
@@ -199,6 +225,35 @@ public final class Replayer {
         }
         throw new ForcedEventException(at + where + ", and a slip cannot end in " + f.cell() + "; it can end in "
                 + String.join(", ", cells));
+    }
+
+    /**
+     * The successor slot of an event at a named door or zone, when the policy's move at the node
+     * enters it and that event can happen there; else -1.
+     */
+    private static int placedSlot(ClosedLoop loop, int node, ForcedEvent f) {
+        Arena arena = loop.arena();
+        int d = loop.choice(node);
+        if (arena.actionKind(d) != ActionKind.MOVE) {
+            return -1;
+        }
+        Cell target = arena.action(d).target();
+        var map = arena.mission().map();
+        for (int s = loop.succBegin(node); s < loop.succEnd(node); s++) {
+            int e = loop.succEdge(s);
+            if (arena.event(e) != f.kind().ordinal()) {
+                continue;
+            }
+            EventRule rule = map.disturbances().rules().get(arena.rule(e));
+            boolean match = f.kind() == EventKind.DOOR_SHUT
+                    ? f.place().equals(map.doorName(target)) || ("door " + f.place()).equals(map.doorName(target))
+                            || f.place().equals(target.toString())
+                    : f.place().equals(rule.label()) || map.zonesAt(target).contains(f.place());
+            if (match) {
+                return s;
+            }
+        }
+        return -1;
     }
 
     private static int nominalSlot(ClosedLoop loop, int node) {
@@ -442,7 +497,15 @@ public final class Replayer {
             Cell target = arena.action(arena.source(e)).target();
             Cell cell = k == EventKind.SLIP ? arena.cellOf(arena.target(e)) : target;
             String door = k == EventKind.DOOR_SHUT ? mission.map().doorName(target) : "";
-            return new ReplayEvent(k, rule.label(), door, cell);
+            int item = arena.closedBy(e);
+            if (item < 0) {
+                return new ReplayEvent(k, rule.label(), door, cell);
+            }
+            List<Cell> closed = new ArrayList<>();
+            for (int c : arena.states().itemCells(item)) {
+                closed.add(Cell.ofIndex(c, arena.width()));
+            }
+            return new ReplayEvent(k, rule.label(), door, cell, arena.states().itemName(item), closed);
         }
 
         Replay finish(Replay.Kind kind, Walk w, int bestEffortFloor) {

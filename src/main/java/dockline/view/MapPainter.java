@@ -432,6 +432,21 @@ final class MapPainter {
             g.strokeLine(ox + (a.x() + 0.5) * s, oy + (a.y() + 0.5) * s, ox + (b.x() + 0.5) * s, oy + (b.y() + 0.5) * s);
         }
         g.setLineDashes();
+        // doors and zones closed for good by a lasting event: hatched from the step they close on
+        g.setStroke(Palette.EVENT);
+        g.setLineWidth(Math.max(1.5, s / 12));
+        for (ViewStep st : steps) {
+            if (st.step() > step) {
+                break;
+            }
+            for (Cell c : st.closedCells()) {
+                double x = ox + c.x() * s;
+                double y = oy + c.y() * s;
+                g.strokeRect(x + 1, y + 1, s - 2, s - 2);
+                g.strokeLine(x + 2, y + 2, x + s - 2, y + s - 2);
+                g.strokeLine(x + s - 2, y + 2, x + 2, y + s - 2);
+            }
+        }
         double size = Math.max(9, Math.min(13, s * 0.36));
         Font font = Font.font("DejaVu Sans", FontWeight.BOLD, size);
         // one marker per cell; its label lists the steps and kinds there, e.g. "40, 41 drag"

@@ -18,7 +18,7 @@ final class ReplayAdapter {
         for (ReplayStep s : r.steps()) {
             ReplayEvent e = s.event() == null ? ReplayEvent.NONE : s.event();
             steps.add(new ViewStep(s.step(), s.cell(), s.action().orElse(null), e.kind(), e.describe(), e.cell(),
-                    s.batteryUnits(), s.budgetLeft(), s.progressMask()));
+                    s.batteryUnits(), s.budgetLeft(), s.progressMask(), e.closedCells()));
         }
         List<String> notes = new ArrayList<>(r.explanation());
         notes.add(0, "Ends: " + endingWords(r.ending()) + "; lowest battery " + Units.both(m, r.minimumUnits())

@@ -1,22 +1,24 @@
 package dockline.view;
 
 import dockline.arena.Action;
-import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
-import dockline.monitor.ReserveMonitor;
+import dockline.certify.Certificate;
+import dockline.certify.ClosedLoop;
+import dockline.replay.ForcedEventException;
+import dockline.plan.Certification;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PlanReplays;
+import dockline.plan.PolicyChoice;
+import dockline.plan.Route;
+import dockline.replay.Replay;
+import dockline.solve.reserve.ChargeNeeded;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
-import dockline.replay.ForcedEvent;
-import dockline.replay.ForcedEventException;
-import dockline.replay.MissionReplays;
-import dockline.replay.Replay;
 import dockline.solve.ProductTooLargeException;
-import dockline.solve.reserve.ChargeNeeded;
-import dockline.solve.reserve.ReserveAnalysis;
-import dockline.solve.reserve.ReserveOptions;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -27,34 +29,29 @@ import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
 /**
- * The real {@link Analyzer}: the solver, the independent certificate checker and the replays the
- * command line uses ({@link MissionReplays}), plus the heat map ({@link ChargeNeeded}), turned into
- * the view's own {@link ViewData}. The cancellation flag goes down to every solve and is checked
- * between the stages.
+ * The real {@link Analyzer}: asks the core ({@link MissionPlanner#plan}, the product route with the
+ * safest policy, its replays and heat map) and turns the {@link Plan} into the view's own
+ * {@link ViewData}; it computes nothing itself. The cancellation flag goes down to every solve.
  */
 public final class SolverAnalyzer implements Analyzer {
 
     @Override
     public ViewData analyze(Mission mission, BooleanSupplier cancelled) {
-        ReserveOptions options = ReserveOptions.defaults().withChargeNeeded(false).withCancelled(cancelled);
-        MissionReplays mr;
-        ChargeNeeded heat;
+        Plan plan;
         try {
-            mr = MissionReplays.of(mission, options);
-            stopIf(cancelled);
-            ReserveAnalysis a = mr.analysis();
-            heat = ChargeNeeded.computeImplicitly(mr.arena(), a.goal(),
-                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), options.product());
-            stopIf(cancelled);
+            plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
+                    true, true)).withCancelled(cancelled));
         } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);
         }
+        stopIf(cancelled);
+        PlanReplays mr = plan.replays().orElseThrow();
         List<ViewReplay> replays = new ArrayList<>();
         List<String> problems = new ArrayList<>();
         try {
             Replay w = mr.worstCase();
-            replays.add(ReplayAdapter.of(mission, w, mr.guaranteed() ? ViewReplay.Kind.WORST_CASE
-                    : ViewReplay.Kind.COUNTEREXAMPLE, title(mission, w, mr.guaranteed() ? "worst case" : "counterexample")));
+            replays.add(ReplayAdapter.of(mission, w, plan.guaranteed() ? ViewReplay.Kind.WORST_CASE
+                    : ViewReplay.Kind.COUNTEREXAMPLE, title(mission, w, plan.guaranteed() ? "worst case" : "counterexample")));
         } catch (IllegalStateException e) {
             problems.add(e.getMessage());
         }
@@ -67,7 +64,7 @@ public final class SolverAnalyzer implements Analyzer {
             }
         }
         stopIf(cancelled);
-        return new SolvedData(mr, heat, verdictOf(mr, problems), replays);
+        return new SolvedData(plan, verdictOf(plan, problems), replays);
     }
 
     private static void stopIf(BooleanSupplier cancelled) {
@@ -81,24 +78,24 @@ public final class SolverAnalyzer implements Analyzer {
     }
 
     /** The verdict in words, with the certificate status. */
-    static VerdictSummary verdictOf(MissionReplays mr, List<String> problems) {
-        ReserveAnalysis a = mr.analysis();
+    static VerdictSummary verdictOf(Plan a, List<String> problems) {
+        PlanReplays mr = a.replays().orElseThrow();
         Mission m = a.mission();
         int k = m.map().disturbances().budget();
-        String floor = Units.both(m, a.reserveUnits());
+        String floor = Units.both(m, m.reserveUnits());
         String disturbances = k == 0 ? "with no disturbance" : "under every disturbance the map allows (at most " + k + ")";
         StringBuilder words = new StringBuilder();
         if (a.guaranteed()) {
             words.append("the robot can always finish its tasks and dock without the battery dropping below the floor of ")
                     .append(floor).append(", ").append(disturbances).append('.');
-            a.worstCaseMinimumUnits().ifPresent(u -> words.append(" Worst case: ").append(Units.both(m, u)).append('.'));
+            a.lowestLevelUnits().ifPresent(u -> words.append(" Worst case: ").append(Units.both(m, u)).append('.'));
         } else {
             words.append(k == 0 ? "even with no disturbance, " : "some sequence of at most " + k + " disturbances can, whatever the robot does, ")
                     .append("drive the battery below the floor of ").append(floor).append(" before the tasks are done and the robot docks.");
-            if (a.highestGuaranteedReserveUnits().isPresent()) {
-                words.append(" A floor of ").append(Units.both(m, a.highestGuaranteedReserveUnits().getAsInt()))
+            if (a.highestFloorUnits().isPresent()) {
+                words.append(" A floor of ").append(Units.both(m, a.highestFloorUnits().getAsInt()))
                         .append(" can be guaranteed.");
-            } else if (a.highestReserveSearched() || mr.bestEffortFloor() < 0) {
+            } else if (a.highestFloorSearched() || mr.bestEffortFloor() < 0) {
                 words.append(" No floor can be guaranteed from this start.");
             }
         }
@@ -109,10 +106,9 @@ public final class SolverAnalyzer implements Analyzer {
             words.append(" Note: ").append(n).append('.');
         }
         String cert;
-        VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED
-                : VerdictSummary.Outcome.NOT_GUARANTEED;
+        VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED : VerdictSummary.Outcome.NOT_GUARANTEED;
         if (a.guaranteed()) {
-            Certificate c = mr.certificate().orElse(null);
+            Certificate c = a.certification() instanceof Certification.Reserve r ? r.certificate() : null;
             if (c != null && c.ok()) {
                 cert = "passed \u2014 the policy was re-checked independently of the solver (" + c.statesChecked()
                         + " situations, every disturbance choice; longest run " + c.longestRunSteps() + " steps)";
@@ -130,33 +126,28 @@ public final class SolverAnalyzer implements Analyzer {
         for (String p : problems) {
             cert += "; " + p;
         }
-        return new VerdictSummary(outcome, words.toString(), cert, a.worstCaseMinimumUnits(),
-                a.highestGuaranteedReserveUnits());
+        return new VerdictSummary(outcome, words.toString(), cert, a.lowestLevelUnits(), a.highestFloorUnits());
     }
 
-    /** {@link ViewData} over a {@link ReserveAnalysis}; the policy is indexed by cell once, at construction. */
+    /** {@link ViewData} over a {@link Plan}; the policy is indexed by cell once, at construction. */
     static final class SolvedData implements ViewData {
 
-        private final MissionReplays replaysSource;
-        private final ReserveAnalysis analysis;
+        private final PlanReplays replaysSource;
+        private final Plan plan;
         private final ChargeNeeded heat;
         private final VerdictSummary verdict;
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
         private final Map<Long, List<Action>> byCell;
 
-        SolvedData(MissionReplays mr, ChargeNeeded heat, VerdictSummary verdict, List<ViewReplay> replays) {
-            this.replaysSource = mr;
-            this.analysis = mr.analysis();
-            this.heat = heat;
+        SolvedData(Plan plan, VerdictSummary verdict, List<ViewReplay> replays) {
+            this.replaysSource = plan.replays().orElseThrow();
+            this.plan = plan;
+            this.heat = plan.heatMap().orElseThrow();
             this.verdict = verdict;
             this.replays = List.copyOf(replays);
-            this.policy = mr.policy();
-            this.byCell = indexByCell(policy, analysis.mission().map().width());
-        }
-
-        MissionReplays missionReplays() {
-            return replaysSource;
+            this.policy = replaysSource.policy();
+            this.byCell = indexByCell(policy, plan.mission().map().width());
         }
 
         private static long key(int cellIndex, int budgetLeft, int progress) {
@@ -181,13 +172,13 @@ public final class SolverAnalyzer implements Analyzer {
             return out;
         }
 
-        ReserveAnalysis analysis() {
-            return analysis;
+        Plan plan() {
+            return plan;
         }
 
         @Override
         public Mission mission() {
-            return analysis.mission();
+            return plan.mission();
         }
 
         @Override
@@ -220,7 +211,7 @@ public final class SolverAnalyzer implements Analyzer {
             if (policy.isEmpty()) {
                 return Optional.empty();
             }
-            Cell c = Cell.ofIndex(cellIndex, analysis.mission().map().width());
+            Cell c = Cell.ofIndex(cellIndex, plan.mission().map().width());
             return policy.get().lookup(c, levelUnits, budgetLeft, progressMask);
         }
 
@@ -244,10 +235,10 @@ public final class SolverAnalyzer implements Analyzer {
             if (policy.isEmpty() || events.isEmpty()) {
                 return Optional.empty();
             }
-            List<ForcedEvent> fs = new ArrayList<>();
+            List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
             StringBuilder what = new StringBuilder();
             for (ScenarioEvent e : events) {
-                fs.add(new ForcedEvent(e.step(), e.kind(), e.slipTo()));
+                fs.add(new dockline.replay.ForcedEvent(e.step(), e.kind(), e.slipTo()));
                 what.append(what.length() == 0 ? "" : ", ").append(e.step()).append(':').append(e.kind().word())
                         .append(e.slipTo() != null ? "@" + e.slipTo() : "");
             }

@@ -19,9 +19,10 @@ import java.util.Objects;
  * @param levelUnits  the battery level after the step, in units
  * @param budgetLeft  disturbances the building may still throw
  * @param progress    task progress bit mask after the step
+ * @param closedCells cells a lasting event closed at this step, for the rest of the mission (empty otherwise)
  */
 public record ViewStep(int step, Cell cell, Action action, EventKind event, String eventLabel, Cell eventCell,
-                       int levelUnits, int budgetLeft, int progress) {
+                       int levelUnits, int budgetLeft, int progress, java.util.List<Cell> closedCells) {
 
     public ViewStep {
         Objects.requireNonNull(cell, "cell");
@@ -29,6 +30,13 @@ public record ViewStep(int step, Cell cell, Action action, EventKind event, Stri
             throw new IllegalArgumentException("step must not be negative");
         }
         eventLabel = eventLabel == null ? "" : eventLabel;
+        closedCells = closedCells == null ? java.util.List.of() : java.util.List.copyOf(closedCells);
+    }
+
+    /** A step that closes nothing. */
+    public ViewStep(int step, Cell cell, Action action, EventKind event, String eventLabel, Cell eventCell,
+                    int levelUnits, int budgetLeft, int progress) {
+        this(step, cell, action, event, eventLabel, eventCell, levelUnits, budgetLeft, progress, java.util.List.of());
     }
 
     public boolean hasEvent() {

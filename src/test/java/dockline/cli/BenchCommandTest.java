@@ -61,6 +61,8 @@ class BenchCommandTest {
         Run r = run("bench", "--json", "--sizes", "32", "--instances", "discounted");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
+        // the published schema of the output (general-purpose validator, as in JsonOutputSchemaTest)
+        assertThat(JsonOutputSchemaTest.schema("bench").validate(root)).isEmpty();
         // the comparator product on demand (main route), stored (reference), and value iteration
         assertThat(root.get("rows").size()).isEqualTo(3);
         for (JsonNode row : root.get("rows")) {

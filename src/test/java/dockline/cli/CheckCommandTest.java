@@ -51,13 +51,13 @@ class CheckCommandTest {
         assertThat(r.code()).isEqualTo(ExitCodes.OK);
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
-        for (String k : new String[] {"reserveUnits", "startUnits", "worstCaseMinimumUnits",
-                "highestGuaranteedReserveUnits", "productVertices", "productEdges", "solveMillis"}) {
+        for (String k : new String[] {"reserveUnits", "startUnits", "lowestLevelUnits",
+                "highestReserveUnits", "productVertices", "productEdges", "solveMillis"}) {
             assertThat(j.get(k).isIntegralNumber()).as(k).isTrue();
         }
         assertThat(j.get("unitWh").decimalValue()).isEqualByComparingTo("0.5");
         assertThat(j.get("caveats").size()).isEqualTo(Caveats.LINES.size());
-        assertThat(j.get("worstCaseMinimumUnits").asInt()).isGreaterThanOrEqualTo(j.get("reserveUnits").asInt());
+        assertThat(j.get("lowestLevelUnits").asInt()).isGreaterThanOrEqualTo(j.get("reserveUnits").asInt());
     }
 
     @Test
@@ -66,27 +66,51 @@ class CheckCommandTest {
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("verdict").asText()).isEqualTo("not-guaranteed");
-        assertThat(j.get("worstCaseMinimumUnits").isNull()).isTrue();
+        assertThat(j.get("lowestLevelUnits").isNull()).isTrue();
         Run human = run("check", "missions/late-return.yaml");
         assertThat(human.out()).startsWith("NOT GUARANTEED: ").contains("none (there is no safe policy)");
     }
 
     @Test
     void overrides_changeTheVerdict() {
-        // a fuller battery and a lower floor make the late return safe
+        // no charge beats a bridge fire door that stays shut (lasting, the map's default) ...
         Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%");
-        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("reserve floor 30 units = 15 Wh (10%)");
-        Run none = run("check", "missions/late-return.yaml", "--budget", "0", "--json");
+        // ... but with no disturbance at all the fuller battery and the lower floor make it safe
+        Run none = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%", "--budget",
+                "0", "--json");
+        assertThat(none.code()).as(none.err()).isEqualTo(ExitCodes.OK);
         assertThat(none.out()).contains("\"budget\" : 0");
     }
 
     @Test
-    void safestPolicy_keepsTheHighestGuaranteedFloor() throws Exception {
-        JsonNode j = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json", "--safest-policy").out());
-        assertThat(j.get("worstCaseMinimumUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
-        assertThat(j.get("policyFloorUnits").asInt()).isEqualTo(j.get("highestGuaranteedReserveUnits").asInt());
-        assertThat(run("check", "missions/night-round.yaml", "--safest-policy").out()).contains("the safest policy");
+    void safestPolicy_isTheDefault_andKeepsTheHighestGuaranteedFloor() throws Exception {
+        JsonNode j = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json").out());
+        assertThat(j.get("policyChoice").asText()).isEqualTo("safest");
+        assertThat(j.get("lowestLevelUnits").asInt()).isEqualTo(j.get("highestReserveUnits").asInt());
+        assertThat(j.get("policyReserveUnits").asInt()).isEqualTo(j.get("highestReserveUnits").asInt());
+        assertThat(run("check", "missions/night-round.yaml").out()).contains("the safest policy");
+        // --safest-policy is an accepted no-op: the same figures as the default
+        JsonNode alias = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json",
+                "--safest-policy").out());
+        assertThat(alias.get("lowestLevelUnits")).isEqualTo(j.get("lowestLevelUnits"));
+    }
+
+    /**
+     * {@code --fewest-moves} keeps the policy that was the default before: it finishes in the fewest
+     * moves at the mission's floor, and on the night round its worst level (47 units, missions/README.md)
+     * lies below the highest guaranteed floor (83 units).
+     */
+    @Test
+    void fewestMoves_keepsTheShortestPolicy() throws Exception {
+        JsonNode j = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json",
+                "--fewest-moves").out());
+        assertThat(j.get("policyChoice").asText()).isEqualTo("fewest-moves");
+        assertThat(j.get("lowestLevelUnits").asInt()).isEqualTo(47);
+        assertThat(j.get("highestReserveUnits").asInt()).isEqualTo(83);
+        assertThat(j.get("policyReserveUnits").asInt()).isEqualTo(j.get("reserveUnits").asInt());
+        assertThat(run("check", "missions/night-round.yaml", "--fewest-moves").out()).contains("fewest moves");
     }
 
     @Test

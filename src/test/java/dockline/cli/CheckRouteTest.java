@@ -46,11 +46,11 @@ class CheckRouteTest {
         assertThat(f.get("method").asText()).isEqualTo("fast");
         assertThat(p.get("method").asText()).isEqualTo("product");
         assertThat(f.get("verdict").asText()).isEqualTo(p.get("verdict").asText());
-        assertThat(f.get("highestGuaranteedReserveUnits").asInt()).isEqualTo(p.get("highestGuaranteedReserveUnits").asInt());
+        assertThat(f.get("highestReserveUnits").asInt()).isEqualTo(p.get("highestReserveUnits").asInt());
         assertThat(f.get("certified").asBoolean()).isTrue();
         // the policy of least need is the safest one: its worst level is the highest floor
-        assertThat(f.get("worstCaseMinimumUnits").asInt()).isEqualTo(f.get("highestGuaranteedReserveUnits").asInt());
-        assertThat(f.get("certifiedWorstMinimumUnits").asInt()).isEqualTo(f.get("worstCaseMinimumUnits").asInt());
+        assertThat(f.get("lowestLevelUnits").asInt()).isEqualTo(f.get("highestReserveUnits").asInt());
+        assertThat(f.get("certifiedLowestLevelUnits").asInt()).isEqualTo(f.get("lowestLevelUnits").asInt());
         CheckCommandTest.Run text = CheckCommandTest.run("check", noCharge.toString());
         assertThat(text.out()).contains("Method: fast path", "certified: true", "Highest reserve floor guaranteed:");
     }
@@ -79,7 +79,7 @@ class CheckRouteTest {
             assertThat(stored.get("method").asText()).isEqualTo("stored-product");
             assertThat(implicit.get("method").asText()).isEqualTo("product");
             assertThat(stored.get("verdict")).isEqualTo(implicit.get("verdict"));
-            assertThat(stored.get("highestGuaranteedReserveUnits")).isEqualTo(implicit.get("highestGuaranteedReserveUnits"));
+            assertThat(stored.get("highestReserveUnits")).isEqualTo(implicit.get("highestReserveUnits"));
             assertThat(stored.get("certified")).isEqualTo(implicit.get("certified"));
         }
         assertThat(CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "stored").out())

@@ -82,8 +82,8 @@ class ImportCommandTest {
         // missions/README.md: guaranteed from 35 %, 47 units needed; not from 30 %
         Run ok = run("check", "missions/aisle-return.yaml", "--json");
         assertThat(ok.exit()).as(ok.err()).isEqualTo(ExitCodes.OK);
-        assertThat(ok.out()).contains("\"startNeedUnits\" : 47").contains("\"worstCaseMinimumUnits\" : 23")
-                .contains("\"highestGuaranteedReserveUnits\" : 23");
+        assertThat(ok.out()).contains("\"startNeedUnits\" : 47").contains("\"lowestLevelUnits\" : 23")
+                .contains("\"highestReserveUnits\" : 23");
         assertThat(run("check", "missions/aisle-return.yaml", "--start-charge", "30%").exit()).isEqualTo(ExitCodes.NOT_GUARANTEED);
     }
 
@@ -227,8 +227,8 @@ class ImportCommandTest {
                 assertThat(ri.exit()).as("start " + start).isEqualTo(rh.exit());
                 JsonNode ji = JSON.readTree(ri.out());
                 JsonNode jh = JSON.readTree(rh.out());
-                for (String key : new String[] {"verdict", "startNeedUnits", "worstCaseMinimumUnits",
-                    "highestGuaranteedReserveUnits"}) {
+                for (String key : new String[] {"verdict", "startNeedUnits", "lowestLevelUnits",
+                    "highestReserveUnits"}) {
                     assertThat(String.valueOf(ji.get(key))).as(key + " from " + start).isEqualTo(String.valueOf(jh.get(key)));
                 }
                 if (ri.exit() == ExitCodes.OK) {

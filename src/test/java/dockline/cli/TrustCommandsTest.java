@@ -39,7 +39,7 @@ class TrustCommandsTest {
         assertThat(r.out()).contains("guaranteed").contains("certified: true").contains("Worst case of the certified policy")
                 .contains("step  cell").contains("Safety: ");
         String header = Files.readAllLines(csv).get(0);
-        assertThat(header).startsWith("step,cell,action,event,eventDetail,batteryUnits,batteryWh,budgetLeft,progress");
+        assertThat(header).startsWith("step,cell,action,event,eventDetail,levelUnits,levelWh,budgetLeft,progress");
         JsonNode j = new ObjectMapper().readTree(json.toFile());
         assertThat(j.get("replay").asText()).isEqualTo("worst");
         assertThat(j.get("steps").size()).isEqualTo(Files.readAllLines(csv).size() - 1);
@@ -60,9 +60,36 @@ class TrustCommandsTest {
         assertThat(Files.readAllBytes(n1)).isEqualTo(Files.readAllBytes(n2)).isNotEqualTo(Files.readAllBytes(a));
     }
 
+    /**
+     * The late return with the research block's fire doors and hall blockage read as momentary (the
+     * reading before lasting events; missions/README.md gives its figures): a copy of the demo in tmp.
+     */
+    private String momentaryLateReturn() throws java.io.IOException {
+        String map = Files.readString(Path.of("maps/research-block.yaml"))
+                .replace("      where: [west-fire-door, east-fire-door]\n",
+                        "      where: [west-fire-door, east-fire-door]\n      duration: momentary\n")
+                .replace("      where: east-hall    # carts left in the hall\n",
+                        "      where: east-hall    # carts left in the hall\n      duration: momentary\n");
+        assertThat(map).contains("duration: momentary\n    - kind: drag");
+        Files.createDirectories(tmp.resolve("maps"));
+        Files.createDirectories(tmp.resolve("missions"));
+        Files.writeString(tmp.resolve("maps/research-block.yaml"), map);
+        Path mission = tmp.resolve("missions/late-return.yaml");
+        Files.writeString(mission, Files.readString(Path.of("missions/late-return.yaml")));
+        return mission.toString();
+    }
+
+    /** With lasting fire doors no start charge guarantees the late return: a shut bridge door cuts off both docks. */
     @Test
-    void replay_notGuaranteed_showsTheCounterexample_exit1() {
-        Run r = run("replay", "missions/late-return.yaml");
+    void lateReturn_withLastingFireDoors_isNotGuaranteedEvenWhenFull() {
+        Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(r.out()).contains("cannot force completion");
+    }
+
+    @Test
+    void replay_notGuaranteed_showsTheCounterexample_exit1() throws Exception {
+        Run r = run("replay", momentaryLateReturn());
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("NOT guaranteed").contains("counterexample").contains("below the reserve floor")
                 .contains("link-bridge").contains("Safety: ");
@@ -71,7 +98,9 @@ class TrustCommandsTest {
     @Test
     void replay_impossibleForcedEvent_isExit2_andWritesNoFile() {
         Path csv = tmp.resolve("never.csv");
-        Run r = run("replay", "missions/night-round.yaml", "--force", "5:door-shut", "--csv", csv.toString());
+        // the policy of fewest moves (the default before the safest policy): its step 5 is a move past no door
+        Run r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "5:door-shut", "--csv",
+                csv.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("step 5: door-shut cannot happen there").contains("is not a door that may shut");
         assertThat(csv).doesNotExist();
@@ -82,7 +111,8 @@ class TrustCommandsTest {
 
     @Test
     void replay_forcedDoor_isAnswered() {
-        Run r = run("replay", "missions/night-round.yaml", "--force", "4:door-shut");
+        // the policy of fewest moves walks through ward A's door at step 4 (the safest one charges first)
+        Run r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "4:door-shut");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("door ward-a-entry at 3:4 shut").contains("The mission completes");
     }
@@ -114,8 +144,8 @@ class TrustCommandsTest {
     }
 
     @Test
-    void margin_notGuaranteed_printsSuggestions_exit1() {
-        Run r = run("margin", "missions/late-return.yaml", "--json");
+    void margin_notGuaranteed_printsSuggestions_exit1() throws Exception {
+        Run r = run("margin", momentaryLateReturn(), "--json");
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
     }
@@ -147,7 +177,7 @@ class TrustCommandsTest {
         if (text.code() == ExitCodes.OK) {
             assertThat(text.out()).contains("certified: true");
             assertThat(j.get("certified").asBoolean()).isTrue();
-            assertThat(j.get("certifiedWorstMinimumUnits").asInt()).isEqualTo(j.get("worstCaseMinimumUnits").asInt());
+            assertThat(j.get("certifiedLowestLevelUnits").asInt()).isEqualTo(j.get("lowestLevelUnits").asInt());
             assertThat(j.get("suggestions").size()).isZero();
         } else {
             assertThat(text.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
@@ -156,13 +186,17 @@ class TrustCommandsTest {
         }
     }
 
-    /** The suggested start charge for the late return (164 units = 82 Wh) makes replay certify it. */
+    /**
+     * The suggested start charge for the late return with momentary fire doors (164 units = 82 Wh)
+     * makes replay certify it.
+     */
     @Test
-    void replay_withSuggestedStartCharge_isGuaranteed() {
-        Run r = run("replay", "missions/late-return.yaml", "--start-charge", "82");
+    void replay_withSuggestedStartCharge_isGuaranteed() throws Exception {
+        String mission = momentaryLateReturn();
+        Run r = run("replay", mission, "--start-charge", "82");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("certified: true");
-        assertThat(run("replay", "missions/late-return.yaml", "--start-charge", "81.5").code())
+        assertThat(run("replay", mission, "--start-charge", "81.5").code())
                 .isEqualTo(ExitCodes.NOT_GUARANTEED);
     }
 }

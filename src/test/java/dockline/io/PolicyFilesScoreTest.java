@@ -20,8 +20,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Policy files with a score memory (discounted missions, format version 2 of missions/POLICY-FORMAT.md):
- * round trips, the documented layout, old version-1 files still read, and the problems of bad files.
+ * Policy files with a score memory (discounted missions, missions/POLICY-FORMAT.md):
+ * round trips, the documented layout, old version-1 and version-2 files still read, and the problems of bad files.
  */
 class PolicyFilesScoreTest {
 
@@ -58,9 +58,9 @@ class PolicyFilesScoreTest {
         Path f = dir.resolve("p.csv");
         PolicyFiles.write(f, HEADER, sample());
         List<String> lines = Files.readAllLines(f);
-        assertThat(lines.get(0)).isEqualTo("# dockline-policy 2");
+        assertThat(lines.get(0)).isEqualTo("# dockline-policy 3");
         assertThat(lines).contains("# objective: discounted", "# discount: 2", "# threshold: 3/4", "# relation: >=",
-                "# weight-bound: 3", "# reserve-kept: true", "cell,level,budget-left,progress,score,action,to",
+                "# weightBoundUnits: 3", "# reserveKept: true", "cell,levelUnits,budgetLeft,progress,score,action,to",
                 "1:1,48,1,0,-3/8,charge,", "2:1,49,0,1,secured,move,1:1", "1:1,51,1,0,2,wait,");
     }
 
@@ -69,14 +69,14 @@ class PolicyFilesScoreTest {
         Path f = dir.resolve("p.json");
         PolicyFiles.write(f, HEADER, sample());
         List<String> lines = Files.readAllLines(f);
-        assertThat(lines).anyMatch(l -> l.trim().equals("\"version\" : 2,"));
+        assertThat(lines).anyMatch(l -> l.trim().equals("\"version\" : 3,"));
         assertThat(lines).anyMatch(l -> l.trim().equals("\"objective\" : \"discounted\","));
         assertThat(lines).anyMatch(l -> l.trim().replaceAll(",$", "").equals(
-                "{\"cell\":\"1:1\",\"level\":48,\"budget-left\":1,\"progress\":0,\"score\":\"-3/8\",\"action\":\"charge\"}"));
+                "{\"cell\":\"1:1\",\"levelUnits\":48,\"budgetLeft\":1,\"progress\":0,\"score\":\"-3/8\",\"action\":\"charge\"}"));
     }
 
     @Test
-    void reservePolicies_stayVersion1_andOldFilesStillRead() throws Exception {
+    void version1Files_areStillRead_andWrittenAgainAsVersion3() throws Exception {
         Path f = dir.resolve("old.csv");
         Files.writeString(f, String.join("\n", "# dockline-policy 1", "# mission: m", "# unit-wh: 0.5",
                 "# floor-units: 2", "# capacity-units: 10", "# budget: 0", "# tasks: ",
@@ -87,7 +87,13 @@ class PolicyFilesScoreTest {
         assertThat(d.policy().lookup(new Cell(1, 2), 3, 0, 0)).isPresent();
         Path g = dir.resolve("new.csv");
         PolicyFiles.write(g, d.header(), d.policy());
-        assertThat(Files.readString(g)).isEqualTo(Files.readString(f));
+        // the same content under the keys of version 3 (missions/POLICY-FORMAT.md)
+        assertThat(Files.readString(g)).isEqualTo(String.join("\n", "# dockline-policy 3", "# mission: m",
+                "# unitWh: 0.5", "# reserveUnits: 2", "# capacityUnits: 10", "# budget: 0", "# tasks: ",
+                "cell,levelUnits,budgetLeft,progress,action,to", "1:2,3,0,0,wait,", ""));
+        PolicyFiles.Document again = PolicyFiles.read(g);
+        assertThat(again.header()).isEqualTo(d.header());
+        assertThat(again.policy().entries()).isEqualTo(d.policy().entries());
     }
 
     @Test

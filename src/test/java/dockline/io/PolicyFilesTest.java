@@ -47,9 +47,9 @@ class PolicyFilesTest {
         Path f = dir.resolve("p.csv");
         PolicyFiles.write(f, HEADER, sample());
         List<String> lines = Files.readAllLines(f);
-        assertThat(lines.get(0)).isEqualTo("# dockline-policy 1");
-        assertThat(lines).contains("cell,level,budget-left,progress,action,to", "1:6,96,1,0,move,2:6",
-                "2:6,95,1,0,wait,", "# tasks: ward-a ward-b");
+        assertThat(lines.get(0)).isEqualTo("# dockline-policy 3");
+        assertThat(lines).contains("cell,levelUnits,budgetLeft,progress,action,to", "1:6,96,1,0,move,2:6",
+                "2:6,95,1,0,wait,", "# tasks: ward-a ward-b", "# unitWh: 0.5");
     }
 
     @Test
@@ -57,7 +57,7 @@ class PolicyFilesTest {
         Path f = dir.resolve("p.json");
         PolicyFiles.write(f, HEADER, sample());
         assertThat(Files.readAllLines(f)).anyMatch(l -> l.trim().equals(
-                "{\"cell\":\"1:6\",\"level\":96,\"budget-left\":1,\"progress\":0,\"action\":\"move\",\"to\":\"2:6\"},"));
+                "{\"cell\":\"1:6\",\"levelUnits\":96,\"budgetLeft\":1,\"progress\":0,\"action\":\"move\",\"to\":\"2:6\"},"));
     }
 
     @Test
@@ -76,7 +76,7 @@ class PolicyFilesTest {
             assertThat(msgs).anyMatch(m -> m.contains("bad.json:2:") && m.contains("unknown key 'rowz'")
                     && m.contains("did you mean 'rows'"));
             assertThat(msgs).anyMatch(m -> m.contains("bad.json:4:12: '1-2' is not a cell"));
-            assertThat(msgs).anyMatch(m -> m.contains("bad.json:5:") && m.contains("'level' must be a whole number"));
+            assertThat(msgs).anyMatch(m -> m.contains("bad.json:5:") && m.contains("'levelUnits' must be a whole number"));
             assertThat(msgs).anyMatch(m -> m.contains("bad.json:5:") && m.contains("unknown action 'jump'"));
             assertThat(msgs).anyMatch(m -> m.contains("bad.json:6:") && m.contains("a move needs 'to'"));
         });

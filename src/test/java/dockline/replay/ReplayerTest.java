@@ -143,10 +143,10 @@ class ReplayerTest {
         Replay r2 = Replayer.worstCase(loop(corridor()));
         String c1 = ReplayFormats.csv(r1);
         assertThat(c1).isEqualTo(ReplayFormats.csv(r2));
-        assertThat(c1).startsWith("step,cell,action,event,eventDetail,batteryUnits,batteryWh,budgetLeft,progress,progressWords\r\n");
+        assertThat(c1).startsWith("step,cell,action,event,eventDetail,levelUnits,levelWh,budgetLeft,progress,progressWords\r\n");
         assertThat(c1).contains("1,1:0,move 1:0,drag,drag entering 1:0 (rule 'rug'),5,5,0,0,0 of 0 tasks done\r\n");
         assertThat(ReplayFormats.field("a,\"b\"")).isEqualTo("\"a,\"\"b\"\"\""); // RFC 4180 section 2, rules 6-7
-        assertThat(ReplayFormats.json(corridor(), r1)).contains("\"batteryWh\" : 5");
+        assertThat(ReplayFormats.json(corridor(), r1)).contains("\"levelWh\" : 5");
         assertThat(List.of(ReplayFormats.table(r1).split("\\R"))).hasSize(5);
     }
 }

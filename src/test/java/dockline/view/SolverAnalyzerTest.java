@@ -33,12 +33,15 @@ class SolverAnalyzerTest {
     void the_view_model_repeats_the_solver_figures() throws Exception {
         Mission m = MissionLoader.load(Path.of("missions/supply-run.yaml"));
         SolverAnalyzer.SolvedData d = (SolverAnalyzer.SolvedData) new SolverAnalyzer().analyze(m, () -> false);
-        var a = d.analysis();
+        var plan = d.plan();
+        var a = ((dockline.plan.Plan.Detail.Product) plan.detail()).analysis();
         // the heat map the solver gives on its own (ReserveSolver with the heat map switched on)
         var heat = dockline.solve.reserve.ReserveSolver.analyse(m, dockline.solve.reserve.ReserveOptions.defaults().withChargeNeeded(true))
                 .chargeNeeded().orElseThrow();
         assertThat(d.verdict().outcome() == VerdictSummary.Outcome.GUARANTEED).isEqualTo(a.guaranteed());
         assertThat(d.verdict().worstCaseMinimumUnits()).isEqualTo(a.worstCaseMinimumUnits());
+        // the view shows the safest policy: its worst case is the highest guaranteed floor
+        assertThat(d.verdict().worstCaseMinimumUnits()).isEqualTo(a.highestGuaranteedReserveUnits());
         assertThat(d.verdict().highestReserveUnits()).isEqualTo(a.highestGuaranteedReserveUnits());
         // the certified worst case is the first replay, and its lowest level is the solver's worst-case minimum
         assertThat(d.verdict().certificate()).startsWith("passed");

@@ -149,17 +149,14 @@ public final class ChargingSolver {
             Arrays.fill(processed, (byte) 0);
             Arrays.fill(done, false);
             Arrays.fill(choice, (byte) 0);
-            for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-                int c = arena.freeCell(slot);
-                boolean dock = arena.isDock(c);
-                for (int k = 0; k <= arena.budget(); k++) {
-                    int r = arena.robotVertex(c, k);
-                    for (int g = 0; g < gc; g++) {
-                        int p = r * gc + g;
-                        if (goal.accepting(g, dock) || good[p]) {
-                            need[p] = 0;
-                            heap.push(0, p);
-                        }
+            // every robot vertex (cell and disturbance state: budget left, and closures with lasting events)
+            for (int r = 0; r < rc; r++) {
+                boolean dock = arena.isDock(arena.cell(r));
+                for (int g = 0; g < gc; g++) {
+                    int p = r * gc + g;
+                    if (goal.accepting(g, dock) || good[p]) {
+                        need[p] = 0;
+                        heap.push(0, p);
                     }
                 }
             }

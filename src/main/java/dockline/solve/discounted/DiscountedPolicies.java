@@ -113,8 +113,8 @@ public final class DiscountedPolicies {
                     : cs == DiscountedComparator.ACCEPT ? PolicyScore.SECURED : PolicyScore.gap(comparator.gap(cs));
             int av = game.arenaVertex(p);
             PolicyEntry row = new PolicyEntry(arena.cellOf(av), shown, arena.budgetLeft(av), game.progressMask(p),
-                    arena.action(game.arenaVertex(d)), score);
-            if (!keys.add(List.of(row.cell(), row.level(), row.budgetLeft(), row.progress(), score))) {
+                    arena.action(game.arenaVertex(d)), score, arena.closures(av));
+            if (!keys.add(List.of(row.cell(), row.level(), row.budgetLeft(), row.progress(), score, row.closures()))) {
                 throw new IllegalStateException("two situations of the strategy share one row of the policy: "
                         + game.describe(p));
             }

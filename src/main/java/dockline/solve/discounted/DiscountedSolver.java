@@ -62,8 +62,17 @@ public final class DiscountedSolver {
      */
     public static DiscountedAnalysis analyse(Mission mission, Objective.Discounted objective, DiscountedOptions options) {
         long t0 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
+        return analyse(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), objective, options, t0);
+    }
+
+    /** As {@link #analyse(Mission, Objective.Discounted, DiscountedOptions)} on an arena and goal already compiled from the mission. */
+    public static DiscountedAnalysis analyse(Mission mission, Arena arena, GoalAutomaton goal,
+                                             Objective.Discounted objective, DiscountedOptions options) {
+        return analyse(mission, arena, goal, objective, options, System.nanoTime());
+    }
+
+    private static DiscountedAnalysis analyse(Mission mission, Arena arena, GoalAutomaton goal,
+                                              Objective.Discounted objective, DiscountedOptions options, long t0) {
         int mu = arena.maxAbsWeight();
         DiscountedComparator comparator = DiscountedComparator.of(objective, mu);
         Monitor monitor = comparator;

@@ -99,8 +99,18 @@ public final class FastPath {
      */
     public static Optional<Analysis> analyse(Mission mission, int maxPolicyRows, boolean verdictOnly) {
         long t0 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
+        return analyse(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), maxPolicyRows, verdictOnly,
+                t0);
+    }
+
+    /** As {@link #analyse(Mission, int, boolean)} on an arena and goal already compiled from the mission. */
+    public static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                             boolean verdictOnly) {
+        return analyse(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime());
+    }
+
+    private static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                              boolean verdictOnly, long t0) {
         if (!MinChargeSolver.applicable(arena, goal)) {
             return Optional.empty();
         }
@@ -204,7 +214,7 @@ public final class FastPath {
             int g = p - v * gc;
             int d = arena.target(values.chosenEdge(v, g));
             entries.add(new PolicyEntry(arena.cellOf(v), level, arena.budgetLeft(v), goal.progressMask(g),
-                    arena.action(d)));
+                    arena.action(d), null, arena.closures(v)));
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
                 int r = arena.target(e);
                 int g2 = goal.step(g, arena.cellZones(arena.cell(r)));

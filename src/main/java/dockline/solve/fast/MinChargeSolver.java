@@ -280,8 +280,8 @@ public final class MinChargeSolver {
                 boolean dock = arena.isDock(c);
                 for (int g = 0; g < gc; g++) {
                     if (goal.accepting(g, dock)) {
-                        for (int k = 0; k <= arena.budget(); k++) {
-                            int p = arena.robotVertex(c, k) * gc + g;
+                        for (int k = 0; k < arena.stateCount(); k++) {
+                            int p = arena.robotVertexInState(c, k) * gc + g;
                             robotNeed[p] = 0;
                             heap.push(0, p);
                         }

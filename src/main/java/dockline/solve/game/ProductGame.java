@@ -515,7 +515,8 @@ public final class ProductGame {
                 }
                 int d = graph.target(e);
                 entries.add(new PolicyEntry(arena.cellOf(vArena[p]), levelOf.applyAsInt(vMonitor[p]),
-                        arena.budgetLeft(vArena[p]), goal.progressMask(vGoal[p]), arena.action(vArena[d])));
+                        arena.budgetLeft(vArena[p]), goal.progressMask(vGoal[p]), arena.action(vArena[d]), null,
+                        arena.closures(vArena[p])));
                 if (!seen[d]) {
                     seen[d] = true;
                     todo[tail++] = d;

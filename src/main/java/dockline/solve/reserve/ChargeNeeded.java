@@ -118,7 +118,8 @@ public final class ChargeNeeded {
 
     /**
      * The least battery level (units) from which the mission can still be completed safely when
-     * the robot occupies the cell with the given disturbances left and tasks done, or
+     * the robot occupies the cell with the given disturbances left and tasks done (and, with lasting
+     * events, nothing closed yet and no at-most entry used), or
      * {@link #IMPOSSIBLE} (also for a wall cell).
      *
      * @param cellIndex    row-major cell index

@@ -290,7 +290,7 @@ public final class ImplicitReserveGame {
             if (x < rc) {
                 int d = arena.target(arena.outBegin(x) + strategy.choice(p));
                 entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
-                        goal.progressMask(g), arena.action(d)));
+                        goal.progressMask(g), arena.action(d), null, arena.closures(x)));
                 succ[0] = id(d, g, s);
                 k = 1;
             } else {
@@ -459,8 +459,8 @@ public final class ImplicitReserveGame {
             boolean dock = arena.isDock(c);
             for (int g = 0; g < gc; g++) {
                 if (goal.accepting(g, dock)) {
-                    for (int k = 0; k <= arena.budget(); k++) {
-                        int base = id(arena.robotVertex(c, k), g, 0);
+                    for (int k = 0; k < arena.stateCount(); k++) {
+                        int base = id(arena.robotVertexInState(c, k), g, 0);
                         for (int s = 0; s < levels; s++) {
                             int t = base + s;
                             count[t >>> 1] |= (byte) (1 << ((t & 1) << 2));

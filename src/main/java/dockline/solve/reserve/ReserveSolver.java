@@ -57,8 +57,19 @@ public final class ReserveSolver {
      */
     public static ReserveAnalysis analyse(Mission mission, ReserveOptions options) {
         long t0 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
+        return analyse(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), options, t0);
+    }
+
+    /**
+     * As {@link #analyse(Mission, ReserveOptions)} on an arena and goal automaton already compiled from
+     * this very mission (so that a caller asking several questions compiles them once).
+     */
+    public static ReserveAnalysis analyse(Mission mission, Arena arena, GoalAutomaton goal, ReserveOptions options) {
+        return analyse(mission, arena, goal, options, System.nanoTime());
+    }
+
+    private static ReserveAnalysis analyse(Mission mission, Arena arena, GoalAutomaton goal, ReserveOptions options,
+                                           long t0) {
         int capacity = mission.capacityUnits();
         int reserve = mission.reserveUnits();
         int start = mission.startUnits();
@@ -238,8 +249,17 @@ public final class ReserveSolver {
      */
     public static ImplicitVerdict decideImplicitly(Mission mission, ProductOptions options) {
         long t0 = System.nanoTime();
-        Arena arena = ArenaCompiler.compile(mission);
-        GoalAutomaton goal = GoalAutomaton.of(mission);
+        return decideImplicitly(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), options, t0);
+    }
+
+    /** As {@link #decideImplicitly(Mission, ProductOptions)} on an arena and goal already compiled from the mission. */
+    public static ImplicitVerdict decideImplicitly(Mission mission, Arena arena, GoalAutomaton goal,
+                                                   ProductOptions options) {
+        return decideImplicitly(mission, arena, goal, options, System.nanoTime());
+    }
+
+    private static ImplicitVerdict decideImplicitly(Mission mission, Arena arena, GoalAutomaton goal,
+                                                    ProductOptions options, long t0) {
         ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
                 mission.startUnits());
         long forecast;

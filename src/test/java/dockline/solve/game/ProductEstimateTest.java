@@ -47,7 +47,7 @@ class ProductEstimateTest {
     @Example
     void demoMissions_estimateWithinTwentyPercent() throws Exception {
         for (String file : new String[] {"missions/night-round.yaml", "missions/supply-run.yaml",
-            "missions/late-return.yaml", "missions/discounted-trap.yaml"}) {
+            "missions/late-return.yaml", "missions/discounted-trap.yaml", "missions/vault-check.yaml"}) {
             assertWithinTwentyPercent(MissionLoader.load(Path.of(file)), file);
         }
     }

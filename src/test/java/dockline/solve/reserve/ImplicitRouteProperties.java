@@ -127,7 +127,8 @@ class ImplicitRouteProperties {
     void demoMissions_implicitRoute() throws Exception {
         demoMission_implicitRoute("missions/night-round.yaml", true, 47, 83);
         demoMission_implicitRoute("missions/supply-run.yaml", true, 24, 40);
-        demoMission_implicitRoute("missions/late-return.yaml", false, -1, 46);
+        demoMission_implicitRoute("missions/late-return.yaml", false, -1, -1);
+        demoMission_implicitRoute("missions/vault-check.yaml", false, -1, 4);
     }
 
     private static void demoMission_implicitRoute(String file, boolean guaranteed, int worst, int highest)

@@ -1,11 +1,15 @@
-package dockline.replay;
+package dockline.plan;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.certify.Certificate;
 import dockline.fixtures.ReplayChecks;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
-import dockline.solve.reserve.ReserveOptions;
+import dockline.replay.Replay;
+import dockline.replay.ReplayFormats;
+import dockline.replay.ReplayStep;
+import dockline.solve.reserve.ReserveAnalysis;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,29 +26,34 @@ class DemoMissionReplayTest {
 
     /**
      * Oracles: the threshold solver's own worst case (ReserveSolver's dynamic programme over its
-     * ranks) for the worst-case replay; the arena's step semantics (maps/README.md, "Game semantics") for every row.
+     * ranks) for the worst-case replay; the arena's step semantics (DESIGN.md 2.3) for every row.
      */
     @ParameterizedTest
     @MethodSource("demoMissions")
     void guaranteed_isCertified_andWorstReplayMatchesSolver_elseCounterexampleBreaches(Path file) throws Exception {
         Mission m = MissionLoader.load(file);
-        MissionReplays mr = MissionReplays.of(m, ReserveOptions.defaults());
+        Plan plan = PlanReplaysProperties.replays(m, PolicyChoice.SAFEST);
+        ReserveAnalysis an = ((Plan.Detail.Product) plan.detail()).analysis();
+        PlanReplays mr = plan.replays().orElseThrow();
         Replay worst = mr.worstCase();
-        ReplayChecks.assertIsARun(mr.arena(), worst, mr.analysis().startUnits());
-        int floor = mr.analysis().reserveUnits();
-        if (mr.guaranteed()) {
-            assertThat(mr.certified()).as(mr.certificate().orElseThrow().reason()).isTrue();
-            assertThat(worst.minimumUnits()).isEqualTo(mr.analysis().worstCaseMinimumUnits().getAsInt());
-            assertThat(mr.certificate().orElseThrow().worstMinimumUnits()).isEqualTo(worst.minimumUnits());
+        ReplayChecks.assertIsARun(an.arena(), worst, an.startUnits());
+        int floor = an.reserveUnits();
+        if (plan.guaranteed()) {
+            Certificate cert = ((Certification.Reserve) plan.certification()).certificate();
+            assertThat(plan.certification().ok()).as(cert.reason()).isTrue();
+            assertThat(worst.minimumUnits()).isEqualTo(an.worstCaseMinimumUnits().getAsInt());
+            assertThat(cert.worstMinimumUnits()).isEqualTo(worst.minimumUnits());
             assertThat(worst.ending()).isEqualTo(Replay.Ending.COMPLETE);
+            // the default policy is the safest: its worst case is the highest guaranteed floor
+            assertThat(worst.minimumUnits()).isEqualTo(plan.highestFloorUnits().getAsInt());
             Replay nominal = mr.nominal();
-            ReplayChecks.assertIsARun(mr.arena(), nominal, mr.analysis().startUnits());
+            ReplayChecks.assertIsARun(an.arena(), nominal, an.startUnits());
             assertThat(nominal.ending()).isEqualTo(Replay.Ending.COMPLETE);
             assertThat(nominal.minimumUnits()).isGreaterThanOrEqualTo(worst.minimumUnits());
         } else {
-            dockline.solve.WinningRegion region = mr.analysis().region().orElseThrow();
+            dockline.solve.WinningRegion region = an.region().orElseThrow();
             ReplayStep last = worst.last();
-            int v = mr.arena().robotVertex(last.cell().index(mr.arena().width()), last.budgetLeft());
+            int v = an.arena().robotVertex(last.cell().index(an.arena().width()), last.budgetLeft());
             boolean breach = worst.ending() == Replay.Ending.BELOW_FLOOR && last.batteryUnits() < floor;
             boolean stuck = worst.ending() != Replay.Ending.COMPLETE
                     && !region.robotWins(v, last.progressMask(), last.batteryUnits());
@@ -59,8 +68,8 @@ class DemoMissionReplayTest {
     void replays_areDeterministic(Path file) throws Exception {
         Mission m1 = MissionLoader.load(file);
         Mission m2 = MissionLoader.load(file);
-        Replay a = MissionReplays.of(m1, ReserveOptions.defaults()).worstCase();
-        Replay b = MissionReplays.of(m2, ReserveOptions.defaults()).worstCase();
+        Replay a = PlanReplaysProperties.replays(m1, PolicyChoice.SAFEST).replays().orElseThrow().worstCase();
+        Replay b = PlanReplaysProperties.replays(m2, PolicyChoice.SAFEST).replays().orElseThrow().worstCase();
         assertThat(ReplayFormats.csv(a).getBytes()).isEqualTo(ReplayFormats.csv(b).getBytes());
         assertThat(ReplayFormats.json(m1, a)).isEqualTo(ReplayFormats.json(m2, b));
     }

@@ -1,4 +1,4 @@
-package dockline.replay;
+package dockline.plan;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -6,14 +6,16 @@ import dockline.fixtures.BruteForce;
 import dockline.fixtures.RandomMissions;
 import dockline.fixtures.ReplayChecks;
 import dockline.model.Mission;
-import dockline.solve.reserve.ReserveOptions;
+import dockline.replay.Replay;
+import dockline.replay.ReplayStep;
+import dockline.solve.reserve.ReserveAnalysis;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.statistics.Statistics;
 
-class MissionReplaysProperties {
+class PlanReplaysProperties {
 
     @Provide
     Arbitrary<Mission> missions() {
@@ -27,25 +29,32 @@ class MissionReplaysProperties {
      * semantics for every row.
      */
     @Property(tries = 200)
-    void worstReplay_matchesSolver_andCounterexamplesEndLost(@ForAll("missions") Mission m) {
-        MissionReplays mr = MissionReplays.of(m, ReserveOptions.defaults());
-        int floor = mr.analysis().reserveUnits();
-        int start = mr.analysis().startUnits();
+    void worstReplay_matchesSolver_andCounterexamplesEndLost(@ForAll("missions") Mission m,
+                                                             @ForAll PolicyChoice choice) {
+        Plan plan = replays(m, choice);
+        ReserveAnalysis an = ((Plan.Detail.Product) plan.detail()).analysis();
+        PlanReplays mr = plan.replays().orElseThrow();
+        int floor = an.reserveUnits();
+        int start = an.startUnits();
         Replay r = mr.worstCase();
         if (start >= floor) {
-            ReplayChecks.assertIsARun(mr.arena(), r, start);
+            ReplayChecks.assertIsARun(an.arena(), r, start);
         }
-        if (mr.guaranteed()) {
-            Statistics.collect("guaranteed");
-            assertThat(mr.certified()).isTrue();
-            assertThat(r.minimumUnits()).isEqualTo(mr.analysis().worstCaseMinimumUnits().getAsInt());
+        if (plan.guaranteed()) {
+            Statistics.collect("guaranteed", choice);
+            assertThat(plan.certification().ok()).isTrue();
+            assertThat(r.minimumUnits()).isEqualTo(an.worstCaseMinimumUnits().getAsInt());
             assertThat(r.ending()).isEqualTo(Replay.Ending.COMPLETE);
+            if (choice == PolicyChoice.SAFEST) {
+                // the safest policy's worst case is the highest guaranteed floor
+                assertThat(r.minimumUnits()).isEqualTo(plan.highestFloorUnits().getAsInt());
+            }
             return;
         }
-        Statistics.collect(r.ending().word() + (mr.bestEffortFloor() >= 0 ? " (best effort)" : " (greedy)"));
+        Statistics.collect(r.ending().word() + (mr.bestEffortFloor() >= 0 ? " (best effort)" : " (greedy)"), choice);
         ReplayStep last = r.last();
-        BruteForce bf = new BruteForce(mr.arena(), floor);
-        int v = mr.arena().robotVertex(last.cell().index(mr.arena().width()), last.budgetLeft());
+        BruteForce bf = new BruteForce(an.arena(), floor);
+        int v = an.arena().robotVertex(last.cell().index(an.arena().width()), last.budgetLeft());
         boolean breach = r.ending() == Replay.Ending.BELOW_FLOOR && last.batteryUnits() < floor;
         boolean avoided = r.ending() == Replay.Ending.AVOIDED_ZONE;
         boolean stuck = r.ending() == Replay.Ending.REPEATS && !bf.wins(v, last.progressMask(), last.batteryUnits(), true);
@@ -56,5 +65,10 @@ class MissionReplaysProperties {
         }
         long events = r.steps().stream().filter(s -> !s.event().nominal()).count();
         assertThat(events).isLessThanOrEqualTo(m.map().disturbances().budget());
+    }
+
+    /** The product route with its replays, as {@code replay} plans. */
+    static Plan replays(Mission m, PolicyChoice choice) {
+        return MissionPlanner.plan(m, PlanOptions.of(new Route.Product(choice, false, false, true, false)));
     }
 }

@@ -1,0 +1,366 @@
+package dockline.plan;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.certify.Certificate;
+import dockline.certify.CertificateChecker;
+import dockline.certify.ClosedLoop;
+import dockline.certify.DiscountedCertificate;
+import dockline.certify.DiscountedCertificateChecker;
+import dockline.goal.GoalAutomaton;
+import dockline.margin.FixpointMargins;
+import dockline.margin.MarginReport;
+import dockline.margin.Margins;
+import dockline.margin.Suggestion;
+import dockline.margin.Suggestions;
+import dockline.model.Charge;
+import dockline.model.Mission;
+import dockline.model.Objective;
+import dockline.monitor.ReserveMonitor;
+import dockline.solve.reserve.ChargeNeeded;
+import dockline.solve.discounted.DiscountedAnalysis;
+import dockline.solve.discounted.DiscountedOptions;
+import dockline.solve.discounted.DiscountedPolicies;
+import dockline.solve.discounted.DiscountedSolver;
+import dockline.solve.fast.FastPath;
+import dockline.policy.Policy;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.reserve.ReserveAnalysis;
+import dockline.solve.reserve.ReserveOptions;
+import dockline.solve.reserve.ReserveSolver;
+import dockline.solve.SizeEstimate;
+import dockline.solve.Verdict;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
+
+/**
+ * The one entry point from a loaded mission to everything the front ends report: {@link #plan}.
+ *
+ * <p>What it computes, by route ({@link Route}): the verdict; the method and why; the policy and its
+ * independent certificate ({@link CertificateChecker}, {@link DiscountedCertificateChecker}; a failed
+ * certificate is reported in {@link Plan#certification()}, never hidden); the lowest battery level the
+ * disturbances can force under the policy; the highest guaranteed floor; with {@link Route.Margins} the
+ * lowest starting charge, both two ways; the suggestions when not guaranteed; on request the replays and
+ * the charge needed per situation; sizes, timings and notes.
+ *
+ * <p>The arena and the goal automaton are compiled once per plan and shared by every solve of the
+ * mission's figures (the suggestions and margins probe variants of the figures, each compiled on its own).
+ *
+ * <p>Cost: one arena compile, O(cells × out-degree × budget); then the route's solve — fast path
+ * O(m·G·log(n·G)) on arena × goal (Knuth 1977), product routes O(|V| + |E|) of the product
+ * (linear-time attractor, Grädel, Thomas and Wilke 2002, ch. 2), times O(log start) for the highest
+ * floor by bisection and one more solve for the safest policy; suggestions add O(log capacity + log K)
+ * verdicts; the certificate is O(closed loop).
+ */
+public final class MissionPlanner {
+
+    private MissionPlanner() {
+    }
+
+    /** The shared inputs of one plan. */
+    private record Context(Mission mission, Arena arena, GoalAutomaton goal, PlanOptions options, long t0,
+                           long compileMillis) {
+        ProductOptions product() {
+            return options.product();
+        }
+
+        long elapsed() {
+            return millis(System.nanoTime() - t0);
+        }
+    }
+
+    /**
+     * Plans the mission by the options' route.
+     *
+     * @throws RouteNotApplicableException                if the route asked for does not apply to the mission
+     * @throws ProductTooLargeException                   if a game is over the memory budget
+     * @throws ClosedLoop.TooLargeException               if a policy's closed loop is too large to certify
+     * @throws java.util.concurrent.CancellationException if the options' cancellation flag was raised
+     * @throws ArithmeticException                        if a figure needs more than exact 64-bit arithmetic
+     * @throws IllegalArgumentException                   if the mission breaks an invariant of the arena or goal,
+     *                                                    or the discounted route is asked for a mission without
+     *                                                    a discounted objective
+     */
+    public static Plan plan(Mission mission, PlanOptions options) {
+        long t0 = System.nanoTime();
+        Arena arena = ArenaCompiler.compile(mission);
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        Context c = new Context(mission, arena, goal, options, t0, millis(System.nanoTime() - t0));
+        Route r = options.route();
+        if (r instanceof Route.Auto a) {
+            Optional<FastPath.Analysis> f = FastPath.analyse(mission, arena, goal, FastPath.DEFAULT_MAX_POLICY_ROWS,
+                    false);
+            if (f.isPresent()) {
+                return fast(c, f.get(), "the robot cannot charge on a dock before the mission is complete, so the"
+                        + " battery levels need not be in the game");
+            }
+            return product(c, Route.Product.of(a.policy()), "the robot can charge on a dock before the mission is"
+                    + " complete, so the battery levels are part of the game");
+        }
+        if (r instanceof Route.Fast f) {
+            FastPath.Analysis a = FastPath.analyse(mission, arena, goal, f.maxPolicyRows(), false)
+                    .orElseThrow(MissionPlanner::fastDoesNotApply);
+            return fast(c, a, "the fast path was asked for, and it applies: the robot cannot charge before the end");
+        }
+        if (r instanceof Route.Product p) {
+            return product(c, p, "the product game was asked for");
+        }
+        if (r instanceof Route.Stored s) {
+            return product(c, s, "the reference route was asked for: the product game stored in arrays");
+        }
+        if (r instanceof Route.VerdictOnly v) {
+            return verdictOnly(c, v);
+        }
+        if (r instanceof Route.Margins) {
+            return margins(c);
+        }
+        return discounted(c, (Route.Discounted) r);
+    }
+
+    private static RouteNotApplicableException fastDoesNotApply() {
+        return new RouteNotApplicableException("the fast path does not apply: the robot can charge on a dock before"
+                + " the mission is complete, and the fast path counts consumption only");
+    }
+
+    // ---- fast path
+
+    private static Plan fast(Context c, FastPath.Analysis a, String reason) {
+        Mission m = c.mission();
+        Certification cert;
+        if (a.policy().isPresent()) {
+            Certificate ct = CertificateChecker.check(c.arena(), a.policy().get(), a.reserveUnits(), a.startUnits());
+            int worst = a.worstCaseMinimumUnits().getAsInt();
+            Optional<String> problem = ct.ok() && ct.worstMinimumUnits() == worst ? Optional.empty()
+                    : Optional.of("the fast path says guaranteed with a worst level of " + worst + " units, but its"
+                    + " policy " + (ct.ok() ? "has a worst level of " + ct.worstMinimumUnits() + " units under"
+                    : "failed") + " the independent certificate: " + ct.reason());
+            cert = new Certification.Reserve(ct, problem);
+        } else if (a.guaranteed()) {
+            cert = new Certification.NotChecked("the closed loop is too large (" + (a.loopTooLarge() ? "more than "
+                    + a.maxPolicyRows() : Long.toString(a.loopStates())) + " states; the policy rows are written out"
+                    + " and re-checked up to " + a.maxPolicyRows() + ")");
+        } else {
+            cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
+        }
+        List<Suggestion> suggestions = List.of();
+        String suggestionsNote = null;
+        List<String> notes = new ArrayList<>();
+        if (!a.guaranteed()) {
+            try {
+                suggestions = Suggestions.find(m, c.product(), a.highestGuaranteedReserveUnits().isPresent()
+                        ? a.highestGuaranteedReserveUnits() : OptionalInt.of(-1));
+            } catch (ProductTooLargeException e) {
+                suggestionsNote = "no suggestions: they are searched on the product game, and " + e.getMessage();
+                notes.add(suggestionsNote);
+            }
+        }
+        return new Plan(m, new Objective.Reserve(), a.verdict(), Method.FAST, reason, a.policy(), null,
+                a.highestGuaranteedReserveUnits().orElse(a.reserveUnits()), cert, a.worstCaseMinimumUnits(),
+                Optional.empty(), a.highestGuaranteedReserveUnits(), true, OptionalInt.empty(), suggestions,
+                suggestionsNote, Optional.empty(), Optional.empty(),
+                new Plan.Size(a.pairVertices(), -1, a.exploredVertices(), null),
+                new Plan.Timings(c.compileMillis(), 0, a.solveMillis(), c.elapsed()), notes, new Plan.Detail.Fast(a));
+    }
+
+    // ---- verdict only
+
+    private static Plan verdictOnly(Context c, Route.VerdictOnly v) {
+        Mission m = c.mission();
+        if (v.where() != Route.VerdictOnly.Where.PRODUCT) {
+            Optional<FastPath.Analysis> f = FastPath.analyse(m, c.arena(), c.goal(), FastPath.DEFAULT_MAX_POLICY_ROWS,
+                    true);
+            if (f.isPresent()) {
+                FastPath.Analysis a = f.get();
+                return new Plan(m, new Objective.Reserve(), a.verdict(), Method.FAST, "only the verdict was asked"
+                        + " for, and the robot cannot charge before the end: the fast path stops once it is known",
+                        Optional.empty(), null, a.reserveUnits(), new Certification.NotChecked(
+                        "verdict only, not certified"), OptionalInt.empty(), Optional.empty(), OptionalInt.empty(),
+                        false, OptionalInt.empty(), List.of(), null, Optional.empty(), Optional.empty(),
+                        new Plan.Size(a.pairVertices(), -1, a.exploredVertices(), null),
+                        new Plan.Timings(c.compileMillis(), 0, a.solveMillis(), c.elapsed()), List.of(),
+                        new Plan.Detail.VerdictOnlyFast(a));
+            }
+            if (v.where() == Route.VerdictOnly.Where.FAST) {
+                throw fastDoesNotApply();
+            }
+        }
+        ReserveSolver.ImplicitVerdict iv = ReserveSolver.decideImplicitly(m, c.arena(), c.goal(), c.product());
+        return new Plan(m, new Objective.Reserve(), iv.verdict(), Method.IMPLICIT_VERDICT, "only the verdict was asked"
+                + " for: the product game without storing it, its attractor stopped once the start was decided",
+                Optional.empty(), null, m.reserveUnits(), new Certification.NotChecked("verdict only, not certified"),
+                OptionalInt.empty(), Optional.empty(), OptionalInt.empty(), false, OptionalInt.empty(), List.of(), null,
+                Optional.empty(), Optional.empty(),
+                new Plan.Size(iv.forecastVertices(), iv.edgesScanned(), iv.exploredVertices(), null),
+                new Plan.Timings(c.compileMillis(), 0, iv.millis(), c.elapsed()), List.of(),
+                new Plan.Detail.VerdictOnlyProduct(iv));
+    }
+
+    // ---- product routes
+
+    private static Plan product(Context c, Route.Product p, String reason) {
+        return product(c, p.policy(), false, null, p.highestFloor(), p.suggestions(),
+                p.replays(), p.heatMap(), reason);
+    }
+
+    private static Plan product(Context c, Route.Stored s, String reason) {
+        return product(c, s.policy(), true, s.solver(), true, true, false, false, reason);
+    }
+
+    private static Plan product(Context c, PolicyChoice choice, boolean stored,
+                                dockline.solve.game.GameSolver.Factory solver, boolean highestFloor, boolean wantSuggestions,
+                                boolean wantReplays, boolean wantHeatMap, String reason) {
+        Mission m = c.mission();
+        ReserveOptions ro = ReserveOptions.defaults().withMemoryBudget(c.options().memoryBudgetBytes())
+                .withCancelled(c.options().cancelled()).withHighestReserve(highestFloor)
+                .withSafestPolicy(choice == PolicyChoice.SAFEST)
+                .withRoute(!stored ? ReserveOptions.Route.IMPLICIT : solver == null ? ReserveOptions.Route.PRODUCT
+                        : ReserveOptions.Route.stored(solver));
+        ReserveAnalysis a = ReserveSolver.analyse(m, c.arena(), c.goal(), ro);
+        if (wantReplays && !a.guaranteed() && !highestFloor) {
+            // the best effort of the replays needs the highest guaranteed floor
+            a = ReserveSolver.analyse(m, c.arena(), c.goal(), ro.withHighestReserve(true));
+        }
+        Certification cert;
+        ClosedLoop loop = null;
+        if (a.guaranteed()) {
+            // never a silent "guaranteed": the policy is re-checked on an independent code path
+            ClosedLoop l = CertificateChecker.closedLoop(c.arena(), a.policy().orElseThrow(), a.reserveUnits(),
+                    a.startUnits());
+            Certificate ct = CertificateChecker.certify(l);
+            cert = new Certification.Reserve(ct, ct.ok() ? Optional.empty()
+                    : Optional.of("the solver says guaranteed, but its policy failed the independent certificate: "
+                    + ct.reason()));
+            loop = ct.ok() ? l : null;
+        } else {
+            cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
+        }
+        List<Suggestion> suggestions = !wantSuggestions || a.guaranteed() ? List.of()
+                : Suggestions.find(m, c.product(), a.highestReserveSearched() ? a.highestGuaranteedReserveUnits()
+                        : OptionalInt.empty());
+        Optional<PlanReplays> replays = Optional.empty();
+        if (wantReplays) {
+            replays = Optional.of(replays(c, a, loop, cert));
+        }
+        Optional<ChargeNeeded> heat = Optional.empty();
+        if (wantHeatMap) {
+            heat = Optional.of(ChargeNeeded.computeImplicitly(c.arena(), c.goal(),
+                    new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), c.product()));
+        }
+        return new Plan(m, new Objective.Reserve(), a.verdict(), a.storedProduct() ? Method.STORED_PRODUCT
+                : Method.PRODUCT, reason, a.policy(), choice, a.policyFloorUnits(), cert, a.worstCaseMinimumUnits(),
+                Optional.empty(), a.highestGuaranteedReserveUnits(), a.highestReserveSearched(), OptionalInt.empty(),
+                suggestions, null, replays, heat, new Plan.Size(a.productVertices(), a.productEdges(), -1,
+                a.estimate()), new Plan.Timings(c.compileMillis(), a.buildMillis(), a.solveMillis(), c.elapsed()),
+                a.notes(), new Plan.Detail.Product(a));
+    }
+
+    /**
+     * The replays: of the certified policy when guaranteed; else of the best effort, the certified
+     * policy for the highest floor that can be guaranteed from the start (when there is one).
+     */
+    private static PlanReplays replays(Context c, ReserveAnalysis a, ClosedLoop certified, Certification cert) {
+        int floor = a.reserveUnits();
+        int start = a.startUnits();
+        if (a.guaranteed()) {
+            String why = cert instanceof Certification.Reserve r ? r.certificate().reason() : "no certificate";
+            return new PlanReplays(true, c.arena(), floor, start, certified, -1, null, why);
+        }
+        int best = a.highestReserveSearched() ? a.highestGuaranteedReserveUnits().orElse(-1)
+                // the solver skipped the search (memory); the fixpoint needs far less
+                : FixpointMargins.highestFloor(c.arena(), c.goal(), start);
+        ClosedLoop loop = null;
+        if (best >= 0) {
+            Mission lower = c.mission().withReserve(Charge.wh(c.mission().scale().toWh(best)));
+            ReserveAnalysis b = ReserveSolver.analyse(lower, c.arena(), c.goal(), ReserveOptions.defaults()
+                    .withMemoryBudget(c.options().memoryBudgetBytes()).withCancelled(c.options().cancelled())
+                    .withHighestReserve(false).withSafestPolicy(false));
+            if (b.guaranteed() && b.reserveUnits() == best) {
+                ClosedLoop l = CertificateChecker.closedLoop(c.arena(), b.policy().orElseThrow(), best, start);
+                if (CertificateChecker.certify(l).ok()) {
+                    loop = l;
+                }
+            }
+            if (loop == null) {
+                throw new IllegalStateException("internal: the policy for the highest guaranteed floor " + best
+                        + " units could not be certified");
+            }
+        }
+        // not guaranteed: every route solved its game to the end, so the whole winning region is known
+        var region = a.region().orElseThrow(() -> new IllegalStateException(
+                "internal: the solver did not keep the winning region of a mission that is not guaranteed"));
+        return new PlanReplays(false, c.arena(), floor, start, loop, best, region, null);
+    }
+
+    // ---- margins
+
+    private static Plan margins(Context c) {
+        Mission m = c.mission();
+        MarginReport r = Margins.compute(m, c.arena(), c.goal(), c.product());
+        List<String> notes = new ArrayList<>();
+        if (!r.agree()) {
+            notes.add("the bisection over the threshold solver and the minimum-credit fixpoint disagree");
+        }
+        return new Plan(m, new Objective.Reserve(), Verdict.of(r.guaranteed()), Method.MARGINS,
+                "the margins were asked for: each is computed two independent ways, which must agree",
+                Optional.empty(), null, m.reserveUnits(), new Certification.NotChecked("the margins give no policy"),
+                OptionalInt.empty(), Optional.empty(), r.highestReserveUnits(), true, r.lowestStartUnits(),
+                r.suggestions(), null, Optional.empty(), Optional.empty(), new Plan.Size(-1, -1, -1, null),
+                new Plan.Timings(c.compileMillis(), 0, r.bisection().millis() + r.fixpoint().millis(), c.elapsed()),
+                notes, new Plan.Detail.Margins(r));
+    }
+
+    // ---- discounted
+
+    private static Plan discounted(Context c, Route.Discounted d) {
+        Mission m = c.mission();
+        if (!(m.objective() instanceof Objective.Discounted o)) {
+            throw new IllegalArgumentException("the discounted route needs a mission with a discounted objective");
+        }
+        DiscountedAnalysis a = DiscountedSolver.analyse(m, c.arena(), c.goal(), o, DiscountedOptions.defaults()
+                .withKeepReserve(d.keepReserve()).withAlsoOptimise(d.alsoOptimise())
+                .withMemoryBudget(c.options().memoryBudgetBytes()).withCancelled(c.options().cancelled()));
+        Optional<Policy> policy = Optional.empty();
+        Certification cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
+        OptionalInt lowest = OptionalInt.empty();
+        if (a.guaranteed()) {
+            Policy p = DiscountedPolicies.of(a);
+            policy = Optional.of(p);
+            DiscountedCertificate ct = DiscountedCertificateChecker.check(c.arena(), p, o,
+                    a.reserveKept() ? OptionalInt.of(m.reserveUnits()) : OptionalInt.empty(), m.startUnits());
+            cert = new Certification.Discounted(ct, Optional.ofNullable(certificateProblem(a, ct)));
+            if (ct.ok() && ct.reserveKept()) {
+                lowest = OptionalInt.of(ct.worstMinimumUnits());
+            }
+        }
+        SizeEstimate est = a.estimate();
+        return new Plan(m, o, a.verdict(), Method.COMPARATOR_PRODUCT, "the mission's objective is a discounted score:"
+                + " a comparator automaton decides it exactly on the product game" + (a.reserveKept()
+                ? ", with the reserve floor" : ", without the reserve floor"), policy, null, m.reserveUnits(), cert,
+                lowest, a.worstCaseScore(), OptionalInt.empty(), false, OptionalInt.empty(), List.of(), null,
+                Optional.empty(), Optional.empty(), new Plan.Size(a.productVertices(), a.productEdges(), -1, est),
+                new Plan.Timings(c.compileMillis(), a.buildMillis(), a.solveMillis(), c.elapsed()), a.notes(),
+                new Plan.Detail.Discounted(a));
+    }
+
+    /**
+     * What is wrong with the certificate of a guaranteed discounted analysis (failed, or its exact worst
+     * score differs from the solver's), or null when nothing is.
+     */
+    public static String certificateProblem(DiscountedAnalysis a, DiscountedCertificate cert) {
+        if (!cert.ok()) {
+            return "the solver says guaranteed, but its policy failed the independent certificate: " + cert.reason();
+        }
+        if (a.worstCaseScore().isPresent() && !cert.worstScore().orElseThrow().sameValue(a.worstCaseScore().get())) {
+            return "the solver says guaranteed, but its worst score " + a.worstCaseScore().get() + " differs from the"
+                    + " certificate's exact worst score " + cert.worstScore().get();
+        }
+        return null;
+    }
+
+    private static long millis(long nanos) {
+        return nanos / 1_000_000L;
+    }
+}

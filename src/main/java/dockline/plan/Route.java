@@ -1,0 +1,114 @@
+package dockline.plan;
+
+import dockline.solve.fast.FastPath;
+import dockline.solve.game.GameSolver;
+
+/**
+ * How {@link MissionPlanner#plan} answers the mission. Each route is a record with only the settings
+ * that route reads, so a setting a route would ignore cannot be passed to it.
+ */
+public sealed interface Route permits Route.Auto, Route.Fast, Route.Product, Route.Stored, Route.VerdictOnly,
+        Route.Margins, Route.Discounted {
+
+    /**
+     * Reserve objective, the route {@code check} takes by default: {@link Fast} when the robot cannot
+     * charge before the mission is complete, else {@link Product}; the highest floor is searched and,
+     * when not guaranteed, suggestions are found.
+     *
+     * @param policy which guaranteed policy the product route reports (the fast path's is the safest anyway)
+     */
+    record Auto(PolicyChoice policy) implements Route {
+        public Auto {
+            policy = policy == null ? PolicyChoice.SAFEST : policy;
+        }
+    }
+
+    /**
+     * Reserve objective on arena × goal by the minimum-charge solver (Knuth 1977), for missions
+     * without charging before the end; its policy of least need is the safest policy.
+     *
+     * @param maxPolicyRows the policy is written out and certified up to this many robot situations
+     */
+    record Fast(int maxPolicyRows) implements Route {
+        public Fast {
+            if (maxPolicyRows < 0) {
+                throw new IllegalArgumentException("maxPolicyRows must not be negative");
+            }
+        }
+
+        public static Fast defaults() {
+            return new Fast(FastPath.DEFAULT_MAX_POLICY_ROWS);
+        }
+    }
+
+    /**
+     * Reserve objective on the product game (arena × goal × battery levels) with its moves generated on
+     * demand.
+     *
+     * @param policy       which guaranteed policy is reported
+     * @param highestFloor search the highest guaranteed floor (always done for {@link PolicyChoice#SAFEST},
+     *                     and for the replays of a mission that is not guaranteed)
+     * @param suggestions  when not guaranteed, find what would make it guaranteed
+     * @param replays      also make the worst-case, nominal and forced replays ({@link PlanReplays})
+     * @param heatMap      also compute the charge needed from every situation ({@link dockline.solve.reserve.ChargeNeeded})
+     */
+    record Product(PolicyChoice policy, boolean highestFloor, boolean suggestions, boolean replays, boolean heatMap)
+            implements Route {
+        public Product {
+            policy = policy == null ? PolicyChoice.SAFEST : policy;
+        }
+
+        /** The policy, the highest floor and the suggestions; no replays, no heat map. */
+        public static Product of(PolicyChoice policy) {
+            return new Product(policy, true, true, false, false);
+        }
+    }
+
+    /**
+     * Reserve objective on the product game stored in CSR arrays: the reference route.
+     *
+     * @param policy which guaranteed policy is reported
+     * @param solver the attractor solver of the stored game (null: the compact attractor)
+     */
+    record Stored(PolicyChoice policy, GameSolver.Factory solver) implements Route {
+        public Stored {
+            policy = policy == null ? PolicyChoice.SAFEST : policy;
+        }
+    }
+
+    /**
+     * Reserve objective, the verdict alone, stopping as soon as it is known: no policy, no certificate,
+     * no margins.
+     *
+     * @param where {@link Where#AUTO}: the fast path's early exit when it applies, else the product game
+     *              without storing it; {@link Where#FAST} or {@link Where#PRODUCT} to force one of them
+     */
+    record VerdictOnly(Where where) implements Route {
+        /** Where a verdict-only route decides. */
+        public enum Where { AUTO, FAST, PRODUCT }
+
+        public VerdictOnly {
+            where = where == null ? Where.AUTO : where;
+        }
+    }
+
+    /**
+     * Reserve objective: the highest guaranteed floor and the lowest starting charge, each computed two
+     * independent ways (bisection over the threshold solver; the minimum-credit fixpoint), and the
+     * suggestions when not guaranteed. No policy.
+     */
+    record Margins() implements Route {
+    }
+
+    /**
+     * The mission's discounted objective (its tasks and dock too) on the comparator product.
+     *
+     * @param keepReserve  keep the reserve floor as well (the default)
+     * @param alsoOptimise also run the optimisation baseline (value iteration)
+     */
+    record Discounted(boolean keepReserve, boolean alsoOptimise) implements Route {
+        public static Discounted defaults() {
+            return new Discounted(true, false);
+        }
+    }
+}

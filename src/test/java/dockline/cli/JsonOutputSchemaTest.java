@@ -1,0 +1,161 @@
+package dockline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.networknt.schema.JsonSchema;
+import com.networknt.schema.JsonSchemaFactory;
+import com.networknt.schema.SpecVersion;
+import com.networknt.schema.ValidationMessage;
+import java.io.File;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Every command's {@code --json} output, and every JSON file the tool writes (policy, replay,
+ * margins), validated against the JSON Schema files published in the jar
+ * (src/main/resources/dockline/schemas). The reference is a general-purpose JSON Schema validator
+ * (networknt json-schema-validator, JSON Schema draft 2020-12), which shares no code with the
+ * commands. The schemas forbid keys they do not list, so a figure under another name fails here.
+ */
+class JsonOutputSchemaTest {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir
+    Path dir;
+
+    static JsonSchema schema(String name) throws Exception {
+        try (InputStream in = JsonOutputSchemaTest.class.getResourceAsStream("/dockline/schemas/" + name
+                + ".schema.json")) {
+            assertThat(in).as("schema %s in the jar's resources", name).isNotNull();
+            return JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V202012).getSchema(in);
+        }
+    }
+
+    private static JsonNode valid(String schema, String json) throws Exception {
+        JsonNode node = JSON.readTree(json);
+        Set<ValidationMessage> problems = schema(schema).validate(node);
+        assertThat(problems).as("%s against %s.schema.json", json, schema).isEmpty();
+        return node;
+    }
+
+    private static JsonNode command(String schema, int exit, String... args) throws Exception {
+        CheckCommandTest.Run r = CheckCommandTest.run(args);
+        assertThat(r.code()).as(String.join(" ", args) + "\n" + r.err()).isEqualTo(exit);
+        return valid(schema, r.out());
+    }
+
+    @Test
+    void check_everyRoute_andObjective() throws Exception {
+        command("check", ExitCodes.OK, "check", "missions/night-round.yaml", "--json");
+        command("check", ExitCodes.OK, "check", "missions/night-round.yaml", "--json", "--fewest-moves");
+        command("check", ExitCodes.OK, "check", "missions/night-round.yaml", "--json", "--method", "stored");
+        command("check", ExitCodes.OK, "check", "missions/night-round.yaml", "--json", "--verdict-only");
+        command("check", ExitCodes.OK, "check", "missions/supply-run.yaml", "--json");
+        JsonNode fast = command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/late-return.yaml", "--json");
+        assertThat(fast.get("method").asText()).isEqualTo("fast");
+        command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/late-return.yaml", "--json", "--verdict-only");
+        command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/late-return.yaml", "--json", "--method",
+                "product");
+        command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/late-return.yaml", "--json", "--method",
+                "product", "--verdict-only");
+        command("check", ExitCodes.OK, "check", "missions/late-return.yaml", "--json", "--start-charge", "100%");
+        command("check", ExitCodes.OK, "check", "missions/discounted-trap.yaml", "--json", "--also-optimise");
+        command("check", ExitCodes.OK, "check", "missions/discounted-trap.yaml", "--json", "--score-only");
+        command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/discounted-trap.yaml", "--json",
+                "--threshold", "6");
+    }
+
+    @Test
+    void export_andThePolicyFilesItWrites() throws Exception {
+        Path p = dir.resolve("p.json");
+        command("export", ExitCodes.OK, "export", "missions/night-round.yaml", "--json", "--policy", p.toString());
+        valid("policy", Files.readString(p));
+        Path q = dir.resolve("q.json");
+        command("export", ExitCodes.OK, "export", "missions/discounted-trap.yaml", "--json", "--policy", q.toString());
+        valid("policy", Files.readString(q));
+        command("export", ExitCodes.NOT_GUARANTEED, "export", "missions/late-return.yaml", "--json", "--policy",
+                dir.resolve("r.json").toString());
+    }
+
+    @Test
+    void replay_andItsFile() throws Exception {
+        Path f = dir.resolve("replay.json");
+        command("replay", ExitCodes.OK, "replay", "missions/night-round.yaml", "--json", "--json-file", f.toString());
+        valid("replay", Files.readString(f));
+        command("replay", ExitCodes.OK, "replay", "missions/supply-run.yaml", "--json", "--disturbance", "nominal");
+        command("replay", ExitCodes.NOT_GUARANTEED, "replay", "missions/late-return.yaml", "--json");
+    }
+
+    @Test
+    void margin_andItsFile() throws Exception {
+        Path f = dir.resolve("margin.json");
+        command("margin", ExitCodes.OK, "margin", "missions/night-round.yaml", "--json", "--json-file", f.toString());
+        valid("margin", Files.readString(f));
+        command("margin", ExitCodes.NOT_GUARANTEED, "margin", "missions/late-return.yaml", "--json");
+    }
+
+    @Test
+    void validate_validAndNot() throws Exception {
+        command("validate", ExitCodes.OK, "validate", "missions/night-round.yaml", "maps/clinic-wing.yaml", "--json");
+        Path bad = dir.resolve("bad.yaml");
+        Files.writeString(bad, "name: x\nmap: nowhere.yaml\n");
+        command("validate", ExitCodes.BAD_INPUT, "validate", bad.toString(), "--json");
+    }
+
+    /** {@code view --json} with a file that cannot be opened: the messages as JSON, no window. */
+    @Test
+    void view_messages() throws Exception {
+        JsonNode j = command("view", ExitCodes.BAD_INPUT, "view", dir.resolve("missing.yaml").toString(), "--json");
+        assertThat(j.get("ok").asBoolean()).isFalse();
+        assertThat(j.get("messages")).isNotEmpty();
+    }
+
+    /** {@code render --json} in a fresh JVM (the toolkit starts headless there, as in {@code RenderCommandTest}). */
+    @Test
+    void render_inAFreshJvm() throws Exception {
+        Path png = dir.resolve("night.png");
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), "dockline.cli.Main", "render",
+                "missions/night-round.yaml", "--out", png.toString(), "--size", "600x400", "--json"));
+        ProcessBuilder pb = new ProcessBuilder(cmd);
+        pb.environment().remove("DISPLAY");
+        pb.environment().remove("WAYLAND_DISPLAY");
+        pb.environment().remove("JAVA_TOOL_OPTIONS");
+        File out = dir.resolve("out.json").toFile();
+        pb.redirectOutput(out);
+        pb.redirectError(dir.resolve("err.txt").toFile());
+        Process p = pb.start();
+        boolean done = p.waitFor(5, TimeUnit.MINUTES);
+        if (!done) {
+            p.destroyForcibly();
+        }
+        assertThat(done).isTrue();
+        assertThat(p.exitValue()).as(Files.readString(dir.resolve("err.txt"))).isEqualTo(ExitCodes.OK);
+        JsonNode j = valid("render", Files.readString(out.toPath()));
+        assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
+    }
+
+    /** The schemas can fail: a key under an earlier name, or a missing key, is a problem. */
+    @Test
+    void schemas_rejectOtherNames_andMissingKeys() throws Exception {
+        ObjectNode o = (ObjectNode) JSON.readTree(CheckCommandTest.run("check", "missions/night-round.yaml",
+                "--json").out());
+        ObjectNode renamed = o.deepCopy();
+        renamed.set("worstCaseMinimumUnits", renamed.remove("lowestLevelUnits"));
+        assertThat(schema("check").validate(renamed)).isNotEmpty();
+        ObjectNode missing = o.deepCopy();
+        missing.remove("caveats");
+        assertThat(schema("check").validate(missing)).isNotEmpty();
+    }
+}

@@ -1,0 +1,141 @@
+package dockline.solve.reserve;
+
+import dockline.fixtures.TinyMission;
+import dockline.model.Cell;
+import dockline.model.DisturbanceModel;
+import dockline.model.EventDuration;
+import dockline.model.EventKind;
+import dockline.model.EventRule;
+import dockline.model.Mission;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+
+/**
+ * Random tiny missions with doors and blockages, each lasting or momentary at random, optional
+ * {@code at-most} limits, budgets 0 to 3 (invented data, drawn from a seed so failures reproduce).
+ */
+public final class LastingMissions {
+
+    private LastingMissions() {
+    }
+
+    /**
+     * @param slips whether slip rules may appear (the dominance property is for maps without them)
+     */
+    public static Mission fromSeed(long seed, boolean slips) {
+        Random r = new Random(seed);
+        int w = 2 + r.nextInt(3);
+        int h = 2 + r.nextInt(2);
+        char[][] g = new char[h][w];
+        for (int y = 0; y < h; y++) {
+            for (int x = 0; x < w; x++) {
+                int k = r.nextInt(10);
+                g[y][x] = k < 1 ? '#' : k < 3 ? 'c' : k < 6 ? '|' : '.';
+            }
+        }
+        Cell start = new Cell(r.nextInt(w), r.nextInt(h));
+        g[start.y()][start.x()] = '.';
+        Cell dock = new Cell(r.nextInt(w), r.nextInt(h));
+        g[dock.y()][dock.x()] = 'D';
+        String[] rows = new String[h];
+        List<Cell> free = new ArrayList<>();
+        for (int y = 0; y < h; y++) {
+            rows[y] = new String(g[y]);
+            for (int x = 0; x < w; x++) {
+                if (g[y][x] != '#') {
+                    free.add(new Cell(x, y));
+                }
+            }
+        }
+        TinyMission m = TinyMission.plan(rows);
+        int cap = 5 + r.nextInt(10);
+        m.capacity(cap).costs(1 + r.nextInt(2), 1 + r.nextInt(3), r.nextInt(2), r.nextInt(3) == 0 ? 1 + r.nextInt(2) : 0);
+        if (r.nextInt(5) == 0) {
+            m.eight();
+        }
+        m.start(start.toString(), 1 + r.nextInt(cap));
+        m.reserve(r.nextInt(3));
+        int budget = r.nextInt(4);
+        m.budget(budget);
+        m.rule(EventKind.DOOR_SHUT, "doors", pick(r, free, 1 + r.nextInt(3)), BigDecimal.ZERO);
+        if (r.nextBoolean()) {
+            m.rule(EventKind.DOOR_SHUT, "more doors", pick(r, free, 1 + r.nextInt(2)), BigDecimal.ZERO);
+        }
+        if (r.nextInt(3) > 0) {
+            m.rule(EventKind.BLOCKAGE, "carts", pick(r, free, 1 + r.nextInt(2)), BigDecimal.ZERO);
+        }
+        if (r.nextBoolean()) {
+            m.rule(EventKind.BLOCKAGE, "beds", pick(r, free, 1 + r.nextInt(2)), BigDecimal.ZERO);
+        }
+        if (slips && r.nextBoolean()) {
+            m.rule(EventKind.SLIP, "wet patch", pick(r, free, 1 + r.nextInt(2)), BigDecimal.ZERO);
+        }
+        if (r.nextInt(3) == 0) {
+            m.rule(EventKind.DRAG, "rug", pick(r, free, 1 + r.nextInt(2)), BigDecimal.valueOf(1 + r.nextInt(2)));
+        }
+        List<String> names = new ArrayList<>();
+        int zones = r.nextInt(3);
+        for (int i = 0; i < zones; i++) {
+            String n = "room-" + (char) ('a' + i);
+            m.zone(n, pick(r, free, 1 + r.nextInt(2)));
+            names.add(n);
+        }
+        m.visit(r.nextBoolean(), names.toArray(new String[0]));
+        if (r.nextInt(6) == 0) {
+            List<Cell> av = pick(r, free, 1);
+            av.remove(start);
+            if (!av.isEmpty()) {
+                m.zone("keep-out", av);
+                m.avoid("keep-out");
+            }
+        }
+        Mission base = m.build();
+        List<EventRule> rules = new ArrayList<>();
+        for (EventRule rule : base.map().disturbances().rules()) {
+            EventRule x = rule;
+            boolean closes = rule.kind() == EventKind.DOOR_SHUT || rule.kind() == EventKind.BLOCKAGE;
+            if (closes && r.nextInt(3) > 0) {
+                x = x.withDuration(EventDuration.REST_OF_MISSION);
+            }
+            if (r.nextInt(3) == 0) {
+                x = x.withAtMost(r.nextInt(budget + 1), -1);
+            }
+            rules.add(x);
+        }
+        return withRules(base, rules);
+    }
+
+    public static Mission withRules(Mission base, List<EventRule> rules) {
+        return new Mission(base.name(), base.source(),
+                base.map().withDisturbances(new DisturbanceModel(base.map().disturbances().budget(), rules)),
+                base.robot(), base.start(), base.startCharge(), base.reserve(), base.tasks(), base.objective());
+    }
+
+    private static List<Cell> pick(Random r, List<Cell> free, int n) {
+        List<Cell> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            out.add(free.get(r.nextInt(free.size())));
+        }
+        return out;
+    }
+
+    public static String describe(Mission m) {
+        StringBuilder sb = new StringBuilder();
+        for (String row : m.map().rows()) {
+            sb.append(row).append('\n');
+        }
+        sb.append("start ").append(m.start()).append(" charge ").append(m.startUnits()).append(" reserve ")
+                .append(m.reserveUnits()).append(" cap ").append(m.capacityUnits()).append(" budget ")
+                .append(m.map().disturbances().budget()).append(" wait ").append(m.robot().waitWh())
+                .append(" charge ").append(m.robot().chargeWh()).append(' ').append(m.robot().neighbourhood())
+                .append("\nzones ").append(m.map().zones()).append("\ntasks ").append(m.tasks());
+        for (EventRule r : m.map().disturbances().rules()) {
+            sb.append("\n  ").append(r.kind().word()).append(' ').append(r.cells()).append(' ')
+                    .append(r.duration().word()).append(r.limited() ? " at-most " + r.atMost() : "")
+                    .append(r.extraWh().signum() > 0 ? " extra " + r.extraWh() : "");
+        }
+        return sb.toString();
+    }
+}
