@@ -51,8 +51,10 @@ import java.util.Arrays;
  *
  * <p><b>Cost.</b> At most (number of charging dock positions + 1) rounds, in practice the largest
  * number of reloads a worst-case play needs plus two; each round O(m·G·log(n·G)) time for an arena of
- * n vertices and m edges and G goal states, and 9 bytes per robot position and 5 per disturbance
- * position, plus 12 bytes per policy entry. Nothing depends on the number of battery levels except
+ * n vertices and m edges and G goal states (every round starts afresh: values only fall between rounds,
+ * but a dock that turns good lowers values below Dijkstra's frontier, so a round cannot be resumed), and
+ * 11 bytes per robot position and 5 per disturbance position, plus 12 bytes per policy entry (one per
+ * position and round in which its need fell) and the heap. Nothing depends on the number of battery levels except
  * the size of the numbers. The highest floor needs one solve per floor tried (U changes the good
  * docks), see {@link ChargingRoute}.
  */
