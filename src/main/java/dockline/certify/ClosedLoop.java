@@ -52,12 +52,14 @@ public final class ClosedLoop {
     }
 
     /** The loop would exceed the node limit. */
-    public static final class TooLargeException extends RuntimeException {
+    public static final class TooLargeException extends dockline.model.ResourceLimitException {
         private static final long serialVersionUID = 1L;
 
         /** The loop would have more than {@code limit} nodes. */
         public TooLargeException(int limit) {
-            super("the closed loop of the policy has more than " + limit + " states");
+            super("the closed loop of the policy has more than " + limit + " states, too many to certify",
+                    "make the game smaller: a coarser energy resolution or a smaller disturbance budget K (the limit is"
+                            + " the certificate checker's own, so more memory does not help)");
         }
     }
 

@@ -47,6 +47,9 @@ public final class BenchCommand implements Callable<Integer> {
                     + " a development aid: the ratios between instances are then missing")
     List<String> instances;
 
+    @Option(names = "--reading", description = "run only the reading section: 8 MiB map files on one line, in short"
+            + " lines and in the longest lines read (reading must be linear in the file size)")
+    boolean reading;
     @Option(names = "--resolution-row", description = "run only the row \"resolution independence\": the charging"
             + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
     boolean resolutionRow;
@@ -68,6 +71,12 @@ public final class BenchCommand implements Callable<Integer> {
             out.print(row.toText());
             out.flush();
             return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
+        }
+        if (reading) {
+            dockline.bench.ReadingBench.Result r = dockline.bench.ReadingBench.run(3);
+            out.print(json ? Json.readingJson(r) : r.toText());
+            out.flush();
+            return ExitCodes.OK;
         }
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
         if (sizes != null) {

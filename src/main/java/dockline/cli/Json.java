@@ -82,4 +82,25 @@ final class Json {
             throw new IllegalStateException("cannot write JSON", e);
         }
     }
+
+    /** The reading benchmark as JSON: one object per layout and the slowest ratio. */
+    static String readingJson(dockline.bench.ReadingBench.Result r) {
+        ObjectNode o = object();
+        ArrayNode rows = o.putArray("reading");
+        for (dockline.bench.ReadingBench.Row row : r.rows()) {
+            ObjectNode ro = rows.addObject();
+            ro.put("layout", row.layout());
+            ro.put("bytes", row.bytes());
+            ro.put("lines", row.lines());
+            ro.put("bestMillis", row.bestMillis());
+            ro.put("outcome", row.outcome());
+        }
+        o.put("worstRatio", r.worstRatio());
+        o.put("met", r.met());
+        try {
+            return MAPPER.writeValueAsString(o) + System.lineSeparator();
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
 }

@@ -1,5 +1,8 @@
 package dockline.cli;
 
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -26,12 +29,95 @@ public final class Main implements Runnable {
         return commandLine().execute(args);
     }
 
+    @CommandLine.Option(names = "--debug", description = "on an internal error, print the stack trace on standard"
+            + " error instead of writing it to a log file (may also follow the command's name)")
+    boolean debugOption;
+
+    /** Removes {@code --debug} (before a {@code --}) from the arguments and turns it on. */
+    static String[] takeDebug(String[] args) {
+        List<String> out = new ArrayList<>();
+        boolean options = true;
+        boolean found = false;
+        for (String a : args) {
+            if (options && a.equals("--")) {
+                options = false;
+            }
+            if (options && a.equals("--debug")) {
+                found = true;
+            } else {
+                out.add(a);
+            }
+        }
+        Failures.debug = found;
+        return out.toArray(new String[0]);
+    }
+
+    /** Whether the arguments ask for JSON output (before a {@code --}). */
+    static boolean wantsJson(String[] args) {
+        for (String a : args) {
+            if (a.equals("--")) {
+                return false;
+            }
+            if (a.equals("--json")) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Runs the command; on an exit code of 2 or more with {@code --json}, when the command printed
+     * nothing on standard output, prints its errors as one JSON object there too
+     * ({@link Failures#jsonErrors}); they stay on standard error as text as well.
+     */
+    private static int execute(CommandLine.ParseResult parsed) {
+        CommandLine.ParseResult last = parsed;
+        while (last.hasSubcommand()) {
+            last = last.subcommand();
+        }
+        CommandLine sub = last.commandSpec().commandLine();
+        boolean json = last.hasMatchedOption("--json");
+        PrintWriter origOut = sub.getOut();
+        PrintWriter origErr = sub.getErr();
+        Failures.Tee tee = new Failures.Tee(origErr);
+        Failures.Counting counted = new Failures.Counting(origOut);
+        PrintWriter err = new PrintWriter(tee, true);
+        PrintWriter out = new PrintWriter(counted, true);
+        sub.setErr(err);
+        sub.setOut(out);
+        int code;
+        try {
+            code = new CommandLine.RunLast().execute(parsed);
+        } catch (CommandLine.ExecutionException | Error ex) {
+            // a command's exception, or an Error picocli lets through (a class missing from the jar,
+            // a stack overflow): by type, never as a bare trace
+            Throwable cause = ex instanceof CommandLine.ExecutionException && ex.getCause() != null ? ex.getCause() : ex;
+            code = Failures.report(cause, null, err);
+        } finally {
+            out.flush();
+            err.flush();
+            sub.setErr(origErr);
+            sub.setOut(origOut);
+        }
+        if (json && code >= ExitCodes.BAD_INPUT && counted.count == 0) {
+            origOut.println(Json.withCaveats(Failures.jsonErrors(tee.copy.toString(), code)));
+            origOut.flush();
+        }
+        return code;
+    }
+
     /** The configured command line, with all subcommands and the error handlers. */
     public static CommandLine commandLine() {
-        CommandLine cl = new CommandLine(new Main());
+        CommandLine cl = new CommandLine(new Main()) {
+            @Override
+            public int execute(String... args) {
+                return super.execute(takeDebug(args));
+            }
+        };
         for (Object sub : subcommands()) {
             cl.addSubcommand(sub);
         }
+        cl.setExecutionStrategy(Main::execute);
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
             c.getErr().println("dockline: " + ex.getMessage());
@@ -41,13 +127,14 @@ public final class Main implements Runnable {
                 c.getErr().println("An amount with a unit is one argument: write 12Wh, or '12 Wh' in quotes.");
             }
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help'.");
+            if (wantsJson(args)) {
+                c.getOut().println(Json.withCaveats(Failures.jsonErrors("dockline: " + ex.getMessage() + " (hint: see '"
+                        + c.getCommandSpec().qualifiedName() + " --help')", ExitCodes.BAD_INPUT)));
+                c.getOut().flush();
+            }
             return ExitCodes.BAD_INPUT;
         });
-        cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
-            c.getErr().println("dockline: internal error: " + ex);
-            c.getErr().println("Please report this with the input files.");
-            return ExitCodes.INTERNAL;
-        });
+        cl.setExecutionExceptionHandler((ex, c, parseResult) -> Failures.internal(ex, c.getErr()));
         return cl;
     }
 

@@ -1,6 +1,5 @@
 package dockline.cli;
 
-import dockline.certify.ClosedLoop;
 import dockline.io.AtomicFiles;
 import dockline.io.InputException;
 import dockline.io.MapLoader;
@@ -9,7 +8,6 @@ import dockline.io.Problem;
 import dockline.io.Quantities;
 import dockline.model.Charge;
 import dockline.model.Mission;
-import dockline.solve.ProductTooLargeException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -189,38 +187,12 @@ final class MissionOptions {
     }
 
     /**
-     * The message and exit code for what solving, certifying or replaying the mission threw: 3 for a
-     * game or closed loop over a limit (or past the int range, or out of heap), 2 for a mission the
-     * solver rejects. Anything else is rethrown, for the internal-error handler (exit 4).
+     * The message and exit code for what solving, certifying or replaying the mission threw, by type
+     * ({@link Failures#report}): 3 for a {@link dockline.model.ResourceLimitException} or an exhausted
+     * heap, 4 (with the stack trace in a log file) for anything else. Bad input never gets here: the
+     * loader reports it (exit 2) before any solving.
      */
     int failure(Throwable e, PrintWriter err) {
-        String file = "dockline: " + missionFile + ": ";
-        if (e instanceof ProductTooLargeException) {
-            err.println(file + e.getMessage());
-            err.println("The limit is half the JVM's heap unless --max-memory MB says otherwise.");
-            return ExitCodes.RESOURCE_LIMIT;
-        }
-        if (e instanceof ClosedLoop.TooLargeException) {
-            err.println(file + e.getMessage() + ", too many to certify. Make the game smaller: a coarser energy"
-                    + " resolution or a smaller disturbance budget K.");
-            return ExitCodes.RESOURCE_LIMIT;
-        }
-        if (e instanceof ArithmeticException || e instanceof OutOfMemoryError) {
-            // a count past the int range, or an estimate that fell short of the heap actually needed
-            err.println(file + "the game is too large: " + e.getMessage() + ". Use a coarser energy resolution or a"
-                    + " smaller disturbance budget K, or give the JVM more memory (-Xmx).");
-            return ExitCodes.RESOURCE_LIMIT;
-        }
-        if (e instanceof IllegalArgumentException) {
-            err.println(file + e.getMessage());
-            return ExitCodes.BAD_INPUT;
-        }
-        if (e instanceof RuntimeException r) {
-            throw r;
-        }
-        if (e instanceof Error r) {
-            throw r;
-        }
-        throw new IllegalStateException(e);
+        return Failures.report(e, missionFile, err);
     }
 }

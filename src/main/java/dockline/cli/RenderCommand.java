@@ -121,10 +121,11 @@ public final class RenderCommand implements Callable<Integer> {
         try {
             data = new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
-            boolean limit = e.getCause() instanceof dockline.solve.ProductTooLargeException
-                    || e.getCause() instanceof dockline.certify.ClosedLoop.TooLargeException;
+            if (!(e.getCause() instanceof dockline.model.ResourceLimitException)) {
+                throw e; // not the input's fault: an internal error (exit 4, Failures)
+            }
             err.println("dockline render: " + e.getMessage());
-            return limit ? ExitCodes.RESOURCE_LIMIT : ExitCodes.BAD_INPUT;
+            return ExitCodes.RESOURCE_LIMIT;
         }
         try {
             PictureRenderer.writePng(data, options, out);

@@ -25,6 +25,11 @@ import java.util.concurrent.ThreadLocalRandom;
  * kept. A failure is an {@link IOException} whose message says in plain words what is wrong with
  * the target (never the temporary file's name). {@link #problemWith(Path)} asks the same questions
  * before any work is done, so a command can refuse a bad output path up front.
+ *
+ * <p>Only a regular file or a new path is written: a symbolic link, a device or a named pipe is
+ * refused (a run as root must never replace {@code /dev/full} by a file). The temporary file is
+ * removed on every way out; one left by a killed process ({@code .dockline-<pid>-<random>.part})
+ * is removed by the next write to the same folder once that process is gone.
  */
 public final class AtomicFiles {
 
@@ -55,13 +60,15 @@ public final class AtomicFiles {
         if (dir == null) {
             throw new IOException("it names no file");
         }
-        if (Files.isDirectory(abs)) {
-            throw new IOException("it is a folder, not a file");
+        String special = notRegular(abs);
+        if (special != null) {
+            throw new IOException(special);
         }
         Path tmp;
         try {
             Files.createDirectories(dir);
-            tmp = newTemporary(dir, abs);
+            removeStale(dir);
+            tmp = newTemporary(dir);
         } catch (IOException e) {
             throw new IOException(reason(dir, e), e);
         }
@@ -78,7 +85,75 @@ public final class AtomicFiles {
         } catch (FileSystemException e) {
             throw new IOException(reason(dir, e), e);
         } finally {
-            Files.deleteIfExists(tmp);
+            // on every path out (an exception, an Error such as OutOfMemoryError, a move that failed)
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException | RuntimeException e) {
+                // nothing more can be done; a later write to this folder removes it (removeStale)
+            }
+        }
+    }
+
+    /**
+     * Why an existing {@code abs} must not be replaced, or {@code null}: only a regular file or a new
+     * path is written. The link itself is looked at, not what it points to, so a symbolic link, a
+     * device, a named pipe or a socket is refused rather than turned into (or written through to) a
+     * regular file.
+     */
+    static String notRegular(Path abs) {
+        java.nio.file.attribute.BasicFileAttributes a;
+        try {
+            a = Files.readAttributes(abs, java.nio.file.attribute.BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+        } catch (IOException | RuntimeException e) {
+            return null; // a new path, or a parent that is not a folder: the checks after this one name it
+        }
+        if (a.isRegularFile()) {
+            return null;
+        }
+        if (a.isDirectory()) {
+            return "it is a folder, not a file";
+        }
+        if (a.isSymbolicLink()) {
+            return "it is a symbolic link; outputs are written only to a regular file or a new name";
+        }
+        return "it is a device, a named pipe or a socket, not a regular file; outputs are written only to a"
+                + " regular file or a new name";
+    }
+
+    /** Prefix of our temporary files: {@code .dockline-<pid>-<random>.part}. */
+    static final String TEMP_PREFIX = ".dockline-";
+    static final String TEMP_SUFFIX = ".part";
+    private static final java.util.regex.Pattern TEMP_NAME =
+            java.util.regex.Pattern.compile("\\.dockline-(\\d{1,19})-[0-9a-z]{1,13}\\.part");
+
+    /**
+     * Removes temporary files of our own naming left in {@code dir} by a writer that is no longer
+     * running (killed while writing): their name carries the writer's process id. Files of a
+     * running process, and every other file, are left alone. Costs one directory listing.
+     */
+    static void removeStale(Path dir) {
+        try (java.nio.file.DirectoryStream<Path> ds = Files.newDirectoryStream(dir, TEMP_PREFIX + "*" + TEMP_SUFFIX)) {
+            for (Path p : ds) {
+                java.util.regex.Matcher m = TEMP_NAME.matcher(p.getFileName().toString());
+                if (!m.matches()) {
+                    continue;
+                }
+                long pid;
+                try {
+                    pid = Long.parseLong(m.group(1));
+                } catch (NumberFormatException e) {
+                    continue;
+                }
+                if (pid == ProcessHandle.current().pid()) {
+                    continue; // ours: another thread of this process may be writing it
+                }
+                boolean alive = ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false);
+                if (!alive && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // cleaning up is a courtesy; it never stops a write
         }
     }
 
@@ -93,8 +168,9 @@ public final class AtomicFiles {
             return "the file name is empty";
         }
         Path abs = target.toAbsolutePath().normalize();
-        if (Files.isDirectory(abs)) {
-            return "it is a folder, not a file";
+        String special = notRegular(abs);
+        if (special != null) {
+            return special;
         }
         Path dir = abs.getParent();
         if (dir == null) {
@@ -115,11 +191,16 @@ public final class AtomicFiles {
         return null;
     }
 
-    /** A new, empty file beside the target, created with the usual (umask) permissions. */
-    private static Path newTemporary(Path dir, Path abs) throws IOException {
+    /**
+     * A new, empty file beside the target, created with the usual (umask) permissions, named
+     * {@code .dockline-<pid>-<random>.part} so that {@link #removeStale} can tell whether its writer
+     * still runs.
+     */
+    private static Path newTemporary(Path dir) throws IOException {
+        long pid = ProcessHandle.current().pid();
         for (int attempt = 0; ; attempt++) {
-            Path tmp = dir.resolve("." + abs.getFileName() + "."
-                    + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36) + ".part");
+            Path tmp = dir.resolve(TEMP_PREFIX + pid + "-"
+                    + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36) + TEMP_SUFFIX);
             try {
                 Files.newByteChannel(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
                 return tmp;

@@ -22,7 +22,7 @@ public enum InputKind {
         YamlReader.Document doc = YamlReader.read(file, problems);
         if (doc == null || doc.root() == null) {
             problems.throwIfAny();
-            throw new InputException(new Problem(file, 1, 1, "cannot read the file"));
+            throw new InputException(new Problem(file, 1, 1, "cannot read the file", "check the path and the file's permissions"));
         }
         if (doc.root() instanceof Node.MapNode m) {
             List<String> keys = m.entries().stream().map(Node.Entry::key).toList();
@@ -38,7 +38,7 @@ public enum InputKind {
                 String near = Spelling.closest(k, all);
                 if (near != null && !near.equals(k)) {
                     problems.add(m.entries().get(keys.indexOf(k)).keyPos(), "unknown key '" + Loading.shorten(k)
-                            + "', did you mean '" + near + "'?", null);
+                            + "', did you mean '" + near + "'?", "correct the spelling of the key");
                 }
             }
         }

@@ -22,20 +22,79 @@ final class Loading {
         this.problems = problems;
     }
 
-    /** Text for messages: at most 40 characters, control characters shown as '?'. */
+    /** Most characters of file content a message quotes. */
+    static final int QUOTED = 80;
+
+    /**
+     * File content as a message may quote it: at most {@link #QUOTED} characters (then "..."), with
+     * control characters, bidirectional overrides and other invisible formatting characters shown as
+     * {@code \\u202E} escapes, so that a message can neither be reordered on screen nor carry a long
+     * stretch of a file.
+     */
     static String shorten(String s) {
         if (s == null) {
             return "";
         }
         StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < s.length() && sb.length() < 40; i++) {
-            char c = s.charAt(i);
-            sb.append(Character.isISOControl(c) ? '?' : c);
+        int shown = 0;
+        int i = 0;
+        while (i < s.length() && shown < QUOTED) {
+            int cp = s.codePointAt(i);
+            i += Character.charCount(cp);
+            shown++;
+            if (hidden(cp)) {
+                sb.append(String.format("\\u%04X", cp));
+            } else {
+                sb.appendCodePoint(cp);
+            }
         }
-        if (sb.length() < s.length()) {
+        if (i < s.length()) {
             sb.append("...");
         }
         return sb.toString();
+    }
+
+    /**
+     * A character a terminal would not show as itself: C0 and C1 controls, the bidirectional
+     * embeddings, overrides and isolates (U+202A..U+202E, U+2066..U+2069), the marks U+200E/U+200F
+     * and U+061C, and other format characters (Unicode category Cf, e.g. zero-width spaces),
+     * line and paragraph separators, unpaired surrogates and non-characters.
+     */
+    static boolean hidden(int cp) {
+        if (Character.isISOControl(cp) || cp == 0x2028 || cp == 0x2029 || cp == 0xFFFE || cp == 0xFFFF) {
+            return true;
+        }
+        int t = Character.getType(cp);
+        return t == Character.FORMAT || t == Character.SURROGATE || t == Character.UNASSIGNED && cp >= 0xFDD0
+                && cp <= 0xFDEF;
+    }
+
+    /** Example lines for a missing key, so that its hint shows what to write. */
+    private static final java.util.Map<String, String> EXAMPLES = java.util.Map.ofEntries(
+            java.util.Map.entry("cell-size", "cell-size: 2            # metres per cell edge"),
+            java.util.Map.entry("legend", "legend: followed by lines such as  \"#\": wall  and  \".\": tile"),
+            java.util.Map.entry("plan", "plan: |  followed by the rows of the floor plan, indented"),
+            java.util.Map.entry("surface", "surface: tile"),
+            java.util.Map.entry("kind", "kind: door-shut (an event) or kind: reserve (an objective)"),
+            java.util.Map.entry("where", "where: [door]  (legend symbols or zone names)"),
+            java.util.Map.entry("map", "map: ../maps/clinic-wing.yaml"),
+            java.util.Map.entry("robot", "robot:  followed by capacity, resolution, move-energy and wait-energy"),
+            java.util.Map.entry("start", "start:  followed by  cell: [1, 6]  and  charge: 80%"),
+            java.util.Map.entry("cell", "cell: [1, 6]"),
+            java.util.Map.entry("reserve", "reserve: 20%"),
+            java.util.Map.entry("capacity", "capacity: 60            # Wh, usable"),
+            java.util.Map.entry("resolution", "resolution: 0.5         # Wh per energy unit"),
+            java.util.Map.entry("move-energy", "move-energy:  followed by one line per surface, e.g.  tile: 0.5"),
+            java.util.Map.entry("wait-energy", "wait-energy: 0.5        # Wh per idle step"),
+            java.util.Map.entry("discount", "discount: 2"),
+            java.util.Map.entry("threshold", "threshold: \"3/4\""));
+
+    /** The hint for a missing key: an example line, and where the format is described. */
+    static String missingHint(String key, String where) {
+        String example = EXAMPLES.get(key);
+        String doc = where.contains("map") || where.contains("event") ? "maps/README.md" : "missions/README.md";
+        return (example != null ? "add a line such as '" + example + "'" : "add '" + key + ":' with its value")
+                + " under " + where + " (see " + doc + ")";
     }
 
     /** The node as a mapping, or a problem. */
@@ -55,7 +114,12 @@ final class Loading {
         List<String> k = Arrays.asList(known);
         for (Node.Entry e : m.entries()) {
             if (!k.contains(e.key())) {
-                unknown.computeIfAbsent(m, x -> new ArrayList<>()).add(e.key());
+                List<String> u = unknown.computeIfAbsent(m, x -> new ArrayList<>());
+                if (problems.count() >= Problems.LIMIT) {
+                    problems.dropOne(); // the report is full: count it without the cost of wording it
+                    continue;
+                }
+                u.add(e.key());
                 String near = Spelling.closest(e.key(), k);
                 problems.add(e.keyPos(), near != null
                                 ? "unknown key '" + shorten(e.key()) + "', did you mean '" + near + "'?"
@@ -69,7 +133,7 @@ final class Loading {
     Node require(Node.MapNode m, String key, String where) {
         Node v = m.get(key);
         if (v == null && !misspelt(m, key)) {
-            problems.add(m.pos(), where + ": missing key '" + key + "'", null);
+            problems.add(m.pos(), where + ": missing key '" + key + "'", missingHint(key, where));
         }
         return v;
     }
@@ -86,7 +150,7 @@ final class Loading {
     String string(Node n, String what) {
         if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL) {
             if (s.text().isBlank()) {
-                problems.add(n.pos(), what + " must not be blank", null);
+                problems.add(n.pos(), what + " must not be blank", "write a value after the colon, or remove the line");
                 return null;
             }
             return s.text().trim();
@@ -100,7 +164,7 @@ final class Loading {
             try {
                 return Quantities.parseDecimal(s.text());
             } catch (IllegalArgumentException e) {
-                problems.add(n.pos(), what + ": " + e.getMessage(), null);
+                problems.add(n.pos(), what + ": " + e.getMessage(), "write a plain decimal number, e.g. 2 or 0.5");
                 return null;
             }
         }
@@ -128,16 +192,19 @@ final class Loading {
             String t = s.text().trim();
             if (!t.matches("[+-]?\\d{1,18}")) {
                 if (t.matches("[+-]?\\d+")) {
-                    problems.add(n.pos(), what + ": " + shorten(t) + " is far too large (at most " + max + ")", null);
+                    problems.add(n.pos(), what + ": " + shorten(t) + " is far too large (at most " + max + ")",
+                            "write a whole number from " + min + " to " + max);
                 } else {
-                    problems.add(n.pos(), what + " must be a whole number, not '" + shorten(t) + "'", null);
+                    problems.add(n.pos(), what + " must be a whole number, not '" + shorten(t) + "'",
+                            "write digits only, e.g. " + Math.max(min, Math.min(max, 2)));
                 }
                 return null;
             }
             long v = Long.parseLong(t);
             if (v < min || v > max) {
                 problems.add(n.pos(), what + " must be " + (max == Integer.MAX_VALUE ? "at least " + min
-                        : "between " + min + " and " + max) + ", not " + v, null);
+                        : "between " + min + " and " + max) + ", not " + v,
+                        "write a whole number from " + min + (max == Integer.MAX_VALUE ? " up" : " to " + max));
                 return null;
             }
             return (int) v;
@@ -229,6 +296,7 @@ final class Loading {
         if (n == null || n instanceof Node.Bad) {
             return;
         }
-        problems.add(n.pos(), what + " must be " + expected + ", not " + n.describe(), null);
+        problems.add(n.pos(), what + " must be " + expected + ", not " + n.describe(),
+                "write " + expected + " here (see maps/README.md or missions/README.md for this key)");
     }
 }

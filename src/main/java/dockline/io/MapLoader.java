@@ -41,12 +41,58 @@ public final class MapLoader {
         return map;
     }
 
-    /** Reads the file; problems go to {@code problems}; {@code null} if it has any. */
+    /**
+     * Reads the file; problems go to {@code problems}; {@code null} if it has any. A file that is not
+     * a dockline map at all (none of its top-level keys is a map key: a mission may name any path)
+     * gets one problem that quotes none of its content.
+     */
     static BuildingMap read(Path file, Problems problems) {
-        YamlReader.Document doc = YamlReader.read(file, problems);
+        return read(file, problems, false);
+    }
+
+    /**
+     * As {@link #read(Path, Problems)}; {@code namedByMission}: the path comes from a mission's
+     * {@code map:}, so a file that is not a map at all is refused in one line that quotes none of it.
+     */
+    static BuildingMap read(Path file, Problems problems, boolean namedByMission) {
+        Problems own = new Problems(file);
+        YamlReader.Document doc = YamlReader.read(file, own);
+        if (namedByMission && doc != null && !looksLikeMap(doc)) {
+            problems.add(Pos.START, NOT_A_MAP, "a map has 'cell-size:', 'legend:' and 'plan:' (see maps/README.md);"
+                    + " check the path in the mission's 'map:'");
+            return null;
+        }
+        problems.absorb(own);
         if (doc == null || doc.root() == null) {
             return null;
         }
         return problems.guard(() -> new MapReading(doc, problems).read());
+    }
+
+    /** How a file that is not a map is refused (tests look for it). */
+    static final String NOT_A_MAP = "this is not a dockline map: none of its top-level keys is a map key";
+
+    /**
+     * Whether a parsed file is meant as a map: its root mapping has a map key, or, when it could not
+     * be parsed, a line starts with one (so that a map with a syntax error still gets its own messages).
+     */
+    static boolean looksLikeMap(YamlReader.Document doc) {
+        java.util.List<String> keys = java.util.Arrays.asList(MapReading.KEYS);
+        if (doc.root() instanceof Node.MapNode m) {
+            return m.entries().stream().anyMatch(e -> keys.contains(e.key()));
+        }
+        if (doc.root() != null) {
+            return false; // a single value or a list
+        }
+        boolean content = false;
+        for (int l = 1; doc.source() != null && l <= doc.source().lineCount(); l++) {
+            String line = doc.source().line(l).strip();
+            content |= !line.isEmpty() && !line.startsWith("#");
+            int colon = line.indexOf(':');
+            if (colon > 0 && keys.contains(line.substring(0, colon).strip().replace("\"", ""))) {
+                return true;
+            }
+        }
+        return !content; // empty or only comments: "the file is empty" says it without quoting
     }
 }

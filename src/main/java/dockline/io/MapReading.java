@@ -91,7 +91,8 @@ final class MapReading {
             return new BuildingMap(name, doc.file(), cellSize, grid.rows, legend, new ArrayList<>(zones.values()),
                     doorNames, dm);
         } catch (IllegalArgumentException e) {
-            problems.add(Pos.START, "the map is not consistent: " + e.getMessage(), null);
+            problems.add(Pos.START, "the map is not consistent: " + e.getMessage(),
+                    "compare the map with the key-by-key description in maps/README.md");
             return null;
         }
     }
@@ -122,7 +123,8 @@ final class MapReading {
             }
             char c = k.charAt(0);
             if (Character.isWhitespace(c) || Character.isISOControl(c) || c == '\uFFFD') {
-                problems.add(e.keyPos(), "legend key must be a visible character, not a space or control character", null);
+                problems.add(e.keyPos(), "legend key must be a visible character, not a space or control character",
+                        "use one visible character per terrain, e.g. \"#\": wall");
                 ok = false;
                 continue;
             }
@@ -334,7 +336,8 @@ final class MapReading {
             }
         }
         if (legend != null && !anyFree && !g.incomplete) {
-            problems.add(n.pos(), "the plan has no free cell: every character is a wall", null);
+            problems.add(n.pos(), "the plan has no free cell: every character is a wall",
+                    "mark the floor with a legend symbol that is not a wall, e.g. \".\": tile");
         }
         return g;
     }
@@ -420,7 +423,8 @@ final class MapReading {
     private Zone zone(Node.Entry e) {
         String name = e.key().trim();
         if (name.isEmpty() || name.equals(ALL_DOORS)) {
-            problems.add(e.keyPos(), name.isEmpty() ? "a zone needs a name" : "'" + ALL_DOORS + "' is reserved and cannot name a zone", null);
+            problems.add(e.keyPos(), name.isEmpty() ? "a zone needs a name" : "'" + ALL_DOORS + "' is reserved and cannot name a zone",
+                    "give the zone a name of its own, e.g. ward-a");
             return null;
         }
         String what = "zone '" + Loading.shorten(name) + "'";
@@ -494,7 +498,8 @@ final class MapReading {
         if (grid == null || grid.inside(c)) {
             return true;
         }
-        problems.add(pos, what + ": cell " + c + " is outside the plan (" + grid.describeSize() + ")", null);
+        problems.add(pos, what + ": cell " + c + " is outside the plan (" + grid.describeSize() + ")",
+                "x counts columns from 0 at the left, y rows from 0 at the top");
         return false;
     }
 
@@ -508,7 +513,8 @@ final class MapReading {
             String name = e.key().trim();
             String what = "door '" + Loading.shorten(name) + "'";
             if (name.isEmpty() || name.equals(ALL_DOORS)) {
-                problems.add(e.keyPos(), name.isEmpty() ? "a door needs a name" : "'" + ALL_DOORS + "' is reserved and cannot name a door", null);
+                problems.add(e.keyPos(), name.isEmpty() ? "a door needs a name" : "'" + ALL_DOORS + "' is reserved and cannot name a door",
+                        "give the door a name of its own, e.g. ward-door");
                 continue;
             }
             if (zones.containsKey(name)) {
@@ -528,7 +534,8 @@ final class MapReading {
             }
             String other = doorNames.get(c);
             if (other != null) {
-                problems.add(e.value().pos(), what + ": cell " + c + " is already named '" + Loading.shorten(other) + "'", null);
+                problems.add(e.value().pos(), what + ": cell " + c + " is already named '" + Loading.shorten(other) + "'",
+                        "give each door cell one name");
                 continue;
             }
             doorNames.put(c, name);
@@ -599,7 +606,8 @@ final class MapReading {
                 return false;
             }
             if (extra.signum() == 0) {
-                problems.add(xn.pos(), "extra must be more than 0 Wh for a drag", null);
+                problems.add(xn.pos(), "extra must be more than 0 Wh for a drag",
+                        "give the extra energy a drag costs, e.g. extra: 0.5");
                 return false;
             }
         } else if (kind != null && xn != null) {

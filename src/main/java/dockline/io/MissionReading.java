@@ -20,12 +20,14 @@ import java.io.IOException;
 import java.math.BigDecimal;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
@@ -47,6 +49,8 @@ final class MissionReading {
     private final Problems problems;
     private final Loading in;
     private BuildingMap map;
+    /** Where the discounted objective's threshold is written, for the range check after loading. */
+    private Pos thresholdPos;
     private boolean mapBroken;
 
     MissionReading(YamlReader.Document doc, Problems problems) {
@@ -135,7 +139,34 @@ final class MissionReading {
                 || start == null || startCharge == null || reserve == null || tasks == null || objective == null) {
             return null;
         }
-        return new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+        Mission mission = new Mission(name, doc.file(), map, robot.profile, start, startCharge, reserve, tasks, objective);
+        return objective instanceof Objective.Discounted d && !discountedFits(mission, d) ? null : mission;
+    }
+
+    /**
+     * Whether the discounted comparator's exact 64-bit arithmetic fits this threshold and the largest
+     * energy change of this mission's moves (what {@code check} would otherwise refuse after loading);
+     * a problem at the threshold if not. A game too large to compile is left to {@code check}'s
+     * own limits.
+     */
+    private boolean discountedFits(Mission mission, Objective.Discounted d) {
+        int mu;
+        try {
+            mu = dockline.arena.ArenaCompiler.compile(mission).maxAbsWeight();
+        } catch (dockline.model.ResourceLimitException tooLarge) {
+            return true;
+        }
+        try {
+            dockline.monitor.DiscountedComparator.of(d, mu);
+            return true;
+        } catch (ArithmeticException e) {
+            problems.add(thresholdPos != null ? thresholdPos : Pos.START, "threshold " + Loading.shorten(d.threshold().toString())
+                            + " is too large for exact arithmetic: with energy changes of up to " + mu + " units per step"
+                            + " and discount " + d.discount() + ", the comparator's numbers would pass the 64-bit range",
+                    "give a threshold with a smaller numerator and denominator (e.g. \"3/4\"); a coarser energy"
+                            + " resolution does not help much, as the threshold is counted in energy units");
+            return false;
+        }
     }
 
     // ---------------------------------------------------------------- map
@@ -150,7 +181,8 @@ final class MissionReading {
         try {
             mapPath = doc.file().resolveSibling(rel).normalize();
         } catch (java.nio.file.InvalidPathException e) {
-            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path", null);
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a valid path",
+                    "give the map file's path relative to the mission file, e.g. ../maps/clinic-wing.yaml");
             mapBroken = true;
             return;
         }
@@ -160,14 +192,28 @@ final class MissionReading {
             mapBroken = true;
             return;
         }
-        if (!Files.isRegularFile(mapPath)) {
+        String fileName = mapPath.getFileName() == null ? "" : mapPath.getFileName().toString().toLowerCase(Locale.ROOT);
+        if (!fileName.endsWith(".yaml") && !fileName.endsWith(".yml")) {
+            // a mission may name any path; reading only YAML files keeps it from showing other files' content
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "' is not a .yaml or .yml file",
+                    "name the building map's YAML file, e.g. map: ../maps/clinic-wing.yaml");
+            mapBroken = true;
+            return;
+        }
+        if (!Files.exists(mapPath, LinkOption.NOFOLLOW_LINKS)) {
             problems.add(mapNode.pos(), "map file '" + Loading.shorten(rel) + "' not found (looked for " + mapPath + ")",
                     nearbyFiles(mapPath));
             mapBroken = true;
             return;
         }
+        YamlReader.Refusal refused = YamlReader.refusal(mapPath);
+        if (refused != null) {
+            problems.add(mapNode.pos(), "map: '" + Loading.shorten(rel) + "': " + refused.message(), refused.hint());
+            mapBroken = true;
+            return;
+        }
         Problems mapProblems = new Problems(mapPath);
-        map = MapLoader.read(mapPath, mapProblems);
+        map = MapLoader.read(mapPath, mapProblems, true);
         if (mapProblems.any() || map == null) {
             try {
                 mapProblems.throwIfAny();
@@ -196,6 +242,7 @@ final class MissionReading {
                 return "the path is relative to the mission file's folder";
             }
         }
+        names.remove(base); // the wanted name itself may be listed (e.g. a dangling link): never suggest it back
         String near = Spelling.closest(base, names);
         return near != null ? "did you mean '" + near + "'? the path is relative to the mission file's folder"
                 : "the path is relative to the mission file's folder";
@@ -523,7 +570,8 @@ final class MissionReading {
         }
         for (Loading.Named a : nodes.avoid) {
             if (visit.contains(a.name())) {
-                problems.add(a.pos(), "zone '" + Loading.shorten(a.name()) + "' is both to visit and to avoid", null);
+                problems.add(a.pos(), "zone '" + Loading.shorten(a.name()) + "' is both to visit and to avoid",
+                        "remove it from one of the two lists");
                 ok = false;
             }
         }
@@ -592,6 +640,7 @@ final class MissionReading {
             d = in.integer(dn, "discount (a whole number, at least 2)", 2, MAX_DISCOUNT);
         }
         Rational threshold = null;
+        thresholdPos = tn == null ? null : tn.pos();
         if (tn instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
             String t = s.text().trim();
             try {

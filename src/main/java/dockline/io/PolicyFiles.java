@@ -309,13 +309,18 @@ public final class PolicyFiles {
      */
     public static Document read(Path file) throws InputException {
         Problems problems = new Problems(file);
+        YamlReader.Refusal refused = YamlReader.refusal(file);
+        if (refused != null && Files.exists(file)) {
+            // a pipe or a device is refused before it is opened (reading one could block or never end)
+            throw new InputException(new Problem(file, 1, 1, refused.message(), refused.hint()));
+        }
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
         } catch (NoSuchFileException e) {
             throw new InputException(new Problem(file, 1, 1, "no such file", "check the path"));
         } catch (IOException e) {
-            throw new InputException(new Problem(file, 1, 1, "cannot read the file: " + e.getMessage()));
+            throw new InputException(new Problem(file, 1, 1, "cannot read the file: " + e.getMessage(), "check the path and the file's permissions"));
         }
         Document d = isCsv(file) ? new CsvReading(problems, bytes).read() : new JsonReading(problems, bytes).read();
         problems.throwIfAny();
@@ -378,7 +383,7 @@ public final class PolicyFiles {
         boolean ok = true;
         for (String k : List.of("cell", "levelUnits", "budgetLeft", "progress", "action")) {
             if (!values.containsKey(k)) {
-                p.add(rowPos, "row has no '" + k + "'");
+                p.addPolicy(rowPos, "row has no '" + k + "'");
                 ok = false;
             }
         }
@@ -414,7 +419,7 @@ public final class PolicyFiles {
         Cell target = c;
         if (kind == ActionKind.MOVE) {
             if (to == null || to.isBlank()) {
-                p.add(at.getOrDefault("to", rowPos), "a move needs 'to', the cell it goes to");
+                p.addPolicy(at.getOrDefault("to", rowPos), "a move needs 'to', the cell it goes to");
                 return null;
             }
             target = cell(to);
@@ -439,7 +444,7 @@ public final class PolicyFiles {
     private static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
         String v = values.get(key).trim();
         if (!v.matches("\\d{1,9}")) {
-            p.add(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
+            p.addPolicy(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
             return -1;
         }
         return Integer.parseInt(v);
@@ -449,7 +454,7 @@ public final class PolicyFiles {
                                  List<String> tasks) {
         for (String k : List.of("mission", "unitWh", "reserveUnits", "capacityUnits", "budget")) {
             if (!values.containsKey(k)) {
-                p.add(pos, "no '" + k + "' in the policy file");
+                p.addPolicy(pos, "no '" + k + "' in the policy file");
                 return null;
             }
         }
@@ -457,11 +462,11 @@ public final class PolicyFiles {
         try {
             unit = Quantities.parseDecimal(values.get("unitWh"));
             if (unit.signum() <= 0) {
-                p.add(at.get("unitWh"), "'unitWh' must be positive");
+                p.addPolicy(at.get("unitWh"), "'unitWh' must be positive");
                 return null;
             }
         } catch (IllegalArgumentException e) {
-            p.add(at.get("unitWh"), e.getMessage());
+            p.addPolicy(at.get("unitWh"), e.getMessage());
             return null;
         }
         int floor = nonNegative(p, values, at, "reserveUnits");
@@ -492,19 +497,19 @@ public final class PolicyFiles {
             return Optional.empty();
         }
         if (!kind.trim().equals("discounted")) {
-            p.add(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
+            p.addPolicy(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
             return null;
         }
         for (String k : List.of("discount", "threshold", "weightBoundUnits")) {
             if (!values.containsKey(k)) {
-                p.add(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
+                p.addPolicy(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
                 return null;
             }
         }
         boolean ok = true;
         int d = nonNegative(p, values, at, "discount");
         if (d >= 0 && d < 2) {
-            p.add(at.get("discount"), "'discount' must be a whole number of at least 2");
+            p.addPolicy(at.get("discount"), "'discount' must be a whole number of at least 2");
             ok = false;
         }
         int mu = nonNegative(p, values, at, "weightBoundUnits");
@@ -519,7 +524,7 @@ public final class PolicyFiles {
             }
         }
         if (v == null) {
-            p.add(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
+            p.addPolicy(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
             ok = false;
         }
         Relation rel = Relation.AT_LEAST;
@@ -530,7 +535,7 @@ public final class PolicyFiles {
                 default -> null;
             };
             if (rel == null) {
-                p.add(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
+                p.addPolicy(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
                 ok = false;
             }
         }
@@ -538,7 +543,7 @@ public final class PolicyFiles {
         if (values.containsKey("reserveKept")) {
             String k = values.get("reserveKept").trim();
             if (!k.equals("true") && !k.equals("false")) {
-                p.add(at.get("reserveKept"), "'reserveKept' must be true or false");
+                p.addPolicy(at.get("reserveKept"), "'reserveKept' must be true or false");
                 ok = false;
             }
             kept = k.equals("true");
@@ -580,20 +585,20 @@ public final class PolicyFiles {
                     Pos vp = pos(j.currentTokenLocation());
                     if (!TOP_KEYS.contains(key)) {
                         String near = Spelling.closest(key, TOP_KEYS);
-                        p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : null);
+                        p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
                         j.skipChildren();
                         continue;
                     }
                     switch (key) {
                         case "tasks" -> {
                             if (t != JsonToken.START_ARRAY) {
-                                p.add(vp, "'tasks' must be a list of zone names");
+                                p.addPolicy(vp, "'tasks' must be a list of zone names");
                                 j.skipChildren();
                                 continue;
                             }
                             while (j.nextToken() != JsonToken.END_ARRAY) {
                                 if (j.currentToken() != JsonToken.VALUE_STRING) {
-                                    p.add(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
+                                    p.addPolicy(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
                                     j.skipChildren();
                                 } else {
                                     tasks.add(j.getText());
@@ -603,7 +608,7 @@ public final class PolicyFiles {
                         case "rows" -> {
                             sawRows = true;
                             if (t != JsonToken.START_ARRAY) {
-                                p.add(vp, "'rows' must be a list of rows");
+                                p.addPolicy(vp, "'rows' must be a list of rows");
                                 j.skipChildren();
                                 continue;
                             }
@@ -613,7 +618,7 @@ public final class PolicyFiles {
                         }
                         default -> {
                             if (!t.isScalarValue()) {
-                                p.add(vp, "'" + key + "' must be a single value");
+                                p.addPolicy(vp, "'" + key + "' must be a single value");
                                 j.skipChildren();
                                 continue;
                             }
@@ -623,15 +628,15 @@ public final class PolicyFiles {
                     }
                 }
                 if (!FORMAT.equals(values.get("format"))) {
-                    p.add(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
+                    p.addPolicy(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
                 }
                 if (values.containsKey("version") && !knownVersion(values.get("version"))) {
-                    p.add(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
+                    p.addPolicy(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
                             + " is not known (this dockline reads versions " + VERSION_1 + ", " + VERSION_WITH_SCORE
                             + " and " + VERSION + ")");
                 }
                 if (!sawRows) {
-                    p.add(top, "no 'rows' in the policy file");
+                    p.addPolicy(top, "no 'rows' in the policy file");
                 }
                 Header h = header(p, top, values, at, tasks);
                 if (h == null) {
@@ -640,10 +645,10 @@ public final class PolicyFiles {
                 Policy policy = rows.policy(h);
                 return policy == null || p.any() ? null : new Document(h, policy);
             } catch (JsonParseException e) {
-                p.add(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
+                p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
                 return null;
             } catch (IOException e) {
-                p.add(Pos.START, "cannot read the file: " + e.getMessage());
+                p.addPolicy(Pos.START, "cannot read the file: " + e.getMessage());
                 return null;
             }
         }
@@ -651,7 +656,7 @@ public final class PolicyFiles {
         private void readRow(JsonParser j, Rows rows) throws IOException {
             Pos rp = pos(j.currentTokenLocation());
             if (j.currentToken() != JsonToken.START_OBJECT) {
-                p.add(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
+                p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
                 j.skipChildren();
                 return;
             }
@@ -665,13 +670,14 @@ public final class PolicyFiles {
                 Pos vp = pos(j.currentTokenLocation());
                 if (!JSON_ROW_KEYS.contains(key)) {
                     String near = Spelling.closest(key, JSON_ROW_KEYS);
-                    p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?" : null);
+                    p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
+                            : "missions/POLICY-FORMAT.md lists the keys of a row");
                     j.skipChildren();
                     bad = true;
                     continue;
                 }
                 if (!t.isScalarValue()) {
-                    p.add(vp, "'" + key + "' must be a single value");
+                    p.addPolicy(vp, "'" + key + "' must be a single value");
                     j.skipChildren();
                     bad = true;
                     continue;
@@ -719,7 +725,7 @@ public final class PolicyFiles {
                         formatLine = true;
                         if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_1)
                                 && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
-                            p.add(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
+                            p.addPolicy(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
                                     + VERSION + "' (versions " + VERSION_1 + " and " + VERSION_WITH_SCORE
                                     + " are read as well)");
                         }
@@ -736,7 +742,7 @@ public final class PolicyFiles {
                     if (!TOP_KEYS.contains(key)) {
                         String near = Spelling.closest(key, TOP_KEYS);
                         p.add(new Pos(ln, line.indexOf(written) + 1), "unknown key '" + Loading.shorten(key) + "'",
-                                near != null ? "did you mean '" + near + "'?" : null);
+                                near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
                         continue;
                     }
                     if (key.equals("tasks")) {
@@ -759,7 +765,7 @@ public final class PolicyFiles {
                     } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
                         columns = List.of(hr.split(","));
                     } else if (!hr.equals(CSV_HEADER) && !hr.equals(OLD_CSV_HEADER)) {
-                        p.add(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
+                        p.addPolicy(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
                                 + "' for a discounted mission; either followed by '," + CLOSED + "' with lasting events)");
                         return null;
                     }
@@ -768,10 +774,10 @@ public final class PolicyFiles {
                 readRow(line, ln, rows);
             }
             if (!formatLine) {
-                p.add(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
+                p.addPolicy(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
             }
             if (!headerRow) {
-                p.add(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
+                p.addPolicy(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
             }
             Header h = header(p, Pos.START, values, at, tasks);
             if (h == null) {
@@ -804,7 +810,7 @@ public final class PolicyFiles {
                 }
             }
             if (field != columns.size()) {
-                p.add(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
+                p.addPolicy(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
                         + "), this one has " + field);
                 return;
             }

@@ -25,6 +25,7 @@ final class Problems {
     private int dropped;
     private int attempts;
 
+
     Problems(Path file) {
         this.file = file;
     }
@@ -33,16 +34,67 @@ final class Problems {
         return file;
     }
 
-    void add(Pos pos, String message) {
-        add(pos, message, null);
+    /**
+     * A problem of a policy file (the only reader that uses this form): such files are written by
+     * {@code dockline export}, so the hint is the same for all of them.
+     */
+    void addPolicy(Pos pos, String message) {
+        add(pos, message, "policy files are written by 'dockline export'; export it again (missions/POLICY-FORMAT.md)");
     }
 
+    /**
+     * Records a problem. Every problem has a hint (ProblemHintsTest scans the loaders for calls
+     * without one); the message and hint are made safe to print ({@link #safe}).
+     */
     void add(Pos pos, String message, String hint) {
         attempts++;
         if (explained.contains(key(pos.line(), pos.column()))) {
             return;
         }
-        add(new Problem(file, pos.line(), pos.column(), message, hint));
+        add(new Problem(file, pos.line(), pos.column(), safe(message), safe(hint == null ? GENERAL_HINT : hint)));
+    }
+
+    /** Only for a hint computed as null at run time (the scan in ProblemHintsTest rules out written ones). */
+    static final String GENERAL_HINT = "see maps/README.md or missions/README.md for what this key takes";
+
+    /** Longest message or hint kept whole; the quoting sites keep file content to {@link Loading#QUOTED} characters. */
+    static final int LONGEST = 600;
+
+    /**
+     * A message as it may be printed: characters a terminal would hide or act on (controls,
+     * bidirectional overrides) escaped, and at most {@link #LONGEST} characters, so that no path
+     * through a library's wording can put a long stretch of a file, or a reordering of the line,
+     * on the user's screen.
+     */
+    static String safe(String s) {
+        boolean clean = s.length() <= LONGEST;
+        for (int i = 0; clean && i < s.length(); i++) {
+            clean = !Loading.hidden(s.charAt(i));
+        }
+        if (clean) {
+            return s;
+        }
+        StringBuilder sb = new StringBuilder();
+        int i = 0;
+        while (i < s.length() && sb.length() < LONGEST) {
+            int cp = s.codePointAt(i);
+            i += Character.charCount(cp);
+            if (Loading.hidden(cp)) {
+                sb.append(String.format("\\u%04X", cp));
+            } else {
+                sb.appendCodePoint(cp);
+            }
+        }
+        if (i < s.length()) {
+            sb.append("...");
+        }
+        return sb.toString();
+    }
+
+    /** A "N more ..." line: kept even though its position is explained by the problems it sums up. */
+    void addSummary(Pos pos, String message, String hint) {
+        attempts++;
+        add(new Problem(file, pos.line(), pos.column(), safe(message), safe(hint)));
     }
 
     /** A problem that explains its position: later problems at the very same position are dropped. */
@@ -63,6 +115,21 @@ final class Problems {
             return;
         }
         list.add(p);
+    }
+
+    /** Takes over another load's problems, counts and explained positions (for a file read on its own first). */
+    void absorb(Problems other) {
+        int taken = Math.min(other.list.size(), Math.max(0, LIMIT - list.size()));
+        list.addAll(other.list.subList(0, taken));
+        dropped += other.dropped + other.list.size() - taken;
+        attempts += other.attempts;
+        explained.addAll(other.explained);
+    }
+
+    /** Counts a problem that is not worded because the report is full ({@link #LIMIT}). */
+    void dropOne() {
+        attempts++;
+        dropped++;
     }
 
     void addAll(List<Problem> ps) {
@@ -114,15 +181,15 @@ final class Problems {
     }
 
     /**
-     * Runs a checking step; a defect in it (any runtime exception) becomes a problem at 1:1 instead
-     * of a stack trace, so that bad input can never crash a run.
+     * Runs a checking step. A defect in it (any runtime exception) is not the user's mistake, so it
+     * is not disguised as a problem of the file: it is rethrown as an internal error naming the
+     * file (exit code 4, with the stack trace in a log file).
      */
     <T> T guard(java.util.function.Supplier<T> step) {
         try {
             return step.get();
         } catch (RuntimeException e) {
-            add(Pos.START, INTERNAL + " (" + e + ")", "please report this with the file");
-            return null;
+            throw new IllegalStateException(INTERNAL + " " + file, e);
         }
     }
 

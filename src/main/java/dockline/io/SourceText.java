@@ -28,6 +28,10 @@ final class SourceText {
     private final int[] lineStart;
     private final int[] lineEnd;
     private final boolean[] lineHasTab;
+    /** The last position {@link #posOf} computed, so that increasing queries on one line cost O(distance). */
+    private int memoIndex = -1;
+    private int memoLine;
+    private int memoColumn;
 
     private SourceText(String text) {
         this.text = text;
@@ -117,7 +121,7 @@ final class SourceText {
             }
         }
         if (controls.size() > SHOWN) {
-            problems.add(src.posOf(controls.get(SHOWN)), (controls.size() - SHOWN) + " more control characters",
+            problems.addSummary(src.posOf(controls.get(SHOWN)), (controls.size() - SHOWN) + " more control characters",
                     "remove them; dockline files are plain text");
         }
         for (int k = 0; k < bad.size(); k++) {
@@ -131,7 +135,7 @@ final class SourceText {
             }
         }
         if (bad.size() > SHOWN) {
-            problems.add(src.posOf(bad.get(SHOWN)[0]), (bad.size() - SHOWN) + " more bytes that are not valid UTF-8",
+            problems.addSummary(src.posOf(bad.get(SHOWN)[0]), (bad.size() - SHOWN) + " more bytes that are not valid UTF-8",
                     "save the file as UTF-8 text");
         }
         for (int k = 0; k < tabs.size(); k++) {
@@ -144,7 +148,7 @@ final class SourceText {
             }
         }
         if (tabs.size() > SHOWN) {
-            problems.add(src.posOf(tabs.get(SHOWN)), (tabs.size() - SHOWN) + " more tab characters",
+            problems.addSummary(src.posOf(tabs.get(SHOWN)), (tabs.size() - SHOWN) + " more tab characters",
                     "use spaces: tabs are not allowed in dockline files");
         }
         return src;
@@ -194,10 +198,45 @@ final class SourceText {
         return line >= 1 && line <= lineHasTab.length && lineHasTab[line - 1];
     }
 
-    /** Position of a char index in {@link #text()}. O(log lines + line length). */
+    /** The longest line, in chars (without its line break): the YAML scanner's cost per value grows with it. */
+    int longestLine() {
+        int best = 0;
+        for (int k = 0; k < lineStart.length; k++) {
+            best = Math.max(best, lineEnd[k] - lineStart[k]);
+        }
+        return best;
+    }
+
+    /** The 1-based number of the longest line. */
+    int longestLineNumber() {
+        int best = 0;
+        for (int k = 1; k < lineStart.length; k++) {
+            if (lineEnd[k] - lineStart[k] > lineEnd[best] - lineStart[best]) {
+                best = k;
+            }
+        }
+        return best + 1;
+    }
+
+    /**
+     * Position of a char index in {@link #text()}. O(log lines + distance from the previous query on
+     * the same line): queries in increasing order (as the encoding checks make them) cost O(n) in
+     * all, even on a file that is one long line.
+     */
     Pos posOf(int index) {
         int lo = MonotoneSearch.highest(0, lineStart.length - 1, i -> lineStart[i] <= index); // line 0 starts at 0
-        int col = text.codePointCount(lineStart[lo], Math.min(Math.max(index, lineStart[lo]), text.length())) + 1;
+        int to = Math.min(Math.max(index, lineStart[lo]), text.length());
+        int col;
+        if (memoIndex >= 0 && memoLine == lo && memoIndex <= to) {
+            col = memoColumn + text.codePointCount(memoIndex, to);
+        } else {
+            col = text.codePointCount(lineStart[lo], to) + 1;
+        }
+        if (to == text.length() || !Character.isLowSurrogate(text.charAt(to))) {
+            memoIndex = to;
+            memoLine = lo;
+            memoColumn = col;
+        }
         return new Pos(lo + 1, col);
     }
 

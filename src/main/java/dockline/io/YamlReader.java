@@ -10,9 +10,11 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.StringReader;
 import java.nio.file.AccessDeniedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.List;
 import org.yaml.snakeyaml.LoaderOptions;
@@ -27,7 +29,9 @@ import org.yaml.snakeyaml.error.MarkedYAMLException;
  * <p>Defences against hostile or broken files, each reported as a problem, never a crash or a hang:
  * files above {@link #MAX_BYTES}; bytes that are not UTF-8; tabs; nesting deeper than
  * {@link #MAX_DEPTH}; more than {@link #MAX_NODES} values; aliases (so an alias "bomb" cannot
- * expand); more than one document. Time and memory are linear in the file size.
+ * expand); more than one document; lines longer than {@link #MAX_LINE}; anything but a regular file
+ * (a named pipe, a device, a folder, a symbolic link loop), refused before it is opened. Time and
+ * memory are linear in the file size.
  */
 final class YamlReader {
 
@@ -35,6 +39,8 @@ final class YamlReader {
     static final int MAX_BYTES = 8 * 1024 * 1024;
     /** Deepest nesting of mappings and lists; our formats need 4. */
     static final int MAX_DEPTH = 32;
+    /** Longest line, in characters: keeps the YAML scanner linear in the file size (see {@link #parse}). */
+    static final int MAX_LINE = 65_536;
     /** Most values (scalars, lists, mappings) in one file. */
     static final int MAX_NODES = 500_000;
 
@@ -54,26 +60,96 @@ final class YamlReader {
 
     /** Reads the file; problems go to {@code problems}; returns {@code null} when nothing could be read. */
     static Document read(Path file, Problems problems) {
+        Refusal r = refusal(file);
+        if (r != null) {
+            problems.add(Pos.START, r.message(), r.hint());
+            return null;
+        }
         byte[] bytes;
-        try {
-            if (Files.isDirectory(file)) {
-                problems.add(Pos.START, "this is a directory, not a file", null);
-                return null;
-            }
-            try (InputStream in = Files.newInputStream(file)) {
-                bytes = in.readNBytes(MAX_BYTES + 1);
-            }
+        try (InputStream in = Files.newInputStream(file)) {
+            bytes = in.readNBytes(MAX_BYTES + 1);
         } catch (NoSuchFileException e) {
-            problems.add(Pos.START, "cannot read the file: it does not exist", null);
+            problems.add(Pos.START, "cannot read the file: it does not exist", "check the spelling and the folder");
             return null;
         } catch (AccessDeniedException e) {
-            problems.add(Pos.START, "cannot read the file: permission denied", null);
+            problems.add(Pos.START, "cannot read the file: permission denied", "check the file's permissions");
             return null;
         } catch (IOException | SecurityException e) {
-            problems.add(Pos.START, "cannot read the file: " + e.getMessage(), null);
+            problems.add(Pos.START, "cannot read the file: " + ioReason(e),
+                    "check that it is a map or mission file saved on disk");
             return null;
         }
         return parse(file, bytes, problems);
+    }
+
+    /** Why a path cannot be read as an input file, with a hint. */
+    record Refusal(String message, String hint) {
+    }
+
+    /**
+     * Why {@code file} is not a regular file that can be read, or {@code null} when it is. Asked
+     * before the file is opened (opening a named pipe would wait for a writer, and a device may
+     * never end), following symbolic links: a link to a map is fine, a loop or a dangling link is not.
+     */
+    static Refusal refusal(Path file) {
+        BasicFileAttributes a;
+        try {
+            a = Files.readAttributes(file, BasicFileAttributes.class);
+        } catch (NoSuchFileException e) {
+            if (Files.isSymbolicLink(file)) {
+                return new Refusal("cannot read the file: it is a symbolic link to a file that does not exist",
+                        "point the link at the map or mission file, or name the file itself");
+            }
+            return new Refusal("cannot read the file: it does not exist", "check the spelling and the folder");
+        } catch (AccessDeniedException e) {
+            return new Refusal("cannot read the file: permission denied", "check the file's permissions");
+        } catch (FileSystemException e) {
+            if (e.getReason() != null && e.getReason().toLowerCase(java.util.Locale.ROOT).contains("symbolic link")) {
+                return new Refusal("cannot read the file: its symbolic links form a loop",
+                        "name the map or mission file itself, not a link that points back at itself");
+            }
+            return new Refusal("cannot read the file: " + ioReason(e), "check the path");
+        } catch (IOException | SecurityException | UnsupportedOperationException e) {
+            return new Refusal("cannot read the file: " + ioReason(e), "check the path");
+        }
+        if (a.isRegularFile()) {
+            return null;
+        }
+        if (a.isDirectory()) {
+            return new Refusal("this is a directory, not a file", "name a .yaml file in that folder");
+        }
+        return new Refusal("this is " + specialKind(file) + ", not a regular file; only files saved on disk are read",
+                "give the path of a map or mission file (.yaml)");
+    }
+
+    /** "a named pipe (FIFO)", "a device", "a socket" or "a special file", from the POSIX mode when there is one. */
+    private static String specialKind(Path file) {
+        try {
+            Object mode = Files.getAttribute(file, "unix:mode");
+            if (mode instanceof Integer m) {
+                switch (m & 0170000) {
+                    case 0010000:
+                        return "a named pipe (FIFO)";
+                    case 0020000:
+                    case 0060000:
+                        return "a device";
+                    case 0140000:
+                        return "a socket";
+                    default:
+                        break;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // no POSIX attributes here: the general word below
+        }
+        return "a special file (a pipe, device or socket)";
+    }
+
+    private static String ioReason(Exception e) {
+        if (e instanceof FileSystemException f && f.getReason() != null) {
+            return f.getReason();
+        }
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 
     /** Parses file content given as bytes (the file name is used for messages only). */
@@ -81,9 +157,17 @@ final class YamlReader {
         if (bytes.length > MAX_BYTES) {
             problems.add(Pos.START, "the file is too large (more than " + (MAX_BYTES / (1024 * 1024)) + " MiB)",
                     "a map or mission file is a few kilobytes; is this the right file?");
-            return null;
+            return new Document(file, SourceText.decode(new byte[0], new Problems(file)), null);
         }
         SourceText source = SourceText.decode(bytes, problems);
+        if (source.longestLine() > MAX_LINE) {
+            // the YAML scanner copies its look-ahead window for every 1024 characters of a token, so its
+            // time grows with the square of the longest line: refuse such a line before parsing
+            problems.add(new Pos(source.longestLineNumber(), 1), "line " + source.longestLineNumber() + " is "
+                            + source.longestLine() + " characters long (at most " + MAX_LINE + " are read)",
+                    "a map or mission line is short (a plan row has at most 2048 cells); is this the right file?");
+            return new Document(file, source, null);
+        }
         Node root = new YamlReader(problems, source).parseRoot();
         return new Document(file, source, root);
     }
@@ -127,7 +211,8 @@ final class YamlReader {
             return null;
         } catch (IOException | RuntimeException e) {
             // whatever the YAML library throws, the user gets a position and a message, not a trace
-            problems.add(safeHere(last), "cannot read the YAML: " + firstLine(String.valueOf(e.getMessage())), null);
+            problems.add(safeHere(last), "cannot read the YAML: " + firstLine(String.valueOf(e.getMessage())),
+                    "check the indentation and quoting here (maps/README.md and missions/README.md show the layout)");
             return null;
         }
     }
@@ -147,6 +232,7 @@ final class YamlReader {
             case START_OBJECT: {
                 checkDepth(depth, pos);
                 List<Node.Entry> entries = new ArrayList<>();
+                java.util.Map<String, Node.Entry> seen = new java.util.HashMap<>();
                 while (true) {
                     JsonToken k = parser.nextToken();
                     if (k == JsonToken.END_OBJECT || k == null) {
@@ -154,19 +240,18 @@ final class YamlReader {
                     }
                     String key = parser.currentName();
                     Pos keyPos = here();
-                    Node v = value(parser.nextToken(), depth + 1);
-                    Node.Entry first = null;
-                    for (Node.Entry e : entries) {
-                        if (e.key().equals(key)) {
-                            first = e;
-                            break;
-                        }
+                    if (key != null && !plainText(key, keyPos)) {
+                        key = Loading.shorten(key); // reported; the escaped form keeps the rest of the checks going
                     }
+                    Node v = value(parser.nextToken(), depth + 1);
+                    Node.Entry first = seen.get(key == null ? "" : key);
                     if (first != null) {
                         problems.add(keyPos, "key '" + Loading.shorten(key) + "' appears twice (first at line "
                                 + first.keyPos().line() + ")", "keep only one");
                     } else {
-                        entries.add(new Node.Entry(key == null ? "" : key, keyPos, v));
+                        Node.Entry e = new Node.Entry(key == null ? "" : key, keyPos, v);
+                        entries.add(e);
+                        seen.put(e.key(), e);
                     }
                 }
                 return new Node.MapNode(entries, pos);
@@ -184,6 +269,9 @@ final class YamlReader {
                 return new Node.SeqNode(items, pos);
             }
             case VALUE_STRING:
+                if (!plainText(parser.getText(), pos)) {
+                    return new Node.Bad(pos);
+                }
                 return new Node.Scalar(parser.getText(), Node.Kind.STRING, pos);
             case VALUE_NUMBER_INT:
                 return new Node.Scalar(parser.getText(), Node.Kind.INTEGER, pos);
@@ -198,6 +286,32 @@ final class YamlReader {
                 problems.add(pos, "unsupported YAML value (a tag such as '!!binary'?)", "write plain text or numbers");
                 return new Node.Bad(pos);
         }
+    }
+
+    /** Longest text value or key: names and surfaces are short, and every output repeats them. */
+    static final int MAX_TEXT = 1000;
+
+    /**
+     * Whether a text value or key may be used as written: at most {@link #MAX_TEXT} characters (on one
+     * line) and
+     * without bidirectional controls (U+202A..U+202E, U+2066..U+2069, U+200E, U+200F, U+061C), which
+     * would reorder every report line that names it. A problem if not.
+     */
+    private boolean plainText(String t, Pos pos) {
+        if (t.length() > MAX_TEXT && t.indexOf('\n') < 0) { // a plan is a long text of many lines
+            problems.add(pos, "a text of " + t.length() + " characters (at most " + MAX_TEXT + "): '"
+                    + Loading.shorten(t) + "'", "names and values in dockline files are short; shorten it");
+            return false;
+        }
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (c >= 0x202A && c <= 0x202E || c >= 0x2066 && c <= 0x2069 || c == 0x200E || c == 0x200F || c == 0x061C) {
+                problems.add(pos, String.format("the text '%s' contains the bidirectional control U+%04X",
+                        Loading.shorten(t), (int) c), "remove it: it would reorder the lines that show this text");
+                return false;
+            }
+        }
+        return true;
     }
 
     private void checkDepth(int depth, Pos pos) {
@@ -258,7 +372,7 @@ final class YamlReader {
         if (source.lineHasTab(at.line()) || problems.isExplained(at)) {
             return; // the tab or the bad byte on this line is already reported and is the cause
         }
-        String hint = null;
+        String hint = "check the indentation and quoting here (maps/README.md and missions/README.md show the layout)";
         if (message.contains("mapping values are not allowed")) {
             hint = "check the indentation; a text value that contains ': ' must be put in quotes";
         } else if (message.contains("could not find expected ':'")) {

@@ -1,28 +1,71 @@
 package dockline.solve;
 
-/**
- * The product game would not fit in the memory budget. Thrown before the build when the estimate
- * is over the budget, or during the build when the vertices found so far are. The message says how
- * big the game would be and what to change; the CLI maps it to exit code 3.
- */
-public final class ProductTooLargeException extends RuntimeException {
+import dockline.model.ResourceLimitException;
 
-    private final SizeEstimate estimate;
+/**
+ * The product game would not fit: either in the memory budget (thrown before the build when the
+ * estimate is over it, or during the build when the vertices found so far are), or in the index
+ * range of a Java array (the implicit route numbers every triple of the product with an int). The
+ * message says how big the game would be, which limit applied and what to change; the CLI maps it
+ * to exit code 3.
+ */
+public final class ProductTooLargeException extends ResourceLimitException {
+
+    private static final long serialVersionUID = 1L;
+
+    private final transient SizeEstimate estimate;
     private final long budgetBytes;
 
+    /** Over the memory budget {@code budgetBytes} (the one in force: --max-memory, or half the heap). */
     public ProductTooLargeException(SizeEstimate estimate, long budgetBytes, boolean duringBuild) {
         super((duringBuild ? "the game grew past the memory budget while it was built: at least " : "the game would have ")
-                + estimate.describe() + ", over the budget of " + SizeEstimate.megabytes(budgetBytes)
-                + ". Make it smaller: a coarser energy resolution (a larger unit in Wh), a smaller disturbance"
-                + " budget K, fewer tasks in any order, or give the JVM more memory (-Xmx).");
+                + estimate.describe() + ", over the memory budget of " + SizeEstimate.megabytes(budgetBytes)
+                + " (" + budgetSource(budgetBytes) + ")", memoryAdvice(budgetBytes));
         this.estimate = estimate;
         this.budgetBytes = budgetBytes;
+    }
+
+    private ProductTooLargeException(SizeEstimate estimate, long slots, String unused) {
+        super("the game would have " + estimate.describe() + ", numbered in " + slots + " slots: more than the "
+                        + (Integer.MAX_VALUE - 16) + " a Java array can index",
+                "make the game smaller: a coarser energy resolution (a larger unit in Wh), a smaller disturbance"
+                        + " budget K or fewer tasks in any order; more memory does not help with this limit");
+        this.estimate = estimate;
+        this.budgetBytes = -1;
+    }
+
+    /** The implicit numbering of the product has more slots than an int array can index. */
+    public static ProductTooLargeException indexRange(SizeEstimate estimate, long slots) {
+        return new ProductTooLargeException(estimate, slots, null);
+    }
+
+    /** Where the budget came from, judged against the default (half of {@link Runtime#maxMemory()}). */
+    static String budgetSource(long budgetBytes) {
+        long heap = Runtime.getRuntime().maxMemory();
+        if (budgetBytes == ProductOptions.defaultMemoryBudget()) {
+            return "half the JVM's maximum heap of " + (heap >> 20) + " MB, set by -Xmx";
+        }
+        return "the budget given with --max-memory; the JVM's maximum heap is " + (heap >> 20) + " MB";
+    }
+
+    private static String memoryAdvice(long budgetBytes) {
+        String smaller = "make the game smaller: a coarser energy resolution (a larger unit in Wh), a smaller"
+                + " disturbance budget K or fewer tasks in any order";
+        long heap = Runtime.getRuntime().maxMemory();
+        if (budgetBytes == ProductOptions.defaultMemoryBudget()) {
+            return smaller + "; or give the JVM more memory (java -Xmx...; the budget is half of it)";
+        }
+        if (budgetBytes < heap / 2) {
+            return smaller + "; or raise --max-memory (up to about " + (heap >> 21) + " MB with this -Xmx)";
+        }
+        return smaller + "; or give the JVM more memory (java -Xmx...) and raise --max-memory with it";
     }
 
     public SizeEstimate estimate() {
         return estimate;
     }
 
+    /** The memory budget that applied, or -1 when the limit was the index range. */
     public long budgetBytes() {
         return budgetBytes;
     }

@@ -729,8 +729,17 @@ public final class MissionWindow {
         t.setOnFailed(e -> {
             finishTask(t);
             Throwable x = t.getException();
-            solveStatus.setText("could not check: " + (x == null ? "unknown error" : x.getMessage())
-                    + " \u2014 still showing the previous result");
+            if (x == null || x instanceof IllegalArgumentException) {
+                solveStatus.setText("could not check: " + (x == null ? "unknown error" : x.getMessage())
+                        + " \u2014 still showing the previous result");
+            } else {
+                // a defect of the tool, shown as an error where the verdict goes, not as a status note
+                String what = x.getClass().getSimpleName() + (x.getMessage() != null ? ": " + x.getMessage() : "");
+                solveStatus.setText("internal error: " + what + " \u2014 please report it");
+                verdict.setText("Internal error \u2014 " + what + "; this mission was not checked; do not rely on the"
+                        + " result shown below");
+                VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
+            }
         });
         task.set(t);
         worker.execute(t);

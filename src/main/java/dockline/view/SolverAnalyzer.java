@@ -5,7 +5,6 @@ import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.certify.Certificate;
-import dockline.certify.ClosedLoop;
 import dockline.replay.ForcedEventException;
 import dockline.plan.Certification;
 import dockline.plan.MissionPlanner;
@@ -18,7 +17,6 @@ import dockline.replay.Replay;
 import dockline.solve.reserve.ChargeNeeded;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
-import dockline.solve.ProductTooLargeException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -41,8 +39,8 @@ public final class SolverAnalyzer implements Analyzer {
         try {
             plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
                     true, true)).withCancelled(cancelled));
-        } catch (ProductTooLargeException | ClosedLoop.TooLargeException e) {
-            throw new IllegalArgumentException("the game is too large: " + e.getMessage(), e);
+        } catch (dockline.model.ResourceLimitException e) {
+            throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
         stopIf(cancelled);
         PlanReplays mr = plan.replays().orElseThrow();
@@ -124,6 +122,11 @@ public final class SolverAnalyzer implements Analyzer {
                     + Units.both(m, mr.bestEffortFloor()) : "");
         }
         for (String p : problems) {
+            if (p != null && p.startsWith("internal")) {
+                // a defect of the tool is an error, never a footnote: the verdict is not to be relied on
+                outcome = VerdictSummary.Outcome.NOT_CHECKED;
+                words.insert(0, "INTERNAL ERROR: " + p + "; do not rely on this result and please report it. ");
+            }
             cert += "; " + p;
         }
         return new VerdictSummary(outcome, words.toString(), cert, a.lowestLevelUnits(), a.highestFloorUnits());

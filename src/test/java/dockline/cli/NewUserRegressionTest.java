@@ -338,8 +338,9 @@ class NewUserRegressionTest {
     /**
      * A policy whose closed loop was over the certificate checker's limit made {@code check} say
      * "internal error: dockline.certify.ClosedLoop$TooLargeException ..." with exit 4: a resource
-     * limit, reported as a bug. Every mission command maps it (and the other limits) to exit 3 now,
-     * in words, and a mission the solver rejects to exit 2.
+     * limit, reported as a bug. Every mission command maps resource limits (by their type) to exit 3
+     * now, in words with advice; an exception of any other type is an internal error (exit 4), not
+     * "bad input" or "too large" because of its class (issue 15).
      */
     @Test
     void solverFailures_mapToTheirExitCodes_inWords() {
@@ -348,14 +349,15 @@ class NewUserRegressionTest {
         java.io.StringWriter text = new java.io.StringWriter();
         java.io.PrintWriter err = new java.io.PrintWriter(text, true);
         assertThat(o.failure(new dockline.certify.ClosedLoop.TooLargeException(20), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
-        assertThat(o.failure(new ArithmeticException("integer overflow"), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(o.failure(new OutOfMemoryError("Java heap space"), err)).isEqualTo(ExitCodes.RESOURCE_LIMIT);
-        assertThat(o.failure(new IllegalArgumentException("no dock"), err)).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(text.toString()).contains("dockline: missions/x.yaml: the closed loop of the policy has more than 20"
-                + " states, too many to certify").contains("the game is too large: integer overflow")
-                .contains("dockline: missions/x.yaml: no dock").doesNotContain("Exception").doesNotContain("internal");
-        org.assertj.core.api.Assertions.assertThatThrownBy(() -> o.failure(new IllegalStateException("bug"), err))
-                .isInstanceOf(IllegalStateException.class); // left for the internal-error handler (exit 4)
+                + " states, too many to certify").contains("more memory does not help").doesNotContain("Exception")
+                .doesNotContain("internal");
+        assertThat(o.failure(new ArithmeticException("integer overflow"), err)).isEqualTo(ExitCodes.INTERNAL);
+        assertThat(o.failure(new IllegalArgumentException("no dock"), err)).isEqualTo(ExitCodes.INTERNAL);
+        assertThat(o.failure(new IllegalStateException("bug"), err)).isEqualTo(ExitCodes.INTERNAL);
+        assertThat(text.toString()).contains("internal error: ArithmeticException: integer overflow")
+                .contains("internal error: IllegalArgumentException: no dock").doesNotContain("\tat ");
     }
 
     /** check said {@code reserveUnits} while margin and replay said {@code floorUnits} for the same figure. */

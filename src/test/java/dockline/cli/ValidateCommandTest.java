@@ -87,7 +87,7 @@ class ValidateCommandTest {
                 + " (hint: a map has 'plan:' and 'legend:'; a mission has 'map:' and 'robot:' (see maps/README.md, missions/README.md))");
         assertThat(r.errLines().get(1)).endsWith("empty.yaml:1:1: the file is empty"
                 + " (hint: see maps/README.md or missions/README.md for what goes in it)");
-        assertThat(r.errLines().get(2)).endsWith("none.yaml:1:1: cannot read the file: it does not exist");
+        assertThat(r.errLines().get(2)).contains("none.yaml:1:1: cannot read the file: it does not exist (hint: ");
         assertThat(r.err()).doesNotContain("Exception").doesNotContain("\tat ");
     }
 

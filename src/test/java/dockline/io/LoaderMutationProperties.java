@@ -22,7 +22,8 @@ import net.jqwik.api.constraints.Size;
  * Feeds mutated copies of the demo files to the loaders: lines deleted, duplicated or swapped,
  * characters swapped or deleted, random bytes written or inserted, the file cut short. Every
  * mutant must either load or be rejected with an {@link InputException} whose problems all have a
- * line and column inside the file; no other exception may escape.
+ * line and column inside the file and a hint; no other exception may escape (HostileCorpusTest runs
+ * a generated corpus of hostile cases through the commands).
  */
 class LoaderMutationProperties {
 
@@ -150,6 +151,7 @@ class LoaderMutationProperties {
             assertThat(p.line()).as(p.format()).isGreaterThanOrEqualTo(1);
             assertThat(p.column()).as(p.format()).isGreaterThanOrEqualTo(1);
             assertThat(p.message()).as(p.format()).isNotBlank().doesNotContain(Problems.INTERNAL);
+            assertThat(p.hint()).as("every problem has a hint: " + p.format()).isNotBlank();
             if (p.file().equals(file)) {
                 assertThat(p.line()).as(p.format()).isLessThanOrEqualTo(lines + 1);
             } else {

@@ -819,7 +819,7 @@ public final class ProductGame {
             if (n == vA.length) {
                 int cap = (int) Math.min(MAX_ARRAY, (long) n + (n >> 1) + 16);
                 if (cap <= n) {
-                    throw new ProductTooLargeException(SizeEstimate.of(n, n, 0), budget, true);
+                    throw ProductTooLargeException.indexRange(SizeEstimate.of(n, n, 0), n);
                 }
                 vA = Arrays.copyOf(vA, cap);
                 vG = Arrays.copyOf(vG, cap);

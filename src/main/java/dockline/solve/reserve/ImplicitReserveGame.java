@@ -100,7 +100,7 @@ public final class ImplicitReserveGame {
         this.vertexCount = (long) arena.vertexCount() * gc * levels;
         this.slotCount = (long) arena.vertexCount() << (gBits + lBits);
         if (slotCount > Integer.MAX_VALUE - 16) {
-            throw new ProductTooLargeException(SizeEstimate.of(vertexCount, vertexCount, 0), Integer.MAX_VALUE, false);
+            throw ProductTooLargeException.indexRange(SizeEstimate.of(vertexCount, vertexCount, 0), slotCount);
         }
         this.inverse = new GoalPredecessors(arena, goal);
         int m = arena.edgeCount();

@@ -108,8 +108,9 @@ class ProductGameProperties {
                 ProductOptions.defaults().withMemoryBudget(est.bytes() - 1)))
                 .isInstanceOf(ProductTooLargeException.class)
                 .hasMessageContaining("vertices")
-                .hasMessageContaining("coarser energy resolution")
-                .hasMessageContaining("budget K");
+                .hasMessageContaining("over the memory budget of")
+                .satisfies(e -> assertThat(((ProductTooLargeException) e).advice())
+                        .contains("coarser energy resolution").contains("budget K"));
         ProductGame g = ProductGame.fromStart(arena, goal, monitorOf(m), ProductOptions.defaults().withMemoryBudget(est.bytes()));
         assertThat(g.vertexCount()).isPositive();
     }

@@ -12,7 +12,12 @@ import dockline.model.EventDuration;
 import dockline.model.EventKind;
 import dockline.model.Mission;
 import dockline.replay.ForcedEvent;
-import dockline.replay.MissionReplays;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.PlanReplays;
+import dockline.plan.PolicyChoice;
+import dockline.plan.Route;
 import dockline.replay.Replay;
 import dockline.replay.ReplayStep;
 import java.math.BigDecimal;
@@ -97,9 +102,11 @@ class LastingDemoTest {
     @Test
     void worstCaseReplay_saysWhichDoorStaysShut_andTheForcedFormNamesTheDoor() throws Exception {
         Mission m = ring();
-        MissionReplays mr = MissionReplays.of(m, ReserveOptions.defaults());
-        assertThat(mr.guaranteed()).isTrue();
-        assertThat(mr.certified()).isTrue();
+        Plan plan = MissionPlanner.plan(m, PlanOptions.of(
+                new Route.Product(PolicyChoice.FEWEST_MOVES, false, false, true, false)));
+        assertThat(plan.guaranteed()).isTrue();
+        assertThat(plan.certification().ok()).isTrue();
+        PlanReplays mr = plan.replays().orElseThrow();
         Replay worst = mr.worstCase();
         assertThat(String.join("\n", worst.explanation())).contains("stays closed for the rest of the mission");
         ReplayStep shut = worst.steps().stream().filter(s -> !s.event().nominal()).findFirst().orElseThrow();
