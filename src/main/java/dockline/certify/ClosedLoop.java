@@ -235,7 +235,7 @@ public final class ClosedLoop {
         return arena.budgetLeft(nodeVertex.get(node));
     }
 
-    /** The doors and zones closed at the node ({@link dockline.solve.PolicyEntry#closures}). */
+    /** The doors and zones closed at the node ({@link dockline.policy.PolicyEntry#closures}). */
     public String closures(int node) {
         return arena.closures(nodeVertex.get(node));
     }

@@ -32,6 +32,11 @@ public record SourceImage(Path file, long bytes, String sha256, GreyImage image)
             if (Files.isDirectory(file)) {
                 throw new RasterException(RasterProblem.of(file, "cannot read the image: it is a folder", null));
             }
+            // asked before opening: a named pipe would wait for a writer and a device may never end
+            if (Files.exists(file) && !Files.isRegularFile(file)) {
+                throw new RasterException(RasterProblem.of(file, "cannot read the image: it is not a regular file"
+                        + " (a named pipe, a device or a socket)", "give the path of an image file saved on disk"));
+            }
             long size = Files.size(file);
             if (size > MAX_BYTES) {
                 throw new RasterException(RasterProblem.of(file, "the file has " + size + " bytes, more than "

@@ -251,6 +251,30 @@ class ImportCommandTest {
         }
     }
 
+    /** A named pipe as the image would block the reader for ever: it is refused before it is opened. */
+    @Test
+    void a_named_pipe_as_the_image_is_refused_at_once() throws Exception {
+        Path fifo = dir.resolve("scan.pgm");
+        boolean made;
+        try {
+            Process pr = new ProcessBuilder("mkfifo", fifo.toString()).redirectErrorStream(true).start();
+            made = pr.waitFor(10, java.util.concurrent.TimeUnit.SECONDS) && pr.exitValue() == 0;
+        } catch (IOException e) {
+            made = false;
+        }
+        if (!made) {
+            System.out.println("SKIPPED a_named_pipe_as_the_image_is_refused_at_once: mkfifo is not available here");
+            org.junit.jupiter.api.Assumptions.assumeTrue(false, "mkfifo is not available");
+        }
+        Path out = dir.resolve("out.yaml");
+        long t0 = System.nanoTime();
+        Run r = run("import", fifo.toString(), "--pixel-size", "0.1", "--cell-size", "0.3", "--out", out.toString());
+        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("not a regular file");
+        assertThat(out).doesNotExist();
+        assertThat(System.nanoTime() - t0).isLessThan(5_000_000_000L);
+    }
+
     @Test
     void imported_map_gives_the_same_verdict_as_the_plan_typed_by_hand() throws IOException {
         sameVerdicts(ROOM, ROOM, null, 12, 7);
