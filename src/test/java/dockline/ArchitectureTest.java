@@ -68,4 +68,9 @@ class ArchitectureTest {
     static final ArchRule discountedRoute_usesNoOtherRoute = noClasses().that()
             .resideInAPackage("dockline.solve.discounted..").should().dependOnClassesThat()
             .resideInAnyPackage("dockline.solve.reserve..", "dockline.solve.fast..");
+
+    @ArchTest
+    static final ArchRule chargingRoute_usesNoOtherRoute = noClasses().that()
+            .resideInAPackage("dockline.solve.charging..").should().dependOnClassesThat()
+            .resideInAnyPackage("dockline.solve.reserve..", "dockline.solve.fast..", "dockline.solve.discounted..");
 }

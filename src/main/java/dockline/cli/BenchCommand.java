@@ -3,6 +3,7 @@ package dockline.cli;
 import dockline.bench.BenchReport;
 import dockline.bench.Benchmark;
 import dockline.bench.BuildingGenerator;
+import dockline.bench.ResolutionBench;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -50,11 +51,28 @@ public final class BenchCommand implements Callable<Integer> {
     @Option(names = "--reading", description = "run only the reading section: 8 MiB map files on one line, in short"
             + " lines and in the longest lines read (reading must be linear in the file size)")
     boolean reading;
+    @Option(names = "--resolution-row", description = "run only the row \"resolution independence\": the charging"
+            + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
+    boolean resolutionRow;
 
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        if (resolutionRow) {
+            int side = sizes != null && !sizes.isEmpty() ? sizes.get(0) : 256;
+            if (side < BuildingGenerator.MIN_SIDE || side > BuildingGenerator.MAX_SIDE) {
+                err.println("dockline: --sizes: " + side + " is outside " + BuildingGenerator.MIN_SIDE + ".."
+                        + BuildingGenerator.MAX_SIDE);
+                err.println("Try 'dockline bench --help'.");
+                err.flush();
+                return ExitCodes.BAD_INPUT;
+            }
+            ResolutionBench.Row row = ResolutionBench.run(side, seed, 2, 3);
+            out.print(row.toText());
+            out.flush();
+            return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
+        }
         if (reading) {
             dockline.bench.ReadingBench.Result r = dockline.bench.ReadingBench.run(3);
             out.print(json ? Json.readingJson(r) : r.toText());

@@ -1,0 +1,462 @@
+package dockline.solve.charging;
+
+import dockline.arena.ActionKind;
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
+import dockline.solve.game.GoalPredecessors;
+import dockline.util.IntArrayList;
+import java.util.Arrays;
+
+/**
+ * The reserve question <em>with</em> charging, solved without the battery levels in the game: per
+ * game position (robot vertex of the arena, goal state) the least charge, in units above the
+ * reserve floor, from which the robot can force completion (maps/README.md, "Game semantics").
+ *
+ * <p><b>Method.</b> Consumption games with reload states (Brázdil, Chatterjee, Kučera, Novotný,
+ * "Efficient Controller Synthesis for Consumption Games with Multiple Resource Types", CAV 2012),
+ * here with one resource, a capacity and a reachability objective: rounds of Knuth's min-max
+ * Dijkstra on arena × goal (D. E. Knuth, 1977, "A generalization of Dijkstra's algorithm",
+ * Information Processing Letters 6(1):1-5), in which a <em>good</em> dock counts as a target.
+ *
+ * <p><b>Why it equals the product game.</b> Write λ = level − floor and U = capacity − floor. In
+ * the product (arena × goal × levels, {@code ReserveMonitor}) a step of delta w takes λ to
+ * min(U, λ + w) and loses when λ + w &lt; 0. (1) Winning is upward closed in λ, because
+ * min(U, λ + w) is monotone in λ; so a position is described by its least winning λ, {@code need},
+ * in 0..U, or ∞. (2) For an outcome of delta w ≤ 0 to a position of need x ≤ U the least λ before
+ * the step is x − w (the saturation never bites, as λ + w ≤ λ ≤ U); values above U are ∞. These are
+ * Knuth's superior functions (max over outcomes of x − w, min over actions), so a Dijkstra pass
+ * finds the least fixpoint. (3) The only positive deltas are charge actions, which the arena gives
+ * exactly one undisturbed outcome, back to the same robot vertex; the goal state is unchanged too,
+ * because occupying the same cell again is idempotent in the goal automaton on every position a play
+ * can meet (one whose goal state already counts its own cell; other positions get an upper bound). So at a dock the robot
+ * can charge from any λ ≥ 0 to exactly U (charge rate ≥ 1 unit, saturating), and a charging dock
+ * position has need 0 if its need without charging, with a full battery, is at most U, and ∞
+ * otherwise (charging never lowers a need below what the moves give at U). (4) Reachability is a
+ * least fixpoint, so good docks are found <em>from below</em>: round 0 has only completion positions
+ * as targets; after each round every charging dock position whose need without charging is at most U
+ * becomes good (need 0) and a target of the next round; the rounds stop when no dock position is
+ * added. Starting from "every dock good" and removing bad ones (the greatest fixpoint, right for the
+ * safety objective of consumption games) would be wrong here: two docks within reach of each other
+ * but of no completion would stay good. Values only fall from round to round, and the last round's
+ * values are the product game's least winning levels, at every position, for this U.
+ *
+ * <p><b>Policy.</b> A position's policy is the list of its improvements, one per round in which its
+ * value fell: (threshold, action), thresholds falling. At level λ the robot takes the first entry
+ * whose threshold is at most λ (the earliest round that already wins from λ); at a good dock below
+ * its move's threshold it charges. This is a ranked strategy: an entry of round r leads, in Dijkstra's
+ * order of round r, to positions that then use an entry of a round at most r and finalised earlier,
+ * or to a completion, or to a dock that turned good before round r; so plays cannot cycle and every
+ * step keeps λ ≥ the next position's threshold ≥ 0. Taking each position's last-round choice instead
+ * could cycle between two docks.
+ *
+ * <p><b>Cost.</b> At most (number of charging dock positions + 1) rounds, in practice the largest
+ * number of reloads a worst-case play needs plus two; each round O(m·G·log(n·G)) time for an arena of
+ * n vertices and m edges and G goal states (every round starts afresh: values only fall between rounds,
+ * but a dock that turns good lowers values below Dijkstra's frontier, so a round cannot be resumed), and
+ * 11 bytes per robot position and 5 per disturbance position, plus 12 bytes per policy entry (one per
+ * position and round in which its need fell) and the heap. Nothing depends on the number of battery levels except
+ * the size of the numbers. The highest floor needs one solve per floor tried (U changes the good
+ * docks), see {@link ChargingRoute}.
+ */
+public final class ChargingSolver {
+
+    /** Need of a position from which the robot cannot force completion. */
+    public static final int INFINITE = Integer.MAX_VALUE;
+
+    private final Arena arena;
+    private final GoalAutomaton goal;
+    private final int goalCount;
+    private final int robotCount;
+    private final GoalPredecessors inverse;
+    /** Per robot vertex: the out-edge of its charge action, or -1. */
+    private final int[] chargeEdge;
+
+    /**
+     * @throws IllegalArgumentException if arena × goal has more than {@code Integer.MAX_VALUE} vertices, or a
+     *                                  positive delta is not a charge action's only outcome back to its robot vertex
+     */
+    public ChargingSolver(Arena arena, GoalAutomaton goal) {
+        this.arena = arena;
+        this.goal = goal;
+        this.goalCount = goal.stateCount();
+        Math.multiplyExact(arena.vertexCount(), goalCount);
+        this.robotCount = arena.robotCount();
+        this.inverse = new GoalPredecessors(arena, goal);
+        this.chargeEdge = new int[robotCount];
+        Arrays.fill(chargeEdge, -1);
+        for (int r = 0; r < robotCount; r++) {
+            for (int e = arena.outBegin(r); e < arena.outEnd(r); e++) {
+                int d = arena.target(e);
+                boolean charge = arena.actionKind(d) == ActionKind.CHARGE;
+                for (int f = arena.outBegin(d); f < arena.outEnd(d); f++) {
+                    if (arena.weight(f) > 0 && !(charge && arena.outEnd(d) - arena.outBegin(d) == 1
+                            && arena.target(f) == r)) {
+                        throw new IllegalArgumentException("a positive energy delta that is not a charge step"
+                                + " back to the same position: the charging route does not apply");
+                    }
+                }
+                if (charge && arena.outEnd(d) > arena.outBegin(d)) {
+                    chargeEdge[r] = e;
+                }
+            }
+        }
+    }
+
+    public Arena arena() {
+        return arena;
+    }
+
+    public GoalAutomaton goal() {
+        return goal;
+    }
+
+    /** The goal state after occupying the start cell (may be {@link GoalAutomaton#REJECT}). */
+    public int startGoal() {
+        return goal.initial(arena.cellZones(arena.cell(arena.startVertex())));
+    }
+
+    /**
+     * Every position's least winning level above the floor for a usable range of {@code usable} units
+     * (capacity − floor), and the threshold policy.
+     *
+     * @throws IllegalArgumentException if {@code usable} is negative
+     */
+    public Values solve(int usable) {
+        if (usable < 0) {
+            throw new IllegalArgumentException("usable range must not be negative: " + usable);
+        }
+        final int gc = goalCount;
+        final int rc = robotCount;
+        final int robotN = Math.multiplyExact(rc, gc);
+        final int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
+        final boolean[] good = new boolean[robotN];
+        final int[] best = new int[robotN];
+        Arrays.fill(best, INFINITE);
+        final int[] need = new int[robotN];
+        final int[] distMax = new int[distN];
+        final byte[] processed = new byte[distN];
+        final boolean[] done = new boolean[robotN];
+        final byte[] choice = new byte[robotN];
+        final Heap heap = new Heap(Math.min(robotN, 1 << 20));
+        // improvements, per round: position, threshold, out-edge
+        IntArrayList impPos = new IntArrayList();
+        IntArrayList impNeed = new IntArrayList();
+        IntArrayList impEdge = new IntArrayList();
+        int rounds = 0;
+        int goodCount = 0;
+        while (true) {
+            rounds++;
+            Arrays.fill(need, INFINITE);
+            Arrays.fill(distMax, 0);
+            Arrays.fill(processed, (byte) 0);
+            Arrays.fill(done, false);
+            Arrays.fill(choice, (byte) 0);
+            // every robot vertex (cell and disturbance state: budget left, and closures with lasting events)
+            for (int r = 0; r < rc; r++) {
+                boolean dock = arena.isDock(arena.cell(r));
+                for (int g = 0; g < gc; g++) {
+                    int p = r * gc + g;
+                    if (goal.accepting(g, dock) || good[p]) {
+                        need[p] = 0;
+                        heap.push(0, p);
+                    }
+                }
+            }
+            dijkstra(usable, need, distMax, processed, done, choice, heap);
+            int added = 0;
+            for (int p = 0; p < robotN; p++) {
+                int r = p / gc;
+                int g = p - r * gc;
+                if (good[p] || goal.accepting(g, arena.isDock(arena.cell(r)))) {
+                    continue;
+                }
+                int x = done[p] ? need[p] : INFINITE;
+                if (x < best[p]) {
+                    best[p] = x;
+                    impPos.add(p);
+                    impNeed.add(x);
+                    impEdge.add(arena.outBegin(r) + choice[p] - 1);
+                }
+                if (x != INFINITE && chargeEdge[r] >= 0) {
+                    good[p] = true;
+                    added++;
+                }
+            }
+            goodCount += added;
+            if (added == 0) {
+                break;
+            }
+        }
+        for (int p = 0; p < robotN; p++) {
+            if (good[p]) {
+                need[p] = 0;
+            }
+        }
+        return new Values(this, usable, need, good, rounds, goodCount, impPos.toArray(), impNeed.toArray(),
+                impEdge.toArray());
+    }
+
+    /** One round of Knuth's min-max Dijkstra from the targets already in the heap; charge outcomes left out. */
+    private void dijkstra(int usable, int[] need, int[] distMax, byte[] processed, boolean[] done, byte[] choice,
+                          Heap heap) {
+        final int gc = goalCount;
+        final int rc = robotCount;
+        while (!heap.isEmpty()) {
+            long top = heap.poll();
+            int x = (int) (top >>> 32);
+            int u = (int) top;
+            if (done[u] || x != need[u]) {
+                continue; // stale entry
+            }
+            done[u] = true;
+            int r = u / gc;
+            int g2 = u - r * gc;
+            int cellR = arena.cell(r);
+            int gFrom = inverse.begin(cellR, g2);
+            int gTo = inverse.end(cellR, g2);
+            if (gFrom == gTo) {
+                continue;
+            }
+            for (int i = arena.inBegin(r), end = arena.inEnd(r); i < end; i++) {
+                int e = arena.inEdge(i);
+                int w = arena.weight(e);
+                if (w > 0) {
+                    continue; // a charge step: handled by the good docks (class comment, point 3)
+                }
+                int d = arena.source(e);
+                long costL = (long) x - w;
+                int cost = costL > usable ? INFINITE : (int) costL;
+                int dIdx = (d - rc) * gc;
+                int outdeg = arena.outEnd(d) - arena.outBegin(d);
+                for (int j = gFrom; j < gTo; j++) {
+                    int g = inverse.state(j);
+                    int dp = dIdx + g;
+                    if (cost > distMax[dp]) {
+                        distMax[dp] = cost;
+                    }
+                    if (++processed[dp] == outdeg) {
+                        int y = distMax[dp];
+                        if (y == INFINITE) {
+                            continue;
+                        }
+                        int ownerEdge = arena.inEdge(arena.inBegin(d));
+                        int owner = arena.source(ownerEdge);
+                        int rp = owner * gc + g;
+                        if (y < need[rp] && !done[rp]) {
+                            need[rp] = y;
+                            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
+                            heap.push(y, rp);
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    int chargeEdge(int r) {
+        return chargeEdge[r];
+    }
+
+    int goalCount() {
+        return goalCount;
+    }
+
+    /**
+     * The result of {@link #solve}: least needs and the threshold policy for one usable range.
+     */
+    public static final class Values {
+        private final ChargingSolver solver;
+        private final int usable;
+        private final int[] need;
+        private final boolean[] good;
+        private final int rounds;
+        private final int goodDocks;
+        // policy entries in CSR by position, thresholds falling
+        private final int[] entryStart;
+        private final int[] entryNeed;
+        private final int[] entryEdge;
+
+        private Values(ChargingSolver solver, int usable, int[] need, boolean[] good, int rounds, int goodDocks,
+                       int[] impPos, int[] impNeed, int[] impEdge) {
+            this.solver = solver;
+            this.usable = usable;
+            this.need = need;
+            this.good = good;
+            this.rounds = rounds;
+            this.goodDocks = goodDocks;
+            int n = need.length;
+            this.entryStart = new int[n + 1];
+            for (int p : impPos) {
+                entryStart[p + 1]++;
+            }
+            for (int p = 0; p < n; p++) {
+                entryStart[p + 1] += entryStart[p];
+            }
+            this.entryNeed = new int[impPos.length];
+            this.entryEdge = new int[impPos.length];
+            int[] fill = Arrays.copyOf(entryStart, n);
+            // improvements were recorded round by round, so each position's entries come in falling thresholds
+            for (int i = 0; i < impPos.length; i++) {
+                int at = fill[impPos[i]]++;
+                entryNeed[at] = impNeed[i];
+                entryEdge[at] = impEdge[i];
+            }
+        }
+
+        /** Capacity minus floor, in units. */
+        public int usable() {
+            return usable;
+        }
+
+        /** Dijkstra rounds taken (the last one adds no dock). */
+        public int rounds() {
+            return rounds;
+        }
+
+        /** Charging dock positions found good (a full battery there suffices). */
+        public int goodDocks() {
+            return goodDocks;
+        }
+
+        /**
+         * The least level above the floor from which the robot wins at robot vertex {@code v} in goal state
+         * {@code g}; {@link #INFINITE} when no level does or {@code g} is the reject sink.
+         */
+        public int need(int v, int g) {
+            checkRobot(v);
+            return g == GoalAutomaton.REJECT ? INFINITE : need[v * solver.goalCount + g];
+        }
+
+        /** Whether (v, g) is a charging dock position from which a full battery suffices. */
+        public boolean goodDock(int v, int g) {
+            checkRobot(v);
+            return g != GoalAutomaton.REJECT && good[v * solver.goalCount + g];
+        }
+
+        /** The start position's need (with the start cell's goal state). */
+        public int startNeed() {
+            int g = solver.startGoal();
+            return need(solver.arena.startVertex(), g);
+        }
+
+        /**
+         * The policy of position (v, g) as level thresholds: pairs (threshold above the floor, arena out-edge
+         * of v), thresholds falling; at level λ take the first pair whose threshold is at most λ. A good dock
+         * ends with (0, its charge edge) when its move needs more than 0. Empty for completion positions and
+         * for positions that cannot win.
+         */
+        public int[][] thresholds(int v, int g) {
+            checkRobot(v);
+            if (g == GoalAutomaton.REJECT) {
+                return new int[0][];
+            }
+            int p = v * solver.goalCount + g;
+            int from = entryStart[p];
+            int to = entryStart[p + 1];
+            boolean charge = good[p] && to > from && entryNeed[to - 1] > 0;
+            int[][] out = new int[to - from + (charge ? 1 : 0)][];
+            for (int i = from; i < to; i++) {
+                out[i - from] = new int[] {entryNeed[i], entryEdge[i]};
+            }
+            if (charge) {
+                out[to - from] = new int[] {0, solver.chargeEdge(v)};
+            }
+            return out;
+        }
+
+        /**
+         * The arena out-edge the threshold policy takes at robot vertex v, goal state g and level λ above the
+         * floor; -1 when the mission is complete there or λ is below the position's need. O(entries of the
+         * position).
+         */
+        public int action(int v, int g, int level) {
+            checkRobot(v);
+            if (g == GoalAutomaton.REJECT || level < 0) {
+                return -1;
+            }
+            int p = v * solver.goalCount + g;
+            for (int i = entryStart[p]; i < entryStart[p + 1]; i++) {
+                if (entryNeed[i] <= level) {
+                    return entryEdge[i];
+                }
+            }
+            return good[p] ? solver.chargeEdge(v) : -1;
+        }
+
+        /** Policy entries over all positions (the charge entries of good docks not counted). */
+        public int entryCount() {
+            return entryNeed.length;
+        }
+
+        private void checkRobot(int v) {
+            if (v < 0 || v >= solver.robotCount) {
+                throw new IllegalArgumentException("not a robot vertex: " + v);
+            }
+        }
+    }
+
+    /**
+     * Min-heap of positions with keys packed into one long ({@code key << 32 | position}), 4-ary, lazy
+     * deletion. O(log n) per operation.
+     */
+    private static final class Heap {
+        private long[] heap;
+        private int size;
+
+        Heap(int capacity) {
+            this.heap = new long[Math.max(16, capacity)];
+        }
+
+        boolean isEmpty() {
+            return size == 0;
+        }
+
+        void push(int key, int v) {
+            if (size == heap.length) {
+                heap = Arrays.copyOf(heap, Math.addExact(heap.length, heap.length >> 1));
+            }
+            long x = ((long) key << 32) | v;
+            int i = size++;
+            while (i > 0) {
+                int parent = (i - 1) >>> 2;
+                long p = heap[parent];
+                if (p <= x) {
+                    break;
+                }
+                heap[i] = p;
+                i = parent;
+            }
+            heap[i] = x;
+        }
+
+        long poll() {
+            long top = heap[0];
+            long x = heap[--size];
+            int n = size;
+            int i = 0;
+            while (true) {
+                int c = 4 * i + 1;
+                if (c >= n) {
+                    break;
+                }
+                int bestI = c;
+                long bv = heap[c];
+                int last = Math.min(c + 4, n);
+                for (int j = c + 1; j < last; j++) {
+                    long hv = heap[j];
+                    if (hv < bv) {
+                        bv = hv;
+                        bestI = j;
+                    }
+                }
+                if (x <= bv) {
+                    break;
+                }
+                heap[i] = bv;
+                i = bestI;
+            }
+            heap[i] = x;
+            return top;
+        }
+    }
+}

@@ -1,0 +1,141 @@
+package dockline.solve.charging;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dockline.arena.Action;
+import dockline.arena.ActionKind;
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.fixtures.ModelMoves;
+import dockline.goal.GoalAutomaton;
+import dockline.model.Cell;
+import dockline.model.Mission;
+import dockline.model.Zone;
+import dockline.solve.RandomMissions;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.statistics.Statistics;
+
+/**
+ * The threshold policy replayed against every disturbance sequence (exhaustive enumeration of the closed
+ * loop) on random tiny missions. Oracle: the game's moves read straight from the map and mission records
+ * ({@link ModelMoves}, maps/README.md "Game semantics"), with this test's own task bookkeeping and battery
+ * arithmetic (min(capacity, level + delta), lost below the floor); the arena is used only to turn a cell
+ * and budget into the policy's look-up key. Every play must stay at or above the floor, never enter an
+ * avoided zone and end in completion: the closed loop must have no cycle (a cycle is a play that never
+ * completes) and every leaf must be a completion.
+ */
+class ThresholdPolicyReplayProperties {
+
+    @Property(tries = 2000)
+    void everyPlayStaysAboveFloorAndCompletes(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        Arena arena = ArenaCompiler.compile(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        int cap = m.capacityUnits();
+        int floor = Math.min(m.reserveUnits(), cap);
+        ChargingRoute.Analysis a = ChargingRoute.analyse(new ChargingSolver(arena, goal), cap, floor, m.startUnits());
+        boolean charging = m.scale().gain(m.robot().chargeWh()) > 0;
+        Statistics.label("replayed").collect(a.guaranteed() ? (charging ? "charging" : "no charging") : "not guaranteed");
+        Statistics.label("replayed").coverage(c -> c.check("charging").percentage(p -> p > 10));
+        if (!a.guaranteed()) {
+            return;
+        }
+        Closed loop = new Closed(m, arena, goal, a.values(), floor, cap);
+        Cell s = m.start();
+        int mask = loop.step(0, s);
+        assertThat(mask).isNotNegative();
+        loop.visit(s, arena.budget(), mask, m.startUnits());
+        Statistics.label("charged in a play").collect(loop.charges > 0);
+        Statistics.label("charged in a play").coverage(c -> c.check(true).count(n -> n >= 10));
+    }
+
+    /** Depth-first walk of the closed loop (cell, budget, task mask, level), with cycle detection. */
+    private static final class Closed {
+        private final Mission m;
+        private final Arena arena;
+        private final GoalAutomaton goal;
+        private final ChargingSolver.Values values;
+        private final ModelMoves moves;
+        private final int floor;
+        private final int cap;
+        private final List<String> visit;
+        private final Map<Long, Boolean> state = new HashMap<>(); // false: on the stack, true: finished
+        int charges;
+
+        Closed(Mission m, Arena arena, GoalAutomaton goal, ChargingSolver.Values values, int floor, int cap) {
+            this.m = m;
+            this.arena = arena;
+            this.goal = goal;
+            this.values = values;
+            this.moves = new ModelMoves(m);
+            this.floor = floor;
+            this.cap = cap;
+            this.visit = m.tasks().visit();
+        }
+
+        /** Own task bookkeeping: mask after occupying c, -1 for an avoided zone. */
+        int step(int mask, Cell c) {
+            for (String avoid : m.tasks().avoid()) {
+                if (zone(avoid).contains(c)) {
+                    return -1;
+                }
+            }
+            boolean again = true;
+            while (again) {
+                again = false;
+                for (int i = 0; i < visit.size(); i++) {
+                    boolean next = !m.tasks().ordered() || Integer.bitCount(mask) == i;
+                    if ((mask & (1 << i)) == 0 && next && zone(visit.get(i)).contains(c)) {
+                        mask |= 1 << i;
+                        again = true;
+                    }
+                }
+            }
+            return mask;
+        }
+
+        private Zone zone(String name) {
+            return m.map().zones().stream().filter(z -> z.name().equals(name)).findFirst().orElseThrow();
+        }
+
+        void visit(Cell c, int k, int mask, int level) {
+            String where = String.format("at %s budget %d mask %d level %d%n%s", c, k, mask, level,
+                    RandomMissions.describe(m));
+            assertThat(level).as("below the floor " + where).isGreaterThanOrEqualTo(floor);
+            assertThat(mask).as("avoided zone " + where).isNotNegative();
+            boolean done = mask == (1 << visit.size()) - 1
+                    && (!m.tasks().finishOnDock() || m.map().terrainAt(c).dock());
+            if (done) {
+                return;
+            }
+            long key = (((long) c.index(m.map().width()) * 8 + k) * 256 + mask) * 4096 + level;
+            Boolean seen = state.get(key);
+            assertThat(seen).as("a play that never completes (cycle) " + where).isNotEqualTo(Boolean.FALSE);
+            if (seen != null) {
+                return;
+            }
+            state.put(key, false);
+            int v = arena.robotVertex(c.index(m.map().width()), k);
+            int g = goal.stateOfMask(mask);
+            int edge = values.action(v, g, level - floor);
+            assertThat(edge).as("no action " + where).isNotNegative();
+            Action act = arena.action(arena.target(edge));
+            List<Cell> nbrs = moves.neighbours(c);
+            int index = act.kind() == ActionKind.MOVE ? nbrs.indexOf(act.target())
+                    : act.kind() == ActionKind.WAIT ? nbrs.size() : nbrs.size() + 1;
+            List<List<ModelMoves.Outcome>> options = moves.actions(c, k);
+            assertThat(index).as("policy action %s unknown to the model %s", act, where).isBetween(0, options.size() - 1);
+            if (act.kind() == ActionKind.CHARGE) {
+                charges++;
+            }
+            for (ModelMoves.Outcome o : options.get(index)) {
+                visit(o.to(), o.budgetLeft(), step(mask, o.to()), Math.min(cap, level + o.delta()));
+            }
+            state.put(key, true);
+        }
+    }
+}
