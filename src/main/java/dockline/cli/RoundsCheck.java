@@ -1,10 +1,10 @@
 package dockline.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dockline.certify.DeadlineCertificateChecker;
-import dockline.certify.PatrolCertificateChecker;
 import dockline.certify.RoundsCertificate;
 import dockline.model.Mission;
+import dockline.plan.PolicyChoice;
+import dockline.plan.RoundsPlan;
 import dockline.model.Timing;
 import dockline.report.Caveats;
 import dockline.solve.ProductOptions;
@@ -54,42 +54,30 @@ final class RoundsCheck {
         return ProductOptions.defaults().withMemoryBudget(memoryBudgetBytes).effectiveMemoryBudget();
     }
 
-    /** Runs the check, prints the result, returns the exit code. */
+    /** Plans the mission through the core ({@link RoundsPlan}), prints the result, returns the exit code. */
     static int run(Mission m, long memoryBudgetBytes, boolean safest, boolean json, PrintWriter out, PrintWriter err) {
-        if (m.tasks().patrols()) {
-            PatrolAnalysis a = PatrolSolver.analyse(m, budget(memoryBudgetBytes), safest);
-            RoundsCertificate cert = null;
-            if (a.guaranteed()) {
-                cert = PatrolCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
-                        a.startUnits());
-                if (!cert.ok() || cert.worstMinimumUnits() != a.lowestLevelUnits().getAsInt()
-                        || cert.longestLapTicks() != a.longestLapTicks().getAsInt()) {
-                    return internal(err, cert);
-                }
-            }
+        RoundsPlan plan = RoundsPlan.of(m, budget(memoryBudgetBytes), safest ? PolicyChoice.SAFEST
+                : PolicyChoice.FEWEST_MOVES);
+        RoundsCertificate cert = plan.certificate();
+        if (plan.certificateDisagrees()) {
+            return internal(err, cert);
+        }
+        if (plan.patrol().isPresent()) {
+            PatrolAnalysis a = plan.patrol().get();
             if (json) {
                 out.println(patrolJson(a, cert));
             } else {
                 patrolText(a, cert, out);
             }
-            return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
-        }
-        DeadlineAnalysis a = DeadlineSolver.analyse(m, budget(memoryBudgetBytes), safest);
-        RoundsCertificate cert = null;
-        if (a.guaranteed()) {
-            cert = DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(), a.reserveUnits(),
-                    a.startUnits(), a.deadlineTicks());
-            if (!cert.ok() || cert.worstMinimumUnits() != a.worstCaseMinimumUnits().getAsInt()
-                    || cert.longestLapTicks() != a.worstFinishTicks().getAsInt()) {
-                return internal(err, cert);
+        } else {
+            DeadlineAnalysis a = plan.deadline().orElseThrow();
+            if (json) {
+                out.println(deadlineJson(a, cert));
+            } else {
+                deadlineText(a, cert, out);
             }
         }
-        if (json) {
-            out.println(deadlineJson(a, cert));
-        } else {
-            deadlineText(a, cert, out);
-        }
-        return a.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+        return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
     private static int internal(PrintWriter err, RoundsCertificate cert) {

@@ -1,5 +1,8 @@
 package dockline.cli;
 
+import dockline.plan.PolicyChoice;
+import dockline.plan.RoundsPlan;
+
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dockline.io.AtomicFiles;
 import dockline.model.Mission;
@@ -31,18 +34,15 @@ final class RoundsReplayCommand {
         RoundsReplay r;
         try {
             long budget = RoundsCheck.budget(mission.memoryBudgetBytes());
-            if (m.tasks().patrols()) {
-                r = RoundsReplay.patrol(m, budget, safest);
-            } else {
-                Optional<RoundsReplay> d = RoundsReplay.deadline(m, budget, safest);
-                if (d.isEmpty()) {
-                    err.println("dockline: " + mission.missionFile + ": the robot cannot always finish this mission at"
-                            + " its floor, deadline or not; for the play that defeats it, check the mission without"
-                            + " its deadline (remove deadline:) and replay that.");
-                    return ExitCodes.NOT_GUARANTEED;
-                }
-                r = d.get();
+            Optional<RoundsReplay> d = RoundsPlan.replay(m, budget, safest ? PolicyChoice.SAFEST
+                    : PolicyChoice.FEWEST_MOVES);
+            if (d.isEmpty()) {
+                err.println("dockline: " + mission.missionFile + ": the robot cannot always finish this mission at"
+                        + " its floor, deadline or not; for the play that defeats it, check the mission without"
+                        + " its deadline (remove deadline:) and replay that.");
+                return ExitCodes.NOT_GUARANTEED;
             }
+            r = d.get();
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }

@@ -1,0 +1,84 @@
+package dockline.plan;
+
+import dockline.certify.DeadlineCertificateChecker;
+import dockline.certify.PatrolCertificateChecker;
+import dockline.certify.RoundsCertificate;
+import dockline.model.Mission;
+import dockline.replay.RoundsReplay;
+import dockline.solve.rounds.DeadlineAnalysis;
+import dockline.solve.rounds.DeadlineSolver;
+import dockline.solve.rounds.PatrolAnalysis;
+import dockline.solve.rounds.PatrolSolver;
+import java.util.Optional;
+
+/**
+ * The core's answer for the missions beyond one trip, a patrol or a visit mission with a deadline: the
+ * solver's analysis ({@link PatrolSolver}: Büchi nested attractors; {@link DeadlineSolver}: attractor
+ * ranks as the ticks-left monitor) and, when guaranteed, the independent certificate of its policy
+ * ({@link PatrolCertificateChecker}, {@link DeadlineCertificateChecker}). Front ends only print it: a
+ * certificate that fails, or that finds other figures than the solver, is {@link #certificateDisagrees()},
+ * which they report as an internal error (never a silent "guaranteed").
+ *
+ * <p>Cost: that of the route's stored product (see the solvers), plus one pass over the policy's closed
+ * loop for the certificate.
+ *
+ * @param mission     the mission as planned (overrides applied)
+ * @param patrol      the patrol analysis, for a patrol
+ * @param deadline    the deadline analysis, for a visit mission with a deadline
+ * @param certificate the certificate of the guaranteed policy; null when not guaranteed
+ */
+public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optional<DeadlineAnalysis> deadline,
+                         RoundsCertificate certificate) {
+
+    /**
+     * Solves and certifies a patrol or deadline mission ({@link Mission#beyondOneTrip()}).
+     *
+     * @param budgetBytes the memory budget of the stored product
+     * @param choice      the policy to report (the safest by default)
+     */
+    public static RoundsPlan of(Mission m, long budgetBytes, PolicyChoice choice) {
+        boolean safest = choice == PolicyChoice.SAFEST;
+        if (m.tasks().patrols()) {
+            PatrolAnalysis a = PatrolSolver.analyse(m, budgetBytes, safest);
+            RoundsCertificate cert = a.guaranteed() ? PatrolCertificateChecker.check(a.arena(),
+                    a.policy().orElseThrow(), a.reserveUnits(), a.startUnits()) : null;
+            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert);
+        }
+        DeadlineAnalysis a = DeadlineSolver.analyse(m, budgetBytes, safest);
+        RoundsCertificate cert = a.guaranteed() ? DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(),
+                a.reserveUnits(), a.startUnits(), a.deadlineTicks()) : null;
+        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert);
+    }
+
+    /**
+     * The replay of a patrol (its lasso, or the building's winning play) or of a deadline mission (the
+     * slowest play of its policy); empty for a deadline mission the robot cannot finish at all at its floor.
+     */
+    public static Optional<RoundsReplay> replay(Mission m, long budgetBytes, PolicyChoice choice) {
+        boolean safest = choice == PolicyChoice.SAFEST;
+        return m.tasks().patrols() ? Optional.of(RoundsReplay.patrol(m, budgetBytes, safest))
+                : RoundsReplay.deadline(m, budgetBytes, safest);
+    }
+
+    public boolean guaranteed() {
+        return patrol.map(PatrolAnalysis::guaranteed).orElseGet(() -> deadline.orElseThrow().guaranteed());
+    }
+
+    /** Whether a guaranteed policy failed its certificate, or the certificate found other figures. */
+    public boolean certificateDisagrees() {
+        if (certificate == null) {
+            return false;
+        }
+        if (!certificate.ok()) {
+            return true;
+        }
+        if (patrol.isPresent()) {
+            PatrolAnalysis a = patrol.get();
+            return certificate.worstMinimumUnits() != a.lowestLevelUnits().getAsInt()
+                    || certificate.longestLapTicks() != a.longestLapTicks().getAsInt();
+        }
+        DeadlineAnalysis a = deadline.orElseThrow();
+        return certificate.worstMinimumUnits() != a.worstCaseMinimumUnits().getAsInt()
+                || certificate.longestLapTicks() != a.worstFinishTicks().getAsInt();
+    }
+}
