@@ -31,14 +31,12 @@ final class ImplicitWalks {
      * @throws IllegalArgumentException if the robot does not win from the start
      */
     static Policy policy(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy) {
+        requireStartWon(strategy);
         final Arena arena = game.arena;
         final GoalAutomaton goal = game.goal;
         final ReserveMonitor monitor = game.monitor;
         final int lBits = game.lBits;
         final int gBits = game.gBits;
-        if (!strategy.startWon()) {
-            throw new IllegalArgumentException("the robot does not win from the start");
-        }
         List<PolicyEntry> entries = new ArrayList<>();
         int start = game.start();
         if (start < 0) {
@@ -53,19 +51,15 @@ final class ImplicitWalks {
         int[] succ = new int[16];
         while (tail > 0) {
             int p = todo[--tail];
-            int s = p & ((1 << lBits) - 1);
-            int g = (p >>> lBits) & ((1 << gBits) - 1);
             int x = p >>> (lBits + gBits);
-            int k;
             if (x < rc) {
+                int s = p & ((1 << lBits) - 1);
+                int g = (p >>> lBits) & ((1 << gBits) - 1);
                 int d = arena.target(arena.outBegin(x) + strategy.choice(p));
                 entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
                         goal.progressMask(g), arena.action(d), null, arena.closures(x)));
-                succ[0] = game.id(d, g, s);
-                k = 1;
-            } else {
-                k = game.outcomes(x, g, s, succ, null);
             }
+            int k = loopSuccessors(game, strategy, p, succ, null);
             for (int i = 0; i < k; i++) {
                 int q = succ[i];
                 if ((seen[q >>> 6] & (1L << q)) == 0) {
@@ -88,18 +82,12 @@ final class ImplicitWalks {
      * post-order evaluates it in O(closed loop) (a hash map holds W).
      */
     static int worstCaseMinimum(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy) {
-        final Arena arena = game.arena;
+        requireStartWon(strategy);
         final ReserveMonitor monitor = game.monitor;
-        final int lBits = game.lBits;
-        final int gBits = game.gBits;
-        if (!strategy.startWon()) {
-            throw new IllegalArgumentException("the robot does not win from the start");
-        }
         int start = game.start();
         if (start == -2) {
             return monitor.level(monitor.initialState());
         }
-        final int rc = arena.robotCount();
         LongIntMap worst = new LongIntMap(1 << 10);
         int[] stack = new int[1 << 10];
         int sp = 0;
@@ -112,19 +100,8 @@ final class ImplicitWalks {
                 sp--;
                 continue;
             }
-            int s = p & ((1 << lBits) - 1);
-            int g = (p >>> lBits) & ((1 << gBits) - 1);
-            int x = p >>> (lBits + gBits);
-            int k;
-            if (x < rc) {
-                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
-                succ[0] = game.id(d, g, s);
-                arrive[0] = -1;
-                k = 1;
-            } else {
-                k = game.outcomes(x, g, s, succ, arrive);
-            }
-            int w = monitor.level(s);
+            int k = loopSuccessors(game, strategy, p, succ, arrive);
+            int w = monitor.level(p & ((1 << game.lBits) - 1));
             boolean ready = true;
             for (int i = 0; i < k; i++) {
                 if (arrive[i] >= 0) {
@@ -148,6 +125,35 @@ final class ImplicitWalks {
             }
         }
         return worst.get(start);
+    }
+
+    private static void requireStartWon(ImplicitReserveGame.Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+    }
+
+    /**
+     * The successors of triple {@code p} in the closed loop of the strategy, into {@code succ}: the
+     * robot's recorded choice, or every outcome of a disturbance triple (with {@code arrive} as in
+     * {@link ImplicitReserveGame#outcomes}; -1 for a choice). Returns how many were written.
+     */
+    private static int loopSuccessors(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy, int p,
+                                      int[] succ, int[] arrive) {
+        final int lBits = game.lBits;
+        final int gBits = game.gBits;
+        int s = p & ((1 << lBits) - 1);
+        int g = (p >>> lBits) & ((1 << gBits) - 1);
+        int x = p >>> (lBits + gBits);
+        if (x < game.arena.robotCount()) {
+            int d = game.arena.target(game.arena.outBegin(x) + strategy.choice(p));
+            succ[0] = game.id(d, g, s);
+            if (arrive != null) {
+                arrive[0] = -1;
+            }
+            return 1;
+        }
+        return game.outcomes(x, g, s, succ, arrive);
     }
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
