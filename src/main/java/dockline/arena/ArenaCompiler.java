@@ -396,26 +396,13 @@ public final class ArenaCompiler {
      * (both orthogonal cells beside it must be free).
      */
     static int neighbours(int c, int w, int h, boolean[] free, int dirs, int[] out) {
-        int x = c % w;
-        int y = c / w;
-        int n = 0;
-        for (int i = 0; i < dirs; i++) {
-            int nx = x + DX[i];
-            int ny = y + DY[i];
-            if (nx < 0 || ny < 0 || nx >= w || ny >= h || !free[ny * w + nx]) {
-                continue;
-            }
-            if (i >= 4 && (!free[y * w + nx] || !free[ny * w + x])) {
-                continue;
-            }
-            out[n++] = ny * w + nx;
-        }
-        return n;
+        return neighbours(c, w, h, free, dirs, out, null, 0);
     }
 
     /**
      * Free neighbours of cell c that are not closed in the disturbance state: a closed door or zone
-     * is an obstacle like a wall, also for the corner rule of diagonals.
+     * is an obstacle like a wall, also for the corner rule of diagonals. With {@code st} null nothing
+     * is closed.
      */
     static int neighbours(int c, int w, int h, boolean[] free, int dirs, int[] out, DisturbanceStates st, int state) {
         int x = c % w;
@@ -436,7 +423,7 @@ public final class ArenaCompiler {
     }
 
     private static boolean open(int cell, boolean[] free, DisturbanceStates st, int state) {
-        return free[cell] && !st.isClosed(state, cell);
+        return free[cell] && (st == null || !st.isClosed(state, cell));
     }
 
     private static int[] filled(int n) {

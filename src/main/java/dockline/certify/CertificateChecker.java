@@ -69,7 +69,7 @@ public final class CertificateChecker {
         int start = loop.startLevel();
         if (loop.problem().isPresent()) {
             ClosedLoop.Problem p = loop.problem().get();
-            int worst = Math.min(p.level(), minLevelSeen(loop));
+            int worst = Math.min(p.level(), loop.minLevelSeen());
             return new Certificate(false, w.problem(p), loop.nodeCount(), worst, -1, floor, start);
         }
         int[] order = loop.topologicalOrder();
@@ -77,10 +77,10 @@ public final class CertificateChecker {
         if (jgraphtCycle != null && jgraphtCycle != (order == null)) {
             return new Certificate(false, "internal: the two cycle checks disagree (topological order says "
                     + (order == null ? "cyclic" : "acyclic") + ", jgrapht says " + (jgraphtCycle ? "cyclic" : "acyclic")
-                    + "); the policy is not certified", loop.nodeCount(), minLevelSeen(loop), -1, floor, start);
+                    + "); the policy is not certified", loop.nodeCount(), loop.minLevelSeen(), -1, floor, start);
         }
         if (order == null) {
-            return new Certificate(false, w.cycle(loop.findCycle()), loop.nodeCount(), minLevelSeen(loop), -1,
+            return new Certificate(false, w.cycle(loop.findCycle()), loop.nodeCount(), loop.minLevelSeen(), -1,
                     floor, start);
         }
         int n = loop.nodeCount();
@@ -106,31 +106,11 @@ public final class CertificateChecker {
         return new Certificate(true, reason, n, worst[0], longest[0], floor, start);
     }
 
-    private static int minLevelSeen(ClosedLoop loop) {
-        int lo = Integer.MAX_VALUE;
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            lo = Math.min(lo, loop.level(v));
-        }
-        return lo;
-    }
-
     /** Wording of states, steps and problems for the certificate's reason. */
-    static final class Words {
-        private static final int TRACE_STEPS = 12;
-        private final ClosedLoop loop;
-        private final Arena arena;
-        private final Mission mission;
-        private final EnergyScale scale;
+    static final class Words extends LoopWords<ClosedLoop> {
 
         Words(ClosedLoop loop) {
-            this.loop = loop;
-            this.arena = loop.arena();
-            this.mission = arena.mission();
-            this.scale = mission.scale();
-        }
-
-        String units(int u) {
-            return u + (u == 1 || u == -1 ? " unit (" : " units (") + scale.formatWh(u) + ")";
+            super(loop);
         }
 
         String state(int node) {
@@ -229,10 +209,7 @@ public final class CertificateChecker {
         }
 
         String cycle(List<Integer> cycle) {
-            StringBuilder sb = new StringBuilder("the disturbance can keep the robot going round forever without"
-                    + " completing the mission: ");
-            int first = cycle.get(0);
-            sb.append("the robot reaches ").append(state(first)).append(" [").append(trace(first)).append("], then ");
+            StringBuilder sb = cycleStart(cycle);
             for (int i = 0; i + 1 < cycle.size(); i++) {
                 int a = cycle.get(i);
                 int b = cycle.get(i + 1);

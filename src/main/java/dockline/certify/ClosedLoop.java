@@ -2,12 +2,8 @@ package dockline.certify;
 
 import dockline.arena.Action;
 import dockline.arena.Arena;
-import dockline.model.Cell;
-import dockline.model.Mission;
 import dockline.policy.Policy;
-import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
-import java.util.List;
 import java.util.Optional;
 
 /**
@@ -25,7 +21,7 @@ import java.util.Optional;
  * loop; everything is stored in int arrays. The task progress is this package's own bookkeeping
  * ({@link TaskProgress}), not the solver's goal automaton.
  */
-public final class ClosedLoop {
+public final class ClosedLoop extends LoopNodes {
 
     /** Successor code: the outcome leaves the battery below the floor. */
     public static final int LOST_BELOW_FLOOR = -1;
@@ -63,29 +59,11 @@ public final class ClosedLoop {
         }
     }
 
-    private final Arena arena;
-    private final Policy policy;
-    private final int floor;
-    private final int startLevel;
-    private final int capacity;
-    private final TaskProgress progress;
 
-    private final IntArrayList nodeVertex = new IntArrayList(1024);
-    private final IntArrayList nodeLevel = new IntArrayList(1024);
-    private final IntArrayList nodeMask = new IntArrayList(1024);
-    private final IntArrayList nodeChoice = new IntArrayList(1024);
-    private final LoopGraph graph = new LoopGraph();
-    private int expanded;
     private Problem problem;
 
     private ClosedLoop(Arena arena, Policy policy, int floor, int startLevel) {
-        this.arena = arena;
-        this.policy = policy;
-        this.floor = floor;
-        this.startLevel = startLevel;
-        Mission m = arena.mission();
-        this.capacity = m.capacityUnits();
-        this.progress = TaskProgress.of(m);
+        super(arena, policy, floor, startLevel);
     }
 
     /**
@@ -180,22 +158,6 @@ public final class ClosedLoop {
         return Math.addExact(Math.multiplyExact(k, 1L << progress.taskCount()), mask);
     }
 
-    public Arena arena() {
-        return arena;
-    }
-
-    public Policy policy() {
-        return policy;
-    }
-
-    public int floor() {
-        return floor;
-    }
-
-    public int startLevel() {
-        return startLevel;
-    }
-
     public int capacity() {
         return capacity;
     }
@@ -209,30 +171,9 @@ public final class ClosedLoop {
         return Optional.ofNullable(problem);
     }
 
-    /** Number of nodes found (the start is node 0). */
-    public int nodeCount() {
-        return nodeVertex.size();
-    }
-
     /** Number of nodes whose successors were computed. */
     public int expandedCount() {
         return expanded;
-    }
-
-    public int vertex(int node) {
-        return nodeVertex.get(node);
-    }
-
-    public Cell cell(int node) {
-        return arena.cellOf(nodeVertex.get(node));
-    }
-
-    public int level(int node) {
-        return nodeLevel.get(node);
-    }
-
-    public int budgetLeft(int node) {
-        return arena.budgetLeft(nodeVertex.get(node));
     }
 
     /** The doors and zones closed at the node ({@link dockline.policy.PolicyEntry#closures}). */
@@ -240,89 +181,18 @@ public final class ClosedLoop {
         return arena.closures(nodeVertex.get(node));
     }
 
-    /** Task progress mask: bit i set when task i of the visit list is done. */
-    public int progress(int node) {
-        return nodeMask.get(node);
-    }
-
-    /** Whether the node is a completed mission (absorbing). */
-    public boolean isComplete(int node) {
-        return node < expanded && nodeChoice.get(node) < 0 && (problem == null || problem.node() != node);
-    }
-
-    /** The arena disturbance vertex of the policy's action at the node, or -1 (complete or not expanded). */
-    public int choice(int node) {
-        return node < expanded ? nodeChoice.get(node) : -1;
-    }
-
-    /** The parent node in the breadth-first tree (-1 for the start). */
-    public int parent(int node) {
-        return graph.parent(node);
-    }
-
-    /** The arena edge from the parent (-1 for the start). */
-    public int parentEdge(int node) {
-        return graph.parentEdge(node);
-    }
-
-    public int succBegin(int node) {
-        return graph.succBegin(node);
-    }
-
-    public int succEnd(int node) {
-        return graph.succEnd(node);
-    }
-
-    /** The successor node of the i-th successor slot, or {@link #LOST_BELOW_FLOOR} / {@link #LOST_AVOIDED_ZONE}. */
-    public int succNode(int i) {
-        return graph.succNode(i);
-    }
-
-    /** The arena outcome edge of the i-th successor slot. */
-    public int succEdge(int i) {
-        return graph.succEdge(i);
-    }
-
     /** The level after following outcome edge {@code e} from level {@code level} (saturated at capacity). */
     public int levelAfter(int level, int e) {
         return (int) Math.min(capacity, (long) level + arena.weight(e));
     }
 
-    /** The nodes on the breadth-first path from the start to the node, start first. */
-    public List<Integer> pathTo(int node) {
-        return graph.pathTo(node);
+    @Override
+    int problemNode() {
+        return problem == null ? -1 : problem.node();
     }
 
-    /**
-     * A topological order of the loop's nodes (every edge goes from an earlier to a later node), or
-     * {@code null} if the loop has a cycle. Kahn's algorithm (Kahn 1962, "Topological sorting of large
-     * networks", CACM 5(11)), O(N + E); ties are taken in node order, so the order is deterministic.
-     *
-     * @throws IllegalStateException if the loop is not complete
-     */
-    public int[] topologicalOrder() {
-        requireComplete();
-        return graph.topologicalOrder(nodeCount());
-    }
-
-    /**
-     * A cycle of the loop as a list of nodes {@code n0, n1, ..., nk} with {@code nk == n0}, or an empty
-     * list if the loop is acyclic. Found by peeling off sources (Kahn) and walking back along
-     * predecessors among the nodes left, which must close a cycle. O(N + E).
-     */
-    public List<Integer> findCycle() {
-        requireComplete();
-        return graph.findCycle(nodeCount());
-    }
-
-    /** The loop's graph, for the checker's second opinion on cycles. */
-    LoopGraph graph() {
-        return graph;
-    }
-
-    private void requireComplete() {
-        if (problem != null) {
-            throw new IllegalStateException("the closed loop was not completed: " + problem.kind());
-        }
+    @Override
+    Enum<?> problemKind() {
+        return problem == null ? null : problem.kind();
     }
 }

@@ -77,17 +77,17 @@ public final class DiscountedCertificateChecker {
         Words w = new Words(loop);
         if (loop.problem().isPresent()) {
             DiscountedClosedLoop.Problem p = loop.problem().get();
-            return fail(loop, w.problem(p), Math.min(p.level(), minLevelSeen(loop)));
+            return fail(loop, w.problem(p), Math.min(p.level(), loop.minLevelSeen()));
         }
         int[] order = loop.topologicalOrder();
         Boolean jgraphtCycle = loop.nodeCount() <= JGRAPHT_LIMIT ? loop.graph().jgraphtHasCycle(loop.nodeCount()) : null;
         if (jgraphtCycle != null && jgraphtCycle != (order == null)) {
             return fail(loop, "internal: the two cycle checks disagree (topological order says "
                     + (order == null ? "cyclic" : "acyclic") + ", jgrapht says " + (jgraphtCycle ? "cyclic" : "acyclic")
-                    + "); the policy is not certified", minLevelSeen(loop));
+                    + "); the policy is not certified", loop.minLevelSeen());
         }
         if (order == null) {
-            return fail(loop, w.cycle(loop.findCycle()), minLevelSeen(loop));
+            return fail(loop, w.cycle(loop.findCycle()), loop.minLevelSeen());
         }
         int n = loop.nodeCount();
         long disc = loop.objective().discount();
@@ -104,7 +104,7 @@ public final class DiscountedCertificateChecker {
             if (begin == end) {
                 if (!loop.isComplete(v)) {
                     return fail(loop, "internal: a situation with no outcome that does not complete the mission: "
-                            + w.state(v), minLevelSeen(loop));
+                            + w.state(v), loop.minLevelSeen());
                 }
                 worst[v] = BigInteger.ZERO;
                 steps[v] = 0;
@@ -158,29 +158,11 @@ public final class DiscountedCertificateChecker {
                 loop.objective(), loop.floorKept(), loop.floor(), loop.startLevel());
     }
 
-    private static int minLevelSeen(DiscountedClosedLoop loop) {
-        int lo = Integer.MAX_VALUE;
-        for (int v = 0; v < loop.nodeCount(); v++) {
-            lo = Math.min(lo, loop.level(v));
-        }
-        return lo;
-    }
-
     /** Wording of situations, steps and problems. */
-    static final class Words {
-        private static final int TRACE_STEPS = 12;
-        private final DiscountedClosedLoop loop;
-        private final Arena arena;
-        private final Mission mission;
+    static final class Words extends LoopWords<DiscountedClosedLoop> {
 
         Words(DiscountedClosedLoop loop) {
-            this.loop = loop;
-            this.arena = loop.arena();
-            this.mission = arena.mission();
-        }
-
-        String units(int u) {
-            return u + (u == 1 || u == -1 ? " unit (" : " units (") + mission.scale().formatWh(u) + ")";
+            super(loop);
         }
 
         String condition() {
@@ -244,10 +226,7 @@ public final class DiscountedCertificateChecker {
         }
 
         String cycle(List<Integer> cycle) {
-            StringBuilder sb = new StringBuilder("the disturbance can keep the robot going round forever without"
-                    + " completing the mission: ");
-            int first = cycle.get(0);
-            sb.append("the robot reaches ").append(state(first)).append(" [").append(trace(first)).append("], then ");
+            StringBuilder sb = cycleStart(cycle);
             for (int i = 0; i + 1 < cycle.size(); i++) {
                 int a = cycle.get(i);
                 sb.append(i == 0 ? "" : " ").append(loop.cell(a)).append(" (").append(loop.level(a)).append(", ")

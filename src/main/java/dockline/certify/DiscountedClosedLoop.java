@@ -2,8 +2,6 @@ package dockline.certify;
 
 import dockline.arena.Action;
 import dockline.arena.Arena;
-import dockline.model.Cell;
-import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
@@ -49,7 +47,7 @@ import java.util.Optional;
  * and memory for N nodes and E outcome edges, int and long arrays only (one {@link PolicyScore} per
  * distinct gap value, for the look-up), plus one policy look-up per node.
  */
-public final class DiscountedClosedLoop {
+public final class DiscountedClosedLoop extends LoopNodes {
 
     /** Score memory code: beyond the bound, the threshold is met whatever follows. */
     public static final int SECURED = 0;
@@ -82,14 +80,8 @@ public final class DiscountedClosedLoop {
     public record Problem(ProblemKind kind, int node, int edge, int level) {
     }
 
-    private final Arena arena;
-    private final Policy policy;
     private final Objective.Discounted objective;
     private final boolean floorKept;
-    private final int floor;
-    private final int startLevel;
-    private final int capacity;
-    private final TaskProgress progress;
 
     private final long d;
     private final long p;
@@ -108,27 +100,15 @@ public final class DiscountedClosedLoop {
     private final List<PolicyScore> gapScore = new ArrayList<>();
     private int gapCount = FIRST_GAP;
 
-    private final IntArrayList nodeVertex = new IntArrayList(1024);
-    private final IntArrayList nodeLevel = new IntArrayList(1024);
-    private final IntArrayList nodeMask = new IntArrayList(1024);
     private final IntArrayList nodeGap = new IntArrayList(1024);
-    private final IntArrayList nodeChoice = new IntArrayList(1024);
-    private final LoopGraph graph = new LoopGraph();
     private int[] table = new int[1 << 12];
-    private int expanded;
     private Problem problem;
 
     private DiscountedClosedLoop(Arena arena, Policy policy, Objective.Discounted objective, boolean floorKept,
                                  int floor, int startLevel) {
-        this.arena = arena;
-        this.policy = policy;
+        super(arena, policy, floor, startLevel);
         this.objective = objective;
         this.floorKept = floorKept;
-        this.floor = floor;
-        this.startLevel = startLevel;
-        Mission m = arena.mission();
-        this.capacity = m.capacityUnits();
-        this.progress = TaskProgress.of(m);
         this.d = objective.discount();
         this.p = objective.threshold().num();
         this.q = objective.threshold().den();
@@ -367,14 +347,6 @@ public final class DiscountedClosedLoop {
 
     // ------------------------------------------------------------------ queries
 
-    public Arena arena() {
-        return arena;
-    }
-
-    public Policy policy() {
-        return policy;
-    }
-
     public Objective.Discounted objective() {
         return objective;
     }
@@ -382,14 +354,6 @@ public final class DiscountedClosedLoop {
     /** Whether the reserve floor is checked. */
     public boolean floorKept() {
         return floorKept;
-    }
-
-    public int floor() {
-        return floor;
-    }
-
-    public int startLevel() {
-        return startLevel;
     }
 
     /** The weight bound mu this loop counted on the arena. */
@@ -406,104 +370,18 @@ public final class DiscountedClosedLoop {
         return Optional.ofNullable(problem);
     }
 
-    public int nodeCount() {
-        return nodeVertex.size();
-    }
-
-    public int vertex(int node) {
-        return nodeVertex.get(node);
-    }
-
-    public Cell cell(int node) {
-        return arena.cellOf(nodeVertex.get(node));
-    }
-
-    public int level(int node) {
-        return nodeLevel.get(node);
-    }
-
-    public int budgetLeft(int node) {
-        return arena.budgetLeft(nodeVertex.get(node));
-    }
-
-    public int progress(int node) {
-        return nodeMask.get(node);
-    }
-
     /** The node's score memory as the policy keys it. */
     public PolicyScore scoreMemory(int node) {
         return score(nodeGap.get(node));
     }
 
-    /** Whether the node completes the mission (absorbing). */
-    public boolean isComplete(int node) {
-        return node < expanded && nodeChoice.get(node) < 0 && (problem == null || problem.node() != node);
+    @Override
+    int problemNode() {
+        return problem == null ? -1 : problem.node();
     }
 
-    /** The arena disturbance vertex of the policy's action at the node, or -1. */
-    public int choice(int node) {
-        return node < expanded ? nodeChoice.get(node) : -1;
-    }
-
-    public int parent(int node) {
-        return graph.parent(node);
-    }
-
-    public int parentEdge(int node) {
-        return graph.parentEdge(node);
-    }
-
-    public int succBegin(int node) {
-        return graph.succBegin(node);
-    }
-
-    public int succEnd(int node) {
-        return graph.succEnd(node);
-    }
-
-    /** The successor node in slot i, or one of the {@code LOST_*} codes. */
-    public int succNode(int i) {
-        return graph.succNode(i);
-    }
-
-    /** The arena outcome edge of slot i. */
-    public int succEdge(int i) {
-        return graph.succEdge(i);
-    }
-
-    /** The nodes on the breadth-first path from the start to the node, start first. */
-    public List<Integer> pathTo(int node) {
-        return graph.pathTo(node);
-    }
-
-    /**
-     * A topological order of the nodes, or {@code null} if the loop has a cycle: Kahn's algorithm
-     * (Kahn 1962, "Topological sorting of large networks", CACM 5(11)), O(N + E).
-     *
-     * @throws IllegalStateException if the loop is not complete
-     */
-    public int[] topologicalOrder() {
-        requireComplete();
-        return graph.topologicalOrder(nodeCount());
-    }
-
-    /**
-     * A cycle as nodes {@code n0, ..., nk} with {@code nk == n0}, or an empty list if there is none:
-     * peel off the sources (Kahn), then walk back along predecessors among the nodes left. O(N + E).
-     */
-    public List<Integer> findCycle() {
-        requireComplete();
-        return graph.findCycle(nodeCount());
-    }
-
-    /** The loop's graph, for the checker's second opinion on cycles. */
-    LoopGraph graph() {
-        return graph;
-    }
-
-    private void requireComplete() {
-        if (problem != null) {
-            throw new IllegalStateException("the closed loop was not completed: " + problem.kind());
-        }
+    @Override
+    Enum<?> problemKind() {
+        return problem == null ? null : problem.kind();
     }
 }

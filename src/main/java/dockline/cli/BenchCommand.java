@@ -6,8 +6,6 @@ import dockline.bench.BuildingGenerator;
 import dockline.bench.ResolutionBench;
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -23,10 +21,7 @@ import picocli.CommandLine.Option;
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:all methods agree on every instance", "2:bad usage",
                 "4:two methods disagree on an instance (internal error)"})
-public final class BenchCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+public final class BenchCommand extends CommandBase {
 
     @Option(names = "--quick", description = "a short run (under a minute on two cores): 32x32 to 128x128,"
             + " and the fast path on 512x512")
@@ -57,8 +52,8 @@ public final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (resolutionRow) {
             int side = sizes != null && !sizes.isEmpty() ? sizes.get(0) : 256;
             if (side < BuildingGenerator.MIN_SIDE || side > BuildingGenerator.MAX_SIDE) {

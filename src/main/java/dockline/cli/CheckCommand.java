@@ -9,8 +9,6 @@ import dockline.plan.Route;
 import dockline.plan.RouteNotApplicableException;
 import java.io.PrintWriter;
 import java.util.Optional;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -31,13 +29,7 @@ import picocli.CommandLine.Option;
         exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only)", "1:not guaranteed",
                 "2:bad input or usage", "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate)"})
-public final class CheckCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
-    @Mixin
-    MissionOptions mission;
+public final class CheckCommand extends MissionCommand {
 
     @Mixin
     PolicyOption policy;
@@ -52,9 +44,7 @@ public final class CheckCommand implements Callable<Integer> {
     CheckRoute route;
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+    int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         try {
             Mission m = mission.load(err);
             Objective objective = discounted.objective(m.objective(), err);
@@ -111,13 +101,8 @@ public final class CheckCommand implements Callable<Integer> {
                 CheckReport.text(p, out);
             }
             return p.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
-        } catch (MissionOptions.BadInput e) {
-            return ExitCodes.BAD_INPUT;
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
-        } finally {
-            out.flush();
-            err.flush();
         }
     }
 }

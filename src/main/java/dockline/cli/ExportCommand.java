@@ -18,8 +18,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -43,13 +41,7 @@ import picocli.CommandLine.Option;
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate; nothing written)"})
-public final class ExportCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
-    @Mixin
-    MissionOptions mission;
+public final class ExportCommand extends MissionCommand {
 
     @Mixin
     PolicyOption policy;
@@ -61,9 +53,7 @@ public final class ExportCommand implements Callable<Integer> {
     boolean json;
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+    int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         try {
             Mission m = mission.load(err);
             if (RoundsCheck.oneTripOnly(m, "export") != null) {
@@ -129,16 +119,11 @@ public final class ExportCommand implements Callable<Integer> {
                 certifiedLines(m, states, out);
             }
             return ExitCodes.OK;
-        } catch (MissionOptions.BadInput e) {
-            return ExitCodes.BAD_INPUT;
         } catch (IOException e) {
             err.println("dockline: cannot write " + policyFile + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
-        } finally {
-            out.flush();
-            err.flush();
         }
     }
 

@@ -92,57 +92,61 @@ public final class Failures {
         return nl >= 0 ? s.substring(0, nl) : s;
     }
 
-    /** A writer that passes everything on and keeps a copy (for the --json form of errors). */
-    static final class Tee extends Writer {
+    /** A writer that passes everything on to another; flushing or closing it flushes the other. */
+    abstract static class Passing extends Writer {
         private final Writer to;
-        final StringBuilder copy = new StringBuilder();
 
-        Tee(Writer to) {
+        Passing(Writer to) {
             this.to = to;
         }
 
+        /** Sees what was passed on (after it was written). */
+        abstract void seen(char[] buf, int off, int len);
+
         @Override
-        public void write(char[] buf, int off, int len) throws IOException {
+        public final void write(char[] buf, int off, int len) throws IOException {
             to.write(buf, off, len);
-            if (copy.length() < 1 << 20) {
-                copy.append(buf, off, len);
-            }
+            seen(buf, off, len);
         }
 
         @Override
-        public void flush() throws IOException {
+        public final void flush() throws IOException {
             to.flush();
         }
 
         @Override
-        public void close() throws IOException {
+        public final void close() throws IOException {
             to.flush();
         }
     }
 
+    /** A writer that passes everything on and keeps a copy (for the --json form of errors). */
+    static final class Tee extends Passing {
+        final StringBuilder copy = new StringBuilder();
+
+        Tee(Writer to) {
+            super(to);
+        }
+
+        @Override
+        void seen(char[] buf, int off, int len) {
+            if (copy.length() < 1 << 20) {
+                copy.append(buf, off, len);
+            }
+        }
+    }
+
     /** Counts what is written (to tell whether a command already printed its own JSON). */
-    static final class Counting extends Writer {
-        private final Writer to;
+    static final class Counting extends Passing {
         long count;
 
         Counting(Writer to) {
-            this.to = to;
+            super(to);
         }
 
         @Override
-        public void write(char[] buf, int off, int len) throws IOException {
-            to.write(buf, off, len);
+        void seen(char[] buf, int off, int len) {
             count += len;
-        }
-
-        @Override
-        public void flush() throws IOException {
-            to.flush();
-        }
-
-        @Override
-        public void close() throws IOException {
-            to.flush();
         }
     }
 

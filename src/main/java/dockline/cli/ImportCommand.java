@@ -19,8 +19,6 @@ import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -39,10 +37,7 @@ import picocli.CommandLine.Parameters;
                 "No zones or doors are added; see maps/README.md, \"Imported maps\"."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:map written", "2:bad image, option or output path (nothing written)"})
-public final class ImportCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+public final class ImportCommand extends CommandBase {
 
     @Parameters(index = "0", paramLabel = "IMAGE", description = "the occupancy image (PGM, PBM or PNG; told by its content)")
     Path image;
@@ -90,8 +85,8 @@ public final class ImportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter outw = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter outw = out();
+        PrintWriter err = err();
         List<String> bad = new ArrayList<>();
         ImportRequest request = new ImportRequest(image, pixelSize, cellSize, robotRadius, docks, occupiedAtMost,
                 freeAtLeast, invert, surface, name);

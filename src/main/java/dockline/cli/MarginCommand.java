@@ -19,11 +19,8 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.util.OptionalInt;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Mixin;
 
 /**
  * {@code dockline margin MISSION}: asks the core for the margins ({@link Route.Margins}) and prints
@@ -39,13 +36,7 @@ import picocli.CommandLine.Mixin;
         exitCodeList = {"0:the mission as written is guaranteed", "1:not guaranteed", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (the two methods disagree)"})
-public final class MarginCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
-    @Mixin
-    MissionOptions mission;
+public final class MarginCommand extends MissionCommand {
 
     @Option(names = "--json", description = "print the margins as one JSON object instead of the text")
     boolean json;
@@ -54,20 +45,7 @@ public final class MarginCommand implements Callable<Integer> {
     Path jsonFile;
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return run(out, err);
-        } catch (MissionOptions.BadInput e) {
-            return ExitCodes.BAD_INPUT;
-        } finally {
-            out.flush();
-            err.flush();
-        }
-    }
-
-    private int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+    int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         Mission m = mission.load(err);
         if (RoundsCheck.oneTripOnly(m, "margin") != null) {
             err.println(RoundsCheck.oneTripOnly(m, "margin"));

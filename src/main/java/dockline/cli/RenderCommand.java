@@ -16,10 +16,8 @@ import dockline.view.ViewData;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -39,12 +37,9 @@ import picocli.CommandLine.Parameters;
         exitCodeList = {"0:picture written; the mission is guaranteed", "1:picture written; the mission is not guaranteed",
                 "2:bad input or usage (nothing written)", "3:over a resource limit (nothing written)",
                 "4:internal error (also: the solver's policy failed the independent certificate check)"})
-public final class RenderCommand implements Callable<Integer> {
+public final class RenderCommand extends CommandBase {
 
     private static final Pattern SIZE = Pattern.compile("(\\d{3,4})[xX](\\d{3,4})");
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "MISSION", description = "the mission file (YAML)")
     Path mission;
@@ -72,8 +67,8 @@ public final class RenderCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter outw = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter outw = out();
+        PrintWriter err = err();
         Matcher sm = SIZE.matcher(size.trim());
         Overlay overlay;
         try {

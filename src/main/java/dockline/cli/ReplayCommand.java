@@ -20,8 +20,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Mixin;
@@ -39,16 +37,10 @@ import picocli.CommandLine.Mixin;
         exitCodeList = {"0:guaranteed (policy certified)", "1:not guaranteed", "2:bad input or usage (also an impossible --force event)",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its certificate)"})
-public final class ReplayCommand implements Callable<Integer> {
+public final class ReplayCommand extends MissionCommand {
 
     /** Which disturbance choices to replay. */
     enum Disturbance { nominal, worst }
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
-    @Mixin
-    MissionOptions mission;
 
     @Mixin
     PolicyOption policy;
@@ -75,20 +67,7 @@ public final class ReplayCommand implements Callable<Integer> {
     boolean json;
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return run(out, err);
-        } catch (MissionOptions.BadInput e) {
-            return ExitCodes.BAD_INPUT;
-        } finally {
-            out.flush();
-            err.flush();
-        }
-    }
-
-    private int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+    int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         List<ForcedEvent> forced = List.of();
         if (force != null) {
             if (disturbance == Disturbance.worst) {

@@ -17,8 +17,6 @@ import dockline.report.Caveats;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -33,10 +31,7 @@ import picocli.CommandLine.Parameters;
                 "A mission is checked together with the map it names."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:every file is valid", "2:a file has problems, or bad usage"})
-public final class ValidateCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+public final class ValidateCommand extends CommandBase {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "map or mission files (YAML)")
     List<Path> files;
@@ -47,8 +42,8 @@ public final class ValidateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         boolean allValid = true;
         boolean anyMission = false;
         ObjectNode root = Json.object();

@@ -9,8 +9,6 @@ import dockline.view.ViewLauncher;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -27,10 +25,7 @@ import picocli.CommandLine.Parameters;
                 "More missions and maps can be opened from the window."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:the window was closed", "2:the file has problems, or there is no display"})
-public final class ViewCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+public final class ViewCommand extends CommandBase {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "a mission or map file to open (YAML)")
     Path file;
@@ -41,7 +36,7 @@ public final class ViewCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InterruptedException {
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = err();
         MissionSource source = new FileMissionSource();
         if (file != null) {
             try {
@@ -61,7 +56,7 @@ public final class ViewCommand implements Callable<Integer> {
     /** Prints the messages (as text on stderr, or one JSON object on stdout) and returns the exit code. */
     private int finish(boolean ok, List<String> messages, PrintWriter err) {
         if (json) {
-            PrintWriter out = spec.commandLine().getOut();
+            PrintWriter out = out();
             ObjectNode o = Json.object();
             o.put("ok", ok);
             o.put("file", file == null ? null : file.toString());

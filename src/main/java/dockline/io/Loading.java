@@ -35,10 +35,19 @@ final class Loading {
         if (s == null) {
             return "";
         }
+        return escaped(s, QUOTED, false);
+    }
+
+    /**
+     * {@code s} with every hidden character ({@link #hidden}) shown as a {@code \\uXXXX} escape, cut
+     * (then "...") once {@code limit} characters of {@code s} were taken, or, with {@code limitOutput},
+     * once the text built is {@code limit} characters long.
+     */
+    static String escaped(String s, int limit, boolean limitOutput) {
         StringBuilder sb = new StringBuilder();
         int shown = 0;
         int i = 0;
-        while (i < s.length() && shown < QUOTED) {
+        while (i < s.length() && (limitOutput ? sb.length() : shown) < limit) {
             int cp = s.codePointAt(i);
             i += Character.charCount(cp);
             shown++;

@@ -2,10 +2,6 @@ package dockline.io;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonParseException;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import dockline.arena.Action;
@@ -28,7 +24,6 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -69,12 +64,12 @@ public final class PolicyFiles {
      * The key names of versions 1 and 2 and their names since version 3; files of the earlier
      * versions are read by renaming their keys on the way in.
      */
-    private static final Map<String, String> OLD_KEYS = Map.of("unit-wh", "unitWh", "floor-units", "reserveUnits",
+    static final Map<String, String> OLD_KEYS = Map.of("unit-wh", "unitWh", "floor-units", "reserveUnits",
             "capacity-units", "capacityUnits", "weight-bound", "weightBoundUnits", "reserve-kept", "reserveKept",
             "level", "levelUnits", "budget-left", "budgetLeft");
 
     /** The name of a key since version 3 (keys of versions 1 and 2 renamed, others unchanged). */
-    private static String canonical(String key) {
+    static String canonical(String key) {
         return OLD_KEYS.getOrDefault(key, key);
     }
 
@@ -141,27 +136,27 @@ public final class PolicyFiles {
     public record Document(Header header, Policy policy) {
     }
 
-    private static final List<String> SCORE_KEYS = List.of("objective", "discount", "threshold", "relation",
+    static final List<String> SCORE_KEYS = List.of("objective", "discount", "threshold", "relation",
             "weightBoundUnits", "reserveKept");
-    private static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unitWh", "reserveUnits",
+    static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unitWh", "reserveUnits",
             "capacityUnits", "budget", "tasks", "objective", "discount", "threshold", "relation", "weightBoundUnits",
             "reserveKept", "rows");
-    private static final List<String> ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "action",
+    static final List<String> ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "action",
             "to");
-    private static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
+    static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
             "action", "to");
     /** The situation's closures (lasting events and at-most counts); written only when some row has them. */
-    private static final String CLOSED = "closed";
-    private static final List<String> JSON_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
+    static final String CLOSED = "closed";
+    static final List<String> JSON_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
             "action", "to", CLOSED);
-    private static final String CSV_HEADER = String.join(",", ROW_KEYS);
-    private static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
+    static final String CSV_HEADER = String.join(",", ROW_KEYS);
+    static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
     /** The header rows of versions 1 and 2. */
-    private static final String OLD_CSV_HEADER = "cell,level,budget-left,progress,action,to";
-    private static final String OLD_CSV_SCORE_HEADER = "cell,level,budget-left,progress,score,action,to";
-    private static final String CSV_CLOSED_HEADER = CSV_HEADER + "," + CLOSED;
-    private static final String CSV_SCORE_CLOSED_HEADER = CSV_SCORE_HEADER + "," + CLOSED;
-    private static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
+    static final String OLD_CSV_HEADER = "cell,level,budget-left,progress,action,to";
+    static final String OLD_CSV_SCORE_HEADER = "cell,level,budget-left,progress,score,action,to";
+    static final String CSV_CLOSED_HEADER = CSV_HEADER + "," + CLOSED;
+    static final String CSV_SCORE_CLOSED_HEADER = CSV_SCORE_HEADER + "," + CLOSED;
+    static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
 
     private PolicyFiles() {
     }
@@ -184,7 +179,7 @@ public final class PolicyFiles {
         });
     }
 
-    private static void writeJson(Writer w, Header h, Policy policy) throws IOException {
+    static void writeJson(Writer w, Header h, Policy policy) throws IOException {
         requireMatch(h, policy);
         JsonFactory f = new JsonFactory();
         try (JsonGenerator g = f.createGenerator(w)) {
@@ -225,7 +220,7 @@ public final class PolicyFiles {
         w.write(System.lineSeparator());
     }
 
-    private static String compactRow(JsonFactory f, PolicyEntry e) throws IOException {
+    static String compactRow(JsonFactory f, PolicyEntry e) throws IOException {
         java.io.StringWriter sw = new java.io.StringWriter();
         try (JsonGenerator g = f.createGenerator(sw)) {
             g.writeStartObject();
@@ -249,7 +244,7 @@ public final class PolicyFiles {
     }
 
     /** A header with score terms goes with rows with a score memory, and only with them. */
-    private static void requireMatch(Header h, Policy policy) {
+    static void requireMatch(Header h, Policy policy) {
         if (policy.size() > 0 && policy.scored() != h.score().isPresent()) {
             throw new IllegalArgumentException(h.score().isPresent()
                     ? "a header with a discounted objective needs rows with a score memory"
@@ -257,7 +252,7 @@ public final class PolicyFiles {
         }
     }
 
-    private static void writeCsv(Writer w, Header h, Policy policy) throws IOException {
+    static void writeCsv(Writer w, Header h, Policy policy) throws IOException {
         requireMatch(h, policy);
         String nl = "\n";
         w.write("# " + FORMAT + " " + h.version() + nl);
@@ -322,13 +317,13 @@ public final class PolicyFiles {
         } catch (IOException e) {
             throw new InputException(new Problem(file, 1, 1, "cannot read the file: " + e.getMessage(), "check the path and the file's permissions"));
         }
-        Document d = isCsv(file) ? new CsvReading(problems, bytes).read() : new JsonReading(problems, bytes).read();
+        Document d = isCsv(file) ? new PolicyCsvReading(problems, bytes).read() : new PolicyJsonReading(problems, bytes).read();
         problems.throwIfAny();
         return d;
     }
 
     /** Collects rows, checks each, and builds the policy (reporting duplicates at their row). */
-    private static final class Rows {
+    static final class Rows {
         final Problems problems;
         final List<PolicyEntry> entries = new ArrayList<>();
         final List<Pos> positions = new ArrayList<>();
@@ -365,12 +360,12 @@ public final class PolicyFiles {
         }
     }
 
-    private static Cell cell(String text) {
+    static Cell cell(String text) {
         Matcher m = CELL.matcher(text.trim());
         return m.matches() ? new Cell(Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2))) : null;
     }
 
-    private static String actionWords() {
+    static String actionWords() {
         List<String> w = new ArrayList<>();
         for (ActionKind k : ActionKind.values()) {
             w.add(k.word());
@@ -379,7 +374,7 @@ public final class PolicyFiles {
     }
 
     /** Checks the fields of one row; reports problems at the given positions; null when bad. */
-    private static PolicyEntry row(Problems p, Pos rowPos, Map<String, String> values, Map<String, Pos> at) {
+    static PolicyEntry row(Problems p, Pos rowPos, Map<String, String> values, Map<String, Pos> at) {
         boolean ok = true;
         for (String k : List.of("cell", "levelUnits", "budgetLeft", "progress", "action")) {
             if (!values.containsKey(k)) {
@@ -435,13 +430,13 @@ public final class PolicyFiles {
         return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score, closures) : null;
     }
 
-    private static boolean knownVersion(String v) {
+    static boolean knownVersion(String v) {
         String t = v.trim();
         return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_1))
                 || t.equals(String.valueOf(VERSION_WITH_SCORE));
     }
 
-    private static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
+    static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
         String v = values.get(key).trim();
         if (!v.matches("\\d{1,9}")) {
             p.addPolicy(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
@@ -450,7 +445,7 @@ public final class PolicyFiles {
         return Integer.parseInt(v);
     }
 
-    private static Header header(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at,
+    static Header header(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at,
                                  List<String> tasks) {
         for (String k : List.of("mission", "unitWh", "reserveUnits", "capacityUnits", "budget")) {
             if (!values.containsKey(k)) {
@@ -483,7 +478,7 @@ public final class PolicyFiles {
     }
 
     /** The discounted objective of the header, empty for a reserve policy, null after a problem. */
-    private static Optional<ScoreTerms> scoreTerms(Problems p, Pos pos, Map<String, String> values,
+    static Optional<ScoreTerms> scoreTerms(Problems p, Pos pos, Map<String, String> values,
                                                    Map<String, Pos> at) {
         String kind = values.get("objective");
         if (kind == null || kind.trim().equals("reserve")) {
@@ -549,275 +544,5 @@ public final class PolicyFiles {
             kept = k.equals("true");
         }
         return ok ? Optional.of(new ScoreTerms(d, v, rel, mu, kept)) : null;
-    }
-
-    /** JSON through Jackson's streaming parser, so every value keeps its line and column. */
-    private static final class JsonReading {
-        private final Problems p;
-        private final byte[] bytes;
-
-        JsonReading(Problems p, byte[] bytes) {
-            this.p = p;
-            this.bytes = bytes;
-        }
-
-        private static Pos pos(JsonLocation l) {
-            return new Pos(l.getLineNr(), l.getColumnNr());
-        }
-
-        Document read() {
-            JsonFactory f = new JsonFactory();
-            try (JsonParser j = f.createParser(bytes)) {
-                if (j.nextToken() != JsonToken.START_OBJECT) {
-                    p.add(pos(j.currentTokenLocation()), "a policy file in JSON is one object", "see missions/POLICY-FORMAT.md");
-                    return null;
-                }
-                Map<String, String> values = new LinkedHashMap<>();
-                Map<String, Pos> at = new LinkedHashMap<>();
-                List<String> tasks = new ArrayList<>();
-                Rows rows = new Rows(p);
-                boolean sawRows = false;
-                Pos top = pos(j.currentTokenLocation());
-                while (j.nextToken() == JsonToken.FIELD_NAME) {
-                    String key = canonical(j.currentName());
-                    Pos kp = pos(j.currentTokenLocation());
-                    JsonToken t = j.nextToken();
-                    Pos vp = pos(j.currentTokenLocation());
-                    if (!TOP_KEYS.contains(key)) {
-                        String near = Spelling.closest(key, TOP_KEYS);
-                        p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
-                        j.skipChildren();
-                        continue;
-                    }
-                    switch (key) {
-                        case "tasks" -> {
-                            if (t != JsonToken.START_ARRAY) {
-                                p.addPolicy(vp, "'tasks' must be a list of zone names");
-                                j.skipChildren();
-                                continue;
-                            }
-                            while (j.nextToken() != JsonToken.END_ARRAY) {
-                                if (j.currentToken() != JsonToken.VALUE_STRING) {
-                                    p.addPolicy(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
-                                    j.skipChildren();
-                                } else {
-                                    tasks.add(j.getText());
-                                }
-                            }
-                        }
-                        case "rows" -> {
-                            sawRows = true;
-                            if (t != JsonToken.START_ARRAY) {
-                                p.addPolicy(vp, "'rows' must be a list of rows");
-                                j.skipChildren();
-                                continue;
-                            }
-                            while (j.nextToken() != JsonToken.END_ARRAY) {
-                                readRow(j, rows);
-                            }
-                        }
-                        default -> {
-                            if (!t.isScalarValue()) {
-                                p.addPolicy(vp, "'" + key + "' must be a single value");
-                                j.skipChildren();
-                                continue;
-                            }
-                            values.put(key, j.getText());
-                            at.put(key, vp);
-                        }
-                    }
-                }
-                if (!FORMAT.equals(values.get("format"))) {
-                    p.addPolicy(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
-                }
-                if (values.containsKey("version") && !knownVersion(values.get("version"))) {
-                    p.addPolicy(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
-                            + " is not known (this dockline reads versions " + VERSION_1 + ", " + VERSION_WITH_SCORE
-                            + " and " + VERSION + ")");
-                }
-                if (!sawRows) {
-                    p.addPolicy(top, "no 'rows' in the policy file");
-                }
-                Header h = header(p, top, values, at, tasks);
-                if (h == null) {
-                    return null;
-                }
-                Policy policy = rows.policy(h);
-                return policy == null || p.any() ? null : new Document(h, policy);
-            } catch (JsonParseException e) {
-                p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
-                return null;
-            } catch (IOException e) {
-                p.addPolicy(Pos.START, "cannot read the file: " + e.getMessage());
-                return null;
-            }
-        }
-
-        private void readRow(JsonParser j, Rows rows) throws IOException {
-            Pos rp = pos(j.currentTokenLocation());
-            if (j.currentToken() != JsonToken.START_OBJECT) {
-                p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
-                j.skipChildren();
-                return;
-            }
-            Map<String, String> values = new LinkedHashMap<>();
-            Map<String, Pos> at = new LinkedHashMap<>();
-            boolean bad = false;
-            while (j.nextToken() == JsonToken.FIELD_NAME) {
-                String key = canonical(j.currentName());
-                Pos kp = pos(j.currentTokenLocation());
-                JsonToken t = j.nextToken();
-                Pos vp = pos(j.currentTokenLocation());
-                if (!JSON_ROW_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, JSON_ROW_KEYS);
-                    p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
-                            : "missions/POLICY-FORMAT.md lists the keys of a row");
-                    j.skipChildren();
-                    bad = true;
-                    continue;
-                }
-                if (!t.isScalarValue()) {
-                    p.addPolicy(vp, "'" + key + "' must be a single value");
-                    j.skipChildren();
-                    bad = true;
-                    continue;
-                }
-                values.put(key, j.getText());
-                at.put(key, vp);
-            }
-            PolicyEntry e = row(p, rp, values, at);
-            if (e != null && !bad) {
-                rows.add(rp, e);
-            }
-        }
-    }
-
-    /** CSV: {@code #} comment lines with the header, then a header row, then one row per line. */
-    private static final class CsvReading {
-        private final Problems p;
-        private final byte[] bytes;
-        /** The row fields, as the header row names them. */
-        private List<String> columns = ROW_KEYS;
-
-        CsvReading(Problems p, byte[] bytes) {
-            this.p = p;
-            this.bytes = bytes;
-        }
-
-        Document read() {
-            String text = new String(bytes, StandardCharsets.UTF_8);
-            String[] lines = text.split("\r?\n", -1);
-            Map<String, String> values = new LinkedHashMap<>();
-            Map<String, Pos> at = new LinkedHashMap<>();
-            List<String> tasks = new ArrayList<>();
-            Rows rows = new Rows(p);
-            boolean headerRow = false;
-            boolean formatLine = false;
-            for (int i = 0; i < lines.length; i++) {
-                String line = lines[i];
-                int ln = i + 1;
-                if (line.isBlank()) {
-                    continue;
-                }
-                if (line.startsWith("#")) {
-                    String c = line.substring(1).trim();
-                    if (!formatLine && !headerRow) {
-                        formatLine = true;
-                        if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_1)
-                                && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
-                            p.addPolicy(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
-                                    + VERSION + "' (versions " + VERSION_1 + " and " + VERSION_WITH_SCORE
-                                    + " are read as well)");
-                        }
-                        continue;
-                    }
-                    int colon = c.indexOf(':');
-                    if (colon < 0) {
-                        continue; // a plain comment
-                    }
-                    String written = c.substring(0, colon).trim();
-                    String key = canonical(written);
-                    String value = c.substring(colon + 1).trim();
-                    int col = line.indexOf(':') + 2;
-                    if (!TOP_KEYS.contains(key)) {
-                        String near = Spelling.closest(key, TOP_KEYS);
-                        p.add(new Pos(ln, line.indexOf(written) + 1), "unknown key '" + Loading.shorten(key) + "'",
-                                near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
-                        continue;
-                    }
-                    if (key.equals("tasks")) {
-                        for (String t : value.split("\\s+")) {
-                            if (!t.isEmpty()) {
-                                tasks.add(t);
-                            }
-                        }
-                    } else {
-                        values.put(key, value);
-                        at.put(key, new Pos(ln, col));
-                    }
-                    continue;
-                }
-                if (!headerRow) {
-                    headerRow = true;
-                    String hr = line.trim();
-                    if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
-                        columns = SCORE_ROW_KEYS;
-                    } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
-                        columns = List.of(hr.split(","));
-                    } else if (!hr.equals(CSV_HEADER) && !hr.equals(OLD_CSV_HEADER)) {
-                        p.addPolicy(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
-                                + "' for a discounted mission; either followed by '," + CLOSED + "' with lasting events)");
-                        return null;
-                    }
-                    continue;
-                }
-                readRow(line, ln, rows);
-            }
-            if (!formatLine) {
-                p.addPolicy(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
-            }
-            if (!headerRow) {
-                p.addPolicy(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
-            }
-            Header h = header(p, Pos.START, values, at, tasks);
-            if (h == null) {
-                return null;
-            }
-            Policy policy = rows.policy(h);
-            return policy == null || p.any() ? null : new Document(h, policy);
-        }
-
-        private void readRow(String line, int ln, Rows rows) {
-            Map<String, String> values = new LinkedHashMap<>();
-            Map<String, Pos> at = new LinkedHashMap<>();
-            int field = 0;
-            int start = 0;
-            boolean restIsClosed = columns.get(columns.size() - 1).equals(CLOSED);
-            for (int i = 0; i <= line.length(); i++) {
-                if (restIsClosed && field == columns.size() - 1) {
-                    i = line.length(); // the closures column takes the rest of the line, commas and all
-                }
-                if (i == line.length() || line.charAt(i) == ',') {
-                    if (field < columns.size()) {
-                        String v = line.substring(start, i);
-                        if (!(field == columns.size() - 1 && v.isBlank())) {
-                            values.put(columns.get(field), v);
-                        }
-                        at.put(columns.get(field), new Pos(ln, start + 1));
-                    }
-                    field++;
-                    start = i + 1;
-                }
-            }
-            if (field != columns.size()) {
-                p.addPolicy(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
-                        + "), this one has " + field);
-                return;
-            }
-            PolicyEntry e = row(p, new Pos(ln, 1), values, at);
-            if (e != null) {
-                rows.add(new Pos(ln, 1), e);
-            }
-        }
     }
 }

@@ -74,21 +74,7 @@ final class Problems {
         if (clean) {
             return s;
         }
-        StringBuilder sb = new StringBuilder();
-        int i = 0;
-        while (i < s.length() && sb.length() < LONGEST) {
-            int cp = s.codePointAt(i);
-            i += Character.charCount(cp);
-            if (Loading.hidden(cp)) {
-                sb.append(String.format("\\u%04X", cp));
-            } else {
-                sb.appendCodePoint(cp);
-            }
-        }
-        if (i < s.length()) {
-            sb.append("...");
-        }
-        return sb.toString();
+        return Loading.escaped(s, LONGEST, true);
     }
 
     /** A "N more ..." line: kept even though its position is explained by the problems it sums up. */

@@ -121,11 +121,7 @@ public final class NetpbmReader {
         }
         int l = line;
         int c = col;
-        long v = 0;
-        while (pos < data.length && isDigit(data[pos])) {
-            v = Math.min(v * 10 + (data[pos] - '0'), 1L << 40);
-            advance();
-        }
+        long v = digits();
         if (v < min || v > max) {
             String hint = what.equals("maxval") ? "maxval is 1 to 65535 (pgm(5))"
                     : "an image is 1 to " + max + " pixels wide and high";
@@ -133,6 +129,16 @@ public final class NetpbmReader {
                     : "is " + v) + ", outside " + min + " to " + max, hint));
         }
         return (int) v;
+    }
+
+    /** The decimal number at the position, capped at 2^40 (so "far too large" needs no overflow). */
+    private long digits() {
+        long v = 0;
+        while (pos < data.length && isDigit(data[pos])) {
+            v = Math.min(v * 10 + (data[pos] - '0'), 1L << 40);
+            advance();
+        }
+        return v;
     }
 
     /** After the last header number of a raw file: an optional comment, then exactly one whitespace character. */
@@ -163,11 +169,7 @@ public final class NetpbmReader {
             }
             int l = line;
             int c = col;
-            long v = 0;
-            while (pos < data.length && isDigit(data[pos])) {
-                v = Math.min(v * 10 + (data[pos] - '0'), 1L << 40);
-                advance();
-            }
+            long v = digits();
             if (v > maxval) {
                 throw new RasterException(new RasterProblem(file, l, c, "sample " + (v >= 1L << 40 ? "far too large" : v)
                         + " of pixel " + (i % width) + ":" + (i / width) + " is above the maxval " + maxval,

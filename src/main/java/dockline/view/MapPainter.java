@@ -263,8 +263,7 @@ final class MapPainter {
         double d = s * 0.74;
         double cx = x + s / 2;
         double cy = y + s / 2;
-        g.setFill(Palette.DOCK);
-        g.fillOval(cx - d / 2, cy - d / 2, d, d);
+        disc(g, cx, cy, d, Palette.DOCK);
         g.setStroke(Color.WHITE);
         g.setLineWidth(Math.max(1.5, s / 9));
         g.setLineCap(StrokeLineCap.BUTT);
@@ -538,14 +537,17 @@ final class MapPainter {
         double d = s * 0.56;
         double cx = x + s / 2;
         double cy = y + s / 2;
-        g.setFill(Palette.ROBOT);
-        g.fillOval(cx - d / 2, cy - d / 2, d, d);
+        disc(g, cx, cy, d, Palette.ROBOT);
         g.setStroke(Palette.ROBOT_EDGE);
         g.setLineWidth(Math.max(1.5, s / 14));
         g.strokeOval(cx - d / 2, cy - d / 2, d, d);
-        g.setFill(Palette.ROBOT_EDGE);
-        double e = d * 0.22;
-        g.fillOval(cx - e / 2, cy - e / 2, e, e);
+        disc(g, cx, cy, d * 0.22, Palette.ROBOT_EDGE);
+    }
+
+    /** A filled disc of diameter {@code d} centred on (cx, cy). */
+    private static void disc(GraphicsContext g, double cx, double cy, double d, Color fill) {
+        g.setFill(fill);
+        g.fillOval(cx - d / 2, cy - d / 2, d, d);
     }
 
     private static void clip(GraphicsContext g, double x, double y, double w, double h) {

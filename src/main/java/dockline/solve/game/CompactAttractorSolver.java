@@ -96,22 +96,12 @@ public final class CompactAttractorSolver implements GameSolver {
         final int[] inStart = g.inStart;
         final int[] inSource = g.inSource;
         final byte[] counter = new byte[n];
-        int tail = 0;
         for (int v = 0; v < n; v++) {
-            if (target[v]) {
-                queue[tail++] = v;
-            } else {
+            if (!target[v]) {
                 counter[v] = owner[v] == GameGraph.ROBOT ? 1 : (byte) (outStart[v + 1] - outStart[v]);
             }
         }
-        layerStarts = new IntArrayList();
-        layerStarts.add(0);
-        layerStarts.add(tail);
-        for (int v = 0; v < n; v++) {
-            if (!target[v] && counter[v] == 0) {
-                queue[tail++] = v; // a disturbance vertex without moves: won vacuously, rank 1
-            }
-        }
+        int tail = seed(queue);
         int head = 0;
         int steps = 0;
         boolean stopped = stopAt >= 0 && target[stopAt];
@@ -136,13 +126,7 @@ public final class CompactAttractorSolver implements GameSolver {
                     }
                 }
             }
-            steps += end - inStart[v] + 1;
-            if (steps >= AttractorSolver.POLL_INTERVAL) {
-                steps = 0;
-                if (cancelled.getAsBoolean()) {
-                    throw new CancellationException("solving was cancelled");
-                }
-            }
+            steps = poll(steps + end - inStart[v] + 1);
         }
         return tail;
     }
@@ -155,22 +139,12 @@ public final class CompactAttractorSolver implements GameSolver {
         final int[] inStart = g.inStart;
         final int[] inSource = g.inSource;
         final int[] counter = new int[n];
-        int tail = 0;
         for (int v = 0; v < n; v++) {
-            if (target[v]) {
-                queue[tail++] = v;
-            } else {
+            if (!target[v]) {
                 counter[v] = owner[v] == GameGraph.ROBOT ? 1 : outStart[v + 1] - outStart[v];
             }
         }
-        layerStarts = new IntArrayList();
-        layerStarts.add(0);
-        layerStarts.add(tail);
-        for (int v = 0; v < n; v++) {
-            if (!target[v] && counter[v] == 0) {
-                queue[tail++] = v;
-            }
-        }
+        int tail = seed(queue);
         int head = 0;
         int steps = 0;
         boolean stopped = stopAt >= 0 && target[stopAt];
@@ -195,15 +169,46 @@ public final class CompactAttractorSolver implements GameSolver {
                     }
                 }
             }
-            steps += end - inStart[v] + 1;
-            if (steps >= AttractorSolver.POLL_INTERVAL) {
-                steps = 0;
-                if (cancelled.getAsBoolean()) {
-                    throw new CancellationException("solving was cancelled");
-                }
+            steps = poll(steps + end - inStart[v] + 1);
+        }
+        return tail;
+    }
+
+    /**
+     * Puts the targets in the queue (the first layer), then the disturbance vertices without moves
+     * (won vacuously, rank 1); starts the layer marks. Returns the queue's tail.
+     */
+    private int seed(int[] queue) {
+        final int n = g.n;
+        final byte[] owner = g.owner;
+        final boolean[] target = g.target;
+        final int[] outStart = g.outStart;
+        int tail = 0;
+        for (int v = 0; v < n; v++) {
+            if (target[v]) {
+                queue[tail++] = v;
+            }
+        }
+        layerStarts = new IntArrayList();
+        layerStarts.add(0);
+        layerStarts.add(tail);
+        for (int v = 0; v < n; v++) {
+            if (!target[v] && owner[v] != GameGraph.ROBOT && outStart[v + 1] == outStart[v]) {
+                queue[tail++] = v;
             }
         }
         return tail;
+    }
+
+    /** The work count after a poll for cancellation: 0 once it reached the poll interval. */
+    private int poll(int steps) {
+        if (steps < AttractorSolver.POLL_INTERVAL) {
+            return steps;
+        }
+        if (cancelled.getAsBoolean()) {
+            throw new CancellationException("solving was cancelled");
+        }
+        return 0;
     }
 
     private IntArrayList layerStarts;

@@ -65,18 +65,13 @@ public final class ReserveSizeForecast {
         int[] deficit = new int[n];
         Arrays.fill(deficit, NONE);
         boolean[] queued = new boolean[n];
-        int[] ring = new int[Math.max(16, Math.min(n, 1 << 22))];
-        int head = 0;
-        int size = 0;
+        Ring ring = new Ring(Math.max(16, Math.min(n, 1 << 22)));
         int p0 = a0 * gc + g0;
         deficit[p0] = charges[a0] ? 0 : cap - monitor.level(m0);
-        ring[0] = p0;
-        size = 1;
+        ring.push(p0);
         queued[p0] = true;
-        while (size > 0) {
-            int p = ring[head];
-            head = head + 1 == ring.length ? 0 : head + 1;
-            size--;
+        while (ring.size > 0) {
+            int p = ring.pop();
             queued[p] = false;
             int v = p / gc;
             int g = p - v * gc;
@@ -86,19 +81,7 @@ public final class ReserveSizeForecast {
                     continue;
                 }
                 for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
-                    int q = arena.target(e) * gc + g;
-                    if (dv < deficit[q]) {
-                        deficit[q] = dv;
-                        if (!queued[q]) {
-                            if (size == ring.length) {
-                                ring = grow(ring, head, size);
-                                head = 0;
-                            }
-                            ring[(head + size) % ring.length] = q;
-                            size++;
-                            queued[q] = true;
-                        }
-                    }
+                    lower(arena.target(e) * gc + g, dv, deficit, queued, ring);
                 }
                 continue;
             }
@@ -117,19 +100,7 @@ public final class ReserveSizeForecast {
                 if (charges[a2] && !goal.accepting(g2, arena.isDock(arena.cell(a2)))) {
                     nd = 0;
                 }
-                int q = a2 * gc + g2;
-                if (nd < deficit[q]) {
-                    deficit[q] = nd;
-                    if (!queued[q]) {
-                        if (size == ring.length) {
-                            ring = grow(ring, head, size);
-                            head = 0;
-                        }
-                        ring[(head + size) % ring.length] = q;
-                        size++;
-                        queued[q] = true;
-                    }
-                }
+                lower(a2 * gc + g2, nd, deficit, queued, ring);
             }
         }
         long vertices = 2;
@@ -151,11 +122,45 @@ public final class ReserveSizeForecast {
         return new Forecast(vertices, edges);
     }
 
-    private static int[] grow(int[] ring, int head, int size) {
-        int[] bigger = new int[ring.length * 2];
-        for (int i = 0; i < size; i++) {
-            bigger[i] = ring[(head + i) % ring.length];
+    /** Lowers the deficit of pair {@code q} to {@code d} if that is lower, queueing it once. */
+    private static void lower(int q, int d, int[] deficit, boolean[] queued, Ring ring) {
+        if (d < deficit[q]) {
+            deficit[q] = d;
+            if (!queued[q]) {
+                ring.push(q);
+                queued[q] = true;
+            }
         }
-        return bigger;
+    }
+
+    /** A first-in first-out queue of pair numbers in a growable ring of ints (no boxing). */
+    private static final class Ring {
+        private int[] a;
+        private int head;
+        int size;
+
+        Ring(int capacity) {
+            a = new int[capacity];
+        }
+
+        void push(int q) {
+            if (size == a.length) {
+                int[] bigger = new int[a.length * 2];
+                for (int i = 0; i < size; i++) {
+                    bigger[i] = a[(head + i) % a.length];
+                }
+                a = bigger;
+                head = 0;
+            }
+            a[(head + size) % a.length] = q;
+            size++;
+        }
+
+        int pop() {
+            int p = a[head];
+            head = head + 1 == a.length ? 0 : head + 1;
+            size--;
+            return p;
+        }
     }
 }

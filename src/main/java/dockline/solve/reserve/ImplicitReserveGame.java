@@ -5,16 +5,11 @@ import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
 import dockline.policy.Policy;
-import dockline.policy.PolicyEntry;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
-import dockline.util.LongIntMap;
-import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -54,15 +49,15 @@ import java.util.function.BooleanSupplier;
  */
 public final class ImplicitReserveGame {
 
-    private final Arena arena;
-    private final GoalAutomaton goal;
-    private final ReserveMonitor monitor;
+    final Arena arena;
+    final GoalAutomaton goal;
+    final ReserveMonitor monitor;
     private final int gc;
     private final int levels;
-    private final int gBits;
-    private final int lBits;
-    private final long slotCount;
-    private final long vertexCount;
+    final int gBits;
+    final int lBits;
+    final long slotCount;
+    final long vertexCount;
     private final GoalPredecessors inverse;
     // the arena's reverse CSR with each slot's source, weight and the source's out-degree inline, so
     // the backward search reads one slot sequentially instead of chasing in-edge -> edge -> source
@@ -266,48 +261,7 @@ public final class ImplicitReserveGame {
      * @throws IllegalArgumentException if the robot does not win from the start
      */
     public Policy policy(Strategy strategy) {
-        if (!strategy.startWon()) {
-            throw new IllegalArgumentException("the robot does not win from the start");
-        }
-        List<PolicyEntry> entries = new ArrayList<>();
-        int start = start();
-        if (start < 0) {
-            return new Policy(entries);
-        }
-        final int rc = arena.robotCount();
-        long[] seen = new long[(int) (slotCount >>> 6) + 1];
-        int[] todo = new int[1 << 10];
-        int tail = 0;
-        seen[start >>> 6] |= 1L << start;
-        todo[tail++] = start;
-        int[] succ = new int[16];
-        while (tail > 0) {
-            int p = todo[--tail];
-            int s = p & ((1 << lBits) - 1);
-            int g = (p >>> lBits) & ((1 << gBits) - 1);
-            int x = p >>> (lBits + gBits);
-            int k;
-            if (x < rc) {
-                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
-                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
-                        goal.progressMask(g), arena.action(d), null, arena.closures(x)));
-                succ[0] = id(d, g, s);
-                k = 1;
-            } else {
-                k = outcomes(x, g, s, succ, null);
-            }
-            for (int i = 0; i < k; i++) {
-                int q = succ[i];
-                if ((seen[q >>> 6] & (1L << q)) == 0) {
-                    seen[q >>> 6] |= 1L << q;
-                    if (tail == todo.length) {
-                        todo = Arrays.copyOf(todo, tail * 2);
-                    }
-                    todo[tail++] = q;
-                }
-            }
-        }
-        return new Policy(entries);
+        return ImplicitWalks.policy(this, strategy);
     }
 
     /**
@@ -318,62 +272,7 @@ public final class ImplicitReserveGame {
      * post-order evaluates it in O(closed loop) (a hash map holds W).
      */
     public int worstCaseMinimum(Strategy strategy) {
-        if (!strategy.startWon()) {
-            throw new IllegalArgumentException("the robot does not win from the start");
-        }
-        int start = start();
-        if (start == -2) {
-            return monitor.level(monitor.initialState());
-        }
-        final int rc = arena.robotCount();
-        LongIntMap worst = new LongIntMap(1 << 10);
-        int[] stack = new int[1 << 10];
-        int sp = 0;
-        stack[sp++] = start;
-        int[] succ = new int[16];
-        int[] arrive = new int[16];
-        while (sp > 0) {
-            int p = stack[sp - 1];
-            if (worst.get(p) != LongIntMap.ABSENT) {
-                sp--;
-                continue;
-            }
-            int s = p & ((1 << lBits) - 1);
-            int g = (p >>> lBits) & ((1 << gBits) - 1);
-            int x = p >>> (lBits + gBits);
-            int k;
-            if (x < rc) {
-                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
-                succ[0] = id(d, g, s);
-                arrive[0] = -1;
-                k = 1;
-            } else {
-                k = outcomes(x, g, s, succ, arrive);
-            }
-            int w = monitor.level(s);
-            boolean ready = true;
-            for (int i = 0; i < k; i++) {
-                if (arrive[i] >= 0) {
-                    w = Math.min(w, arrive[i]);
-                    continue;
-                }
-                int v = worst.get(succ[i]);
-                if (v == LongIntMap.ABSENT) {
-                    ready = false;
-                    if (sp == stack.length) {
-                        stack = Arrays.copyOf(stack, sp * 2);
-                    }
-                    stack[sp++] = succ[i];
-                } else {
-                    w = Math.min(w, v);
-                }
-            }
-            if (ready) {
-                worst.put(p, w);
-                sp--;
-            }
-        }
-        return worst.get(start);
+        return ImplicitWalks.worstCaseMinimum(this, strategy);
     }
 
     /**
@@ -383,7 +282,7 @@ public final class ImplicitReserveGame {
      *
      * @throws IllegalStateException if an outcome loses (the triple was not won)
      */
-    private int outcomes(int x, int g, int s, int[] succ, int[] arrive) {
+    int outcomes(int x, int g, int s, int[] succ, int[] arrive) {
         int k = 0;
         for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
             int s2 = monitor.step(s, arena.weight(e));
@@ -609,92 +508,6 @@ public final class ImplicitReserveGame {
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
     public Result bfs() {
-        int start = start();
-        if (start < 0) {
-            return new Result(start == -2, 0, 0, false, vertexCount);
-        }
-        final int n = (int) slotCount;
-        final int rc = arena.robotCount();
-        final int lb = lBits;
-        final int gb = gBits;
-        final int sMask = (1 << lb) - 1;
-        final int gMask = (1 << gb) - 1;
-        final long[] seen = new long[(n >>> 6) + 1];
-        IntQueue queue = new IntQueue(1 << 16);
-        seen[start >>> 6] |= 1L << start;
-        queue.add(start);
-        long edges = 0;
-        int head = 0;
-        while (head < queue.size()) {
-            int p = queue.get(head++);
-            int s = p & sMask;
-            int g = (p >>> lb) & gMask;
-            int x = p >>> (lb + gb);
-            int from = arena.outBegin(x);
-            int to = arena.outEnd(x);
-            edges += to - from;
-            if (x < rc) {
-                for (int e = from; e < to; e++) {
-                    int q = (((arena.target(e) << gb) | g) << lb) | s;
-                    if ((seen[q >>> 6] & (1L << q)) == 0) {
-                        seen[q >>> 6] |= 1L << q;
-                        queue.add(q);
-                    }
-                }
-                continue;
-            }
-            for (int e = from; e < to; e++) {
-                int s2 = monitor.step(s, arena.weight(e));
-                if (s2 == Monitor.REJECT) {
-                    continue;
-                }
-                int a2 = arena.target(e);
-                int c2 = arena.cell(a2);
-                int g2 = goal.step(g, arena.cellZones(c2));
-                if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
-                    continue; // a sink (LOSE or WIN): nothing to explore
-                }
-                int q = (((a2 << gb) | g2) << lb) | s2;
-                if ((seen[q >>> 6] & (1L << q)) == 0) {
-                    seen[q >>> 6] |= 1L << q;
-                    queue.add(q);
-                }
-            }
-        }
-        return new Result(false, queue.size(), edges, false, vertexCount);
-    }
-
-    /**
-     * A growable int queue in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
-     * is its size rather than 2.5 times it).
-     */
-    private static final class IntQueue {
-        private static final int SHIFT = 20;
-        private static final int MASK = (1 << SHIFT) - 1;
-        private int[][] blocks = new int[16][];
-        private int size;
-
-        IntQueue(int ignored) {
-        }
-
-        void add(int v) {
-            int b = size >>> SHIFT;
-            if (b == blocks.length) {
-                blocks = Arrays.copyOf(blocks, b * 2);
-            }
-            if (blocks[b] == null) {
-                blocks[b] = new int[1 << SHIFT];
-            }
-            blocks[b][size & MASK] = v;
-            size++;
-        }
-
-        int get(int i) {
-            return blocks[i >>> SHIFT][i & MASK];
-        }
-
-        int size() {
-            return size;
-        }
+        return ImplicitWalks.bfs(this);
     }
 }

@@ -1,0 +1,25 @@
+package dockline.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+
+/**
+ * What every subcommand starts from: the command line picocli hands it, whose writers (set by
+ * {@link Main}) it prints to, and an exit code ({@link ExitCodes}) as its result.
+ */
+abstract class CommandBase implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    /** Standard output of this command line. */
+    PrintWriter out() {
+        return spec.commandLine().getOut();
+    }
+
+    /** Standard error of this command line. */
+    PrintWriter err() {
+        return spec.commandLine().getErr();
+    }
+}

@@ -1,0 +1,140 @@
+package dockline.io;
+
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import static dockline.io.PolicyFiles.*;
+
+/** CSV: {@code #} comment lines with the header, then a header row, then one row per line. */
+final class PolicyCsvReading {
+    private final Problems p;
+    private final byte[] bytes;
+    /** The row fields, as the header row names them. */
+    private List<String> columns = ROW_KEYS;
+
+    PolicyCsvReading(Problems p, byte[] bytes) {
+        this.p = p;
+        this.bytes = bytes;
+    }
+
+    Document read() {
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        String[] lines = text.split("\r?\n", -1);
+        Map<String, String> values = new LinkedHashMap<>();
+        Map<String, Pos> at = new LinkedHashMap<>();
+        List<String> tasks = new ArrayList<>();
+        Rows rows = new Rows(p);
+        boolean headerRow = false;
+        boolean formatLine = false;
+        for (int i = 0; i < lines.length; i++) {
+            String line = lines[i];
+            int ln = i + 1;
+            if (line.isBlank()) {
+                continue;
+            }
+            if (line.startsWith("#")) {
+                String c = line.substring(1).trim();
+                if (!formatLine && !headerRow) {
+                    formatLine = true;
+                    if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_1)
+                            && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
+                        p.addPolicy(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
+                                + VERSION + "' (versions " + VERSION_1 + " and " + VERSION_WITH_SCORE
+                                + " are read as well)");
+                    }
+                    continue;
+                }
+                int colon = c.indexOf(':');
+                if (colon < 0) {
+                    continue; // a plain comment
+                }
+                String written = c.substring(0, colon).trim();
+                String key = canonical(written);
+                String value = c.substring(colon + 1).trim();
+                int col = line.indexOf(':') + 2;
+                if (!TOP_KEYS.contains(key)) {
+                    String near = Spelling.closest(key, TOP_KEYS);
+                    p.add(new Pos(ln, line.indexOf(written) + 1), "unknown key '" + Loading.shorten(key) + "'",
+                            near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
+                    continue;
+                }
+                if (key.equals("tasks")) {
+                    for (String t : value.split("\\s+")) {
+                        if (!t.isEmpty()) {
+                            tasks.add(t);
+                        }
+                    }
+                } else {
+                    values.put(key, value);
+                    at.put(key, new Pos(ln, col));
+                }
+                continue;
+            }
+            if (!headerRow) {
+                headerRow = true;
+                String hr = line.trim();
+                if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
+                    columns = SCORE_ROW_KEYS;
+                } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
+                    columns = List.of(hr.split(","));
+                } else if (!hr.equals(CSV_HEADER) && !hr.equals(OLD_CSV_HEADER)) {
+                    p.addPolicy(new Pos(ln, 1), "the header row must be '" + CSV_HEADER + "' (or '" + CSV_SCORE_HEADER
+                            + "' for a discounted mission; either followed by '," + CLOSED + "' with lasting events)");
+                    return null;
+                }
+                continue;
+            }
+            readRow(line, ln, rows);
+        }
+        if (!formatLine) {
+            p.addPolicy(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
+        }
+        if (!headerRow) {
+            p.addPolicy(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
+        }
+        Header h = header(p, Pos.START, values, at, tasks);
+        if (h == null) {
+            return null;
+        }
+        Policy policy = rows.policy(h);
+        return policy == null || p.any() ? null : new Document(h, policy);
+    }
+
+    private void readRow(String line, int ln, Rows rows) {
+        Map<String, String> values = new LinkedHashMap<>();
+        Map<String, Pos> at = new LinkedHashMap<>();
+        int field = 0;
+        int start = 0;
+        boolean restIsClosed = columns.get(columns.size() - 1).equals(CLOSED);
+        for (int i = 0; i <= line.length(); i++) {
+            if (restIsClosed && field == columns.size() - 1) {
+                i = line.length(); // the closures column takes the rest of the line, commas and all
+            }
+            if (i == line.length() || line.charAt(i) == ',') {
+                if (field < columns.size()) {
+                    String v = line.substring(start, i);
+                    if (!(field == columns.size() - 1 && v.isBlank())) {
+                        values.put(columns.get(field), v);
+                    }
+                    at.put(columns.get(field), new Pos(ln, start + 1));
+                }
+                field++;
+                start = i + 1;
+            }
+        }
+        if (field != columns.size()) {
+            p.addPolicy(new Pos(ln, 1), "a row has " + columns.size() + " fields (" + String.join(",", columns)
+                    + "), this one has " + field);
+            return;
+        }
+        PolicyEntry e = row(p, new Pos(ln, 1), values, at);
+        if (e != null) {
+            rows.add(new Pos(ln, 1), e);
+        }
+    }
+}

@@ -1,0 +1,157 @@
+package dockline.io;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import static dockline.io.PolicyFiles.*;
+
+/** JSON through Jackson's streaming parser, so every value keeps its line and column. */
+final class PolicyJsonReading {
+    private final Problems p;
+    private final byte[] bytes;
+
+    PolicyJsonReading(Problems p, byte[] bytes) {
+        this.p = p;
+        this.bytes = bytes;
+    }
+
+    private static Pos pos(JsonLocation l) {
+        return new Pos(l.getLineNr(), l.getColumnNr());
+    }
+
+    Document read() {
+        JsonFactory f = new JsonFactory();
+        try (JsonParser j = f.createParser(bytes)) {
+            if (j.nextToken() != JsonToken.START_OBJECT) {
+                p.add(pos(j.currentTokenLocation()), "a policy file in JSON is one object", "see missions/POLICY-FORMAT.md");
+                return null;
+            }
+            Map<String, String> values = new LinkedHashMap<>();
+            Map<String, Pos> at = new LinkedHashMap<>();
+            List<String> tasks = new ArrayList<>();
+            Rows rows = new Rows(p);
+            boolean sawRows = false;
+            Pos top = pos(j.currentTokenLocation());
+            while (j.nextToken() == JsonToken.FIELD_NAME) {
+                String key = canonical(j.currentName());
+                Pos kp = pos(j.currentTokenLocation());
+                JsonToken t = j.nextToken();
+                Pos vp = pos(j.currentTokenLocation());
+                if (!TOP_KEYS.contains(key)) {
+                    String near = Spelling.closest(key, TOP_KEYS);
+                    p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
+                    j.skipChildren();
+                    continue;
+                }
+                switch (key) {
+                    case "tasks" -> {
+                        if (t != JsonToken.START_ARRAY) {
+                            p.addPolicy(vp, "'tasks' must be a list of zone names");
+                            j.skipChildren();
+                            continue;
+                        }
+                        while (j.nextToken() != JsonToken.END_ARRAY) {
+                            if (j.currentToken() != JsonToken.VALUE_STRING) {
+                                p.addPolicy(pos(j.currentTokenLocation()), "a task is a zone name in quotes");
+                                j.skipChildren();
+                            } else {
+                                tasks.add(j.getText());
+                            }
+                        }
+                    }
+                    case "rows" -> {
+                        sawRows = true;
+                        if (t != JsonToken.START_ARRAY) {
+                            p.addPolicy(vp, "'rows' must be a list of rows");
+                            j.skipChildren();
+                            continue;
+                        }
+                        while (j.nextToken() != JsonToken.END_ARRAY) {
+                            readRow(j, rows);
+                        }
+                    }
+                    default -> {
+                        if (!t.isScalarValue()) {
+                            p.addPolicy(vp, "'" + key + "' must be a single value");
+                            j.skipChildren();
+                            continue;
+                        }
+                        values.put(key, j.getText());
+                        at.put(key, vp);
+                    }
+                }
+            }
+            if (!FORMAT.equals(values.get("format"))) {
+                p.addPolicy(at.getOrDefault("format", top), "not a dockline policy: 'format' must be \"" + FORMAT + "\"");
+            }
+            if (values.containsKey("version") && !knownVersion(values.get("version"))) {
+                p.addPolicy(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
+                        + " is not known (this dockline reads versions " + VERSION_1 + ", " + VERSION_WITH_SCORE
+                        + " and " + VERSION + ")");
+            }
+            if (!sawRows) {
+                p.addPolicy(top, "no 'rows' in the policy file");
+            }
+            Header h = header(p, top, values, at, tasks);
+            if (h == null) {
+                return null;
+            }
+            Policy policy = rows.policy(h);
+            return policy == null || p.any() ? null : new Document(h, policy);
+        } catch (JsonParseException e) {
+            p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
+            return null;
+        } catch (IOException e) {
+            p.addPolicy(Pos.START, "cannot read the file: " + e.getMessage());
+            return null;
+        }
+    }
+
+    private void readRow(JsonParser j, Rows rows) throws IOException {
+        Pos rp = pos(j.currentTokenLocation());
+        if (j.currentToken() != JsonToken.START_OBJECT) {
+            p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
+            j.skipChildren();
+            return;
+        }
+        Map<String, String> values = new LinkedHashMap<>();
+        Map<String, Pos> at = new LinkedHashMap<>();
+        boolean bad = false;
+        while (j.nextToken() == JsonToken.FIELD_NAME) {
+            String key = canonical(j.currentName());
+            Pos kp = pos(j.currentTokenLocation());
+            JsonToken t = j.nextToken();
+            Pos vp = pos(j.currentTokenLocation());
+            if (!JSON_ROW_KEYS.contains(key)) {
+                String near = Spelling.closest(key, JSON_ROW_KEYS);
+                p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
+                        : "missions/POLICY-FORMAT.md lists the keys of a row");
+                j.skipChildren();
+                bad = true;
+                continue;
+            }
+            if (!t.isScalarValue()) {
+                p.addPolicy(vp, "'" + key + "' must be a single value");
+                j.skipChildren();
+                bad = true;
+                continue;
+            }
+            values.put(key, j.getText());
+            at.put(key, vp);
+        }
+        PolicyEntry e = row(p, rp, values, at);
+        if (e != null && !bad) {
+            rows.add(rp, e);
+        }
+    }
+}

@@ -1,0 +1,253 @@
+package dockline.solve.reserve;
+
+import dockline.arena.Arena;
+import dockline.goal.GoalAutomaton;
+import dockline.monitor.Monitor;
+import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.solve.game.ProductGame;
+import dockline.util.LongIntMap;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * What is read off an {@link ImplicitReserveGame} without solving it again: the policy and the
+ * worst-case level of a recorded strategy's closed loop (from the start, robot follows its choice,
+ * disturbance plays every outcome), and the vertices reachable from the start. Each is one search
+ * over the implicit product's numbering, O(what it visits), with a bit per slot or a hash map of ints.
+ */
+final class ImplicitWalks {
+
+    private ImplicitWalks() {
+    }
+
+    /**
+     * The policy of the recorded choices: one row per robot triple of the closed loop from the start
+     * (robot follows its choice, disturbance plays every outcome), the same rows as
+     * {@link ProductGame#policy} gives for the same choices. O(closed loop); a bit per slot for the visited set.
+     *
+     * @throws IllegalArgumentException if the robot does not win from the start
+     */
+    static Policy policy(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy) {
+        requireStartWon(strategy);
+        final Arena arena = game.arena;
+        final GoalAutomaton goal = game.goal;
+        final ReserveMonitor monitor = game.monitor;
+        final int lBits = game.lBits;
+        final int gBits = game.gBits;
+        List<PolicyEntry> entries = new ArrayList<>();
+        int start = game.start();
+        if (start < 0) {
+            return new Policy(entries);
+        }
+        final int rc = arena.robotCount();
+        long[] seen = new long[(int) (game.slotCount >>> 6) + 1];
+        int[] todo = new int[1 << 10];
+        int tail = 0;
+        seen[start >>> 6] |= 1L << start;
+        todo[tail++] = start;
+        int[] succ = new int[16];
+        while (tail > 0) {
+            int p = todo[--tail];
+            int x = p >>> (lBits + gBits);
+            if (x < rc) {
+                int s = p & ((1 << lBits) - 1);
+                int g = (p >>> lBits) & ((1 << gBits) - 1);
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
+                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
+                        goal.progressMask(g), arena.action(d), null, arena.closures(x)));
+            }
+            int k = loopSuccessors(game, strategy, p, succ, null);
+            for (int i = 0; i < k; i++) {
+                int q = succ[i];
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    if (tail == todo.length) {
+                        todo = Arrays.copyOf(todo, tail * 2);
+                    }
+                    todo[tail++] = q;
+                }
+            }
+        }
+        return new Policy(entries);
+    }
+
+    /**
+     * The lowest battery level along any play of the closed loop of the recorded choices from the
+     * start, the level on arrival at completion included: W(robot p) = min(level p, W(chosen
+     * successor)); W(disturbance d) = min(level d, over outcomes W(successor) or the level on arrival
+     * when the outcome completes the mission). The closed loop is acyclic, so a depth-first
+     * post-order evaluates it in O(closed loop) (a hash map holds W).
+     */
+    static int worstCaseMinimum(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy) {
+        requireStartWon(strategy);
+        final ReserveMonitor monitor = game.monitor;
+        int start = game.start();
+        if (start == -2) {
+            return monitor.level(monitor.initialState());
+        }
+        LongIntMap worst = new LongIntMap(1 << 10);
+        int[] stack = new int[1 << 10];
+        int sp = 0;
+        stack[sp++] = start;
+        int[] succ = new int[16];
+        int[] arrive = new int[16];
+        while (sp > 0) {
+            int p = stack[sp - 1];
+            if (worst.get(p) != LongIntMap.ABSENT) {
+                sp--;
+                continue;
+            }
+            int k = loopSuccessors(game, strategy, p, succ, arrive);
+            int w = monitor.level(p & ((1 << game.lBits) - 1));
+            boolean ready = true;
+            for (int i = 0; i < k; i++) {
+                if (arrive[i] >= 0) {
+                    w = Math.min(w, arrive[i]);
+                    continue;
+                }
+                int v = worst.get(succ[i]);
+                if (v == LongIntMap.ABSENT) {
+                    ready = false;
+                    if (sp == stack.length) {
+                        stack = Arrays.copyOf(stack, sp * 2);
+                    }
+                    stack[sp++] = succ[i];
+                } else {
+                    w = Math.min(w, v);
+                }
+            }
+            if (ready) {
+                worst.put(p, w);
+                sp--;
+            }
+        }
+        return worst.get(start);
+    }
+
+    private static void requireStartWon(ImplicitReserveGame.Strategy strategy) {
+        if (!strategy.startWon()) {
+            throw new IllegalArgumentException("the robot does not win from the start");
+        }
+    }
+
+    /**
+     * The successors of triple {@code p} in the closed loop of the strategy, into {@code succ}: the
+     * robot's recorded choice, or every outcome of a disturbance triple (with {@code arrive} as in
+     * {@link ImplicitReserveGame#outcomes}; -1 for a choice). Returns how many were written.
+     */
+    private static int loopSuccessors(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy, int p,
+                                      int[] succ, int[] arrive) {
+        final int lBits = game.lBits;
+        final int gBits = game.gBits;
+        int s = p & ((1 << lBits) - 1);
+        int g = (p >>> lBits) & ((1 << gBits) - 1);
+        int x = p >>> (lBits + gBits);
+        if (x < game.arena.robotCount()) {
+            int d = game.arena.target(game.arena.outBegin(x) + strategy.choice(p));
+            succ[0] = game.id(d, g, s);
+            if (arrive != null) {
+                arrive[0] = -1;
+            }
+            return 1;
+        }
+        return game.outcomes(x, g, s, succ, arrive);
+    }
+
+    /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
+    static ImplicitReserveGame.Result bfs(ImplicitReserveGame game) {
+        final Arena arena = game.arena;
+        final GoalAutomaton goal = game.goal;
+        final ReserveMonitor monitor = game.monitor;
+        final long vertexCount = game.vertexCount;
+        int start = game.start();
+        if (start < 0) {
+            return new ImplicitReserveGame.Result(start == -2, 0, 0, false, vertexCount);
+        }
+        final int n = (int) game.slotCount;
+        final int rc = arena.robotCount();
+        final int lb = game.lBits;
+        final int gb = game.gBits;
+        final int sMask = (1 << lb) - 1;
+        final int gMask = (1 << gb) - 1;
+        final long[] seen = new long[(n >>> 6) + 1];
+        IntQueue queue = new IntQueue(1 << 16);
+        seen[start >>> 6] |= 1L << start;
+        queue.add(start);
+        long edges = 0;
+        int head = 0;
+        while (head < queue.size()) {
+            int p = queue.get(head++);
+            int s = p & sMask;
+            int g = (p >>> lb) & gMask;
+            int x = p >>> (lb + gb);
+            int from = arena.outBegin(x);
+            int to = arena.outEnd(x);
+            edges += to - from;
+            if (x < rc) {
+                for (int e = from; e < to; e++) {
+                    int q = (((arena.target(e) << gb) | g) << lb) | s;
+                    if ((seen[q >>> 6] & (1L << q)) == 0) {
+                        seen[q >>> 6] |= 1L << q;
+                        queue.add(q);
+                    }
+                }
+                continue;
+            }
+            for (int e = from; e < to; e++) {
+                int s2 = monitor.step(s, arena.weight(e));
+                if (s2 == Monitor.REJECT) {
+                    continue;
+                }
+                int a2 = arena.target(e);
+                int c2 = arena.cell(a2);
+                int g2 = goal.step(g, arena.cellZones(c2));
+                if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
+                    continue; // a sink (LOSE or WIN): nothing to explore
+                }
+                int q = (((a2 << gb) | g2) << lb) | s2;
+                if ((seen[q >>> 6] & (1L << q)) == 0) {
+                    seen[q >>> 6] |= 1L << q;
+                    queue.add(q);
+                }
+            }
+        }
+        return new ImplicitReserveGame.Result(false, queue.size(), edges, false, vertexCount);
+    }
+
+    /**
+     * A growable int queue in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
+     * is its size rather than 2.5 times it).
+     */
+    private static final class IntQueue {
+        private static final int SHIFT = 20;
+        private static final int MASK = (1 << SHIFT) - 1;
+        private int[][] blocks = new int[16][];
+        private int size;
+
+        IntQueue(int ignored) {
+        }
+
+        void add(int v) {
+            int b = size >>> SHIFT;
+            if (b == blocks.length) {
+                blocks = Arrays.copyOf(blocks, b * 2);
+            }
+            if (blocks[b] == null) {
+                blocks[b] = new int[1 << SHIFT];
+            }
+            blocks[b][size & MASK] = v;
+            size++;
+        }
+
+        int get(int i) {
+            return blocks[i >>> SHIFT][i & MASK];
+        }
+
+        int size() {
+            return size;
+        }
+    }
+}
