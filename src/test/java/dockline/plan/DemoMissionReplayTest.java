@@ -26,7 +26,7 @@ class DemoMissionReplayTest {
 
     /**
      * Oracles: the threshold solver's own worst case (ReserveSolver's dynamic programme over its
-     * ranks) for the worst-case replay; the arena's step semantics (DESIGN.md 2.3) for every row.
+     * ranks) for the worst-case replay; the arena's step semantics (maps/README.md, "Game semantics") for every row.
      */
     @ParameterizedTest
     @MethodSource("demoMissions")
