@@ -148,7 +148,7 @@ final class RoundsCheck {
         put(o, "longestLapTicks", a.longestLapTicks());
         put(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
-        put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        put(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
         tick(o, m);
         o.put("productVertices", a.productVertices());
         o.put("productEdges", a.productEdges());
@@ -157,7 +157,7 @@ final class RoundsCheck {
         o.put("totalMillis", a.millis());
         certificate(o, cert);
         changesJson(o, changes(a));
-        o.put("discretisation", m.scale().describe());
+        o.put("rounding", m.scale().describe());
         return Json.withCaveats(o);
     }
 
@@ -222,7 +222,7 @@ final class RoundsCheck {
         put(o, "tightestDeadlineTicks", a.tightestTicks());
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
         put(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
-        put(o, "highestGuaranteedReserveUnits", a.highestGuaranteedReserveUnits());
+        put(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
         o.put("policyReserveUnits", a.policyFloorUnits());
         o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
         o.put("productVertices", a.productVertices());
@@ -232,7 +232,7 @@ final class RoundsCheck {
         o.put("totalMillis", a.millis());
         certificate(o, cert);
         changesJson(o, changes(a));
-        o.put("discretisation", m.scale().describe());
+        o.put("rounding", m.scale().describe());
         return Json.withCaveats(o);
     }
 

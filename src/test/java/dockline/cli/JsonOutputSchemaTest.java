@@ -78,6 +78,20 @@ class JsonOutputSchemaTest {
                 "--threshold", "6");
     }
 
+    /** Patrol and deadline missions have their own shape of check output, in the same vocabulary. */
+    @Test
+    void check_patrolAndDeadline_followTheRoundsSchema() throws Exception {
+        JsonNode patrol = command("check-rounds", ExitCodes.OK, "check", "missions/night-patrol.yaml", "--json");
+        assertThat(patrol.get("method").asText()).isEqualTo("patrol");
+        JsonNode deadline = command("check-rounds", ExitCodes.NOT_GUARANTEED, "check", "missions/early-clean.yaml",
+                "--json");
+        assertThat(deadline.get("method").asText()).isEqualTo("deadline");
+        // the same figure has the same name as in the one-trip output
+        assertThat(patrol.has("highestReserveUnits")).isTrue();
+        assertThat(deadline.has("rounding")).isTrue();
+        assertThat(patrol.has("highestGuaranteedReserveUnits") || deadline.has("discretisation")).isFalse();
+    }
+
     @Test
     void export_andThePolicyFilesItWrites() throws Exception {
         Path p = dir.resolve("p.json");
