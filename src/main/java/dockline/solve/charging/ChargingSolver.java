@@ -1,5 +1,7 @@
 package dockline.solve.charging;
 
+import dockline.util.PackedMinHeap;
+
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
@@ -137,7 +139,7 @@ public final class ChargingSolver {
         final byte[] processed = new byte[distN];
         final boolean[] done = new boolean[robotN];
         final byte[] choice = new byte[robotN];
-        final Heap heap = new Heap(Math.min(robotN, 1 << 20));
+        final PackedMinHeap heap = new PackedMinHeap(Math.min(robotN, 1 << 20));
         // improvements, per round: position, threshold, out-edge
         IntArrayList impPos = new IntArrayList();
         IntArrayList impNeed = new IntArrayList();
@@ -198,7 +200,7 @@ public final class ChargingSolver {
 
     /** One round of Knuth's min-max Dijkstra from the targets already in the heap; charge outcomes left out. */
     private void dijkstra(int usable, int[] need, int[] distMax, byte[] processed, boolean[] done, byte[] choice,
-                          Heap heap) {
+                          PackedMinHeap heap) {
         final int gc = goalCount;
         final int rc = robotCount;
         while (!heap.isEmpty()) {
@@ -395,68 +397,4 @@ public final class ChargingSolver {
         }
     }
 
-    /**
-     * Min-heap of positions with keys packed into one long ({@code key << 32 | position}), 4-ary, lazy
-     * deletion. O(log n) per operation.
-     */
-    private static final class Heap {
-        private long[] heap;
-        private int size;
-
-        Heap(int capacity) {
-            this.heap = new long[Math.max(16, capacity)];
-        }
-
-        boolean isEmpty() {
-            return size == 0;
-        }
-
-        void push(int key, int v) {
-            if (size == heap.length) {
-                heap = Arrays.copyOf(heap, Math.addExact(heap.length, heap.length >> 1));
-            }
-            long x = ((long) key << 32) | v;
-            int i = size++;
-            while (i > 0) {
-                int parent = (i - 1) >>> 2;
-                long p = heap[parent];
-                if (p <= x) {
-                    break;
-                }
-                heap[i] = p;
-                i = parent;
-            }
-            heap[i] = x;
-        }
-
-        long poll() {
-            long top = heap[0];
-            long x = heap[--size];
-            int n = size;
-            int i = 0;
-            while (true) {
-                int c = 4 * i + 1;
-                if (c >= n) {
-                    break;
-                }
-                int bestI = c;
-                long bv = heap[c];
-                int last = Math.min(c + 4, n);
-                for (int j = c + 1; j < last; j++) {
-                    long hv = heap[j];
-                    if (hv < bv) {
-                        bv = hv;
-                        bestI = j;
-                    }
-                }
-                if (x <= bv) {
-                    break;
-                }
-                heap[i] = bv;
-                i = bestI;
-            }
-            heap[i] = x;
-            return top;
-        }
-    }
 }

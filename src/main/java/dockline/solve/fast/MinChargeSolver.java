@@ -1,5 +1,7 @@
 package dockline.solve.fast;
 
+import dockline.util.PackedMinHeap;
+
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
@@ -266,7 +268,7 @@ public final class MinChargeSolver {
         Arrays.fill(robotNeed, INFINITE);
         final int[] distMax = new int[distN];
         final byte[] processed = new byte[distN];
-        final Heap heap = new Heap(Math.min(robotN, 1 << 20));
+        final PackedMinHeap heap = new PackedMinHeap(Math.min(robotN, 1 << 20));
         final boolean[] done = new boolean[robotN];
         // the chosen action per robot vertex: 1 + its out-edge offset (0: none); out-degrees are small
         final byte[] choice = new byte[robotN];
@@ -352,75 +354,4 @@ public final class MinChargeSolver {
                 productVertices, mode == Mode.ALL));
     }
 
-    /**
-     * Min-heap of robot product vertices with their keys packed into one long ({@code key << 32 | vertex}),
-     * 4-ary, with lazy deletion instead of decrease-key: an improved vertex is pushed again and stale
-     * entries are skipped when they surface. Keys live inside the heap entries, so sifting reads one
-     * array with good locality instead of chasing a key array at random; a 4-ary heap has half the levels
-     * of a binary one. O(log n) per operation, at most one entry per improvement.
-     */
-    private static final class Heap {
-        private long[] heap;
-        private int size;
-
-        Heap(int capacity) {
-            this.heap = new long[Math.max(16, capacity)];
-        }
-
-        boolean isEmpty() {
-            return size == 0;
-        }
-
-        long peek() {
-            return heap[0];
-        }
-
-        void push(int key, int v) {
-            if (size == heap.length) {
-                heap = Arrays.copyOf(heap, Math.addExact(heap.length, heap.length >> 1));
-            }
-            long x = ((long) key << 32) | v;
-            int i = size++;
-            while (i > 0) {
-                int parent = (i - 1) >>> 2;
-                long p = heap[parent];
-                if (p <= x) {
-                    break;
-                }
-                heap[i] = p;
-                i = parent;
-            }
-            heap[i] = x;
-        }
-
-        long poll() {
-            long top = heap[0];
-            long x = heap[--size];
-            int n = size;
-            int i = 0;
-            while (true) {
-                int c = 4 * i + 1;
-                if (c >= n) {
-                    break;
-                }
-                int best = c;
-                long bv = heap[c];
-                int last = Math.min(c + 4, n);
-                for (int j = c + 1; j < last; j++) {
-                    long hv = heap[j];
-                    if (hv < bv) {
-                        bv = hv;
-                        best = j;
-                    }
-                }
-                if (x <= bv) {
-                    break;
-                }
-                heap[i] = bv;
-                i = best;
-            }
-            heap[i] = x;
-            return top;
-        }
-    }
 }
