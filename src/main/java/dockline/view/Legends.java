@@ -17,7 +17,7 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 
 /**
- * Keys for the map: surfaces (swatch with pattern and letter), symbols, the heat scale in Wh and
+ * Keys for the map: surfaces (swatch with pattern and the map's own legend characters), symbols, the heat scale in Wh and
  * % of capacity with the impossible swatch, and the policy glyphs. Swatches are drawn by the same
  * {@link MapPainter} code as the map, so the key always matches the picture.
  */
@@ -48,18 +48,29 @@ final class Legends {
         return h;
     }
 
+    /**
+     * The map's own legend characters for a key row, e.g. {@code  (map: D, F)}; nothing when there are none.
+     * The key never invents a letter: a letter of our own could be a character the map uses for
+     * something else (the demo maps use {@code C} for a dock).
+     */
+    static String own(String symbols) {
+        return symbols.isEmpty() ? "" : " (map: " + Palette.listed(symbols) + ")";
+    }
+
     /** Surface key and map symbols. */
     static VBox mapKey(BuildingMap map) {
         VBox box = new VBox(3);
         for (Palette.SurfaceStyle st : Palette.surfaces(map)) {
-            box.getChildren().add(row(swatch(g -> MapPainter.paintSurface(g, st, 0, 0, SW)), st.surface() + " (" + st.letter() + ")"));
+            box.getChildren().add(row(swatch(g -> MapPainter.paintSurface(g, st, 0, 0, SW)), st.surface() + own(st.symbols())));
         }
-        box.getChildren().add(row(swatch(g -> MapPainter.paintWall(g, 0, 0, SW)), "wall"));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintDock(g, 0, 0, SW)), "dock"));
+        box.getChildren().add(row(swatch(g -> MapPainter.paintWall(g, 0, 0, SW)),
+                "wall" + own(Palette.symbols(map, dockline.model.Terrain::wall))));
+        box.getChildren().add(row(swatch(g -> MapPainter.paintDock(g, 0, 0, SW)),
+                "dock" + own(Palette.symbols(map, dockline.model.Terrain::dock))));
         box.getChildren().add(row(swatch(g -> {
             g.setFill(Palette.DOOR);
             g.fillRect(0, SW * 0.41, SW, SW * 0.18);
-        }), "door"));
+        }), "door" + own(Palette.symbols(map, t -> t.door() && !t.dock()))));
         box.getChildren().add(row(swatch(g -> MapPainter.paintStart(g, 0, 0, SW)), "start"));
         box.getChildren().add(row(swatch(g -> MapPainter.paintRobot(g, 0, 0, SW)), "robot"));
         box.getChildren().add(row(swatch(g -> {

@@ -3,7 +3,9 @@ package dockline.view;
 import dockline.arena.Action;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
+import dockline.model.Mission;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Objects;
 
 /**
@@ -26,9 +28,18 @@ final class MapLayers {
     private final ViewReplay replay;
     private final int step;
     private final Cell hover;
+    private final Situation situation;
+
+    /**
+     * What the policy layer was read for, to say a cell's rule in words: the mission (for Wh), the
+     * rules, disturbances left, tasks done and closures.
+     */
+    private record Situation(Mission mission, PolicyRules rules, int budgetLeft, int progress, String closures) {
+    }
 
     private MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow,
-                      int heatHigh, Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover) {
+                      int heatHigh, Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover,
+                      Situation situation) {
         this.map = Objects.requireNonNull(map, "map");
         this.start = start;
         this.overlay = overlay;
@@ -41,11 +52,23 @@ final class MapLayers {
         this.replay = replay;
         this.step = step;
         this.hover = hover;
+        this.situation = situation;
     }
 
     /** The plan alone (a map opened without a mission). */
     static MapLayers plain(BuildingMap map) {
-        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, null, 0, null);
+        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, null, 0, null, null);
+    }
+
+    /**
+     * Layers put together directly (the view benchmark's generated maps, tests): the heat values
+     * (or {@code null}), the policy's move per cell (or {@code null}) and a replay at a step.
+     */
+    static MapLayers of(BuildingMap map, Cell start, Overlay overlay, int[] heat, int heatLow, int heatHigh,
+                        Action[] policy, ViewReplay replay, int step) {
+        int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
+        return new MapLayers(map, start, overlay, heat == null ? null : heat.clone(), 0, heatLow, Math.max(heatLow + 1, heatHigh),
+                policy == null ? null : policy.clone(), null, replay, s, null, null);
     }
 
     /**
@@ -73,14 +96,21 @@ final class MapLayers {
                     hi = Math.max(hi, heat[i]);
                 }
             }
-        } else if (overlay == Overlay.POLICY) {
+        }
+        Situation situation = null;
+        if (overlay == Overlay.POLICY) {
             policy = new Action[n];
             varies = new boolean[n];
+            PolicyRules rules = data.policyRules();
+            String closures = closuresOf(rules, replay, step, level, budgetLeft, progress, w);
+            situation = new Situation(data.mission(), rules, budgetLeft, progress, closures);
             for (int i = 0; i < n; i++) {
                 if (!map.isFree(Cell.ofIndex(i, w))) {
                     continue;
                 }
-                if (level >= 0) {
+                if (level >= 0 && !rules.isEmpty()) {
+                    policy[i] = rules.actionAt(i, level, budgetLeft, progress, closures);
+                } else if (level >= 0) {
                     policy[i] = data.policyAction(i, level, budgetLeft, progress).orElse(null);
                 } else {
                     java.util.List<Action> all = data.policyActions(i, budgetLeft, progress);
@@ -91,18 +121,56 @@ final class MapLayers {
         }
         int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
         return new MapLayers(map, data.mission().start(), overlay, heat, data.mission().capacityUnits(), lo, hi, policy,
-                varies, replay, s, null);
+                varies, replay, s, null, situation);
+    }
+
+    /**
+     * The closures the policy layer is read with: those of the replay's current step when the layer
+     * is read for that step's situation (the step is a row of the policy), else those at the start
+     * (nothing closed yet), else none.
+     */
+    private static String closuresOf(PolicyRules rules, ViewReplay replay, int step, int level, int budgetLeft,
+                                     int progress, int width) {
+        if (replay == null || rules.isEmpty()) {
+            return "";
+        }
+        ViewStep st = replay.steps().get(Math.max(0, Math.min(step, replay.length())));
+        if (st.levelUnits() == level && st.budgetLeft() == budgetLeft && st.progress() == progress) {
+            java.util.Optional<String> c = rules.closuresAt(st.cell().index(width), level, budgetLeft, progress);
+            if (c.isPresent()) {
+                return c.get();
+            }
+        }
+        ViewStep first = replay.steps().get(0);
+        return rules.closuresAt(first.cell().index(width), first.levelUnits(), first.budgetLeft(), first.progress())
+                .orElse("");
+    }
+
+    /**
+     * The policy's rule on a cell in words, for the situation the layer was read for, e.g.
+     * {@code at 23 Wh or more: go east; below 23 Wh: no move is guaranteed from here}; empty
+     * without a policy layer or a policy in threshold form.
+     */
+    java.util.Optional<String> policyWords(Cell c) {
+        if (situation == null || situation.rules().isEmpty() || c == null || !map.inside(c) || !map.isFree(c)) {
+            return java.util.Optional.empty();
+        }
+        List<PolicyRules.Threshold> ts = situation.rules().thresholds(c.index(map.width()), situation.budgetLeft(),
+                situation.progress(), situation.closures());
+        return java.util.Optional.of(PolicyRules.words(situation.mission(), c, ts));
     }
 
     MapLayers withHover(Cell c) {
         return Objects.equals(c, hover) ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, step, c);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, step, c,
+                        situation);
     }
 
     MapLayers withStep(int s) {
         int clamped = replay == null ? 0 : Math.max(0, Math.min(s, replay.length()));
         return clamped == step ? this
-                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, clamped, hover);
+                : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, clamped,
+                        hover, situation);
     }
 
     BuildingMap map() {
@@ -129,6 +197,16 @@ final class MapLayers {
     /** Top of the heat colour scale, in units: the largest finite value shown (above {@link #heatLow}). */
     int heatHigh() {
         return heatHigh;
+    }
+
+    /**
+     * Whether the static picture (surfaces, walls, heat map, symbols, zones, words) of the two is the
+     * same: the same map object, start, heat layer and heat scale. O(cells) at worst (the heat values).
+     */
+    boolean sameStaticAs(MapLayers o) {
+        return o != null && map == o.map && Objects.equals(start, o.start)
+                && (heat == o.heat || Arrays.equals(heat, o.heat))
+                && (heat == null || heatLow == o.heatLow && heatHigh == o.heatHigh);
     }
 
     /** Heat value of a cell (see {@link ViewData#chargeNeeded}); {@link ViewData#UNKNOWN} without a heat layer. */

@@ -16,15 +16,19 @@ import javafx.scene.paint.Color;
 import javafx.scene.shape.StrokeLineCap;
 import javafx.scene.text.Font;
 import javafx.scene.text.FontWeight;
-import javafx.scene.text.Text;
 import javafx.scene.text.TextAlignment;
 
 /**
- * Draws a {@link MapLayers} snapshot onto a canvas: surfaces (colour, pattern and letter), walls
- * (hatched), the overlay (heat map or policy glyphs), zones with their names, doors, docks, the
- * start cell, the replay path with its disturbance events, the robot, and the hovered cell.
+ * Draws a {@link MapLayers} snapshot in two parts. The static part ({@link #paintStatic}): surfaces
+ * (colour, pattern and the map's own legend character), walls (hatched), the heat map, the grid,
+ * doors, docks, the start cell, zone outlines and the placed words of {@link MapLabels}. The dynamic
+ * part ({@link #paintDynamic}): the replay path, closures, policy glyphs (above the path), the
+ * disturbance markers and their labels, the robot (dock and start stay visible under it) and the
+ * hovered cell. The window keeps the static part in images and redraws only the dynamic part on a
+ * replay step or a hover; {@code render} draws both onto one canvas ({@link #paint}).
  *
- * <p>Only the cells inside the visible rectangle are drawn: O(visible cells + replay length).
+ * <p>Only the cells inside the visible rectangle are drawn: O(visible cells) for the static part,
+ * O(visible cells + replay length) for the dynamic part.
  */
 final class MapPainter {
 
@@ -32,36 +36,87 @@ final class MapPainter {
     }
 
     /**
-     * Paints the layers with the map's top-left corner at ({@code ox}, {@code oy}) and cells of
+     * Paints both parts with the map's top-left corner at ({@code ox}, {@code oy}) and cells of
      * {@code s} pixels, clipped to a {@code width} × {@code height} canvas.
      */
     static void paint(GraphicsContext g, MapLayers layers, double ox, double oy, double s, double width, double height) {
-        BuildingMap map = layers.map();
-        int w = map.width();
-        int h = map.height();
-        g.save();
+        MapLabels labels = MapLabels.of(layers.map(), layers.start(), s);
         g.setFill(Palette.BACKGROUND);
         g.fillRect(0, 0, width, height);
-        int x0 = clamp((int) Math.floor(-ox / s), 0, w - 1);
-        int y0 = clamp((int) Math.floor(-oy / s), 0, h - 1);
-        int x1 = clamp((int) Math.ceil((width - ox) / s), 0, w - 1);
-        int y1 = clamp((int) Math.ceil((height - oy) / s), 0, h - 1);
+        paintStatic(g, layers, labels, ox, oy, s, width, height);
+        paintDynamic(g, layers, eventLabels(layers, labels), ox, oy, s, width, height);
+    }
 
+    /** The static words with the replay's disturbance labels placed as well (the same labels without a replay). */
+    static MapLabels eventLabels(MapLayers layers, MapLabels labels) {
+        return layers.replay() == null ? labels : labels.withEvents(eventMarkers(layers.replay()));
+    }
+
+    /** One marker per cell with events, its label listing the steps and kinds there, e.g. {@code 40, 41 drag}. */
+    static Map<Cell, String> eventMarkers(ViewReplay replay) {
+        Map<Cell, List<ViewStep>> byCell = new java.util.LinkedHashMap<>();
+        for (ViewStep st : replay.steps()) {
+            if (st.hasEvent()) {
+                byCell.computeIfAbsent(eventCell(st), c -> new java.util.ArrayList<>()).add(st);
+            }
+        }
+        Map<Cell, String> out = new java.util.LinkedHashMap<>();
+        byCell.forEach((c, here) -> out.put(c, eventLabel(here)));
+        return out;
+    }
+
+    /** Visible cell range {x0, y0, x1, y1} (inclusive) of a {@code width} × {@code height} area. */
+    private static int[] visible(BuildingMap map, double ox, double oy, double s, double width, double height) {
+        int w = map.width();
+        int h = map.height();
+        return new int[] {clamp((int) Math.floor(-ox / s), 0, w - 1), clamp((int) Math.floor(-oy / s), 0, h - 1),
+            clamp((int) Math.ceil((width - ox) / s), 0, w - 1), clamp((int) Math.ceil((height - oy) / s), 0, h - 1)};
+    }
+
+    /**
+     * The static part: everything that changes only with the map, the start, the heat values or the
+     * zoom. Leaves the area outside the map untouched (the caller clears it).
+     */
+    static void paintStatic(GraphicsContext g, MapLayers layers, MapLabels labels, double ox, double oy, double s,
+                            double width, double height) {
+        BuildingMap map = layers.map();
+        int w = map.width();
+        int[] v = visible(map, ox, oy, s, width, height);
+        int x0 = v[0];
+        int y0 = v[1];
+        int x1 = v[2];
+        int y1 = v[3];
+        g.save();
         Map<String, Palette.SurfaceStyle> styles = new HashMap<>();
         for (Palette.SurfaceStyle st : Palette.surfaces(map)) {
             styles.put(st.surface(), st);
         }
-        // 1. base: surfaces and walls
+        // 1. base: fills in runs of one row, then patterns and characters per cell
         for (int y = y0; y <= y1; y++) {
-            for (int x = x0; x <= x1; x++) {
-                Cell c = new Cell(x, y);
-                Terrain t = map.terrainAt(c);
-                double px = ox + x * s;
-                double py = oy + y * s;
-                if (t.wall()) {
-                    paintWall(g, px, py, s);
-                } else {
-                    paintSurface(g, styles.get(t.surface()), px, py, s);
+            int x = x0;
+            while (x <= x1) {
+                Terrain t = map.terrainAt(new Cell(x, y));
+                int e = x + 1;
+                while (e <= x1 && sameFill(t, map.terrainAt(new Cell(e, y)))) {
+                    e++;
+                }
+                g.setFill(t.wall() ? Palette.WALL : styles.get(t.surface()).fill());
+                g.fillRect(ox + x * s, oy + y * s, (e - x) * s, s);
+                x = e;
+            }
+        }
+        if (s >= 6) {
+            for (int y = y0; y <= y1; y++) {
+                String row = map.rows().get(y);
+                for (int x = x0; x <= x1; x++) {
+                    Terrain t = map.terrainAt(new Cell(x, y));
+                    double px = ox + x * s;
+                    double py = oy + y * s;
+                    if (t.wall()) {
+                        paintWallHatch(g, px, py, s);
+                    } else {
+                        paintSurfaceMarks(g, styles.get(t.surface()), row.charAt(x), px, py, s);
+                    }
                 }
             }
         }
@@ -69,11 +124,11 @@ final class MapPainter {
         if (layers.hasHeat()) {
             for (int y = y0; y <= y1; y++) {
                 for (int x = x0; x <= x1; x++) {
-                    int v = layers.heat(y * w + x);
-                    if (v == ViewData.UNKNOWN) {
+                    int hv = layers.heat(y * w + x);
+                    if (hv == ViewData.UNKNOWN) {
                         continue;
                     }
-                    paintHeatCell(g, v, layers.heatLow(), layers.heatHigh(), ox + x * s, oy + y * s, s);
+                    paintHeatCell(g, hv, layers.heatLow(), layers.heatHigh(), ox + x * s, oy + y * s, s);
                 }
             }
         }
@@ -104,19 +159,59 @@ final class MapPainter {
         if (layers.start() != null) {
             paintStart(g, ox + layers.start().x() * s, oy + layers.start().y() * s, s);
         }
-        // 5. zones: outlines, then names
+        // 5. zones: outlines, then the placed words
         List<Zone> zones = map.zones();
         for (int i = 0; i < zones.size(); i++) {
-            paintZoneOutline(g, map, zones.get(i), Palette.zone(i), ox, oy, s);
+            paintZoneOutline(g, zones.get(i), Palette.zone(i), ox, oy, s, x0, y0, x1, y1);
         }
-        paintZoneNames(g, map, ox, oy, s);
-        // 6. policy glyphs
-        if (layers.overlay() == Overlay.POLICY) {
-            for (int y = y0; y <= y1; y++) {
-                for (int x = x0; x <= x1; x++) {
+        for (MapLabels.Box b : labels.boxes()) {
+            if (b.kind() == MapLabels.Kind.ZONE) {
+                paintTag(g, b, ox, oy, Palette.zone(b.zone()).deriveColor(0, 1, 1, 0.9), Palette.textOn(Palette.zone(b.zone())));
+            } else if (b.kind() == MapLabels.Kind.DOOR) {
+                paintTag(g, b, ox, oy, Color.WHITE.deriveColor(0, 1, 1, 0.85), Palette.DOOR.darker());
+            }
+        }
+        g.restore();
+    }
+
+    private static boolean sameFill(Terrain a, Terrain b) {
+        return a.wall() ? b.wall() : !b.wall() && a.surface().equals(b.surface());
+    }
+
+    /** A word on a tag: the box filled, the text left-aligned inside. */
+    private static void paintTag(GraphicsContext g, MapLabels.Box b, double ox, double oy, Color fill, Color ink) {
+        g.setFill(fill);
+        g.fillRoundRect(ox + b.x(), oy + b.y(), b.w(), b.h(), 6, 6);
+        g.setFill(ink);
+        g.setFont(MapLabels.font(b.font()));
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setTextBaseline(VPos.CENTER);
+        g.fillText(b.text(), ox + b.x() + 3, oy + b.y() + b.h() / 2);
+    }
+
+    /**
+     * The dynamic part: what a replay step, the policy situation or the pointer changes. Draws over
+     * whatever is there (the window's dynamic canvas is transparent).
+     *
+     * @param labels the static words with the replay's disturbance labels ({@link #eventLabels})
+     */
+    static void paintDynamic(GraphicsContext g, MapLayers layers, MapLabels labels, double ox, double oy, double s,
+                             double width, double height) {
+        BuildingMap map = layers.map();
+        int w = map.width();
+        g.save();
+        // 1. replay path and closures
+        if (layers.replay() != null) {
+            paintPath(g, layers.replay(), layers.step(), ox, oy, s);
+        }
+        // 2. policy glyphs, above the path (white halo so they read on the line)
+        if (layers.overlay() == Overlay.POLICY && s >= 6) {
+            int[] v = visible(map, ox, oy, s, width, height);
+            for (int y = v[1]; y <= v[3]; y++) {
+                for (int x = v[0]; x <= v[2]; x++) {
                     Action a = layers.policy(y * w + x);
                     if (a != null) {
-                        paintAction(g, a, x, y, ox + x * s, oy + y * s, s);
+                        paintActionWithHalo(g, a, x, y, ox + x * s, oy + y * s, s);
                         if (layers.policyVaries(y * w + x)) {
                             paintVaries(g, ox + x * s, oy + y * s, s);
                         }
@@ -124,15 +219,21 @@ final class MapPainter {
                 }
             }
         }
-        // 7. replay path, events, robot
+        // 3. disturbance markers and their placed labels
         if (layers.replay() != null) {
-            paintReplay(g, layers.replay(), layers.step(), ox, oy, s);
+            paintEvents(g, layers.replay(), layers.step(), labels, ox, oy, s);
         }
+        // 4. the robot; a dock or the start under it stays visible
         Cell robot = layers.robotCell();
         if (robot != null) {
-            paintRobot(g, ox + robot.x() * s, oy + robot.y() * s, s);
+            boolean onDock = map.inside(robot) && map.terrainAt(robot).dock();
+            boolean onStart = robot.equals(layers.start());
+            paintRobot(g, ox + robot.x() * s, oy + robot.y() * s, s, onDock || onStart);
+            if (onStart) {
+                paintStart(g, ox + robot.x() * s, oy + robot.y() * s, s);
+            }
         }
-        // 8. hover
+        // 5. hover
         Cell hv = layers.hover();
         if (hv != null && map.inside(hv)) {
             g.setStroke(Palette.HOVER);
@@ -151,25 +252,48 @@ final class MapPainter {
         g.setFill(Palette.WALL);
         g.fillRect(x, y, s, s);
         if (s >= 6) {
-            g.save();
-            clip(g, x, y, s, s);
-            g.setStroke(Palette.WALL_HATCH);
-            g.setLineWidth(Math.max(1, s / 14));
-            double step = Math.max(4, s / 3);
-            for (double d = -s; d < s; d += step) {
-                g.strokeLine(x + d, y + s, x + d + s, y);
-            }
-            g.restore();
+            paintWallHatch(g, x, y, s);
         }
     }
 
-    /** A surface: fill, then its pattern, then (when large enough) its letter. */
+    /** The wall's hatch, inside the cell (lines cut to the square: no clip, which is slow). */
+    private static void paintWallHatch(GraphicsContext g, double x, double y, double s) {
+        g.setStroke(Palette.WALL_HATCH);
+        g.setLineWidth(Math.max(1, s / 14));
+        double step = Math.max(4, s / 3);
+        for (double d = -s + step; d < s; d += step) {
+            rising(g, x, y, s, d);
+        }
+    }
+
+    /** The part inside the cell of the line from (x+d, y+s) to (x+d+s, y). */
+    private static void rising(GraphicsContext g, double x, double y, double s, double d) {
+        double t0 = Math.max(0, -d);
+        double t1 = Math.min(s, s - d);
+        if (t1 > t0) {
+            g.strokeLine(x + d + t0, y + s - t0, x + d + t1, y + s - t1);
+        }
+    }
+
+    /** The part inside the cell of the line from (x+d, y) to (x+d+s, y+s). */
+    private static void falling(GraphicsContext g, double x, double y, double s, double d) {
+        double t0 = Math.max(0, -d);
+        double t1 = Math.min(s, s - d);
+        if (t1 > t0) {
+            g.strokeLine(x + d + t0, y + t0, x + d + t1, y + t1);
+        }
+    }
+
+    /** A surface swatch: fill, pattern and the surface's first own character (for the key). */
     static void paintSurface(GraphicsContext g, Palette.SurfaceStyle st, double x, double y, double s) {
         g.setFill(st.fill());
         g.fillRect(x, y, s, s);
+        paintSurfaceMarks(g, st, st.symbols().isEmpty() ? ' ' : st.symbols().charAt(0), x, y, s);
+    }
+
+    /** The pattern of a surface and, when the cell is large enough, the map's own character of the cell. */
+    static void paintSurfaceMarks(GraphicsContext g, Palette.SurfaceStyle st, char symbol, double x, double y, double s) {
         Color ink = st.fill().deriveColor(0, 1.0, 0.62, 1.0);
-        g.save();
-        clip(g, x, y, s, s);
         g.setStroke(ink);
         g.setFill(ink);
         g.setLineWidth(Math.max(0.8, s / 24));
@@ -186,13 +310,13 @@ final class MapPainter {
                 }
             }
             case DIAGONAL -> {
-                for (double d = -s; d < s; d += s / 3) {
-                    g.strokeLine(x + d, y + s, x + d + s, y);
+                for (double d = -s + s / 3; d < s; d += s / 3) {
+                    rising(g, x, y, s, d);
                 }
             }
             case BACK_DIAGONAL -> {
-                for (double d = -s; d < s; d += s / 3) {
-                    g.strokeLine(x + d, y, x + d + s, y + s);
+                for (double d = -s + s / 3; d < s; d += s / 3) {
+                    falling(g, x, y, s, d);
                 }
             }
             case HORIZONTAL -> {
@@ -206,9 +330,9 @@ final class MapPainter {
                 }
             }
             case CROSSHATCH -> {
-                for (double d = -s; d < s; d += s / 2.5) {
-                    g.strokeLine(x + d, y + s, x + d + s, y);
-                    g.strokeLine(x + d, y, x + d + s, y + s);
+                for (double d = -s + s / 2.5; d < s; d += s / 2.5) {
+                    rising(g, x, y, s, d);
+                    falling(g, x, y, s, d);
                 }
             }
             case GRID -> {
@@ -216,13 +340,12 @@ final class MapPainter {
                 g.strokeLine(x, y + 2 * q, x + s, y + 2 * q);
             }
         }
-        g.restore();
-        if (s >= 22) {
+        if (s >= 22 && symbol != ' ') {
             g.setFill(ink);
             g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, s * 0.26));
             g.setTextAlign(TextAlignment.LEFT);
             g.setTextBaseline(VPos.TOP);
-            g.fillText(String.valueOf(st.letter()), x + s * 0.06, y + s * 0.03);
+            g.fillText(String.valueOf(symbol), x + s * 0.06, y + s * 0.03);
         }
     }
 
@@ -282,12 +405,17 @@ final class MapPainter {
         g.fillPolygon(new double[] {px, px + s * 0.62, px}, new double[] {y + s * 0.12, y + s * 0.3, y + s * 0.48}, 3);
     }
 
-    private static void paintZoneOutline(GraphicsContext g, BuildingMap map, Zone z, Color colour, double ox, double oy, double s) {
+    /** A zone's dashed outline, only where it is inside the visible cell range. */
+    private static void paintZoneOutline(GraphicsContext g, Zone z, Color colour, double ox, double oy, double s,
+                                         int x0, int y0, int x1, int y1) {
         g.setStroke(colour);
         g.setLineWidth(Math.max(1.5, s / 10));
         g.setLineDashes(Math.max(3, s / 4), Math.max(2, s / 8));
         double in = Math.max(1, s / 14);
         for (Cell c : z.cells()) {
+            if (c.x() < x0 || c.x() > x1 || c.y() < y0 || c.y() > y1) {
+                continue;
+            }
             double x = ox + c.x() * s;
             double y = oy + c.y() * s;
             if (!z.contains(new Cell(c.x(), c.y() - 1))) {
@@ -306,50 +434,12 @@ final class MapPainter {
         g.setLineDashes();
     }
 
-    /**
-     * Zone names on tags, each at the first cell of its zone (row-major) whose tag does not
-     * overlap a tag already placed; the first cell when every place overlaps. O(zones × cells).
-     */
-    private static void paintZoneNames(GraphicsContext g, BuildingMap map, double ox, double oy, double s) {
-        double size = Math.max(9, Math.min(15, s * 0.42));
-        Font font = Font.font("DejaVu Sans", FontWeight.BOLD, size);
-        List<double[]> placed = new java.util.ArrayList<>();
-        List<Zone> zones = map.zones();
-        for (int i = 0; i < zones.size(); i++) {
-            Zone z = zones.get(i);
-            if (z.cells().isEmpty()) {
-                continue;
-            }
-            Text probe = new Text(z.name());
-            probe.setFont(font);
-            double tw = probe.getLayoutBounds().getWidth() + 8;
-            double th = probe.getLayoutBounds().getHeight() + 2;
-            double[] rect = null;
-            for (Cell c : z.cells()) {
-                double[] r = {ox + c.x() * s + 2, oy + c.y() * s + 2, tw, th};
-                if (placed.stream().noneMatch(p -> overlaps(p, r))) {
-                    rect = r;
-                    break;
-                }
-            }
-            if (rect == null) {
-                Cell c = z.cells().get(0);
-                rect = new double[] {ox + c.x() * s + 2, oy + c.y() * s + 2, tw, th};
-            }
-            placed.add(rect);
-            Color col = Palette.zone(i);
-            g.setFill(col.deriveColor(0, 1, 1, 0.9));
-            g.fillRoundRect(rect[0], rect[1], tw, th, 6, 6);
-            g.setFill(Palette.textOn(col));
-            g.setFont(font);
-            g.setTextAlign(TextAlignment.LEFT);
-            g.setTextBaseline(VPos.TOP);
-            g.fillText(z.name(), rect[0] + 4, rect[1] + 1);
-        }
-    }
-
-    private static boolean overlaps(double[] a, double[] b) {
-        return a[0] < b[0] + b[2] && b[0] < a[0] + a[2] && a[1] < b[1] + b[3] && b[1] < a[1] + a[3];
+    /** A policy glyph with a light halo, so that it reads on the path line and on any fill. */
+    static void paintActionWithHalo(GraphicsContext g, Action a, int cx, int cy, double x, double y, double s) {
+        double r = s * 0.3;
+        g.setFill(Color.WHITE.deriveColor(0, 1, 1, 0.55));
+        g.fillOval(x + s / 2 - r, y + s / 2 - r, 2 * r, 2 * r);
+        paintAction(g, a, cx, cy, x, y, s);
     }
 
     /** A policy glyph: an arrow for a move, two bars for wait, a battery for charge. */
@@ -410,8 +500,8 @@ final class MapPainter {
         g.stroke();
     }
 
-    /** The replay path (walked part solid, rest dashed), its disturbance events, numbered by step. */
-    private static void paintReplay(GraphicsContext g, ViewReplay replay, int step, double ox, double oy, double s) {
+    /** The replay path (walked part solid, rest dashed) and the cells closed by lasting events so far. */
+    private static void paintPath(GraphicsContext g, ViewReplay replay, int step, double ox, double oy, double s) {
         List<ViewStep> steps = replay.steps();
         g.setLineCap(StrokeLineCap.ROUND);
         for (int i = 1; i < steps.size(); i++) {
@@ -446,47 +536,38 @@ final class MapPainter {
                 g.strokeLine(x + s - 2, y + 2, x + 2, y + s - 2);
             }
         }
-        double size = Math.max(9, Math.min(13, s * 0.36));
-        Font font = Font.font("DejaVu Sans", FontWeight.BOLD, size);
-        // one marker per cell; its label lists the steps and kinds there, e.g. "40, 41 drag"
-        Map<Cell, List<ViewStep>> byCell = new java.util.LinkedHashMap<>();
-        for (ViewStep st : steps) {
+    }
+
+    /** The disturbance markers (filled once they happened) and their labels where {@link MapLabels} placed them. */
+    private static void paintEvents(GraphicsContext g, ViewReplay replay, int step, MapLabels labels, double ox,
+                                    double oy, double s) {
+        Map<Cell, Integer> firstStep = new HashMap<>();
+        for (ViewStep st : replay.steps()) {
             if (st.hasEvent()) {
-                byCell.computeIfAbsent(eventCell(st), c -> new java.util.ArrayList<>()).add(st);
+                firstStep.putIfAbsent(eventCell(st), st.step());
             }
         }
-        List<double[]> placed = new java.util.ArrayList<>();
-        for (Map.Entry<Cell, List<ViewStep>> en : byCell.entrySet()) {
+        double r = MapLabels.markerRadius(s);
+        for (Map.Entry<Cell, Integer> en : firstStep.entrySet()) {
             Cell where = en.getKey();
-            List<ViewStep> here = en.getValue();
             double cx = ox + (where.x() + 0.78) * s;
             double cy = oy + (where.y() + 0.22) * s;
-            double r = Math.max(5, s * 0.22);
-            boolean happened = here.get(0).step() <= step;
             double[] xs = {cx, cx + r, cx, cx - r};
             double[] ys = {cy - r, cy, cy + r, cy};
-            g.setFill(happened ? Palette.EVENT : Color.WHITE);
+            g.setFill(en.getValue() <= step ? Palette.EVENT : Color.WHITE);
             g.fillPolygon(xs, ys, 4);
             g.setStroke(Palette.EVENT);
             g.setLineWidth(1.5);
             g.strokePolygon(xs, ys, 4);
-            String label = eventLabel(here);
-            Text probe = new Text(label);
-            probe.setFont(font);
-            double tw = probe.getLayoutBounds().getWidth() + 4;
-            double th = size * 1.3;
-            double[] rect = {cx + r + 1, cy - th / 2, tw, th};
-            for (int tries = 0; tries < 6 && overlapsAny(placed, rect); tries++) {
-                rect[1] += th + 1; // below the one in the way
-            }
-            placed.add(rect);
+        }
+        for (MapLabels.Box b : labels.boxes(MapLabels.Kind.EVENT)) {
             g.setFill(Color.WHITE.deriveColor(0, 1, 1, 0.85));
-            g.fillRect(rect[0], rect[1], rect[2], rect[3]);
-            g.setFont(font);
+            g.fillRect(ox + b.x(), oy + b.y(), b.w(), b.h());
+            g.setFont(MapLabels.font(b.font()));
             g.setTextAlign(TextAlignment.LEFT);
             g.setTextBaseline(VPos.CENTER);
             g.setFill(Palette.EVENT.darker());
-            g.fillText(label, rect[0] + 2, rect[1] + th / 2);
+            g.fillText(b.text(), ox + b.x() + 3, oy + b.y() + b.h() / 2);
         }
     }
 
@@ -509,15 +590,6 @@ final class MapPainter {
         return sb.toString();
     }
 
-    private static boolean overlapsAny(List<double[]> placed, double[] r) {
-        for (double[] p : placed) {
-            if (overlaps(p, r)) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     /** Where an event is marked: the cell it concerns, else the cell the robot tried to enter. */
     static Cell eventCell(ViewStep st) {
         if (st.eventCell() != null) {
@@ -534,7 +606,16 @@ final class MapPainter {
     }
 
     static void paintRobot(GraphicsContext g, double x, double y, double s) {
-        double d = s * 0.56;
+        paintRobot(g, x, y, s, false);
+    }
+
+    /**
+     * The robot: an orange disc with a dark rim and hub. Over a dock or the start it is drawn
+     * smaller ({@link #ROBOT_SMALL} of the cell instead of {@link #ROBOT_FULL}), so that the dock's
+     * green ring ({@code 0.74} of the cell) and the start's pennant stay visible around it.
+     */
+    static void paintRobot(GraphicsContext g, double x, double y, double s, boolean small) {
+        double d = s * (small ? ROBOT_SMALL : ROBOT_FULL);
         double cx = x + s / 2;
         double cy = y + s / 2;
         disc(g, cx, cy, d, Palette.ROBOT);
@@ -544,16 +625,12 @@ final class MapPainter {
         disc(g, cx, cy, d * 0.22, Palette.ROBOT_EDGE);
     }
 
+    static final double ROBOT_FULL = 0.56;
+    static final double ROBOT_SMALL = 0.4;
+
     /** A filled disc of diameter {@code d} centred on (cx, cy). */
     private static void disc(GraphicsContext g, double cx, double cy, double d, Color fill) {
         g.setFill(fill);
         g.fillOval(cx - d / 2, cy - d / 2, d, d);
-    }
-
-    private static void clip(GraphicsContext g, double x, double y, double w, double h) {
-        g.beginPath();
-        g.rect(x, y, w, h);
-        g.closePath();
-        g.clip();
     }
 }

@@ -1082,6 +1082,10 @@ public final class MissionWindow {
             }
             sb.append("\n  (tasks: ").append(pc == null ? "?" : pc.label()).append("; disturbances left ").append(k).append(')');
         }
+        MapLayers shown = mapView.layers();
+        if (shown != null) {
+            shown.policyWords(c).ifPresent(w -> sb.append("\npolicy here: ").append(w));
+        }
         return sb.toString();
     }
 

@@ -8,9 +8,10 @@ import java.util.TreeSet;
 import javafx.scene.paint.Color;
 
 /**
- * dockline's own colours and fill patterns. Every surface gets a pattern and a letter as well as a
- * colour, and impossible cells of the heat map get a cross pattern, so nothing is told by colour
- * alone (for colour-blind users and grey-scale prints).
+ * dockline's own colours and fill patterns. Every surface gets a pattern as well as a colour, and
+ * its cells show the map's own legend character (never a letter of our own, which could clash with
+ * a character the map uses for something else); impossible cells of the heat map get a cross
+ * pattern, so nothing is told by colour alone (for colour-blind users and grey-scale prints).
  */
 final class Palette {
 
@@ -51,8 +52,13 @@ final class Palette {
     /** Fill patterns for surfaces, in the order surfaces are given them. */
     enum Pattern { PLAIN, DOTS, DIAGONAL, HORIZONTAL, CROSSHATCH, VERTICAL, BACK_DIAGONAL, GRID }
 
-    /** How one surface is drawn. */
-    record SurfaceStyle(String surface, Color fill, Pattern pattern, char letter) {
+    /**
+     * How one surface is drawn.
+     *
+     * @param symbols the map's own legend characters for plain cells of this surface (no dock, no
+     *                door), in sorted order; may be empty when the surface occurs only under docks or doors
+     */
+    record SurfaceStyle(String surface, Color fill, Pattern pattern, String symbols) {
     }
 
     private Palette() {
@@ -70,11 +76,31 @@ final class Palette {
         int i = 0;
         Pattern[] patterns = Pattern.values();
         for (String n : names) {
-            char letter = n.isEmpty() ? '?' : Character.toUpperCase(n.charAt(0));
-            out.add(new SurfaceStyle(n, SURFACE_FILLS[i % SURFACE_FILLS.length], patterns[i % patterns.length], letter));
+            out.add(new SurfaceStyle(n, SURFACE_FILLS[i % SURFACE_FILLS.length], patterns[i % patterns.length],
+                    symbols(map, t -> t.free() && !t.dock() && !t.door() && t.surface().equals(n))));
             i++;
         }
         return out;
+    }
+
+    /** The map's legend characters whose terrain passes the test, sorted, as one string. */
+    static String symbols(BuildingMap map, java.util.function.Predicate<Terrain> test) {
+        StringBuilder sb = new StringBuilder();
+        new TreeSet<>(map.legend().keySet()).forEach(ch -> {
+            if (test.test(map.legend().get(ch))) {
+                sb.append(ch.charValue());
+            }
+        });
+        return sb.toString();
+    }
+
+    /** Characters for a key row: {@code ", "} between them, e.g. {@code D, F}. */
+    static String listed(String symbols) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < symbols.length(); i++) {
+            sb.append(i == 0 ? "" : ", ").append(symbols.charAt(i));
+        }
+        return sb.toString();
     }
 
     static Color zone(int i) {

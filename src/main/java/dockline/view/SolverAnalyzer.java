@@ -142,6 +142,7 @@ public final class SolverAnalyzer implements Analyzer {
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
         private final Map<Long, List<Action>> byCell;
+        private final PolicyRules rules;
 
         SolvedData(Plan plan, VerdictSummary verdict, List<ViewReplay> replays) {
             this.replaysSource = plan.replays().orElseThrow();
@@ -151,6 +152,7 @@ public final class SolverAnalyzer implements Analyzer {
             this.replays = List.copyOf(replays);
             this.policy = replaysSource.policy();
             this.byCell = indexByCell(policy, plan.mission().map().width());
+            this.rules = policy.map(p -> PolicyRules.of(p.entries(), plan.mission().map().width())).orElse(PolicyRules.NONE);
         }
 
         private static long key(int cellIndex, int budgetLeft, int progress) {
@@ -221,6 +223,11 @@ public final class SolverAnalyzer implements Analyzer {
         @Override
         public List<Action> policyActions(int cellIndex, int budgetLeft, int progressMask) {
             return byCell.getOrDefault(key(cellIndex, budgetLeft, progressMask), List.of());
+        }
+
+        @Override
+        public PolicyRules policyRules() {
+            return rules;
         }
 
         @Override

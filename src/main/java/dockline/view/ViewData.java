@@ -47,6 +47,14 @@ public interface ViewData {
         return List.of();
     }
 
+    /**
+     * The policy in threshold form (per situation, the levels where its move changes), for the
+     * policy layer and its words; {@link PolicyRules#NONE} when there is no policy.
+     */
+    default PolicyRules policyRules() {
+        return PolicyRules.NONE;
+    }
+
     /** The runs to play: the worst case (if guaranteed), the counterexample (if not). */
     List<ViewReplay> replays();
 
