@@ -50,10 +50,17 @@ public final class BenchCommand extends CommandBase {
             + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
     boolean resolutionRow;
 
+    @Option(names = "--view", description = "run only the view section: the map view, headless, on the bundled maps"
+            + " (folder maps/) and a generated floor (side from --sizes, default 512): a full repaint and a replay step per map")
+    boolean view;
+
     @Override
     public Integer call() {
         PrintWriter out = out();
         PrintWriter err = err();
+        if (view) {
+            return ViewBenchRun.run(sizes, seed, json, out, err);
+        }
         if (resolutionRow) {
             int side = sizes != null && !sizes.isEmpty() ? sizes.get(0) : 256;
             if (side < BuildingGenerator.MIN_SIDE || side > BuildingGenerator.MAX_SIDE) {
