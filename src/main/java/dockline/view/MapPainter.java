@@ -340,9 +340,9 @@ final class MapPainter {
                 g.strokeLine(x, y + 2 * q, x + s, y + 2 * q);
             }
         }
-        if (s >= 22 && symbol != ' ') {
+        if (s * 0.3 >= MapLabels.MIN_FONT && symbol != ' ') {
             g.setFill(ink);
-            g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, s * 0.26));
+            g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, s * 0.3));
             g.setTextAlign(TextAlignment.LEFT);
             g.setTextBaseline(VPos.TOP);
             g.fillText(String.valueOf(symbol), x + s * 0.06, y + s * 0.03);
