@@ -132,7 +132,9 @@ final class Legends {
             MapPainter.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW);
             MapPainter.paintVaries(g, 0, 0, SW);
         }), "the move depends on the battery level (the most frequent is drawn)"));
-        Label none = new Label("no glyph: the policy never gets there in that situation");
+        Label none = new Label("no glyph: the policy never gets there in that situation (or only with more"
+                + " charge than shown). At a level between two of the policy's rows the move of the row below is drawn:"
+                + " more charge never hurts. Point at a cell for its levels in words.");
         none.getStyleClass().add("legend-label");
         none.setWrapText(true);
         box.getChildren().add(none);
