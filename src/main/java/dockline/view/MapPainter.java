@@ -204,14 +204,22 @@ final class MapPainter {
         if (layers.replay() != null) {
             paintPath(g, layers.replay(), layers.step(), ox, oy, s);
         }
-        // 2. policy glyphs, above the path (white halo so they read on the line)
+        // 2. policy glyphs, above the path (with a white halo on the path's cells, so they read on the line)
         if (layers.overlay() == Overlay.POLICY && s >= 6) {
             int[] v = visible(map, ox, oy, s, width, height);
+            java.util.Set<Cell> onPath = new java.util.HashSet<>();
+            if (layers.replay() != null) {
+                layers.replay().steps().forEach(st -> onPath.add(st.cell()));
+            }
             for (int y = v[1]; y <= v[3]; y++) {
                 for (int x = v[0]; x <= v[2]; x++) {
                     Action a = layers.policy(y * w + x);
                     if (a != null) {
-                        paintActionWithHalo(g, a, x, y, ox + x * s, oy + y * s, s);
+                        if (onPath.contains(new Cell(x, y))) {
+                            paintActionWithHalo(g, a, x, y, ox + x * s, oy + y * s, s);
+                        } else {
+                            paintAction(g, a, x, y, ox + x * s, oy + y * s, s);
+                        }
                         if (layers.policyVaries(y * w + x)) {
                             paintVaries(g, ox + x * s, oy + y * s, s);
                         }

@@ -33,7 +33,7 @@ import javafx.scene.layout.Region;
  * and draws only tiles not drawn before at that zoom; the last {@value #PICTURES_KEPT} pictures (per
  * zoom level and layer: the heat values, or none) are kept, so zooming back or switching the layer
  * back costs nothing. Another map drops them all. The dynamic layer (path, robot, events, policy glyphs, hover:
- * {@link MapPainter#paintDynamic}) is one transparent canvas over the view, redrawn on every change
+ * {@link MapPainter#paintDynamic}) is one transparent canvas over the visible part of the map, redrawn on every change
  * in O(visible cells + replay length). {@link #staticRepaints()} counts the tiles drawn, for tests.
  */
 final class MapView extends Region {
@@ -259,10 +259,6 @@ final class MapView extends Region {
     protected void layoutChildren() {
         double w = getWidth();
         double h = getHeight();
-        if (canvas.getWidth() != w || canvas.getHeight() != h) {
-            canvas.setWidth(w);
-            canvas.setHeight(h);
-        }
         if (w != lastW || h != lastH) {
             lastW = w;
             lastH = h;
@@ -292,14 +288,14 @@ final class MapView extends Region {
 
     void redraw() {
         MapLayers l = layers.get();
-        double w = canvas.getWidth();
-        double h = canvas.getHeight();
+        double w = getWidth();
+        double h = getHeight();
         if (w <= 0 || h <= 0) {
             return;
         }
         GraphicsContext g = canvas.getGraphicsContext2D();
-        g.clearRect(0, 0, w, h);
         if (l == null) {
+            g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
             tileLayer.setVisible(false);
             return;
         }
@@ -312,7 +308,19 @@ final class MapView extends Region {
             level.withEvents = MapPainter.eventLabels(l, level.labels);
             level.eventsOf = l.replay();
         }
-        MapPainter.paintDynamic(g, l, level.withEvents, ox, oy, cellPx, w, h);
+        // the dynamic canvas covers only the visible part of the map: less to clear and to composite
+        double x0 = Math.max(0, ox);
+        double y0 = Math.max(0, oy);
+        double cw = Math.max(1, Math.ceil(Math.min(w, ox + l.map().width() * cellPx) - x0));
+        double ch = Math.max(1, Math.ceil(Math.min(h, oy + l.map().height() * cellPx) - y0));
+        if (canvas.getWidth() != cw || canvas.getHeight() != ch) {
+            canvas.setWidth(cw);
+            canvas.setHeight(ch);
+        }
+        canvas.setLayoutX(x0);
+        canvas.setLayoutY(y0);
+        g.clearRect(0, 0, cw, ch);
+        MapPainter.paintDynamic(g, l, level.withEvents, ox - x0, oy - y0, cellPx, cw, ch);
         dynamicRepaints++;
     }
 

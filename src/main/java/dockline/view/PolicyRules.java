@@ -31,7 +31,7 @@ import java.util.Optional;
 public final class PolicyRules {
 
     /** No policy at all. */
-    static final PolicyRules NONE = new PolicyRules(Map.of(), Map.of(), List.of());
+    static final PolicyRules NONE = new PolicyRules(Map.of(), Map.of(), List.of(), Map.of());
 
     /**
      * From {@code fromLevel} units up (to the next threshold) the policy takes {@code action}.
@@ -52,11 +52,14 @@ public final class PolicyRules {
     private final Map<Situation, Rows> rows;
     private final Map<Exact, Integer> closuresOfRow;
     private final List<String> closures;
+    private final Map<String, Integer> closureIds;
 
-    private PolicyRules(Map<Situation, Rows> rows, Map<Exact, Integer> closuresOfRow, List<String> closures) {
+    private PolicyRules(Map<Situation, Rows> rows, Map<Exact, Integer> closuresOfRow, List<String> closures,
+                        Map<String, Integer> closureIds) {
         this.rows = rows;
         this.closuresOfRow = closuresOfRow;
         this.closures = closures;
+        this.closureIds = closureIds;
     }
 
     /** The rules of a policy's rows on a map of the given width. */
@@ -92,7 +95,7 @@ public final class PolicyRules {
             }
             rows.put(en.getKey(), new Rows(lv, ac));
         }
-        return new PolicyRules(rows, closuresOfRow, List.copyOf(names));
+        return new PolicyRules(rows, closuresOfRow, List.copyOf(names), Map.copyOf(ids));
     }
 
     boolean isEmpty() {
@@ -137,8 +140,8 @@ public final class PolicyRules {
     }
 
     private Rows rowsOf(int cell, int budget, int progress, String closure) {
-        int id = closures.indexOf(closure == null ? "" : closure);
-        return id < 0 ? null : rows.get(new Situation(cell, budget, progress, id));
+        Integer id = closureIds.get(closure == null ? "" : closure);
+        return id == null ? null : rows.get(new Situation(cell, budget, progress, id));
     }
 
     /**
