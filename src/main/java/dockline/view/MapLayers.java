@@ -73,9 +73,11 @@ final class MapLayers {
 
     /**
      * Everything for one mission's data. The heat map is read at {@code budgetLeft} and
-     * {@code progress}; the policy at {@code level}, {@code budgetLeft} and {@code progress}, or,
-     * when {@code level} is negative, at every level the policy has for the cell (the most
-     * frequent action is drawn, marked when it depends on the level).
+     * {@code progress}; the policy at {@code level}, {@code budgetLeft} and {@code progress} in
+     * threshold form ({@link PolicyRules}: the move of the policy's row at the highest level not
+     * above {@code level}, with the closures of the replay's current step when the layer follows
+     * that step, else those at the start), or, when {@code level} is negative, at every level the
+     * policy has for the cell (the most frequent action is drawn, marked when it depends on the level).
      * Cost: one view-model query per free cell.
      */
     static MapLayers of(ViewData data, Overlay overlay, int budgetLeft, int progress, int level,
