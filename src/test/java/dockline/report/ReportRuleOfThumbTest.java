@@ -36,7 +36,7 @@ class ReportRuleOfThumbTest {
         }
     };
 
-    private Path lane(String name, int extraWh) throws Exception {
+    static Path lane(Path dir, String name, int extraWh) throws Exception {
         Path map = dir.resolve(name + ".yaml");
         Files.writeString(map, """
                 # a hand-made test lane (invented data)
@@ -62,7 +62,7 @@ class ReportRuleOfThumbTest {
         return map;
     }
 
-    private Path mission(Path map, String name, int startPercent, int reservePercent) throws Exception {
+    static Path mission(Path dir, Path map, String name, int startPercent, int reservePercent) throws Exception {
         Path m = dir.resolve(name + ".yaml");
         Files.writeString(m, """
                 name: %s
@@ -90,7 +90,7 @@ class ReportRuleOfThumbTest {
     /** Heavy drags (25 Wh each): 60 Wh start, 5 Wh floor; the rule at 20 % and 30 % calls it safe, it is not. */
     @Test
     void heavyDrags_theRuleCallsAnUnsafeMissionSafe_atBothMargins() throws Exception {
-        Path m = mission(lane("heavy", 25), "heavy-run", 60, 5);
+        Path m = mission(dir, lane(dir, "heavy", 25), "heavy-run", 60, 5);
         MissionResult r = MissionChecker.check(m, 0, NO_PICTURES);
         assertThat(r.errors()).isEmpty();
         MissionResult.Figures f = r.figures();
@@ -111,7 +111,7 @@ class ReportRuleOfThumbTest {
      */
     @Test
     void lightDrags_theRuleAtThirtyPercentTurnsDownAGuaranteedMission() throws Exception {
-        Path m = mission(lane("light", 1), "light-run", 40, 10);
+        Path m = mission(dir, lane(dir, "light", 1), "light-run", 40, 10);
         MissionResult r = MissionChecker.check(m, 0, NO_PICTURES);
         MissionResult.Figures f = r.figures();
         assertThat(f.guaranteed()).isTrue();
