@@ -79,10 +79,4 @@ class ReportCommandTest {
         assertThat(missing.code()).as("a missing mission is a bad input, listed in the report").isEqualTo(2);
         assertThat(Jsoup.parse(Files.readString(html)).select("section.mission ul.errors li")).isNotEmpty();
     }
-
-    @Test
-    void stderrIsNotATerminal_underTheTestRunner() {
-        // surefire redirects the forked JVM's standard error to a pipe or file
-        assertThat(dockline.cli.ReportCommandAccess.stderrIsTerminal()).isFalse();
-    }
 }
