@@ -64,6 +64,15 @@ public final class CheckCommand extends MissionCommand {
 
     @Override
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+        for (Path p : more) {
+            String w = p.toString();
+            if ((w.equalsIgnoreCase("wh") || w.equals("%")) && !java.nio.file.Files.exists(p)) {
+                // `--start-charge 10 Wh` unquoted: the shell splits the amount, and the unit is no mission file
+                err.println("dockline: Unmatched argument '" + w + "': it is not a mission file");
+                err.println("An amount with a unit is one argument: write 12Wh, or '12 Wh' in quotes.");
+                return ExitCodes.BAD_INPUT;
+            }
+        }
         if (more.isEmpty()) {
             return runOne(out, err);
         }
