@@ -77,6 +77,24 @@ public final class MissionChecker {
         if (m.map().source() != null) {
             inputs.add(new MissionResult.Input(m.map().source().toString(), sha256(m.map().source())));
         }
+        return checkLoaded(file, m, inputs, memoryBudgetBytes, pictures);
+    }
+
+    /**
+     * Checks a mission built in code (no file is read; its inputs are listed without digests).
+     *
+     * @param m                 the mission
+     * @param memoryBudgetBytes the memory budget of each game (0: the default)
+     * @param pictures          draws the map pictures
+     */
+    public static MissionResult check(Mission m, long memoryBudgetBytes, Pictures pictures) {
+        Path file = m.source() != null ? m.source() : Path.of(m.name());
+        return checkLoaded(file, m, List.of(new MissionResult.Input(file.toString(), null)), memoryBudgetBytes,
+                pictures);
+    }
+
+    private static MissionResult checkLoaded(Path file, Mission m, List<MissionResult.Input> inputs,
+                                             long memoryBudgetBytes, Pictures pictures) {
         String kind = !m.beyondOneTrip() ? "one-trip" : m.tasks().patrols() ? "patrol" : "deadline";
         String words = Disturbances.words(m);
         try {
