@@ -37,6 +37,21 @@ class ArchitectureTest {
             .because("the core is used by every front end and knows none of them");
 
     @ArchTest
+    static final ArchRule report_knowsNoFrontEnd = noClasses().that().resideInAPackage("dockline.report..")
+            .should().dependOnClassesThat().resideInAnyPackage("dockline.cli..", "dockline.view..", "dockline.bench..",
+                    "javafx..", "picocli..")
+            .because("the report is built from the core's plans; a front end hands in the picture code"
+                    + " (report.Pictures) and prints or writes the result");
+
+    @ArchTest
+    static final ArchRule report_plansOnlyThroughTheCore = noClasses().that().resideInAPackage("dockline.report..")
+            .should().dependOnClassesThat().resideInAnyPackage("dockline.solve.reserve..", "dockline.solve.fast..",
+                    "dockline.solve.discounted..", "dockline.solve.game..", "dockline.solve.charging..",
+                    "dockline.arena..", "dockline.goal..", "dockline.monitor..")
+            .because("every mission of a report goes through plan.MissionPlanner (or plan.RoundsPlan), never a"
+                    + " solver of its own");
+
+    @ArchTest
     static final ArchRule policy_isDataBelowSolverAndChecker = classes().that().resideInAPackage("dockline.policy..")
             .should().onlyDependOnClassesThat().resideInAnyPackage("dockline.policy..", "dockline.model..",
                     "dockline.arena..", "dockline.goal..", "dockline.monitor..", "dockline.util..", "java..")

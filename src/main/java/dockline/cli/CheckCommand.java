@@ -7,11 +7,20 @@ import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
 import dockline.plan.Route;
 import dockline.plan.RouteNotApplicableException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code dockline check MISSION}: parses the options into a {@link Route}, asks the core
@@ -20,16 +29,26 @@ import picocli.CommandLine.Option;
  * the certificate, the suggestions, the size of the game and the time taken. A plan whose policy
  * failed its independent certificate is an internal error (exit 4), never a silent "guaranteed".
  * Exit code 0 guaranteed, 1 not guaranteed, 2 bad input, 3 over the memory limit, 4 internal error.
+ *
+ * <p>Several missions are checked one after the other with the same options, one result each in the
+ * order given (with {@code --json} a JSON array of the single results, a mission that could not be
+ * checked as its errors object); the exit code is the worst of them. One mission prints exactly what it
+ * did before (one JSON object), so scripts and the schema's object form hold.
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Decides whether the robot can always finish the mission and dock without its battery going"
+        description = {"Decides, for each mission given, whether the robot can always finish the mission and dock without its battery going"
                 + " below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
         exitCodeListHeading = "%nExit codes:%n",
-        exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only)", "1:not guaranteed",
+        exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only); with several missions: all are",
+                "1:not guaranteed (several: at least one, and none of the worse codes)",
                 "2:bad input or usage", "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate)"})
 public final class CheckCommand extends MissionCommand {
+
+    @Parameters(index = "1..*", paramLabel = "MORE", description = "more mission files, checked in order with the"
+            + " same options (one result each; with --json an array)")
+    List<Path> more = new ArrayList<>();
 
     @Mixin
     PolicyOption policy;
@@ -45,6 +64,74 @@ public final class CheckCommand extends MissionCommand {
 
     @Override
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+        for (Path p : more) {
+            String w = p.toString();
+            if ((w.equalsIgnoreCase("wh") || w.equals("%")) && !java.nio.file.Files.exists(p)) {
+                // `--start-charge 10 Wh` unquoted: the shell splits the amount, and the unit is no mission file
+                err.println("dockline: Unmatched argument '" + w + "': it is not a mission file");
+                err.println("An amount with a unit is one argument: write 12Wh, or '12 Wh' in quotes.");
+                return ExitCodes.BAD_INPUT;
+            }
+        }
+        if (more.isEmpty()) {
+            return runOne(out, err);
+        }
+        List<Path> files = new ArrayList<>();
+        files.add(mission.missionFile);
+        files.addAll(more);
+        ObjectMapper mapper = new ObjectMapper();
+        ArrayNode array = mapper.createArrayNode();
+        int worst = ExitCodes.OK;
+        for (int i = 0; i < files.size(); i++) {
+            mission.missionFile = files.get(i);
+            StringWriter captured = new StringWriter();
+            PrintWriter o = json ? new PrintWriter(captured, true) : out;
+            Failures.Tee tee = new Failures.Tee(err);
+            PrintWriter e = new PrintWriter(tee, true);
+            if (!json) {
+                out.println((i == 0 ? "" : System.lineSeparator()) + "== " + files.get(i) + " (" + (i + 1) + " of "
+                        + files.size() + ")");
+                out.flush();
+            }
+            int code;
+            try {
+                code = runOne(o, e);
+            } catch (MissionOptions.BadInput bad) {
+                code = ExitCodes.BAD_INPUT;
+            }
+            o.flush();
+            e.flush();
+            worst = Math.max(worst, code);
+            if (json) {
+                array.add(result(mapper, captured.toString(), tee.copy.toString(), code, files.get(i)));
+            }
+        }
+        if (json) {
+            out.println(Json.pretty(array));
+        }
+        return worst;
+    }
+
+    /** One mission's JSON result, or its errors object ({@link Failures#jsonErrors}) when it printed none. */
+    private static JsonNode result(ObjectMapper mapper, String printed, String errors, int code, Path file) {
+        if (!printed.isBlank()) {
+            try {
+                return mapper.readTree(printed);
+            } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+                throw new IllegalStateException("internal: check printed no JSON: " + e.getMessage(), e);
+            }
+        }
+        ObjectNode o = Failures.jsonErrors(errors, code);
+        ObjectNode withFile = Json.object();
+        withFile.put("file", file.toString());
+        withFile.setAll(o);
+        var caveats = withFile.putArray("caveats");
+        dockline.report.Caveats.LINES.forEach(caveats::add);
+        return withFile;
+    }
+
+    /** Checks the mission of {@link MissionOptions#missionFile}; prints its result; returns its exit code. */
+    private int runOne(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         try {
             Mission m = mission.load(err);
             Objective objective = discounted.objective(m.objective(), err);

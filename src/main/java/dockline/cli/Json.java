@@ -83,6 +83,15 @@ final class Json {
         }
     }
 
+    /** Any JSON value as indented text (no final line break). */
+    static String pretty(com.fasterxml.jackson.databind.JsonNode n) {
+        try {
+            return MAPPER.writeValueAsString(n);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot write JSON", e);
+        }
+    }
+
     /** The reading benchmark as JSON: one object per layout and the slowest ratio. */
     static String readingJson(dockline.bench.ReadingBench.Result r) {
         ObjectNode o = object();

@@ -151,6 +151,7 @@ public final class Main implements Runnable {
             new RenderCommand(),
             new BenchCommand(),
             new ImportCommand(),
+            new ReportCommand(),
         };
     }
 

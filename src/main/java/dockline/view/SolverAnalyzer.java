@@ -43,6 +43,17 @@ public final class SolverAnalyzer implements Analyzer {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
         stopIf(cancelled);
+        ViewData data = of(plan);
+        stopIf(cancelled);
+        return data;
+    }
+
+    /**
+     * The view's data of a plan of the product route with replays and heat map (as {@link #analyze} makes):
+     * the worst case or counterexample, and the nominal run when there is a policy. Used by the report's pictures.
+     */
+    static ViewData of(Plan plan) {
+        Mission mission = plan.mission();
         PlanReplays mr = plan.replays().orElseThrow();
         List<ViewReplay> replays = new ArrayList<>();
         List<String> problems = new ArrayList<>();
@@ -61,7 +72,6 @@ public final class SolverAnalyzer implements Analyzer {
                 problems.add(e.getMessage());
             }
         }
-        stopIf(cancelled);
         return new SolvedData(plan, verdictOf(plan, problems), replays);
     }
 

@@ -45,6 +45,41 @@ class CheckCommandTest {
                 .contains(Caveats.block());
     }
 
+    /**
+     * Several missions: one result each in the order given, headed by the file; the exit code is the worst of
+     * them (0 all guaranteed; 1 one not guaranteed; 2 one bad file, which is still listed with its errors).
+     */
+    @Test
+    void severalMissions_oneResultEach_exitCodeTheWorst() throws Exception {
+        Run ok = run("check", "missions/night-round.yaml", "missions/supply-run.yaml");
+        assertThat(ok.code()).as(ok.err()).isEqualTo(ExitCodes.OK);
+        int first = ok.out().indexOf("== missions/night-round.yaml (1 of 2)");
+        int second = ok.out().indexOf("== missions/supply-run.yaml (2 of 2)");
+        assertThat(first).isZero();
+        assertThat(second).isGreaterThan(first);
+        assertThat(ok.out().substring(first, second)).contains("GUARANTEED: Night round").contains(Caveats.block());
+        assertThat(ok.out().substring(second)).contains("GUARANTEED: Supply run").contains(Caveats.block());
+
+        Run mixed = run("check", "missions/night-round.yaml", "missions/late-return.yaml");
+        assertThat(mixed.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(mixed.out()).contains("GUARANTEED: Night round").contains("NOT GUARANTEED: ");
+
+        Path bad = dir.resolve("bad.yaml");
+        java.nio.file.Files.writeString(bad, "name: x\nmap: nowhere.yaml\n");
+        Run withBad = run("check", "missions/late-return.yaml", bad.toString(), "missions/night-round.yaml");
+        assertThat(withBad.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(withBad.out()).contains("== " + bad + " (2 of 3)").contains("GUARANTEED: Night round");
+        assertThat(withBad.err()).containsPattern(java.util.regex.Pattern.quote(bad.toString()) + ":\\d+:\\d+: ");
+
+        Run json = run("check", "missions/night-round.yaml", "missions/late-return.yaml", "--json");
+        JsonNode a = new ObjectMapper().readTree(json.out());
+        assertThat(a.isArray()).isTrue();
+        assertThat(a).extracting(n -> n.get("verdict").asText()).containsExactly("guaranteed", "not-guaranteed");
+        // one mission prints what it always did: one object and no heading
+        Run one = run("check", "missions/night-round.yaml");
+        assertThat(one.out()).startsWith("GUARANTEED: ").doesNotContain("== ");
+    }
+
     @Test
     void json_hasTheDocumentedKeys() throws Exception {
         Run r = run("check", "missions/night-round.yaml", "--json");

@@ -38,7 +38,11 @@ class JsonOutputSchemaTest {
         try (InputStream in = JsonOutputSchemaTest.class.getResourceAsStream("/dockline/schemas/" + name
                 + ".schema.json")) {
             assertThat(in).as("schema %s in the jar's resources", name).isNotNull();
-            return JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V202012).getSchema(in);
+            // a schema's $ref to another one (check's array form names check-rounds) is read from the jar,
+            // never fetched
+            return JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V202012, b -> b.schemaMappers(
+                    m -> m.mapPrefix("https://dockline.invalid/schemas/", "classpath:dockline/schemas/")))
+                    .getSchema(in);
         }
     }
 
@@ -76,6 +80,48 @@ class JsonOutputSchemaTest {
         command("check", ExitCodes.OK, "check", "missions/discounted-trap.yaml", "--json", "--score-only");
         command("check", ExitCodes.NOT_GUARANTEED, "check", "missions/discounted-trap.yaml", "--json",
                 "--threshold", "6");
+    }
+
+    /**
+     * Several missions: an array of one result each, in order (a plan, a patrol's result, the errors of a bad
+     * file), valid against check's schema; the exit code is the worst (2 for the bad file).
+     */
+    @Test
+    void check_severalMissions_isAnArrayOfTheSingleResults() throws Exception {
+        Path bad = dir.resolve("bad.yaml");
+        Files.writeString(bad, "name: x\nmap: nowhere.yaml\n");
+        JsonNode a = command("check", ExitCodes.BAD_INPUT, "check", "missions/late-return.yaml",
+                "missions/night-patrol.yaml", bad.toString(), "missions/night-round.yaml", "--json");
+        assertThat(a.isArray()).isTrue();
+        assertThat(a).hasSize(4);
+        valid("check", a.get(0).toString());
+        valid("check-rounds", a.get(1).toString());
+        assertThat(a.get(2).get("file").asText()).isEqualTo(bad.toString());
+        assertThat(a.get(2).get("exitCode").asInt()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(a.get(2).get("errors").get(0).get("line").asInt()).isPositive();
+        assertThat(a.get(3).get("verdict").asText()).isEqualTo("guaranteed");
+        // the array form can fail: one item missing its caveats is refused
+        com.fasterxml.jackson.databind.node.ArrayNode broken = (com.fasterxml.jackson.databind.node.ArrayNode) a.deepCopy();
+        ((ObjectNode) broken.get(3)).remove("caveats");
+        assertThat(schema("check").validate(broken)).isNotEmpty();
+        // one mission is still one object, not an array
+        assertThat(command("check", ExitCodes.OK, "check", "missions/night-round.yaml", "--json").isObject()).isTrue();
+    }
+
+    /** {@code report --json FILE}: the demo folder and a bad file, validated against report.schema.json. */
+    @Test
+    void report_jsonFile() throws Exception {
+        dockline.report.DemoReport.Made r = dockline.report.DemoReport.get();
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.BAD_INPUT);
+        JsonNode j = valid("report", Files.readString(r.json()));
+        assertThat(j.get("missions")).hasSize(dockline.report.DemoReport.DEMOS.length + 1);
+        ObjectNode broken = (ObjectNode) j.deepCopy();
+        ((ObjectNode) broken.get("missions").get(0)).remove("verdict");
+        assertThat(schema("report").validate(broken)).as("a checked mission without its verdict").isNotEmpty();
+        ObjectNode renamed = (ObjectNode) j.deepCopy();
+        ObjectNode first = (ObjectNode) renamed.get("missions").get(0);
+        first.set("worstCaseUnits", first.remove("lowestLevelUnits"));
+        assertThat(schema("report").validate(renamed)).isNotEmpty();
     }
 
     /** Patrol and deadline missions have their own shape of check output, in the same vocabulary. */
