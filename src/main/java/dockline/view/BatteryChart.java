@@ -62,7 +62,7 @@ final class BatteryChart {
         xAxis.setLabel("step");
         xAxis.setAnimated(false);
         xAxis.setForceZeroInRange(true);
-        yAxis.setLabel("battery (Wh)");
+        yAxis.setLabel("Wh");
         yAxis.setAnimated(false);
         battery.setName(BATTERY);
         floor.setName(FLOOR);
