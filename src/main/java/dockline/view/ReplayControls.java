@@ -27,7 +27,7 @@ import javafx.scene.layout.VBox;
  */
 final class ReplayControls {
 
-    static final double BUTTON_WIDTH = 92;
+    static final double BUTTON_WIDTH = 104;
 
     private final ReplayPlayer player;
     private final BatteryChart chart;
