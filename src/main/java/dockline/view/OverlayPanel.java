@@ -132,10 +132,20 @@ final class OverlayPanel {
         }
     }
 
-    /** Sets the choices for a newly shown mission's data, keeping what still applies; fires nothing. */
+    /**
+     * Sets the choices for a newly shown mission's data, keeping what still applies; fires nothing. A
+     * patrol or deadline mission has no charge-needed map (a one-trip figure): that choice is off for
+     * it, and the plain map is shown instead.
+     */
     void showMission(Mission m, boolean solved) {
         updating = true;
         try {
+            boolean oneTrip = !m.beyondOneTrip();
+            heatToggle.setDisable(!oneTrip);
+            heatToggle.setTooltip(oneTrip ? null : new Tooltip("no charge-needed map for a patrol or a deadline mission"));
+            if (!oneTrip && overlay() == Overlay.HEAT) {
+                plainToggle.setSelected(true);
+            }
             List<ProgressChoices.Choice> choices = ProgressChoices.of(m);
             ProgressChoices.Choice keep = progressChoice.getValue();
             progressChoice.getItems().setAll(choices);

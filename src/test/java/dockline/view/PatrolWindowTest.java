@@ -72,6 +72,9 @@ class PatrolWindowTest {
         assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.GUARANTEED);
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Guaranteed")
                 .contains("again and again for ever");
+        // no charge-needed map for a patrol: the plain map is shown and that choice is off
+        assertThat(fx(() -> window.mapView().layers().overlay())).isEqualTo(Overlay.PLAIN);
+        assertThat(fx(() -> robot.lookup("#overlay-heat").query().isDisabled())).isTrue();
         ViewReplay lasso = d.replays().get(0);
         assertThat(lasso.kind()).isEqualTo(ViewReplay.Kind.LASSO);
         // the lasso `dockline replay missions/night-patrol.yaml` prints: 204 steps, the loop from step 114
