@@ -13,8 +13,26 @@ import java.util.function.BooleanSupplier;
  * @param cancelled         polled by the solvers; when it turns true the plan stops with
  *                          {@link java.util.concurrent.CancellationException}
  * @param route             how the mission is answered
+ * @param progress          told how far the plan has got (stage boundaries of the route); never null
  */
-public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route) {
+public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route, Progress progress) {
+
+    /**
+     * Where a plan is: a per cent of its stages done (stage boundaries, not time: the stages differ in
+     * cost from mission to mission) and the stage now running, in words. Called on the planning thread.
+     */
+    @FunctionalInterface
+    public interface Progress {
+        /** Nobody listens. */
+        Progress NONE = (percent, stage) -> { };
+
+        void reached(int percent, String stage);
+    }
+
+    /** Options that nobody watches the progress of. */
+    public PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route) {
+        this(memoryBudgetBytes, cancelled, route, Progress.NONE);
+    }
 
     public PlanOptions {
         if (memoryBudgetBytes < 0) {
@@ -25,6 +43,9 @@ public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Rou
         }
         if (route == null) {
             throw new IllegalArgumentException("a route is needed");
+        }
+        if (progress == null) {
+            progress = Progress.NONE;
         }
     }
 
@@ -43,15 +64,19 @@ public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Rou
     }
 
     public PlanOptions withMemoryBudget(long bytes) {
-        return new PlanOptions(bytes, cancelled, route);
+        return new PlanOptions(bytes, cancelled, route, progress);
     }
 
     public PlanOptions withCancelled(BooleanSupplier flag) {
-        return new PlanOptions(memoryBudgetBytes, flag, route);
+        return new PlanOptions(memoryBudgetBytes, flag, route, progress);
     }
 
     public PlanOptions withRoute(Route r) {
-        return new PlanOptions(memoryBudgetBytes, cancelled, r);
+        return new PlanOptions(memoryBudgetBytes, cancelled, r, progress);
+    }
+
+    public PlanOptions withProgress(Progress p) {
+        return new PlanOptions(memoryBudgetBytes, cancelled, route, p);
     }
 
     /** The product-game options of these limits. */

@@ -13,7 +13,8 @@ import java.util.List;
 
 /**
  * Opens mission and map files through the project's loaders ({@link MissionLoader},
- * {@link MapLoader}), telling them apart by their keys ({@link InputKind}). Only reads.
+ * {@link MapLoader}), telling them apart by their keys ({@link InputKind}): one-trip missions,
+ * patrols and missions with a deadline alike. Only reads.
  */
 public final class FileMissionSource implements MissionSource {
 
@@ -25,11 +26,6 @@ public final class FileMissionSource implements MissionSource {
                 return new Opened(file, null, map);
             }
             Mission m = MissionLoader.load(file);
-            if (m.beyondOneTrip()) {
-                throw new OpenException(List.of(file + ": a " + (m.tasks().patrols() ? "patrol" : "mission with a deadline")
-                        + " is decided by 'dockline check' and shown by 'dockline replay'; this window shows one-trip"
-                        + " missions"));
-            }
             return new Opened(file, m, m.map());
         } catch (InputException e) {
             List<String> lines = new ArrayList<>();

@@ -24,6 +24,21 @@ final class ProgressChoices {
     }
 
     static List<Choice> of(Mission m) {
+        if (m.tasks().patrols()) {
+            // a patrol's progress is the set of checkpoints of the current lap (its lap automaton's mask)
+            List<String> cps = m.tasks().patrol();
+            List<Choice> out = new ArrayList<>();
+            for (int mask = 0; mask < 1 << cps.size(); mask++) {
+                List<String> done = new ArrayList<>();
+                for (int i = 0; i < cps.size(); i++) {
+                    if ((mask & 1 << i) != 0) {
+                        done.add(cps.get(i));
+                    }
+                }
+                out.add(new Choice(mask, "lap: " + (done.isEmpty() ? "nothing yet" : String.join(", ", done))));
+            }
+            return out;
+        }
         GoalAutomaton g = GoalAutomaton.of(m);
         List<Choice> out = new ArrayList<>();
         for (int s = 0; s < g.stateCount(); s++) {
@@ -34,6 +49,9 @@ final class ProgressChoices {
 
     /** The progress right after the start cell (its zones may already complete a task). */
     static int initialMask(Mission m) {
+        if (m.tasks().patrols()) {
+            return 0;
+        }
         GoalAutomaton g = GoalAutomaton.of(m);
         BuildingMap map = m.map();
         long zones = 0;

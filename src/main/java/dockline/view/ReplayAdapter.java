@@ -14,16 +14,22 @@ final class ReplayAdapter {
     }
 
     static ViewReplay of(Mission m, Replay r, ViewReplay.Kind kind, String title) {
+        List<ViewStep> steps = steps(r);
+        List<String> notes = new ArrayList<>(r.explanation());
+        notes.add(0, "Ends: " + endingWords(r.ending()) + "; lowest battery " + Units.both(m, r.minimumUnits())
+                + " against a floor of " + Units.both(m, r.floorUnits()) + ".");
+        return new ViewReplay(kind, title, steps, notes);
+    }
+
+    /** The replay's steps as the view shows them. */
+    static List<ViewStep> steps(Replay r) {
         List<ViewStep> steps = new ArrayList<>();
         for (ReplayStep s : r.steps()) {
             ReplayEvent e = s.event() == null ? ReplayEvent.NONE : s.event();
             steps.add(new ViewStep(s.step(), s.cell(), s.action().orElse(null), e.kind(), e.describe(), e.cell(),
                     s.batteryUnits(), s.budgetLeft(), s.progressMask(), e.closedCells()));
         }
-        List<String> notes = new ArrayList<>(r.explanation());
-        notes.add(0, "Ends: " + endingWords(r.ending()) + "; lowest battery " + Units.both(m, r.minimumUnits())
-                + " against a floor of " + Units.both(m, r.floorUnits()) + ".");
-        return new ViewReplay(kind, title, steps, notes);
+        return steps;
     }
 
     static String endingWords(Replay.Ending e) {

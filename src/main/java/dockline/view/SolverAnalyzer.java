@@ -35,10 +35,23 @@ public final class SolverAnalyzer implements Analyzer {
 
     @Override
     public ViewData analyze(Mission mission, BooleanSupplier cancelled) {
+        return analyze(mission, cancelled, (p, s) -> { });
+    }
+
+    /**
+     * Plans the mission and adapts the plan. Progress: the plan's own stages scaled to 0-85 %, then the
+     * worst case (85 %) and the run with no disturbance (93 %); a patrol or deadline mission reports
+     * its two stages (solve and certify, then its replay).
+     */
+    @Override
+    public ViewData analyze(Mission mission, BooleanSupplier cancelled, Progress progress) {
+        if (mission.beyondOneTrip()) {
+            return RoundsData.analyze(mission, cancelled, progress);
+        }
         Plan plan;
         try {
             plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
-                    true, true)).withCancelled(cancelled));
+                    true, true)).withCancelled(cancelled).withProgress((p, stage) -> progress.reached(p * 85 / 100, stage)));
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
@@ -57,6 +70,7 @@ public final class SolverAnalyzer implements Analyzer {
         PlanReplays mr = plan.replays().orElseThrow();
         List<ViewReplay> replays = new ArrayList<>();
         List<String> problems = new ArrayList<>();
+        progress.reached(85, plan.guaranteed() ? "replaying the worst case" : "replaying the counterexample");
         try {
             Replay w = mr.worstCase();
             replays.add(ReplayAdapter.of(mission, w, plan.guaranteed() ? ViewReplay.Kind.WORST_CASE
@@ -65,6 +79,7 @@ public final class SolverAnalyzer implements Analyzer {
             problems.add(e.getMessage());
         }
         if (mr.policy().isPresent()) {
+            progress.reached(93, "replaying the run with no disturbance");
             try {
                 Replay n = mr.nominal();
                 replays.add(ReplayAdapter.of(mission, n, ViewReplay.Kind.NOMINAL, title(mission, n, "no disturbance")));
@@ -75,7 +90,7 @@ public final class SolverAnalyzer implements Analyzer {
         return new SolvedData(plan, verdictOf(plan, problems), replays);
     }
 
-    private static void stopIf(BooleanSupplier cancelled) {
+    static void stopIf(BooleanSupplier cancelled) {
         if (cancelled.getAsBoolean()) {
             throw new CancellationException("cancelled");
         }
@@ -246,13 +261,14 @@ public final class SolverAnalyzer implements Analyzer {
         }
 
         /**
-         * Replays the policy with the given events (nominal outcomes elsewhere).
+         * Replays the policy with the given events (nominal outcomes elsewhere; with no events, the run
+         * with no disturbance).
          *
          * @throws IllegalArgumentException when an event cannot happen where it was put
          */
         @Override
         public Optional<ViewReplay> force(List<ScenarioEvent> events) {
-            if (policy.isEmpty() || events.isEmpty()) {
+            if (policy.isEmpty()) {
                 return Optional.empty();
             }
             List<dockline.replay.ForcedEvent> fs = new ArrayList<>();
@@ -265,7 +281,7 @@ public final class SolverAnalyzer implements Analyzer {
             try {
                 Replay r = replaysSource.forced(fs);
                 return Optional.of(ReplayAdapter.of(mission(), r, ViewReplay.Kind.FORCED,
-                        title(mission(), r, "forced " + what)));
+                        title(mission(), r, events.isEmpty() ? "nothing forced" : "forced " + what)));
             } catch (ForcedEventException e) {
                 throw new IllegalArgumentException(e.getMessage(), e);
             } catch (IllegalStateException e) {

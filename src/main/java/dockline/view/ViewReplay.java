@@ -11,15 +11,18 @@ import java.util.Objects;
  * @param title a name for the chooser, e.g. {@code worst case (lowest battery 7.2 Wh)}
  * @param steps the steps, step 0 first; never empty
  * @param notes plain-words lines on what happened and why (may be empty)
+ * @param loopStart for a patrol's lasso, the first step of the lap that repeats for ever (the step
+ *              after the last is this one again); -1 for a run that ends
  */
-public record ViewReplay(Kind kind, String title, List<ViewStep> steps, List<String> notes) {
+public record ViewReplay(Kind kind, String title, List<ViewStep> steps, List<String> notes, int loopStart) {
 
     /** Where a replay comes from. */
     public enum Kind {
         WORST_CASE("worst case"),
         COUNTEREXAMPLE("counterexample"),
         NOMINAL("run with no disturbance"),
-        FORCED("forced scenario");
+        FORCED("forced scenario"),
+        LASSO("patrol: way in, then the lap for ever");
 
         private final String word;
 
@@ -40,10 +43,23 @@ public record ViewReplay(Kind kind, String title, List<ViewStep> steps, List<Str
         if (steps.isEmpty()) {
             throw new IllegalArgumentException("a replay has at least its start step");
         }
+        if (loopStart < -1 || loopStart >= steps.size()) {
+            throw new IllegalArgumentException("the loop must start at one of the run's steps");
+        }
+    }
+
+    /** A run that ends. */
+    public ViewReplay(Kind kind, String title, List<ViewStep> steps, List<String> notes) {
+        this(kind, title, steps, notes, -1);
     }
 
     public ViewReplay(Kind kind, String title, List<ViewStep> steps) {
         this(kind, title, steps, List.of());
+    }
+
+    /** Whether the run ends in a lap that repeats for ever. */
+    public boolean loops() {
+        return loopStart >= 0;
     }
 
     /** The lowest battery level over the run, in units. */

@@ -149,16 +149,22 @@ class DemoMissionWindowTest {
     }
 
     @Test
-    void a_reserve_above_the_starting_charge_is_not_guaranteed(FxRobot robot) throws Exception {
+    void a_reserve_above_the_starting_charge_is_refused_with_the_reason_as_the_command_line_does(FxRobot robot)
+            throws Exception {
         Mission m = dockline.io.MissionLoader.load(MISSION);
         waitUntil(() -> solvedWithReserve(m.reserveUnits()));
+        ViewData before = fx(() -> window.dataProperty().get());
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
         robot.interact(() -> reserve.setText("90"));
         robot.clickOn("#check");
-        Mission high = m.withReserve(dockline.model.Charge.percent(new java.math.BigDecimal("90")));
-        waitUntil(() -> solvedWithReserve(high.reserveUnits()));
-        // a floor above the starting level loses at once (maps/README.md, "Game semantics": the start must be
-        // at or above the floor)
-        assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
+        WaitForAsyncUtils.waitForFxEvents();
+        // the mission starts at 80 %: a floor of 90 % is an input mistake, not a question for the solver
+        Label st = robot.lookup("#solve-status").queryAs(Label.class);
+        assertThat(fx(st::getText)).contains("the reserve floor (54 Wh)").contains("is above the starting charge (48 Wh)")
+                .contains("hint:");
+        assertThat(fx(() -> window.taskProperty().get())).isNull();
+        assertThat(fx(() -> window.dataProperty().get())).isSameAs(before);
+        // the command line refuses the same override with exit code 2 (bad input)
+        assertThat(dockline.cli.Main.run("check", "--reserve", "90%", MISSION.toString())).isEqualTo(2);
     }
 }

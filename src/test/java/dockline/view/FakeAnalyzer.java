@@ -27,6 +27,13 @@ final class FakeAnalyzer implements Analyzer {
     volatile boolean release;
     volatile int calls;
 
+    /** Reports 40 % ("halfway through the stand-in"), then works as {@link #analyze(Mission, BooleanSupplier)}. */
+    @Override
+    public ViewData analyze(Mission m, BooleanSupplier cancelled, Progress progress) {
+        progress.reached(40, "halfway through the stand-in");
+        return analyze(m, cancelled);
+    }
+
     @Override
     public ViewData analyze(Mission m, BooleanSupplier cancelled) {
         calls++;
@@ -112,7 +119,11 @@ final class FakeAnalyzer implements Analyzer {
             level -= per;
             steps.add(new ViewStep(k, at, a, null, "", null, level, budget, 0));
         }
-        ViewReplay worst = new ViewReplay(ViewReplay.Kind.WORST_CASE, "worst case", steps);
+        List<String> notes = List.of("Ends: made up by the test stand-in, which walks down the distances to the nearest dock"
+                + " and shuts the first door it meets once.", "This line is long on purpose, so that the notes must wrap"
+                + " over more than one line at 1280 pixels and still show every word of what they say about the run.");
+        ViewReplay worst = new ViewReplay(ViewReplay.Kind.WORST_CASE, "worst case of the test stand-in, walking down the"
+                + " distances to the nearest dock", steps, notes);
         int min = worst.minimumUnits();
         boolean ok = min >= reserve && need[m.start().index(w)] >= 0 && m.startUnits() >= need[m.start().index(w)];
         VerdictSummary v = ok
@@ -120,7 +131,7 @@ final class FakeAnalyzer implements Analyzer {
                         "checked by the test stand-in", OptionalInt.of(min), OptionalInt.of(min))
                 : new VerdictSummary(VerdictSummary.Outcome.NOT_GUARANTEED, "the battery can drop below " + Units.both(m, reserve),
                         "counterexample replayed by the test stand-in", OptionalInt.empty(), OptionalInt.empty());
-        ViewReplay shown = ok ? worst : new ViewReplay(ViewReplay.Kind.COUNTEREXAMPLE, "counterexample", steps);
+        ViewReplay shown = ok ? worst : new ViewReplay(ViewReplay.Kind.COUNTEREXAMPLE, "counterexample", steps, notes);
         return new ViewData() {
             @Override
             public Mission mission() {
@@ -150,6 +161,17 @@ final class FakeAnalyzer implements Analyzer {
             @Override
             public List<ViewReplay> replays() {
                 return List.of(shown);
+            }
+
+            @Override
+            public boolean canForce() {
+                return true;
+            }
+
+            /** The stand-in's "forced" run is its one run under another name. */
+            @Override
+            public Optional<ViewReplay> force(List<ScenarioEvent> events) {
+                return Optional.of(new ViewReplay(ViewReplay.Kind.FORCED, "forced " + events, steps));
             }
         };
     }

@@ -74,7 +74,11 @@ class MissionWindowTest {
     void raising_the_reserve_rechecks_and_changes_the_verdict(FxRobot robot) throws Exception {
         waitUntil(this::idleAndSolved);
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
-        robot.interact(() -> reserve.setText("95"));
+        TextField start = robot.lookup("#start-charge").queryAs(TextField.class);
+        robot.interact(() -> {
+            reserve.setText("95");
+            start.setText("100");
+        });
         robot.clickOn("#check");
         waitUntil(() -> idleAndSolved() && window.dataProperty().get().mission().reserveUnits() == 380);
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
@@ -143,7 +147,7 @@ class MissionWindowTest {
         String verdictBefore = robot.lookup("#verdict").queryAs(Label.class).getText();
         analyzer.slow = true;
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
-        robot.interact(() -> reserve.setText("95"));
+        robot.interact(() -> reserve.setText("85"));
         robot.clickOn("#check");
         waitUntil(() -> fx(() -> window.taskProperty().get() != null && window.taskProperty().get().isRunning()));
         // responsive while solving: the replay still steps and the overlay still switches

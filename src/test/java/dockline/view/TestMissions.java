@@ -56,6 +56,41 @@ final class TestMissions {
                 new Objective.Reserve());
     }
 
+    /**
+     * The two-room floor with two doors between the rooms, D1 and D2, each of which may shut for the
+     * rest of the mission (one event at most): a shut door leaves the other way open.
+     */
+    static Mission twoDoorsLasting() {
+        List<String> rows = List.of(
+                "##############",
+                "#....#ccccc=##",
+                "#....Dcccccc##",
+                "#....Dcccccc##",
+                "#....#cccccc##",
+                "#=...#########",
+                "##############");
+        Map<Character, Terrain> legend = Map.of(
+                '#', Terrain.wall('#'),
+                '.', new Terrain('.', "tile", false, false),
+                'c', new Terrain('c', "carpet", false, false),
+                'D', new Terrain('D', "tile", false, true),
+                '=', new Terrain('=', "tile", true, false));
+        List<Zone> zones = List.of(
+                new Zone("lobby", cells(1, 1, 4, 5)),
+                new Zone("reading-room", cells(6, 1, 11, 4)));
+        List<EventRule> rules = List.of(
+                new EventRule(EventKind.DOOR_SHUT, "fire doors", List.of(new Cell(5, 2), new Cell(5, 3)), BigDecimal.ZERO)
+                        .withDuration(dockline.model.EventDuration.REST_OF_MISSION));
+        BuildingMap map = new BuildingMap("two-door floor", null, new BigDecimal("0.5"), rows, legend, zones,
+                Map.of(new Cell(5, 2), "D2", new Cell(5, 3), "D1"), new DisturbanceModel(1, rules));
+        RobotProfile robot = new RobotProfile(new BigDecimal("40"), new BigDecimal("0.1"),
+                Map.of("tile", new BigDecimal("0.4"), "carpet", new BigDecimal("0.7")), new BigDecimal("0.1"),
+                new BigDecimal("2"), Neighbourhood.FOUR);
+        return new Mission("reading room by either door", null, map, robot, new Cell(2, 2),
+                Charge.percent(new BigDecimal("90")), Charge.percent(new BigDecimal("20")),
+                new Tasks(List.of("reading-room"), true, List.of(), true), new Objective.Reserve());
+    }
+
     static List<Cell> cells(int x0, int y0, int x1, int y1) {
         List<Cell> out = new ArrayList<>();
         for (int y = y0; y <= y1; y++) {
