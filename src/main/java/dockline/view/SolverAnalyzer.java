@@ -56,7 +56,7 @@ public final class SolverAnalyzer implements Analyzer {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
         stopIf(cancelled);
-        ViewData data = of(plan);
+        ViewData data = of(plan, progress);
         stopIf(cancelled);
         return data;
     }
@@ -66,6 +66,10 @@ public final class SolverAnalyzer implements Analyzer {
      * the worst case or counterexample, and the nominal run when there is a policy. Used by the report's pictures.
      */
     static ViewData of(Plan plan) {
+        return of(plan, (percent, stage) -> { });
+    }
+
+    private static ViewData of(Plan plan, Progress progress) {
         Mission mission = plan.mission();
         PlanReplays mr = plan.replays().orElseThrow();
         List<ViewReplay> replays = new ArrayList<>();

@@ -52,6 +52,9 @@ public final class DemoReport {
     public static synchronized Made get() {
         if (made == null) {
             try {
+                // the report draws its pictures in this JVM: let TestFX start the toolkit first, or the
+                // TestFX window tests that run later in the same JVM lose their input (DEVELOPERS.md, tests)
+                org.testfx.api.FxToolkit.registerPrimaryStage();
                 Path dir = Files.createTempDirectory("dockline-report-test");
                 Path bad = dir.resolve("broken.yaml");
                 Files.writeString(bad, BAD);
@@ -67,6 +70,8 @@ public final class DemoReport {
                 made = new Made(code, out.toString(), err.toString(), html, json, bad);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
+            } catch (java.util.concurrent.TimeoutException e) {
+                throw new IllegalStateException("the JavaFX toolkit did not start", e);
             }
         }
         return made;

@@ -20,6 +20,12 @@ import picocli.CommandLine;
  */
 class ReportCommandTest {
 
+    /** The report draws its pictures in this JVM: TestFX starts the toolkit first (see DemoReport). */
+    @org.junit.jupiter.api.BeforeAll
+    static void toolkit() throws Exception {
+        org.testfx.api.FxToolkit.registerPrimaryStage();
+    }
+
     @TempDir
     Path dir;
 

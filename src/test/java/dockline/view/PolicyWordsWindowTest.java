@@ -57,10 +57,10 @@ class PolicyWordsWindowTest {
         WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, () -> fx(() -> window.taskProperty().get() == null
                 && window.dataProperty().get() != null && window.dataProperty().get().solved()));
         WaitForAsyncUtils.waitForFxEvents();
-        ChoiceBox<MissionWindow.PolicyMode> mode = robot.lookup("#policy-mode").queryAs(ChoiceBox.class);
+        ChoiceBox<OverlayPanel.PolicyMode> mode = robot.lookup("#policy-mode").queryAs(ChoiceBox.class);
         robot.interact(() -> {
             window.setOverlay(Overlay.POLICY);
-            mode.setValue(MissionWindow.PolicyMode.FOLLOW);
+            mode.setValue(OverlayPanel.PolicyMode.FOLLOW);
         });
         ViewReplay r = fx(() -> window.dataProperty().get().replays().get(0));
         Cell at = r.steps().get(0).cell();
