@@ -11,7 +11,7 @@ import dockline.model.Mission;
 import dockline.model.Neighbourhood;
 import dockline.model.RobotProfile;
 import dockline.model.Terrain;
-import dockline.model.Zone;
+import dockline.model.ZoneLabels;
 import dockline.util.IntArrayList;
 import java.math.BigDecimal;
 import java.util.Arrays;
@@ -40,9 +40,6 @@ public final class ArenaCompiler {
      * the final forward and reverse CSR arrays (measured on the generated buildings, rounded up).
      */
     static final long BYTES_PER_ROBOT_VERTEX = 600;
-
-    /** Most zones a map may have (zone sets are 64-bit masks). */
-    public static final int MAX_ZONES = 63;
 
     private ArenaCompiler() {
     }
@@ -84,7 +81,7 @@ public final class ArenaCompiler {
      * Builds the arena.
      *
      * @throws IllegalArgumentException if the mission breaks an invariant the loader checks
-     *                                  (more than {@link #MAX_ZONES} zones, start on a wall, a surface without energy)
+     *                                  (a task naming an unknown zone, start on a wall, a surface without energy)
      * @throws ArithmeticException      if the arena would have more than {@code Integer.MAX_VALUE} vertices or edges
      */
     /**
@@ -122,9 +119,6 @@ public final class ArenaCompiler {
         int budget = map.disturbances().budget();
         boolean eight = robot.neighbourhood() == Neighbourhood.EIGHT;
         int dirs = eight ? 8 : 4;
-        if (map.zones().size() > MAX_ZONES) {
-            throw new IllegalArgumentException("a map may have at most " + MAX_ZONES + " zones");
-        }
 
         boolean[] free = new boolean[cells];
         boolean[] dock = new boolean[cells];
@@ -156,15 +150,8 @@ public final class ArenaCompiler {
                 slotCell[slot[c]] = c;
             }
         }
-        long[] zones = new long[cells];
-        List<Zone> zs = map.zones();
-        for (int i = 0; i < zs.size(); i++) {
-            for (Cell c : zs.get(i).cells()) {
-                if (map.inside(c)) {
-                    zones[c.index(w)] |= 1L << i;
-                }
-            }
-        }
+        // only the zones the tasks name get a label bit, so the map may have any number of zones
+        long[] zones = ZoneLabels.of(mission).cellMasks(map);
         // event coverage per cell: rule index (first rule wins; drag takes the largest extra)
         List<EventRule> rules = map.disturbances().rules();
         int[] doorRule = filled(cells);
