@@ -13,6 +13,7 @@ import dockline.model.RobotProfile;
 import dockline.model.Terrain;
 import dockline.model.ZoneLabels;
 import dockline.util.IntArrayList;
+import dockline.util.Progress;
 import java.math.BigDecimal;
 import java.util.Arrays;
 import java.util.List;
@@ -238,7 +239,11 @@ public final class ArenaCompiler {
         IntArrayList robotOutStart = new IntArrayList(robotCount + 1);
         int next = robotCount;
         int[] nb = new int[8];
+        Progress.Tracker progress = Progress.phase("building the move graph", 2L * robotCount);
         for (int r = 0; r < robotCount; r++) {
+            if ((r & (Progress.EVERY - 1)) == 0) {
+                progress.at(r);
+            }
             robotOutStart.add(next - robotCount);
             int c = vCell.get(r);
             int n = closable ? neighbours(c, w, h, free, dirs, nb, states, vState.get(r))
@@ -283,6 +288,10 @@ public final class ArenaCompiler {
             }
         }
         for (int d = 0; d < distCount; d++) {
+            if ((d & (Progress.EVERY - 1)) == 0) {
+                // the outcomes take the second half; distCount is about 5 x robotCount
+                progress.at(robotCount + (long) d * robotCount / distCount);
+            }
             outStart.add(eTarget.size());
             int owner = ownerOfD[d];
             int c = vCell.get(owner);
@@ -365,6 +374,7 @@ public final class ArenaCompiler {
         for (int d = 0; d < distCount; d++) {
             stateArr[robotCount + d] = vState.get(ownerOfD[d]);
         }
+        progress.done();
         int startVertex = slot[start.index(w)] * kk + budget;
         return new Arena(mission, w, h, budget, states, stateArr, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
                 aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),

@@ -1,6 +1,7 @@
 package dockline.solve.fast;
 
 import dockline.util.PackedMinHeap;
+import dockline.util.Progress;
 
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
@@ -291,6 +292,8 @@ public final class MinChargeSolver {
                 }
             }
         }
+        // per cent of the robot situations finalised: a bound, as the search may stop at the start
+        Progress.Tracker progress = Progress.phase("least charge to finish (fast path)", robotN);
         while (!heap.isEmpty()) {
             long top = heap.peek();
             int x = (int) (top >>> 32);
@@ -304,6 +307,9 @@ public final class MinChargeSolver {
             }
             done[u] = true;
             explored++;
+            if ((explored & (Progress.EVERY - 1)) == 0) {
+                progress.at(explored);
+            }
             if (u == startP && stopAtStart) {
                 break;
             }
@@ -350,6 +356,7 @@ public final class MinChargeSolver {
         int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
         boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
         long productVertices = (long) arena.vertexCount() * gc;
+        progress.done();
         return new Values(arena, robotNeed, choice, done, gc, rc, new Result(guaranteed, startNeed, available, explored,
                 productVertices, mode == Mode.ALL));
     }

@@ -10,6 +10,7 @@ import dockline.solve.SizeEstimate;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
+import dockline.util.Progress;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -382,9 +383,16 @@ public final class ImplicitReserveGame {
         long edges = 0;
         int steps = 0;
         boolean stopped = false;
+        // per cent of the robot triples expanded: a bound, as the attractor may stop or win fewer
+        Progress.Tracker progress = Progress.phase("solving the game at floor " + monitor.floorUnits() + " units",
+                vertexCount / Math.max(1, arena.vertexCount()) * rc);
+        long expanded = 0;
         expand:
         while (tail != head) {
             int p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
+            if ((++expanded & (Progress.EVERY - 1)) == 0) {
+                progress.at(expanded);
+            }
             int s2 = p & sMask;
             int g2 = (p >>> lb) & gMask;
             int x = p >>> (lb + gb);
@@ -481,6 +489,7 @@ public final class ImplicitReserveGame {
                 }
             }
         }
+        progress.done();
         if (flagsOut != null) {
             flagsOut[0] = flags;
         }
