@@ -112,6 +112,14 @@ public final class MinChargeSolver {
      * one. O(m·G) time when charging exists (a forward search ignoring energy), O(1) otherwise.
      */
     public static boolean applicable(Arena arena, GoalAutomaton goal) {
+        if (!canCharge(arena)) {
+            return true;
+        }
+        return noChargeBeforeTheEnd(arena, goal);
+    }
+
+    /** Whether the arena has a charge action at all (a dock with a charging rate). O(free cells). */
+    public static boolean canCharge(Arena arena) {
         boolean anyCharge = false;
         for (int slot = 0; slot < arena.freeCellCount() && !anyCharge; slot++) {
             int c = arena.freeCell(slot);
@@ -124,9 +132,11 @@ public final class MinChargeSolver {
                 }
             }
         }
-        if (!anyCharge) {
-            return true;
-        }
+        return anyCharge;
+    }
+
+    /** The forward search of {@link #applicable} when the arena can charge: O(m·G), 5 bytes per pair. */
+    private static boolean noChargeBeforeTheEnd(Arena arena, GoalAutomaton goal) {
         int gc = goal.stateCount();
         int s = arena.startVertex();
         int g0 = goal.initial(arena.cellZones(arena.cell(s)));
