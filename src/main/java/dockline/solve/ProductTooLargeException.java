@@ -5,7 +5,8 @@ import dockline.model.ResourceLimitException;
 /**
  * The product game would not fit: either in the memory budget (thrown before the build when the
  * estimate is over it, or during the build when the vertices found so far are), or in the index
- * range of a Java array (the implicit route numbers every triple of the product with an int). The
+ * range of a Java array (only where memory would allow more than 2^31 of them: the stored route's
+ * vertices, the fast path's arena × goal pairs; the implicit route numbers with longs). The
  * message says how big the game would be, which limit applied and what to change; the CLI maps it
  * to exit code 3.
  */
