@@ -1,30 +1,18 @@
 package dockline.arena;
 
+import dockline.model.Worded;
+
 /** What the robot can choose to do at a robot vertex. */
-public enum ActionKind {
+public enum ActionKind implements Worded {
     /** Move to a neighbouring free cell. */
-    MOVE("move"),
+    MOVE,
     /** Stay one step, paying the idle energy. */
-    WAIT("wait"),
+    WAIT,
     /** Stay one step on a dock, gaining the charge rate. */
-    CHARGE("charge");
+    CHARGE;
 
-    private final String word;
-
-    ActionKind(String word) {
-        this.word = word;
-    }
-
-    public String word() {
-        return word;
-    }
-
+    /** The constant spelled {@code w}, or {@code null}. */
     public static ActionKind ofWord(String w) {
-        for (ActionKind k : values()) {
-            if (k.word.equals(w)) {
-                return k;
-            }
-        }
-        return null;
+        return Worded.ofWord(ActionKind.class, w);
     }
 }

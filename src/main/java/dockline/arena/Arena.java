@@ -1,5 +1,6 @@
 package dockline.arena;
 
+import dockline.util.Csr;
 import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
@@ -113,19 +114,8 @@ public final class Arena {
                 edgeSource[e] = v;
             }
         }
-        // counting sort of edges by target: linear time
-        this.inStart = new int[vertexCount + 1];
-        for (int e = 0; e < m; e++) {
-            inStart[edgeTarget[e] + 1]++;
-        }
-        for (int v = 0; v < vertexCount; v++) {
-            inStart[v + 1] += inStart[v];
-        }
-        this.inEdge = new int[m];
-        int[] fill = java.util.Arrays.copyOf(inStart, vertexCount);
-        for (int e = 0; e < m; e++) {
-            inEdge[fill[edgeTarget[e]]++] = e;
-        }
+        this.inStart = Csr.reverseOffsets(vertexCount, m, edgeTarget);
+        this.inEdge = Csr.reverseEdges(vertexCount, edgeTarget, inStart);
         int maxDegree = 0;
         boolean byEdge = true;
         for (int v = 0; v < vertexCount; v++) {

@@ -123,21 +123,7 @@ public final class RoundsBench {
         if (pts.size() < 2) {
             return Double.NaN;
         }
-        double mx = 0;
-        double my = 0;
-        for (double[] p : pts) {
-            mx += p[0];
-            my += p[1];
-        }
-        mx /= pts.size();
-        my /= pts.size();
-        double num = 0;
-        double den = 0;
-        for (double[] p : pts) {
-            num += (p[0] - mx) * (p[1] - my);
-            den += (p[0] - mx) * (p[0] - mx);
-        }
-        return den == 0 ? Double.NaN : num / den;
+        return BenchReport.slope(pts);
     }
 
     /** The rows as a text table with the slope per instance. */

@@ -130,18 +130,7 @@ public final class ReplayCommand extends MissionCommand {
             return plan.guaranteed() ? ExitCodes.INTERNAL : ExitCodes.NOT_GUARANTEED;
         }
         String jsonText = json || jsonFile != null ? json(m, plan, replay) : null;
-        Path writing = null;
-        try {
-            if (csv != null) {
-                writing = csv;
-                AtomicFiles.writeString(csv, ReplayFormats.csv(replay));
-            }
-            if (jsonFile != null) {
-                writing = jsonFile;
-                AtomicFiles.writeString(jsonFile, jsonText + "\n");
-            }
-        } catch (IOException e) {
-            err.println("dockline: cannot write " + writing + ": " + e.getMessage());
+        if (!writeFiles(err, csv, csv == null ? null : ReplayFormats.csv(replay), jsonFile, jsonText)) {
             return ExitCodes.BAD_INPUT;
         }
         if (json) {
@@ -150,6 +139,28 @@ public final class ReplayCommand extends MissionCommand {
             print(out, m, plan, mr, replay, what);
         }
         return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    /**
+     * Writes the replay's CSV and JSON files that were asked for (each atomically: a file is whole or
+     * not there). On a failure says which file on stderr and returns false.
+     */
+    static boolean writeFiles(PrintWriter err, Path csv, String csvText, Path jsonFile, String jsonText) {
+        Path writing = null;
+        try {
+            if (csv != null) {
+                writing = csv;
+                AtomicFiles.writeString(csv, csvText);
+            }
+            if (jsonFile != null) {
+                writing = jsonFile;
+                AtomicFiles.writeString(jsonFile, jsonText + "\n");
+            }
+            return true;
+        } catch (IOException e) {
+            err.println("dockline: cannot write " + writing + ": " + e.getMessage());
+            return false;
+        }
     }
 
     /** The replay's JSON with the verdict, the certificate and the caveats. */

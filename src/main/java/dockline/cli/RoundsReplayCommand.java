@@ -4,11 +4,9 @@ import dockline.plan.PolicyChoice;
 import dockline.plan.RoundsPlan;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dockline.io.AtomicFiles;
 import dockline.model.Mission;
 import dockline.replay.RoundsReplay;
 import dockline.report.Caveats;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
@@ -52,18 +50,7 @@ final class RoundsReplayCommand {
         o.put("verdict", r.guaranteed() ? "guaranteed" : "not-guaranteed");
         o.setAll(r.jsonTree(m));
         String jsonText = Json.withCaveats(o);
-        Path writing = null;
-        try {
-            if (csv != null) {
-                writing = csv;
-                AtomicFiles.writeString(csv, r.csv());
-            }
-            if (jsonFile != null) {
-                writing = jsonFile;
-                AtomicFiles.writeString(jsonFile, jsonText + "\n");
-            }
-        } catch (IOException e) {
-            err.println("dockline: cannot write " + writing + ": " + e.getMessage());
+        if (!ReplayCommand.writeFiles(err, csv, csv == null ? null : r.csv(), jsonFile, jsonText)) {
             return ExitCodes.BAD_INPUT;
         }
         if (json) {

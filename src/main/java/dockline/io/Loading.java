@@ -169,30 +169,12 @@ final class Loading {
     }
 
     BigDecimal decimal(Node n, String what) {
-        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
-            try {
-                return Quantities.parseDecimal(s.text());
-            } catch (IllegalArgumentException e) {
-                problems.add(n.pos(), what + ": " + e.getMessage(), "write a plain decimal number, e.g. 2 or 0.5");
-                return null;
-            }
-        }
-        wrong(n, what, "a number");
-        return null;
+        return quantity(n, what, Quantities::parseDecimal, "write a plain decimal number, e.g. 2 or 0.5", "a number");
     }
 
     /** An energy in Wh (a number, optionally followed by {@code Wh}), not negative. */
     BigDecimal wh(Node n, String what) {
-        if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
-            try {
-                return Quantities.parseWh(s.text());
-            } catch (IllegalArgumentException e) {
-                problems.add(n.pos(), what + ": " + e.getMessage(), "give the energy in Wh, e.g. 0.5 or 0.5 Wh");
-                return null;
-            }
-        }
-        wrong(n, what, "an energy in Wh");
-        return null;
+        return quantity(n, what, Quantities::parseWh, "give the energy in Wh, e.g. 0.5 or 0.5 Wh", "an energy in Wh");
     }
 
     /** A whole number in [min, max]. */
@@ -289,15 +271,24 @@ final class Loading {
 
     /** A charge ({@code 20%}, {@code 15 Wh}, {@code 15}). */
     Charge charge(Node n, String what) {
+        return quantity(n, what, Quantities::parseCharge, "write a percentage of the capacity (20%) or Wh (12 Wh)", "a charge such as 20% or 12 Wh");
+    }
+
+    /**
+     * A quantity written as a scalar, read by {@code parser}; a parse failure is a problem with
+     * {@code hint}, anything but a scalar a problem saying it should be {@code expected}.
+     */
+    private <T> T quantity(Node n, String what, java.util.function.Function<String, T> parser, String hint,
+                           String expected) {
         if (n instanceof Node.Scalar s && s.kind() != Node.Kind.NULL && s.kind() != Node.Kind.BOOLEAN) {
             try {
-                return Quantities.parseCharge(s.text());
+                return parser.apply(s.text());
             } catch (IllegalArgumentException e) {
-                problems.add(n.pos(), what + ": " + e.getMessage(), "write a percentage of the capacity (20%) or Wh (12 Wh)");
+                problems.add(n.pos(), what + ": " + e.getMessage(), hint);
                 return null;
             }
         }
-        wrong(n, what, "a charge such as 20% or 12 Wh");
+        wrong(n, what, expected);
         return null;
     }
 

@@ -34,11 +34,7 @@ public final class MapLoader {
 
     /** Reads and checks map content given as bytes; {@code file} names it in messages. */
     public static BuildingMap load(Path file, byte[] content) throws InputException {
-        Problems problems = new Problems(file);
-        YamlReader.Document doc = YamlReader.parse(file, content, problems);
-        BuildingMap map = doc.root() == null ? null : problems.guard(() -> new MapReading(doc, problems).read());
-        problems.throwIfAny();
-        return map;
+        return YamlReader.readContent(file, content, (doc, problems) -> new MapReading(doc, problems).read());
     }
 
     /**

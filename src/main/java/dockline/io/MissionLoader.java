@@ -32,10 +32,6 @@ public final class MissionLoader {
      * place the map path is resolved from.
      */
     public static Mission load(Path file, byte[] content) throws InputException {
-        Problems problems = new Problems(file);
-        YamlReader.Document doc = YamlReader.parse(file, content, problems);
-        Mission m = doc.root() == null ? null : problems.guard(() -> new MissionReading(doc, problems).read());
-        problems.throwIfAny();
-        return m;
+        return YamlReader.readContent(file, content, (doc, problems) -> new MissionReading(doc, problems).read());
     }
 }

@@ -152,6 +152,21 @@ final class YamlReader {
         return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 
+    /**
+     * Parses content given as bytes and reads it with {@code reader}, collecting every problem of both
+     * steps; a defect in the reader is an internal error ({@link Problems#guard}), never a problem of the file.
+     *
+     * @throws InputException with every problem found, if there is any
+     */
+    static <T> T readContent(Path file, byte[] content, java.util.function.BiFunction<Document, Problems, T> reader)
+            throws InputException {
+        Problems problems = new Problems(file);
+        Document doc = parse(file, content, problems);
+        T value = doc.root() == null ? null : problems.guard(() -> reader.apply(doc, problems));
+        problems.throwIfAny();
+        return value;
+    }
+
     /** Parses file content given as bytes (the file name is used for messages only). */
     static Document parse(Path file, byte[] bytes, Problems problems) {
         if (bytes.length > MAX_BYTES) {

@@ -1,5 +1,6 @@
 package dockline.margin;
 
+import dockline.model.Worded;
 /**
  * One change that makes a mission guaranteed.
  *
@@ -11,23 +12,13 @@ package dockline.margin;
 public record Suggestion(Kind kind, int from, int to, String text) {
 
     /** What a suggestion changes. */
-    public enum Kind {
+    public enum Kind implements Worded {
         /** Start with more charge. */
-        START_CHARGE("start-charge"),
+        START_CHARGE,
         /** Keep back less charge. */
-        RESERVE_FLOOR("reserve-floor"),
+        RESERVE_FLOOR,
         /** Allow fewer disturbances per mission. */
-        BUDGET("budget");
-
-        private final String word;
-
-        Kind(String word) {
-            this.word = word;
-        }
-
-        public String word() {
-            return word;
-        }
+        BUDGET;
     }
 
     /** The size of the change, |to - from|. */

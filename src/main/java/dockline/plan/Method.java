@@ -1,27 +1,19 @@
 package dockline.plan;
 
+import dockline.model.Worded;
+
 /** The method a {@link Plan} was computed by; {@link #word()} is its name in the JSON outputs. */
-public enum Method {
+public enum Method implements Worded {
     /** Minimum charge on arena × goal (Knuth 1977): the robot cannot charge before the end. */
-    FAST("fast"),
+    FAST,
     /** The product game arena × goal × battery levels, its moves generated on demand, and the attractor. */
-    PRODUCT("product"),
+    PRODUCT,
     /** The same product game stored in CSR arrays (the reference route). */
-    STORED_PRODUCT("stored-product"),
+    STORED_PRODUCT,
     /** The verdict alone on the product game without storing it. */
-    IMPLICIT_VERDICT("implicit-product"),
+    IMPLICIT_PRODUCT,
     /** Bisection over the threshold solver and the minimum-credit fixpoint. */
-    MARGINS("margins"),
+    MARGINS,
     /** The product with the discounted-sum comparator (and the battery, unless the score alone is asked). */
-    COMPARATOR_PRODUCT("comparator-product");
-
-    private final String word;
-
-    Method(String word) {
-        this.word = word;
-    }
-
-    public String word() {
-        return word;
-    }
+    COMPARATOR_PRODUCT;
 }

@@ -188,7 +188,7 @@ public final class MissionPlanner {
             }
         }
         ReserveSolver.ImplicitVerdict iv = ReserveSolver.decideImplicitly(m, c.arena(), c.goal(), c.product());
-        return new Plan(m, new Objective.Reserve(), iv.verdict(), Method.IMPLICIT_VERDICT, "only the verdict was asked"
+        return new Plan(m, new Objective.Reserve(), iv.verdict(), Method.IMPLICIT_PRODUCT, "only the verdict was asked"
                 + " for: the product game without storing it, its attractor stopped once the start was decided",
                 Optional.empty(), null, m.reserveUnits(), new Certification.NotChecked("verdict only, not certified"),
                 OptionalInt.empty(), Optional.empty(), OptionalInt.empty(), false, OptionalInt.empty(), List.of(), null,

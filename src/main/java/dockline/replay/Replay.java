@@ -1,5 +1,6 @@
 package dockline.replay;
 
+import dockline.model.Worded;
 import java.util.List;
 
 /**
@@ -21,49 +22,29 @@ public record Replay(Kind kind, List<ReplayStep> steps, Ending ending, int minim
     }
 
     /** Which replay. */
-    public enum Kind {
+    public enum Kind implements Worded {
         /** Certified policy, disturbance choices that drive the battery lowest. */
-        WORST("worst"),
+        WORST,
         /** Certified policy, no events. */
-        NOMINAL("nominal"),
+        NOMINAL,
         /** Certified policy, events named by the user. */
-        FORCED("forced"),
+        FORCED,
         /** Not guaranteed: the disturbance's winning strategy against the robot's best effort. */
-        COUNTEREXAMPLE("counterexample");
-
-        private final String word;
-
-        Kind(String word) {
-            this.word = word;
-        }
-
-        public String word() {
-            return word;
-        }
+        COUNTEREXAMPLE;
     }
 
     /** How a run ends. */
-    public enum Ending {
+    public enum Ending implements Worded {
         /** All tasks done and on a dock (when required). */
-        COMPLETE("complete"),
+        COMPLETE,
         /** The battery fell below the reserve floor at the last step. */
-        BELOW_FLOOR("below-floor"),
+        BELOW_FLOOR,
         /** The last step put the robot into an avoided zone. */
-        AVOIDED_ZONE("avoided-zone"),
+        AVOIDED_ZONE,
         /** The last step returned to an earlier situation: the disturbance can repeat this forever. */
-        REPEATS("repeats"),
+        REPEATS,
         /** The policy has no action for the situation reached. */
-        NO_POLICY("no-policy");
-
-        private final String word;
-
-        Ending(String word) {
-            this.word = word;
-        }
-
-        public String word() {
-            return word;
-        }
+        NO_POLICY;
     }
 
     /** The last row. */

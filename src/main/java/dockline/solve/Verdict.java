@@ -1,22 +1,13 @@
 package dockline.solve;
 
+import dockline.model.Worded;
+
 /** The answer to the threshold question for a mission. */
-public enum Verdict {
+public enum Verdict implements Worded {
     /** The robot has a policy that completes the mission within the floor under every allowed disturbance. */
-    GUARANTEED("guaranteed"),
+    GUARANTEED,
     /** Some sequence of allowed disturbances defeats every policy. */
-    NOT_GUARANTEED("not-guaranteed");
-
-    private final String word;
-
-    Verdict(String word) {
-        this.word = word;
-    }
-
-    /** The word used in JSON and reports. */
-    public String word() {
-        return word;
-    }
+    NOT_GUARANTEED;
 
     public static Verdict of(boolean guaranteed) {
         return guaranteed ? GUARANTEED : NOT_GUARANTEED;

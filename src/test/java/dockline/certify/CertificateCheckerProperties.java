@@ -113,7 +113,7 @@ class CertificateCheckerProperties {
         int start = mc.needAtStart();
         Policy good = mc.policy(start);
         assertThat(CertificateChecker.check(a, good, floor, start).ok()).isTrue();
-        BruteForce bf = new BruteForce(a, floor);
+        BruteForce bf = new BruteForce(m, floor);
         List<PolicyEntry> entries = good.entries();
         java.util.Random r = new java.util.Random(seed);
         int offset = r.nextInt(Math.max(1, entries.size()));
@@ -144,8 +144,8 @@ class CertificateCheckerProperties {
         for (int e = a.outBegin(d); e < a.outEnd(d); e++) {
             int l = Math.min(cap, level + a.weight(e));
             int u = a.target(e);
-            int m2 = bf.step(mask, a.cellZones(a.cell(u)));
-            if (l < floor || m2 < 0 || !bf.wins(u, m2, l, true)) {
+            int m2 = bf.book().step(mask, a.cellOf(u));
+            if (l < floor || m2 < 0 || !bf.wins(a.cellOf(u), a.budgetLeft(u), m2, l)) {
                 return true;
             }
         }

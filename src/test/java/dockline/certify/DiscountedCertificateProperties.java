@@ -202,7 +202,7 @@ class DiscountedCertificateProperties {
             Statistics.collect("explicit game too large");
             return;
         }
-        BruteForce battery = new BruteForce(arena, floor);
+        BruteForce battery = new BruteForce(m, floor);
         List<PolicyEntry> entries = good.entries();
         int offset = r.nextInt(Math.max(1, entries.size()));
         for (int j = 0; j < entries.size(); j++) {
@@ -240,8 +240,8 @@ class DiscountedCertificateProperties {
         for (int f = a.outBegin(dv); f < a.outEnd(dv); f++) {
             int l = Math.min(cap, e.level() + a.weight(f));
             int u = a.target(f);
-            int m2 = bf.step(e.progress(), a.cellZones(a.cell(u)));
-            if (l < floor || m2 < 0 || !bf.wins(u, m2, l, true)) {
+            int m2 = bf.book().step(e.progress(), a.cellOf(u));
+            if (l < floor || m2 < 0 || !bf.wins(a.cellOf(u), a.budgetLeft(u), m2, l)) {
                 return false;
             }
         }

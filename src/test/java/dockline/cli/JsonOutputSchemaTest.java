@@ -129,6 +129,22 @@ class JsonOutputSchemaTest {
         command("validate", ExitCodes.BAD_INPUT, "validate", bad.toString(), "--json");
     }
 
+    /** {@code import --json}: the summary of the demo image, and the problems of an image that is not one. */
+    @Test
+    void import_summaryAndProblems() throws Exception {
+        Path out = dir.resolve("annex.yaml");
+        JsonNode ok = command("import", ExitCodes.OK, "import", "maps/depot-annex.pgm", "--pixel-size", "0.1",
+                "--cell-size", "0.3", "--robot-radius", "0.25", "--docks", "36,13", "--out", out.toString(), "--json");
+        assertThat(ok.get("imported").asBoolean()).isTrue();
+        Path bad = dir.resolve("bad.pgm");
+        Files.writeString(bad, "P2\n2 2\n0\n0 0 0 0\n");
+        JsonNode no = command("import", ExitCodes.BAD_INPUT, "import", bad.toString(), "--pixel-size", "0.1",
+                "--cell-size", "0.3", "--out", dir.resolve("no.yaml").toString(), "--json");
+        assertThat(no.get("imported").asBoolean()).isFalse();
+        assertThat(no.get("problems")).isNotEmpty();
+        assertThat(Files.exists(dir.resolve("no.yaml"))).isFalse();
+    }
+
     /** {@code view --json} with a file that cannot be opened: the messages as JSON, no window. */
     @Test
     void view_messages() throws Exception {

@@ -34,11 +34,11 @@ class MarginsProperties {
         int start = m.startUnits();
         int high = -1;
         for (int f = 0; f <= start; f++) {
-            if (new BruteForce(a, f).needAtStart() <= start) {
+            if (new BruteForce(m, f).needAtStart() <= start) {
                 high = f;
             }
         }
-        int need = new BruteForce(a, m.reserveUnits()).needAtStart();
+        int need = new BruteForce(m, m.reserveUnits()).needAtStart();
         assertThat(r.fixpoint().highestReserveUnits()).isEqualTo(high < 0 ? OptionalInt.empty() : OptionalInt.of(high));
         assertThat(r.fixpoint().lowestStartUnits())
                 .isEqualTo(need == Integer.MAX_VALUE ? OptionalInt.empty() : OptionalInt.of(need));
@@ -52,7 +52,7 @@ class MarginsProperties {
      */
     @Property(tries = 150)
     void suggestions_workAndAreMinimal(@ForAll("missions") Mission m) {
-        if (new BruteForce(ArenaCompiler.compile(m), m.reserveUnits()).needAtStart() <= m.startUnits()) {
+        if (new BruteForce(m, m.reserveUnits()).needAtStart() <= m.startUnits()) {
             assertThat(Suggestions.find(m)).isEmpty();
             return;
         }
@@ -77,6 +77,6 @@ class MarginsProperties {
 
     private static boolean wins(Mission m, int floor, int start, int budget) {
         Mission v = budget >= 0 ? m.withBudget(budget) : m;
-        return start >= floor && new BruteForce(ArenaCompiler.compile(v), floor).needAtStart() <= start;
+        return start >= floor && new BruteForce(v, floor).needAtStart() <= start;
     }
 }

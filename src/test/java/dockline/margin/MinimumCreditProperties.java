@@ -22,7 +22,7 @@ class MinimumCreditProperties {
     }
 
     /**
-     * Oracle: the brute-force attractor on the explicit (vertex, tasks, level) game (textbook
+     * Oracle: the brute-force attractor on the explicit (cell, events left, tasks, level) game, read from the model records (textbook
      * definition, Grädel, Thomas, Wilke 2002, ch. 2): the fixpoint's need at the start is the least
      * level the brute force wins with, for every floor.
      */
@@ -31,7 +31,7 @@ class MinimumCreditProperties {
         Arena a = ArenaCompiler.compile(m);
         for (int floor = 0; floor <= 4; floor++) {
             MinimumCredit mc = MinimumCredit.solve(a, floor);
-            BruteForce bf = new BruteForce(a, floor);
+            BruteForce bf = new BruteForce(m, floor);
             assertThat(mc.needAtStart()).as("floor %d", floor).isEqualTo(bf.needAtStart());
             if (floor == 1) {
                 net.jqwik.api.statistics.Statistics.collect(mc.needAtStart() == MinimumCredit.INFINITE ? "no level wins"
@@ -49,7 +49,7 @@ class MinimumCreditProperties {
         Arena a = ArenaCompiler.compile(m);
         int floor = m.reserveUnits();
         MinimumCredit mc = MinimumCredit.solve(a, floor);
-        BruteForce bf = new BruteForce(a, floor);
+        BruteForce bf = new BruteForce(m, floor);
         dockline.goal.GoalAutomaton goal = dockline.goal.GoalAutomaton.of(m);
         for (int v = 0; v < a.robotCount(); v++) {
             for (int g = 0; g < goal.stateCount(); g++) {
@@ -59,7 +59,7 @@ class MinimumCreditProperties {
                 }
                 int mask = goal.progressMask(g);
                 for (int l = 0; l <= m.capacityUnits(); l++) {
-                    assertThat(bf.wins(v, mask, l, true)).as("vertex %d mask %d level %d need %d", v, mask, l, need)
+                    assertThat(bf.wins(a.cellOf(v), a.budgetLeft(v), mask, l)).as("vertex %d mask %d level %d need %d", v, mask, l, need)
                             .isEqualTo(l >= need);
                 }
             }

@@ -53,11 +53,10 @@ class PlanReplaysProperties {
         }
         Statistics.collect(r.ending().word() + (mr.bestEffortFloor() >= 0 ? " (best effort)" : " (greedy)"), choice);
         ReplayStep last = r.last();
-        BruteForce bf = new BruteForce(an.arena(), floor);
-        int v = an.arena().robotVertex(last.cell().index(an.arena().width()), last.budgetLeft());
+        BruteForce bf = new BruteForce(m, floor);
         boolean breach = r.ending() == Replay.Ending.BELOW_FLOOR && last.batteryUnits() < floor;
         boolean avoided = r.ending() == Replay.Ending.AVOIDED_ZONE;
-        boolean stuck = r.ending() == Replay.Ending.REPEATS && !bf.wins(v, last.progressMask(), last.batteryUnits(), true);
+        boolean stuck = r.ending() == Replay.Ending.REPEATS && !bf.wins(last.cell(), last.budgetLeft(), last.progressMask(), last.batteryUnits());
         assertThat(breach || avoided || stuck).as(String.join("\n", r.explanation())).isTrue();
         if (mr.bestEffortFloor() >= 0) {
             assertThat(r.ending()).isEqualTo(Replay.Ending.BELOW_FLOOR);

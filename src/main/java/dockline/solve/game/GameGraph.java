@@ -1,6 +1,6 @@
 package dockline.solve.game;
 
-import java.util.Arrays;
+import dockline.util.Csr;
 
 /**
  * A finite two-player turn-based game graph with a reachability target, as the solvers read it:
@@ -90,20 +90,8 @@ public final class GameGraph {
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
         // reverse CSR by counting sort on the target: linear time, sources come out in increasing order
-        this.inStart = new int[n + 1];
-        for (int e = 0; e < m; e++) {
-            inStart[edgeTarget[e] + 1]++;
-        }
-        for (int v = 0; v < n; v++) {
-            inStart[v + 1] += inStart[v];
-        }
-        this.inSource = new int[m];
-        int[] fill = Arrays.copyOf(inStart, n);
-        for (int v = 0; v < n; v++) {
-            for (int e = outStart[v]; e < outStart[v + 1]; e++) {
-                inSource[fill[edgeTarget[e]]++] = v;
-            }
-        }
+        this.inStart = Csr.reverseOffsets(n, m, edgeTarget);
+        this.inSource = Csr.reverseSources(n, outStart, edgeTarget, inStart);
     }
 
     private static byte[] ownerBytes(boolean[] robotOwned) {

@@ -1,5 +1,6 @@
 package dockline.solve.rounds;
 
+import dockline.util.Csr;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.goal.LapAutomaton;
@@ -221,20 +222,8 @@ public final class RoundsProduct {
         edgeArena = ea.toArray();
         int n = vArena.length;
         int m = edgeTarget.length;
-        inStart = new int[n + 1];
-        for (int e = 0; e < m; e++) {
-            inStart[edgeTarget[e] + 1]++;
-        }
-        for (int v = 0; v < n; v++) {
-            inStart[v + 1] += inStart[v];
-        }
-        inSource = new int[m];
-        int[] fill = java.util.Arrays.copyOf(inStart, n);
-        for (int v = 0; v < n; v++) {
-            for (int e = outStart[v]; e < outStart[v + 1]; e++) {
-                inSource[fill[edgeTarget[e]]++] = v;
-            }
-        }
+        inStart = Csr.reverseOffsets(n, m, edgeTarget);
+        inSource = Csr.reverseSources(n, outStart, edgeTarget, inStart);
     }
 
     private void check(long vertices, long edges, long budgetBytes) {

@@ -83,18 +83,18 @@ class ChargingAgreementProperties {
         GoalAutomaton goal = GoalAutomaton.of(m);
         int cap = m.capacityUnits();
         int floor = Math.min(m.reserveUnits(), cap);
-        BruteForce bf = new BruteForce(arena, floor);
+        BruteForce bf = new BruteForce(m, floor);
         ChargingSolver.Values v = new ChargingSolver(arena, goal).solve(cap - floor);
         int masks = 1 << goal.taskCount();
         for (int r = 0; r < arena.robotCount(); r++) {
             for (int mask = 0; mask < masks; mask++) {
                 int g = goal.stateOfMask(mask);
-                if (g == GoalAutomaton.REJECT || bf.step(mask, arena.cellZones(arena.cell(r))) != mask) {
+                if (g == GoalAutomaton.REJECT || bf.book().step(mask, arena.cellOf(r)) != mask) {
                     continue; // only positions a play can meet: the cell's own tasks are already counted
                 }
                 int expected = ChargingSolver.INFINITE;
                 for (int l = cap; l >= floor; l--) {
-                    if (bf.wins(r, mask, l, false)) {
+                    if (bf.wins(arena.cellOf(r), arena.budgetLeft(r), mask, l)) {
                         expected = l - floor;
                     }
                 }

@@ -12,7 +12,7 @@ import dockline.bench.TinyMissions;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
-import dockline.solve.BruteForceReserve;
+import dockline.fixtures.BruteForce;
 import dockline.solve.ProductOptions;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.ProductGame;
@@ -33,20 +33,20 @@ class MinChargeSolverTest {
      * solution of the explicit reserve game: the robot wins at level l iff l − floor ≥ need.
      */
     @Property(tries = 300)
-    void need_matchesBruteForceReserveGame_atEveryLevel(@ForAll long seed) {
+    void need_matchesBruteForceGame_atEveryLevel(@ForAll long seed) {
         Mission m = TinyMissions.random(seed, false);
         Arena arena = ArenaCompiler.compile(m);
         GoalAutomaton goal = GoalAutomaton.of(m);
         MinChargeSolver fast = new MinChargeSolver(arena, goal);
         MinChargeSolver.Values all = fast.solveAll();
-        BruteForceReserve brute = new BruteForceReserve(arena, goal);
+        BruteForce brute = new BruteForce(m, m.reserveUnits());
         for (int v = 0; v < arena.robotCount(); v++) {
             for (int g = 0; g < goal.stateCount(); g++) {
                 int need = all.need(v, g);
                 for (int l = brute.floor(); l <= brute.cap(); l++) {
                     boolean fastWins = need != MinChargeSolver.INFINITE && need <= l - brute.floor();
                     assertThat(fastWins).as("vertex %d goal %d level %d need %d", v, g, l, need)
-                            .isEqualTo(brute.winsAt(v, g, l));
+                            .isEqualTo(brute.wins(arena.cellOf(v), arena.budgetLeft(v), goal.progressMask(g), l));
                 }
             }
         }
@@ -165,7 +165,7 @@ class MinChargeSolverTest {
         GoalAutomaton goal = GoalAutomaton.of(m);
         if (MinChargeSolver.applicable(arena, goal)) {
             assertThat(new MinChargeSolver(arena, goal).decide().guaranteed())
-                    .isEqualTo(new BruteForceReserve(arena, goal).guaranteed());
+                    .isEqualTo(new BruteForce(m, m.reserveUnits()).guaranteed());
         } else {
             assertThatThrownBy(() -> new MinChargeSolver(arena, goal)).isInstanceOf(IllegalArgumentException.class);
         }

@@ -10,7 +10,7 @@ import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
-import dockline.solve.BruteForceReserve;
+import dockline.fixtures.BruteForce;
 import dockline.solve.WinningRegion;
 import java.nio.file.Path;
 import net.jqwik.api.Example;
@@ -19,7 +19,7 @@ import net.jqwik.api.Property;
 
 /**
  * The implicit route of {@link ReserveSolver#analyse} ({@link ReserveOptions.Route#IMPLICIT}) on random
- * small missions. Oracles: the brute-force solver {@link BruteForceReserve} (the textbook attractor
+ * small missions. Oracles: the brute-force solver {@link BruteForce} (the textbook attractor
  * characterisation, Grädel, Thomas, Wilke (eds.), 2002, "Automata, Logics, and Infinite Games", ch. 2)
  * for the verdict, and the independent {@link CertificateChecker} for the policy and its worst case
  * (the checker rebuilds the closed loop from the policy rows alone and computes its own minimum).
@@ -37,7 +37,7 @@ class ImplicitRouteProperties {
         ReserveAnalysis ref = ReserveSolver.analyse(m, ReserveOptions.defaults().withHighestReserve(false)
                 .withRoute(ReserveOptions.Route.PRODUCT));
         Arena arena = ArenaCompiler.compile(m);
-        BruteForceReserve brute = new BruteForceReserve(arena, GoalAutomaton.of(m));
+        BruteForce brute = new BruteForce(m, m.reserveUnits());
         assertThat(imp.guaranteed()).isEqualTo(brute.guaranteed());
         assertThat(imp.verdict()).isEqualTo(ref.verdict());
         assertThat(imp.policy().isPresent()).isEqualTo(imp.guaranteed());

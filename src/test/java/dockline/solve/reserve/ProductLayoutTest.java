@@ -8,7 +8,7 @@ import dockline.bench.TinyMissions;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
-import dockline.solve.BruteForceReserve;
+import dockline.fixtures.BruteForce;
 import dockline.solve.ProductOptions;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.CompactAttractorSolver;
@@ -73,7 +73,7 @@ class ProductLayoutTest {
         boolean expected = ref.winning(game.start());
         assertThat(imp.solve(false).startWon()).isEqualTo(expected);
         assertThat(imp.solve(true).startWon()).isEqualTo(expected);
-        assertThat(new BruteForceReserve(arena, goal).guaranteed()).isEqualTo(expected);
+        assertThat(new BruteForce(m, m.reserveUnits()).guaranteed()).isEqualTo(expected);
         if (!game.isSink(game.start())) {
             assertThat(imp.bfs().wonVertices()).isEqualTo(game.vertexCount() - 2L);
             boolean[] won = imp.wonFlags();
