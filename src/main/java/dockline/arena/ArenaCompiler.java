@@ -88,25 +88,46 @@ public final class ArenaCompiler {
     /**
      * Heap the compile needs at its peak per robot vertex (free cell x budget level), with the growth
      * copies of its lists: measured on a 2048 x 2048 floor (4.2 million free cells, budget 0: 25 million
-     * arena vertices, 42 million edges) it retained 1.4 GB, failed with 2 GB of heap and passed with 4 GB.
+     * arena vertices, 42 million edges) it retained 1.4 GB, failed with 2 GB of heap and passed with 4 GB;
+     * the whole {@code check} of that floor (fast path) ran out of memory with 3 GB, so the figure also
+     * leaves room for the arena's life after the compile: the check is refused up front rather than
+     * running out later.
      */
-    static final long PEAK_BYTES_PER_ROBOT_VERTEX = 640;
+    static final long PEAK_BYTES_PER_ROBOT_VERTEX = 800;
 
     /**
      * Refuses, before anything is allocated, an arena whose estimated peak is more than the JVM's
      * maximum heap: the refusal names the size and the heap, instead of an out-of-memory error midway.
      */
     public static void refuseIfTooLarge(int freeCells, int budgetLevels) {
+        refuseIfTooLarge(freeCells, freeCells, budgetLevels);
+    }
+
+    /** Heap per cell of the map (walls too) for the per-cell tables built before the vertices. */
+    static final long BYTES_PER_CELL = 64;
+
+    /**
+     * As {@link #refuseIfTooLarge(int, int)}, counting the per-cell tables of all {@code cells} of the plan.
+     * Past the int numbering of the arena's vertices (about 6 per robot position) it is refused for
+     * that, with its own advice, when the memory alone would allow it.
+     */
+    public static void refuseIfTooLarge(int cells, int freeCells, int budgetLevels) {
         long robots = (long) freeCells * budgetLevels;
-        long need = robots * PEAK_BYTES_PER_ROBOT_VERTEX;
+        long need = robots * PEAK_BYTES_PER_ROBOT_VERTEX + (long) cells * BYTES_PER_CELL;
         long heap = Runtime.getRuntime().maxMemory();
-        if (need > heap || robots > Integer.MAX_VALUE / 8) {
-            throw new ResourceLimitException("the map's move graph would have " + robots + " robot positions ("
-                    + freeCells + " free cells x " + budgetLevels + " disturbance states) and need about "
-                    + (need >> 20) + " MB while it is built, more than the JVM's maximum heap of " + (heap >> 20)
+        String size = "the map's move graph would have " + robots + " robot positions (" + freeCells
+                + " free cells x " + budgetLevels + " disturbance states) and need about " + (need >> 20)
+                + " MB while it is built";
+        if (need > heap) {
+            throw new ResourceLimitException(size + ", more than the JVM's maximum heap of " + (heap >> 20)
                     + " MB (set by -Xmx)", "give the JVM more memory (java -Xmx" + Math.max(1, (need >> 30) + 1)
                     + "g ...), or make the game smaller: a smaller disturbance budget K or a coarser cell size"
                     + " (fewer cells)");
+        }
+        if (robots > Integer.MAX_VALUE / 8) {
+            throw new ResourceLimitException(size + ", more vertices (about 6 per robot position) than the arena's"
+                    + " int numbering holds (" + Integer.MAX_VALUE + ")", "make the game smaller: a smaller"
+                    + " disturbance budget K or a coarser cell size (fewer cells); more memory does not help here");
         }
     }
 
@@ -120,6 +141,17 @@ public final class ArenaCompiler {
         int budget = map.disturbances().budget();
         boolean eight = robot.neighbourhood() == Neighbourhood.EIGHT;
         int dirs = eight ? 8 : 4;
+        // refuse what cannot fit before the per-cell tables are allocated (they alone are about 60 bytes a
+        // cell: 250 MB on the largest plan the reader accepts); the states counted later may refuse again
+        int freeCells = 0;
+        for (int y = 0; y < h; y++) {
+            for (int x = 0; x < w; x++) {
+                if (map.terrainAt(new Cell(x, y)).free()) {
+                    freeCells++;
+                }
+            }
+        }
+        refuseIfTooLarge(cells, freeCells, budget + 1);
 
         boolean[] free = new boolean[cells];
         boolean[] dock = new boolean[cells];
@@ -219,7 +251,7 @@ public final class ArenaCompiler {
                 throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit, false);
             }
         }
-        refuseIfTooLarge(freeCount, kk);
+        refuseIfTooLarge(cells, freeCount, kk);
         int robotCount = Math.multiplyExact(freeCount, kk);
 
         IntArrayList vCell = new IntArrayList(robotCount * 6);
