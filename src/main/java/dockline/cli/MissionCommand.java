@@ -21,8 +21,8 @@ abstract class MissionCommand extends CommandBase {
     public final Integer call() {
         PrintWriter out = out();
         PrintWriter err = err();
-        try (ProgressLine.Frame progress = ProgressLine.open(err, jsonRequested(), quiet.quiet)) {
-            return run(out, progress.err());
+        try (ProgressLine.Frame progress = ProgressLine.open(out, err, jsonRequested(), quiet.quiet)) {
+            return run(progress.out(), progress.err());
         } catch (MissionOptions.BadInput e) {
             return ExitCodes.BAD_INPUT;
         } finally {

@@ -16,7 +16,7 @@ import java.util.function.LongSupplier;
  * ({@code \r}): the phase, its per cent and the time since the command began, e.g.
  * {@code dockline: solving the game at floor 83 units  42 %  12.5 s}. At most one update every
  * {@link #INTERVAL_NANOS} (4 lines a second), and the line is erased before anything else is
- * written to standard error and when the work ends. Only when standard error is a terminal, never
+ * written to standard output or standard error and when the work ends. Only when standard error is a terminal, never
  * with {@code --json} (whose errors are collected from standard error) and never with {@code --quiet}.
  */
 final class ProgressLine implements ProgressListener {
@@ -65,12 +65,22 @@ final class ProgressLine implements ProgressListener {
     static final class Frame implements AutoCloseable {
         private final ProgressLine line;
         private final Progress.Scope scope;
+        private final PrintWriter out;
         private final PrintWriter err;
 
-        private Frame(ProgressLine line, PrintWriter err) {
+        private Frame(ProgressLine line, PrintWriter out, PrintWriter err) {
             this.line = line;
             this.scope = line == null ? null : Progress.listen(line);
+            this.out = out;
             this.err = err;
+        }
+
+        /**
+         * The writer the command prints its results to: it erases the progress line first (standard
+         * output and standard error are usually the same terminal).
+         */
+        PrintWriter out() {
+            return out;
         }
 
         /** The writer the command prints its errors to: it erases the progress line first. */
@@ -88,12 +98,12 @@ final class ProgressLine implements ProgressListener {
     }
 
     /** Opens the frame: a progress line on {@code err} when {@link #wanted}, else nothing. */
-    static Frame open(PrintWriter err, boolean json, boolean quiet) {
+    static Frame open(PrintWriter out, PrintWriter err, boolean json, boolean quiet) {
         if (!wanted(json, quiet)) {
-            return new Frame(null, err);
+            return new Frame(null, out, err);
         }
         ProgressLine line = new ProgressLine(err, System::nanoTime);
-        return new Frame(line, new PrintWriter(line.guard(err), true));
+        return new Frame(line, new PrintWriter(line.guard(out), true), new PrintWriter(line.guard(err), true));
     }
 
     @Override

@@ -121,7 +121,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         ViewData data;
-        try (ProgressLine.Frame progress = ProgressLine.open(err, json, quiet.quiet)) {
+        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
             data = new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
             if (!(e.getCause() instanceof dockline.model.ResourceLimitException)) {

@@ -120,6 +120,23 @@ class ProgressLineTest {
     }
 
     @Test
+    void resultsOnStandardOutputEraseTheLineFirst() {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        ProgressLine.terminal = () -> true;
+        try (ProgressLine.Frame f = ProgressLine.open(new java.io.PrintWriter(out), new java.io.PrintWriter(err), false,
+                false)) {
+            Progress.phase("solving", 10).at(5);
+            String shown = err.toString();
+            assertThat(shown).startsWith("\rdockline: solving  0 %");
+            f.out().println("GUARANTEED");
+            // the line was erased on standard error before the result went to standard output
+            assertThat(err.toString()).isEqualTo(shown + "\r" + " ".repeat(shown.length() - 1) + "\r");
+            assertThat(out.toString()).isEqualTo("GUARANTEED" + System.lineSeparator());
+        }
+    }
+
+    @Test
     void onATerminalCheckShowsProgressAndErasesIt() {
         ProgressLine.terminal = () -> true;
         CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/night-round.yaml");
