@@ -246,7 +246,7 @@ public final class ReserveSolver {
      * (property-tested), at half a byte per triple of the full product instead of about 64 bytes per
      * reachable vertex; no policy comes out of it, so the verdict is not certified.
      *
-     * @throws ProductTooLargeException if the implicit numbering or its counters do not fit the budget
+     * @throws ProductTooLargeException if its counters (half a byte per slot of the long numbering) do not fit the budget
      */
     public static ImplicitVerdict decideImplicitly(Mission mission, ProductOptions options) {
         long t0 = System.nanoTime();
