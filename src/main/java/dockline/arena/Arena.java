@@ -15,7 +15,8 @@ import dockline.model.Mission;
  * robot edge goes to a disturbance vertex and carries weight 0; every disturbance edge (an
  * outcome) goes to a robot vertex and carries the energy delta in units (negative = consumption,
  * positive = charging) and the event that caused it (or none). Task labels live on cells:
- * {@link #cellZones(int)} is a bit mask over the map's zones in file order.
+ * {@link #cellZones(int)} is a bit mask of the zones the mission's tasks name
+ * ({@link dockline.model.ZoneLabels}: one bit per task zone, one for all avoided zones).
  *
  * <p>Numbering is deterministic: robot vertex of free-cell slot s (row-major order of free cells)
  * and disturbance state d ({@link DisturbanceStates}) is {@code s * D + d} for D states; without lasting
@@ -310,7 +311,7 @@ public final class Arena {
         return inEdge[i];
     }
 
-    /** Bit mask of the map zones (file order) that contain the cell. */
+    /** The cell's label bits ({@link dockline.model.ZoneLabels}): the task zones it is in, and the avoid bit. */
     public long cellZones(int cellIndex) {
         return cellZones[cellIndex];
     }

@@ -11,8 +11,9 @@ import dockline.model.Mission;
 import dockline.model.Neighbourhood;
 import dockline.model.RobotProfile;
 import dockline.model.Terrain;
-import dockline.model.Zone;
+import dockline.model.ZoneLabels;
 import dockline.util.IntArrayList;
+import dockline.util.Progress;
 import java.math.BigDecimal;
 import java.util.Arrays;
 import java.util.List;
@@ -40,9 +41,6 @@ public final class ArenaCompiler {
      * the final forward and reverse CSR arrays (measured on the generated buildings, rounded up).
      */
     static final long BYTES_PER_ROBOT_VERTEX = 600;
-
-    /** Most zones a map may have (zone sets are 64-bit masks). */
-    public static final int MAX_ZONES = 63;
 
     private ArenaCompiler() {
     }
@@ -84,31 +82,52 @@ public final class ArenaCompiler {
      * Builds the arena.
      *
      * @throws IllegalArgumentException if the mission breaks an invariant the loader checks
-     *                                  (more than {@link #MAX_ZONES} zones, start on a wall, a surface without energy)
+     *                                  (a task naming an unknown zone, start on a wall, a surface without energy)
      * @throws ArithmeticException      if the arena would have more than {@code Integer.MAX_VALUE} vertices or edges
      */
     /**
      * Heap the compile needs at its peak per robot vertex (free cell x budget level), with the growth
      * copies of its lists: measured on a 2048 x 2048 floor (4.2 million free cells, budget 0: 25 million
-     * arena vertices, 42 million edges) it retained 1.4 GB, failed with 2 GB of heap and passed with 4 GB.
+     * arena vertices, 42 million edges) it retained 1.4 GB, failed with 2 GB of heap and passed with 4 GB;
+     * the whole {@code check} of that floor (fast path) ran out of memory with 3 GB, so the figure also
+     * leaves room for the arena's life after the compile: the check is refused up front rather than
+     * running out later.
      */
-    static final long PEAK_BYTES_PER_ROBOT_VERTEX = 640;
+    static final long PEAK_BYTES_PER_ROBOT_VERTEX = 800;
 
     /**
      * Refuses, before anything is allocated, an arena whose estimated peak is more than the JVM's
      * maximum heap: the refusal names the size and the heap, instead of an out-of-memory error midway.
      */
     public static void refuseIfTooLarge(int freeCells, int budgetLevels) {
+        refuseIfTooLarge(freeCells, freeCells, budgetLevels);
+    }
+
+    /** Heap per cell of the map (walls too) for the per-cell tables built before the vertices. */
+    static final long BYTES_PER_CELL = 64;
+
+    /**
+     * As {@link #refuseIfTooLarge(int, int)}, counting the per-cell tables of all {@code cells} of the plan.
+     * Past the int numbering of the arena's vertices (about 6 per robot position) it is refused for
+     * that, with its own advice, when the memory alone would allow it.
+     */
+    public static void refuseIfTooLarge(int cells, int freeCells, int budgetLevels) {
         long robots = (long) freeCells * budgetLevels;
-        long need = robots * PEAK_BYTES_PER_ROBOT_VERTEX;
+        long need = robots * PEAK_BYTES_PER_ROBOT_VERTEX + (long) cells * BYTES_PER_CELL;
         long heap = Runtime.getRuntime().maxMemory();
-        if (need > heap || robots > Integer.MAX_VALUE / 8) {
-            throw new ResourceLimitException("the map's move graph would have " + robots + " robot positions ("
-                    + freeCells + " free cells x " + budgetLevels + " disturbance states) and need about "
-                    + (need >> 20) + " MB while it is built, more than the JVM's maximum heap of " + (heap >> 20)
+        String size = "the map's move graph would have " + robots + " robot positions (" + freeCells
+                + " free cells x " + budgetLevels + " disturbance states) and need about " + (need >> 20)
+                + " MB while it is built";
+        if (need > heap) {
+            throw new ResourceLimitException(size + ", more than the JVM's maximum heap of " + (heap >> 20)
                     + " MB (set by -Xmx)", "give the JVM more memory (java -Xmx" + Math.max(1, (need >> 30) + 1)
                     + "g ...), or make the game smaller: a smaller disturbance budget K or a coarser cell size"
                     + " (fewer cells)");
+        }
+        if (robots > Integer.MAX_VALUE / 8) {
+            throw new ResourceLimitException(size + ", more vertices (about 6 per robot position) than the arena's"
+                    + " int numbering holds (" + Integer.MAX_VALUE + ")", "make the game smaller: a smaller"
+                    + " disturbance budget K or a coarser cell size (fewer cells); more memory does not help here");
         }
     }
 
@@ -122,9 +141,17 @@ public final class ArenaCompiler {
         int budget = map.disturbances().budget();
         boolean eight = robot.neighbourhood() == Neighbourhood.EIGHT;
         int dirs = eight ? 8 : 4;
-        if (map.zones().size() > MAX_ZONES) {
-            throw new IllegalArgumentException("a map may have at most " + MAX_ZONES + " zones");
+        // refuse what cannot fit before the per-cell tables are allocated (they alone are about 60 bytes a
+        // cell: 250 MB on the largest plan the reader accepts); the states counted later may refuse again
+        int freeCells = 0;
+        for (int y = 0; y < h; y++) {
+            for (int x = 0; x < w; x++) {
+                if (map.terrainAt(new Cell(x, y)).free()) {
+                    freeCells++;
+                }
+            }
         }
+        refuseIfTooLarge(cells, freeCells, budget + 1);
 
         boolean[] free = new boolean[cells];
         boolean[] dock = new boolean[cells];
@@ -156,15 +183,8 @@ public final class ArenaCompiler {
                 slotCell[slot[c]] = c;
             }
         }
-        long[] zones = new long[cells];
-        List<Zone> zs = map.zones();
-        for (int i = 0; i < zs.size(); i++) {
-            for (Cell c : zs.get(i).cells()) {
-                if (map.inside(c)) {
-                    zones[c.index(w)] |= 1L << i;
-                }
-            }
-        }
+        // only the zones the tasks name get a label bit, so the map may have any number of zones
+        long[] zones = ZoneLabels.of(mission).cellMasks(map);
         // event coverage per cell: rule index (first rule wins; drag takes the largest extra)
         List<EventRule> rules = map.disturbances().rules();
         int[] doorRule = filled(cells);
@@ -231,7 +251,7 @@ public final class ArenaCompiler {
                 throw new ArenaTooLargeException(freeCount, kk, robots, bytes, limit, false);
             }
         }
-        refuseIfTooLarge(freeCount, kk);
+        refuseIfTooLarge(cells, freeCount, kk);
         int robotCount = Math.multiplyExact(freeCount, kk);
 
         IntArrayList vCell = new IntArrayList(robotCount * 6);
@@ -251,7 +271,11 @@ public final class ArenaCompiler {
         IntArrayList robotOutStart = new IntArrayList(robotCount + 1);
         int next = robotCount;
         int[] nb = new int[8];
+        Progress.Tracker progress = Progress.phase("building the move graph", 2L * robotCount);
         for (int r = 0; r < robotCount; r++) {
+            if ((r & (Progress.EVERY - 1)) == 0) {
+                progress.at(r);
+            }
             robotOutStart.add(next - robotCount);
             int c = vCell.get(r);
             int n = closable ? neighbours(c, w, h, free, dirs, nb, states, vState.get(r))
@@ -296,6 +320,10 @@ public final class ArenaCompiler {
             }
         }
         for (int d = 0; d < distCount; d++) {
+            if ((d & (Progress.EVERY - 1)) == 0) {
+                // the outcomes take the second half; distCount is about 5 x robotCount
+                progress.at(robotCount + (long) d * robotCount / distCount);
+            }
             outStart.add(eTarget.size());
             int owner = ownerOfD[d];
             int c = vCell.get(owner);
@@ -378,6 +406,7 @@ public final class ArenaCompiler {
         for (int d = 0; d < distCount; d++) {
             stateArr[robotCount + d] = vState.get(ownerOfD[d]);
         }
+        progress.done();
         int startVertex = slot[start.index(w)] * kk + budget;
         return new Arena(mission, w, h, budget, states, stateArr, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
                 aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),

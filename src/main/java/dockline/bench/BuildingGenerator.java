@@ -45,7 +45,7 @@ public final class BuildingGenerator {
     public static final int MIN_SIDE = 32;
     /** Largest side accepted (a 4096² plan is 16 M characters). */
     public static final int MAX_SIDE = 4096;
-    /** Most rooms that get a zone name (zone sets are 64-bit masks; see ArenaCompiler.MAX_ZONES). */
+    /** Most rooms that get a zone name (any number would do: only the zones a mission names get a label bit; 40 keeps the maps small). */
     public static final int MAX_ROOM_ZONES = 40;
 
     public static final char WALL = '#';

@@ -4,6 +4,7 @@ import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
+import dockline.model.ZoneLabels;
 import dockline.policy.Policy;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
@@ -74,26 +75,25 @@ public final class PatrolCertificateChecker {
             this.capacity = m.capacityUnits();
             BuildingMap map = m.map();
             List<String> cps = m.tasks().patrol();
+            // the cells' label bits are the mission's ZoneLabels: one per checkpoint zone, one for every avoided zone
+            ZoneLabels labels = ZoneLabels.of(m.tasks());
             this.checkpointBits = new long[cps.size()];
             for (int i = 0; i < cps.size(); i++) {
-                checkpointBits[i] = bit(map, cps.get(i));
+                known(map, cps.get(i));
+                checkpointBits[i] = labels.bit(cps.get(i));
             }
-            long av = 0;
             for (String a : m.tasks().avoid()) {
-                av |= bit(map, a);
+                known(map, a);
             }
-            this.avoidBits = av;
+            this.avoidBits = labels.avoidMask();
             this.full = (1 << cps.size()) - 1;
             this.perLap = map.disturbances().budgetPerLap();
         }
 
-        private static long bit(BuildingMap map, String zone) {
-            for (int i = 0; i < map.zones().size(); i++) {
-                if (map.zones().get(i).name().equals(zone)) {
-                    return 1L << i;
-                }
+        private static void known(BuildingMap map, String zone) {
+            if (map.zone(zone).isEmpty()) {
+                throw new IllegalArgumentException("no zone '" + zone + "'");
             }
-            throw new IllegalArgumentException("no zone '" + zone + "'");
         }
 
         /** The lap mask after occupying a cell, or -1 in an avoided zone. */

@@ -3,7 +3,7 @@ package dockline.certify;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
 import dockline.model.Tasks;
-import java.util.List;
+import dockline.model.ZoneLabels;
 
 /**
  * The checker's own task bookkeeping, read straight from the mission's tasks (maps/README.md, "Game
@@ -41,25 +41,24 @@ final class TaskProgress {
         if (tasks.visit().size() > 30) {
             throw new IllegalArgumentException("too many tasks for a progress mask: " + tasks.visit().size());
         }
+        // the cells' label bits are the mission's ZoneLabels: one per task zone, one for every avoided zone
+        ZoneLabels labels = ZoneLabels.of(tasks);
         long[] bits = new long[tasks.visit().size()];
         for (int i = 0; i < bits.length; i++) {
-            bits[i] = bitOf(map, tasks.visit().get(i));
+            known(map, tasks.visit().get(i));
+            bits[i] = labels.bit(tasks.visit().get(i));
         }
-        long avoid = 0;
         for (String a : tasks.avoid()) {
-            avoid |= bitOf(map, a);
+            known(map, a);
         }
+        long avoid = labels.avoidMask();
         return new TaskProgress(bits, avoid, tasks.ordered(), tasks.finishOnDock());
     }
 
-    private static long bitOf(BuildingMap map, String zoneName) {
-        List<dockline.model.Zone> zones = map.zones();
-        for (int i = 0; i < zones.size(); i++) {
-            if (zones.get(i).name().equals(zoneName)) {
-                return 1L << i;
-            }
+    private static void known(BuildingMap map, String zoneName) {
+        if (map.zone(zoneName).isEmpty()) {
+            throw new IllegalArgumentException("the tasks name an unknown zone '" + zoneName + "'");
         }
-        throw new IllegalArgumentException("the tasks name an unknown zone '" + zoneName + "'");
     }
 
     int taskCount() {

@@ -18,6 +18,12 @@ abstract class CommandBase implements Callable<Integer> {
         return spec.commandLine().getOut();
     }
 
+    /** Whether the command was asked for its JSON output ({@code --json}, when it has that option). */
+    boolean jsonRequested() {
+        CommandLine.Model.OptionSpec o = spec.findOption("--json");
+        return o != null && Boolean.TRUE.equals(o.getValue());
+    }
+
     /** Standard error of this command line. */
     PrintWriter err() {
         return spec.commandLine().getErr();

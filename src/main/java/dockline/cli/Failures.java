@@ -45,10 +45,12 @@ public final class Failures {
             return ExitCodes.RESOURCE_LIMIT;
         }
         if (e instanceof OutOfMemoryError) {
-            err.println(head + "ran out of memory: this game needs more than the JVM's maximum heap of "
-                    + ResourceLimitException.maxHeapMb() + " MB (set by -Xmx), although its size estimate fitted"
-                    + " (hint: give the JVM more memory (java -Xmx...), or make the game smaller: a coarser energy"
-                    + " resolution or a smaller disturbance budget K)");
+            // the estimates made before allocating (the arena's, the game's) fitted, or this would be a
+            // ResourceLimitException; what ran out is something they do not cover
+            err.println(head + "ran out of memory: this mission needs more than the JVM's maximum heap of "
+                    + ResourceLimitException.maxHeapMb() + " MB (set by -Xmx), past what the size estimates made"
+                    + " before allocating foresaw (hint: give the JVM more memory (java -Xmx...), or make the game"
+                    + " smaller: a coarser energy resolution or a smaller disturbance budget K)");
             return ExitCodes.RESOURCE_LIMIT;
         }
         return internal(e, err);

@@ -19,6 +19,7 @@ import java.nio.file.Path;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -64,6 +65,9 @@ public final class RenderCommand extends CommandBase {
 
     @Option(names = "--json", description = "print the result as one JSON object instead of the text")
     boolean json;
+
+    @Mixin
+    QuietOption quiet;
 
     @Override
     public Integer call() {
@@ -117,7 +121,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         ViewData data;
-        try {
+        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
             data = new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
             if (!(e.getCause() instanceof dockline.model.ResourceLimitException)) {

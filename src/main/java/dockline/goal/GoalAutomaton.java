@@ -3,6 +3,7 @@ package dockline.goal;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
 import dockline.model.Tasks;
+import dockline.model.ZoneLabels;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -41,8 +42,8 @@ public final class GoalAutomaton {
     }
 
     /**
-     * The goal automaton of a mission; zone bits follow the map's zone list (the same bits as
-     * {@link dockline.arena.Arena#cellZones(int)}).
+     * The goal automaton of a mission; zone bits are the mission's labels ({@link ZoneLabels}, the same
+     * bits as {@link dockline.arena.Arena#cellZones(int)}).
      *
      * @throws IllegalArgumentException if a task names an unknown zone or there are too many tasks
      */
@@ -52,26 +53,28 @@ public final class GoalAutomaton {
         if (t.visit().size() > MAX_TASKS) {
             throw new IllegalArgumentException("at most " + MAX_TASKS + " tasks per mission");
         }
+        ZoneLabels labels = ZoneLabels.of(t);
         long[] bits = new long[t.visit().size()];
         List<String> names = new ArrayList<>();
         for (int i = 0; i < bits.length; i++) {
-            bits[i] = zoneBit(map, t.visit().get(i));
+            bits[i] = zoneBit(map, labels, t.visit().get(i));
             names.add(t.visit().get(i));
         }
-        long avoid = 0;
         for (String a : t.avoid()) {
-            avoid |= zoneBit(map, a);
+            known(map, a);
         }
-        return new GoalAutomaton(t.ordered(), t.finishOnDock(), bits, avoid, names);
+        return new GoalAutomaton(t.ordered(), t.finishOnDock(), bits, labels.avoidMask(), names);
     }
 
-    private static long zoneBit(BuildingMap map, String zone) {
-        for (int i = 0; i < map.zones().size(); i++) {
-            if (map.zones().get(i).name().equals(zone)) {
-                return 1L << i;
-            }
+    static long zoneBit(BuildingMap map, ZoneLabels labels, String zone) {
+        known(map, zone);
+        return labels.bit(zone);
+    }
+
+    static void known(BuildingMap map, String zone) {
+        if (map.zone(zone).isEmpty()) {
+            throw new IllegalArgumentException("unknown zone '" + zone + "'");
         }
-        throw new IllegalArgumentException("unknown zone '" + zone + "'");
     }
 
     public int taskCount() {

@@ -3,6 +3,7 @@ package dockline.goal;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
 import dockline.model.Tasks;
+import dockline.model.ZoneLabels;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -44,24 +45,15 @@ public final class LapAutomaton {
             throw new IllegalArgumentException("at most " + GoalAutomaton.MAX_TASKS + " checkpoints per patrol");
         }
         BuildingMap map = mission.map();
+        ZoneLabels labels = ZoneLabels.of(t);
         long[] bits = new long[t.patrol().size()];
         for (int i = 0; i < bits.length; i++) {
-            bits[i] = zoneBit(map, t.patrol().get(i));
+            bits[i] = GoalAutomaton.zoneBit(map, labels, t.patrol().get(i));
         }
-        long avoid = 0;
         for (String a : t.avoid()) {
-            avoid |= zoneBit(map, a);
+            GoalAutomaton.known(map, a);
         }
-        return new LapAutomaton(bits, avoid, t.patrol());
-    }
-
-    private static long zoneBit(BuildingMap map, String zone) {
-        for (int i = 0; i < map.zones().size(); i++) {
-            if (map.zones().get(i).name().equals(zone)) {
-                return 1L << i;
-            }
-        }
-        throw new IllegalArgumentException("unknown zone '" + zone + "'");
+        return new LapAutomaton(bits, labels.avoidMask(), t.patrol());
     }
 
     public int checkpointCount() {

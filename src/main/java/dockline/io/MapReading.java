@@ -1,6 +1,5 @@
 package dockline.io;
 
-import dockline.arena.ArenaCompiler;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.DisturbanceModel;
@@ -407,10 +406,6 @@ final class MapReading {
         Node.MapNode m = in.map(entry.value(), "zones");
         if (m == null) {
             return;
-        }
-        if (m.entries().size() > ArenaCompiler.MAX_ZONES) {
-            problems.add(entry.keyPos(), "the map has " + m.entries().size() + " zones; at most "
-                    + ArenaCompiler.MAX_ZONES + " are allowed", "merge small zones");
         }
         for (Node.Entry e : m.entries()) {
             Zone z = zone(e);

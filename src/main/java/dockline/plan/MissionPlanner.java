@@ -92,7 +92,7 @@ public final class MissionPlanner {
         Route r = options.route();
         if (r instanceof Route.Auto a) {
             Optional<FastPath.Analysis> f = FastPath.analyse(mission, arena, goal, FastPath.DEFAULT_MAX_POLICY_ROWS,
-                    false);
+                    false, options.memoryBudgetBytes());
             if (f.isPresent()) {
                 return fast(c, f.get(), "the robot cannot charge on a dock before the mission is complete, so the"
                         + " battery levels need not be in the game");
@@ -101,8 +101,8 @@ public final class MissionPlanner {
                     + " complete, so the battery levels are part of the game");
         }
         if (r instanceof Route.Fast f) {
-            FastPath.Analysis a = FastPath.analyse(mission, arena, goal, f.maxPolicyRows(), false)
-                    .orElseThrow(MissionPlanner::fastDoesNotApply);
+            FastPath.Analysis a = FastPath.analyse(mission, arena, goal, f.maxPolicyRows(), false,
+                            options.memoryBudgetBytes()).orElseThrow(MissionPlanner::fastDoesNotApply);
             return fast(c, a, "the fast path was asked for, and it applies: the robot cannot charge before the end");
         }
         if (r instanceof Route.Product p) {
@@ -171,7 +171,7 @@ public final class MissionPlanner {
         Mission m = c.mission();
         if (v.where() != Route.VerdictOnly.Where.PRODUCT) {
             Optional<FastPath.Analysis> f = FastPath.analyse(m, c.arena(), c.goal(), FastPath.DEFAULT_MAX_POLICY_ROWS,
-                    true);
+                    true, c.options().memoryBudgetBytes());
             if (f.isPresent()) {
                 FastPath.Analysis a = f.get();
                 return new Plan(m, new Objective.Reserve(), a.verdict(), Method.FAST, "only the verdict was asked"

@@ -53,9 +53,18 @@ public record ProductOptions(long memoryBudgetBytes, IndexKind index, BooleanSup
         return new ProductOptions(memoryBudgetBytes, index, flag);
     }
 
-    /** The budget in force: the given one, or {@link #defaultMemoryBudget()}. */
+    /**
+     * The budget in force: the given one, or {@link #defaultMemoryBudget()}; a given budget above the
+     * JVM's maximum heap is the heap ({@link Runtime#maxMemory()}), as no more can be had, so that a refusal
+     * names the limit that really applied.
+     */
     public long effectiveMemoryBudget() {
-        return memoryBudgetBytes > 0 ? memoryBudgetBytes : defaultMemoryBudget();
+        return budgetInForce(memoryBudgetBytes);
+    }
+
+    /** The budget in force for a given one ({@code --max-memory}; 0: none given), as {@link #effectiveMemoryBudget()}. */
+    public static long budgetInForce(long givenBytes) {
+        return givenBytes > 0 ? Math.min(givenBytes, Runtime.getRuntime().maxMemory()) : defaultMemoryBudget();
     }
 
     /**

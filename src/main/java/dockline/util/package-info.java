@@ -2,6 +2,9 @@
  * Primitive collections used by the solver, the certificate checker and the margins alike: a
  * growable int array and a long-to-int hash map, with no boxing and no per-entry objects.
  *
+ * <p>Also where the core reports progress ({@link dockline.util.Progress}, {@link dockline.util.ProgressListener}):
+ * the command line listens and prints it; the core never knows who listens.
+ *
  * <p>Entry points: {@link dockline.util.IntArrayList} and {@link dockline.util.LongIntMap}. This
  * package depends on nothing else of dockline, so sharing it keeps the certificate checker
  * independent of the solver (DEVELOPERS.md, "Layout"): they share containers, never logic.

@@ -3,6 +3,7 @@ package dockline.view;
 import dockline.goal.GoalAutomaton;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
+import dockline.model.ZoneLabels;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -54,12 +55,7 @@ final class ProgressChoices {
         }
         GoalAutomaton g = GoalAutomaton.of(m);
         BuildingMap map = m.map();
-        long zones = 0;
-        for (int i = 0; i < map.zones().size(); i++) {
-            if (map.zones().get(i).contains(m.start())) {
-                zones |= 1L << i;
-            }
-        }
+        long zones = ZoneLabels.of(m).cellMasks(map)[m.start().index(map.width())];
         int s = g.initial(zones);
         return s == GoalAutomaton.REJECT ? 0 : g.progressMask(s);
     }

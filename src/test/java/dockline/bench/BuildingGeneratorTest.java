@@ -41,7 +41,7 @@ class BuildingGeneratorTest {
             assertThat(m.width()).isEqualTo(side);
             assertThat(m.height()).isEqualTo(side);
             assertThat(m.docks()).isNotEmpty();
-            assertThat(m.zones().size()).isLessThanOrEqualTo(ArenaCompiler.MAX_ZONES);
+            assertThat(m.zones().size()).isLessThanOrEqualTo(BuildingGenerator.MAX_ROOM_ZONES + 3);
             assertThat(m.zone("wet-floor")).isPresent();
             assertThat(m.zone("loading-lane")).isPresent();
             assertThat(m.zone("quiet-area")).isPresent();

@@ -6,6 +6,9 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
+import dockline.solve.ProductOptions;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
 import dockline.solve.Verdict;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -95,25 +98,73 @@ public final class FastPath {
      * before the mission is complete).
      *
      * @param verdictOnly stop as soon as the verdict is known: no need, no highest floor, no policy
-     * @throws ArithmeticException if arena × goal has more than {@code Integer.MAX_VALUE} vertices
+     * @throws ProductTooLargeException if arena × goal needs more than half the JVM's heap
      */
     public static Optional<Analysis> analyse(Mission mission, int maxPolicyRows, boolean verdictOnly) {
         long t0 = System.nanoTime();
-        return analyse(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), maxPolicyRows, verdictOnly,
-                t0);
+        return analyseTimed(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), maxPolicyRows,
+                verdictOnly, t0, 0);
     }
 
     /** As {@link #analyse(Mission, int, boolean)} on an arena and goal already compiled from the mission. */
     public static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
                                              boolean verdictOnly) {
-        return analyse(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime());
+        return analyse(mission, arena, goal, maxPolicyRows, verdictOnly, 0);
     }
 
-    private static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
-                                              boolean verdictOnly, long t0) {
+    /**
+     * As {@link #analyse(Mission, Arena, GoalAutomaton, int, boolean)} within a memory budget.
+     *
+     * @param memoryBudgetBytes the budget ({@code --max-memory}), 0 for the default (half the JVM's heap)
+     * @throws ProductTooLargeException if arena × goal needs more than the budget
+     */
+    public static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                             boolean verdictOnly, long memoryBudgetBytes) {
+        return analyseTimed(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime(), memoryBudgetBytes);
+    }
+
+    /**
+     * Heap per pair of arena × goal while the fast path runs, about: the minimum-charge search's need,
+     * flags and choice per robot pair and maximum and count per disturbance pair (5 to 6 bytes), with
+     * room for its heap and the applicability search before it.
+     */
+    static final long BYTES_PER_PAIR = 8;
+
+    /**
+     * Refuses, before anything is allocated, an arena × goal over the memory budget, with its real size
+     * and the budget that applied; past the int range of its arrays when the memory would fit (only with
+     * a budget of more than 16 GB) it is refused for that range.
+     */
+    static void refuseIfTooLarge(Arena arena, GoalAutomaton goal, long memoryBudgetBytes) {
+        long pairs = SizeEstimate.satMul(arena.vertexCount(), goal.stateCount());
+        long edges = SizeEstimate.satMul(arena.edgeCount(), goal.stateCount());
+        long bytes = SizeEstimate.satAdd(SizeEstimate.satMul(pairs, BYTES_PER_PAIR), 0);
+        long budget = ProductOptions.budgetInForce(memoryBudgetBytes);
+        SizeEstimate size = new SizeEstimate(pairs, edges, bytes, 0);
+        if (bytes > budget) {
+            throw new ProductTooLargeException(size, budget, false, "make the game smaller: fewer tasks in any order"
+                    + " (each doubles it), a smaller disturbance budget K or a coarser cell size (fewer cells); the"
+                    + " energy resolution does not change it");
+        }
+        if (pairs > Integer.MAX_VALUE - 16) {
+            throw ProductTooLargeException.indexRange(size, pairs);
+        }
+    }
+
+    private static Optional<Analysis> analyseTimed(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
+                                                   boolean verdictOnly, long t0, long memoryBudgetBytes) {
+        long budget = ProductOptions.budgetInForce(memoryBudgetBytes);
+        long pairs = SizeEstimate.satMul(arena.vertexCount(), goal.stateCount());
+        if (MinChargeSolver.canCharge(arena) && (SizeEstimate.satMul(pairs, 5) > budget
+                || pairs > Integer.MAX_VALUE - 16)) {
+            // too large even to search whether a charge comes before the end: the product route, whose
+            // game is at least as large, decides and refuses with its own size
+            return Optional.empty();
+        }
         if (!MinChargeSolver.applicable(arena, goal)) {
             return Optional.empty();
         }
+        refuseIfTooLarge(arena, goal, memoryBudgetBytes);
         int s = mission.startUnits();
         int f = mission.reserveUnits();
         int cap = mission.capacityUnits();

@@ -1,6 +1,7 @@
 package dockline.solve.fast;
 
 import dockline.util.PackedMinHeap;
+import dockline.util.Progress;
 
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
@@ -111,6 +112,14 @@ public final class MinChargeSolver {
      * one. O(m·G) time when charging exists (a forward search ignoring energy), O(1) otherwise.
      */
     public static boolean applicable(Arena arena, GoalAutomaton goal) {
+        if (!canCharge(arena)) {
+            return true;
+        }
+        return noChargeBeforeTheEnd(arena, goal);
+    }
+
+    /** Whether the arena has a charge action at all (a dock with a charging rate). O(free cells). */
+    public static boolean canCharge(Arena arena) {
         boolean anyCharge = false;
         for (int slot = 0; slot < arena.freeCellCount() && !anyCharge; slot++) {
             int c = arena.freeCell(slot);
@@ -123,9 +132,11 @@ public final class MinChargeSolver {
                 }
             }
         }
-        if (!anyCharge) {
-            return true;
-        }
+        return anyCharge;
+    }
+
+    /** The forward search of {@link #applicable} when the arena can charge: O(m·G), 5 bytes per pair. */
+    private static boolean noChargeBeforeTheEnd(Arena arena, GoalAutomaton goal) {
         int gc = goal.stateCount();
         int s = arena.startVertex();
         int g0 = goal.initial(arena.cellZones(arena.cell(s)));
@@ -291,6 +302,8 @@ public final class MinChargeSolver {
                 }
             }
         }
+        // per cent of the robot situations finalised: a bound, as the search may stop at the start
+        Progress.Tracker progress = Progress.phase("least charge to finish (fast path)", robotN);
         while (!heap.isEmpty()) {
             long top = heap.peek();
             int x = (int) (top >>> 32);
@@ -304,6 +317,9 @@ public final class MinChargeSolver {
             }
             done[u] = true;
             explored++;
+            if ((explored & (Progress.EVERY - 1)) == 0) {
+                progress.at(explored);
+            }
             if (u == startP && stopAtStart) {
                 break;
             }
@@ -350,6 +366,7 @@ public final class MinChargeSolver {
         int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
         boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
         long productVertices = (long) arena.vertexCount() * gc;
+        progress.done();
         return new Values(arena, robotNeed, choice, done, gc, rc, new Result(guaranteed, startNeed, available, explored,
                 productVertices, mode == Mode.ALL));
     }

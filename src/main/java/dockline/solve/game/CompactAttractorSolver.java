@@ -1,6 +1,7 @@
 package dockline.solve.game;
 
 import dockline.util.IntArrayList;
+import dockline.util.Progress;
 import java.util.Arrays;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
@@ -105,7 +106,11 @@ public final class CompactAttractorSolver implements GameSolver {
         int head = 0;
         int steps = 0;
         boolean stopped = stopAt >= 0 && target[stopAt];
+        Progress.Tracker progress = Progress.phase("solving the stored game", n);
         while (head < tail && !stopped) {
+            if ((head & (Progress.EVERY - 1)) == 0) {
+                progress.at(head);
+            }
             if (head == layerStarts.last()) {
                 // the layer starting here is complete (its predecessors' layer is done): the next starts at tail
                 layerStarts.add(tail);
@@ -128,6 +133,7 @@ public final class CompactAttractorSolver implements GameSolver {
             }
             steps = poll(steps + end - inStart[v] + 1);
         }
+        progress.done();
         return tail;
     }
 
@@ -148,7 +154,11 @@ public final class CompactAttractorSolver implements GameSolver {
         int head = 0;
         int steps = 0;
         boolean stopped = stopAt >= 0 && target[stopAt];
+        Progress.Tracker progress = Progress.phase("solving the stored game", n);
         while (head < tail && !stopped) {
+            if ((head & (Progress.EVERY - 1)) == 0) {
+                progress.at(head);
+            }
             if (head == layerStarts.last()) {
                 // the layer starting here is complete (its predecessors' layer is done): the next starts at tail
                 layerStarts.add(tail);
@@ -171,6 +181,7 @@ public final class CompactAttractorSolver implements GameSolver {
             }
             steps = poll(steps + end - inStart[v] + 1);
         }
+        progress.done();
         return tail;
     }
 

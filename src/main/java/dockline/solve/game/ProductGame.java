@@ -10,6 +10,7 @@ import dockline.policy.PolicyEntry;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
+import dockline.util.Progress;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -471,7 +472,13 @@ public final class ProductGame {
             outStart.add(1);
             edgeTarget.add(LOSE);
             int steps = 0;
+            // per cent of the estimated vertices built (the estimate is an upper bound)
+            Progress.Tracker progress = Progress.phase("building the stored game",
+                    estimate.vertices());
             for (int p = 2; p < n; p++) {
+                if ((p & (Progress.EVERY - 1)) == 0) {
+                    progress.at(p);
+                }
                 outStart.add(edgeTarget.size());
                 int a = vA[p];
                 int g = vG[p];
@@ -498,6 +505,7 @@ public final class ProductGame {
             }
             outStart.add(edgeTarget.size());
             checkBudget(edgeTarget.size());
+            progress.done();
             byte[] own = owner;
             boolean[] target = new boolean[n];
             target[WIN] = true;

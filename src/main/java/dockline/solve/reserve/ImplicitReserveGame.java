@@ -10,6 +10,8 @@ import dockline.solve.SizeEstimate;
 import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
+import dockline.util.PagedBytes;
+import dockline.util.Progress;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -79,7 +81,9 @@ public final class ImplicitReserveGame {
     }
 
     /**
-     * @throws ProductTooLargeException if the product has more than {@code Integer.MAX_VALUE - 16} vertices
+     * The game; its numbering has {@link #slotCount()} slots (a long: it may pass 2^31). Whether its
+     * counters fit is the caller's check against the memory budget ({@link ReserveSolver}); a numbering past
+     * 2^62 slots (which no memory holds) is reported as {@code Long.MAX_VALUE} slots, never numbered.
      */
     public ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor) {
         if (arena == null || goal == null || monitor == null) {
@@ -92,11 +96,11 @@ public final class ImplicitReserveGame {
         this.levels = (int) monitor.stateBound();
         this.gBits = bits(gc);
         this.lBits = bits(levels);
-        this.vertexCount = (long) arena.vertexCount() * gc * levels;
-        this.slotCount = (long) arena.vertexCount() << (gBits + lBits);
-        if (slotCount > Integer.MAX_VALUE - 16) {
-            throw ProductTooLargeException.indexRange(SizeEstimate.of(vertexCount, vertexCount, 0), slotCount);
-        }
+        this.vertexCount = SizeEstimate.satMul(SizeEstimate.satMul(arena.vertexCount(), gc), levels);
+        int aBits = 64 - Long.numberOfLeadingZeros(arena.vertexCount());
+        // a triple's number is a long; past 2^62 slots the counters alone would pass any memory, so the
+        // count saturates and the memory check refuses the game before anything is numbered
+        this.slotCount = aBits + gBits + lBits > 62 ? Long.MAX_VALUE : (long) arena.vertexCount() << (gBits + lBits);
         this.inverse = new GoalPredecessors(arena, goal);
         int m = arena.edgeCount();
         this.revSource = new int[m];
@@ -142,14 +146,19 @@ public final class ImplicitReserveGame {
         return n <= 1 ? 0 : 32 - Integer.numberOfLeadingZeros(n - 1);
     }
 
-    /** The number of a triple. */
-    int id(int a, int g, int s) {
-        return (((a << gBits) | g) << lBits) | s;
+    /** The number of a triple: a long, as the numbering may pass 2^31 slots. */
+    long id(int a, int g, int s) {
+        return ((((long) a << gBits) | g) << lBits) | s;
     }
 
     /** Slots of the numbering (every triple, padded): the length of the per-vertex arrays. */
     public long slotCount() {
         return slotCount;
+    }
+
+    /** Edges of the full product (every triple's moves), saturating. */
+    public long edgeCount() {
+        return SizeEstimate.satMul(arena.edgeCount(), vertexCount / Math.max(1, arena.vertexCount()));
     }
 
     /** Vertices of the full product (every triple). */
@@ -158,7 +167,7 @@ public final class ImplicitReserveGame {
     }
 
     /** The start vertex, or -1 when the start is lost (below the floor, avoided zone), -2 when already complete. */
-    public int start() {
+    public long start() {
         int a0 = arena.startVertex();
         int c0 = arena.cell(a0);
         int g0 = goal.initial(arena.cellZones(c0));
@@ -189,7 +198,7 @@ public final class ImplicitReserveGame {
      * visits vertices won before it). The worklist is first-in first-out (see {@link #run}).
      */
     public Strategy solveWithStrategy(BooleanSupplier cancelled) {
-        byte[][] counts = new byte[1][];
+        PagedBytes[] counts = new PagedBytes[1];
         Result r = run(true, cancelled, null, true, counts);
         return new Strategy(r, counts[0]);
     }
@@ -200,7 +209,7 @@ public final class ImplicitReserveGame {
      * the counters.
      */
     public Strategy solveRegion(BooleanSupplier cancelled) {
-        byte[][] counts = new byte[1][];
+        PagedBytes[] counts = new PagedBytes[1];
         Result r = run(false, cancelled, null, false, counts);
         return new Strategy(r, counts[0]);
     }
@@ -208,16 +217,16 @@ public final class ImplicitReserveGame {
     /** The verdict and the robot's recorded choices of {@link #solveWithStrategy}. */
     public final class Strategy {
         private final Result result;
-        private final byte[] count;
+        private final PagedBytes count;
 
-        private Strategy(Result result, byte[] count) {
+        private Strategy(Result result, PagedBytes count) {
             this.result = result;
             this.count = count;
         }
 
         /** The robot's recorded choice at won robot triple p: the index of the action among its out-edges. */
-        int choice(int p) {
-            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) - 1;
+        int choice(long p) {
+            return ((count.get(p >>> 1) >>> ((p & 1) << 2)) & 15) - 1;
         }
 
         /**
@@ -235,8 +244,8 @@ public final class ImplicitReserveGame {
                     || monitorState < 0 || monitorState >= levels) {
                 return false;
             }
-            int p = id(robotVertex, goalState, monitorState);
-            return ((count[p >>> 1] >>> ((p & 1) << 2)) & 15) > 0;
+            long p = id(robotVertex, goalState, monitorState);
+            return ((count.get(p >>> 1) >>> ((p & 1) << 2)) & 15) > 0;
         }
 
         /** Whether the solve ran to the end, so that {@link #robotWins} is the whole winning region. */
@@ -282,7 +291,7 @@ public final class ImplicitReserveGame {
      *
      * @throws IllegalStateException if an outcome loses (the triple was not won)
      */
-    int outcomes(int x, int g, int s, int[] succ, int[] arrive) {
+    int outcomes(int x, int g, int s, long[] succ, int[] arrive) {
         int k = 0;
         for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
             int s2 = monitor.step(s, arena.weight(e));
@@ -311,6 +320,7 @@ public final class ImplicitReserveGame {
     /** Per slot, whether the full attractor contains it (tests compare it with ProductGame's solution). */
     boolean[] wonFlags() {
         boolean[][] out = new boolean[1][];
+        Math.toIntExact(slotCount); // a test aid on small games
         run(false, () -> false, out, false, null);
         return out[0];
     }
@@ -324,12 +334,12 @@ public final class ImplicitReserveGame {
      * (the least fixpoint does not depend on the order).
      */
     private Result run(boolean stopAtStart, BooleanSupplier cancelled, boolean[][] flagsOut, boolean fifo,
-                       byte[][] countsOut) {
-        int start = start();
+                       PagedBytes[] countsOut) {
+        long start = start();
         if (start < 0 && flagsOut == null && countsOut == null) {
             return new Result(start == -2, 0, 0, false, vertexCount);
         }
-        final int n = (int) slotCount;
+        final long n = slotCount;
         final int rc = arena.robotCount();
         final int top = levels - 1;
         final int lb = lBits;
@@ -340,18 +350,18 @@ public final class ImplicitReserveGame {
         // the outcomes known to be won (won at its out-degree); for a robot triple 0 while not won, else
         // 1 + its chosen action's index (targets: 1). Half a byte per vertex keeps the whole table in the
         // last-level cache for products of tens of millions.
-        final byte[] count = new byte[(n >>> 1) + 1];
+        final PagedBytes count = new PagedBytes((n >>> 1) + 1);
         // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
         // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
         // keeps the search near the counters it just touched, first-in first-out ranks the triples.
         // One circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
         // or at the head (queue); its length is a power of two so indices wrap by a mask
-        int[] wl = new int[1 << 12];
+        long[] wl = new long[1 << 12];
         int wmask = wl.length - 1;
         int head = 0;
         int tail = 0;
         long wonCount = 0;
-        final boolean[] flags = flagsOut != null ? new boolean[n] : null;
+        final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
         // the targets: robot triples completing the mission (any level)
         for (int slot = 0; slot < arena.freeCellCount(); slot++) {
             int c = arena.freeCell(slot);
@@ -359,10 +369,10 @@ public final class ImplicitReserveGame {
             for (int g = 0; g < gc; g++) {
                 if (goal.accepting(g, dock)) {
                     for (int k = 0; k < arena.stateCount(); k++) {
-                        int base = id(arena.robotVertexInState(c, k), g, 0);
+                        long base = id(arena.robotVertexInState(c, k), g, 0);
                         for (int s = 0; s < levels; s++) {
-                            int t = base + s;
-                            count[t >>> 1] |= (byte) (1 << ((t & 1) << 2));
+                            long t = base + s;
+                            count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
                             if (tail - head == wl.length) {
                                 wl = grow(wl, head, tail);
                                 wmask = wl.length - 1;
@@ -372,7 +382,7 @@ public final class ImplicitReserveGame {
                             wl[(tail++) & wmask] = base + s;
                             wonCount++;
                             if (flags != null) {
-                                flags[base + s] = true;
+                                flags[(int) (base + s)] = true;
                             }
                         }
                     }
@@ -382,12 +392,19 @@ public final class ImplicitReserveGame {
         long edges = 0;
         int steps = 0;
         boolean stopped = false;
+        // per cent of the robot triples expanded: a bound, as the attractor may stop or win fewer
+        Progress.Tracker progress = Progress.phase("solving the game at floor " + monitor.floorUnits() + " units",
+                vertexCount / Math.max(1, arena.vertexCount()) * rc);
+        long expanded = 0;
         expand:
         while (tail != head) {
-            int p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
-            int s2 = p & sMask;
-            int g2 = (p >>> lb) & gMask;
-            int x = p >>> (lb + gb);
+            long p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
+            if ((++expanded & (Progress.EVERY - 1)) == 0) {
+                progress.at(expanded);
+            }
+            int s2 = (int) p & sMask;
+            int g2 = (int) (p >>> lb) & gMask;
+            int x = (int) (p >>> (lb + gb));
             int from = arena.inBegin(x);
             int to = arena.inEnd(x);
             edges += to - from;
@@ -413,33 +430,33 @@ public final class ImplicitReserveGame {
                 if (sLo < 0 || sHi > top) {
                     continue;
                 }
-                int dBase = d << gb;
+                long dBase = (long) d << gb;
                 int owner = ownerOf[d - rc];
-                int oBase = owner << gb;
+                long oBase = (long) owner << gb;
                 int choice = (actionIndex[d - rc] + 1);
                 for (int j = gFrom; j < gTo; j++) {
                     int gj = inverse.state(j);
-                    int base = (dBase | gj) << lb;
-                    int ob = (oBase | gj) << lb;
+                    long base = (dBase | gj) << lb;
+                    long ob = (oBase | gj) << lb;
                     for (int s = sLo; s <= sHi; s++) {
                         if (need > 1) {
                             // an action the disturbance can spoil: won once all its outcomes are
-                            int q = base + s;
-                            int qs = (q & 1) << 2;
-                            int cell8 = count[q >>> 1];
+                            long q = base + s;
+                            int qs = ((int) q & 1) << 2;
+                            int cell8 = count.get(q >>> 1);
                             int c = (cell8 >>> qs) & 15;
                             if (c >= need) {
                                 continue;
                             }
-                            count[q >>> 1] = (byte) (cell8 + (1 << qs));
+                            count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
                             if (c + 1 < need) {
                                 continue;
                             }
                             if (flags != null) {
-                                flags[q] = true;
+                                flags[(int) q] = true;
                             }
                         } else if (flags != null) {
-                            flags[base + s] = true;
+                            flags[(int) (base + s)] = true;
                         }
                         // (d, gj, s) is won now. An action with one outcome needs no counter: its only
                         // successor is the robot triple just expanded, which is expanded once. Its owner
@@ -449,13 +466,13 @@ public final class ImplicitReserveGame {
                         // order of rank and the first won action of an owner is one of least rank.
                         wonCount++;
                         edges++;
-                        int o = ob + s;
-                        int os = (o & 1) << 2;
-                        int o8 = count[o >>> 1];
+                        long o = ob + s;
+                        int os = ((int) o & 1) << 2;
+                        int o8 = count.get(o >>> 1);
                         if (((o8 >>> os) & 15) != 0) {
                             continue;
                         }
-                        count[o >>> 1] = (byte) (o8 | (choice << os));
+                        count.set(o >>> 1, (byte) (o8 | (choice << os)));
                         if (tail - head == wl.length) {
                             wl = grow(wl, head, tail);
                             wmask = wl.length - 1;
@@ -465,7 +482,7 @@ public final class ImplicitReserveGame {
                         wl[(tail++) & wmask] = o;
                         wonCount++;
                         if (flags != null) {
-                            flags[o] = true;
+                            flags[(int) o] = true;
                         }
                         if (o == start && stopAtStart) {
                             stopped = true;
@@ -481,24 +498,25 @@ public final class ImplicitReserveGame {
                 }
             }
         }
+        progress.done();
         if (flagsOut != null) {
             flagsOut[0] = flags;
         }
         if (countsOut != null) {
             countsOut[0] = count;
         }
-        boolean won = start == -2 || start >= 0 && (stopped || ((count[start >>> 1] >>> ((start & 1) << 2)) & 15) > 0);
+        boolean won = start == -2 || start >= 0 && (stopped || ((count.get(start >>> 1) >>> ((start & 1) << 2)) & 15) > 0);
         return new Result(won, wonCount, edges, stopped, vertexCount);
     }
 
     /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
-    private int[] grow(int[] wl, int head, int tail) {
+    private long[] grow(long[] wl, int head, int tail) {
         // while copying, the old buffer and the new one (twice as long) are both live
-        long bytes = fixedBytes + 12L * wl.length;
+        long bytes = fixedBytes + 24L * wl.length;
         if (bytes > budgetBytes || wl.length >= (1 << 30)) {
-            throw new ProductTooLargeException(new SizeEstimate(vertexCount, 0, bytes, 0), budgetBytes, true);
+            throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes, true);
         }
-        int[] out = new int[wl.length * 2];
+        long[] out = new long[wl.length * 2];
         int mask = wl.length - 1;
         for (int i = head; i != tail; i++) {
             out[i - head] = wl[i & mask];

@@ -8,6 +8,7 @@ import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
 import dockline.solve.game.ProductGame;
 import dockline.util.LongIntMap;
+import dockline.util.PagedBytes;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -16,7 +17,7 @@ import java.util.List;
  * What is read off an {@link ImplicitReserveGame} without solving it again: the policy and the
  * worst-case level of a recorded strategy's closed loop (from the start, robot follows its choice,
  * disturbance plays every outcome), and the vertices reachable from the start. Each is one search
- * over the implicit product's numbering, O(what it visits), with a bit per slot or a hash map of ints.
+ * over the implicit product's numbering (long numbers), O(what it visits), with a bit per slot or a hash map.
  */
 final class ImplicitWalks {
 
@@ -38,32 +39,32 @@ final class ImplicitWalks {
         final int lBits = game.lBits;
         final int gBits = game.gBits;
         List<PolicyEntry> entries = new ArrayList<>();
-        int start = game.start();
+        long start = game.start();
         if (start < 0) {
             return new Policy(entries);
         }
         final int rc = arena.robotCount();
-        long[] seen = new long[(int) (game.slotCount >>> 6) + 1];
-        int[] todo = new int[1 << 10];
+        PagedBytes seen = PagedBytes.bits(game.slotCount);
+        long[] todo = new long[1 << 10];
         int tail = 0;
-        seen[start >>> 6] |= 1L << start;
+        seen.setBit(start);
         todo[tail++] = start;
-        int[] succ = new int[16];
+        long[] succ = new long[16];
         while (tail > 0) {
-            int p = todo[--tail];
-            int x = p >>> (lBits + gBits);
+            long p = todo[--tail];
+            int x = (int) (p >>> (lBits + gBits));
             if (x < rc) {
-                int s = p & ((1 << lBits) - 1);
-                int g = (p >>> lBits) & ((1 << gBits) - 1);
+                int s = (int) p & ((1 << lBits) - 1);
+                int g = (int) (p >>> lBits) & ((1 << gBits) - 1);
                 int d = arena.target(arena.outBegin(x) + strategy.choice(p));
                 entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
                         goal.progressMask(g), arena.action(d), null, arena.closures(x)));
             }
             int k = loopSuccessors(game, strategy, p, succ, null);
             for (int i = 0; i < k; i++) {
-                int q = succ[i];
-                if ((seen[q >>> 6] & (1L << q)) == 0) {
-                    seen[q >>> 6] |= 1L << q;
+                long q = succ[i];
+                if (!seen.getBit(q)) {
+                    seen.setBit(q);
                     if (tail == todo.length) {
                         todo = Arrays.copyOf(todo, tail * 2);
                     }
@@ -84,24 +85,24 @@ final class ImplicitWalks {
     static int worstCaseMinimum(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy) {
         requireStartWon(strategy);
         final ReserveMonitor monitor = game.monitor;
-        int start = game.start();
+        long start = game.start();
         if (start == -2) {
             return monitor.level(monitor.initialState());
         }
         LongIntMap worst = new LongIntMap(1 << 10);
-        int[] stack = new int[1 << 10];
+        long[] stack = new long[1 << 10];
         int sp = 0;
         stack[sp++] = start;
-        int[] succ = new int[16];
+        long[] succ = new long[16];
         int[] arrive = new int[16];
         while (sp > 0) {
-            int p = stack[sp - 1];
+            long p = stack[sp - 1];
             if (worst.get(p) != LongIntMap.ABSENT) {
                 sp--;
                 continue;
             }
             int k = loopSuccessors(game, strategy, p, succ, arrive);
-            int w = monitor.level(p & ((1 << game.lBits) - 1));
+            int w = monitor.level((int) p & ((1 << game.lBits) - 1));
             boolean ready = true;
             for (int i = 0; i < k; i++) {
                 if (arrive[i] >= 0) {
@@ -138,13 +139,13 @@ final class ImplicitWalks {
      * robot's recorded choice, or every outcome of a disturbance triple (with {@code arrive} as in
      * {@link ImplicitReserveGame#outcomes}; -1 for a choice). Returns how many were written.
      */
-    private static int loopSuccessors(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy, int p,
-                                      int[] succ, int[] arrive) {
+    private static int loopSuccessors(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy, long p,
+                                      long[] succ, int[] arrive) {
         final int lBits = game.lBits;
         final int gBits = game.gBits;
-        int s = p & ((1 << lBits) - 1);
-        int g = (p >>> lBits) & ((1 << gBits) - 1);
-        int x = p >>> (lBits + gBits);
+        int s = (int) p & ((1 << lBits) - 1);
+        int g = (int) (p >>> lBits) & ((1 << gBits) - 1);
+        int x = (int) (p >>> (lBits + gBits));
         if (x < game.arena.robotCount()) {
             int d = game.arena.target(game.arena.outBegin(x) + strategy.choice(p));
             succ[0] = game.id(d, g, s);
@@ -162,35 +163,34 @@ final class ImplicitWalks {
         final GoalAutomaton goal = game.goal;
         final ReserveMonitor monitor = game.monitor;
         final long vertexCount = game.vertexCount;
-        int start = game.start();
+        long start = game.start();
         if (start < 0) {
             return new ImplicitReserveGame.Result(start == -2, 0, 0, false, vertexCount);
         }
-        final int n = (int) game.slotCount;
         final int rc = arena.robotCount();
         final int lb = game.lBits;
         final int gb = game.gBits;
         final int sMask = (1 << lb) - 1;
         final int gMask = (1 << gb) - 1;
-        final long[] seen = new long[(n >>> 6) + 1];
-        IntQueue queue = new IntQueue(1 << 16);
-        seen[start >>> 6] |= 1L << start;
+        final PagedBytes seen = PagedBytes.bits(game.slotCount);
+        LongQueue queue = new LongQueue();
+        seen.setBit(start);
         queue.add(start);
         long edges = 0;
-        int head = 0;
+        long head = 0;
         while (head < queue.size()) {
-            int p = queue.get(head++);
-            int s = p & sMask;
-            int g = (p >>> lb) & gMask;
-            int x = p >>> (lb + gb);
+            long p = queue.get(head++);
+            int s = (int) p & sMask;
+            int g = (int) (p >>> lb) & gMask;
+            int x = (int) (p >>> (lb + gb));
             int from = arena.outBegin(x);
             int to = arena.outEnd(x);
             edges += to - from;
             if (x < rc) {
                 for (int e = from; e < to; e++) {
-                    int q = (((arena.target(e) << gb) | g) << lb) | s;
-                    if ((seen[q >>> 6] & (1L << q)) == 0) {
-                        seen[q >>> 6] |= 1L << q;
+                    long q = ((((long) arena.target(e) << gb) | g) << lb) | s;
+                    if (!seen.getBit(q)) {
+                        seen.setBit(q);
                         queue.add(q);
                     }
                 }
@@ -207,9 +207,9 @@ final class ImplicitWalks {
                 if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
                     continue; // a sink (LOSE or WIN): nothing to explore
                 }
-                int q = (((a2 << gb) | g2) << lb) | s2;
-                if ((seen[q >>> 6] & (1L << q)) == 0) {
-                    seen[q >>> 6] |= 1L << q;
+                long q = ((((long) a2 << gb) | g2) << lb) | s2;
+                if (!seen.getBit(q)) {
+                    seen.setBit(q);
                     queue.add(q);
                 }
             }
@@ -218,35 +218,32 @@ final class ImplicitWalks {
     }
 
     /**
-     * A growable int queue in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
-     * is its size rather than 2.5 times it).
+     * A growable queue of longs in blocks of 2^20 (no boxing, and no copy when it grows, so its peak memory
+     * is its size rather than 2.5 times it); indexed by long, as a search may pass 2^31 vertices.
      */
-    private static final class IntQueue {
+    private static final class LongQueue {
         private static final int SHIFT = 20;
         private static final int MASK = (1 << SHIFT) - 1;
-        private int[][] blocks = new int[16][];
-        private int size;
+        private long[][] blocks = new long[16][];
+        private long size;
 
-        IntQueue(int ignored) {
-        }
-
-        void add(int v) {
-            int b = size >>> SHIFT;
+        void add(long v) {
+            int b = (int) (size >>> SHIFT);
             if (b == blocks.length) {
                 blocks = Arrays.copyOf(blocks, b * 2);
             }
             if (blocks[b] == null) {
-                blocks[b] = new int[1 << SHIFT];
+                blocks[b] = new long[1 << SHIFT];
             }
-            blocks[b][size & MASK] = v;
+            blocks[b][(int) (size & MASK)] = v;
             size++;
         }
 
-        int get(int i) {
-            return blocks[i >>> SHIFT][i & MASK];
+        long get(long i) {
+            return blocks[(int) (i >>> SHIFT)][(int) (i & MASK)];
         }
 
-        int size() {
+        long size() {
             return size;
         }
     }

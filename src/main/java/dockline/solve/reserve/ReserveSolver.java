@@ -202,7 +202,8 @@ public final class ReserveSolver {
         long bytes = implicitBytes(game, arena);
         long budget = po.effectiveMemoryBudget();
         if (bytes > budget) {
-            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), 0, bytes, 0), budget, false);
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), game.edgeCount(), bytes, 0), budget,
+                    false);
         }
         // the worklist's size is only known while solving: it may take the rest of the budget
         game.limitWorklist(bytes, budget);
@@ -245,7 +246,7 @@ public final class ReserveSolver {
      * (property-tested), at half a byte per triple of the full product instead of about 64 bytes per
      * reachable vertex; no policy comes out of it, so the verdict is not certified.
      *
-     * @throws ProductTooLargeException if the implicit numbering or its counters do not fit the budget
+     * @throws ProductTooLargeException if its counters (half a byte per slot of the long numbering) do not fit the budget
      */
     public static ImplicitVerdict decideImplicitly(Mission mission, ProductOptions options) {
         long t0 = System.nanoTime();
@@ -277,8 +278,8 @@ public final class ReserveSolver {
         long bytes = game.slotCount() / 2 + 9L * arena.edgeCount();
         long budget = options.effectiveMemoryBudget();
         if (bytes > budget) {
-            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(), Math.max(forecastEdges, 0), bytes,
-                    0), budget, false);
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount(),
+                    forecastEdges > 0 ? forecastEdges : game.edgeCount(), bytes, 0), budget, false);
         }
         game.limitWorklist(bytes, budget);
         ImplicitReserveGame.Result r = game.solve(true, options.cancelled());

@@ -78,7 +78,7 @@ class ProductLayoutTest {
             assertThat(imp.bfs().wonVertices()).isEqualTo(game.vertexCount() - 2L);
             boolean[] won = imp.wonFlags();
             for (int p = 2; p < game.vertexCount(); p++) {
-                int id = imp.id(game.arenaVertex(p), game.goalState(p), game.monitorState(p));
+                int id = Math.toIntExact(imp.id(game.arenaVertex(p), game.goalState(p), game.monitorState(p)));
                 assertThat(won[id]).as("triple %s", game.describe(p)).isEqualTo(ref.winning(p));
             }
         }
