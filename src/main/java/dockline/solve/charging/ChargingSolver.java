@@ -259,6 +259,16 @@ public final class ChargingSolver {
         return chargeEdge[r];
     }
 
+    GoalPredecessors inverse() {
+        return inverse;
+    }
+
+    /** Values made by another pass of this package ({@link FloorSweep}). */
+    Values values(int usable, int[] need, boolean[] good, int rounds, int goodDocks, int[] impPos, int[] impNeed,
+                  int[] impEdge) {
+        return new Values(this, usable, need, good, rounds, goodDocks, impPos, impNeed, impEdge);
+    }
+
     int goalCount() {
         return goalCount;
     }
