@@ -13,6 +13,7 @@ import dockline.plan.Route;
 import dockline.report.Caveats;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.policy.Policy;
+import dockline.policy.ThresholdPolicy;
 import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -68,7 +69,9 @@ public final class ExportCommand extends MissionCommand {
                 err.println("dockline: " + policy.name() + " applies to the reserve objective only");
                 return ExitCodes.BAD_INPUT;
             }
+            // the safest policy of a mission with charging comes as level thresholds (missions/POLICY-FORMAT.md)
             Route route = discounted ? Route.Discounted.defaults()
+                    : policy.choice() == PolicyChoice.SAFEST ? new Route.Charging(false, false, true)
                     : new Route.Product(policy.choice(), false, false, false, false);
             Plan p = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
             if (!p.guaranteed()) {
@@ -104,8 +107,27 @@ public final class ExportCommand extends MissionCommand {
                 }
                 return ExitCodes.OK;
             }
-            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
             int lowest = p.lowestLevelUnits().getAsInt();
+            if (p.detail() instanceof Plan.Detail.Charging ch && ch.thresholds() != null) {
+                ThresholdPolicy tp = ch.thresholds();
+                PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), tp);
+                if (json) {
+                    ObjectNode o = summary(m, pol, states);
+                    o.put("thresholdPositions", tp.size());
+                    o.put("thresholds", tp.stepCount());
+                    o.put("lowestLevelUnits", lowest);
+                    o.put("policyChoice", "safest");
+                    out.println(Json.withCaveats(o));
+                } else {
+                    out.println("Wrote the policy for " + m.name() + " to " + policyFile + " as level thresholds: "
+                            + tp.size() + " positions, " + tp.stepCount() + " thresholds (" + pol.size()
+                            + " situations met from the start); battery never below " + CheckReport.amount(lowest, m)
+                            + " (the safest policy).");
+                    certifiedLines(m, states, out);
+                }
+                return ExitCodes.OK;
+            }
+            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
             if (json) {
                 ObjectNode o = summary(m, pol, states);
                 o.put("lowestLevelUnits", lowest);

@@ -4,6 +4,8 @@ package dockline.plan;
 public enum Method {
     /** Minimum charge on arena × goal (Knuth 1977): the robot cannot charge before the end. */
     FAST("fast"),
+    /** Least charge per position of arena × goal with the good docks as targets, every floor in one pass. */
+    CHARGING("charging"),
     /** The product game arena × goal × battery levels, its moves generated on demand, and the attractor. */
     PRODUCT("product"),
     /** The same product game stored in CSR arrays (the reference route). */
