@@ -12,7 +12,7 @@ public enum Method {
     STORED_PRODUCT("stored-product"),
     /** The verdict alone on the product game without storing it. */
     IMPLICIT_VERDICT("implicit-product"),
-    /** Bisection over the threshold solver and the minimum-credit fixpoint. */
+    /** Bisection over the threshold solver and the charging route's minimum-credit pass. */
     MARGINS("margins"),
     /** The product with the discounted-sum comparator (and the battery, unless the score alone is asked). */
     COMPARATOR_PRODUCT("comparator-product");

@@ -57,7 +57,8 @@ import java.util.OptionalInt;
  * mission's figures (the suggestions and margins probe variants of the figures, each compiled on its own).
  *
  * <p>Cost: one arena compile, O(cells × out-degree × budget); then the route's solve — fast path
- * O(m·G·log(n·G)) on arena × goal (Knuth 1977), product routes O(|V| + |E|) of the product
+ * O(m·G·log(n·G)) on arena × goal (Knuth 1977), the charging route one pass over arena × goal with every
+ * floor at once ({@link dockline.solve.charging.FloorSweep}; its suggestions O(log K) more passes), product routes O(|V| + |E|) of the product
  * (linear-time attractor, Grädel, Thomas and Wilke 2002, ch. 2), times O(log start) for the highest
  * floor by bisection and one more solve for the safest policy; suggestions add O(log capacity + log K)
  * verdicts; the certificate is O(closed loop).

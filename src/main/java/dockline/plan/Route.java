@@ -114,7 +114,7 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Charging, Ro
 
     /**
      * Reserve objective: the highest guaranteed floor and the lowest starting charge, each computed two
-     * independent ways (bisection over the threshold solver; the minimum-credit fixpoint), and the
+     * independent ways (bisection over the threshold solver; the charging route's minimum-credit pass), and the
      * suggestions when not guaranteed. No policy.
      */
     record Margins() implements Route {

@@ -31,7 +31,7 @@ public final class ChargingRoute {
      * @param startNeed         least charge above the floor needed at the start, or {@link ChargingSolver#INFINITE}
      * @param lowestStartUnits  floor + startNeed, empty when no starting charge wins
      * @param highestFloorUnits highest floor that can be guaranteed from the mission's starting charge, empty if none
-     * @param values            needs and threshold policy at the mission's floor
+     * @param pass              the pass (its history gives the threshold policies, see {@link #values()})
      * @param highest           needs and threshold policy at the highest floor, or null when there is none
      * @param solves            passes over the game (always 1: the figures come from the same pass)
      * @param rounds            batches of the pass (batch 0 plus one per dock added)
@@ -41,10 +41,20 @@ public final class ChargingRoute {
      * <p>Data only.
      */
     public record Analysis(Verdict verdict, int startNeed, OptionalInt lowestStartUnits, OptionalInt highestFloorUnits,
-                           ChargingSolver.Values values, ChargingSolver.Values highest, int solves, int rounds,
+                           FloorSweep pass, ChargingSolver.Values highest, int solves, int rounds,
                            FloorSweep.Result sweep, long millis) {
         public boolean guaranteed() {
             return verdict == Verdict.GUARANTEED;
+        }
+
+        /**
+         * Needs and threshold policy at the mission's floor, read out of the pass on each call (O(n + history):
+         * only a mission that is not guaranteed needs them, for its counterexample, so they are not kept). The
+         * start's need is exact; elsewhere a need is exact when the pass added every dock good at the floor, and
+         * otherwise (it stopped once the start's need was 0) an upper bound, with a policy that wins from it.
+         */
+        public ChargingSolver.Values values() {
+            return pass.values(sweep.floorBatches(), sweep.capacityUnits() - sweep.floorUnits());
         }
     }
 
@@ -72,10 +82,9 @@ public final class ChargingRoute {
             throw new IllegalStateException("internal: the charging pass's verdict at the floor and its highest floor"
                     + " disagree");
         }
-        ChargingSolver.Values v = sweep.values(r.floorBatches(), capacity - floor);
         ChargingSolver.Values h = r.highestFloorUnits().isPresent()
                 ? sweep.values(r.highestBatches(), capacity - r.highestFloorUnits().getAsInt()) : null;
         long millis = (System.nanoTime() - t0) / 1_000_000;
-        return new Analysis(Verdict.of(won), need, lowest, r.highestFloorUnits(), v, h, 1, r.batches(), r, millis);
+        return new Analysis(Verdict.of(won), need, lowest, r.highestFloorUnits(), sweep, h, 1, r.batches(), r, millis);
     }
 }

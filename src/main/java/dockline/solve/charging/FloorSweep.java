@@ -39,8 +39,9 @@ import java.util.OptionalInt;
  * wins (every dock of D<sub>k</sub> is good there), and the highest floor is the largest term: at the
  * highest floor f* the good docks are exactly some D<sub>k</sub> with φ<sub>k</sub> ≥ f*, whose term is
  * then at least f*. Terms after a dock of floor φ are at most φ, so the pass stops once the next key
- * is at most the best term and below the mission's floor (the need at the mission's floor is read
- * when the next key first falls below it, i.e. every dock good at that floor has been added).
+ * is at most the best term and the need at the mission's floor is known: it is read when the next key
+ * first falls below that floor (every dock good there has been added), or as soon as the start's need
+ * is 0 after a batch whose docks are all good at that floor (values only fall, and 0 is the least).
  *
  * <p><b>Lowering values.</b> Values only fall (more targets). A batch is a label-correcting
  * Dijkstra: a robot position taken from the queue recomputes each disturbance position before it
@@ -173,6 +174,12 @@ public final class FloorSweep {
         long phi = Long.MAX_VALUE; // the last added dock's floor; "infinite" after batch 0
         while (true) {
             int sNeed = startP < 0 ? INF : need[startP];
+            if (floorBatches < 0 && sNeed == 0 && phi >= floor) {
+                // the start's need cannot fall below 0, and every dock added so far is good at the floor: the
+                // need at the floor is known without adding the rest of the docks good there
+                floorNeed = 0;
+                floorBatches = batchEnd.size();
+            }
             if (sNeed != INF && sNeed <= start) {
                 long term = Math.min(phi, start - sNeed);
                 if (term > best) {
