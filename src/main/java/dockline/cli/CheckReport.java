@@ -72,8 +72,9 @@ final class CheckReport {
                 + ", capacity " + s.formatWh(m.capacityUnits()) + " (" + m.capacityUnits() + " units)");
         out.println("  Method: charging route (least charge per place x task progress, the good docks as targets,"
                 + " every floor in one pass): no battery levels in the game");
-        out.println("  Game: " + p.size().vertices() + " positions of arena x goal, " + a.rounds() + " batches; solved"
-                + " in " + a.millis() + " ms (" + p.timings().totalMillis() + " ms in all)");
+        out.println("  Game: " + p.size().vertices() + " positions of arena x goal, one pass of " + a.rounds() + " batch"
+                + (a.rounds() == 1 ? "" : "es") + "; solved in " + a.millis() + " ms (" + p.timings().totalMillis()
+                + " ms in all)");
         if (ch.thresholds() != null && p.guaranteed()) {
             out.println("  Policy: level thresholds over " + ch.thresholds().size() + " positions ("
                     + ch.thresholds().stepCount() + " thresholds; `dockline export` writes them)");
