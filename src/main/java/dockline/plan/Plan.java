@@ -38,7 +38,8 @@ import java.util.OptionalInt;
  * @param highestFloorUnits   the highest reserve floor that can be guaranteed from the start; empty when none
  *                            can, or when it was not searched
  * @param highestFloorSearched whether that search ran to the end
- * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (margins only)
+ * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (margins and the
+ *                            charging route)
  * @param suggestions         what would make a mission that is not guaranteed guaranteed, smallest change first
  * @param suggestionsNote     why there are no suggestions although they were asked for, or null
  * @param replays             the replays, when asked for
