@@ -5,7 +5,8 @@ import dockline.arena.ArenaCompiler;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
-import dockline.margin.MinimumCredit;
+import dockline.solve.charging.ChargingRoute;
+import dockline.solve.charging.ChargingSolver;
 import dockline.model.BuildingMap;
 import dockline.model.Mission;
 import dockline.model.Rational;
@@ -50,7 +51,7 @@ import java.util.function.Consumer;
  *       {@code implicit-bfs} / {@code implicit-policy} (the attractor, the attractor stopping once the
  *       start is won, plain BFS, and the route end to end with the robot's choices, the policy walk and
  *       the worst case, on {@code ImplicitReserveGame}, which stores no product graph), {@code fixpoint}
- *       (direct optimisation over energy levels on arena × goal, {@code MinimumCredit}).</li>
+ *       (the margins' minimum-credit solver on arena × goal: the charging route's one pass).</li>
  *   <li>{@code consumption}: {@link MissionSpec#consumptionOnly} (no charging, 1,000 levels):
  *       {@code fast} ({@link MinChargeSolver}, stopping once the start is decided), and the other
  *       methods where the product fits.</li>
@@ -636,20 +637,24 @@ public final class Benchmark {
     }
 
     /**
-     * The direct optimisation over energy levels (MinimumCredit, the margin package's fixpoint): the
-     * least starting level per vertex of arena × goal, then compared with the starting charge.
+     * The minimum-credit solver of the margins (the charging route's one pass, {@code FloorSweep}, which
+     * replaced the margin package's fixpoint over energy levels): the least starting level per position
+     * of arena × goal at the mission's floor, then compared with the starting charge. The row keeps its
+     * name; its vertices are the robot positions of arena × goal.
      */
     private BenchRow fixpoint(Instance inst, HeapSampler sampler, int reps) {
         Mission m = inst.mission;
         long base = HeapSampler.settledUsed();
-        Timed<MinimumCredit> t = time(sampler, base, reps, () -> MinimumCredit.solve(inst.arena, inst.goal, m.reserveUnits()));
-        MinimumCredit mc = t.value();
-        int need = mc.needAtStart();
-        boolean won = need != MinimumCredit.INFINITE && need <= m.startUnits() && m.startUnits() >= m.reserveUnits();
-        return new BenchRow(inst.side, inst.kind, "fixpoint", mc.productSize(), 0, 0, t.millis(), t.cpuMillis(), t.peak(),
+        Timed<ChargingRoute.Analysis> t = time(sampler, base, reps, () -> ChargingRoute.analyse(
+                new ChargingSolver(inst.arena, inst.goal), m.capacityUnits(), m.reserveUnits(), m.startUnits()));
+        ChargingRoute.Analysis a = t.value();
+        boolean won = a.guaranteed();
+        long positions = (long) inst.arena.robotCount() * inst.goal.stateCount();
+        return new BenchRow(inst.side, inst.kind, "fixpoint", positions, 0, 0, t.millis(), t.cpuMillis(), t.peak(),
                 Verdict.of(won).word(), inst.arenaMillis + t.millis(), -1, -1,
-                "least starting level over arena x goal (reachable pairs): "
-                        + (need == MinimumCredit.INFINITE ? "none" : need + " units") + " against " + m.startUnits());
+                "least starting level over arena x goal (charging route, one pass of " + a.rounds() + " batches): "
+                        + (a.lowestStartUnits().isEmpty() ? "none" : a.lowestStartUnits().getAsInt() + " units")
+                        + " against " + m.startUnits());
     }
 
     /** Discount factor of the discounted instance. */

@@ -7,21 +7,28 @@ import dockline.model.BuildingMap;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.solve.charging.ChargingRoute;
-import dockline.solve.charging.ChargingSolver;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
+import dockline.plan.Route;
+import dockline.replay.Replay;
 import java.math.BigDecimal;
 import java.util.Locale;
 
 /**
- * The benchmark row "resolution independence": one generated building with charging, solved by the
- * charging route ({@link ChargingRoute}: verdict, threshold policy, lowest start, highest floor) at 1,000
- * and at 10,000 battery levels, and a plain breadth-first search over arena × goal for scale.
+ * The benchmark row "resolution independence": one generated building with charging, the full check of
+ * the charging route ({@code check}'s default for it: {@link MissionPlanner} with {@link Route.Charging}:
+ * arena compile, verdict, threshold policy, its independent certificate, the worst-case replay, the highest
+ * floor and the lowest start, all from one pass) at 1,000 and at 10,000 battery levels, and a plain
+ * breadth-first search over arena × goal for scale.
  *
  * <p>The mission is {@link MissionSpec#docking} with a 50 Wh battery, reserve 20 %, start full, 2 Wh
  * per charging step, three rooms in order; at 0.05 Wh per unit (1,000 levels) and 0.005 Wh per unit
  * (10,000 levels) every energy figure of {@link MissionGenerator} and {@link BuildingGenerator} (0.05,
  * 0.1, 0.15, 0.25, 0.3, 2 Wh) is a whole number of units, so the two missions are the same game with
  * every energy figure scaled by ten; the row checks that the answers scale so. Times are the best of
- * a few runs, by the thread's CPU time. Not the certificate nor the worst case (not yet on this route).
+ * a few runs, by the thread's CPU time; the peak heap is sampled every millisecond during one run at
+ * 1,000 levels (garbage not yet collected included, so an upper bound).
  */
 public final class ResolutionBench {
 
@@ -29,32 +36,57 @@ public final class ResolutionBench {
     }
 
     /**
+     * One full check.
+     *
+     * @param plan      the plan
+     * @param worstCase the worst-case (or counterexample) replay's lowest level
+     * @param cpuMillis best thread CPU time of the runs
+     * @param peakBytes highest used heap during the first run, above the settled heap before it
+     * @param peakUsed  highest used heap during the first run, in all
+     */
+    public record Check(Plan plan, int worstCase, double cpuMillis, long peakBytes, long peakUsed) {
+        ChargingRoute.Analysis analysis() {
+            return ((Plan.Detail.Charging) plan.detail()).analysis();
+        }
+
+        String figures() {
+            ChargingRoute.Analysis a = analysis();
+            return String.format(Locale.ROOT, "%s, highest floor %s, lowest start %s, certified worst %s units, replay"
+                            + " worst %d; 1 pass of %,d batches, %,d policy entries, %,d recomputations",
+                    plan.verdict().word(), units(plan.highestFloorUnits()), units(plan.lowestStartUnits()),
+                    plan.certification() instanceof dockline.plan.Certification.Reserve r
+                            ? Integer.toString(r.certificate().worstMinimumUnits()) : "-",
+                    worstCase, a.rounds(), a.sweep().historyEntries(), a.sweep().recomputations());
+        }
+    }
+
+    /**
      * What the row measured.
      *
-     * @param side          floor side in cells
-     * @param positions     robot positions of arena × goal
-     * @param coarseMillis  charging route at 1,000 levels
-     * @param fineMillis    charging route at 10,000 levels
-     * @param bfsMillis     plain BFS over every vertex of arena × goal (robot and disturbance)
-     * @param coarse        the analysis at 1,000 levels
-     * @param fine          the analysis at 10,000 levels
-     * @param agree         the fine answers are the coarse ones times ten
+     * @param side      floor side in cells
+     * @param positions robot positions of arena × goal
+     * @param coarse    the full check at 1,000 levels
+     * @param fine      the full check at 10,000 levels
+     * @param bfsMillis plain BFS over every vertex of arena × goal (robot and disturbance) reachable from the start
+     * @param bfsVertices vertices that BFS reached
+     * @param agree     the fine answers are the coarse ones times ten
      *
      * <p>Data only.
      */
-    public record Row(int side, long positions, double coarseMillis, double fineMillis, double bfsMillis,
-                      ChargingRoute.Analysis coarse, ChargingRoute.Analysis fine, boolean agree) {
+    public record Row(int side, long positions, Check coarse, Check fine, double bfsMillis, int bfsVertices,
+                      boolean agree) {
 
         public String toText() {
-            return String.format(Locale.ROOT, "resolution independence, %dx%d, %,d positions: charging route %.0f ms"
-                            + " at 1,000 levels (%d solves, %d rounds), %.0f ms at 10,000 levels (%d solves, %d rounds),"
-                            + " ratio %.2f (target at most 1.5); plain BFS over arena x goal %.0f ms, route/BFS %.1f"
-                            + " at 1,000 levels; verdict %s, highest floor %s units, lowest start %s units;"
-                            + " answers scale by ten: %s%n",
-                    side, side, positions, coarseMillis, coarse.solves(), coarse.rounds(), fineMillis, fine.solves(),
-                    fine.rounds(), fineMillis / coarseMillis, bfsMillis, coarseMillis / bfsMillis,
-                    coarse.verdict().word(), units(coarse.highestFloorUnits()), units(coarse.lowestStartUnits()),
-                    agree ? "yes" : "NO");
+            return String.format(Locale.ROOT, "resolution independence, %dx%d, %,d positions of arena x goal; full"
+                            + " check (compile, verdict, threshold policy, certificate, worst-case replay, highest floor,"
+                            + " lowest start): %.0f ms at 1,000 levels, %.0f ms at 10,000 levels, ratio %.2f (target at"
+                            + " most 1.5); peak heap at 1,000 levels %.0f MB above the settled heap (%.0f MB used in"
+                            + " all; target under 1 GB); plain BFS over arena x goal (%,d vertices) %.0f ms, check/BFS"
+                            + " %.1f at 1,000 levels%n  1,000 levels: %s%n  10,000 levels: %s%n  answers scale by ten:"
+                            + " %s%n",
+                    side, side, positions, coarse.cpuMillis(), fine.cpuMillis(), fine.cpuMillis() / coarse.cpuMillis(),
+                    coarse.peakBytes() / 1e6, coarse.peakUsed() / 1e6, bfsVertices, bfsMillis,
+                    coarse.cpuMillis() / bfsMillis, coarse.figures(), fine.figures(), agree ? "yes" : "NO");
         }
     }
 
@@ -63,21 +95,63 @@ public final class ResolutionBench {
         BuildingMap map = BuildingGenerator.generate(side, seed, budget);
         Mission coarse = mission(map, budget, new BigDecimal("0.05"), seed);
         Mission fine = mission(map, budget, new BigDecimal("0.005"), seed);
-        Arena ac = ArenaCompiler.compile(coarse);
-        Arena af = ArenaCompiler.compile(fine);
-        GoalAutomaton goal = GoalAutomaton.of(coarse);
-        ChargingRoute.Analysis[] out = new ChargingRoute.Analysis[2];
         // warm the JIT on both before timing
-        run(ac, goal, coarse);
-        run(af, goal, fine);
-        double tc = best(reps, () -> out[0] = run(ac, goal, coarse));
-        double tf = best(reps, () -> out[1] = run(af, goal, fine));
-        double tb = best(reps, () -> bfs(ac, goal));
-        ChargingRoute.Analysis c = out[0];
-        ChargingRoute.Analysis f = out[1];
-        boolean agree = c.verdict() == f.verdict() && times10(c.lowestStartUnits()) == f.lowestStartUnits().orElse(-1)
-                && times10(c.highestFloorUnits()) == f.highestFloorUnits().orElse(-1);
-        return new Row(side, (long) ac.robotCount() * goal.stateCount(), tc, tf, tb, c, f, agree);
+        fullCheck(coarse);
+        fullCheck(fine);
+        Check c = measure(coarse, reps);
+        Check f = measure(fine, reps);
+        Arena ac = ArenaCompiler.compile(coarse);
+        GoalAutomaton goal = GoalAutomaton.of(coarse);
+        int[] seen = new int[1];
+        double tb = best(reps, () -> seen[0] = bfs(ac, goal));
+        Plan pc = c.plan();
+        Plan pf = f.plan();
+        boolean agree = pc.verdict() == pf.verdict() && times10(pc.lowestStartUnits()) == pf.lowestStartUnits().orElse(-1)
+                && times10(pc.highestFloorUnits()) == pf.highestFloorUnits().orElse(-1)
+                && c.worstCase() * 10 == f.worstCase();
+        return new Row(side, (long) ac.robotCount() * goal.stateCount(), c, f, tb, seen[0], agree);
+    }
+
+    /** The full check at 1,000 levels alone, once (for the floors too large to run twice). */
+    public static Check coarseOnly(int side, long seed, int budget) {
+        BuildingMap map = BuildingGenerator.generate(side, seed, budget);
+        return measure(mission(map, budget, new BigDecimal("0.05"), seed), 1);
+    }
+
+    /** The text line of {@link #coarseOnly}. */
+    public static String coarseText(int side, Check c) {
+        return String.format(Locale.ROOT, "charging route, full check, %dx%d at 1,000 levels: %.0f ms (thread CPU, one"
+                        + " run), peak heap %.0f MB above the settled heap (%.0f MB used in all); %s%n", side, side,
+                c.cpuMillis(), c.peakBytes() / 1e6, c.peakUsed() / 1e6, c.figures());
+    }
+
+    private static Check measure(Mission m, int reps) {
+        long base;
+        long peak;
+        Object[] out = new Object[2];
+        try (HeapSampler sampler = new HeapSampler()) {
+            base = HeapSampler.settledUsed();
+            sampler.start();
+            fullCheck(m, out);
+            peak = sampler.stop();
+        }
+        double t = best(reps, () -> fullCheck(m, out));
+        return new Check((Plan) out[0], (Integer) out[1], t, Math.max(0, peak - base), peak);
+    }
+
+    private static void fullCheck(Mission m) {
+        fullCheck(m, new Object[2]);
+    }
+
+    /** {@code check}'s work on the mission by the charging route, and the worst-case replay. */
+    private static void fullCheck(Mission m, Object[] out) {
+        Plan p = MissionPlanner.plan(m, PlanOptions.of(new Route.Charging(true, false, false)));
+        if (p.certification().problem().isPresent()) {
+            throw new IllegalStateException("internal: " + p.certification().problem().get());
+        }
+        Replay r = p.replays().orElseThrow().worstCase();
+        out[0] = p;
+        out[1] = r.minimumUnits();
     }
 
     private static String units(java.util.OptionalInt x) {
@@ -92,11 +166,6 @@ public final class ResolutionBench {
         MissionSpec spec = MissionSpec.docking(budget).withBattery(new BigDecimal("50"), resolution,
                 Charge.percent(new BigDecimal("100")), Charge.percent(new BigDecimal("20")));
         return MissionGenerator.generate(map, spec, seed);
-    }
-
-    private static ChargingRoute.Analysis run(Arena arena, GoalAutomaton goal, Mission m) {
-        return ChargingRoute.analyse(new ChargingSolver(arena, goal), m.capacityUnits(), m.reserveUnits(),
-                m.startUnits());
     }
 
     /** Breadth-first search from the start over arena × goal (every vertex, both players); returns vertices seen. */

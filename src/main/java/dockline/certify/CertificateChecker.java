@@ -9,6 +9,7 @@ import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.policy.Policy;
+import dockline.policy.ThresholdPolicy;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -60,6 +61,21 @@ public final class CertificateChecker {
     /** The closed loop of the policy (possibly stopped at its first problem), for replays and views. */
     public static ClosedLoop closedLoop(Arena arena, Policy policy, int floorUnits, int startUnits) {
         return ClosedLoop.build(arena, policy, floorUnits, startUnits, ClosedLoop.DEFAULT_MAX_NODES);
+    }
+
+    /** The closed loop of a threshold policy (possibly stopped at its first problem). */
+    public static ClosedLoop closedLoop(Arena arena, ThresholdPolicy policy, int floorUnits, int startUnits) {
+        return ClosedLoop.build(arena, policy, floorUnits, startUnits, ClosedLoop.DEFAULT_MAX_NODES);
+    }
+
+    /**
+     * Checks a threshold policy from the arena's start vertex with the given starting level: the same
+     * closed loop and checks as for rows, the action at every level a play meets read off the thresholds.
+     *
+     * @throws ClosedLoop.TooLargeException if the loop exceeds {@link ClosedLoop#DEFAULT_MAX_NODES}
+     */
+    public static Certificate check(Arena arena, ThresholdPolicy policy, int floorUnits, int startUnits) {
+        return certify(closedLoop(arena, policy, floorUnits, startUnits));
     }
 
     /** The certificate of an already built loop. */
@@ -185,8 +201,7 @@ public final class CertificateChecker {
                 case START_IN_AVOIDED_ZONE -> "the start cell " + loop.cell(0) + " lies in an avoided zone";
                 case MISSING_ENTRY -> "the policy has no entry for a situation the robot can reach: " + where;
                 case ILLEGAL_ACTION -> {
-                    var a = loop.policy().lookup(loop.cell(n), loop.level(n), loop.budgetLeft(n), loop.progress(n), null,
-                            loop.closures(n));
+                    var a = loop.lookup(loop.vertex(n), loop.level(n), loop.progress(n));
                     yield "the policy's action '" + a.map(Object::toString).orElse("?") + "' is not allowed " + where;
                 }
                 case BELOW_FLOOR -> where + ": the policy says '" + arena.action(loop.choice(n)) + "' and "

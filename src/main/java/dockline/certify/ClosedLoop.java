@@ -3,7 +3,11 @@ package dockline.certify;
 import dockline.arena.Action;
 import dockline.arena.Arena;
 import dockline.policy.Policy;
+import dockline.policy.PolicyEntry;
+import dockline.policy.ThresholdPolicy;
 import dockline.util.LongIntMap;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -16,6 +20,10 @@ import java.util.Optional;
  * (all tasks done, on a dock when required) have no successors. Battery levels follow maps/README.md, "Game
  * semantics":
  * {@code level' = min(capacity, level + delta)}; a successor below the floor is not a node.
+ *
+ * <p>The policy is either rows per situation ({@link Policy}) or thresholds per position
+ * ({@link ThresholdPolicy}: the action at a level is the position's first step at or below it, looked up
+ * here for every level a play meets, so the check is exact for every play from the start).
  *
  * <p>Cost: O(N + E) time and memory plus one policy lookup per node, for N nodes and E edges of the
  * loop; everything is stored in int arrays. The task progress is this package's own bookkeeping
@@ -61,9 +69,11 @@ public final class ClosedLoop extends LoopNodes {
 
 
     private Problem problem;
+    private final ThresholdPolicy thresholds;
 
-    private ClosedLoop(Arena arena, Policy policy, int floor, int startLevel) {
+    private ClosedLoop(Arena arena, Policy policy, ThresholdPolicy thresholds, int floor, int startLevel) {
         super(arena, policy, floor, startLevel);
+        this.thresholds = thresholds;
     }
 
     /**
@@ -73,9 +83,53 @@ public final class ClosedLoop extends LoopNodes {
      * @throws TooLargeException if the loop has more than {@code maxNodes} nodes
      */
     static ClosedLoop build(Arena arena, Policy policy, int floor, int startLevel, int maxNodes) {
-        ClosedLoop loop = new ClosedLoop(arena, policy, floor, startLevel);
+        ClosedLoop loop = new ClosedLoop(arena, policy, null, floor, startLevel);
         loop.explore(maxNodes);
         return loop;
+    }
+
+    /**
+     * Builds the loop of a threshold policy; stops at the first problem.
+     *
+     * @throws TooLargeException if the loop has more than {@code maxNodes} nodes
+     */
+    static ClosedLoop build(Arena arena, ThresholdPolicy policy, int floor, int startLevel, int maxNodes) {
+        ClosedLoop loop = new ClosedLoop(arena, null, policy, floor, startLevel);
+        loop.explore(maxNodes);
+        return loop;
+    }
+
+    /** The threshold policy this loop follows, when it follows one. */
+    public Optional<ThresholdPolicy> thresholds() {
+        return Optional.ofNullable(thresholds);
+    }
+
+    /**
+     * The policy as rows: the given rows, or for a threshold policy one row per robot situation of the
+     * loop with the action the thresholds give there (made on first use).
+     */
+    @Override
+    public Policy policy() {
+        if (policy == null) {
+            List<PolicyEntry> rows = new ArrayList<>();
+            for (int n = 0; n < expanded; n++) {
+                int d = nodeChoice.get(n);
+                if (d >= 0) {
+                    int v = nodeVertex.get(n);
+                    rows.add(new PolicyEntry(arena.cellOf(v), nodeLevel.get(n), arena.budgetLeft(v), nodeMask.get(n),
+                            arena.action(d), null, arena.closures(v)));
+                }
+            }
+            policy = new Policy(rows);
+        }
+        return policy;
+    }
+
+    /** The action the policy gives at a situation (rows or thresholds). */
+    Optional<Action> lookup(int v, int level, int mask) {
+        return thresholds != null
+                ? thresholds.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, arena.closures(v))
+                : policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, null, arena.closures(v));
     }
 
     private void explore(int maxNodes) {
@@ -102,7 +156,7 @@ public final class ClosedLoop extends LoopNodes {
                 nodeChoice.add(-1);
                 continue;
             }
-            Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, null, arena.closures(v));
+            Optional<Action> act = lookup(v, level, mask);
             if (act.isEmpty()) {
                 nodeChoice.add(-1);
                 problem = new Problem(ProblemKind.MISSING_ENTRY, n, -1, level);

@@ -17,7 +17,7 @@ import java.util.List;
 abstract class LoopNodes {
 
     final Arena arena;
-    final Policy policy;
+    Policy policy; // a threshold policy's loop makes its rows on demand (ClosedLoop.policy)
     final int floor;
     final int startLevel;
     final int capacity;

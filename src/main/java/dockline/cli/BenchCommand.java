@@ -47,7 +47,8 @@ public final class BenchCommand extends CommandBase {
             + " lines and in the longest lines read (reading must be linear in the file size)")
     boolean reading;
     @Option(names = "--resolution-row", description = "run only the row \"resolution independence\": the charging"
-            + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
+            + " route's full check on one generated floor (the first of --sizes, default 256) at 1,000 and 10,000 battery"
+            + " levels; further --sizes: the full check at 1,000 levels once")
     boolean resolutionRow;
 
     @Option(names = "--view", description = "run only the view section: the map view, headless, on the bundled maps"
@@ -73,6 +74,15 @@ public final class BenchCommand extends CommandBase {
             ResolutionBench.Row row = ResolutionBench.run(side, seed, 2, 3);
             out.print(row.toText());
             out.flush();
+            // further sides: the full check at 1,000 levels once (e.g. --sizes 256,512)
+            for (int i = 1; sizes != null && i < sizes.size(); i++) {
+                int s = sizes.get(i);
+                if (s < BuildingGenerator.MIN_SIDE || s > BuildingGenerator.MAX_SIDE) {
+                    continue;
+                }
+                out.print(ResolutionBench.coarseText(s, ResolutionBench.coarseOnly(s, seed, 2)));
+                out.flush();
+            }
             return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
         }
         if (reading) {

@@ -170,9 +170,14 @@ public final class CheckCommand extends MissionCommand {
             try {
                 p = MissionPlanner.plan(m, PlanOptions.of(r).withMemoryBudget(mission.memoryBudgetBytes()));
             } catch (RouteNotApplicableException e) {
-                err.println("dockline: " + mission.missionFile + ": --method fast does not apply: the robot can charge"
-                        + " on a dock before the mission is complete, and the fast path counts consumption only. Use"
-                        + " --method product (or auto).");
+                if (r instanceof Route.Charging) {
+                    err.println("dockline: " + mission.missionFile + ": --method charging does not apply: "
+                            + e.getMessage() + ". Use --method product (or auto).");
+                } else {
+                    err.println("dockline: " + mission.missionFile + ": --method fast does not apply: the robot can"
+                            + " charge on a dock before the mission is complete, and the fast path counts consumption"
+                            + " only. Use --method product (or auto).");
+                }
                 return ExitCodes.BAD_INPUT;
             }
             // never a silent "guaranteed": a policy that failed its independent certificate is an internal error

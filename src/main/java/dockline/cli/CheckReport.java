@@ -13,6 +13,7 @@ import dockline.plan.PolicyChoice;
 import dockline.report.Caveats;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.solve.fast.FastPath;
+import dockline.solve.charging.ChargingRoute;
 import dockline.solve.fast.MinChargeSolver;
 import dockline.solve.reserve.ReserveAnalysis;
 import dockline.solve.reserve.ReserveSolver;
@@ -44,9 +45,47 @@ final class CheckReport {
             fastText(p, f.analysis(), out);
         } else if (d instanceof Plan.Detail.VerdictOnlyFast f) {
             fastText(p, f.analysis(), out);
+        } else if (d instanceof Plan.Detail.Charging ch) {
+            chargingText(p, ch, out);
         } else {
             productText(p, ((Plan.Detail.Product) d).analysis(), out);
         }
+    }
+
+    private static void chargingText(Plan p, Plan.Detail.Charging ch, PrintWriter out) {
+        Mission m = p.mission();
+        EnergyScale s = m.scale();
+        ChargingRoute.Analysis a = ch.analysis();
+        verdictLine(m, p.guaranteed(), out);
+        if (p.lowestLevelUnits().isPresent()) {
+            out.println("  Worst battery level under the policy:  " + amount(p.lowestLevelUnits().getAsInt(), m)
+                    + " (the safest policy: its worst case is the highest guaranteed floor; it may take more moves)");
+        } else {
+            out.println("  Worst battery level under the policy:  none (there is no safe policy)");
+        }
+        OptionalInt h = p.highestFloorUnits();
+        out.println("  Highest reserve floor guaranteed:      " + (h.isPresent() ? amount(h.getAsInt(), m)
+                : "none (not even a floor of 0 can be guaranteed)"));
+        out.println("  Lowest starting charge for the floor:  " + (p.lowestStartUnits().isPresent()
+                ? amount(p.lowestStartUnits().getAsInt(), m) : "none (no starting charge is enough)"));
+        out.println("  Start " + amount(m.startUnits(), m) + ", reserve floor " + amount(m.reserveUnits(), m)
+                + ", capacity " + s.formatWh(m.capacityUnits()) + " (" + m.capacityUnits() + " units)");
+        out.println("  Method: charging route (least charge per place x task progress, the good docks as targets,"
+                + " every floor in one pass): no battery levels in the game");
+        out.println("  Game: " + p.size().vertices() + " positions of arena x goal, one pass of " + a.rounds() + " batch"
+                + (a.rounds() == 1 ? "" : "es") + "; solved in " + a.millis() + " ms (" + p.timings().totalMillis()
+                + " ms in all)");
+        if (ch.thresholds() != null && p.guaranteed()) {
+            out.println("  Policy: level thresholds over " + ch.thresholds().size() + " positions ("
+                    + ch.thresholds().stepCount() + " thresholds; `dockline export` writes them)");
+        }
+        out.println("  Energy: " + s.describe());
+        reserveCertificateLine(p, out);
+        suggestions(p, out);
+        for (String note : p.notes()) {
+            out.println("  Note: " + note);
+        }
+        out.println(Caveats.block());
     }
 
     private static void productText(Plan p, ReserveAnalysis a, PrintWriter out) {
@@ -283,6 +322,15 @@ final class CheckReport {
                 fastJson(o, f.analysis());
             } else if (d instanceof Plan.Detail.VerdictOnlyFast f) {
                 fastJson(o, f.analysis());
+            } else if (d instanceof Plan.Detail.Charging ch) {
+                Json.putOptional(o, "lowestStartUnits", p.lowestStartUnits());
+                o.put("productVertices", p.size().vertices());
+                o.put("exploredVertices", p.size().exploredVertices());
+                o.put("solveMillis", ch.analysis().millis());
+                if (ch.thresholds() != null && p.guaranteed()) {
+                    o.put("thresholdPositions", ch.thresholds().size());
+                    o.put("thresholds", ch.thresholds().stepCount());
+                }
             } else if (d instanceof Plan.Detail.VerdictOnlyProduct v) {
                 ReserveSolver.ImplicitVerdict iv = v.verdict();
                 o.put("exploredVertices", iv.exploredVertices());

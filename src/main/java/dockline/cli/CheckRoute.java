@@ -13,9 +13,10 @@ import picocli.CommandLine.Option;
 final class CheckRoute {
 
     @Option(names = "--method", paramLabel = "ROUTE", defaultValue = "auto",
-            description = "auto (default: the fast path when the robot cannot charge before the end, else the product"
-                    + " game with its moves generated on demand), fast, product, or stored (the product game"
-                    + " stored in arrays: the reference route, far more memory)")
+            description = "auto (default: the fast path when the robot cannot charge before the end, else the charging"
+                    + " route, or the product game with its moves generated on demand for --fewest-moves), fast,"
+                    + " charging (least charge per position, every floor in one pass, threshold policy), product,"
+                    + " or stored (the product game stored in arrays: the reference route, far more memory)")
     String method;
 
     @Option(names = "--verdict-only",
@@ -30,13 +31,14 @@ final class CheckRoute {
     /** The route of the options, or null after printing the problem. */
     Route route(PolicyOption policy, PrintWriter err) {
         String m = method == null ? "auto" : method.trim().toLowerCase(Locale.ROOT);
-        if (!m.equals("auto") && !m.equals("fast") && !m.equals("product") && !m.equals("stored")) {
-            err.println("dockline: --method must be auto, fast, product or stored, not '" + method + "'");
+        if (!m.equals("auto") && !m.equals("fast") && !m.equals("charging") && !m.equals("product")
+                && !m.equals("stored")) {
+            err.println("dockline: --method must be auto, fast, charging, product or stored, not '" + method + "'");
             return null;
         }
         PolicyChoice choice = policy.choice();
         if (verdictOnly) {
-            if (m.equals("stored")) {
+            if (m.equals("stored") || m.equals("charging")) {
                 err.println("dockline: --verdict-only decides on the product game without storing it; drop --method"
                         + " stored");
                 return null;
@@ -56,6 +58,13 @@ final class CheckRoute {
                     return null;
                 }
                 return Route.Fast.defaults();
+            case "charging":
+                if (policy.fewestMoves) {
+                    err.println("dockline: --fewest-moves applies to the product routes; the charging route has one"
+                            + " policy, the threshold policy at the highest floor, which is the safest");
+                    return null;
+                }
+                return Route.Charging.defaults();
             case "product":
                 return Route.Product.of(choice);
             case "stored":

@@ -13,6 +13,7 @@ import dockline.plan.Route;
 import dockline.report.Caveats;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.policy.Policy;
+import dockline.policy.ThresholdPolicy;
 import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -23,9 +24,10 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
- * {@code dockline export MISSION --policy FILE}: plans the mission ({@link MissionPlanner#plan}, the
- * product route with the safest policy unless {@code --fewest-moves}) and writes the robot's policy,
- * one row per situation it can meet (format: missions/POLICY-FORMAT.md; CSV for a {@code .csv}
+ * {@code dockline export MISSION --policy FILE}: plans the mission ({@link MissionPlanner#plan}: the
+ * charging route with its safest policy, as level thresholds per game position it can meet (format
+ * version 4); the product route where the charging route does not apply, and with {@code --fewest-moves},
+ * one row per situation it can meet (format version 3); missions/POLICY-FORMAT.md; CSV for a {@code .csv}
  * name, else JSON), atomically. Nothing is written when the mission is not guaranteed, and nothing
  * is written unless the policy passed its independent certificate (in the plan): a failed certificate is exit 4. For a
  * mission with a discounted objective the rows carry the robot's score memory (format version 2,
@@ -35,8 +37,9 @@ import picocli.CommandLine.Option;
         description = {"Writes the certified policy of a guaranteed mission: the action to take in every situation the"
                 + " robot can meet.",
                 "A situation is the cell, the battery level, the disturbances left, the tasks done and, for a discounted"
-                + " score, the score gap. JSON, or CSV for a .csv name; nothing is written when the mission is not"
-                + " guaranteed."},
+                + " score, the score gap. The safest policy of a mission with charging is written as level thresholds"
+                + " per position (at or above X units do this, below it do that). JSON, or CSV for a .csv name;"
+                + " nothing is written when the mission is not guaranteed."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
@@ -68,7 +71,9 @@ public final class ExportCommand extends MissionCommand {
                 err.println("dockline: " + policy.name() + " applies to the reserve objective only");
                 return ExitCodes.BAD_INPUT;
             }
+            // the safest policy of a mission with charging comes as level thresholds (missions/POLICY-FORMAT.md)
             Route route = discounted ? Route.Discounted.defaults()
+                    : policy.choice() == PolicyChoice.SAFEST ? new Route.Charging(false, false, true)
                     : new Route.Product(policy.choice(), false, false, false, false);
             Plan p = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
             if (!p.guaranteed()) {
@@ -104,8 +109,27 @@ public final class ExportCommand extends MissionCommand {
                 }
                 return ExitCodes.OK;
             }
-            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
             int lowest = p.lowestLevelUnits().getAsInt();
+            if (p.detail() instanceof Plan.Detail.Charging ch && ch.thresholds() != null) {
+                ThresholdPolicy tp = ch.thresholds();
+                PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), tp);
+                if (json) {
+                    ObjectNode o = summary(m, pol, states);
+                    o.put("thresholdPositions", tp.size());
+                    o.put("thresholds", tp.stepCount());
+                    o.put("lowestLevelUnits", lowest);
+                    o.put("policyChoice", "safest");
+                    out.println(Json.withCaveats(o));
+                } else {
+                    out.println("Wrote the policy for " + m.name() + " to " + policyFile + " as level thresholds: "
+                            + tp.size() + " positions, " + tp.stepCount() + " thresholds (" + pol.size()
+                            + " situations met from the start); battery never below " + CheckReport.amount(lowest, m)
+                            + " (the safest policy).");
+                    certifiedLines(m, states, out);
+                }
+                return ExitCodes.OK;
+            }
+            PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
             if (json) {
                 ObjectNode o = summary(m, pol, states);
                 o.put("lowestLevelUnits", lowest);

@@ -26,7 +26,8 @@ import picocli.CommandLine.Option;
  * {@code dockline margin MISSION}: asks the core for the margins ({@link Route.Margins}) and prints
  * them: the highest reserve floor that can be guaranteed from the
  * mission's starting charge and the lowest starting charge that guarantees its floor, each computed
- * by bisection over the threshold solver and by the minimum-credit fixpoint, with both timings. The
+ * by bisection over the threshold solver and by the minimum-credit pass of the charging route (still called
+ * "fixpoint" in the output), with both timings. The
  * two must agree; if they do not, that is an internal error (exit 4).
  */
 @Command(name = "margin", mixinStandardHelpOptions = true,

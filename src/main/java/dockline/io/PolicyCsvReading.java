@@ -31,6 +31,7 @@ final class PolicyCsvReading {
         Rows rows = new Rows(p);
         boolean headerRow = false;
         boolean formatLine = false;
+        boolean thresholdForm = false;
         for (int i = 0; i < lines.length; i++) {
             String line = lines[i];
             int ln = i + 1;
@@ -41,11 +42,12 @@ final class PolicyCsvReading {
                 String c = line.substring(1).trim();
                 if (!formatLine && !headerRow) {
                     formatLine = true;
+                    thresholdForm = c.equals(FORMAT + " " + VERSION_THRESHOLDS);
                     if (!c.equals(FORMAT + " " + VERSION) && !c.equals(FORMAT + " " + VERSION_1)
-                            && !c.equals(FORMAT + " " + VERSION_WITH_SCORE)) {
+                            && !c.equals(FORMAT + " " + VERSION_WITH_SCORE) && !thresholdForm) {
                         p.addPolicy(new Pos(ln, 1), "not a dockline policy: the first line must be '# " + FORMAT + " "
-                                + VERSION + "' (versions " + VERSION_1 + " and " + VERSION_WITH_SCORE
-                                + " are read as well)");
+                                + VERSION + "' (versions " + VERSION_1 + ", " + VERSION_WITH_SCORE + " and "
+                                + VERSION_THRESHOLDS + " are read as well)");
                     }
                     continue;
                 }
@@ -78,7 +80,15 @@ final class PolicyCsvReading {
             if (!headerRow) {
                 headerRow = true;
                 String hr = line.trim();
-                if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
+                if (thresholdForm) {
+                    if (hr.equals(CSV_STEP_HEADER) || hr.equals(CSV_STEP_CLOSED_HEADER)) {
+                        columns = List.of(hr.split(","));
+                    } else {
+                        p.addPolicy(new Pos(ln, 1), "the header row of a threshold policy must be '" + CSV_STEP_HEADER
+                                + "' (followed by '," + CLOSED + "' with lasting events)");
+                        return null;
+                    }
+                } else if (hr.equals(CSV_SCORE_HEADER) || hr.equals(OLD_CSV_SCORE_HEADER)) {
                     columns = SCORE_ROW_KEYS;
                 } else if (hr.equals(CSV_CLOSED_HEADER) || hr.equals(CSV_SCORE_CLOSED_HEADER)) {
                     columns = List.of(hr.split(","));
@@ -100,6 +110,10 @@ final class PolicyCsvReading {
         Header h = header(p, Pos.START, values, at, tasks);
         if (h == null) {
             return null;
+        }
+        if (thresholdForm) {
+            dockline.policy.ThresholdPolicy tp = rows.thresholds(h, Pos.START);
+            return tp == null || p.any() ? null : new Document(h, new Policy(List.of()), tp);
         }
         Policy policy = rows.policy(h);
         return policy == null || p.any() ? null : new Document(h, policy);

@@ -13,6 +13,7 @@ import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
+import dockline.policy.ThresholdPolicy;
 import dockline.policy.PolicyScore;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
@@ -59,6 +60,8 @@ public final class PolicyFiles {
     public static final int VERSION_1 = 1;
     /** The second format version, policies with a score memory, with the earlier key names (still read). */
     public static final int VERSION_WITH_SCORE = 2;
+    /** The version that added the threshold form (level thresholds per game position). */
+    public static final int VERSION_THRESHOLDS = 4;
 
     /**
      * The key names of versions 1 and 2 and their names since version 3; files of the earlier
@@ -132,15 +135,28 @@ public final class PolicyFiles {
         }
     }
 
-    /** A policy file's content. */
-    public record Document(Header header, Policy policy) {
+    /**
+     * A policy file's content: rows per situation, or level thresholds per game position.
+     *
+     * @param policy     the rows (a threshold file: empty rows)
+     * @param thresholds the thresholds, null for a file of rows
+     */
+    public record Document(Header header, Policy policy, ThresholdPolicy thresholds) {
+        public Document(Header header, Policy policy) {
+            this(header, policy, null);
+        }
+
+        /** Whether the file holds the threshold form. */
+        public boolean thresholdForm() {
+            return thresholds != null;
+        }
     }
 
     static final List<String> SCORE_KEYS = List.of("objective", "discount", "threshold", "relation",
             "weightBoundUnits", "reserveKept");
     static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unitWh", "reserveUnits",
             "capacityUnits", "budget", "tasks", "objective", "discount", "threshold", "relation", "weightBoundUnits",
-            "reserveKept", "rows");
+            "reserveKept", "rows", "thresholds");
     static final List<String> ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "action",
             "to");
     static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
@@ -149,6 +165,11 @@ public final class PolicyFiles {
     static final String CLOSED = "closed";
     static final List<String> JSON_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
             "action", "to", CLOSED);
+    /** The keys of one threshold (one step of a position's list) in JSON. */
+    static final List<String> JSON_STEP_KEYS = List.of("cell", "budgetLeft", "progress", "atLeastUnits", "action", "to",
+            CLOSED);
+    static final String CSV_STEP_HEADER = "cell,budgetLeft,progress,atLeastUnits,action,to";
+    static final String CSV_STEP_CLOSED_HEADER = CSV_STEP_HEADER + "," + CLOSED;
     static final String CSV_HEADER = String.join(",", ROW_KEYS);
     static final String CSV_SCORE_HEADER = String.join(",", SCORE_ROW_KEYS);
     /** The header rows of versions 1 and 2. */
@@ -177,6 +198,108 @@ public final class PolicyFiles {
             }
             w.flush();
         });
+    }
+
+    /**
+     * Writes a threshold policy atomically (format version {@value #VERSION_THRESHOLDS}, the threshold form),
+     * as CSV for a {@code .csv} name, else as JSON.
+     *
+     * @throws IllegalArgumentException if the header has a discounted objective (threshold policies are for the
+     *                                  reserve floor)
+     */
+    public static void write(Path file, Header header, ThresholdPolicy policy) throws IOException {
+        if (header.score().isPresent()) {
+            throw new IllegalArgumentException("a threshold policy is for the reserve floor, not a discounted score");
+        }
+        AtomicFiles.write(file, out -> {
+            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            if (isCsv(file)) {
+                writeThresholdCsv(w, header, policy);
+            } else {
+                writeThresholdJson(w, header, policy);
+            }
+            w.flush();
+        });
+    }
+
+    static void writeThresholdJson(Writer w, Header h, ThresholdPolicy policy) throws IOException {
+        JsonFactory f = new JsonFactory();
+        try (JsonGenerator g = f.createGenerator(w)) {
+            g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            DefaultPrettyPrinter pp = new DefaultPrettyPrinter();
+            pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE);
+            g.setPrettyPrinter(pp);
+            g.writeStartObject();
+            g.writeStringField("format", FORMAT);
+            g.writeNumberField("version", VERSION_THRESHOLDS);
+            g.writeStringField("mission", h.mission());
+            g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
+            g.writeNumberField("reserveUnits", h.floorUnits());
+            g.writeNumberField("capacityUnits", h.capacityUnits());
+            g.writeNumberField("budget", h.budget());
+            g.writeArrayFieldStart("tasks");
+            for (String t : h.tasks()) {
+                g.writeString(t);
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("thresholds");
+            for (ThresholdPolicy.Row r : policy.rows()) {
+                for (ThresholdPolicy.Step st : r.steps()) {
+                    g.writeRawValue(compactStep(f, r, st));
+                }
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        w.write(System.lineSeparator());
+    }
+
+    static String compactStep(JsonFactory f, ThresholdPolicy.Row r, ThresholdPolicy.Step st) throws IOException {
+        java.io.StringWriter sw = new java.io.StringWriter();
+        try (JsonGenerator g = f.createGenerator(sw)) {
+            g.writeStartObject();
+            g.writeStringField("cell", r.cell().toString());
+            g.writeNumberField("budgetLeft", r.budgetLeft());
+            g.writeNumberField("progress", r.progress());
+            g.writeNumberField("atLeastUnits", st.atLeastUnits());
+            g.writeStringField("action", st.action().kind().word());
+            if (st.action().kind() == ActionKind.MOVE) {
+                g.writeStringField("to", st.action().target().toString());
+            }
+            if (!r.closures().isEmpty()) {
+                g.writeStringField(CLOSED, r.closures());
+            }
+            g.writeEndObject();
+        }
+        return sw.toString();
+    }
+
+    static void writeThresholdCsv(Writer w, Header h, ThresholdPolicy policy) throws IOException {
+        String nl = "\n";
+        w.write("# " + FORMAT + " " + VERSION_THRESHOLDS + nl);
+        w.write("# mission: " + h.mission().replace('\n', ' ').replace('\r', ' ') + nl);
+        w.write("# unitWh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
+        w.write("# reserveUnits: " + h.floorUnits() + nl);
+        w.write("# capacityUnits: " + h.capacityUnits() + nl);
+        w.write("# budget: " + h.budget() + nl);
+        w.write("# tasks: " + String.join(" ", h.tasks()) + nl);
+        boolean closed = policy.rows().stream().anyMatch(r -> !r.closures().isEmpty());
+        w.write((closed ? CSV_STEP_CLOSED_HEADER : CSV_STEP_HEADER) + nl);
+        StringBuilder sb = new StringBuilder();
+        for (ThresholdPolicy.Row r : policy.rows()) {
+            for (ThresholdPolicy.Step st : r.steps()) {
+                sb.setLength(0);
+                sb.append(r.cell()).append(',').append(r.budgetLeft()).append(',').append(r.progress()).append(',')
+                        .append(st.atLeastUnits()).append(',').append(st.action().kind().word()).append(',');
+                if (st.action().kind() == ActionKind.MOVE) {
+                    sb.append(st.action().target());
+                }
+                if (closed) {
+                    sb.append(',').append(r.closures().replace('\n', ' ').replace('\r', ' '));
+                }
+                w.write(sb.append(nl).toString());
+            }
+        }
     }
 
     static void writeJson(Writer w, Header h, Policy policy) throws IOException {
@@ -346,6 +469,41 @@ public final class PolicyFiles {
             positions.add(pos);
         }
 
+        /**
+         * The threshold policy: the steps grouped by position, thresholds falling; a threshold file is for
+         * the reserve floor only.
+         */
+        ThresholdPolicy thresholds(Header h, Pos top) {
+            if (h.score().isPresent()) {
+                problems.addPolicy(top, "a threshold policy is for the reserve floor: leave out 'objective: discounted'");
+                return null;
+            }
+            for (int i = 0; i < entries.size(); i++) {
+                if (entries.get(i).scored()) {
+                    problems.addPolicy(positions.get(i), "a threshold has no 'score'");
+                }
+            }
+            if (problems.any()) {
+                return null;
+            }
+            Map<String, List<PolicyEntry>> byPosition = new java.util.LinkedHashMap<>();
+            for (PolicyEntry e : entries) {
+                byPosition.computeIfAbsent(e.cell() + "/" + e.budgetLeft() + "/" + e.progress() + "/" + e.closures(),
+                        k -> new ArrayList<>()).add(e);
+            }
+            List<ThresholdPolicy.Row> out = new ArrayList<>();
+            for (List<PolicyEntry> steps : byPosition.values()) {
+                steps.sort(java.util.Comparator.comparingInt(PolicyEntry::level).reversed());
+                List<ThresholdPolicy.Step> st = new ArrayList<>();
+                for (PolicyEntry e : steps) {
+                    st.add(new ThresholdPolicy.Step(e.level(), e.action()));
+                }
+                PolicyEntry first = steps.get(0);
+                out.add(new ThresholdPolicy.Row(first.cell(), first.budgetLeft(), first.progress(), first.closures(), st));
+            }
+            return new ThresholdPolicy(out);
+        }
+
         /** The policy; every row has a score memory exactly when the header has the discounted objective. */
         Policy policy(Header h) {
             boolean scored = h.score().isPresent();
@@ -375,6 +533,11 @@ public final class PolicyFiles {
 
     /** Checks the fields of one row; reports problems at the given positions; null when bad. */
     static PolicyEntry row(Problems p, Pos rowPos, Map<String, String> values, Map<String, Pos> at) {
+        if (values.containsKey("atLeastUnits")) {
+            // a threshold: the same fields as a row, its level being the threshold
+            values.put("levelUnits", values.remove("atLeastUnits"));
+            at.put("levelUnits", at.get("atLeastUnits"));
+        }
         boolean ok = true;
         for (String k : List.of("cell", "levelUnits", "budgetLeft", "progress", "action")) {
             if (!values.containsKey(k)) {
@@ -433,7 +596,7 @@ public final class PolicyFiles {
     static boolean knownVersion(String v) {
         String t = v.trim();
         return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_1))
-                || t.equals(String.valueOf(VERSION_WITH_SCORE));
+                || t.equals(String.valueOf(VERSION_WITH_SCORE)) || t.equals(String.valueOf(VERSION_THRESHOLDS));
     }
 
     static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {

@@ -41,6 +41,7 @@ final class PolicyJsonReading {
             List<String> tasks = new ArrayList<>();
             Rows rows = new Rows(p);
             boolean sawRows = false;
+            boolean sawThresholds = false;
             Pos top = pos(j.currentTokenLocation());
             while (j.nextToken() == JsonToken.FIELD_NAME) {
                 String key = canonical(j.currentName());
@@ -69,6 +70,17 @@ final class PolicyJsonReading {
                             }
                         }
                     }
+                    case "thresholds" -> {
+                        sawThresholds = true;
+                        if (t != JsonToken.START_ARRAY) {
+                            p.addPolicy(vp, "'thresholds' must be a list of thresholds");
+                            j.skipChildren();
+                            continue;
+                        }
+                        while (j.nextToken() != JsonToken.END_ARRAY) {
+                            readRow(j, rows, JSON_STEP_KEYS);
+                        }
+                    }
                     case "rows" -> {
                         sawRows = true;
                         if (t != JsonToken.START_ARRAY) {
@@ -77,7 +89,7 @@ final class PolicyJsonReading {
                             continue;
                         }
                         while (j.nextToken() != JsonToken.END_ARRAY) {
-                            readRow(j, rows);
+                            readRow(j, rows, JSON_ROW_KEYS);
                         }
                     }
                     default -> {
@@ -97,14 +109,24 @@ final class PolicyJsonReading {
             if (values.containsKey("version") && !knownVersion(values.get("version"))) {
                 p.addPolicy(at.get("version"), "policy format version " + Loading.shorten(values.get("version"))
                         + " is not known (this dockline reads versions " + VERSION_1 + ", " + VERSION_WITH_SCORE
-                        + " and " + VERSION + ")");
+                        + ", " + VERSION + " and " + VERSION_THRESHOLDS + ")");
             }
-            if (!sawRows) {
-                p.addPolicy(top, "no 'rows' in the policy file");
+            if (sawRows && sawThresholds) {
+                p.addPolicy(top, "a policy file holds 'rows' or 'thresholds', not both");
+            } else if (!sawRows && !sawThresholds) {
+                p.addPolicy(top, "no 'rows' (or 'thresholds') in the policy file");
+            }
+            if (sawThresholds && values.containsKey("version")
+                    && !values.get("version").trim().equals(String.valueOf(VERSION_THRESHOLDS))) {
+                p.addPolicy(at.get("version"), "'thresholds' need format version " + VERSION_THRESHOLDS);
             }
             Header h = header(p, top, values, at, tasks);
             if (h == null) {
                 return null;
+            }
+            if (sawThresholds) {
+                dockline.policy.ThresholdPolicy tp = rows.thresholds(h, top);
+                return tp == null || p.any() ? null : new Document(h, new Policy(List.of()), tp);
             }
             Policy policy = rows.policy(h);
             return policy == null || p.any() ? null : new Document(h, policy);
@@ -117,7 +139,7 @@ final class PolicyJsonReading {
         }
     }
 
-    private void readRow(JsonParser j, Rows rows) throws IOException {
+    private void readRow(JsonParser j, Rows rows, List<String> keys) throws IOException {
         Pos rp = pos(j.currentTokenLocation());
         if (j.currentToken() != JsonToken.START_OBJECT) {
             p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
@@ -132,8 +154,8 @@ final class PolicyJsonReading {
             Pos kp = pos(j.currentTokenLocation());
             JsonToken t = j.nextToken();
             Pos vp = pos(j.currentTokenLocation());
-            if (!JSON_ROW_KEYS.contains(key)) {
-                String near = Spelling.closest(key, JSON_ROW_KEYS);
+            if (!keys.contains(key)) {
+                String near = Spelling.closest(key, keys);
                 p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
                         : "missions/POLICY-FORMAT.md lists the keys of a row");
                 j.skipChildren();

@@ -14,9 +14,9 @@ import java.util.OptionalInt;
  * each checks the other:
  * <ul>
  *   <li>by bisection over the threshold solver ({@link Bisection}: satisficing, O(log C) solves);</li>
- *   <li>by the minimum-credit fixpoint ({@link MinimumCredit}, optimisation: the lowest start is one
- *       run; the highest floor is the fixpoint run per candidate floor, candidates by bisection,
- *       see {@link FixpointMargins}).</li>
+ *   <li>by the charging route's minimum-credit pass ({@link FixpointMargins}, optimisation: both figures
+ *       from one pass over arena × goal, no search over floors; the same solver {@code check} uses for
+ *       missions with charging).</li>
  * </ul>
  * When the mission is not guaranteed, the report also carries the {@link Suggestions}.
  */
@@ -44,8 +44,16 @@ public final class Margins {
         int bHigh = b.highestFloor(start);
         int bLow = b.lowestStart(floor);
         long t1 = System.nanoTime();
-        int fHigh = FixpointMargins.highestFloor(arena, goal, start);
-        int fLow = floor > cap ? -1 : FixpointMargins.lowestStart(arena, goal, floor);
+        int fHigh;
+        int fLow;
+        if (floor > cap) {
+            fHigh = FixpointMargins.highestFloor(arena, goal, start);
+            fLow = -1;
+        } else {
+            FixpointMargins.Both both = FixpointMargins.both(arena, goal, floor, start);
+            fHigh = both.highestFloorUnits();
+            fLow = both.lowestStartUnits();
+        }
         long t2 = System.nanoTime();
 
         boolean guaranteed = bLow >= 0 && bLow <= start;

@@ -51,7 +51,7 @@ public final class Suggestions {
     }
 
     /** The suggestions from already computed margins (-1: none of that kind). */
-    static List<Suggestion> find(Mission mission, int lowestStart, int highestFloor, int largestBudget) {
+    public static List<Suggestion> find(Mission mission, int lowestStart, int highestFloor, int largestBudget) {
         EnergyScale s = mission.scale();
         int cap = mission.capacityUnits();
         int floor = mission.reserveUnits();

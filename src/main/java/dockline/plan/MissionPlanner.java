@@ -23,6 +23,13 @@ import dockline.solve.discounted.DiscountedOptions;
 import dockline.solve.discounted.DiscountedPolicies;
 import dockline.solve.discounted.DiscountedSolver;
 import dockline.solve.fast.FastPath;
+import dockline.solve.charging.ChargingPolicies;
+import dockline.solve.charging.ChargingRoute;
+import dockline.solve.charging.ChargingSolver;
+import dockline.solve.charging.FloorSweep;
+import dockline.solve.WinningRegion;
+import dockline.policy.ThresholdPolicy;
+import dockline.util.MonotoneSearch;
 import dockline.policy.Policy;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
@@ -50,7 +57,8 @@ import java.util.OptionalInt;
  * mission's figures (the suggestions and margins probe variants of the figures, each compiled on its own).
  *
  * <p>Cost: one arena compile, O(cells × out-degree × budget); then the route's solve — fast path
- * O(m·G·log(n·G)) on arena × goal (Knuth 1977), product routes O(|V| + |E|) of the product
+ * O(m·G·log(n·G)) on arena × goal (Knuth 1977), the charging route one pass over arena × goal with every
+ * floor at once ({@link dockline.solve.charging.FloorSweep}; its suggestions O(log K) more passes), product routes O(|V| + |E|) of the product
  * (linear-time attractor, Grädel, Thomas and Wilke 2002, ch. 2), times O(log start) for the highest
  * floor by bisection and one more solve for the safest policy; suggestions add O(log capacity + log K)
  * verdicts; the certificate is O(closed loop).
@@ -97,8 +105,30 @@ public final class MissionPlanner {
                 return fast(c, f.get(), "the robot cannot charge on a dock before the mission is complete, so the"
                         + " battery levels need not be in the game");
             }
+            if (a.policy() == PolicyChoice.SAFEST) {
+                Optional<ChargingSolver> cs = chargingSolver(c);
+                if (cs.isPresent()) {
+                    return charging(c, cs.get(), false, true, "the robot can charge on a dock before the mission is"
+                            + " complete: the least charge per position with the good docks as targets, every floor"
+                            + " in one pass, no battery levels in the game");
+                }
+            }
             return product(c, Route.Product.of(a.policy()), "the robot can charge on a dock before the mission is"
                     + " complete, so the battery levels are part of the game");
+        }
+        if (r instanceof Route.Charging ch) {
+            Optional<ChargingSolver> cs = chargingSolver(c);
+            if (cs.isPresent()) {
+                return charging(c, cs.get(), ch.replays(), ch.suggestions(), "the charging route was asked for: the"
+                        + " least charge per position with the good docks as targets, every floor in one pass");
+            }
+            if (!ch.orProduct()) {
+                throw new RouteNotApplicableException("the charging route does not apply: an energy gain other than"
+                        + " a charge step on a dock");
+            }
+            return product(c, PolicyChoice.SAFEST, false, null, true, ch.suggestions(), ch.replays(), false,
+                    "the charging route does not apply (an energy gain other than a charge step on a dock), so the"
+                            + " product game");
         }
         if (r instanceof Route.Fast f) {
             FastPath.Analysis a = FastPath.analyse(mission, arena, goal, f.maxPolicyRows(), false,
@@ -163,6 +193,98 @@ public final class MissionPlanner {
                 suggestionsNote, Optional.empty(), Optional.empty(),
                 new Plan.Size(a.pairVertices(), -1, a.exploredVertices(), null),
                 new Plan.Timings(c.compileMillis(), 0, a.solveMillis(), c.elapsed()), notes, new Plan.Detail.Fast(a));
+    }
+
+    // ---- charging route
+
+    /** The charging route's solver, when its game applies (the only energy gains are charge steps on a dock). */
+    private static Optional<ChargingSolver> chargingSolver(Context c) {
+        try {
+            return Optional.of(new ChargingSolver(c.arena(), c.goal()));
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static Plan charging(Context c, ChargingSolver solver, boolean wantReplays, boolean wantSuggestions,
+                                 String reason) {
+        Mission m = c.mission();
+        int floor = m.reserveUnits();
+        int start = m.startUnits();
+        int cap = m.capacityUnits();
+        ChargingRoute.Analysis a = ChargingRoute.analyse(solver, cap, floor, start);
+        OptionalInt highest = a.highestFloorUnits();
+        ThresholdPolicy thresholds = null;
+        ClosedLoop loop = null;
+        Certification cert;
+        if (highest.isPresent()) {
+            int hf = highest.getAsInt();
+            thresholds = ChargingPolicies.thresholds(solver, a.highest(), hf, start, cap);
+            // never a silent "guaranteed": the thresholds are re-checked on an independent code path; a mission
+            // that is not guaranteed gets its best effort certified at the highest floor, for the replays
+            ClosedLoop l = CertificateChecker.closedLoop(c.arena(), thresholds, a.guaranteed() ? floor : hf, start);
+            Certificate ct = CertificateChecker.certify(l);
+            if (a.guaranteed()) {
+                Optional<String> problem = ct.ok() && ct.worstMinimumUnits() == hf ? Optional.empty()
+                        : Optional.of("the charging route says guaranteed with a worst level of " + hf + " units, but"
+                        + " its threshold policy " + (ct.ok() ? "has a worst level of " + ct.worstMinimumUnits()
+                        + " units under" : "failed") + " the independent certificate: " + ct.reason());
+                cert = new Certification.Reserve(ct, problem);
+            } else {
+                cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
+            }
+            if (ct.ok()) {
+                loop = l;
+            } else if (!a.guaranteed() && wantReplays) {
+                throw new IllegalStateException("internal: the policy for the highest guaranteed floor " + hf
+                        + " units could not be certified: " + ct.reason());
+            }
+        } else {
+            cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
+        }
+        Optional<Policy> policy = a.guaranteed() && cert.ok() ? Optional.of(loop.policy()) : Optional.empty();
+        List<Suggestion> suggestions = List.of();
+        if (wantSuggestions && !a.guaranteed()) {
+            int k = m.map().disturbances().budget();
+            int budget = MonotoneSearch.highest(-1, k - 1, b -> chargingWins(m.withBudget(b)));
+            suggestions = Suggestions.find(m, a.lowestStartUnits().orElse(-1), highest.orElse(-1), budget);
+        }
+        Optional<PlanReplays> replays = Optional.empty();
+        if (wantReplays) {
+            if (a.guaranteed()) {
+                String why = cert instanceof Certification.Reserve r ? r.certificate().reason() : "no certificate";
+                replays = Optional.of(new PlanReplays(true, c.arena(), floor, start, cert.ok() ? loop : null, -1,
+                        null, why));
+            } else {
+                ChargingSolver.Values v = a.values();
+                GoalAutomaton goal = c.goal();
+                WinningRegion region = (vertex, mask, level) -> level >= floor && level <= cap
+                        && v.need(vertex, goal.stateOfMask(mask)) <= level - floor;
+                replays = Optional.of(new PlanReplays(false, c.arena(), floor, start, loop, highest.orElse(-1), region,
+                        null));
+            }
+        }
+        List<String> notes = new ArrayList<>();
+        FloorSweep.Result sw = a.sweep();
+        notes.add("charging route: one pass, " + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
+                + (sw.batches() - 1) + " dock position" + (sw.batches() == 2 ? "" : "s") + " added in decreasing"
+                + " floor), " + sw.historyEntries() + " policy entries"
+                + (thresholds == null ? "" : "; threshold policy over " + thresholds.size() + " positions, "
+                + thresholds.stepCount() + " thresholds"));
+        long positions = (long) c.arena().robotCount() * c.goal().stateCount();
+        return new Plan(m, new Objective.Reserve(), a.verdict(), Method.CHARGING, reason, policy, PolicyChoice.SAFEST,
+                highest.orElse(floor), cert, a.guaranteed() ? highest : OptionalInt.empty(), Optional.empty(),
+                highest, true, a.lowestStartUnits(), suggestions, null, replays, Optional.empty(),
+                new Plan.Size(positions, -1, sw.historyEntries(), null),
+                new Plan.Timings(c.compileMillis(), 0, a.millis(), c.elapsed()), notes,
+                new Plan.Detail.Charging(a, thresholds));
+    }
+
+    /** The charging route's verdict on a variant of the mission (compiled on its own). */
+    private static boolean chargingWins(Mission m) {
+        Arena arena = ArenaCompiler.compile(m);
+        ChargingSolver s = new ChargingSolver(arena, GoalAutomaton.of(m));
+        return ChargingRoute.analyse(s, m.capacityUnits(), m.reserveUnits(), m.startUnits()).guaranteed();
     }
 
     // ---- verdict only
@@ -276,7 +398,7 @@ public final class MissionPlanner {
             return new PlanReplays(true, c.arena(), floor, start, certified, -1, null, why);
         }
         int best = a.highestReserveSearched() ? a.highestGuaranteedReserveUnits().orElse(-1)
-                // the solver skipped the search (memory); the fixpoint needs far less
+                // the solver skipped the search (memory); the charging route's pass needs far less
                 : FixpointMargins.highestFloor(c.arena(), c.goal(), start);
         ClosedLoop loop = null;
         if (best >= 0) {

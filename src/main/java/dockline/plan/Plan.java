@@ -8,6 +8,8 @@ import dockline.model.Rational;
 import dockline.solve.reserve.ChargeNeeded;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.solve.fast.FastPath;
+import dockline.solve.charging.ChargingRoute;
+import dockline.policy.ThresholdPolicy;
 import dockline.policy.Policy;
 import dockline.solve.reserve.ReserveAnalysis;
 import dockline.solve.reserve.ReserveSolver;
@@ -36,7 +38,8 @@ import java.util.OptionalInt;
  * @param highestFloorUnits   the highest reserve floor that can be guaranteed from the start; empty when none
  *                            can, or when it was not searched
  * @param highestFloorSearched whether that search ran to the end
- * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (margins only)
+ * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (margins and the
+ *                            charging route)
  * @param suggestions         what would make a mission that is not guaranteed guaranteed, smallest change first
  * @param suggestionsNote     why there are no suggestions although they were asked for, or null
  * @param replays             the replays, when asked for
@@ -90,7 +93,7 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
     }
 
     /** What only one method computes; the front ends use it for their method-specific lines. */
-    public sealed interface Detail permits Detail.Product, Detail.Fast, Detail.VerdictOnlyFast,
+    public sealed interface Detail permits Detail.Product, Detail.Fast, Detail.Charging, Detail.VerdictOnlyFast,
             Detail.VerdictOnlyProduct, Detail.Margins, Detail.Discounted {
 
         /** The product route's (implicit or stored) analysis. */
@@ -99,6 +102,12 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
 
         /** The fast path's analysis (need from the start, closed loop of the policy). */
         record Fast(FastPath.Analysis analysis) implements Detail {
+        }
+
+        /**
+         * The charging route's analysis and its threshold policy (null when no floor can be guaranteed).
+         */
+        record Charging(ChargingRoute.Analysis analysis, ThresholdPolicy thresholds) implements Detail {
         }
 
         /** The fast path's early exit. */

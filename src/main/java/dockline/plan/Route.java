@@ -7,15 +7,17 @@ import dockline.solve.game.GameSolver;
  * How {@link MissionPlanner#plan} answers the mission. Each route is a record with only the settings
  * that route reads, so a setting a route would ignore cannot be passed to it.
  */
-public sealed interface Route permits Route.Auto, Route.Fast, Route.Product, Route.Stored, Route.VerdictOnly,
-        Route.Margins, Route.Discounted {
+public sealed interface Route permits Route.Auto, Route.Fast, Route.Charging, Route.Product, Route.Stored,
+        Route.VerdictOnly, Route.Margins, Route.Discounted {
 
     /**
      * Reserve objective, the route {@code check} takes by default: {@link Fast} when the robot cannot
-     * charge before the mission is complete, else {@link Product}; the highest floor is searched and,
-     * when not guaranteed, suggestions are found.
+     * charge before the mission is complete, else {@link Charging} for the safest policy (when its game
+     * applies: the only energy gains are charge steps on a dock), else {@link Product}; the highest
+     * floor is found and, when not guaranteed, suggestions are found.
      *
-     * @param policy which guaranteed policy the product route reports (the fast path's is the safest anyway)
+     * @param policy which guaranteed policy is reported (the fast path's and the charging route's are the
+     *               safest; {@link PolicyChoice#FEWEST_MOVES} takes the product route)
      */
     record Auto(PolicyChoice policy) implements Route {
         public Auto {
@@ -38,6 +40,24 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Product, Rou
 
         public static Fast defaults() {
             return new Fast(FastPath.DEFAULT_MAX_POLICY_ROWS);
+        }
+    }
+
+    /**
+     * Reserve objective with charging on arena × goal, no battery levels in the game
+     * ({@link dockline.solve.charging.FloorSweep}): verdict, lowest start, highest floor and the safest
+     * policy as level thresholds per game position, all from one pass; the policy is certified by the
+     * independent checker. Its policy is the safest (the threshold policy at the highest floor).
+     *
+     * @param replays     also make the worst-case, nominal and forced replays ({@link PlanReplays})
+     * @param suggestions when not guaranteed, find what would make it guaranteed
+     * @param orProduct   when the charging route does not apply to the mission, take {@link Product} with the
+     *                    safest policy and the same replays and suggestions instead of refusing
+     */
+    record Charging(boolean replays, boolean suggestions, boolean orProduct) implements Route {
+        /** Verdict, policy, certificate and figures; no replays, suggestions when not guaranteed, refuse if not applicable. */
+        public static Charging defaults() {
+            return new Charging(false, true, false);
         }
     }
 
@@ -94,7 +114,7 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Product, Rou
 
     /**
      * Reserve objective: the highest guaranteed floor and the lowest starting charge, each computed two
-     * independent ways (bisection over the threshold solver; the minimum-credit fixpoint), and the
+     * independent ways (bisection over the threshold solver; the charging route's minimum-credit pass), and the
      * suggestions when not guaranteed. No policy.
      */
     record Margins() implements Route {

@@ -40,7 +40,7 @@ class CheckCommandTest {
         String[] lines = r.out().split("\\R");
         assertThat(lines[0]).startsWith("GUARANTEED: Night round, clinic east wing");
         assertThat(r.out()).contains("Worst battery level under the policy:  ", " units = ", " Wh (", "%)")
-                .contains("Highest reserve floor guaranteed:").contains("Game: ").contains(" vertices (")
+                .contains("Highest reserve floor guaranteed:").contains("Game: ").contains(" positions of arena x goal")
                 .contains("1 unit = 0.5 Wh; consumption and reserve floor rounded up")
                 .contains(Caveats.block());
     }
@@ -87,8 +87,13 @@ class CheckCommandTest {
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
         for (String k : new String[] {"reserveUnits", "startUnits", "lowestLevelUnits",
-                "highestReserveUnits", "productVertices", "productEdges", "solveMillis"}) {
+                "highestReserveUnits", "lowestStartUnits", "productVertices", "solveMillis"}) {
             assertThat(j.get(k).isIntegralNumber()).as(k).isTrue();
+        }
+        JsonNode product = new ObjectMapper().readTree(run("check", "missions/night-round.yaml", "--json", "--method",
+                "product").out());
+        for (String k : new String[] {"productVertices", "productEdges", "solveMillis"}) {
+            assertThat(product.get(k).isIntegralNumber()).as(k).isTrue();
         }
         assertThat(j.get("unitWh").decimalValue()).isEqualByComparingTo("0.5");
         assertThat(j.get("caveats").size()).isEqualTo(Caveats.LINES.size());
@@ -175,7 +180,9 @@ class CheckCommandTest {
             PolicyFiles.Document d = PolicyFiles.read(f);
             assertThat(d.header().mission()).isEqualTo("Night round, clinic east wing");
             assertThat(d.header().floorUnits()).isEqualTo(24);
-            assertThat(r.out()).contains(d.policy().size() + " rows").contains(Caveats.block());
+            // the charging route's safest policy comes as level thresholds (format version 4)
+            assertThat(d.thresholdForm()).isTrue();
+            assertThat(r.out()).contains(d.thresholds().size() + " positions").contains(Caveats.block());
         }
     }
 

@@ -56,17 +56,20 @@ class CheckRouteTest {
     }
 
     @Test
-    void chargingMission_takesTheProductRoute_andRefusesAForcedFastPath() throws Exception {
+    void chargingMission_takesTheChargingRoute_andRefusesAForcedFastPath() throws Exception {
         CheckCommandTest.Run auto = CheckCommandTest.run("check", "missions/night-round.yaml", "--json");
-        assertThat(json(auto).get("method").asText()).isEqualTo("product");
-        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml").out()).contains("Method: product game");
+        assertThat(json(auto).get("method").asText()).isEqualTo("charging");
+        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml").out()).contains("Method: charging route");
+        CheckCommandTest.Run fewest = CheckCommandTest.run("check", "missions/night-round.yaml", "--json",
+                "--fewest-moves");
+        assertThat(json(fewest).get("method").asText()).isEqualTo("product");
         CheckCommandTest.Run forced = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "fast");
         assertThat(forced.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(forced.err()).contains("--method fast does not apply", "charge").doesNotContain("Exception");
         assertThat(forced.out()).isEmpty();
         CheckCommandTest.Run bad = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "quick");
         assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        assertThat(bad.err()).contains("auto, fast, product or stored");
+        assertThat(bad.err()).contains("auto, fast, charging, product or stored");
     }
 
     /** The stored product (the reference route) and the default implicit one agree on verdict and figures. */

@@ -104,7 +104,11 @@ public final class BruteForceMinimax {
 
     /** Whether the robot can guarantee the mission with the given floor from the mission's start. */
     public boolean wins(int floor) {
-        int start = mission.startUnits();
+        return wins(floor, mission.startUnits());
+    }
+
+    /** Whether the robot can guarantee the mission with the given floor from the start cell at level {@code start}. */
+    public boolean wins(int floor, int start) {
         if (start < floor) {
             return false;
         }

@@ -32,12 +32,14 @@ class MissionPlannerProperties {
         int highest = oracle.highestFloor();
         Plan p = MissionPlanner.plan(m, PlanOptions.of(new Route.Auto(choice)));
         Statistics.collect(p.method().word(), choice, p.guaranteed() ? "guaranteed" : "not guaranteed");
-        // both routes and both policies must have been taken on guaranteed missions
+        // every route and both policies must have been taken on guaranteed missions (the safest policy of a
+        // mission with charging comes from the charging route, the policy of fewest moves from the product route)
         Statistics.coverage(c -> {
             for (PolicyChoice pc : PolicyChoice.values()) {
-                c.check("product", pc, "guaranteed").count(n -> n >= 3);
                 c.check("fast", pc, "guaranteed").count(n -> n >= 3);
             }
+            c.check("charging", PolicyChoice.SAFEST, "guaranteed").count(n -> n >= 3);
+            c.check("product", PolicyChoice.FEWEST_MOVES, "guaranteed").count(n -> n >= 3);
         });
         assertThat(p.guaranteed()).as("verdict\n%s", why).isEqualTo(oracle.wins(m.reserveUnits()));
         assertThat(p.highestFloorUnits().orElse(-1)).as("highest floor\n%s", why).isEqualTo(highest);
@@ -74,6 +76,9 @@ class MissionPlannerProperties {
     private static dockline.arena.Arena arena(Plan p) {
         if (p.detail() instanceof Plan.Detail.Fast f) {
             return f.analysis().arena();
+        }
+        if (p.detail() instanceof Plan.Detail.Charging) {
+            return dockline.arena.ArenaCompiler.compile(p.mission());
         }
         return ((Plan.Detail.Product) p.detail()).analysis().arena();
     }

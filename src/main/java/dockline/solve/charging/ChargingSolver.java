@@ -57,8 +57,8 @@ import java.util.Arrays;
  * but a dock that turns good lowers values below Dijkstra's frontier, so a round cannot be resumed), and
  * 11 bytes per robot position and 5 per disturbance position, plus 12 bytes per policy entry (one per
  * position and round in which its need fell) and the heap. Nothing depends on the number of battery levels except
- * the size of the numbers. The highest floor needs one solve per floor tried (U changes the good
- * docks), see {@link ChargingRoute}.
+ * the size of the numbers. This solves one floor (U changes the good docks); {@link FloorSweep} answers
+ * every floor in one pass and is what {@link ChargingRoute} runs; these rounds stay as its cross-check.
  */
 public final class ChargingSolver {
 
@@ -257,6 +257,16 @@ public final class ChargingSolver {
 
     int chargeEdge(int r) {
         return chargeEdge[r];
+    }
+
+    GoalPredecessors inverse() {
+        return inverse;
+    }
+
+    /** Values made by another pass of this package ({@link FloorSweep}). */
+    Values values(int usable, int[] need, boolean[] good, int rounds, int goodDocks, int[] impPos, int[] impNeed,
+                  int[] impEdge) {
+        return new Values(this, usable, need, good, rounds, goodDocks, impPos, impNeed, impEdge);
     }
 
     int goalCount() {

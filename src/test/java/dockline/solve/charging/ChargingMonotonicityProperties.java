@@ -57,4 +57,32 @@ class ChargingMonotonicityProperties {
         assertThat(a.guaranteed()).isEqualTo(a.lowestStartUnits().isPresent() && a.lowestStartUnits().getAsInt() <= start
                 && start >= floor);
     }
+
+    /**
+     * Fewer disturbances never lose, and the highest floor and the lowest start only get better with a smaller
+     * budget (the building has fewer choices);  Oracle: the route's own answers compared across budgets, each from its own
+     * compiled arena.
+     */
+    @Property(tries = 1500)
+    void smallerBudgetNeverLoses(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        int k = m.map().disturbances().budget();
+        Statistics.label("budget").collect(k);
+        Statistics.label("budget").coverage(c -> c.check(2).count(n -> n > 100));
+        if (k == 0) {
+            return;
+        }
+        ChargingRoute.Analysis a = ChargingRoute.analyse(m);
+        ChargingRoute.Analysis b = ChargingRoute.analyse(m.withBudget(k - 1));
+        String why = RandomMissions.describe(m);
+        assertThat(!a.guaranteed() || b.guaranteed()).as("a smaller budget lost\n%s", why).isTrue();
+        assertThat(b.highestFloorUnits().orElse(-1)).as(why).isGreaterThanOrEqualTo(a.highestFloorUnits().orElse(-1));
+        if (a.lowestStartUnits().isPresent()) {
+            assertThat(b.lowestStartUnits()).as(why).isPresent();
+            assertThat(b.lowestStartUnits().getAsInt()).as(why).isLessThanOrEqualTo(a.lowestStartUnits().getAsInt());
+        }
+        Statistics.label("budget matters").collect(a.guaranteed() != b.guaranteed()
+                || !a.highestFloorUnits().equals(b.highestFloorUnits()));
+        Statistics.label("budget matters").coverage(c -> c.check(true).count(n -> n >= 15));
+    }
 }

@@ -53,6 +53,64 @@ class ThresholdPolicyReplayProperties {
         Statistics.label("charged in a play").coverage(c -> c.check(true).count(n -> n >= 10));
     }
 
+    /**
+     * Any gauge reading: from every position a play can meet (its goal state already counts its own cell) and
+     * every level from its need up to the capacity, the threshold policy at the mission's floor wins (same
+     * exhaustive walk), both the one pass's ({@link FloorSweep}) and the rounds' at that floor
+     * ({@link ChargingSolver#solve}); one unit below the rounds' need the brute-force sweep says the robot cannot
+     * win. The pass may stop before it has added every dock good at the floor (once the start's need is 0), so
+     * its needs elsewhere may be higher (never lower) than the rounds'; at the start they are equal.
+     */
+    @Property(tries = 600)
+    void fromEveryPositionAndEveryLevelAtOrAboveItsNeed(@ForAll long seed) {
+        Mission m = RandomMissions.tiny(seed);
+        Arena arena = ArenaCompiler.compile(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        int cap = m.capacityUnits();
+        int floor = Math.min(m.reserveUnits(), cap);
+        ChargingSolver solver = new ChargingSolver(arena, goal);
+        ChargingRoute.Analysis a = ChargingRoute.analyse(solver, cap, floor, m.startUnits());
+        ChargingSolver.Values pass = a.values();
+        ChargingSolver.Values rounds = solver.solve(cap - floor);
+        if (solver.startGoal() != GoalAutomaton.REJECT) {
+            assertThat(pass.startNeed()).isEqualTo(rounds.startNeed());
+        }
+        dockline.fixtures.BruteForce bf = new dockline.fixtures.BruteForce(arena, floor);
+        int masks = 1 << goal.taskCount();
+        int started = 0;
+        for (int r = 0; r < arena.robotCount(); r++) {
+            Cell c = arena.cellOf(r);
+            for (int mask = 0; mask < masks; mask++) {
+                int g = goal.stateOfMask(mask);
+                if (g == GoalAutomaton.REJECT || bf.step(mask, arena.cellZones(arena.cell(r))) != mask
+                        || goal.accepting(g, arena.isDock(arena.cell(r)))) {
+                    continue;
+                }
+                int need = rounds.need(r, g);
+                assertThat(pass.need(r, g)).isGreaterThanOrEqualTo(need);
+                if (need == ChargingSolver.INFINITE) {
+                    continue;
+                }
+                for (ChargingSolver.Values v : new ChargingSolver.Values[] {rounds, pass}) {
+                    if (v.need(r, g) == ChargingSolver.INFINITE) {
+                        continue;
+                    }
+                    for (int level = floor + v.need(r, g); level <= cap; level++) {
+                        Closed loop = new Closed(m, arena, goal, v, floor, cap);
+                        loop.visit(c, arena.budgetLeft(r), mask, level);
+                        started++;
+                    }
+                }
+                if (floor + need - 1 >= floor) {
+                    assertThat(bf.wins(r, mask, floor + need - 1, false)).as("below the need at %s\n%s", c,
+                            RandomMissions.describe(m)).isFalse();
+                }
+            }
+        }
+        Statistics.label("replays started").collect(started == 0 ? "none" : started < 10 ? "1-9" : "10 or more");
+        Statistics.label("replays started").coverage(x -> x.check("10 or more").percentage(p -> p > 20));
+    }
+
     /** Depth-first walk of the closed loop (cell, budget, task mask, level), with cycle detection. */
     private static final class Closed {
         private final Mission m;

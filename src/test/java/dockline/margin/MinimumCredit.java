@@ -13,7 +13,8 @@ import java.util.Arrays;
 import java.util.List;
 
 /**
- * The minimum initial credit of the reserve objective, computed directly by a fixpoint over energy
+ * Test oracle (it was the margins' cross-check until the charging route's pass replaced it; see
+ * {@link FixpointMargins}): the minimum initial credit of the reserve objective, computed directly by a fixpoint over energy
  * levels (the optimisation baseline, kept as a cross-check of the threshold solver): for every vertex of arena
  * × goal automaton
  * reachable from the start, {@code need(x)} is the least battery level with which the robot, standing
