@@ -75,14 +75,14 @@ class ThresholdPolicyReplayProperties {
         if (solver.startGoal() != GoalAutomaton.REJECT) {
             assertThat(pass.startNeed()).isEqualTo(rounds.startNeed());
         }
-        dockline.fixtures.BruteForce bf = new dockline.fixtures.BruteForce(arena, floor);
+        dockline.fixtures.BruteForce bf = new dockline.fixtures.BruteForce(m, floor);
         int masks = 1 << goal.taskCount();
         int started = 0;
         for (int r = 0; r < arena.robotCount(); r++) {
             Cell c = arena.cellOf(r);
             for (int mask = 0; mask < masks; mask++) {
                 int g = goal.stateOfMask(mask);
-                if (g == GoalAutomaton.REJECT || bf.step(mask, arena.cellZones(arena.cell(r))) != mask
+                if (g == GoalAutomaton.REJECT || bf.book().step(mask, c) != mask
                         || goal.accepting(g, arena.isDock(arena.cell(r)))) {
                     continue;
                 }
@@ -102,7 +102,7 @@ class ThresholdPolicyReplayProperties {
                     }
                 }
                 if (floor + need - 1 >= floor) {
-                    assertThat(bf.wins(r, mask, floor + need - 1, false)).as("below the need at %s\n%s", c,
+                    assertThat(bf.wins(c, arena.budgetLeft(r), mask, floor + need - 1)).as("below the need at %s\n%s", c,
                             RandomMissions.describe(m)).isFalse();
                 }
             }
