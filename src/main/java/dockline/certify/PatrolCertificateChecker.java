@@ -148,10 +148,12 @@ public final class PatrolCertificateChecker {
                 int level = nodeLevel.get(n);
                 int mask = nodeMask.get(n);
                 lowest = Math.min(lowest, level);
-                Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask);
+                Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, null,
+                        arena.closures(v));
                 if (act.isEmpty()) {
                     return fail("no policy row for " + arena.cellOf(v) + " at level " + level + " with "
-                            + arena.budgetLeft(v) + " disturbances left and lap mask " + mask, lowest);
+                            + arena.budgetLeft(v) + " disturbances left" + (arena.closures(v).isEmpty() ? ""
+                            : " (" + arena.closures(v) + ")") + " and lap mask " + mask, lowest);
                 }
                 int d = LoopGraph.legalChoice(arena, v, act.get());
                 if (d < 0) {
