@@ -211,6 +211,15 @@ public final class Arena {
         return s < 0 ? -1 : s * stateCount + state;
     }
 
+    /**
+     * Where a patrol with {@code budget-per: lap} goes on once robot vertex {@code v} completes a lap: the same
+     * cell with the full budget and no at-most entry used, the doors and zones closed so far still closed
+     * ({@link DisturbanceStates#renewed}; maps/README.md, "Game semantics").
+     */
+    public int renewedAtLap(int v) {
+        return robotVertexInState(vertexCell[v], states.renewed(vertexState[v]));
+    }
+
     /** The disturbance state of the vertex (an id of {@link #states()}; equal to the budget left when plain). */
     public int state(int v) {
         return vertexState[v];

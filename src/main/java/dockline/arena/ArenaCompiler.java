@@ -74,7 +74,8 @@ public final class ArenaCompiler {
             }
         }
         try {
-            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates).count();
+            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates,
+                    renewsPerLap(mission)).count();
         } catch (DisturbanceStates.TooManyStates e) {
             return -1;
         }
@@ -216,7 +217,8 @@ public final class ArenaCompiler {
         int maxStates = (int) Math.min(Integer.MAX_VALUE / 16, limit / BYTES_PER_ROBOT_VERTEX / Math.max(1, freeCount) + 1);
         DisturbanceStates states;
         try {
-            states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1));
+            states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1),
+                    renewsPerLap(mission));
         } catch (DisturbanceStates.TooManyStates e) {
             long robots = (long) freeCount * e.found;
             throw new ArenaTooLargeException(freeCount, e.found, robots, robots * BYTES_PER_ROBOT_VERTEX, limit, true);
@@ -424,6 +426,11 @@ public final class ArenaCompiler {
 
     private static boolean open(int cell, boolean[] free, DisturbanceStates st, int state) {
         return free[cell] && (st == null || !st.isClosed(state, cell));
+    }
+
+    /** A patrol whose budget starts afresh on every lap: its states need their renewals (closures kept). */
+    static boolean renewsPerLap(Mission m) {
+        return m.tasks().patrols() && m.map().disturbances().budgetPerLap();
     }
 
     private static int[] filled(int n) {
