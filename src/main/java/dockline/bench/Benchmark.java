@@ -178,6 +178,27 @@ public final class Benchmark {
         return new BenchReport(machine, rows, (System.nanoTime() - t0) / 1e6);
     }
 
+    /**
+     * Only the lasting rows (issue 13's door-shut events that stay shut) on the configured sides, after one
+     * warm-up of the same row on a 32x32 floor: a development aid ({@code bench --lasting-row}) for profiling
+     * the lasting route; each row times the momentary main route again back to back, so its ratio is of one run.
+     */
+    public List<BenchRow> lastingOnly() {
+        List<BenchRow> rows = new ArrayList<>();
+        try (HeapSampler sampler = new HeapSampler()) {
+            progress.accept("warming up the JIT compiler (the lasting row on a 32x32 floor)");
+            for (int w = 0; w < Math.max(1, config.warmups()); w++) {
+                lasting(instance(32, RESERVE), sampler, 1);
+            }
+            for (int side : config.sizes()) {
+                BenchRow r = lasting(instance(side, RESERVE), sampler, config.reps());
+                rows.add(r);
+                progress.accept(compact(r));
+            }
+        }
+        return rows;
+    }
+
     // ------------------------------------------------------------------ instances
 
     /** One mission on one generated floor, compiled (outside every timing). */

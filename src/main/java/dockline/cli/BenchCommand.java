@@ -49,6 +49,9 @@ public final class BenchCommand extends CommandBase {
     @Option(names = "--resolution-row", description = "run only the row \"resolution independence\": the charging"
             + " route on one generated floor (side from --sizes, default 256) at 1,000 and 10,000 battery levels")
     boolean resolutionRow;
+    @Option(names = "--lasting-row", description = "run only the rows \"lasting doors\" (the reserve instance with its"
+            + " door-shut events lasting, against the momentary main route) on the sides from --sizes (default 32,64)")
+    boolean lastingRow;
 
     @Override
     public Integer call() {
@@ -67,6 +70,21 @@ public final class BenchCommand extends CommandBase {
             out.print(row.toText());
             out.flush();
             return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
+        }
+        if (lastingRow) {
+            List<Integer> sides = sizes != null && !sizes.isEmpty() ? sizes : List.of(32, 64);
+            Benchmark.Config c = new Benchmark.Config(sides, List.of(), seed, 2, 3, 1, 8_000, 20_000_000L,
+                    40_000_000L);
+            for (dockline.bench.BenchRow r : new Benchmark(c, line -> {
+                err.println(line);
+                err.flush();
+            }).lastingOnly()) {
+                out.println(r.size() + "x" + r.size() + " lasting: " + (r.ran() ? String.format(java.util.Locale.ROOT,
+                        "%d reachable product vertices, solve %.1f ms CPU (%.1f ms wall), %s; ", r.vertices(),
+                        r.solveCpuMillis(), r.solveMillis(), r.verdict()) : "") + r.note());
+            }
+            out.flush();
+            return ExitCodes.OK;
         }
         if (reading) {
             dockline.bench.ReadingBench.Result r = dockline.bench.ReadingBench.run(3);
