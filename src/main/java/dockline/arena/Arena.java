@@ -73,12 +73,14 @@ public final class Arena {
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
-        this(mission, width, height, budget, DisturbanceStates.plain(budget), vertexBudget, robotCount, vertexCount,
+        this(mission, width, height, budget, DisturbanceStates.plain(budget), budget + 1, vertexBudget, robotCount,
+                vertexCount,
                 startVertex, vertexCell, vertexBudget, actionKind, actionTarget, outStart, edgeTarget, edgeWeight,
                 edgeEvent, edgeRule, cellZones, cellDock, cellSlot, slotCell);
     }
 
-    Arena(Mission mission, int width, int height, int budget, DisturbanceStates states, int[] vertexState, int robotCount, int vertexCount, int startVertex,
+    Arena(Mission mission, int width, int height, int budget, DisturbanceStates states, int stateCount,
+          int[] vertexState, int robotCount, int vertexCount, int startVertex,
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
@@ -87,7 +89,7 @@ public final class Arena {
         this.height = height;
         this.budget = budget;
         this.states = states;
-        this.stateCount = states.count();
+        this.stateCount = stateCount;
         this.vertexState = vertexState;
         this.robotCount = robotCount;
         this.vertexCount = vertexCount;
