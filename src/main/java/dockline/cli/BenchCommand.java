@@ -79,9 +79,11 @@ public final class BenchCommand extends CommandBase {
                 err.println(line);
                 err.flush();
             }).lastingOnly()) {
-                out.println(r.size() + "x" + r.size() + " lasting: " + (r.ran() ? String.format(java.util.Locale.ROOT,
-                        "%d reachable product vertices, solve %.1f ms CPU (%.1f ms wall), %s; ", r.vertices(),
-                        r.solveCpuMillis(), r.solveMillis(), r.verdict()) : "") + r.note());
+                out.println(r.size() + "x" + r.size() + " " + r.method() + ": " + (r.ran() ? String.format(
+                        java.util.Locale.ROOT, "%d product vertices (%s), solve %.1f ms CPU (%.1f ms wall), %s; ",
+                        r.vertices(), r.method().equals("lasting") ? "reachable from the start"
+                                : "numbered in the last round", r.solveCpuMillis(), r.solveMillis(), r.verdict())
+                        : "") + r.note());
             }
             out.flush();
             return ExitCodes.OK;
