@@ -109,6 +109,11 @@ public final class RenderCommand extends CommandBase {
             err.println("dockline render: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
+        if (m.beyondOneTrip() && overlay == Overlay.HEAT) {
+            // no charge-needed map for these goals (it would depend on the lap or the turns left): the plain map
+            overlay = Overlay.PLAIN;
+            options = new PictureRenderer.Options(options.width(), options.height(), overlay, -1, -1);
+        }
         String badOut = MissionOptions.outputProblem(out, mission, m);
         if (badOut != null) {
             err.println("dockline: --out " + (out.toString().isEmpty() ? "''" : out) + ": " + badOut);
