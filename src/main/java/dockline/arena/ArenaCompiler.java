@@ -54,25 +54,9 @@ public final class ArenaCompiler {
      */
     public static int disturbanceStateCount(Mission mission, int maxStates) {
         BuildingMap map = mission.map();
-        int w = map.width();
-        int cells = w * map.height();
-        List<EventRule> rules = map.disturbances().rules();
-        int[] doorRule = filled(cells);
-        int[] blockRule = filled(cells);
-        for (int r = 0; r < rules.size(); r++) {
-            EventRule rule = rules.get(r);
-            for (Cell c : rule.cells()) {
-                if (!map.inside(c)) {
-                    continue;
-                }
-                int ci = c.index(w);
-                if (rule.kind() == EventKind.DOOR_SHUT && doorRule[ci] < 0 && map.terrainAt(c).door()) {
-                    doorRule[ci] = r;
-                } else if (rule.kind() == EventKind.BLOCKAGE && blockRule[ci] < 0) {
-                    blockRule[ci] = r;
-                }
-            }
-        }
+        int[][] cover = coverage(map);
+        int[] doorRule = cover[0];
+        int[] blockRule = cover[1];
         try {
             return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates,
                     renewsPerLap(mission)).count();
