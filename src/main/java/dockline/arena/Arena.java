@@ -75,12 +75,14 @@ public final class Arena {
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
-        this(mission, width, height, budget, DisturbanceStates.plain(budget), vertexBudget, robotCount, vertexCount,
+        this(mission, width, height, budget, DisturbanceStates.plain(budget), budget + 1, vertexBudget, robotCount,
+                vertexCount,
                 startVertex, vertexCell, vertexBudget, actionKind, actionTarget, outStart, edgeTarget, edgeWeight,
                 edgeEvent, edgeRule, cellZones, cellDock, cellSlot, slotCell);
     }
 
-    Arena(Mission mission, int width, int height, int budget, DisturbanceStates states, int[] vertexState, int robotCount, int vertexCount, int startVertex,
+    Arena(Mission mission, int width, int height, int budget, DisturbanceStates states, int stateCount,
+          int[] vertexState, int robotCount, int vertexCount, int startVertex,
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
@@ -89,7 +91,7 @@ public final class Arena {
         this.height = height;
         this.budget = budget;
         this.states = states;
-        this.stateCount = states.count();
+        this.stateCount = stateCount;
         this.vertexState = vertexState;
         this.robotCount = robotCount;
         this.vertexCount = vertexCount;
@@ -200,6 +202,15 @@ public final class Arena {
     public int robotVertexInState(int cellIndex, int state) {
         int s = cellSlot[cellIndex];
         return s < 0 ? -1 : s * stateCount + state;
+    }
+
+    /**
+     * Where a patrol with {@code budget-per: lap} goes on once robot vertex {@code v} completes a lap: the same
+     * cell with the full budget and no at-most entry used, the doors and zones closed so far still closed
+     * ({@link DisturbanceStates#renewed}; maps/README.md, "Game semantics").
+     */
+    public int renewedAtLap(int v) {
+        return robotVertexInState(vertexCell[v], states.renewed(vertexState[v]));
     }
 
     /** The disturbance state of the vertex (an id of {@link #states()}; equal to the budget left when plain). */

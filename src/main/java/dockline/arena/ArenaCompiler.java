@@ -52,27 +52,12 @@ public final class ArenaCompiler {
      */
     public static int disturbanceStateCount(Mission mission, int maxStates) {
         BuildingMap map = mission.map();
-        int w = map.width();
-        int cells = w * map.height();
-        List<EventRule> rules = map.disturbances().rules();
-        int[] doorRule = filled(cells);
-        int[] blockRule = filled(cells);
-        for (int r = 0; r < rules.size(); r++) {
-            EventRule rule = rules.get(r);
-            for (Cell c : rule.cells()) {
-                if (!map.inside(c)) {
-                    continue;
-                }
-                int ci = c.index(w);
-                if (rule.kind() == EventKind.DOOR_SHUT && doorRule[ci] < 0 && map.terrainAt(c).door()) {
-                    doorRule[ci] = r;
-                } else if (rule.kind() == EventKind.BLOCKAGE && blockRule[ci] < 0) {
-                    blockRule[ci] = r;
-                }
-            }
-        }
+        int[][] cover = coverage(map);
+        int[] doorRule = cover[0];
+        int[] blockRule = cover[1];
         try {
-            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates).count();
+            return DisturbanceStates.of(map, map.disturbances().budget(), doorRule, blockRule, maxStates,
+                    renewsPerLap(mission)).count();
         } catch (DisturbanceStates.TooManyStates e) {
             return -1;
         }
@@ -132,6 +117,62 @@ public final class ArenaCompiler {
     }
 
     public static Arena compile(Mission mission) {
+        return compile(mission, null, null);
+    }
+
+    /**
+     * The energy change of an outcome into a phase that a restricted arena leaves out
+     * ({@link #compileWithin}): so low that every product counts it below the floor, i.e. lost.
+     */
+    public static final int LEFT_OUT = -(Integer.MAX_VALUE / 4);
+
+    /** The disturbance states of the mission's arena ({@link DisturbanceStates}), without building the arena. */
+    public static DisturbanceStates states(Mission mission) {
+        BuildingMap map = mission.map();
+        int[][] cover = coverage(map);
+        return DisturbanceStates.of(map, map.disturbances().budget(), cover[0], cover[1], Integer.MAX_VALUE / 2,
+                renewsPerLap(mission));
+    }
+
+    /**
+     * The arena restricted to the disturbance states kept ({@code keep[state]}, ids of {@code states}, which
+     * must be {@link #states}'s for this mission): the robot vertices of the other states are left out, and an
+     * outcome that would lead into one of them (a lasting closure) stays as an edge back to the robot's own
+     * vertex with the energy change {@link #LEFT_OUT}, so that it loses in every product. The game on it is
+     * therefore harder for the robot than the mission's: whatever it wins there it wins in the mission, with
+     * a policy that never risks a left-out closure. The kept states are numbered in the order of their ids,
+     * so that the base states 0..K keep their numbers when all of them are kept; {@link Arena#state} gives
+     * the state's id in {@code states}. Cost: that of {@link #compile} on the kept states only.
+     */
+    public static Arena compileWithin(Mission mission, DisturbanceStates states, boolean[] keep) {
+        return compile(mission, states, keep);
+    }
+
+    /** Per cell, the door-shut and the blockage rule that apply (first in the file wins), or -1. */
+    private static int[][] coverage(BuildingMap map) {
+        int w = map.width();
+        int cells = w * map.height();
+        List<EventRule> rules = map.disturbances().rules();
+        int[] doorRule = filled(cells);
+        int[] blockRule = filled(cells);
+        for (int r = 0; r < rules.size(); r++) {
+            EventRule rule = rules.get(r);
+            for (Cell c : rule.cells()) {
+                if (!map.inside(c)) {
+                    continue;
+                }
+                int ci = c.index(w);
+                if (rule.kind() == EventKind.DOOR_SHUT && doorRule[ci] < 0 && map.terrainAt(c).door()) {
+                    doorRule[ci] = r;
+                } else if (rule.kind() == EventKind.BLOCKAGE && blockRule[ci] < 0) {
+                    blockRule[ci] = r;
+                }
+            }
+        }
+        return new int[][] {doorRule, blockRule};
+    }
+
+    private static Arena compile(Mission mission, DisturbanceStates given, boolean[] keep) {
         BuildingMap map = mission.map();
         RobotProfile robot = mission.robot();
         EnergyScale scale = mission.scale();
@@ -234,15 +275,33 @@ public final class ArenaCompiler {
         }
         long limit = Runtime.getRuntime().maxMemory() / 2;
         int maxStates = (int) Math.min(Integer.MAX_VALUE / 16, limit / BYTES_PER_ROBOT_VERTEX / Math.max(1, freeCount) + 1);
-        DisturbanceStates states;
-        try {
-            states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1));
-        } catch (DisturbanceStates.TooManyStates e) {
-            long robots = (long) freeCount * e.found;
-            throw new ArenaTooLargeException(freeCount, e.found, robots, robots * BYTES_PER_ROBOT_VERTEX, limit, true);
+        DisturbanceStates states = given;
+        if (states == null) {
+            try {
+                states = DisturbanceStates.of(map, budget, doorRule, blockRule, Math.max(maxStates, budget + 1),
+                        renewsPerLap(mission));
+            } catch (DisturbanceStates.TooManyStates e) {
+                long robots = (long) freeCount * e.found;
+                throw new ArenaTooLargeException(freeCount, e.found, robots, robots * BYTES_PER_ROBOT_VERTEX, limit,
+                        true);
+            }
         }
-        int kk = states.count();
-        if (!states.plain()) {
+        // the kept states, numbered in the order of their ids (all of them for the mission's own arena)
+        int[] local = new int[states.count()];
+        int kk = 0;
+        for (int k = 0; k < states.count(); k++) {
+            local[k] = keep == null || keep[k] ? kk++ : -1;
+        }
+        int[] global = new int[kk];
+        for (int k = 0; k < states.count(); k++) {
+            if (local[k] >= 0) {
+                global[local[k]] = k;
+            }
+        }
+        if (local[budget] < 0) {
+            throw new IllegalArgumentException("the start's state (full budget, nothing closed) must be kept");
+        }
+        if (!states.plain() || kk != states.count()) {
             // without lasting events the arena is as before (its size was never checked here); with them
             // the states multiply the cells, so refuse before allocating what cannot fit
             long robots = (long) freeCount * kk;
@@ -260,8 +319,8 @@ public final class ArenaCompiler {
         for (int s = 0; s < freeCount; s++) {
             for (int k = 0; k < kk; k++) {
                 vCell.add(slotCell[s]);
-                vBudget.add(states.budgetLeft(k));
-                vState.add(k);
+                vBudget.add(states.budgetLeft(global[k]));
+                vState.add(global[k]);
             }
         }
         boolean closable = states.itemCount() > 0;
@@ -328,21 +387,22 @@ public final class ArenaCompiler {
             int owner = ownerOfD[d];
             int c = vCell.get(owner);
             int k = vState.get(owner);
+            int kl = local[k];
             int kind = aKind.get(d);
             int t = aTarget.get(d);
             int sOwn = slot[c];
             if (kind == ActionKind.WAIT.ordinal()) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k, -waitCost, Arena.NOMINAL, -1);
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + kl, -waitCost, Arena.NOMINAL, -1);
                 continue;
             }
             if (kind == ActionKind.CHARGE.ordinal()) {
-                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k, chargeGain, Arena.NOMINAL, -1);
+                add(eTarget, eWeight, eEvent, eRule, sOwn * kk + kl, chargeGain, Arena.NOMINAL, -1);
                 continue;
             }
             boolean diagonal = (c % w) != (t % w) && (c / w) != (t / w);
             int enter = diagonal ? diagCost[t] : cost[t];
             int sT = slot[t];
-            add(eTarget, eWeight, eEvent, eRule, sT * kk + k, -enter, Arena.NOMINAL, -1);
+            add(eTarget, eWeight, eEvent, eRule, sT * kk + kl, -enter, Arena.NOMINAL, -1);
             if (states.budgetLeft(k) == 0) {
                 continue;
             }
@@ -350,19 +410,25 @@ public final class ArenaCompiler {
             if (dr >= 0) {
                 int k1 = states.after(k, dr, rules.get(dr).lasting() ? states.doorItem(t) : -1);
                 if (k1 >= 0) {
-                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.DOOR_SHUT.ordinal(), dr);
+                    // into a left-out state: back to the robot's own vertex, lost in every product
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + (local[k1] >= 0 ? local[k1] : kl),
+                            local[k1] >= 0 ? -waitCost : LEFT_OUT, EventKind.DOOR_SHUT.ordinal(), dr);
                 }
             }
             int br = blockRule[t];
             if (br >= 0) {
                 int k1 = states.after(k, br, rules.get(br).lasting() ? states.blockageItem(br) : -1);
                 if (k1 >= 0) {
-                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + k1, -waitCost, EventKind.BLOCKAGE.ordinal(), br);
+                    add(eTarget, eWeight, eEvent, eRule, sOwn * kk + (local[k1] >= 0 ? local[k1] : kl),
+                            local[k1] >= 0 ? -waitCost : LEFT_OUT, EventKind.BLOCKAGE.ordinal(), br);
                 }
             }
             int slip = slipRule[c] >= 0 ? slipRule[c] : slipRule[t];
             if (slip >= 0) {
                 int k1 = states.after(k, slip, -1);
+                if (k1 >= 0 && local[k1] < 0) {
+                    throw new IllegalStateException("a momentary event leads out of the kept states");
+                }
                 if (k1 >= 0) {
                     // a slip never lands on a closed cell: it is an obstacle like a wall
                     int mn = closable ? neighbours(t, w, h, free, dirs, mb, states, k) : neighbours(t, w, h, free, dirs, mb);
@@ -371,15 +437,19 @@ public final class ArenaCompiler {
                         if (m == c) {
                             continue;
                         }
-                        add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + k1, -cost[m], EventKind.SLIP.ordinal(), slip);
+                        add(eTarget, eWeight, eEvent, eRule, slot[m] * kk + local[k1], -cost[m], EventKind.SLIP.ordinal(),
+                                slip);
                     }
                 }
             }
             int gr = dragRule[t];
             if (gr >= 0) {
                 int k1 = states.after(k, gr, -1);
+                if (k1 >= 0 && local[k1] < 0) {
+                    throw new IllegalStateException("a momentary event leads out of the kept states");
+                }
                 if (k1 >= 0) {
-                    add(eTarget, eWeight, eEvent, eRule, sT * kk + k1, -Math.addExact(enter, dragExtra[t]),
+                    add(eTarget, eWeight, eEvent, eRule, sT * kk + local[k1], -Math.addExact(enter, dragExtra[t]),
                             EventKind.DRAG.ordinal(), gr);
                 }
             }
@@ -407,8 +477,9 @@ public final class ArenaCompiler {
             stateArr[robotCount + d] = vState.get(ownerOfD[d]);
         }
         progress.done();
-        int startVertex = slot[start.index(w)] * kk + budget;
-        return new Arena(mission, w, h, budget, states, stateArr, robotCount, vertexCount, startVertex, cellArr, budgetArr, ak,
+        int startVertex = slot[start.index(w)] * kk + local[budget];
+        return new Arena(mission, w, h, budget, states, kk, stateArr, robotCount, vertexCount, startVertex, cellArr,
+                budgetArr, ak,
                 aTarget.toArray(), outStart.toArray(), eTarget.toArray(), eWeight.toArray(), ev, eRule.toArray(),
                 zones, dock, slot, slotCell);
     }
@@ -453,6 +524,11 @@ public final class ArenaCompiler {
 
     private static boolean open(int cell, boolean[] free, DisturbanceStates st, int state) {
         return free[cell] && (st == null || !st.isClosed(state, cell));
+    }
+
+    /** A patrol whose budget starts afresh on every lap: its states need their renewals (closures kept). */
+    static boolean renewsPerLap(Mission m) {
+        return m.tasks().patrols() && m.map().disturbances().budgetPerLap();
     }
 
     private static int[] filled(int n) {

@@ -24,6 +24,9 @@ import java.util.Map;
  * reference one. Further states are found breadth-first from these by spending one event of a rule
  * that may still happen; only states an event sequence can produce are kept (a door item is only
  * closed by the robot trying to enter that door, so the sets found are those of at most K items).
+ * A patrol with {@code budget-per: lap} also keeps, for every state, its renewal at a completed lap
+ * ({@link #renewed}: full budget, counts at 0, the same closures), so there the sets may grow over the
+ * laps up to every item.
  *
  * <p>Cost: O(S · (R + C)) time for S states, R rules and C door cells of lasting rules, plus
  * O(S · K) memory; S is at most the sum over j ≤ K of (items choose j), times the count tuples of the
@@ -48,13 +51,14 @@ public final class DisturbanceStates {
     private final int[][] stClosed;
     private final int[][] stUsed;
     private final LongIntMap next;
+    private final int[] renewed;
     private final boolean plain;
     private final String[] keys;
 
     private DisturbanceStates(int budget, int items, String[] itemName, boolean[] itemDoor, int[][] itemCells,
                               int[] cellItemStart, int[] cellItem, int[] doorItemOfCell, int[] ruleItem,
                               int[] ruleGroup, int[] groupLimit, String[] groupLabel, int[] stBudget,
-                              int[][] stClosed, int[][] stUsed, LongIntMap next) {
+                              int[][] stClosed, int[][] stUsed, LongIntMap next, int[] renewed) {
         this.budget = budget;
         this.items = items;
         this.itemName = itemName;
@@ -71,6 +75,7 @@ public final class DisturbanceStates {
         this.stClosed = stClosed;
         this.stUsed = stUsed;
         this.next = next;
+        this.renewed = renewed;
         this.plain = stBudget.length == budget + 1 && items == 0 && groupLimit.length == 0;
         this.keys = new String[stBudget.length];
     }
@@ -83,7 +88,7 @@ public final class DisturbanceStates {
      * @throws ArithmeticException if there would be more than {@code Integer.MAX_VALUE / 2} states
      */
     static DisturbanceStates of(BuildingMap map, int budget, int[] doorRule, int[] blockRule) {
-        return of(map, budget, doorRule, blockRule, Integer.MAX_VALUE / 2);
+        return of(map, budget, doorRule, blockRule, Integer.MAX_VALUE / 2, false);
     }
 
     /** Thrown when more than the allowed number of states would be found; says how many were found. */
@@ -99,8 +104,13 @@ public final class DisturbanceStates {
     /**
      * The states, or {@link TooManyStates} as soon as more than {@code maxStates} are found (so that a
      * model far too large is refused in time proportional to the limit, not to its own size).
+     *
+     * @param renewPerLap a patrol with {@code budget-per: lap}: every state also has its renewal (full budget,
+     *                    no at-most entry used, the same closures; {@link #renewed}), and the states found from
+     *                    those, so that closures may pile up over the laps beyond K
      */
-    static DisturbanceStates of(BuildingMap map, int budget, int[] doorRule, int[] blockRule, int maxStates) {
+    static DisturbanceStates of(BuildingMap map, int budget, int[] doorRule, int[] blockRule, int maxStates,
+                                boolean renewPerLap) {
         int w = map.width();
         int cells = doorRule.length;
         List<EventRule> rules = map.disturbances().rules();
@@ -191,10 +201,18 @@ public final class DisturbanceStates {
             intern(k, new int[0], new int[groups], sb, sc, su, index);
         }
         LongIntMap next = new LongIntMap(64);
+        int[] renew = new int[16];
         boolean closable = items > 0;
         if (closable || groups > 0) {
             for (int s = 0; s < sb.size(); s++) {
                 int k = sb.get(s);
+                if (renewPerLap) {
+                    // what lasts stays closed; the counts of new events start afresh
+                    if (s >= renew.length) {
+                        renew = Arrays.copyOf(renew, 2 * renew.length);
+                    }
+                    renew[s] = intern(budget, sc.get(s), new int[groups], sb, sc, su, index);
+                }
                 if (k == 0) {
                     continue;
                 }
@@ -228,10 +246,15 @@ public final class DisturbanceStates {
                 }
             }
         }
+        int[] renewed = new int[sb.size()];
+        for (int s = 0; s < renewed.length; s++) {
+            // without closable items or limits every state renews to the full budget, id K
+            renewed[s] = renewPerLap && (closable || groups > 0) ? renew[s] : budget;
+        }
         return new DisturbanceStates(budget, items, names.toArray(String[]::new), toBool(door),
                 icells.toArray(int[][]::new), cnt, cellItem, doorItemOfCell, ruleItem, ruleGroup, groupLimit,
                 glabels.toArray(String[]::new), sb.stream().mapToInt(Integer::intValue).toArray(),
-                sc.toArray(int[][]::new), su.toArray(int[][]::new), next);
+                sc.toArray(int[][]::new), su.toArray(int[][]::new), next, renewed);
     }
 
     /** The plain states 0..K (no lasting rule, no at-most): state id == budget left. */
@@ -244,8 +267,10 @@ public final class DisturbanceStates {
             sc[k] = new int[0];
             su[k] = new int[0];
         }
+        int[] renewed = new int[budget + 1];
+        Arrays.fill(renewed, budget);
         return new DisturbanceStates(budget, 0, new String[0], new boolean[0], new int[0][], new int[1], new int[0],
-                new int[0], new int[0], new int[0], new int[0], new String[0], sb, sc, su, new LongIntMap(4));
+                new int[0], new int[0], new int[0], new int[0], new String[0], sb, sc, su, new LongIntMap(4), renewed);
     }
 
     private static void addItem(int s, int r, int item, int k, int[] u2, List<Integer> sb, List<int[]> sc,
@@ -298,6 +323,16 @@ public final class DisturbanceStates {
             return stBudget[state] > 0 ? state - 1 : -1;
         }
         return next.get(key(state, rule, item));
+    }
+
+    /**
+     * The state a patrol with {@code budget-per: lap} goes on in once a lap is complete: the full budget and
+     * no {@code at-most} entry used, with the same doors and zones closed (maps/README.md, "Game semantics").
+     * Only states of a model built for a patrol per lap have a renewal of their own closures; elsewhere it is
+     * the plain full budget.
+     */
+    public int renewed(int state) {
+        return renewed[state];
     }
 
     /** Whether there is exactly one state per budget left (no lasting rule, no at-most). */

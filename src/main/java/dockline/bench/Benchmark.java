@@ -26,6 +26,7 @@ import dockline.solve.game.ProductGame;
 import dockline.solve.game.ReserveSizeForecast;
 import dockline.solve.game.Solution;
 import dockline.solve.reserve.ImplicitReserveGame;
+import dockline.solve.reserve.PhasedLastingSolver;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -177,6 +178,31 @@ public final class Benchmark {
             }
         }
         return new BenchReport(machine, rows, (System.nanoTime() - t0) / 1e6);
+    }
+
+    /**
+     * Only the lasting rows (issue 13's door-shut events that stay shut) on the configured sides, after one
+     * warm-up of the same row on a 32x32 floor: a development aid ({@code bench --lasting-row}) for profiling
+     * the lasting route; each row times the momentary main route again back to back, so its ratio is of one run.
+     */
+    public List<BenchRow> lastingOnly() {
+        List<BenchRow> rows = new ArrayList<>();
+        try (HeapSampler sampler = new HeapSampler()) {
+            progress.accept("warming up the JIT compiler (the lasting row on a 32x32 floor)");
+            for (int w = 0; w < Math.max(1, config.warmups()); w++) {
+                lasting(instance(32, RESERVE), sampler, 1);
+            }
+            lastingPhased(instance(32, RESERVE), sampler, 1);
+            for (int side : config.sizes()) {
+                Instance inst = instance(side, RESERVE);
+                for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), lastingPhased(inst, sampler,
+                        config.reps()))) {
+                    rows.add(r);
+                    progress.accept(compact(r));
+                }
+            }
+        }
+        return rows;
     }
 
     // ------------------------------------------------------------------ instances
@@ -634,6 +660,47 @@ public final class Benchmark {
                         inst.arenaMillis, ratio, mom.cpuMillis(), forecast / (double) Math.max(1, reachable),
                         pv[0] == 1 ? "policy of " + pv[3] + " rows, worst case " + pv[1] + " units"
                                 : "not guaranteed"));
+    }
+
+    /**
+     * The lasting instance decided phase by phase ({@link PhasedLastingSolver}: only the closure phases the
+     * robot's attempts run into are compiled and solved, refined until exact), timed end to end (its restricted
+     * compiles included, as it builds them itself), against the momentary main route timed back to back.
+     */
+    private BenchRow lastingPhased(Instance inst, HeapSampler sampler, int reps) {
+        Mission lm = lastingMission(inst.mission);
+        ReserveMonitor monitor = new ReserveMonitor(lm.reserveUnits(), lm.capacityUnits(), lm.startUnits());
+        long base = HeapSampler.settledUsed();
+        Timed<PhasedLastingSolver.Result> ph;
+        try {
+            ph = time(sampler, base, reps, () -> PhasedLastingSolver.solve(lm, inst.goal, monitor,
+                    dockline.solve.ProductOptions.defaults()));
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side, inst.kind, "lasting-phased", 0, 0, "does not fit: " + e.getMessage());
+        }
+        PhasedLastingSolver.Result r = ph.value();
+        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena, inst.goal, monitor);
+        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
+        double ratio = ph.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
+        return new BenchRow(inst.side, inst.kind, "lasting-phased", r.game().vertexCount(),
+                r.strategy().result().edgesScanned(), 0, ph.millis(), ph.cpuMillis(), ph.peak(),
+                Verdict.of(r.startWon()).word(), ph.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "door-shut events lasting, phase by phase: %d of %d disturbance"
+                                + " states kept in %d rounds, last arena %d vertices; %.2f x the momentary attractor's"
+                                + " CPU time (%.1f ms)", r.keptStates(), r.totalStates(), r.rounds(),
+                        r.arena().vertexCount(), ratio, mom.cpuMillis()));
+    }
+
+    /** The instance's mission with its door-shut events lasting (the rest as they are). */
+    private static Mission lastingMission(Mission m) {
+        List<dockline.model.EventRule> rules = new ArrayList<>();
+        for (dockline.model.EventRule r : m.map().disturbances().rules()) {
+            rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
+                    ? r.withDuration(dockline.model.EventDuration.REST_OF_MISSION) : r);
+        }
+        return new Mission(m.name(), m.source(), m.map().withDisturbances(
+                new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
+                m.startCharge(), m.reserve(), m.tasks(), m.objective());
     }
 
     /**

@@ -20,7 +20,8 @@ import org.jgrapht.graph.DefaultEdge;
  * Checks a patrol policy on its own code path, trusting neither the solver nor its lap automaton: only the
  * model, the compiled arena and the policy's rows. Its lap bookkeeping is its own, read from the mission's
  * checkpoint names: the mask of checkpoints visited in the current lap, complete when every bit is set, and
- * empty again on the next cell (with {@code budget-per: lap} the budget is full again on completion).
+ * empty again on the next cell (with {@code budget-per: lap} the budget and the at-most counts are full again on
+ * completion, and what lasting events closed stays closed).
  *
  * <p>It builds the closed loop of the policy against every disturbance choice, breadth-first from the start,
  * and checks that (a) every situation reached has a legal policy row, (b) no outcome takes the battery below
@@ -148,10 +149,12 @@ public final class PatrolCertificateChecker {
                 int level = nodeLevel.get(n);
                 int mask = nodeMask.get(n);
                 lowest = Math.min(lowest, level);
-                Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask);
+                Optional<Action> act = policy.lookup(arena.cellOf(v), level, arena.budgetLeft(v), mask, null,
+                        arena.closures(v));
                 if (act.isEmpty()) {
                     return fail("no policy row for " + arena.cellOf(v) + " at level " + level + " with "
-                            + arena.budgetLeft(v) + " disturbances left and lap mask " + mask, lowest);
+                            + arena.budgetLeft(v) + " disturbances left" + (arena.closures(v).isEmpty() ? ""
+                            : " (" + arena.closures(v) + ")") + " and lap mask " + mask, lowest);
                 }
                 int d = LoopGraph.legalChoice(arena, v, act.get());
                 if (d < 0) {
@@ -172,7 +175,7 @@ public final class PatrolCertificateChecker {
                                 + " zone at " + arena.cellOf(u), lowest);
                     }
                     if (perLap && nm == full) {
-                        u = arena.robotVertex(arena.cell(u), arena.budget());
+                        u = arena.renewedAtLap(u);
                     }
                     succ.add(node(u, (int) Math.min(capacity, raw), nm));
                 }

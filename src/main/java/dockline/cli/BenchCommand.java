@@ -50,6 +50,9 @@ public final class BenchCommand extends CommandBase {
             + " route's full check on one generated floor (the first of --sizes, default 256) at 1,000 and 10,000 battery"
             + " levels; further --sizes: the full check at 1,000 levels once")
     boolean resolutionRow;
+    @Option(names = "--lasting-row", description = "run only the rows \"lasting doors\" (the reserve instance with its"
+            + " door-shut events lasting, against the momentary main route) on the sides from --sizes (default 32,64)")
+    boolean lastingRow;
 
     @Option(names = "--view", description = "run only the view section: the map view, headless, on the bundled maps"
             + " (folder maps/) and a generated floor (side from --sizes, default 512): a full repaint and a replay step per map")
@@ -84,6 +87,23 @@ public final class BenchCommand extends CommandBase {
                 out.flush();
             }
             return row.agree() ? ExitCodes.OK : ExitCodes.INTERNAL;
+        }
+        if (lastingRow) {
+            List<Integer> sides = sizes != null && !sizes.isEmpty() ? sizes : List.of(32, 64);
+            Benchmark.Config c = new Benchmark.Config(sides, List.of(), seed, 2, 3, 1, 8_000, 20_000_000L,
+                    40_000_000L);
+            for (dockline.bench.BenchRow r : new Benchmark(c, line -> {
+                err.println(line);
+                err.flush();
+            }).lastingOnly()) {
+                out.println(r.size() + "x" + r.size() + " " + r.method() + ": " + (r.ran() ? String.format(
+                        java.util.Locale.ROOT, "%d product vertices (%s), solve %.1f ms CPU (%.1f ms wall), %s; ",
+                        r.vertices(), r.method().equals("lasting") ? "reachable from the start"
+                                : "numbered in the last round", r.solveCpuMillis(), r.solveMillis(), r.verdict())
+                        : "") + r.note());
+            }
+            out.flush();
+            return ExitCodes.OK;
         }
         if (reading) {
             dockline.bench.ReadingBench.Result r = dockline.bench.ReadingBench.run(3);

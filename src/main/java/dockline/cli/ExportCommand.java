@@ -9,6 +9,7 @@ import dockline.plan.MissionPlanner;
 import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
 import dockline.plan.PolicyChoice;
+import dockline.plan.RoundsPlan;
 import dockline.plan.Route;
 import dockline.report.Caveats;
 import dockline.solve.discounted.DiscountedAnalysis;
@@ -59,12 +60,11 @@ public final class ExportCommand extends MissionCommand {
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         try {
             Mission m = mission.load(err);
-            if (RoundsCheck.oneTripOnly(m, "export") != null) {
-                err.println(RoundsCheck.oneTripOnly(m, "export"));
-                return ExitCodes.BAD_INPUT;
-            }
             if (!mission.outputOk("--policy", policyFile, m, err)) {
                 return ExitCodes.BAD_INPUT;
+            }
+            if (m.beyondOneTrip()) {
+                return rounds(m, out, err);
             }
             boolean discounted = m.objective() instanceof Objective.Discounted;
             if (discounted && policy.given()) {
@@ -149,6 +149,56 @@ public final class ExportCommand extends MissionCommand {
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }
+    }
+
+    /**
+     * A patrol or a deadline mission: planned by {@link RoundsPlan} (solve, then the independent certificate);
+     * the policy file's header says the goal (missions/POLICY-FORMAT.md, "Patrols and deadlines").
+     */
+    private int rounds(Mission m, PrintWriter out, PrintWriter err) throws IOException {
+        RoundsPlan plan = RoundsPlan.of(m, RoundsCheck.budget(mission.memoryBudgetBytes()), policy.choice());
+        boolean patrol = plan.patrol().isPresent();
+        if (!plan.guaranteed()) {
+            notGuaranteed(m, "there is no policy that " + (patrol ? "keeps the patrol going above the floor"
+                    : "docks within the deadline above the floor") + " to export", out);
+            return ExitCodes.NOT_GUARANTEED;
+        }
+        if (plan.certificateDisagrees()) {
+            err.println("dockline: internal error: the solver says guaranteed, but its policy " + (plan.certificate().ok()
+                    ? "has other figures under" : "failed") + " the independent certificate: "
+                    + plan.certificate().reason());
+            err.println("No policy is written. Please report this with the input files.");
+            return ExitCodes.INTERNAL;
+        }
+        Policy pol = patrol ? plan.patrol().get().policy().orElseThrow() : plan.deadline().get().policy().orElseThrow();
+        int lowest = plan.certificate().worstMinimumUnits();
+        boolean safest = (patrol ? plan.patrol().get().policyFloorUnits() : plan.deadline().get().policyFloorUnits())
+                > m.reserveUnits();
+        PolicyFiles.write(policyFile, PolicyFiles.Header.ofRounds(m), pol);
+        int states = plan.certificate().statesChecked();
+        if (json) {
+            ObjectNode o = summary(m, pol, states);
+            o.put("goal", patrol ? "patrol" : "deadline");
+            o.put("lowestLevelUnits", lowest);
+            o.put("policyChoice", safest ? "safest" : "fewest-moves");
+            if (patrol) {
+                o.put("longestLapTicks", plan.certificate().longestLapTicks());
+            } else {
+                o.put("worstFinishTicks", plan.certificate().longestLapTicks());
+                o.put("deadlineTicks", plan.deadline().get().deadlineTicks());
+            }
+            out.println(Json.withCaveats(o));
+        } else {
+            String turns = m.timing().describeTicks(plan.certificate().longestLapTicks());
+            out.println("Wrote the " + (patrol ? "patrol" : "deadline") + " policy for " + m.name() + " to "
+                    + policyFile + ": " + pol.size() + " rows; battery never below " + CheckReport.amount(lowest, m)
+                    + (patrol ? "; longest lap " + turns : "; docked within " + turns + " (deadline "
+                    + m.timing().describeTicks(plan.deadline().get().deadlineTicks()) + ")") + " ("
+                    + (safest ? "the safest policy" : patrol ? "the policy of shortest laps" : "the policy of fewest turns")
+                    + ").");
+            certifiedLines(m, states, out);
+        }
+        return ExitCodes.OK;
     }
 
     private static void certifiedLines(Mission m, int states, PrintWriter out) {

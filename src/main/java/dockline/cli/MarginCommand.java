@@ -48,12 +48,11 @@ public final class MarginCommand extends MissionCommand {
     @Override
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
         Mission m = mission.load(err);
-        if (RoundsCheck.oneTripOnly(m, "margin") != null) {
-            err.println(RoundsCheck.oneTripOnly(m, "margin"));
-            return ExitCodes.BAD_INPUT;
-        }
         if (!mission.outputOk("--json-file", jsonFile, m, err)) {
             return ExitCodes.BAD_INPUT;
+        }
+        if (m.beyondOneTrip()) {
+            return rounds(m, out, err);
         }
         MarginReport r;
         try {
@@ -84,6 +83,31 @@ public final class MarginCommand extends MissionCommand {
             return ExitCodes.INTERNAL;
         }
         return r.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
+    }
+
+    /** A patrol or a deadline mission: the figures {@code check} has ({@link RoundsMargin}). */
+    private int rounds(Mission m, PrintWriter out, PrintWriter err) {
+        RoundsMargin.Figures f;
+        try {
+            f = RoundsMargin.of(m, mission.memoryBudgetBytes());
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return mission.failure(e, err);
+        }
+        String text = RoundsMargin.json(f);
+        if (jsonFile != null) {
+            try {
+                AtomicFiles.writeString(jsonFile, text);
+            } catch (IOException e) {
+                err.println("dockline: cannot write " + jsonFile + ": " + e.getMessage());
+                return ExitCodes.BAD_INPUT;
+            }
+        }
+        if (json) {
+            out.print(text);
+        } else {
+            RoundsMargin.text(f, mission.title(m), out);
+        }
+        return f.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
 
     private void print(PrintWriter out, Mission m, MarginReport r) {

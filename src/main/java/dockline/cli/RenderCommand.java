@@ -28,7 +28,9 @@ import picocli.CommandLine.Parameters;
  * heat map or policy), the worst-case or counterexample path, the battery chart and the safety
  * line into a PNG, with no display (headless toolkit). The file is written atomically. The solving is
  * the core's ({@link dockline.plan.MissionPlanner}, through the view's {@link SolverAnalyzer}); with
- * {@code --json} the result is one JSON object (src/main/resources/dockline/schemas/render.schema.json).
+ * {@code --json} the result is one JSON object (src/main/resources/dockline/schemas/render.schema.json). A patrol
+ * or a deadline mission is planned by {@link dockline.plan.RoundsPlan} ({@link RoundsRender}): the picture shows
+ * its lasso (the way in and one lap of the loop) or its slowest play.
  */
 @Command(name = "render", mixinStandardHelpOptions = true,
         description = {"Solves a mission and draws it as a PNG picture, with no display needed.",
@@ -94,10 +96,6 @@ public final class RenderCommand extends CommandBase {
         Mission m;
         try {
             m = MissionLoader.load(mission);
-            if (RoundsCheck.oneTripOnly(m, "render") != null) {
-                err.println(RoundsCheck.oneTripOnly(m, "render"));
-                return ExitCodes.BAD_INPUT;
-            }
         } catch (InputException e) {
             for (Problem p : e.problems()) {
                 err.println(p.format());
@@ -115,6 +113,11 @@ public final class RenderCommand extends CommandBase {
             err.println("dockline render: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
+        if (m.beyondOneTrip() && overlay == Overlay.HEAT) {
+            // no charge-needed map for these goals (it would depend on the lap or the turns left): the plain map
+            overlay = Overlay.PLAIN;
+            options = new PictureRenderer.Options(options.width(), options.height(), overlay, -1, -1);
+        }
         String badOut = MissionOptions.outputProblem(out, mission, m);
         if (badOut != null) {
             err.println("dockline: --out " + (out.toString().isEmpty() ? "''" : out) + ": " + badOut);
@@ -122,7 +125,9 @@ public final class RenderCommand extends CommandBase {
         }
         ViewData data;
         try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
-            data = new SolverAnalyzer().analyze(m, () -> false);
+            // a patrol or a deadline mission: the core's rounds plan and its lasso (or slowest play)
+            data = m.beyondOneTrip() ? RoundsRender.of(m, RoundsCheck.budget(0))
+                    : new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
             if (!(e.getCause() instanceof dockline.model.ResourceLimitException)) {
                 throw e; // not the input's fault: an internal error (exit 4, Failures)

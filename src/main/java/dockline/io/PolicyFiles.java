@@ -94,6 +94,30 @@ public final class PolicyFiles {
     }
 
     /**
+     * The goal of a policy beyond one trip (missions/POLICY-FORMAT.md, "Patrols and deadlines"): for a
+     * patrol the rows' {@code progress} is the lap's checkpoints visited so far and the budget may start
+     * afresh on every lap; for a deadline the rows are those of a visit mission that docks in time.
+     *
+     * @param goal          {@code patrol} or {@code deadline}
+     * @param budgetPerLap  (patrol) whether the disturbance budget starts afresh on every completed lap
+     * @param deadlineTicks (deadline) the deadline in whole turns; -1 for a patrol
+     */
+    public record Rounds(String goal, boolean budgetPerLap, int deadlineTicks) {
+        public static final String PATROL = "patrol";
+        public static final String DEADLINE = "deadline";
+
+        public Rounds {
+            if (!goal.equals(PATROL) && !goal.equals(DEADLINE)) {
+                throw new IllegalArgumentException("goal must be patrol or deadline");
+            }
+        }
+
+        public boolean patrol() {
+            return goal.equals(PATROL);
+        }
+    }
+
+    /**
      * What the rows are about, so a reader can tell whether a policy fits a mission.
      *
      * @param mission       mission name
@@ -101,26 +125,49 @@ public final class PolicyFiles {
      * @param floorUnits    reserve floor the policy was computed for
      * @param capacityUnits battery capacity
      * @param budget        disturbance budget K
-     * @param tasks         the visit list; bit i of a row's progress is task i
+     * @param tasks         the visit list (a patrol's checkpoints); bit i of a row's progress is task i
      * @param score         for a policy with a score memory: the discounted objective; empty for a reserve policy
+     * @param rounds        for a patrol or a deadline mission: its goal; empty for a one-trip policy
      */
     public record Header(String mission, BigDecimal unitWh, int floorUnits, int capacityUnits, int budget,
-                         List<String> tasks, Optional<ScoreTerms> score) {
+                         List<String> tasks, Optional<ScoreTerms> score, Optional<Rounds> rounds) {
         public Header {
             tasks = List.copyOf(tasks);
             score = score == null ? Optional.empty() : score;
+            rounds = rounds == null ? Optional.empty() : rounds;
+        }
+
+        /** The header of a one-trip policy, with or without a score memory. */
+        public Header(String mission, BigDecimal unitWh, int floorUnits, int capacityUnits, int budget,
+                      List<String> tasks, Optional<ScoreTerms> score) {
+            this(mission, unitWh, floorUnits, capacityUnits, budget, tasks, score, Optional.empty());
         }
 
         /** The header of a reserve policy. */
         public Header(String mission, BigDecimal unitWh, int floorUnits, int capacityUnits, int budget,
                       List<String> tasks) {
-            this(mission, unitWh, floorUnits, capacityUnits, budget, tasks, Optional.empty());
+            this(mission, unitWh, floorUnits, capacityUnits, budget, tasks, Optional.empty(), Optional.empty());
         }
 
         /** The header for a reserve policy computed for this mission (its reserve floor and budget). */
         public static Header of(Mission m) {
             return new Header(m.name(), m.scale().unitWh(), m.reserveUnits(), m.capacityUnits(),
                     m.map().disturbances().budget(), m.tasks().visit());
+        }
+
+        /**
+         * The header for a patrol or deadline policy of this mission, certified at {@code floorUnits} (the
+         * mission's floor: the safest policy keeps a higher one, but it is certified for the mission's).
+         */
+        public static Header ofRounds(Mission m) {
+            if (m.tasks().patrols()) {
+                return new Header(m.name(), m.scale().unitWh(), m.reserveUnits(), m.capacityUnits(),
+                        m.map().disturbances().budget(), m.tasks().patrol(), Optional.empty(),
+                        Optional.of(new Rounds(Rounds.PATROL, m.map().disturbances().budgetPerLap(), -1)));
+            }
+            return new Header(m.name(), m.scale().unitWh(), m.reserveUnits(), m.capacityUnits(),
+                    m.map().disturbances().budget(), m.tasks().visit(), Optional.empty(),
+                    Optional.of(new Rounds(Rounds.DEADLINE, false, m.timing().deadlineTicks())));
         }
 
         /** The header for a policy with a score memory computed for this mission and objective. */
@@ -156,7 +203,7 @@ public final class PolicyFiles {
             "weightBoundUnits", "reserveKept");
     static final List<String> TOP_KEYS = List.of("format", "version", "mission", "unitWh", "reserveUnits",
             "capacityUnits", "budget", "tasks", "objective", "discount", "threshold", "relation", "weightBoundUnits",
-            "reserveKept", "rows", "thresholds");
+            "reserveKept", "goal", "budgetPer", "deadlineTicks", "rows", "thresholds");
     static final List<String> ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "action",
             "to");
     static final List<String> SCORE_ROW_KEYS = List.of("cell", "levelUnits", "budgetLeft", "progress", "score",
@@ -332,6 +379,15 @@ public final class PolicyFiles {
                 g.writeNumberField("weightBoundUnits", t.weightBound());
                 g.writeBooleanField("reserveKept", t.reserveKept());
             }
+            if (h.rounds().isPresent()) {
+                Rounds r = h.rounds().get();
+                g.writeStringField("goal", r.goal());
+                if (r.patrol()) {
+                    g.writeStringField("budgetPer", r.budgetPerLap() ? "lap" : "mission");
+                } else {
+                    g.writeNumberField("deadlineTicks", r.deadlineTicks());
+                }
+            }
             g.writeArrayFieldStart("rows");
             for (PolicyEntry e : policy.entries()) {
                 // one row per line: written compactly, placed raw by the pretty printer
@@ -393,6 +449,12 @@ public final class PolicyFiles {
             w.write("# relation: " + t.relation().symbol() + nl);
             w.write("# weightBoundUnits: " + t.weightBound() + nl);
             w.write("# reserveKept: " + t.reserveKept() + nl);
+        }
+        if (h.rounds().isPresent()) {
+            Rounds r = h.rounds().get();
+            w.write("# goal: " + r.goal() + nl);
+            w.write(r.patrol() ? "# budgetPer: " + (r.budgetPerLap() ? "lap" : "mission") + nl
+                    : "# deadlineTicks: " + r.deadlineTicks() + nl);
         }
         boolean scored = h.score().isPresent();
         boolean closed = policy.entries().stream().anyMatch(e -> !e.closures().isEmpty());
@@ -637,7 +699,65 @@ public final class PolicyFiles {
         if (score == null) {
             return null;
         }
-        return new Header(values.get("mission"), unit, floor, cap, budget, tasks, score);
+        Optional<Rounds> rounds = rounds(p, pos, values, at);
+        if (rounds == null) {
+            return null;
+        }
+        if (rounds.isPresent() && score.isPresent()) {
+            p.addPolicy(at.get("goal"), "a patrol or deadline policy has no discounted objective");
+            return null;
+        }
+        return new Header(values.get("mission"), unit, floor, cap, budget, tasks, score, rounds);
+    }
+
+    /** The goal beyond one trip of the header, empty for a one-trip policy, null after a problem. */
+    static Optional<Rounds> rounds(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at) {
+        String goal = values.get("goal");
+        if (goal == null || goal.trim().equals("visit")) {
+            for (String k : List.of("budgetPer", "deadlineTicks")) {
+                if (values.containsKey(k)) {
+                    p.add(at.get(k), "'" + k + "' belongs to a patrol or deadline policy",
+                            "add 'goal: " + (k.equals("budgetPer") ? "patrol" : "deadline") + "', or leave '" + k
+                            + "' out");
+                    return null;
+                }
+            }
+            return Optional.empty();
+        }
+        switch (goal.trim()) {
+            case Rounds.PATROL -> {
+                if (values.containsKey("deadlineTicks")) {
+                    p.add(at.get("deadlineTicks"), "'deadlineTicks' belongs to a deadline policy, not a patrol",
+                            "leave 'deadlineTicks' out");
+                    return null;
+                }
+                String per = values.getOrDefault("budgetPer", "mission").trim();
+                if (!per.equals("lap") && !per.equals("mission")) {
+                    p.addPolicy(at.get("budgetPer"), "'budgetPer' must be lap or mission, not '" + Loading.shorten(per)
+                            + "'");
+                    return null;
+                }
+                return Optional.of(new Rounds(Rounds.PATROL, per.equals("lap"), -1));
+            }
+            case Rounds.DEADLINE -> {
+                if (values.containsKey("budgetPer")) {
+                    p.add(at.get("budgetPer"), "'budgetPer' belongs to a patrol policy, not a deadline",
+                            "leave 'budgetPer' out");
+                    return null;
+                }
+                if (!values.containsKey("deadlineTicks")) {
+                    p.addPolicy(pos, "no 'deadlineTicks' in the policy file (it is for a deadline mission)");
+                    return null;
+                }
+                int t = nonNegative(p, values, at, "deadlineTicks");
+                return t < 0 ? null : Optional.of(new Rounds(Rounds.DEADLINE, false, t));
+            }
+            default -> {
+                p.addPolicy(at.get("goal"), "'goal' must be visit, patrol or deadline, not '" + Loading.shorten(goal)
+                        + "'");
+                return null;
+            }
+        }
     }
 
     /** The discounted objective of the header, empty for a reserve policy, null after a problem. */

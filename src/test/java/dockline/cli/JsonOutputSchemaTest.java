@@ -150,6 +150,45 @@ class JsonOutputSchemaTest {
                 dir.resolve("r.json").toString());
     }
 
+    /** A patrol's and a deadline mission's export: the summary, and the policy file with its goal in the header. */
+    @Test
+    void export_patrolAndDeadline_andTheirPolicyFiles() throws Exception {
+        Path p = dir.resolve("patrol.json");
+        JsonNode j = command("export", ExitCodes.OK, "export", "missions/night-patrol.yaml", "--json", "--policy",
+                p.toString());
+        assertThat(j.get("goal").asText()).isEqualTo("patrol");
+        JsonNode file = valid("policy", Files.readString(p));
+        assertThat(file.get("goal").asText()).isEqualTo("patrol");
+        assertThat(file.get("budgetPer").asText()).isEqualTo("mission");
+        Path d = dir.resolve("deadline.json");
+        JsonNode dj = command("export", ExitCodes.OK, "export", RoundsCommandsTest.earlyClean(dir, "3 min").toString(),
+                "--json", "--policy", d.toString());
+        assertThat(dj.get("goal").asText()).isEqualTo("deadline");
+        assertThat(valid("policy", Files.readString(d)).get("deadlineTicks").asInt()).isEqualTo(45);
+        command("export", ExitCodes.NOT_GUARANTEED, "export", "missions/early-clean.yaml", "--json", "--policy",
+                dir.resolve("late.json").toString());
+        assertThat(dir.resolve("late.json")).doesNotExist();
+    }
+
+    @Test
+    void margin_patrolAndDeadline_followTheRoundsSchema() throws Exception {
+        Path f = dir.resolve("margin-patrol.json");
+        JsonNode p = command("margin-rounds", ExitCodes.OK, "margin", "missions/night-patrol.yaml", "--json",
+                "--json-file", f.toString());
+        valid("margin-rounds", Files.readString(f));
+        assertThat(p.has("tightestDeadlineTicks")).isFalse();
+        JsonNode d = command("margin-rounds", ExitCodes.NOT_GUARANTEED, "margin", "missions/early-clean.yaml",
+                "--json");
+        assertThat(d.get("tightestDeadlineTicks").asInt()).isEqualTo(43);
+        // the deadline schema needs the deadline figures, the patrol schema refuses them
+        ObjectNode noTightest = (ObjectNode) d.deepCopy();
+        noTightest.remove("tightestDeadlineTicks");
+        assertThat(schema("margin-rounds").validate(noTightest)).isNotEmpty();
+        ObjectNode patrolWithDeadline = (ObjectNode) p.deepCopy();
+        patrolWithDeadline.put("deadlineTicks", 3);
+        assertThat(schema("margin-rounds").validate(patrolWithDeadline)).isNotEmpty();
+    }
+
     @Test
     void replay_andItsFile() throws Exception {
         Path f = dir.resolve("replay.json");
@@ -202,10 +241,23 @@ class JsonOutputSchemaTest {
     /** {@code render --json} in a fresh JVM (the toolkit starts headless there, as in {@code RenderCommandTest}). */
     @Test
     void render_inAFreshJvm() throws Exception {
-        Path png = dir.resolve("night.png");
+        JsonNode j = renderJson("missions/night-round.yaml");
+        assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
+    }
+
+    /** A patrol's picture (its lasso), in the same shape. */
+    @Test
+    void render_patrol_inAFreshJvm() throws Exception {
+        JsonNode j = renderJson("missions/night-patrol.yaml");
+        assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
+        assertThat(j.get("lowestLevelUnits").asInt()).isPositive();
+    }
+
+    private JsonNode renderJson(String mission) throws Exception {
+        Path png = dir.resolve("picture.png");
         List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "-cp", System.getProperty("java.class.path"), "dockline.cli.Main", "render",
-                "missions/night-round.yaml", "--out", png.toString(), "--size", "600x400", "--json"));
+                mission, "--out", png.toString(), "--size", "600x400", "--json"));
         ProcessBuilder pb = new ProcessBuilder(cmd);
         pb.environment().remove("DISPLAY");
         pb.environment().remove("WAYLAND_DISPLAY");
@@ -220,8 +272,8 @@ class JsonOutputSchemaTest {
         }
         assertThat(done).isTrue();
         assertThat(p.exitValue()).as(Files.readString(dir.resolve("err.txt"))).isEqualTo(ExitCodes.OK);
-        JsonNode j = valid("render", Files.readString(out.toPath()));
-        assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
+        assertThat(png).isRegularFile();
+        return valid("render", Files.readString(out.toPath()));
     }
 
     /** The schemas can fail: a key under an earlier name, or a missing key, is a problem. */

@@ -161,8 +161,13 @@ public final class ReserveSolver {
         boolean searched = false;
         if (options.highestReserve() || options.safestPolicy()) {
             try {
+                // with lasting closures each verdict is found phase by phase (exact, and only the closure
+                // phases the robot's attempts run into are built); otherwise on the whole implicit product
+                boolean phased = arena.states().itemCount() > 0 && arena.stateCount() == arena.states().count();
                 int lo = MonotoneSearch.highest(won ? worst.getAsInt() : -1, won ? start : Math.min(start, reserve - 1),
-                        f -> implicitGame(arena, goal, monitor.withFloor(f), po).solve(true, po.cancelled()).startWon());
+                        f -> phased ? PhasedLastingSolver.wins(arena.mission(), goal, monitor.withFloor(f), po)
+                                : implicitGame(arena, goal, monitor.withFloor(f), po).solve(true, po.cancelled())
+                                .startWon());
                 highest = lo >= 0 ? OptionalInt.of(lo) : OptionalInt.empty();
                 searched = true;
             } catch (ProductTooLargeException e) {

@@ -159,7 +159,7 @@ final class PolicyLoop {
             int av = p.arenaVertex(v);
             int d = p.arenaVertex(p.target(choice[v]));
             rows.add(new PolicyEntry(Cell.ofIndex(a.cell(av), a.width()), p.level(v), a.budgetLeft(av),
-                    p.progressMask(v), a.action(d)));
+                    p.progressMask(v), a.action(d), null, a.closures(av)));
         }
         return new Policy(rows);
     }

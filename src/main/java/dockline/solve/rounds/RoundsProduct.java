@@ -25,7 +25,8 @@ import dockline.util.LongIntMap;
  *       done, on a dock when required) is a target and has no successors (the mission is complete);</li>
  *   <li>{@link Kind#PATROL}: the {@link LapAutomaton}; a robot vertex in its lap-done state is accepting
  *       (a Büchi vertex) and the play goes on. With {@code budget-per: lap} the disturbance budget starts
- *       afresh there: the arena vertex becomes the same cell with the full budget.</li>
+ *       afresh there: the arena vertex becomes the same cell with the full budget and no at-most entry used,
+ *       with the same doors and zones closed ({@link Arena#renewedAtLap}).</li>
  * </ul>
  *
  * <p>Size: at most (arena vertices × goal states × levels) vertices, stated before the build as an upper
@@ -73,11 +74,6 @@ public final class RoundsProduct {
             this.visitGoal = null;
             this.goalStates = lapGoal.stateCount();
             this.budgetPerLap = m.map().disturbances().budgetPerLap();
-            if (budgetPerLap && arena.stateCount() != arena.budget() + 1) {
-                // a fresh budget would also have to keep the doors a lasting event has shut: not modelled yet
-                throw new IllegalArgumentException("budget-per: lap cannot be combined yet with lasting events or"
-                        + " at-most limits; use budget-per: mission (the budget for the whole night) or momentary events");
-            }
         } else {
             this.visitGoal = GoalAutomaton.of(m);
             this.lapGoal = null;
@@ -159,7 +155,6 @@ public final class RoundsProduct {
             vl.add(Math.min(capacity, startLevel));
             ids.put(key(v0, g0, Math.min(capacity, startLevel)), 1);
         }
-        int fullBudget = arena.budget();
         for (int x = 0; x < va.size(); x++) {
             out.add(tgt.size());
             if (x == LOST) {
@@ -193,7 +188,8 @@ public final class RoundsProduct {
                         continue;
                     }
                     if (budgetPerLap && ng == lapGoal.lapDone()) {
-                        u = arena.robotVertex(arena.cell(u), fullBudget);
+                        // new events are counted afresh; what a lasting event closed stays closed
+                        u = arena.renewedAtLap(u);
                     }
                 }
                 long k = key(u, ng, nl);

@@ -1,0 +1,62 @@
+package dockline.solve.reserve;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dockline.arena.ArenaCompiler;
+import dockline.certify.Certificate;
+import dockline.certify.CertificateChecker;
+import dockline.goal.GoalAutomaton;
+import dockline.model.Mission;
+import dockline.monitor.ReserveMonitor;
+import dockline.policy.Policy;
+import dockline.solve.ProductOptions;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.statistics.Statistics;
+
+/**
+ * {@link PhasedLastingSolver} (closure phases built only where the robot's attempts run into them, closures
+ * into left-out phases lost, refined by the frontier) against {@link LastingBruteForce}, the separately written
+ * explicit-state oracle with closure sets and per-rule counts, on random tiny maps with lasting and momentary
+ * doors and blockages, at-most limits, slips and budgets 0-3: the same verdict at the mission's floor and at
+ * the brute force's highest floor and one above it. A guaranteed policy of the restricted game must pass the
+ * independent certificate checker on the mission's whole arena (every closure phase present).
+ */
+class LastingPhasesProperties {
+
+    @Property(tries = 2000)
+    void phasedVerdict_matchesTheBruteForce_andItsPolicyIsCertifiedOnTheWholeArena(@ForAll long seed) {
+        Mission m = LastingMissions.fromSeed(seed, true);
+        LastingBruteForce oracle = new LastingBruteForce(m);
+        int highest = oracle.highestFloor();
+        String why = LastingMissions.describe(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        ProductOptions po = ProductOptions.defaults();
+        int rounds = 0;
+        boolean partial = false;
+        for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
+            if (floor > m.startUnits() || floor > m.capacityUnits()) {
+                continue;
+            }
+            boolean expected = highest >= floor;
+            ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
+            PhasedLastingSolver.Result r = PhasedLastingSolver.solve(m, goal, mon, po);
+            assertThat(r.startWon()).as("verdict at floor %d\n%s", floor, why).isEqualTo(expected);
+            rounds = Math.max(rounds, r.rounds());
+            partial |= r.keptStates() < r.totalStates();
+            if (r.startWon() && r.game().start() >= 0) {
+                Policy p = r.game().policy(r.strategy());
+                Certificate c = CertificateChecker.check(ArenaCompiler.compile(m), p, floor);
+                assertThat(c.ok()).as("certificate on the whole arena at floor %d: %s\n%s", floor, c.reason(), why)
+                        .isTrue();
+                assertThat(c.worstMinimumUnits()).isEqualTo(r.game().worstCaseMinimum(r.strategy()));
+            }
+        }
+        Statistics.label("refined (more than one round)").collect(rounds > 1);
+        Statistics.label("some phase left out").collect(partial);
+        Statistics.label("lasting rule with budget").collect(m.map().disturbances().anyLasting()
+                && m.map().disturbances().budget() > 0);
+        Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(p -> p >= 5));
+        Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(p -> p >= 10));
+    }
+}
