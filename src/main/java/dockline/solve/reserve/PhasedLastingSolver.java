@@ -112,7 +112,7 @@ public final class PhasedLastingSolver {
      * O(triples searched x out-degree).
      */
     private static boolean[] frontier(Arena a, DisturbanceStates st, GoalAutomaton goal, ReserveMonitor monitor,
-                                      ImplicitReserveGame.Strategy s, boolean[] keep, int startTriple) {
+                                      ImplicitReserveGame.Strategy s, boolean[] keep, long startTriple) {
         boolean[] add = new boolean[st.count()];
         if (startTriple < 0) {
             return add; // the start itself is lost (below the floor, or in an avoided zone)
