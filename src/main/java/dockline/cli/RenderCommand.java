@@ -29,7 +29,7 @@ import picocli.CommandLine.Parameters;
  * line into a PNG, with no display (headless toolkit). The file is written atomically. The solving is
  * the core's ({@link dockline.plan.MissionPlanner}, through the view's {@link SolverAnalyzer}); with
  * {@code --json} the result is one JSON object (src/main/resources/dockline/schemas/render.schema.json). A patrol
- * or a deadline mission is planned by {@link dockline.plan.RoundsPlan} ({@link RoundsRender}): the picture shows
+ * or a deadline mission is planned by {@link dockline.plan.RoundsPlan} (the window's adapter of it): the picture shows
  * its lasso (the way in and one lap of the loop) or its slowest play.
  */
 @Command(name = "render", mixinStandardHelpOptions = true,
@@ -125,9 +125,9 @@ public final class RenderCommand extends CommandBase {
         }
         ViewData data;
         try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
-            // a patrol or a deadline mission: the core's rounds plan and its lasso (or slowest play)
-            data = m.beyondOneTrip() ? RoundsRender.of(m, RoundsCheck.budget(0))
-                    : new SolverAnalyzer().analyze(m, () -> false);
+            // a patrol or a deadline mission goes through the core's rounds plan and its lasso (or slowest
+            // play), as in the window
+            data = new SolverAnalyzer().analyze(m, () -> false);
         } catch (IllegalArgumentException e) {
             if (!(e.getCause() instanceof dockline.model.ResourceLimitException)) {
                 throw e; // not the input's fault: an internal error (exit 4, Failures)

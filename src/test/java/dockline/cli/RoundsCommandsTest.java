@@ -150,13 +150,14 @@ class RoundsCommandsTest {
     void renderedPatrol_drawsTheLasso() throws Exception {
         Mission m = MissionLoader.load(Path.of("missions/night-patrol.yaml"));
         long budget = RoundsCheck.budget(0);
-        RoundsRender.Data data = RoundsRender.of(m, budget);
+        dockline.view.ViewData data = new dockline.view.SolverAnalyzer().analyze(m, () -> false);
         RoundsReplay lasso = RoundsPlan.replay(m, budget, PolicyChoice.SAFEST).orElseThrow();
         assertThat(lasso.loopStart()).isNotNegative();
         ViewReplay drawn = data.replays().get(0);
-        assertThat(drawn.kind()).isEqualTo(ViewReplay.Kind.WORST_CASE);
+        assertThat(drawn.kind()).isEqualTo(ViewReplay.Kind.LASSO);
         assertThat(drawn.steps()).hasSize(lasso.replay().steps().size());
-        assertThat(drawn.title()).contains("way in steps 0-" + lasso.loopStart());
+        assertThat(drawn.loopStart()).isEqualTo(lasso.loopStart());
+        assertThat(drawn.title()).contains("lap from step " + lasso.loopStart());
         assertThat(drawn.minimumUnits()).isEqualTo(data.verdict().worstCaseMinimumUnits().getAsInt());
         assertThat(data.verdict().highestReserveUnits()).isPresent();
     }
