@@ -32,7 +32,7 @@ class ViewBenchCommandTest {
         assertThat(code).as(err.toString()).isZero();
         JsonNode root = new ObjectMapper().readTree(out.toString());
         // the published schema (general-purpose validator, as in JsonOutputSchemaTest)
-        assertThat(JsonOutputSchemaTest.schema("bench").validate(root)).isEmpty();
+        assertThat(JsonOutputSchemaTest.schema("bench").validate(root)).as("%s", root).isEmpty();
         List<String> maps = new ArrayList<>();
         for (JsonNode row : root.get("view")) {
             maps.add(row.get("map").asText());

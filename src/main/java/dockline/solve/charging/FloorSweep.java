@@ -5,6 +5,7 @@ import dockline.goal.GoalAutomaton;
 import dockline.solve.game.GoalPredecessors;
 import dockline.util.IntArrayList;
 import dockline.util.PackedMinHeap;
+import dockline.util.Progress;
 import java.util.Arrays;
 import java.util.OptionalInt;
 
@@ -151,8 +152,10 @@ public final class FloorSweep {
     private Result run(int floor, int start) {
         final int INF = ChargingSolver.INFINITE;
         Arrays.fill(need, INF);
+        long dockPositions = 0;
         for (int r = 0; r < rc; r++) {
             boolean dock = arena.isDock(arena.cell(r));
+            dockPositions += dock ? gc : 0;
             for (int g = 0; g < gc; g++) {
                 if (goal.accepting(g, dock)) {
                     int p = r * gc + g;
@@ -164,6 +167,8 @@ public final class FloorSweep {
         }
         int g0 = solver.startGoal();
         int startP = g0 == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + g0;
+        // progress: the docks added so far of all dock positions (the pass usually stops well before the last)
+        Progress.Tracker progress = Progress.phase("charging route: docks in decreasing floor", Math.max(1, dockPositions));
         drain();
         batchEnd.add(histPos.size());
 
@@ -204,7 +209,9 @@ public final class FloorSweep {
             heap.push(0, next);
             drain();
             batchEnd.add(histPos.size());
+            progress.at(added.size());
         }
+        progress.done();
         return new Result(capacity, floor, start, floorNeed, best < 0 ? OptionalInt.empty() : OptionalInt.of(best),
                 floorBatches, bestBatches, batchEnd.size(), histPos.size(), recomputations);
     }
