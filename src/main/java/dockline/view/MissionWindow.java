@@ -385,6 +385,19 @@ public final class MissionWindow {
                 .ifPresent(this::exportPicture);
     }
 
+    void chooseAndExportReport() {
+        if (file == null || base == null) {
+            say("a report is of a mission file: open one first");
+        } else {
+            ReportExport.choose(root.getScene().getWindow(), folder(), base.name()).ifPresent(this::exportReport);
+        }
+    }
+
+    /** Writes the sign-off report of the mission file shown, on the worker thread; the status line says how it went. */
+    public java.util.concurrent.CompletableFuture<String> exportReport(Path out) {
+        return ReportExport.writeLater(file, out, worker, this::say);
+    }
+
     /** The folder of the file shown, or null. */
     private Path folder() {
         return file != null && file.toAbsolutePath().getParent() != null ? file.toAbsolutePath().getParent() : null;

@@ -49,9 +49,18 @@ public final class SolverAnalyzer implements Analyzer {
             return RoundsData.analyze(mission, cancelled, progress);
         }
         Plan plan;
-        try {
+        // the plan's stages move the bar; the solver's own phases (util.Progress) say inside the stage how far
+        // it is, without moving the bar back when a new phase starts at 0 %
+        int[] stageAt = {0};
+        String[] stageName = {""};
+        try (dockline.util.Progress.Scope phases = dockline.util.Progress.listen((phase, pct) ->
+                progress.reached(stageAt[0], stageName[0] + " (" + phase + ": " + pct + " %)"))) {
             plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
-                    true, true)).withCancelled(cancelled).withProgress((p, stage) -> progress.reached(p * 85 / 100, stage)));
+                    true, true)).withCancelled(cancelled).withProgress((p, stage) -> {
+                        stageAt[0] = p * 85 / 100;
+                        stageName[0] = stage;
+                        progress.reached(stageAt[0], stage);
+                    }));
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }

@@ -34,8 +34,10 @@ final class WindowMenu {
         exportItem.setMnemonicParsing(true);
         exportItem.setAccelerator(KeyCombination.keyCombination("Shortcut+E"));
         exportItem.setOnAction(e -> w.chooseAndExport());
+        MenuItem exportReport = item("Export sign-off _report as HTML\u2026", null, w::chooseAndExportReport);
+        exportReport.setId("export-report");
         Menu fileMenu = new Menu("_File", null, open, recentMenu, importImage, reload, new SeparatorMenuItem(), exportItem,
-                new SeparatorMenuItem(), close);
+                exportReport, new SeparatorMenuItem(), close);
         fileMenu.setOnShowing(e -> rebuildRecent());
         rebuildRecent();
 
