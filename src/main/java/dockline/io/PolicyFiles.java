@@ -277,18 +277,7 @@ public final class PolicyFiles {
             pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE);
             g.setPrettyPrinter(pp);
             g.writeStartObject();
-            g.writeStringField("format", FORMAT);
-            g.writeNumberField("version", VERSION_THRESHOLDS);
-            g.writeStringField("mission", h.mission());
-            g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
-            g.writeNumberField("reserveUnits", h.floorUnits());
-            g.writeNumberField("capacityUnits", h.capacityUnits());
-            g.writeNumberField("budget", h.budget());
-            g.writeArrayFieldStart("tasks");
-            for (String t : h.tasks()) {
-                g.writeString(t);
-            }
-            g.writeEndArray();
+            writeHeadline(g, h, VERSION_THRESHOLDS);
             g.writeArrayFieldStart("thresholds");
             for (ThresholdPolicy.Row r : policy.rows()) {
                 for (ThresholdPolicy.Step st : r.steps()) {
@@ -358,18 +347,7 @@ public final class PolicyFiles {
             pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE);
             g.setPrettyPrinter(pp);
             g.writeStartObject();
-            g.writeStringField("format", FORMAT);
-            g.writeNumberField("version", h.version());
-            g.writeStringField("mission", h.mission());
-            g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
-            g.writeNumberField("reserveUnits", h.floorUnits());
-            g.writeNumberField("capacityUnits", h.capacityUnits());
-            g.writeNumberField("budget", h.budget());
-            g.writeArrayFieldStart("tasks");
-            for (String t : h.tasks()) {
-                g.writeString(t);
-            }
-            g.writeEndArray();
+            writeHeadline(g, h, h.version());
             if (h.score().isPresent()) {
                 ScoreTerms t = h.score().get();
                 g.writeStringField("objective", "discounted");
@@ -827,5 +805,22 @@ public final class PolicyFiles {
             kept = k.equals("true");
         }
         return ok ? Optional.of(new ScoreTerms(d, v, rel, mu, kept)) : null;
+    }
+
+    /** The fields every policy file opens with: format, version, mission, unit, floor, capacity, budget, tasks. */
+    private static void writeHeadline(com.fasterxml.jackson.core.JsonGenerator g, Header h, int version)
+            throws IOException {
+        g.writeStringField("format", FORMAT);
+        g.writeNumberField("version", version);
+        g.writeStringField("mission", h.mission());
+        g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
+        g.writeNumberField("reserveUnits", h.floorUnits());
+        g.writeNumberField("capacityUnits", h.capacityUnits());
+        g.writeNumberField("budget", h.budget());
+        g.writeArrayFieldStart("tasks");
+        for (String t : h.tasks()) {
+            g.writeString(t);
+        }
+        g.writeEndArray();
     }
 }
