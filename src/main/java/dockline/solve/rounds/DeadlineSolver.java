@@ -96,7 +96,7 @@ public final class DeadlineSolver {
     }
 
     /** The solved battery product: the start's rank in turns (-1: the robot cannot force completion). */
-    record Solved(RoundsProduct product, int[] choice, int turns) {
+    record Solved(RoundsProduct product, int[] choice, int[] rank, int turns) {
     }
 
     static Solved solve(Arena arena, int floor, int startLevel, long budgetBytes) {
@@ -113,7 +113,7 @@ public final class DeadlineSolver {
         Attractor.preferCharge(p, alive, rank, choice);
         int r = p.start() == RoundsProduct.LOST ? Attractor.OUT : rank[p.start()];
         // ranks count edges; a turn is two (the robot's action, then the building's outcome)
-        return new Solved(p, choice, r == Attractor.OUT ? -1 : r / 2);
+        return new Solved(p, choice, rank, r == Attractor.OUT ? -1 : r / 2);
     }
 
     /**

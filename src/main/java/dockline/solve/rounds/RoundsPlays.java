@@ -69,17 +69,11 @@ public final class RoundsPlays {
                         floor).getAsInt();
             }
         }
-        RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, floor, m.startUnits(), budgetBytes);
+        DeadlineSolver.Solved solved = DeadlineSolver.solve(arena, floor, m.startUnits(), budgetBytes);
+        RoundsProduct p = solved.product();
         int n = p.vertexCount();
-        boolean[] alive = new boolean[n];
-        boolean[] target = new boolean[n];
-        for (int v = 0; v < n; v++) {
-            alive[v] = true;
-            target[v] = p.complete(v);
-        }
-        int[] choice = new int[n];
-        int[] rank = Attractor.of(p, true, alive, target, choice);
-        Attractor.preferCharge(p, alive, rank, choice);
+        int[] choice = solved.choice();
+        int[] rank = solved.rank();
         if (p.start() == RoundsProduct.LOST || rank[p.start()] == Attractor.OUT) {
             return Optional.empty();
         }
