@@ -545,13 +545,7 @@ public final class Benchmark {
         Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, reps, game::bfs);
         // the implicit route end to end as ReserveSolver's Route.IMPLICIT runs it: the attractor with the
         // robot's choices (stopping at the start), the policy walk and the worst-case DP over the closed loop
-        Timed<long[]> pol = time(sampler, base, reps, () -> {
-            ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
-            if (!st.startWon()) {
-                return new long[] {0, -1, st.result().edgesScanned(), 0};
-            }
-            return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
-        });
+        Timed<long[]> pol = time(sampler, base, reps, () -> policyRun(game));
         long[] pv = pol.value();
         long reachable = bfs.value().wonVertices();
         rows.add(new BenchRow(inst.side, inst.kind, "attractor", reachable, bfs.value().edgesScanned(), 0, pol.millis(),
@@ -637,13 +631,7 @@ public final class Benchmark {
         }
         long base = HeapSampler.settledUsed();
         Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, 1, game::bfs);
-        Timed<long[]> pol = time(sampler, base, reps, () -> {
-            ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
-            if (!st.startWon()) {
-                return new long[] {0, -1, st.result().edgesScanned(), 0};
-            }
-            return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
-        });
+        Timed<long[]> pol = time(sampler, base, reps, () -> policyRun(game));
         long[] pv = pol.value();
         long reachable = bfs.value().wonVertices();
         // the momentary main route on the same instance, for the ratio (timed here again, back to back)
@@ -897,5 +885,17 @@ public final class Benchmark {
             }
         });
         return out;
+    }
+
+    /**
+     * The implicit route end to end as the planner runs it: the attractor with the robot's choices, the
+     * policy walk and the worst-case pass over the closed loop, as {won, worst level, edges scanned, rows}.
+     */
+    private static long[] policyRun(ImplicitReserveGame game) {
+        ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
+        if (!st.startWon()) {
+            return new long[] {0, -1, st.result().edgesScanned(), 0};
+        }
+        return new long[] {1, game.worstCaseMinimum(st), st.result().edgesScanned(), game.policy(st).size()};
     }
 }
