@@ -92,17 +92,17 @@ final class Json {
         }
     }
 
+    /** A record as a JSON object: one key per component, named and ordered as the record declares them. */
+    static ObjectNode record(Record r) {
+        return MAPPER.valueToTree(r);
+    }
+
     /** The reading benchmark as JSON: one object per layout and the slowest ratio. */
     static String readingJson(dockline.bench.ReadingBench.Result r) {
         ObjectNode o = object();
         ArrayNode rows = o.putArray("reading");
         for (dockline.bench.ReadingBench.Row row : r.rows()) {
-            ObjectNode ro = rows.addObject();
-            ro.put("layout", row.layout());
-            ro.put("bytes", row.bytes());
-            ro.put("lines", row.lines());
-            ro.put("bestMillis", row.bestMillis());
-            ro.put("outcome", row.outcome());
+            rows.add(record(row));
         }
         o.put("worstRatio", r.worstRatio());
         o.put("met", r.met());

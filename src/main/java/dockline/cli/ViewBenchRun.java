@@ -100,18 +100,7 @@ final class ViewBenchRun {
         ObjectNode o = Json.object();
         ArrayNode rows = o.putArray("view");
         for (ViewBench.Row row : r.rows()) {
-            ObjectNode ro = rows.addObject();
-            ro.put("map", row.map());
-            ro.put("width", row.width());
-            ro.put("height", row.height());
-            ro.put("cellPx", row.cellPx());
-            ro.put("replaySteps", row.replaySteps());
-            ro.put("openMillis", row.openMillis());
-            ro.put("viewFullRepaintMillis", row.viewFullRepaintMillis());
-            ro.put("viewStepMillis", row.viewStepMillis());
-            ro.put("viewStepOverFullRepaint", row.viewStepOverFullRepaint());
-            ro.put("staticTilesDuringSteps", row.staticTilesDuringSteps());
-            ro.put("viewPolicyStepMillis", row.viewPolicyStepMillis());
+            rows.add(Json.record(row)); // the record's components are the schema's keys
         }
         ArrayNode t = o.putArray("targets");
         r.targets().forEach(t::add);
