@@ -79,13 +79,7 @@ final class CheckReport {
             out.println("  Policy: level thresholds over " + ch.thresholds().size() + " positions ("
                     + ch.thresholds().stepCount() + " thresholds; `dockline export` writes them)");
         }
-        out.println("  Energy: " + s.describe());
-        reserveCertificateLine(p, out);
-        suggestions(p, out);
-        for (String note : p.notes()) {
-            out.println("  Note: " + note);
-        }
-        out.println(Caveats.block());
+        reserveTail(p, s, out);
     }
 
     private static void productText(Plan p, ReserveAnalysis a, PrintWriter out) {
@@ -121,6 +115,11 @@ final class CheckReport {
                     + a.productEdges() + " moves scanned until the start was decided; solved in " + a.solveMillis()
                     + " ms (" + p.timings().totalMillis() + " ms in all)");
         }
+        reserveTail(p, s, out);
+    }
+
+    /** The lines every reserve route ends with: the rounding, the certificate, suggestions, notes, cautions. */
+    private static void reserveTail(Plan p, EnergyScale s, PrintWriter out) {
         out.println("  Energy: " + s.describe());
         reserveCertificateLine(p, out);
         suggestions(p, out);
