@@ -1,13 +1,13 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Cell;
 import dockline.model.Mission;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
-import java.util.function.BooleanSupplier;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
@@ -42,19 +42,6 @@ class DemoMissionWindowTest {
     @AfterEach
     void stop() throws Exception {
         WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
     }
 
     private boolean solvedWithReserve(int units) {

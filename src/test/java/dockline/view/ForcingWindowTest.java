@@ -1,5 +1,7 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.ActionKind;
@@ -7,9 +9,7 @@ import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
 import java.util.List;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
-import java.util.function.BooleanSupplier;
 import javafx.geometry.Point2D;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
@@ -47,19 +47,6 @@ class ForcingWindowTest {
     @AfterEach
     void stop() throws Exception {
         WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
     }
 
     private boolean solved() {

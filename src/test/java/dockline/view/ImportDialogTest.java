@@ -1,12 +1,12 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.io.MapLoader;
 import dockline.model.BuildingMap;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.Scene;
 import javafx.scene.layout.StackPane;
@@ -33,14 +33,6 @@ class ImportDialogTest {
     void start(Stage stage) {
         stage.setScene(new Scene(new StackPane(), 200, 100));
         stage.show();
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
     }
 
     @Test

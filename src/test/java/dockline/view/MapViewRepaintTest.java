@@ -1,12 +1,12 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.io.MissionLoader;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.Scene;
 import javafx.scene.layout.StackPane;
@@ -38,14 +38,6 @@ class MapViewRepaintTest {
         view = new MapView();
         stage.setScene(new Scene(new StackPane(view), 900, 640));
         stage.show();
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
     }
 
     private static void fxRun(Runnable r) {

@@ -1,10 +1,10 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Cell;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
@@ -41,14 +41,6 @@ class PolicyWordsWindowTest {
     @AfterEach
     void stop() throws Exception {
         WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
     }
 
     @Test

@@ -1,10 +1,10 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Mission;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
@@ -70,14 +70,6 @@ class RealCancelWindowTest {
     void stop() throws Exception {
         analyzer.gate.countDown();
         WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(60, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
     }
 
     private static void waitUntil(BooleanSupplier c) throws Exception {
