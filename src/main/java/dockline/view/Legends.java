@@ -19,7 +19,7 @@ import javafx.scene.layout.VBox;
 /**
  * Keys for the map: surfaces (swatch with pattern and the map's own legend characters), symbols, the heat scale in Wh and
  * % of capacity with the impossible swatch, and the policy glyphs. Swatches are drawn by the same
- * {@link MapPainter} code as the map, so the key always matches the picture.
+ * {@link CellGlyphs} code as the map, so the key always matches the picture.
  */
 final class Legends {
 
@@ -61,18 +61,18 @@ final class Legends {
     static VBox mapKey(BuildingMap map) {
         VBox box = new VBox(3);
         for (Palette.SurfaceStyle st : Palette.surfaces(map)) {
-            box.getChildren().add(row(swatch(g -> MapPainter.paintSurface(g, st, 0, 0, SW)), st.surface() + own(st.symbols())));
+            box.getChildren().add(row(swatch(g -> CellGlyphs.paintSurface(g, st, 0, 0, SW)), st.surface() + own(st.symbols())));
         }
-        box.getChildren().add(row(swatch(g -> MapPainter.paintWall(g, 0, 0, SW)),
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintWall(g, 0, 0, SW)),
                 "wall" + own(Palette.symbols(map, dockline.model.Terrain::wall))));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintDock(g, 0, 0, SW)),
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintDock(g, 0, 0, SW)),
                 "dock" + own(Palette.symbols(map, dockline.model.Terrain::dock))));
         box.getChildren().add(row(swatch(g -> {
             g.setFill(Palette.DOOR);
             g.fillRect(0, SW * 0.41, SW, SW * 0.18);
         }), "door" + own(Palette.symbols(map, t -> t.door() && !t.dock()))));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintStart(g, 0, 0, SW)), "start"));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintRobot(g, 0, 0, SW)), "robot"));
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintStart(g, 0, 0, SW)), "start"));
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintRobot(g, 0, 0, SW)), "robot"));
         box.getChildren().add(row(swatch(g -> {
             g.setFill(Palette.EVENT);
             double c = SW / 2;
@@ -116,7 +116,7 @@ final class Legends {
             ticks.getChildren().add(l);
         }
         box.getChildren().add(ticks);
-        box.getChildren().add(row(swatch(g2 -> MapPainter.paintHeatCell(g2, ViewData.IMPOSSIBLE, lo, hi, 0, 0, SW)),
+        box.getChildren().add(row(swatch(g2 -> CellGlyphs.paintHeatCell(g2, ViewData.IMPOSSIBLE, lo, hi, 0, 0, SW)),
                 "impossible: no charge is enough"));
         return box;
     }
@@ -125,12 +125,12 @@ final class Legends {
     static VBox policyKey() {
         VBox box = new VBox(3);
         Cell c = new Cell(0, 0);
-        box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW)), "move"));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.WAIT, c), 0, 0, 0, 0, SW)), "wait"));
-        box.getChildren().add(row(swatch(g -> MapPainter.paintAction(g, new Action(ActionKind.CHARGE, c), 0, 0, 0, 0, SW)), "charge"));
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW)), "move"));
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintAction(g, new Action(ActionKind.WAIT, c), 0, 0, 0, 0, SW)), "wait"));
+        box.getChildren().add(row(swatch(g -> CellGlyphs.paintAction(g, new Action(ActionKind.CHARGE, c), 0, 0, 0, 0, SW)), "charge"));
         box.getChildren().add(row(swatch(g -> {
-            MapPainter.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW);
-            MapPainter.paintVaries(g, 0, 0, SW);
+            CellGlyphs.paintAction(g, new Action(ActionKind.MOVE, new Cell(1, 0)), 0, 0, 0, 0, SW);
+            CellGlyphs.paintVaries(g, 0, 0, SW);
         }), "the move depends on the battery level (the most frequent is drawn)"));
         Label none = new Label("no glyph: the policy never gets there in that situation (or only with more"
                 + " charge than shown). At a level between two of the policy's rows the move of the row below is drawn:"
