@@ -160,7 +160,7 @@ public final class Html {
             case GUARANTEED -> "guaranteed";
             case NOT_GUARANTEED -> "NOT guaranteed";
             case BAD_INPUT -> "not checked: bad input";
-            case RESOURCE_LIMIT -> "not checked: over a resource limit";
+            case OVER_RESOURCE_LIMIT -> "not checked: over a resource limit";
             case INTERNAL_ERROR -> "not checked: internal error";
         };
     }

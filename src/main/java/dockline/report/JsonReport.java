@@ -61,13 +61,8 @@ public final class JsonReport {
         for (LocatedError e : r.errors()) {
             ObjectNode n = errs.addObject();
             n.put("file", e.file());
-            if (e.line() == null) {
-                n.putNull("line");
-                n.putNull("column");
-            } else {
-                n.put("line", e.line());
-                n.put("column", e.column());
-            }
+            n.put("line", e.line()); // null when the error is not located in a file (Jackson writes null)
+            n.put("column", e.column());
             n.put("message", e.message());
             n.put("hint", e.hint());
         }
@@ -103,11 +98,8 @@ public final class JsonReport {
                 ObjectNode run = o.putObject("run");
                 run.put("title", r.run().title());
                 run.put("ending", r.run().ending());
-                if (r.run().loopStart() >= 0) {
-                    run.put("loopStartStep", r.run().loopStart());
-                } else {
-                    run.putNull("loopStartStep");
-                }
+                optional(run, "loopStartStep", r.run().loopStart() >= 0 ? OptionalInt.of(r.run().loopStart())
+                        : OptionalInt.empty());
                 ArrayNode lv = run.putArray("levelUnits");
                 r.run().levelsUnits().forEach(lv::add);
             } else {

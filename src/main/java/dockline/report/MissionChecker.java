@@ -101,10 +101,10 @@ public final class MissionChecker {
             return m.beyondOneTrip() ? rounds(file, m, inputs, kind, words, memoryBudgetBytes, pictures)
                     : oneTrip(file, m, inputs, words, memoryBudgetBytes, pictures);
         } catch (ResourceLimitException e) {
-            return failed(file, MissionResult.Status.RESOURCE_LIMIT, List.of(LocatedError.plain(file + ": "
+            return failed(file, MissionResult.Status.OVER_RESOURCE_LIMIT, List.of(LocatedError.plain(file + ": "
                     + e.getMessage(), e.advice())), inputs, m.name(), kind, words);
         } catch (OutOfMemoryError e) {
-            return failed(file, MissionResult.Status.RESOURCE_LIMIT, List.of(LocatedError.plain(file
+            return failed(file, MissionResult.Status.OVER_RESOURCE_LIMIT, List.of(LocatedError.plain(file
                     + ": the memory ran out (" + ResourceLimitException.maxHeapMb() + " MB of heap)",
                     "give the JVM more heap (-Xmx) or report fewer missions at once")), inputs, m.name(), kind, words);
         } catch (RuntimeException e) {

@@ -1,6 +1,7 @@
 package dockline.report;
 
 import dockline.model.EnergyScale;
+import dockline.model.Worded;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.OptionalInt;
@@ -42,27 +43,16 @@ public record MissionResult(Path file, Status status, List<LocatedError> errors,
     }
 
     /** How the check of one mission ended, with the command line's exit code. */
-    public enum Status {
-        GUARANTEED(0, "guaranteed"),
-        NOT_GUARANTEED(1, "not-guaranteed"),
-        BAD_INPUT(2, "bad-input"),
-        RESOURCE_LIMIT(3, "over-resource-limit"),
-        INTERNAL_ERROR(4, "internal-error");
+    public enum Status implements Worded {
+        GUARANTEED,
+        NOT_GUARANTEED,
+        BAD_INPUT,
+        OVER_RESOURCE_LIMIT,
+        INTERNAL_ERROR;
 
-        private final int exitCode;
-        private final String word;
-
-        Status(int exitCode, String word) {
-            this.exitCode = exitCode;
-            this.word = word;
-        }
-
+        /** The command line's exit code (0 to 4, README): the constants stand in that order. */
         public int exitCode() {
-            return exitCode;
-        }
-
-        public String word() {
-            return word;
+            return ordinal();
         }
     }
 

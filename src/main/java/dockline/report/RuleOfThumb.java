@@ -1,5 +1,6 @@
 package dockline.report;
 
+import dockline.model.Worded;
 import java.util.OptionalInt;
 
 /**
@@ -25,25 +26,14 @@ public record RuleOfThumb(int marginPercent, int marginUnits, OptionalInt nomina
     /** The margins the report shows (common practice: 20 % and 30 % of the capacity). */
     public static final int[] MARGINS = {20, 30};
 
-    /** How the rule compares with the verdict. */
-    public enum Flag {
+    /** How the rule compares with the verdict; its {@link Worded#word} is the JSON output's. */
+    public enum Flag implements Worded {
         /** The rule and the verdict agree. */
-        AGREES("agrees"),
+        AGREES,
         /** The rule calls safe a mission that is not guaranteed: the dangerous disagreement. */
-        CALLS_UNSAFE_SAFE("calls-unsafe-safe"),
+        CALLS_UNSAFE_SAFE,
         /** The rule turns down a mission that is guaranteed: the costly disagreement. */
-        REFUSES_GUARANTEED("refuses-guaranteed");
-
-        private final String word;
-
-        Flag(String word) {
-            this.word = word;
-        }
-
-        /** The word of the JSON output. */
-        public String word() {
-            return word;
-        }
+        REFUSES_GUARANTEED
     }
 
     /**

@@ -5,7 +5,6 @@ import java.util.List;
 import javafx.geometry.Insets;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.Tooltip;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 
@@ -25,19 +24,13 @@ final class HeaderPanel {
     HeaderPanel() {
         verdict.setId("verdict");
         verdict.setMaxWidth(Double.MAX_VALUE);
-        verdict.setWrapText(true);
         VerdictStyles.apply(verdict, VerdictSummary.Outcome.NOT_CHECKED);
         certificate.setId("certificate");
         certificate.getStyleClass().add("certificate");
-        certificate.setWrapText(true);
         figures.setId("figures");
         figures.getStyleClass().add("certificate");
-        figures.setWrapText(true);
         for (Label l : List.of(verdict, certificate, figures)) {
-            l.setTooltip(new Tooltip());
-            l.getTooltip().textProperty().bind(l.textProperty());
-            l.getTooltip().setWrapText(true);
-            l.getTooltip().setMaxWidth(600);
+            LongText.wrap(l, 600);
         }
         notice.setId("notice");
         notice.setVisible(false);

@@ -13,46 +13,36 @@ import java.util.Objects;
  * values, the replay and its current step, and the hovered cell. Built on the FX thread from a
  * {@link ViewData} and the user's choices; drawn by {@link MapPainter}, in the window and in
  * {@code render} alike, so the two pictures cannot drift apart.
+ *
+ * <p>The per-cell arrays belong to the snapshot (the factories copy or build them) and are never changed;
+ * read them by cell through {@link #heat(int)}, {@link #policy(int)} and {@link #policyVaries(int)}.
+ *
+ * @param map           the plan
+ * @param start         the start cell, or {@code null} (a map alone)
+ * @param overlay       what is drawn over the plan
+ * @param heat          charge needed per cell ({@link ViewData#chargeNeeded}), or {@code null} without a heat layer
+ * @param capacityUnits the battery capacity (0 for a map alone)
+ * @param heatLow       bottom of the heat colour scale, in units: the reserve floor
+ * @param heatHigh      top of the heat colour scale, in units: the largest finite value shown (above {@code heatLow})
+ * @param policy        the policy's move per cell, or {@code null} without a policy layer
+ * @param policyVaries  per cell, whether that move depends on the battery level (all-levels mode), or {@code null}
+ * @param replay        the run shown, or {@code null}
+ * @param step          its current step
+ * @param hover         the cell under the pointer, or {@code null}
+ * @param situation     what the policy layer was read for, or {@code null}
  */
-final class MapLayers {
-
-    private final BuildingMap map;
-    private final Cell start;
-    private final Overlay overlay;
-    private final int[] heat;
-    private final int capacityUnits;
-    private final int heatLow;
-    private final int heatHigh;
-    private final Action[] policy;
-    private final boolean[] policyVaries;
-    private final ViewReplay replay;
-    private final int step;
-    private final Cell hover;
-    private final Situation situation;
+record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow, int heatHigh,
+                 Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover, Situation situation) {
 
     /**
      * What the policy layer was read for, to say a cell's rule in words: the mission (for Wh), the
      * rules, disturbances left, tasks done and closures.
      */
-    private record Situation(Mission mission, PolicyRules rules, int budgetLeft, int progress, String closures) {
+    record Situation(Mission mission, PolicyRules rules, int budgetLeft, int progress, String closures) {
     }
 
-    private MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow,
-                      int heatHigh, Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover,
-                      Situation situation) {
-        this.map = Objects.requireNonNull(map, "map");
-        this.start = start;
-        this.overlay = overlay;
-        this.heat = heat;
-        this.capacityUnits = capacityUnits;
-        this.heatLow = heatLow;
-        this.heatHigh = heatHigh;
-        this.policy = policy;
-        this.policyVaries = policyVaries;
-        this.replay = replay;
-        this.step = step;
-        this.hover = hover;
-        this.situation = situation;
+    MapLayers {
+        Objects.requireNonNull(map, "map");
     }
 
     /** The plan alone (a map opened without a mission). */
@@ -175,32 +165,6 @@ final class MapLayers {
                         hover, situation);
     }
 
-    BuildingMap map() {
-        return map;
-    }
-
-    Cell start() {
-        return start;
-    }
-
-    Overlay overlay() {
-        return overlay;
-    }
-
-    int capacityUnits() {
-        return capacityUnits;
-    }
-
-    /** Bottom of the heat colour scale, in units: the reserve floor. */
-    int heatLow() {
-        return heatLow;
-    }
-
-    /** Top of the heat colour scale, in units: the largest finite value shown (above {@link #heatLow}). */
-    int heatHigh() {
-        return heatHigh;
-    }
-
     /**
      * Whether the static picture (surfaces, walls, heat map, symbols, zones, words) of the two is the
      * same: the same map object, start, heat layer and heat scale. O(cells) at worst (the heat values).
@@ -228,18 +192,6 @@ final class MapLayers {
     /** Whether the policy's action on the cell depends on the battery level (all-levels mode only). */
     boolean policyVaries(int cellIndex) {
         return policyVaries != null && policyVaries[cellIndex];
-    }
-
-    ViewReplay replay() {
-        return replay;
-    }
-
-    int step() {
-        return step;
-    }
-
-    Cell hover() {
-        return hover;
     }
 
     /** Where the robot is at the current step of the replay; {@code null} without a replay. */

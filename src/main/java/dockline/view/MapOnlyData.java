@@ -1,9 +1,7 @@
 package dockline.view;
 
-import dockline.arena.Action;
 import dockline.model.Mission;
 import java.util.List;
-import java.util.Optional;
 
 /** View data for a mission that has not been solved: the map is shown, nothing else. */
 public record MapOnlyData(Mission mission, VerdictSummary verdict) implements ViewData {
@@ -15,16 +13,6 @@ public record MapOnlyData(Mission mission, VerdictSummary verdict) implements Vi
     @Override
     public boolean solved() {
         return false;
-    }
-
-    @Override
-    public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
-        return UNKNOWN;
-    }
-
-    @Override
-    public Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
-        return Optional.empty();
     }
 
     @Override

@@ -173,10 +173,6 @@ final class MapView extends Region {
         return ox;
     }
 
-    double originY() {
-        return oy;
-    }
-
     boolean wasDragged() {
         return dragged;
     }

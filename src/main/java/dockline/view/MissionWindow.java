@@ -579,14 +579,6 @@ public final class MissionWindow {
         return player;
     }
 
-    Label verdictLabel() {
-        return header.verdictLabel();
-    }
-
-    Path file() {
-        return file;
-    }
-
     List<Path> recentFiles() {
         return recent.files();
     }

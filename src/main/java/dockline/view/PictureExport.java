@@ -55,15 +55,7 @@ final class PictureExport {
 
     /** Asks where to write the picture (a save dialog), starting in {@code folder} with a name made of {@code name}. */
     static java.util.Optional<Path> choose(javafx.stage.Window owner, Path folder, String name) {
-        javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
-        fc.setTitle("Export the picture as PNG");
-        fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("PNG pictures", "*.png"));
-        if (folder != null) {
-            fc.setInitialDirectory(folder.toFile());
-        }
-        fc.setInitialFileName(name.replaceAll("[^A-Za-z0-9._-]+", "-") + ".png");
-        java.io.File f = fc.showSaveDialog(owner);
-        return f == null ? java.util.Optional.empty() : java.util.Optional.of(f.toPath());
+        return SaveDialogs.ask(owner, "Export the picture as PNG", "PNG pictures", ".png", folder, name);
     }
 
     /**

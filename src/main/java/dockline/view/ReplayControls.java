@@ -93,23 +93,15 @@ final class ReplayControls {
         HBox.setHgrow(replayChoice, Priority.ALWAYS);
 
         stepLabel.setId("step-label");
-        stepLabel.setWrapText(true);
         stepLabel.setMaxWidth(Double.MAX_VALUE);
         stepLabel.setMinHeight(Region.USE_PREF_SIZE);
-        stepLabel.setTooltip(new Tooltip());
-        stepLabel.getTooltip().textProperty().bind(stepLabel.textProperty());
-        stepLabel.getTooltip().setWrapText(true);
-        stepLabel.getTooltip().setMaxWidth(520);
+        LongText.wrap(stepLabel, 520);
 
         replayNotes.setId("replay-notes");
-        replayNotes.setWrapText(true);
         replayNotes.getStyleClass().add("certificate");
         replayNotes.setMaxWidth(Double.MAX_VALUE);
         replayNotes.setMinHeight(Region.USE_PREF_SIZE);
-        replayNotes.setTooltip(new Tooltip());
-        replayNotes.getTooltip().textProperty().bind(replayNotes.textProperty());
-        replayNotes.getTooltip().setWrapText(true);
-        replayNotes.getTooltip().setMaxWidth(520);
+        LongText.wrap(replayNotes, 520);
         ScrollPane notes = new ScrollPane(replayNotes);
         notes.setId("replay-notes-scroll");
         notes.setFitToWidth(true);

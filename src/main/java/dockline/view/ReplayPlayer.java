@@ -43,10 +43,6 @@ final class ReplayPlayer {
         return step.get();
     }
 
-    IntegerProperty lastProperty() {
-        return last;
-    }
-
     DoubleProperty speedProperty() {
         return speed;
     }

@@ -24,15 +24,8 @@ final class ReportExport {
 
     /** Asks where to write the report (a save dialog), starting in {@code folder}, named after {@code name}. */
     static Optional<Path> choose(javafx.stage.Window owner, Path folder, String name) {
-        javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
-        fc.setTitle("Export the sign-off report as HTML");
-        fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("HTML reports", "*.html"));
-        if (folder != null) {
-            fc.setInitialDirectory(folder.toFile());
-        }
-        fc.setInitialFileName(name.replaceAll("[^A-Za-z0-9._-]+", "-") + "-report.html");
-        java.io.File f = fc.showSaveDialog(owner);
-        return f == null ? Optional.empty() : Optional.of(f.toPath());
+        return SaveDialogs.ask(owner, "Export the sign-off report as HTML", "HTML reports", ".html", folder,
+                name + "-report");
     }
 
     /**

@@ -7,7 +7,6 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.util.List;
-import java.util.Optional;
 import java.util.OptionalInt;
 import javax.imageio.ImageIO;
 
@@ -52,17 +51,6 @@ public final class ReportPictures implements dockline.report.Pictures {
         @Override
         public boolean solved() {
             return false;
-        }
-
-        @Override
-        public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
-            return UNKNOWN;
-        }
-
-        @Override
-        public Optional<dockline.arena.Action> policyAction(int cellIndex, int levelUnits, int budgetLeft,
-                                                           int progressMask) {
-            return Optional.empty();
         }
     }
 }

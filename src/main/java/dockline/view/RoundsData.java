@@ -24,18 +24,11 @@ import java.util.function.BooleanSupplier;
  * <p>Cancelling: the rounds solvers do not poll a flag, so a cancel takes effect between the solve and
  * the replay, and the result is then thrown away.
  */
-final class RoundsData implements ViewData {
+record RoundsData(Mission mission, VerdictSummary verdict, List<ViewReplay> replays, Optional<Policy> policy)
+        implements ViewData {
 
-    private final Mission mission;
-    private final VerdictSummary verdict;
-    private final List<ViewReplay> replays;
-    private final Optional<Policy> policy;
-
-    private RoundsData(Mission mission, VerdictSummary verdict, List<ViewReplay> replays, Optional<Policy> policy) {
-        this.mission = mission;
-        this.verdict = verdict;
-        this.replays = List.copyOf(replays);
-        this.policy = policy;
+    RoundsData {
+        replays = List.copyOf(replays);
     }
 
     static RoundsData analyze(Mission m, BooleanSupplier cancelled, Analyzer.Progress progress) {
@@ -142,23 +135,8 @@ final class RoundsData implements ViewData {
     }
 
     @Override
-    public Mission mission() {
-        return mission;
-    }
-
-    @Override
-    public VerdictSummary verdict() {
-        return verdict;
-    }
-
-    @Override
     public boolean solved() {
         return true;
-    }
-
-    @Override
-    public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
-        return UNKNOWN;
     }
 
     @Override
@@ -167,10 +145,5 @@ final class RoundsData implements ViewData {
             return Optional.empty();
         }
         return policy.get().lookup(Cell.ofIndex(cellIndex, mission.map().width()), levelUnits, budgetLeft, progressMask);
-    }
-
-    @Override
-    public List<ViewReplay> replays() {
-        return replays;
     }
 }

@@ -1,5 +1,6 @@
 package dockline.view;
 
+import dockline.model.Worded;
 import java.util.Objects;
 import java.util.OptionalInt;
 
@@ -17,21 +18,16 @@ import java.util.OptionalInt;
 public record VerdictSummary(Outcome outcome, String words, String certificate, OptionalInt worstCaseMinimumUnits,
                       OptionalInt highestReserveUnits) {
 
-    /** The three states a verdict can be in. */
-    public enum Outcome {
-        GUARANTEED("Guaranteed"),
-        NOT_GUARANTEED("Not guaranteed"),
-        NOT_CHECKED("Not checked");
+    /** The three states a verdict can be in; the first two have the words of the core's verdict. */
+    public enum Outcome implements Worded {
+        GUARANTEED,
+        NOT_GUARANTEED,
+        NOT_CHECKED;
 
-        private final String title;
-
-        Outcome(String title) {
-            this.title = title;
-        }
-
-        /** A short heading for the verdict label. */
+        /** A short heading for the verdict label: the word as a capitalised phrase, e.g. {@code Not guaranteed}. */
         public String title() {
-            return title;
+            String w = word().replace('-', ' ');
+            return Character.toUpperCase(w.charAt(0)) + w.substring(1);
         }
     }
 

@@ -123,35 +123,35 @@ public final class ViewBench {
             }
             int len = layers.replay().length();
             long tilesBefore = view.staticRepaints();
-            double[] step = new double[stepRuns + 1];
-            for (int i = 0; i <= stepRuns; i++) {
-                int s = 1 + i % Math.max(1, len);
-                t = System.nanoTime();
-                view.layersProperty().set(view.layers().withStep(s));
-                view.snapshot(sp, frame);
-                step[i] = (System.nanoTime() - t) / 1e6;
-            }
+            double st = bestStep(view, sp, frame, stepRuns, len);
             long tiles = view.staticRepaints() - tilesBefore;
             // the policy layer: a glyph on every free cell, redrawn with each step
             MapLayers policy = withPolicy(map, layers);
             view.layersProperty().set(policy);
             view.snapshot(sp, frame);
-            double[] pstep = new double[stepRuns + 1];
-            for (int i = 0; i <= stepRuns; i++) {
-                int s = 1 + i % Math.max(1, len);
-                t = System.nanoTime();
-                view.layersProperty().set(view.layers().withStep(s));
-                view.snapshot(sp, frame);
-                pstep[i] = (System.nanoTime() - t) / 1e6;
-            }
+            double ps = bestStep(view, sp, frame, stepRuns, len);
             double f = best(Arrays.copyOfRange(full, 1, full.length)); // the first run is the warm-up
-            double st = best(Arrays.copyOfRange(step, 1, step.length));
-            double ps = best(Arrays.copyOfRange(pstep, 1, pstep.length));
             return new Row(in.name(), map.width(), map.height(), view.cellPx(), len, open, f, st, f == 0 ? 0 : st / f, tiles,
                     ps);
         } finally {
             stage.close();
         }
+    }
+
+    /**
+     * The best time of {@code runs} replay steps (after one warm-up step) on the layers shown, going round the
+     * replay's {@code len} steps: a step and its snapshot, in ms.
+     */
+    private static double bestStep(MapView view, SnapshotParameters sp, WritableImage frame, int runs, int len) {
+        double[] ms = new double[runs + 1];
+        for (int i = 0; i <= runs; i++) {
+            int s = 1 + i % Math.max(1, len);
+            long t = System.nanoTime();
+            view.layersProperty().set(view.layers().withStep(s));
+            view.snapshot(sp, frame);
+            ms[i] = (System.nanoTime() - t) / 1e6;
+        }
+        return best(Arrays.copyOfRange(ms, 1, ms.length)); // the first run is the warm-up
     }
 
     /** The best (lowest) time: on a shared machine the others are the same work plus someone else's. */

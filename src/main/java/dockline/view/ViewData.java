@@ -31,12 +31,16 @@ public interface ViewData {
     /**
      * The least battery level, in units, with which the robot standing on the cell can still be
      * sure to finish, given the disturbances left and the tasks already done; or {@link #IMPOSSIBLE}
-     * or {@link #UNKNOWN}.
+     * or {@link #UNKNOWN}. {@link #UNKNOWN} everywhere for data without a charge-needed map.
      */
-    int chargeNeeded(int cellIndex, int budgetLeft, int progressMask);
+    default int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
+        return UNKNOWN;
+    }
 
-    /** The policy's action in that situation, if the policy has one. */
-    Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask);
+    /** The policy's action in that situation, if the policy has one; none for data without a policy. */
+    default Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
+        return Optional.empty();
+    }
 
     /**
      * The distinct actions the policy takes on the cell, at any battery level, with the given
