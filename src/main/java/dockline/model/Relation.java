@@ -13,16 +13,8 @@ public enum Relation {
         this.symbol = symbol;
     }
 
+    /** How files and reports write it: {@code >=} or {@code >}. */
     public String symbol() {
         return symbol;
-    }
-
-    public static Relation ofSymbol(String s) {
-        for (Relation r : values()) {
-            if (r.symbol.equals(s)) {
-                return r;
-            }
-        }
-        return null;
     }
 }

@@ -48,9 +48,5 @@ public final class ReportPictures implements dockline.report.Pictures {
 
     /** A mission with one run to draw and nothing else (no heat map, no policy). */
     private record RunOnly(Mission mission, VerdictSummary verdict, List<ViewReplay> replays) implements ViewData {
-        @Override
-        public boolean solved() {
-            return false;
-        }
     }
 }

@@ -25,8 +25,10 @@ public interface ViewData {
     /** The verdict in words, with the certificate status. */
     VerdictSummary verdict();
 
-    /** Whether there is a solution behind this data (heat map, policy, replays). */
-    boolean solved();
+    /** Whether there is a solution behind this data (heat map, policy, replays); not for a map or a run alone. */
+    default boolean solved() {
+        return false;
+    }
 
     /**
      * The least battery level, in units, with which the robot standing on the cell can still be
@@ -59,8 +61,10 @@ public interface ViewData {
         return PolicyRules.NONE;
     }
 
-    /** The runs to play: the worst case (if guaranteed), the counterexample (if not). */
-    List<ViewReplay> replays();
+    /** The runs to play: the worst case (if guaranteed), the counterexample (if not); none for a map alone. */
+    default List<ViewReplay> replays() {
+        return List.of();
+    }
 
     /**
      * Plays a scenario with the given disturbances forced, if this data can do that.
