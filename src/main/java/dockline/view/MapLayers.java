@@ -15,7 +15,9 @@ import java.util.Objects;
  * {@code render} alike, so the two pictures cannot drift apart.
  *
  * <p>The per-cell arrays belong to the snapshot (the factories copy or build them) and are never changed;
- * read them by cell through {@link #heat(int)}, {@link #policy(int)} and {@link #policyVaries(int)}.
+ * read them by cell through {@link #heat(int)}, {@link #policy(int)} and {@link #policyVaries(int)}. Two
+ * snapshots are equal when their components are (the arrays by identity), and then draw the same picture, so
+ * the map view does not redraw when an equal one is set.
  *
  * @param map           the plan
  * @param start         the start cell, or {@code null} (a map alone)
