@@ -5,30 +5,29 @@ import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
-import dockline.policy.Policy;
+import dockline.io.PolicyFiles.Document;
 import dockline.policy.PolicyEntry;
 import java.io.IOException;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import static dockline.io.PolicyFields.knownVersion;
+import static dockline.io.PolicyFields.row;
 import static dockline.io.PolicyFiles.*;
 
 /** JSON through Jackson's streaming parser, so every value keeps its line and column. */
-final class PolicyJsonReading {
-    private final Problems p;
-    private final byte[] bytes;
+final class PolicyJsonReading extends PolicyReading {
 
     PolicyJsonReading(Problems p, byte[] bytes) {
-        this.p = p;
-        this.bytes = bytes;
+        super(p, bytes);
     }
 
     private static Pos pos(JsonLocation l) {
         return new Pos(l.getLineNr(), l.getColumnNr());
     }
 
+    @Override
     Document read() {
         JsonFactory f = new JsonFactory();
         try (JsonParser j = f.createParser(bytes)) {
@@ -36,10 +35,6 @@ final class PolicyJsonReading {
                 p.add(pos(j.currentTokenLocation()), "a policy file in JSON is one object", "see missions/POLICY-FORMAT.md");
                 return null;
             }
-            Map<String, String> values = new LinkedHashMap<>();
-            Map<String, Pos> at = new LinkedHashMap<>();
-            List<String> tasks = new ArrayList<>();
-            Rows rows = new Rows(p);
             boolean sawRows = false;
             boolean sawThresholds = false;
             Pos top = pos(j.currentTokenLocation());
@@ -48,9 +43,7 @@ final class PolicyJsonReading {
                 Pos kp = pos(j.currentTokenLocation());
                 JsonToken t = j.nextToken();
                 Pos vp = pos(j.currentTokenLocation());
-                if (!TOP_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, TOP_KEYS);
-                    p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
+                if (!known(key, TOP_KEYS, kp, false)) {
                     j.skipChildren();
                     continue;
                 }
@@ -70,26 +63,17 @@ final class PolicyJsonReading {
                             }
                         }
                     }
-                    case "thresholds" -> {
-                        sawThresholds = true;
+                    case "thresholds", "rows" -> {
+                        boolean thresholds = key.equals("thresholds");
+                        sawThresholds |= thresholds;
+                        sawRows |= !thresholds;
                         if (t != JsonToken.START_ARRAY) {
-                            p.addPolicy(vp, "'thresholds' must be a list of thresholds");
+                            p.addPolicy(vp, "'" + key + "' must be a list of " + key);
                             j.skipChildren();
                             continue;
                         }
                         while (j.nextToken() != JsonToken.END_ARRAY) {
-                            readRow(j, rows, JSON_STEP_KEYS);
-                        }
-                    }
-                    case "rows" -> {
-                        sawRows = true;
-                        if (t != JsonToken.START_ARRAY) {
-                            p.addPolicy(vp, "'rows' must be a list of rows");
-                            j.skipChildren();
-                            continue;
-                        }
-                        while (j.nextToken() != JsonToken.END_ARRAY) {
-                            readRow(j, rows, JSON_ROW_KEYS);
+                            readRow(j, thresholds ? JSON_STEP_KEYS : JSON_ROW_KEYS);
                         }
                     }
                     default -> {
@@ -120,16 +104,7 @@ final class PolicyJsonReading {
                     && !values.get("version").trim().equals(String.valueOf(VERSION_THRESHOLDS))) {
                 p.addPolicy(at.get("version"), "'thresholds' need format version " + VERSION_THRESHOLDS);
             }
-            Header h = header(p, top, values, at, tasks);
-            if (h == null) {
-                return null;
-            }
-            if (sawThresholds) {
-                dockline.policy.ThresholdPolicy tp = rows.thresholds(h, top);
-                return tp == null || p.any() ? null : new Document(h, new Policy(List.of()), tp);
-            }
-            Policy policy = rows.policy(h);
-            return policy == null || p.any() ? null : new Document(h, policy);
+            return document(top, sawThresholds);
         } catch (JsonParseException e) {
             p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
             return null;
@@ -139,7 +114,7 @@ final class PolicyJsonReading {
         }
     }
 
-    private void readRow(JsonParser j, Rows rows, List<String> keys) throws IOException {
+    private void readRow(JsonParser j, List<String> keys) throws IOException {
         Pos rp = pos(j.currentTokenLocation());
         if (j.currentToken() != JsonToken.START_OBJECT) {
             p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
@@ -154,10 +129,7 @@ final class PolicyJsonReading {
             Pos kp = pos(j.currentTokenLocation());
             JsonToken t = j.nextToken();
             Pos vp = pos(j.currentTokenLocation());
-            if (!keys.contains(key)) {
-                String near = Spelling.closest(key, keys);
-                p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
-                        : "missions/POLICY-FORMAT.md lists the keys of a row");
+            if (!known(key, keys, kp, true)) {
                 j.skipChildren();
                 bad = true;
                 continue;
