@@ -16,7 +16,7 @@ import java.util.Map;
  * Checks one parsed map document and builds the {@link BuildingMap}. Goes on after each problem
  * so that one run reports all of them; the map is built only when there was none.
  */
-final class MapReading extends DocumentReading {
+final class MapReading extends DocumentReading<BuildingMap> {
 
     static final String[] KEYS = {"name", "cell-size", "legend", "plan", "zones", "doors", "disturbances"};
     static final String ALL_DOORS = "all-doors";
@@ -28,17 +28,12 @@ final class MapReading extends DocumentReading {
     private final Map<Cell, String> doorNames = new HashMap<>();
 
     MapReading(YamlReader.Document doc, Problems problems) {
-        super(doc, problems);
+        super(doc, problems, "a map file");
     }
 
-    BuildingMap read() {
-        int before = problems.raised();
-        Node.MapNode root = root("a map file");
-        if (root == null) {
-            return null;
-        }
-        in.onlyKeys(root, "a map file", KEYS);
-        String name = root.get("name") == null ? stem(doc.file()) : in.string(root.get("name"), "name");
+    @Override
+    BuildingMap read(Node.MapNode root) {
+        String name = name(root, KEYS);
 
         BigDecimal cellSize = null;
         Node cs = in.require(root, "cell-size", "the map");
@@ -68,7 +63,7 @@ final class MapReading extends DocumentReading {
         if (root.get("disturbances") != null) {
             dm = new DisturbanceReading(in, grid, zones, doorCells, doorNames).read(in.map(root.get("disturbances"), "disturbances"));
         }
-        if (problems.raised() > before || name == null || cellSize == null || legend == null || grid == null || dm == null) {
+        if (!clean() || name == null || cellSize == null || legend == null || grid == null || dm == null) {
             return null;
         }
         try {

@@ -28,7 +28,7 @@ import java.util.Set;
  * after each problem so that one run reports all of them; checks that need the map are skipped
  * when the map has problems of its own (those are reported with the map's file name).
  */
-final class MissionReading extends DocumentReading {
+final class MissionReading extends DocumentReading<Mission> {
 
     static final String[] KEYS = {"name", "map", "robot", "start", "reserve", "tasks", "objective", "deadline"};
     /** Largest discount factor accepted (the comparator's numbers grow with it). */
@@ -42,23 +42,18 @@ final class MissionReading extends DocumentReading {
     private boolean mapBroken;
 
     MissionReading(YamlReader.Document doc, Problems problems) {
-        super(doc, problems);
+        super(doc, problems, "a mission file");
     }
 
-    Mission read() {
-        int before = problems.raised();
-        Node.MapNode root = root("a mission file");
-        if (root == null) {
-            return null;
-        }
+    @Override
+    Mission read(Node.MapNode root) {
         if (root.get("map") == null && root.get("robot") == null && (root.get("plan") != null || root.get("legend") != null)) {
             // a map where a mission belongs: one clear line instead of a screenful of unknown and missing keys
             problems.add(root.pos(), "this is a map file, not a mission",
                     "give a mission file whose 'map:' names this map; 'dockline validate' checks a map on its own");
             return null;
         }
-        in.onlyKeys(root, "a mission file", KEYS);
-        String name = root.get("name") == null ? stem(doc.file()) : in.string(root.get("name"), "name");
+        String name = name(root, KEYS);
         Node mapNode = in.require(root, "map", "the mission");
         if (mapNode != null) {
             loadMap(mapNode);
@@ -123,7 +118,7 @@ final class MissionReading extends DocumentReading {
             problems.add(at, "the mission must finish on a dock, but the map has no dock",
                     "mark a dock in the map's legend, e.g. C: {surface: tile, dock: true}");
         }
-        if (problems.raised() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
+        if (!clean() || mapBroken || map == null || name == null || robot == null || robot.profile == null
                 || start == null || startCharge == null || reserve == null || tasks == null || objective == null
                 || timing == null) {
             return null;
@@ -276,17 +271,11 @@ final class MissionReading extends DocumentReading {
         }
         nodes.tasksKey = keyPos;
         in.onlyKeys(m, "tasks", "visit", "order", "avoid", "finish-on-dock", "patrol");
-        boolean ok = true;
-        List<String> visit = List.of();
-        if (m.get("visit") != null) {
-            nodes.visitPos = m.get("visit").pos();
-            List<Loading.Named> v = in.named(m.get("visit"), "visit");
-            ok &= v != null;
-            if (v != null) {
-                nodes.visit = v;
-                visit = v.stream().map(Loading.Named::name).toList();
-            }
-        }
+        nodes.visitPos = m.get("visit") == null ? null : m.get("visit").pos();
+        List<Loading.Named> v = namedOrNone(m, "visit");
+        boolean ok = v != null;
+        nodes.visit = v == null ? List.of() : v;
+        List<String> visit = names(nodes.visit);
         boolean ordered = true;
         Node on = m.get("order");
         if (on != null) {
@@ -305,15 +294,10 @@ final class MissionReading extends DocumentReading {
                 ok = false;
             }
         }
-        List<String> avoid = List.of();
-        if (m.get("avoid") != null) {
-            List<Loading.Named> a = in.named(m.get("avoid"), "avoid");
-            ok &= a != null;
-            if (a != null) {
-                nodes.avoid = a;
-                avoid = a.stream().map(Loading.Named::name).toList();
-            }
-        }
+        List<Loading.Named> av = namedOrNone(m, "avoid");
+        ok &= av != null;
+        nodes.avoid = av == null ? List.of() : av;
+        List<String> avoid = names(nodes.avoid);
         boolean finish = true;
         Node fn = m.get("finish-on-dock");
         if (fn != null) {
@@ -360,6 +344,15 @@ final class MissionReading extends DocumentReading {
         return ok ? new Tasks(visit, ordered, avoid, finish) : null;
     }
 
+    /** The names listed under {@code key}: none when it is absent, {@code null} after a problem. */
+    private List<Loading.Named> namedOrNone(Node.MapNode m, String key) {
+        return m.get(key) == null ? List.of() : in.named(m.get(key), key);
+    }
+
+    private static List<String> names(List<Loading.Named> named) {
+        return named.stream().map(Loading.Named::name).toList();
+    }
+
     private void taskZones(Tasks tasks, TaskNodes nodes) {
         List<String> known = map.zones().stream().map(Zone::name).toList();
         List<Loading.Named> all = new ArrayList<>(nodes.visit);
@@ -380,7 +373,7 @@ final class MissionReading extends DocumentReading {
         if (!(n instanceof Node.Scalar s) || s.kind() != Node.Kind.STRING || s.text().trim().equals(">")) {
             return false;
         }
-        return writtenWith(n.pos(), '>');
+        return writtenWith(doc, n.pos(), '>');
     }
 
     private Objective objective(Node.MapNode m) {

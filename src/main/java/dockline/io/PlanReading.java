@@ -12,7 +12,7 @@ import java.util.Map;
  * very character; an unknown character is reported {@value #SHOWN_PER_CHAR} times, then counted.
  * Linear in the plan's size; no object per cell.
  */
-final class PlanReading extends DocumentReading {
+final class PlanReading {
 
     /** Characters that YAML gives a meaning at the start of a plain key; such legend keys must be quoted. */
     private static final String YAML_INDICATORS = "#&*!|>'\"%@`{}[],:?-";
@@ -22,8 +22,12 @@ final class PlanReading extends DocumentReading {
     /** The legend, {@code null} when it is broken (then no character is reported as unknown). */
     private final Map<Character, Terrain> legend;
 
+    private final YamlReader.Document doc;
+    private final Problems problems;
+
     PlanReading(YamlReader.Document doc, Problems problems, Map<Character, Terrain> legend) {
-        super(doc, problems);
+        this.doc = doc;
+        this.problems = problems;
         this.legend = legend;
     }
 
@@ -135,7 +139,7 @@ final class PlanReading extends DocumentReading {
     }
 
     private boolean isLiteralBlock(Pos p) {
-        return writtenWith(p, '|');
+        return DocumentReading.writtenWith(doc, p, '|');
     }
 
     private static int countFrom(List<String> rows, int y0, int i0, int cp) {

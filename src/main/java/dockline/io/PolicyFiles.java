@@ -221,15 +221,7 @@ public final class PolicyFiles {
 
     /** Writes the policy atomically, as CSV for a {@code .csv} name, else as JSON. */
     public static void write(Path file, Header header, Policy policy) throws IOException {
-        AtomicFiles.write(file, out -> {
-            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-            if (isCsv(file)) {
-                PolicyWriting.writeCsv(w, header, policy);
-            } else {
-                PolicyWriting.writeJson(w, header, policy);
-            }
-            w.flush();
-        });
+        writeText(file, w -> PolicyWriting.write(w, isCsv(file), header, policy));
     }
 
     /**
@@ -243,17 +235,22 @@ public final class PolicyFiles {
         if (header.score().isPresent()) {
             throw new IllegalArgumentException("a threshold policy is for the reserve floor, not a discounted score");
         }
+        writeText(file, w -> PolicyWriting.write(w, isCsv(file), header, policy));
+    }
+
+    /** Text to be written through a {@link Writer}. */
+    private interface Text {
+        void writeTo(Writer w) throws IOException;
+    }
+
+    /** Writes the text in UTF-8, atomically ({@link AtomicFiles}). */
+    private static void writeText(Path file, Text text) throws IOException {
         AtomicFiles.write(file, out -> {
             Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-            if (isCsv(file)) {
-                PolicyWriting.writeThresholdCsv(w, header, policy);
-            } else {
-                PolicyWriting.writeThresholdJson(w, header, policy);
-            }
+            text.writeTo(w);
             w.flush();
         });
     }
-
 
     /**
      * Reads a policy file (CSV for a {@code .csv} name, else JSON).

@@ -38,15 +38,13 @@ final class PolicyJsonReading extends PolicyReading {
             boolean sawRows = false;
             boolean sawThresholds = false;
             Pos top = pos(j.currentTokenLocation());
-            while (j.nextToken() == JsonToken.FIELD_NAME) {
-                String key = canonical(j.currentName());
-                Pos kp = pos(j.currentTokenLocation());
-                JsonToken t = j.nextToken();
-                Pos vp = pos(j.currentTokenLocation());
-                if (!known(key, TOP_KEYS, kp, false)) {
-                    j.skipChildren();
+            for (Field field = next(j, TOP_KEYS, false); field != null; field = next(j, TOP_KEYS, false)) {
+                if (field == UNKNOWN) {
                     continue;
                 }
+                String key = field.key();
+                JsonToken t = field.token();
+                Pos vp = field.valuePos();
                 switch (key) {
                     case "tasks" -> {
                         if (t != JsonToken.START_ARRAY) {
@@ -77,13 +75,10 @@ final class PolicyJsonReading extends PolicyReading {
                         }
                     }
                     default -> {
-                        if (!t.isScalarValue()) {
-                            p.addPolicy(vp, "'" + key + "' must be a single value");
-                            j.skipChildren();
-                            continue;
+                        if (scalar(j, field)) {
+                            values.put(key, j.getText());
+                            at.put(key, vp);
                         }
-                        values.put(key, j.getText());
-                        at.put(key, vp);
                     }
                 }
             }
@@ -124,28 +119,53 @@ final class PolicyJsonReading extends PolicyReading {
         Map<String, String> values = new LinkedHashMap<>();
         Map<String, Pos> at = new LinkedHashMap<>();
         boolean bad = false;
-        while (j.nextToken() == JsonToken.FIELD_NAME) {
-            String key = canonical(j.currentName());
-            Pos kp = pos(j.currentTokenLocation());
-            JsonToken t = j.nextToken();
-            Pos vp = pos(j.currentTokenLocation());
-            if (!known(key, keys, kp, true)) {
-                j.skipChildren();
+        for (Field f = next(j, keys, true); f != null; f = next(j, keys, true)) {
+            if (f == UNKNOWN || !scalar(j, f)) {
                 bad = true;
                 continue;
             }
-            if (!t.isScalarValue()) {
-                p.addPolicy(vp, "'" + key + "' must be a single value");
-                j.skipChildren();
-                bad = true;
-                continue;
-            }
-            values.put(key, j.getText());
-            at.put(key, vp);
+            values.put(f.key(), j.getText());
+            at.put(f.key(), f.valuePos());
         }
         PolicyEntry e = row(p, rp, values, at);
         if (e != null && !bad) {
             rows.add(rp, e);
         }
+    }
+
+    /** A key of an object, where it stands, and its value's first token and where that stands. */
+    private record Field(String key, Pos keyPos, JsonToken token, Pos valuePos) {
+    }
+
+    /** What {@link #next} gives for a key that is not one of the keys (reported, its value skipped). */
+    private static final Field UNKNOWN = new Field("", Pos.START, JsonToken.VALUE_NULL, Pos.START);
+
+    /**
+     * The next key of the object (keys of earlier versions renamed) with the parser on its value, or
+     * {@code null} at the object's end; {@link #UNKNOWN} after reporting a key not in {@code keys}.
+     */
+    private Field next(JsonParser j, List<String> keys, boolean inRow) throws IOException {
+        if (j.nextToken() != JsonToken.FIELD_NAME) {
+            return null;
+        }
+        String key = canonical(j.currentName());
+        Pos kp = pos(j.currentTokenLocation());
+        JsonToken t = j.nextToken();
+        Pos vp = pos(j.currentTokenLocation());
+        if (!known(key, keys, kp, inRow)) {
+            j.skipChildren();
+            return UNKNOWN;
+        }
+        return new Field(key, kp, t, vp);
+    }
+
+    /** Whether the field's value is a single value; if not, reports it and skips the value. */
+    private boolean scalar(JsonParser j, Field f) throws IOException {
+        if (f.token().isScalarValue()) {
+            return true;
+        }
+        p.addPolicy(f.valuePos(), "'" + f.key() + "' must be a single value");
+        j.skipChildren();
+        return false;
     }
 }

@@ -8,6 +8,7 @@ import static dockline.io.PolicyFiles.CSV_SCORE_HEADER;
 import static dockline.io.PolicyFiles.CSV_STEP_CLOSED_HEADER;
 import static dockline.io.PolicyFiles.CSV_STEP_HEADER;
 import static dockline.io.PolicyFiles.FORMAT;
+import static dockline.io.PolicyFiles.SCORE_KEYS;
 import static dockline.io.PolicyFiles.VERSION_THRESHOLDS;
 
 import com.fasterxml.jackson.core.JsonFactory;
@@ -42,38 +43,33 @@ final class PolicyWriting {
     private PolicyWriting() {
     }
 
-    /** Writes a policy of rows as JSON. */
-    static void writeJson(Writer w, Header h, Policy policy) throws IOException {
+    /** Writes a policy of rows as CSV or JSON. */
+    static void write(Writer w, boolean csv, Header h, Policy policy) throws IOException {
         requireMatch(h, policy);
         List<Map<String, Object>> rows = new ArrayList<>();
         for (PolicyEntry e : policy.entries()) {
             rows.add(row(e));
         }
-        json(w, header(h, h.version(), true), "rows", rows);
-    }
-
-    /** Writes a policy of rows as CSV. */
-    static void writeCsv(Writer w, Header h, Policy policy) throws IOException {
-        requireMatch(h, policy);
+        Map<String, Object> header = header(h, h.version(), true);
+        if (!csv) {
+            json(w, header, "rows", rows);
+            return;
+        }
         boolean scored = h.score().isPresent();
         boolean closed = policy.entries().stream().anyMatch(e -> !e.closures().isEmpty());
-        List<Map<String, Object>> rows = new ArrayList<>();
-        for (PolicyEntry e : policy.entries()) {
-            rows.add(row(e));
+        csv(w, header, scored ? closed ? CSV_SCORE_CLOSED_HEADER : CSV_SCORE_HEADER : closed ? CSV_CLOSED_HEADER : CSV_HEADER,
+                rows);
+    }
+
+    /** Writes a threshold policy as CSV or JSON (format version {@value PolicyFiles#VERSION_THRESHOLDS}). */
+    static void write(Writer w, boolean csv, Header h, ThresholdPolicy policy) throws IOException {
+        Map<String, Object> header = header(h, VERSION_THRESHOLDS, false);
+        if (!csv) {
+            json(w, header, "thresholds", steps(policy));
+            return;
         }
-        csv(w, header(h, h.version(), true),
-                scored ? closed ? CSV_SCORE_CLOSED_HEADER : CSV_SCORE_HEADER : closed ? CSV_CLOSED_HEADER : CSV_HEADER, rows);
-    }
-
-    /** Writes a threshold policy as JSON (format version {@value PolicyFiles#VERSION_THRESHOLDS}). */
-    static void writeThresholdJson(Writer w, Header h, ThresholdPolicy policy) throws IOException {
-        json(w, header(h, VERSION_THRESHOLDS, false), "thresholds", steps(policy));
-    }
-
-    /** Writes a threshold policy as CSV (format version {@value PolicyFiles#VERSION_THRESHOLDS}). */
-    static void writeThresholdCsv(Writer w, Header h, ThresholdPolicy policy) throws IOException {
         boolean closed = policy.rows().stream().anyMatch(r -> !r.closures().isEmpty());
-        csv(w, header(h, VERSION_THRESHOLDS, false), closed ? CSV_STEP_CLOSED_HEADER : CSV_STEP_HEADER, steps(policy));
+        csv(w, header, closed ? CSV_STEP_CLOSED_HEADER : CSV_STEP_HEADER, steps(policy));
     }
 
     /** A header with score terms goes with rows with a score memory, and only with them. */
@@ -104,12 +100,12 @@ final class PolicyWriting {
         f.put("tasks", h.tasks());
         if (terms && h.score().isPresent()) {
             ScoreTerms t = h.score().get();
-            f.put("objective", "discounted");
-            f.put("discount", t.discount());
-            f.put("threshold", t.threshold().toString());
-            f.put("relation", t.relation().symbol());
-            f.put("weightBoundUnits", t.weightBound());
-            f.put("reserveKept", t.reserveKept());
+            // the keys the reader checks, in their order
+            Object[] v = {"discounted", t.discount(), t.threshold().toString(), t.relation().symbol(), t.weightBound(),
+                    t.reserveKept()};
+            for (int i = 0; i < v.length; i++) {
+                f.put(SCORE_KEYS.get(i), v[i]);
+            }
         }
         if (terms && h.rounds().isPresent()) {
             Rounds r = h.rounds().get();
