@@ -38,11 +38,13 @@ final class PolicyFields {
     private PolicyFields() {
     }
 
+    /** The cell written {@code x:y}, or {@code null}. */
     static Cell cell(String text) {
         Matcher m = CELL.matcher(text.trim());
         return m.matches() ? new Cell(Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2))) : null;
     }
 
+    /** The action words, for a hint. */
     static String actionWords() {
         List<String> w = new ArrayList<>();
         for (ActionKind k : ActionKind.values()) {
@@ -113,12 +115,14 @@ final class PolicyFields {
         return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score, closures) : null;
     }
 
+    /** Whether this reader knows the format version. */
     static boolean knownVersion(String v) {
         String t = v.trim();
         return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_1))
                 || t.equals(String.valueOf(VERSION_WITH_SCORE)) || t.equals(String.valueOf(VERSION_THRESHOLDS));
     }
 
+    /** The value of {@code key} as a whole number of at least 0, or -1 after reporting it. */
     static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
         String v = values.get(key).trim();
         if (!v.matches("\\d{1,9}")) {
@@ -128,6 +132,7 @@ final class PolicyFields {
         return Integer.parseInt(v);
     }
 
+    /** The header from the top-level values and the task list, or {@code null} after a problem. */
     static Header header(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at,
                                  List<String> tasks) {
         for (String k : List.of("mission", "unitWh", "reserveUnits", "capacityUnits", "budget")) {

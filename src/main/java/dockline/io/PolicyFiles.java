@@ -32,6 +32,10 @@ import java.util.Optional;
  * <p>Writing is atomic ({@link AtomicFiles}). Reading checks the format (not whether the policy is
  * any good: that is the certificate checker's job) and reports every problem at once as
  * {@code file:line:column: message}.
+ *
+ * <p>This class holds the format's records and keys; {@link PolicyWriting} writes both formats,
+ * {@link PolicyJsonReading} and {@link PolicyCsvReading} read them, checking the values with
+ * {@link PolicyFields} and the rows with {@link PolicyRows}.
  */
 public final class PolicyFiles {
 
