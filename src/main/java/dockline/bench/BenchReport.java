@@ -87,6 +87,35 @@ public final class BenchReport {
         return out;
     }
 
+    /**
+     * A route's figures per size: peak bytes per vertex, the size forecast over the vertices found, and
+     * the least-squares slope of log(time) against log(edges) (null with fewer than two sizes).
+     */
+    private record SizeFigures(Map<String, Double> bytesPerVertex, Map<String, Double> estimateOverActual,
+                               Double slope) {
+    }
+
+    /**
+     * The figures of {@code method} at each size it ran; memory, edges and time are those of
+     * {@code measured} at that size when it ran (else of {@code method}), the forecast is {@code method}'s.
+     */
+    private SizeFigures sizeFigures(String instance, String method, String measured,
+                                    java.util.function.ToLongFunction<BenchRow> forecast) {
+        Map<String, Double> bpv = new LinkedHashMap<>();
+        Map<String, Double> est = new LinkedHashMap<>();
+        List<double[]> pts = new ArrayList<>();
+        for (int s : sizes(instance, method)) {
+            BenchRow a = row(s, instance, method).orElseThrow();
+            BenchRow c = row(s, instance, measured).orElse(a);
+            bpv.put(Integer.toString(s), round(c.bytesPerVertex()));
+            if (forecast.applyAsLong(a) > 0) {
+                est.put(Integer.toString(s), round(forecast.applyAsLong(a) / (double) a.vertices()));
+            }
+            pts.add(new double[] {Math.log(c.edges()), Math.log(Math.max(c.ratioMillis(), 1e-3))});
+        }
+        return new SizeFigures(bpv, est, pts.size() >= 2 ? round(slope(pts)) : null);
+    }
+
     private void computeRatios() {
         String res = Benchmark.RESERVE;
         // the main route is the implicit product (ReserveOptions' default); the stored CSR product is the reference
@@ -107,37 +136,16 @@ public final class BenchReport {
         ratios.put("viOverComparator", vi);
         // the same against the stored comparator product, for comparison with the main route's layout
         ratios.put("viOverStoredComparator", ratioPerSize(Benchmark.DISCOUNTED, "vi", "stored-attractor", false));
-        Map<String, Double> bpv = new LinkedHashMap<>();
-        Map<String, Double> est = new LinkedHashMap<>();
-        List<double[]> pts = new ArrayList<>();
-        for (int s : sizes(res, "attractor")) {
-            BenchRow a = row(s, res, "attractor").orElseThrow();
-            bpv.put(Integer.toString(s), round(a.bytesPerVertex()));
-            if (a.forecastVertices() > 0) {
-                est.put(Integer.toString(s), round(a.forecastVertices() / (double) a.vertices()));
-            }
-            pts.add(new double[] {Math.log(a.edges()), Math.log(Math.max(a.ratioMillis(), 1e-3))});
-        }
-        ratios.put("peakBytesPerVertex", bpv);
-        ratios.put("estimateOverActual", est);
-        Map<String, Double> sbpv = new LinkedHashMap<>();
-        Map<String, Double> sest = new LinkedHashMap<>();
-        List<double[]> spts = new ArrayList<>();
-        for (int s : sizes(res, "stored-attractor")) {
-            BenchRow a = row(s, res, "stored-attractor").orElseThrow();
-            BenchRow c = row(s, res, "stored-compact").orElse(a);
-            sbpv.put(Integer.toString(s), round(c.bytesPerVertex()));
-            if (a.estimatedVertices() > 0) {
-                sest.put(Integer.toString(s), round(a.estimatedVertices() / (double) a.vertices()));
-            }
-            spts.add(new double[] {Math.log(c.edges()), Math.log(Math.max(c.ratioMillis(), 1e-3))});
-        }
-        ratios.put("storedPeakBytesPerVertex", sbpv);
-        ratios.put("storedEstimateOverActual", sest);
-        Double slope = pts.size() >= 2 ? round(slope(pts)) : null;
+        SizeFigures main = sizeFigures(res, "attractor", "attractor", BenchRow::forecastVertices);
+        ratios.put("peakBytesPerVertex", main.bytesPerVertex());
+        ratios.put("estimateOverActual", main.estimateOverActual());
+        // the stored route's memory and time are those of its compact layout when that ran
+        SizeFigures stored = sizeFigures(res, "stored-attractor", "stored-compact", BenchRow::estimatedVertices);
+        ratios.put("storedPeakBytesPerVertex", stored.bytesPerVertex());
+        ratios.put("storedEstimateOverActual", stored.estimateOverActual());
+        Double slope = main.slope();
         ratios.put("attractorSlope", slope);
-        Double sslope = spts.size() >= 2 ? round(slope(spts)) : null;
-        ratios.put("storedSlope", sslope);
+        ratios.put("storedSlope", stored.slope());
         Map<String, Double> fastWall = new LinkedHashMap<>();
         for (int s : sizes(Benchmark.CONSUMPTION, "fast")) {
             fastWall.put(Integer.toString(s), round(row(s, Benchmark.CONSUMPTION, "fast").orElseThrow().wallMillis()));
@@ -177,6 +185,7 @@ public final class BenchReport {
         targets.add(target("  the same for check's whole fast route from the mission (need, highest floor, policy, certificate)",
                 check512.map(r -> fmt(r.wallMillis()) + " ms").orElse("512x512 not run"),
                 check512.isPresent() && check512.get().wallMillis() <= 3000));
+        Map<String, Double> est = main.estimateOverActual();
         double worstEst = est.values().stream().mapToDouble(v -> Math.abs(v - 1)).max().orElse(Double.NaN);
         targets.add(target("pre-build size estimate within 20% of the real product (main route: ReserveSizeForecast)",
                 est.toString(), !est.isEmpty() && worstEst <= 0.2));

@@ -44,15 +44,14 @@ import java.util.Arrays;
  * counting-sort pass and no array is copied to trim it. No owner array is written: a pair is the
  * robot's iff its arena vertex is, which is kept per pair anyway; the predecessor offsets are summed in
  * place in the spent per-pair array; chain links are 1-based so that no array needs a fill; a robot
- * pair's moves into private actions have a loop of their own that neither steps the comparator nor
- * looks anything up. Each pair is expanded by its own method call, so that the compiled code dropped
+ * pair's moves into private actions neither step the comparator nor look anything up. Each pair is expanded by its own method call, so that the compiled code dropped
  * when a rare path (overflow, growth) is first taken is compiled again within the same build.
  *
  * <p>Cost: O(|V| + |E|) expected time and memory in the product, which has at most (arena vertices)
  * x (comparator states) vertices, plus one int per arena vertex for the chain heads; the attractor
  * stops as soon as the start is decided.
  */
-final class DiscountedThresholdGame {
+final class DiscountedThresholdGame extends ProductCounts {
 
     public static final int ACCEPTED = 0;
     public static final int REJECTED = 1;
@@ -62,8 +61,6 @@ final class DiscountedThresholdGame {
     static final int CHAIN_LIMIT = 4;
 
     private final Relation relation;
-    private final int vertexCount;
-    private final int edgeCount;
     // arrays may be longer than vertexCount (+1) / edgeCount: spare capacity is kept rather than copied away
     /** Per pair its arena vertex; the pair is the robot's iff that is below {@link #robotCount}. */
     private final int[] pairVertex;
@@ -72,22 +69,19 @@ final class DiscountedThresholdGame {
     private final int[] edgeTarget;
     /** Offsets of the predecessor lists (reverse CSR), from the in-degrees counted while building. */
     private final int[] inStart;
-    private final int comparatorStates;
     private final int overflowPairs;
     private final long buildNanos;
 
     private DiscountedThresholdGame(Relation relation, int n, int m, int[] pairVertex, int robotCount, int[] outStart,
                                     int[] edgeTarget, int[] inStart, int comparatorStates, int overflowPairs,
                                     long buildNanos) {
+        super(n, m, comparatorStates);
         this.relation = relation;
-        this.vertexCount = n;
-        this.edgeCount = m;
         this.pairVertex = pairVertex;
         this.robotCount = robotCount;
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
         this.inStart = inStart;
-        this.comparatorStates = comparatorStates;
         this.overflowPairs = overflowPairs;
         this.buildNanos = buildNanos;
     }
@@ -190,11 +184,7 @@ final class DiscountedThresholdGame {
             n = START + 1;
             for (int v = START; v < n; v++) {
                 int x = vA[v];
-                if (privateActions && x < robotCount) {
-                    expandPrivateMoves(v, x);
-                } else {
-                    expand(v, x);
-                }
+                expand(v, x);
             }
             outStart[n] = m;
         }
@@ -214,32 +204,11 @@ final class DiscountedThresholdGame {
         }
 
         /**
-         * A robot pair's moves into private actions (see privateActions): each reaches a pair that no other
+         * A pair's moves, each to a sink or to its pair, found in the chain or the overflow table, or new. A
+         * robot pair's moves into private actions (see privateActions) each reach a pair that no other
          * product edge reaches, as this robot pair is expanded once and moving keeps the state, so the pair
-         * is new and never looked up again; it is not indexed (and gets no link).
+         * is new and never looked up again: it is neither looked up nor indexed (and gets no link).
          */
-        private void expandPrivateMoves(int v, int x) {
-            int eBegin = arena.outBegin(x);
-            int eEnd = arena.outEnd(x);
-            ensure(eEnd - eBegin);
-            int[] vA = this.vA;
-            int[] pair = this.pair;
-            int[] edgeTarget = this.edgeTarget;
-            int n = this.n;
-            int m = this.m;
-            int s = pair[2 * v];
-            outStart[v] = m;
-            for (int e = eBegin; e < eEnd; e++) {
-                vA[n] = arena.target(e);
-                pair[2 * n] = s;
-                pair[2 * n + 1] = 1;
-                edgeTarget[m++] = n++;
-            }
-            this.n = n;
-            this.m = m;
-        }
-
-        /** Any other pair: each move to a sink or to its pair, found in the chain or the overflow table, or new. */
         private void expand(int v, int x) {
             int eBegin = arena.outBegin(x);
             int eEnd = arena.outEnd(x);
@@ -253,12 +222,18 @@ final class DiscountedThresholdGame {
             int m = this.m;
             int s = pair[2 * v];
             boolean robotMoves = x < robotCount;
+            boolean fresh = privateActions && robotMoves;
             outStart[v] = m;
             for (int e = eBegin; e < eEnd; e++) {
                 int t = arena.target(e);
                 int s2 = robotMoves ? s : steps.step(s, arena.weight(e));
                 int id;
-                if (s2 == Monitor.REJECT) {
+                if (fresh) {
+                    // room was made for every move of v; the in-degree (from 0) is counted below
+                    id = n++;
+                    vA[id] = t;
+                    pair[2 * id] = s2;
+                } else if (s2 == Monitor.REJECT) {
                     id = REJECTED;
                 } else if (s2 == DiscountedComparator.ACCEPT) {
                     id = ACCEPTED;
@@ -325,8 +300,8 @@ final class DiscountedThresholdGame {
      */
     public boolean robotWins() {
         boolean safety = relation == Relation.AT_LEAST;
-        final int n = vertexCount;
-        final int m = edgeCount;
+        final int n = vertexCount();
+        final int m = edgeCount();
         final int[] pv = pairVertex;
         final int robots = robotCount;
         final int[] out = outStart;
@@ -371,19 +346,6 @@ final class DiscountedThresholdGame {
             }
         }
         return safety != startJoins;
-    }
-
-    public int vertexCount() {
-        return vertexCount;
-    }
-
-    public int edgeCount() {
-        return edgeCount;
-    }
-
-    /** Comparator states discovered while building (initial state and accepting sink included). */
-    public int comparatorStates() {
-        return comparatorStates;
     }
 
     /** Pairs found through the overflow table (arena vertices with over {@value #CHAIN_LIMIT} comparator states); for tests. */

@@ -44,7 +44,7 @@ import java.util.Arrays;
  * the arena. Requires {@link #applicable}: private disturbance vertices and out-degrees of at most
  * {@value #MAX_DEGREE} (counters are bytes).
  */
-final class ImplicitDiscountedGame {
+final class ImplicitDiscountedGame extends ProductCounts {
 
     /** Pairs per arena vertex kept in its chain; more go to the overflow table. */
     static final int CHAIN_LIMIT = 4;
@@ -54,19 +54,14 @@ final class ImplicitDiscountedGame {
     private final boolean robotWins;
     private final boolean stoppedEarly;
     private final int robotPairs;
-    private final int vertexCount;
-    private final int edgeCount;
-    private final int comparatorStates;
     private final int joined;
 
     private ImplicitDiscountedGame(boolean robotWins, boolean stoppedEarly, int robotPairs, int vertexCount,
                                    int edgeCount, int comparatorStates, int joined) {
+        super(vertexCount, edgeCount, comparatorStates);
         this.robotWins = robotWins;
         this.stoppedEarly = stoppedEarly;
         this.robotPairs = robotPairs;
-        this.vertexCount = vertexCount;
-        this.edgeCount = edgeCount;
-        this.comparatorStates = comparatorStates;
         this.joined = joined;
     }
 
@@ -488,7 +483,7 @@ final class ImplicitDiscountedGame {
 
     /**
      * Whether the search stopped once the start was decided, before the whole product was found; the
-     * sizes below are then those of the part explored.
+     * sizes ({@link #vertexCount()}, {@link #edgeCount()}, {@link #comparatorStates()}) are then those of the part explored.
      */
     public boolean stoppedEarly() {
         return stoppedEarly;
@@ -497,21 +492,6 @@ final class ImplicitDiscountedGame {
     /** Robot pairs stored (the product's robot vertices without the sinks). */
     public int robotPairs() {
         return robotPairs;
-    }
-
-    /** Vertices of the product explored (sinks, robot pairs, disturbance pairs), as {@link DiscountedThresholdGame#vertexCount()} when not stopped early. */
-    public int vertexCount() {
-        return vertexCount;
-    }
-
-    /** Edges of the product explored (sink self-loops, robot moves, outcomes), as {@link DiscountedThresholdGame#edgeCount()} when not stopped early. */
-    public int edgeCount() {
-        return edgeCount;
-    }
-
-    /** Comparator states discovered (initial state and accepting sink included). */
-    public int comparatorStates() {
-        return comparatorStates;
     }
 
     /** Robot pairs that joined the attractor before the search stopped. */

@@ -4,17 +4,11 @@ import dockline.goal.GoalAutomaton;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.Charge;
-import dockline.model.EnergyScale;
-import dockline.model.EventKind;
-import dockline.model.EventRule;
 import dockline.model.Mission;
-import dockline.model.Neighbourhood;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
-import dockline.model.RobotProfile;
 import dockline.model.Tasks;
-import dockline.model.Terrain;
 import dockline.model.Timing;
 import dockline.model.Zone;
 import java.io.IOException;
@@ -24,66 +18,52 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Set;
-import java.util.TreeSet;
 
 /**
  * Checks one parsed mission document (and loads its map) and builds the {@link Mission}. Goes on
  * after each problem so that one run reports all of them; checks that need the map are skipped
  * when the map has problems of its own (those are reported with the map's file name).
  */
-final class MissionReading {
+final class MissionReading extends DocumentReading<Mission> {
 
     static final String[] KEYS = {"name", "map", "robot", "start", "reserve", "tasks", "objective", "deadline"};
-    static final String[] ROBOT_KEYS = {"capacity", "resolution", "move-energy", "wait-energy", "charge-rate", "neighbourhood", "tick"};
     /** Largest discount factor accepted (the comparator's numbers grow with it). */
     static final int MAX_DISCOUNT = 1_000_000;
     private static final BigDecimal HUNDRED = BigDecimal.valueOf(100);
 
-    private final YamlReader.Document doc;
-    private final Problems problems;
-    private final Loading in;
+    private final RobotReading robots = new RobotReading(in);
     private BuildingMap map;
     /** Where the discounted objective's threshold is written, for the range check after loading. */
     private Pos thresholdPos;
     private boolean mapBroken;
 
     MissionReading(YamlReader.Document doc, Problems problems) {
-        this.doc = doc;
-        this.problems = problems;
-        this.in = new Loading(problems);
+        super(doc, problems, "a mission file");
     }
 
-    Mission read() {
-        int before = problems.raised();
-        Node.MapNode root = in.map(doc.root(), "a mission file");
-        if (root == null) {
-            return null;
-        }
+    @Override
+    Mission read(Node.MapNode root) {
         if (root.get("map") == null && root.get("robot") == null && (root.get("plan") != null || root.get("legend") != null)) {
             // a map where a mission belongs: one clear line instead of a screenful of unknown and missing keys
             problems.add(root.pos(), "this is a map file, not a mission",
                     "give a mission file whose 'map:' names this map; 'dockline validate' checks a map on its own");
             return null;
         }
-        in.onlyKeys(root, "a mission file", KEYS);
-        String name = root.get("name") == null ? MapReading.stem(doc.file()) : in.string(root.get("name"), "name");
+        String name = name(root, KEYS);
         Node mapNode = in.require(root, "map", "the mission");
         if (mapNode != null) {
             loadMap(mapNode);
         } else {
             mapBroken = true;
         }
-        Robot robot = null;
+        RobotReading.Robot robot = null;
         Node rn = in.require(root, "robot", "the mission");
         if (rn != null) {
-            robot = robot(root.entry("robot"));
+            robot = robots.read(root.entry("robot"));
         }
         Cell start = null;
         Charge startCharge = Charge.percent(HUNDRED);
@@ -121,14 +101,14 @@ final class MissionReading {
 
         // checks across sections
         if (robot != null && robot.profile != null) {
-            charges(robot, startCharge, startChargeNode, sn, reserve, resNode);
+            robots.charges(robot, startCharge, startChargeNode, sn, reserve, resNode);
         }
         if (map != null && start != null && startCellNode != null) {
             startCell(start, startCellNode.pos(), tasks);
         }
         if (map != null && robot != null) {
-            surfaces(robot);
-            drags(robot);
+            robots.surfaces(robot, map);
+            robots.drags(robot, map);
         }
         if (map != null && tasks != null && taskNodes != null) {
             taskZones(tasks, taskNodes);
@@ -138,7 +118,7 @@ final class MissionReading {
             problems.add(at, "the mission must finish on a dock, but the map has no dock",
                     "mark a dock in the map's legend, e.g. C: {surface: tile, dock: true}");
         }
-        if (problems.raised() > before || mapBroken || map == null || name == null || robot == null || robot.profile == null
+        if (!clean() || mapBroken || map == null || name == null || robot == null || robot.profile == null
                 || start == null || startCharge == null || reserve == null || tasks == null || objective == null
                 || timing == null) {
             return null;
@@ -253,231 +233,6 @@ final class MissionReading {
                 : "the path is relative to the mission file's folder";
     }
 
-    // ---------------------------------------------------------------- robot
-
-    /** The robot profile as read, with the nodes later checks point at. */
-    private static final class Robot {
-        RobotProfile profile;
-        EnergyScale scale;
-        Node capacity;
-        Node resolution;
-        Pos moveKey;
-        Map<String, Node> moveNodes = new LinkedHashMap<>();
-        BigDecimal tick;
-        Node tickNode;
-    }
-
-    private Robot robot(Node.Entry entry) {
-        Node.MapNode m = in.map(entry.value(), "robot");
-        if (m == null) {
-            return null;
-        }
-        in.onlyKeys(m, "robot", ROBOT_KEYS);
-        Robot r = new Robot();
-        r.tickNode = m.get("tick");
-        r.tick = r.tickNode == null ? null : ClockReading.tick(r.tickNode, problems);
-        r.capacity = in.require(m, "capacity", "robot");
-        r.resolution = in.require(m, "resolution", "robot");
-        Node moveNode = in.require(m, "move-energy", "robot");
-        Node waitNode = in.require(m, "wait-energy", "robot");
-        BigDecimal capacity = r.capacity == null ? null : in.wh(r.capacity, "capacity");
-        if (capacity != null && capacity.signum() == 0) {
-            problems.add(r.capacity.pos(), "capacity must be more than 0 Wh", "the usable battery capacity, e.g. 120");
-            capacity = null;
-        }
-        BigDecimal resolution = r.resolution == null ? null : in.wh(r.resolution, "resolution");
-        if (resolution != null && resolution.signum() == 0) {
-            problems.add(r.resolution.pos(), "resolution must be more than 0 Wh", "the size of one energy unit, e.g. 0.5");
-            resolution = null;
-        }
-        EnergyScale scale = resolution == null ? null : new EnergyScale(resolution);
-        r.scale = scale;
-        Map<String, BigDecimal> move = new LinkedHashMap<>();
-        boolean ok = true;
-        if (moveNode != null) {
-            r.moveKey = m.entry("move-energy").keyPos();
-            Node.MapNode mm = in.map(moveNode, "move-energy");
-            if (mm == null) {
-                ok = false;
-            } else {
-                for (Node.Entry e : mm.entries()) {
-                    r.moveNodes.put(e.key(), e.value());
-                    BigDecimal wh = in.wh(e.value(), "move-energy for '" + Loading.shorten(e.key()) + "'");
-                    if (wh == null) {
-                        ok = false;
-                        continue;
-                    }
-                    move.put(e.key(), wh);
-                    r.moveNodes.put(e.key(), e.value());
-                }
-            }
-        }
-        BigDecimal wait = waitNode == null ? null : in.wh(waitNode, "wait-energy");
-        BigDecimal charge = BigDecimal.ZERO;
-        Node chargeNode = m.get("charge-rate");
-        if (chargeNode != null) {
-            charge = in.wh(chargeNode, "charge-rate");
-        }
-        Neighbourhood nb = Neighbourhood.FOUR;
-        Node nn = m.get("neighbourhood");
-        if (nn != null) {
-            Integer v = in.integer(nn, "neighbourhood", 0, Integer.MAX_VALUE);
-            if (v != null && v != 4 && v != 8) {
-                problems.add(nn.pos(), "neighbourhood must be 4 or 8, not " + v,
-                        "4: up, down, left, right; 8: also the diagonals");
-                v = null;
-            }
-            nb = v == null ? null : v == 8 ? Neighbourhood.EIGHT : Neighbourhood.FOUR;
-        }
-        if (scale != null) {
-            // every figure must be a whole number of units that fits an int at this resolution
-            if (capacity != null) {
-                BigDecimal cap = capacity;
-                Integer units = units(() -> scale.capacity(cap), r.capacity.pos(), "capacity", cap, scale);
-                if (units != null && units == 0) {
-                    problems.add(r.capacity.pos(), "capacity " + capacity.toPlainString() + " Wh is less than one energy unit ("
-                            + scale.unitWh().toPlainString() + " Wh)", "use a finer resolution");
-                    capacity = null;
-                } else if (units == null) {
-                    capacity = null;
-                }
-            }
-            for (Map.Entry<String, BigDecimal> e : move.entrySet()) {
-                Node at = r.moveNodes.get(e.getKey());
-                String what = "move-energy for '" + Loading.shorten(e.getKey()) + "'";
-                ok &= units(() -> scale.consumption(e.getValue()), at.pos(), what, e.getValue(), scale) != null;
-                if (nb == Neighbourhood.EIGHT) {
-                    ok &= units(() -> scale.diagonalConsumption(e.getValue()), at.pos(), what + " (diagonal)",
-                            e.getValue(), scale) != null;
-                }
-            }
-            if (wait != null && units(() -> scale.consumption(wait), waitNode.pos(), "wait-energy", wait, scale) == null) {
-                ok = false;
-            }
-            BigDecimal ch = charge;
-            if (ch != null && units(() -> scale.gain(ch), chargeNode == null ? m.pos() : chargeNode.pos(), "charge-rate",
-                    ch, scale) == null) {
-                ok = false;
-            }
-        }
-        if (ok && capacity != null && resolution != null && wait != null && charge != null && nb != null && moveNode != null) {
-            r.profile = new RobotProfile(capacity, resolution, move, wait, charge, nb);
-        }
-        return r;
-    }
-
-    private Integer units(java.util.function.IntSupplier f, Pos pos, String what, BigDecimal wh, EnergyScale scale) {
-        try {
-            return f.getAsInt();
-        } catch (ArithmeticException e) {
-            problems.add(pos, what + ": " + wh.toPlainString() + " Wh does not fit in the solver's whole-number range at a resolution of "
-                    + scale.unitWh().toPlainString() + " Wh (more than " + Integer.MAX_VALUE + " units)",
-                    "use a coarser resolution, e.g. 0.5 Wh");
-            return null;
-        }
-    }
-
-    /** Starting charge and reserve floor against the capacity and each other. */
-    private void charges(Robot robot, Charge startCharge, Node startChargeNode, Node startNode, Charge reserve, Node resNode) {
-        BigDecimal cap = robot.profile.capacityWh();
-        EnergyScale scale = robot.scale;
-        Integer startUnits = null;
-        if (startCharge != null) {
-            Pos at = startChargeNode != null ? startChargeNode.pos() : startNode != null ? startNode.pos() : Pos.START;
-            if (!startCharge.percent() && startCharge.amount().compareTo(cap) > 0) {
-                problems.add(at, "start charge " + startCharge + " is above the battery capacity of " + plain(cap) + " Wh",
-                        "give at most " + plain(cap) + " Wh, or a percentage");
-            } else {
-                startUnits = units(() -> scale.start(startCharge.toWh(cap)), at, "start charge", startCharge.toWh(cap), scale);
-            }
-        }
-        Integer resUnits = null;
-        if (reserve != null) {
-            if (!reserve.percent() && reserve.amount().compareTo(cap) > 0) {
-                problems.add(resNode.pos(), "reserve " + reserve + " is above the battery capacity of " + plain(cap) + " Wh",
-                        "give at most " + plain(cap) + " Wh, or a percentage, e.g. 20%");
-            } else {
-                resUnits = units(() -> scale.reserve(reserve.toWh(cap)), resNode.pos(), "reserve", reserve.toWh(cap), scale);
-            }
-        }
-        if (startUnits != null && resUnits != null) {
-            int capUnits = scale.capacity(cap);
-            int s = Math.min(capUnits, startUnits);
-            if (resUnits > s) {
-                boolean byRounding = reserve.toWh(cap).compareTo(startCharge.toWh(cap)) <= 0;
-                problems.add(resNode.pos(), "the reserve floor (" + describe(reserve, cap, resUnits, scale)
-                                + ") is above the starting charge (" + describe(startCharge, cap, s, scale) + ")"
-                                + (byRounding ? " after rounding to whole energy units" : ""),
-                        byRounding ? "rounding is against the robot (reserve up, charge down); use a finer resolution"
-                                : "lower the reserve or raise the start charge");
-            }
-        }
-    }
-
-    private static String describe(Charge c, BigDecimal cap, int units, EnergyScale scale) {
-        String wh = plain(c.toWh(cap)) + " Wh";
-        return (c.percent() ? c + " = " + wh : wh) + ", " + units + " units of " + plain(scale.unitWh()) + " Wh";
-    }
-
-    private static String plain(BigDecimal d) {
-        return d.stripTrailingZeros().toPlainString();
-    }
-
-    /** Every surface the plan uses needs a move energy. */
-    private void surfaces(Robot robot) {
-        if (robot.moveKey == null) {
-            return; // move-energy is missing or broken; already reported
-        }
-        Set<String> used = new TreeSet<>();
-        Set<String> legendSurfaces = new HashSet<>();
-        for (Terrain t : map.legend().values()) {
-            if (t.free()) {
-                legendSurfaces.add(t.surface());
-            }
-        }
-        for (int y = 0; y < map.height(); y++) {
-            for (int x = 0; x < map.width(); x++) {
-                Terrain t = map.terrainAt(new Cell(x, y));
-                if (t.free()) {
-                    used.add(t.surface());
-                }
-            }
-        }
-        Set<String> given = robot.moveNodes.keySet();
-        List<String> strays = new ArrayList<>();
-        for (String g : given) {
-            if (!legendSurfaces.contains(g)) {
-                strays.add(g);
-            }
-        }
-        for (String s : used) {
-            if (!given.contains(s)) {
-                String near = Spelling.closest(s, strays);
-                problems.add(robot.moveKey, "no move energy for surface '" + Loading.shorten(s) + "', which the plan uses",
-                        near != null ? "'" + near + "' at " + robot.moveNodes.get(near).pos() + " looks like a misspelling of it"
-                                : "add '" + Loading.shorten(s) + ": <Wh per cell>' under move-energy");
-            }
-        }
-    }
-
-    /** A drag's extra energy must fit in units too (the arena adds it to a move). */
-    private void drags(Robot robot) {
-        if (robot.scale == null) {
-            return;
-        }
-        Set<BigDecimal> seen = new HashSet<>();
-        for (EventRule rule : map.disturbances().rules()) {
-            if (rule.kind() == EventKind.DRAG && seen.add(rule.extraWh())) {
-                try {
-                    robot.scale.consumption(rule.extraWh());
-                } catch (ArithmeticException e) {
-                    problems.add(robot.resolution.pos(), "the map's drag extra of " + plain(rule.extraWh())
-                            + " Wh does not fit in the solver's whole-number range at this resolution", "use a coarser resolution");
-                }
-            }
-        }
-    }
-
     private void startCell(Cell start, Pos pos, Tasks tasks) {
         if (!map.inside(start)) {
             problems.add(pos, "start cell " + start + " is outside the map (" + map.width() + " x " + map.height()
@@ -516,17 +271,11 @@ final class MissionReading {
         }
         nodes.tasksKey = keyPos;
         in.onlyKeys(m, "tasks", "visit", "order", "avoid", "finish-on-dock", "patrol");
-        boolean ok = true;
-        List<String> visit = List.of();
-        if (m.get("visit") != null) {
-            nodes.visitPos = m.get("visit").pos();
-            List<Loading.Named> v = in.named(m.get("visit"), "visit");
-            ok &= v != null;
-            if (v != null) {
-                nodes.visit = v;
-                visit = v.stream().map(Loading.Named::name).toList();
-            }
-        }
+        nodes.visitPos = m.get("visit") == null ? null : m.get("visit").pos();
+        List<Loading.Named> v = namedOrNone(m, "visit");
+        boolean ok = v != null;
+        nodes.visit = v == null ? List.of() : v;
+        List<String> visit = names(nodes.visit);
         boolean ordered = true;
         Node on = m.get("order");
         if (on != null) {
@@ -545,15 +294,10 @@ final class MissionReading {
                 ok = false;
             }
         }
-        List<String> avoid = List.of();
-        if (m.get("avoid") != null) {
-            List<Loading.Named> a = in.named(m.get("avoid"), "avoid");
-            ok &= a != null;
-            if (a != null) {
-                nodes.avoid = a;
-                avoid = a.stream().map(Loading.Named::name).toList();
-            }
-        }
+        List<Loading.Named> av = namedOrNone(m, "avoid");
+        ok &= av != null;
+        nodes.avoid = av == null ? List.of() : av;
+        List<String> avoid = names(nodes.avoid);
         boolean finish = true;
         Node fn = m.get("finish-on-dock");
         if (fn != null) {
@@ -600,6 +344,15 @@ final class MissionReading {
         return ok ? new Tasks(visit, ordered, avoid, finish) : null;
     }
 
+    /** The names listed under {@code key}: none when it is absent, {@code null} after a problem. */
+    private List<Loading.Named> namedOrNone(Node.MapNode m, String key) {
+        return m.get(key) == null ? List.of() : in.named(m.get(key), key);
+    }
+
+    private static List<String> names(List<Loading.Named> named) {
+        return named.stream().map(Loading.Named::name).toList();
+    }
+
     private void taskZones(Tasks tasks, TaskNodes nodes) {
         List<String> known = map.zones().stream().map(Zone::name).toList();
         List<Loading.Named> all = new ArrayList<>(nodes.visit);
@@ -620,9 +373,7 @@ final class MissionReading {
         if (!(n instanceof Node.Scalar s) || s.kind() != Node.Kind.STRING || s.text().trim().equals(">")) {
             return false;
         }
-        String line = doc.source().line(n.pos().line());
-        int idx = SourceText.charIndexOfColumn(line, n.pos().column());
-        return idx >= 0 && line.charAt(idx) == '>';
+        return writtenWith(doc, n.pos(), '>');
     }
 
     private Objective objective(Node.MapNode m) {

@@ -1,34 +1,28 @@
 package dockline.io;
 
-import dockline.policy.Policy;
+import dockline.io.PolicyFiles.Document;
 import dockline.policy.PolicyEntry;
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import static dockline.io.PolicyFields.row;
 import static dockline.io.PolicyFiles.*;
 
 /** CSV: {@code #} comment lines with the header, then a header row, then one row per line. */
-final class PolicyCsvReading {
-    private final Problems p;
-    private final byte[] bytes;
+final class PolicyCsvReading extends PolicyReading {
     /** The row fields, as the header row names them. */
     private List<String> columns = ROW_KEYS;
 
     PolicyCsvReading(Problems p, byte[] bytes) {
-        this.p = p;
-        this.bytes = bytes;
+        super(p, bytes);
     }
 
+    @Override
     Document read() {
         String text = new String(bytes, StandardCharsets.UTF_8);
         String[] lines = text.split("\r?\n", -1);
-        Map<String, String> values = new LinkedHashMap<>();
-        Map<String, Pos> at = new LinkedHashMap<>();
-        List<String> tasks = new ArrayList<>();
-        Rows rows = new Rows(p);
         boolean headerRow = false;
         boolean formatLine = false;
         boolean thresholdForm = false;
@@ -59,10 +53,7 @@ final class PolicyCsvReading {
                 String key = canonical(written);
                 String value = c.substring(colon + 1).trim();
                 int col = line.indexOf(':') + 2;
-                if (!TOP_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, TOP_KEYS);
-                    p.add(new Pos(ln, line.indexOf(written) + 1), "unknown key '" + Loading.shorten(key) + "'",
-                            near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
+                if (!known(key, TOP_KEYS, new Pos(ln, line.indexOf(written) + 1), false)) {
                     continue;
                 }
                 if (key.equals("tasks")) {
@@ -99,7 +90,7 @@ final class PolicyCsvReading {
                 }
                 continue;
             }
-            readRow(line, ln, rows);
+            readRow(line, ln);
         }
         if (!formatLine) {
             p.addPolicy(Pos.START, "not a dockline policy: the first line must be '# " + FORMAT + " " + VERSION + "'");
@@ -107,19 +98,10 @@ final class PolicyCsvReading {
         if (!headerRow) {
             p.addPolicy(new Pos(lines.length, 1), "no header row '" + CSV_HEADER + "'");
         }
-        Header h = header(p, Pos.START, values, at, tasks);
-        if (h == null) {
-            return null;
-        }
-        if (thresholdForm) {
-            dockline.policy.ThresholdPolicy tp = rows.thresholds(h, Pos.START);
-            return tp == null || p.any() ? null : new Document(h, new Policy(List.of()), tp);
-        }
-        Policy policy = rows.policy(h);
-        return policy == null || p.any() ? null : new Document(h, policy);
+        return document(Pos.START, thresholdForm);
     }
 
-    private void readRow(String line, int ln, Rows rows) {
+    private void readRow(String line, int ln) {
         Map<String, String> values = new LinkedHashMap<>();
         Map<String, Pos> at = new LinkedHashMap<>();
         int field = 0;

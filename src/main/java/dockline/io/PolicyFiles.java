@@ -1,20 +1,11 @@
 package dockline.io;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
-import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import dockline.arena.Action;
-import dockline.arena.ActionKind;
-import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.model.Objective;
 import dockline.model.Rational;
 import dockline.model.Relation;
 import dockline.policy.Policy;
-import dockline.policy.PolicyEntry;
 import dockline.policy.ThresholdPolicy;
-import dockline.policy.PolicyScore;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
@@ -23,15 +14,10 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Reads and writes exported robot policies in dockline's own plain formats, JSON or CSV chosen by
@@ -46,6 +32,10 @@ import java.util.regex.Pattern;
  * <p>Writing is atomic ({@link AtomicFiles}). Reading checks the format (not whether the policy is
  * any good: that is the certificate checker's job) and reports every problem at once as
  * {@code file:line:column: message}.
+ *
+ * <p>This class holds the format's records and keys; {@link PolicyWriting} writes both formats,
+ * {@link PolicyJsonReading} and {@link PolicyCsvReading} read them, checking the values with
+ * {@link PolicyFields} and the rows with {@link PolicyRows}.
  */
 public final class PolicyFiles {
 
@@ -224,7 +214,6 @@ public final class PolicyFiles {
     static final String OLD_CSV_SCORE_HEADER = "cell,level,budget-left,progress,score,action,to";
     static final String CSV_CLOSED_HEADER = CSV_HEADER + "," + CLOSED;
     static final String CSV_SCORE_CLOSED_HEADER = CSV_SCORE_HEADER + "," + CLOSED;
-    static final Pattern CELL = Pattern.compile("(\\d{1,6}):(\\d{1,6})");
 
     private PolicyFiles() {
     }
@@ -236,15 +225,7 @@ public final class PolicyFiles {
 
     /** Writes the policy atomically, as CSV for a {@code .csv} name, else as JSON. */
     public static void write(Path file, Header header, Policy policy) throws IOException {
-        AtomicFiles.write(file, out -> {
-            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-            if (isCsv(file)) {
-                writeCsv(w, header, policy);
-            } else {
-                writeJson(w, header, policy);
-            }
-            w.flush();
-        });
+        writeText(file, w -> PolicyWriting.write(w, isCsv(file), header, policy));
     }
 
     /**
@@ -258,206 +239,22 @@ public final class PolicyFiles {
         if (header.score().isPresent()) {
             throw new IllegalArgumentException("a threshold policy is for the reserve floor, not a discounted score");
         }
+        writeText(file, w -> PolicyWriting.write(w, isCsv(file), header, policy));
+    }
+
+    /** Text to be written through a {@link Writer}. */
+    private interface Text {
+        void writeTo(Writer w) throws IOException;
+    }
+
+    /** Writes the text in UTF-8, atomically ({@link AtomicFiles}). */
+    private static void writeText(Path file, Text text) throws IOException {
         AtomicFiles.write(file, out -> {
             Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-            if (isCsv(file)) {
-                writeThresholdCsv(w, header, policy);
-            } else {
-                writeThresholdJson(w, header, policy);
-            }
+            text.writeTo(w);
             w.flush();
         });
     }
-
-    static void writeThresholdJson(Writer w, Header h, ThresholdPolicy policy) throws IOException {
-        JsonFactory f = new JsonFactory();
-        try (JsonGenerator g = f.createGenerator(w)) {
-            g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
-            DefaultPrettyPrinter pp = new DefaultPrettyPrinter();
-            pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE);
-            g.setPrettyPrinter(pp);
-            g.writeStartObject();
-            writeHeadline(g, h, VERSION_THRESHOLDS);
-            g.writeArrayFieldStart("thresholds");
-            for (ThresholdPolicy.Row r : policy.rows()) {
-                for (ThresholdPolicy.Step st : r.steps()) {
-                    g.writeRawValue(compactStep(f, r, st));
-                }
-            }
-            g.writeEndArray();
-            g.writeEndObject();
-        }
-        w.write(System.lineSeparator());
-    }
-
-    static String compactStep(JsonFactory f, ThresholdPolicy.Row r, ThresholdPolicy.Step st) throws IOException {
-        java.io.StringWriter sw = new java.io.StringWriter();
-        try (JsonGenerator g = f.createGenerator(sw)) {
-            g.writeStartObject();
-            g.writeStringField("cell", r.cell().toString());
-            g.writeNumberField("budgetLeft", r.budgetLeft());
-            g.writeNumberField("progress", r.progress());
-            g.writeNumberField("atLeastUnits", st.atLeastUnits());
-            g.writeStringField("action", st.action().kind().word());
-            if (st.action().kind() == ActionKind.MOVE) {
-                g.writeStringField("to", st.action().target().toString());
-            }
-            if (!r.closures().isEmpty()) {
-                g.writeStringField(CLOSED, r.closures());
-            }
-            g.writeEndObject();
-        }
-        return sw.toString();
-    }
-
-    static void writeThresholdCsv(Writer w, Header h, ThresholdPolicy policy) throws IOException {
-        String nl = "\n";
-        w.write("# " + FORMAT + " " + VERSION_THRESHOLDS + nl);
-        w.write("# mission: " + h.mission().replace('\n', ' ').replace('\r', ' ') + nl);
-        w.write("# unitWh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
-        w.write("# reserveUnits: " + h.floorUnits() + nl);
-        w.write("# capacityUnits: " + h.capacityUnits() + nl);
-        w.write("# budget: " + h.budget() + nl);
-        w.write("# tasks: " + String.join(" ", h.tasks()) + nl);
-        boolean closed = policy.rows().stream().anyMatch(r -> !r.closures().isEmpty());
-        w.write((closed ? CSV_STEP_CLOSED_HEADER : CSV_STEP_HEADER) + nl);
-        StringBuilder sb = new StringBuilder();
-        for (ThresholdPolicy.Row r : policy.rows()) {
-            for (ThresholdPolicy.Step st : r.steps()) {
-                sb.setLength(0);
-                sb.append(r.cell()).append(',').append(r.budgetLeft()).append(',').append(r.progress()).append(',')
-                        .append(st.atLeastUnits()).append(',').append(st.action().kind().word()).append(',');
-                if (st.action().kind() == ActionKind.MOVE) {
-                    sb.append(st.action().target());
-                }
-                if (closed) {
-                    sb.append(',').append(r.closures().replace('\n', ' ').replace('\r', ' '));
-                }
-                w.write(sb.append(nl).toString());
-            }
-        }
-    }
-
-    static void writeJson(Writer w, Header h, Policy policy) throws IOException {
-        requireMatch(h, policy);
-        JsonFactory f = new JsonFactory();
-        try (JsonGenerator g = f.createGenerator(w)) {
-            g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
-            DefaultPrettyPrinter pp = new DefaultPrettyPrinter();
-            pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE);
-            g.setPrettyPrinter(pp);
-            g.writeStartObject();
-            writeHeadline(g, h, h.version());
-            if (h.score().isPresent()) {
-                ScoreTerms t = h.score().get();
-                g.writeStringField("objective", "discounted");
-                g.writeNumberField("discount", t.discount());
-                g.writeStringField("threshold", t.threshold().toString());
-                g.writeStringField("relation", t.relation().symbol());
-                g.writeNumberField("weightBoundUnits", t.weightBound());
-                g.writeBooleanField("reserveKept", t.reserveKept());
-            }
-            if (h.rounds().isPresent()) {
-                Rounds r = h.rounds().get();
-                g.writeStringField("goal", r.goal());
-                if (r.patrol()) {
-                    g.writeStringField("budgetPer", r.budgetPerLap() ? "lap" : "mission");
-                } else {
-                    g.writeNumberField("deadlineTicks", r.deadlineTicks());
-                }
-            }
-            g.writeArrayFieldStart("rows");
-            for (PolicyEntry e : policy.entries()) {
-                // one row per line: written compactly, placed raw by the pretty printer
-                g.writeRawValue(compactRow(f, e));
-            }
-            g.writeEndArray();
-            g.writeEndObject();
-        }
-        w.write(System.lineSeparator());
-    }
-
-    static String compactRow(JsonFactory f, PolicyEntry e) throws IOException {
-        java.io.StringWriter sw = new java.io.StringWriter();
-        try (JsonGenerator g = f.createGenerator(sw)) {
-            g.writeStartObject();
-            g.writeStringField("cell", e.cell().toString());
-            g.writeNumberField("levelUnits", e.level());
-            g.writeNumberField("budgetLeft", e.budgetLeft());
-            g.writeNumberField("progress", e.progress());
-            if (e.scored()) {
-                g.writeStringField("score", e.score().text());
-            }
-            g.writeStringField("action", e.action().kind().word());
-            if (e.action().kind() == ActionKind.MOVE) {
-                g.writeStringField("to", e.action().target().toString());
-            }
-            if (!e.closures().isEmpty()) {
-                g.writeStringField(CLOSED, e.closures());
-            }
-            g.writeEndObject();
-        }
-        return sw.toString();
-    }
-
-    /** A header with score terms goes with rows with a score memory, and only with them. */
-    static void requireMatch(Header h, Policy policy) {
-        if (policy.size() > 0 && policy.scored() != h.score().isPresent()) {
-            throw new IllegalArgumentException(h.score().isPresent()
-                    ? "a header with a discounted objective needs rows with a score memory"
-                    : "rows with a score memory need a header with the discounted objective");
-        }
-    }
-
-    static void writeCsv(Writer w, Header h, Policy policy) throws IOException {
-        requireMatch(h, policy);
-        String nl = "\n";
-        w.write("# " + FORMAT + " " + h.version() + nl);
-        w.write("# mission: " + h.mission().replace('\n', ' ').replace('\r', ' ') + nl);
-        w.write("# unitWh: " + h.unitWh().stripTrailingZeros().toPlainString() + nl);
-        w.write("# reserveUnits: " + h.floorUnits() + nl);
-        w.write("# capacityUnits: " + h.capacityUnits() + nl);
-        w.write("# budget: " + h.budget() + nl);
-        w.write("# tasks: " + String.join(" ", h.tasks()) + nl);
-        if (h.score().isPresent()) {
-            ScoreTerms t = h.score().get();
-            w.write("# objective: discounted" + nl);
-            w.write("# discount: " + t.discount() + nl);
-            w.write("# threshold: " + t.threshold() + nl);
-            w.write("# relation: " + t.relation().symbol() + nl);
-            w.write("# weightBoundUnits: " + t.weightBound() + nl);
-            w.write("# reserveKept: " + t.reserveKept() + nl);
-        }
-        if (h.rounds().isPresent()) {
-            Rounds r = h.rounds().get();
-            w.write("# goal: " + r.goal() + nl);
-            w.write(r.patrol() ? "# budgetPer: " + (r.budgetPerLap() ? "lap" : "mission") + nl
-                    : "# deadlineTicks: " + r.deadlineTicks() + nl);
-        }
-        boolean scored = h.score().isPresent();
-        boolean closed = policy.entries().stream().anyMatch(e -> !e.closures().isEmpty());
-        w.write((scored ? closed ? CSV_SCORE_CLOSED_HEADER : CSV_SCORE_HEADER : closed ? CSV_CLOSED_HEADER : CSV_HEADER) + nl);
-        StringBuilder sb = new StringBuilder();
-        for (PolicyEntry e : policy.entries()) {
-            sb.setLength(0);
-            sb.append(e.cell()).append(',').append(e.level()).append(',').append(e.budgetLeft()).append(',')
-                    .append(e.progress()).append(',');
-            if (scored) {
-                sb.append(e.score().text()).append(',');
-            }
-            sb.append(e.action().kind().word()).append(',');
-            if (e.action().kind() == ActionKind.MOVE) {
-                sb.append(e.action().target());
-            }
-            if (closed) {
-                // the last column: it may hold commas, the reader takes the rest of the line
-                sb.append(',').append(e.closures().replace('\n', ' ').replace('\r', ' '));
-            }
-            w.write(sb.append(nl).toString());
-        }
-    }
-
-    // ------------------------------------------------------------------ reading
 
     /**
      * Reads a policy file (CSV for a {@code .csv} name, else JSON).
@@ -483,344 +280,5 @@ public final class PolicyFiles {
         Document d = isCsv(file) ? new PolicyCsvReading(problems, bytes).read() : new PolicyJsonReading(problems, bytes).read();
         problems.throwIfAny();
         return d;
-    }
-
-    /** Collects rows, checks each, and builds the policy (reporting duplicates at their row). */
-    static final class Rows {
-        final Problems problems;
-        final List<PolicyEntry> entries = new ArrayList<>();
-        final List<Pos> positions = new ArrayList<>();
-        final Set<String> seen = new HashSet<>();
-
-        Rows(Problems problems) {
-            this.problems = problems;
-        }
-
-        void add(Pos pos, PolicyEntry e) {
-            String key = e.cell() + "/" + e.level() + "/" + e.budgetLeft() + "/" + e.progress()
-                    + (e.scored() ? "/" + e.score().text() : "") + "/" + e.closures();
-            if (!seen.add(key)) {
-                problems.add(pos, "a second row for cell " + e.cell() + ", level " + e.level() + ", budget left "
-                        + e.budgetLeft() + (e.closures().isEmpty() ? "" : " (" + e.closures() + ")") + ", progress " + e.progress() + (e.scored() ? ", score " + e.score() : ""),
-                        "keep one action per situation");
-                return;
-            }
-            entries.add(e);
-            positions.add(pos);
-        }
-
-        /**
-         * The threshold policy: the steps grouped by position, thresholds falling; a threshold file is for
-         * the reserve floor only.
-         */
-        ThresholdPolicy thresholds(Header h, Pos top) {
-            if (h.score().isPresent()) {
-                problems.addPolicy(top, "a threshold policy is for the reserve floor: leave out 'objective: discounted'");
-                return null;
-            }
-            for (int i = 0; i < entries.size(); i++) {
-                if (entries.get(i).scored()) {
-                    problems.addPolicy(positions.get(i), "a threshold has no 'score'");
-                }
-            }
-            if (problems.any()) {
-                return null;
-            }
-            Map<String, List<PolicyEntry>> byPosition = new java.util.LinkedHashMap<>();
-            for (PolicyEntry e : entries) {
-                byPosition.computeIfAbsent(e.cell() + "/" + e.budgetLeft() + "/" + e.progress() + "/" + e.closures(),
-                        k -> new ArrayList<>()).add(e);
-            }
-            List<ThresholdPolicy.Row> out = new ArrayList<>();
-            for (List<PolicyEntry> steps : byPosition.values()) {
-                steps.sort(java.util.Comparator.comparingInt(PolicyEntry::level).reversed());
-                List<ThresholdPolicy.Step> st = new ArrayList<>();
-                for (PolicyEntry e : steps) {
-                    st.add(new ThresholdPolicy.Step(e.level(), e.action()));
-                }
-                PolicyEntry first = steps.get(0);
-                out.add(new ThresholdPolicy.Row(first.cell(), first.budgetLeft(), first.progress(), first.closures(), st));
-            }
-            return new ThresholdPolicy(out);
-        }
-
-        /** The policy; every row has a score memory exactly when the header has the discounted objective. */
-        Policy policy(Header h) {
-            boolean scored = h.score().isPresent();
-            for (int i = 0; i < entries.size(); i++) {
-                if (entries.get(i).scored() != scored) {
-                    problems.add(positions.get(i), scored ? "row has no 'score' (the policy is for a discounted mission)"
-                            : "a row with a 'score' needs 'objective: discounted' in the header",
-                            scored ? "give the score memory, e.g. 3/8 or secured" : "see missions/POLICY-FORMAT.md");
-                }
-            }
-            return problems.any() ? null : new Policy(entries);
-        }
-    }
-
-    static Cell cell(String text) {
-        Matcher m = CELL.matcher(text.trim());
-        return m.matches() ? new Cell(Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2))) : null;
-    }
-
-    static String actionWords() {
-        List<String> w = new ArrayList<>();
-        for (ActionKind k : ActionKind.values()) {
-            w.add(k.word());
-        }
-        return String.join(", ", w);
-    }
-
-    /** Checks the fields of one row; reports problems at the given positions; null when bad. */
-    static PolicyEntry row(Problems p, Pos rowPos, Map<String, String> values, Map<String, Pos> at) {
-        if (values.containsKey("atLeastUnits")) {
-            // a threshold: the same fields as a row, its level being the threshold
-            values.put("levelUnits", values.remove("atLeastUnits"));
-            at.put("levelUnits", at.get("atLeastUnits"));
-        }
-        boolean ok = true;
-        for (String k : List.of("cell", "levelUnits", "budgetLeft", "progress", "action")) {
-            if (!values.containsKey(k)) {
-                p.addPolicy(rowPos, "row has no '" + k + "'");
-                ok = false;
-            }
-        }
-        if (!ok) {
-            return null;
-        }
-        Cell c = cell(values.get("cell"));
-        if (c == null) {
-            p.add(at.get("cell"), "'" + Loading.shorten(values.get("cell")) + "' is not a cell", "write x:y, e.g. 3:4");
-            ok = false;
-        }
-        int level = nonNegative(p, values, at, "levelUnits");
-        int budget = nonNegative(p, values, at, "budgetLeft");
-        int progress = nonNegative(p, values, at, "progress");
-        ok &= level >= 0 && budget >= 0 && progress >= 0;
-        PolicyScore score = null;
-        if (values.containsKey("score") && !values.get("score").isBlank()) {
-            try {
-                score = PolicyScore.parse(values.get("score"));
-            } catch (NumberFormatException e) {
-                p.add(at.get("score"), "'" + Loading.shorten(values.get("score")) + "' is not a score memory",
-                        "write the gap as n/q (e.g. -3/8, 2) or the word " + PolicyScore.SECURED_WORD);
-                ok = false;
-            }
-        }
-        ActionKind kind = ActionKind.ofWord(values.get("action").trim());
-        if (kind == null) {
-            p.add(at.get("action"), "unknown action '" + Loading.shorten(values.get("action")) + "'",
-                    "use one of " + actionWords());
-            return null;
-        }
-        String to = values.get("to");
-        Cell target = c;
-        if (kind == ActionKind.MOVE) {
-            if (to == null || to.isBlank()) {
-                p.addPolicy(at.getOrDefault("to", rowPos), "a move needs 'to', the cell it goes to");
-                return null;
-            }
-            target = cell(to);
-            if (target == null) {
-                p.add(at.get("to"), "'" + Loading.shorten(to) + "' is not a cell", "write x:y, e.g. 3:4");
-                return null;
-            }
-        } else if (to != null && !to.isBlank()) {
-            p.add(at.get("to"), "'" + kind.word() + "' stays on its cell and takes no 'to'", "leave 'to' out");
-            return null;
-        }
-        String closures = values.getOrDefault(CLOSED, "").trim();
-        return ok ? new PolicyEntry(c, level, budget, progress, new Action(kind, target), score, closures) : null;
-    }
-
-    static boolean knownVersion(String v) {
-        String t = v.trim();
-        return t.equals(String.valueOf(VERSION)) || t.equals(String.valueOf(VERSION_1))
-                || t.equals(String.valueOf(VERSION_WITH_SCORE)) || t.equals(String.valueOf(VERSION_THRESHOLDS));
-    }
-
-    static int nonNegative(Problems p, Map<String, String> values, Map<String, Pos> at, String key) {
-        String v = values.get(key).trim();
-        if (!v.matches("\\d{1,9}")) {
-            p.addPolicy(at.get(key), "'" + key + "' must be a whole number of at least 0, not '" + Loading.shorten(v) + "'");
-            return -1;
-        }
-        return Integer.parseInt(v);
-    }
-
-    static Header header(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at,
-                                 List<String> tasks) {
-        for (String k : List.of("mission", "unitWh", "reserveUnits", "capacityUnits", "budget")) {
-            if (!values.containsKey(k)) {
-                p.addPolicy(pos, "no '" + k + "' in the policy file");
-                return null;
-            }
-        }
-        BigDecimal unit;
-        try {
-            unit = Quantities.parseDecimal(values.get("unitWh"));
-            if (unit.signum() <= 0) {
-                p.addPolicy(at.get("unitWh"), "'unitWh' must be positive");
-                return null;
-            }
-        } catch (IllegalArgumentException e) {
-            p.addPolicy(at.get("unitWh"), e.getMessage());
-            return null;
-        }
-        int floor = nonNegative(p, values, at, "reserveUnits");
-        int cap = nonNegative(p, values, at, "capacityUnits");
-        int budget = nonNegative(p, values, at, "budget");
-        if (floor < 0 || cap < 0 || budget < 0) {
-            return null;
-        }
-        Optional<ScoreTerms> score = scoreTerms(p, pos, values, at);
-        if (score == null) {
-            return null;
-        }
-        Optional<Rounds> rounds = rounds(p, pos, values, at);
-        if (rounds == null) {
-            return null;
-        }
-        if (rounds.isPresent() && score.isPresent()) {
-            p.addPolicy(at.get("goal"), "a patrol or deadline policy has no discounted objective");
-            return null;
-        }
-        return new Header(values.get("mission"), unit, floor, cap, budget, tasks, score, rounds);
-    }
-
-    /** The goal beyond one trip of the header, empty for a one-trip policy, null after a problem. */
-    static Optional<Rounds> rounds(Problems p, Pos pos, Map<String, String> values, Map<String, Pos> at) {
-        String goal = values.get("goal");
-        if (goal == null || goal.trim().equals("visit")) {
-            for (String k : List.of("budgetPer", "deadlineTicks")) {
-                if (values.containsKey(k)) {
-                    p.add(at.get(k), "'" + k + "' belongs to a patrol or deadline policy",
-                            "add 'goal: " + (k.equals("budgetPer") ? "patrol" : "deadline") + "', or leave '" + k
-                            + "' out");
-                    return null;
-                }
-            }
-            return Optional.empty();
-        }
-        switch (goal.trim()) {
-            case Rounds.PATROL -> {
-                if (values.containsKey("deadlineTicks")) {
-                    p.add(at.get("deadlineTicks"), "'deadlineTicks' belongs to a deadline policy, not a patrol",
-                            "leave 'deadlineTicks' out");
-                    return null;
-                }
-                String per = values.getOrDefault("budgetPer", "mission").trim();
-                if (!per.equals("lap") && !per.equals("mission")) {
-                    p.addPolicy(at.get("budgetPer"), "'budgetPer' must be lap or mission, not '" + Loading.shorten(per)
-                            + "'");
-                    return null;
-                }
-                return Optional.of(new Rounds(Rounds.PATROL, per.equals("lap"), -1));
-            }
-            case Rounds.DEADLINE -> {
-                if (values.containsKey("budgetPer")) {
-                    p.add(at.get("budgetPer"), "'budgetPer' belongs to a patrol policy, not a deadline",
-                            "leave 'budgetPer' out");
-                    return null;
-                }
-                if (!values.containsKey("deadlineTicks")) {
-                    p.addPolicy(pos, "no 'deadlineTicks' in the policy file (it is for a deadline mission)");
-                    return null;
-                }
-                int t = nonNegative(p, values, at, "deadlineTicks");
-                return t < 0 ? null : Optional.of(new Rounds(Rounds.DEADLINE, false, t));
-            }
-            default -> {
-                p.addPolicy(at.get("goal"), "'goal' must be visit, patrol or deadline, not '" + Loading.shorten(goal)
-                        + "'");
-                return null;
-            }
-        }
-    }
-
-    /** The discounted objective of the header, empty for a reserve policy, null after a problem. */
-    static Optional<ScoreTerms> scoreTerms(Problems p, Pos pos, Map<String, String> values,
-                                                   Map<String, Pos> at) {
-        String kind = values.get("objective");
-        if (kind == null || kind.trim().equals("reserve")) {
-            for (String k : SCORE_KEYS.subList(1, SCORE_KEYS.size())) {
-                if (values.containsKey(k)) {
-                    p.add(at.get(k), "'" + k + "' belongs to a policy for a discounted mission",
-                            "add 'objective: discounted', or leave '" + k + "' out");
-                    return null;
-                }
-            }
-            return Optional.empty();
-        }
-        if (!kind.trim().equals("discounted")) {
-            p.addPolicy(at.get("objective"), "'objective' must be reserve or discounted, not '" + Loading.shorten(kind) + "'");
-            return null;
-        }
-        for (String k : List.of("discount", "threshold", "weightBoundUnits")) {
-            if (!values.containsKey(k)) {
-                p.addPolicy(pos, "no '" + k + "' in the policy file (it is for a discounted mission)");
-                return null;
-            }
-        }
-        boolean ok = true;
-        int d = nonNegative(p, values, at, "discount");
-        if (d >= 0 && d < 2) {
-            p.addPolicy(at.get("discount"), "'discount' must be a whole number of at least 2");
-            ok = false;
-        }
-        int mu = nonNegative(p, values, at, "weightBoundUnits");
-        ok &= d >= 0 && mu >= 0;
-        Rational v = null;
-        String t = values.get("threshold").trim();
-        if (t.matches("[+-]?\\d{1,18}(/\\d{1,18})?")) {
-            try {
-                v = Rational.parse(t);
-            } catch (NumberFormatException | ArithmeticException e) {
-                v = null;
-            }
-        }
-        if (v == null) {
-            p.addPolicy(at.get("threshold"), "'threshold' must be a rational n/q, not '" + Loading.shorten(t) + "'");
-            ok = false;
-        }
-        Relation rel = Relation.AT_LEAST;
-        if (values.containsKey("relation")) {
-            rel = switch (values.get("relation").trim()) {
-                case ">=", "at-least" -> Relation.AT_LEAST;
-                case ">", "above" -> Relation.ABOVE;
-                default -> null;
-            };
-            if (rel == null) {
-                p.addPolicy(at.get("relation"), "'relation' must be '>=' (at-least) or '>' (above)");
-                ok = false;
-            }
-        }
-        boolean kept = true;
-        if (values.containsKey("reserveKept")) {
-            String k = values.get("reserveKept").trim();
-            if (!k.equals("true") && !k.equals("false")) {
-                p.addPolicy(at.get("reserveKept"), "'reserveKept' must be true or false");
-                ok = false;
-            }
-            kept = k.equals("true");
-        }
-        return ok ? Optional.of(new ScoreTerms(d, v, rel, mu, kept)) : null;
-    }
-
-    /** The fields every policy file opens with: format, version, mission, unit, floor, capacity, budget, tasks. */
-    private static void writeHeadline(com.fasterxml.jackson.core.JsonGenerator g, Header h, int version)
-            throws IOException {
-        g.writeStringField("format", FORMAT);
-        g.writeNumberField("version", version);
-        g.writeStringField("mission", h.mission());
-        g.writeStringField("unitWh", h.unitWh().stripTrailingZeros().toPlainString());
-        g.writeNumberField("reserveUnits", h.floorUnits());
-        g.writeNumberField("capacityUnits", h.capacityUnits());
-        g.writeNumberField("budget", h.budget());
-        g.writeArrayFieldStart("tasks");
-        for (String t : h.tasks()) {
-            g.writeString(t);
-        }
-        g.writeEndArray();
     }
 }

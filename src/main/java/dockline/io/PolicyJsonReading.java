@@ -5,30 +5,29 @@ import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
-import dockline.policy.Policy;
+import dockline.io.PolicyFiles.Document;
 import dockline.policy.PolicyEntry;
 import java.io.IOException;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import static dockline.io.PolicyFields.knownVersion;
+import static dockline.io.PolicyFields.row;
 import static dockline.io.PolicyFiles.*;
 
 /** JSON through Jackson's streaming parser, so every value keeps its line and column. */
-final class PolicyJsonReading {
-    private final Problems p;
-    private final byte[] bytes;
+final class PolicyJsonReading extends PolicyReading {
 
     PolicyJsonReading(Problems p, byte[] bytes) {
-        this.p = p;
-        this.bytes = bytes;
+        super(p, bytes);
     }
 
     private static Pos pos(JsonLocation l) {
         return new Pos(l.getLineNr(), l.getColumnNr());
     }
 
+    @Override
     Document read() {
         JsonFactory f = new JsonFactory();
         try (JsonParser j = f.createParser(bytes)) {
@@ -36,24 +35,16 @@ final class PolicyJsonReading {
                 p.add(pos(j.currentTokenLocation()), "a policy file in JSON is one object", "see missions/POLICY-FORMAT.md");
                 return null;
             }
-            Map<String, String> values = new LinkedHashMap<>();
-            Map<String, Pos> at = new LinkedHashMap<>();
-            List<String> tasks = new ArrayList<>();
-            Rows rows = new Rows(p);
             boolean sawRows = false;
             boolean sawThresholds = false;
             Pos top = pos(j.currentTokenLocation());
-            while (j.nextToken() == JsonToken.FIELD_NAME) {
-                String key = canonical(j.currentName());
-                Pos kp = pos(j.currentTokenLocation());
-                JsonToken t = j.nextToken();
-                Pos vp = pos(j.currentTokenLocation());
-                if (!TOP_KEYS.contains(key)) {
-                    String near = Spelling.closest(key, TOP_KEYS);
-                    p.add(kp, "unknown key '" + Loading.shorten(key) + "'", near != null ? "did you mean '" + near + "'?" : "missions/POLICY-FORMAT.md lists the keys");
-                    j.skipChildren();
+            for (Field field = next(j, TOP_KEYS, false); field != null; field = next(j, TOP_KEYS, false)) {
+                if (field == UNKNOWN) {
                     continue;
                 }
+                String key = field.key();
+                JsonToken t = field.token();
+                Pos vp = field.valuePos();
                 switch (key) {
                     case "tasks" -> {
                         if (t != JsonToken.START_ARRAY) {
@@ -70,36 +61,24 @@ final class PolicyJsonReading {
                             }
                         }
                     }
-                    case "thresholds" -> {
-                        sawThresholds = true;
+                    case "thresholds", "rows" -> {
+                        boolean thresholds = key.equals("thresholds");
+                        sawThresholds |= thresholds;
+                        sawRows |= !thresholds;
                         if (t != JsonToken.START_ARRAY) {
-                            p.addPolicy(vp, "'thresholds' must be a list of thresholds");
+                            p.addPolicy(vp, "'" + key + "' must be a list of " + key);
                             j.skipChildren();
                             continue;
                         }
                         while (j.nextToken() != JsonToken.END_ARRAY) {
-                            readRow(j, rows, JSON_STEP_KEYS);
-                        }
-                    }
-                    case "rows" -> {
-                        sawRows = true;
-                        if (t != JsonToken.START_ARRAY) {
-                            p.addPolicy(vp, "'rows' must be a list of rows");
-                            j.skipChildren();
-                            continue;
-                        }
-                        while (j.nextToken() != JsonToken.END_ARRAY) {
-                            readRow(j, rows, JSON_ROW_KEYS);
+                            readRow(j, thresholds ? JSON_STEP_KEYS : JSON_ROW_KEYS);
                         }
                     }
                     default -> {
-                        if (!t.isScalarValue()) {
-                            p.addPolicy(vp, "'" + key + "' must be a single value");
-                            j.skipChildren();
-                            continue;
+                        if (scalar(j, field)) {
+                            values.put(key, j.getText());
+                            at.put(key, vp);
                         }
-                        values.put(key, j.getText());
-                        at.put(key, vp);
                     }
                 }
             }
@@ -120,16 +99,7 @@ final class PolicyJsonReading {
                     && !values.get("version").trim().equals(String.valueOf(VERSION_THRESHOLDS))) {
                 p.addPolicy(at.get("version"), "'thresholds' need format version " + VERSION_THRESHOLDS);
             }
-            Header h = header(p, top, values, at, tasks);
-            if (h == null) {
-                return null;
-            }
-            if (sawThresholds) {
-                dockline.policy.ThresholdPolicy tp = rows.thresholds(h, top);
-                return tp == null || p.any() ? null : new Document(h, new Policy(List.of()), tp);
-            }
-            Policy policy = rows.policy(h);
-            return policy == null || p.any() ? null : new Document(h, policy);
+            return document(top, sawThresholds);
         } catch (JsonParseException e) {
             p.addPolicy(pos(e.getLocation()), "not valid JSON: " + e.getOriginalMessage());
             return null;
@@ -139,7 +109,7 @@ final class PolicyJsonReading {
         }
     }
 
-    private void readRow(JsonParser j, Rows rows, List<String> keys) throws IOException {
+    private void readRow(JsonParser j, List<String> keys) throws IOException {
         Pos rp = pos(j.currentTokenLocation());
         if (j.currentToken() != JsonToken.START_OBJECT) {
             p.addPolicy(rp, "a row is an object with " + String.join(", ", SCORE_ROW_KEYS) + " (score for a discounted mission)");
@@ -149,31 +119,53 @@ final class PolicyJsonReading {
         Map<String, String> values = new LinkedHashMap<>();
         Map<String, Pos> at = new LinkedHashMap<>();
         boolean bad = false;
-        while (j.nextToken() == JsonToken.FIELD_NAME) {
-            String key = canonical(j.currentName());
-            Pos kp = pos(j.currentTokenLocation());
-            JsonToken t = j.nextToken();
-            Pos vp = pos(j.currentTokenLocation());
-            if (!keys.contains(key)) {
-                String near = Spelling.closest(key, keys);
-                p.add(kp, "unknown key '" + Loading.shorten(key) + "' in a row", near != null ? "did you mean '" + near + "'?"
-                        : "missions/POLICY-FORMAT.md lists the keys of a row");
-                j.skipChildren();
+        for (Field f = next(j, keys, true); f != null; f = next(j, keys, true)) {
+            if (f == UNKNOWN || !scalar(j, f)) {
                 bad = true;
                 continue;
             }
-            if (!t.isScalarValue()) {
-                p.addPolicy(vp, "'" + key + "' must be a single value");
-                j.skipChildren();
-                bad = true;
-                continue;
-            }
-            values.put(key, j.getText());
-            at.put(key, vp);
+            values.put(f.key(), j.getText());
+            at.put(f.key(), f.valuePos());
         }
         PolicyEntry e = row(p, rp, values, at);
         if (e != null && !bad) {
             rows.add(rp, e);
         }
+    }
+
+    /** A key of an object, where it stands, and its value's first token and where that stands. */
+    private record Field(String key, Pos keyPos, JsonToken token, Pos valuePos) {
+    }
+
+    /** What {@link #next} gives for a key that is not one of the keys (reported, its value skipped). */
+    private static final Field UNKNOWN = new Field("", Pos.START, JsonToken.VALUE_NULL, Pos.START);
+
+    /**
+     * The next key of the object (keys of earlier versions renamed) with the parser on its value, or
+     * {@code null} at the object's end; {@link #UNKNOWN} after reporting a key not in {@code keys}.
+     */
+    private Field next(JsonParser j, List<String> keys, boolean inRow) throws IOException {
+        if (j.nextToken() != JsonToken.FIELD_NAME) {
+            return null;
+        }
+        String key = canonical(j.currentName());
+        Pos kp = pos(j.currentTokenLocation());
+        JsonToken t = j.nextToken();
+        Pos vp = pos(j.currentTokenLocation());
+        if (!known(key, keys, kp, inRow)) {
+            j.skipChildren();
+            return UNKNOWN;
+        }
+        return new Field(key, kp, t, vp);
+    }
+
+    /** Whether the field's value is a single value; if not, reports it and skips the value. */
+    private boolean scalar(JsonParser j, Field f) throws IOException {
+        if (f.token().isScalarValue()) {
+            return true;
+        }
+        p.addPolicy(f.valuePos(), "'" + f.key() + "' must be a single value");
+        j.skipChildren();
+        return false;
     }
 }
