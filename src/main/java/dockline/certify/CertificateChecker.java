@@ -122,6 +122,21 @@ public final class CertificateChecker {
         return new Certificate(true, reason, n, worst[0], longest[0], floor, start);
     }
 
+    /**
+     * Task progress in words, e.g. {@code 1 of 2 tasks done (pharmacy)}: the checker's wording, which the
+     * replays use too, so that a step reads the same in a certificate's reason and in a replay.
+     */
+    public static String progressWords(Mission mission, int mask) {
+        List<String> visit = mission.tasks().visit();
+        List<String> done = new ArrayList<>();
+        for (int i = 0; i < visit.size(); i++) {
+            if ((mask & (1 << i)) != 0) {
+                done.add(visit.get(i));
+            }
+        }
+        return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
+    }
+
     /** Wording of states, steps and problems for the certificate's reason. */
     static final class Words extends LoopWords<ClosedLoop> {
 
@@ -136,14 +151,7 @@ public final class CertificateChecker {
         }
 
         String tasks(int mask) {
-            List<String> visit = mission.tasks().visit();
-            List<String> done = new ArrayList<>();
-            for (int i = 0; i < visit.size(); i++) {
-                if ((mask & (1 << i)) != 0) {
-                    done.add(visit.get(i));
-                }
-            }
-            return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
+            return progressWords(mission, mask);
         }
 
         String outcome(int e) {

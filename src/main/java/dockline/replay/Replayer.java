@@ -526,13 +526,6 @@ public final class Replayer {
 
     /** Task progress in words, e.g. {@code 1 of 2 tasks done (pharmacy)}. */
     static String progressWords(Mission mission, int mask) {
-        List<String> visit = mission.tasks().visit();
-        List<String> done = new ArrayList<>();
-        for (int i = 0; i < visit.size(); i++) {
-            if ((mask & (1 << i)) != 0) {
-                done.add(visit.get(i));
-            }
-        }
-        return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
+        return CertificateChecker.progressWords(mission, mask);
     }
 }
