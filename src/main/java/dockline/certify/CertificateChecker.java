@@ -100,19 +100,13 @@ public final class CertificateChecker {
                     floor, start);
         }
         int n = loop.nodeCount();
-        int[] worst = new int[n];
+        int[] worst = loop.lowestLevels(order);
         int[] longest = new int[n];
         for (int i = n - 1; i >= 0; i--) {
             int v = order[i];
-            int lo = loop.level(v);
-            int len = 0;
             for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
-                int t = loop.succNode(s);
-                lo = Math.min(lo, worst[t]);
-                len = Math.max(len, longest[t] + 1);
+                longest[v] = Math.max(longest[v], longest[loop.succNode(s)] + 1);
             }
-            worst[v] = lo;
-            longest[v] = len;
         }
         EnergyScale scale = loop.arena().mission().scale();
         String reason = "every run of the policy from " + loop.cell(0) + " with " + w.units(start)

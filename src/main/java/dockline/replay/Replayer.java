@@ -53,13 +53,12 @@ public final class Replayer {
     public static Replay worstCase(ClosedLoop loop) {
         int[] order = requireAcyclic(loop);
         int n = loop.nodeCount();
-        int[] worst = new int[n];
+        // the outcome towards the lowest level reachable, the longer run on a tie
+        int[] worst = loop.lowestLevels(order);
         int[] length = new int[n];
         int[] best = new int[n];
         for (int i = n - 1; i >= 0; i--) {
             int v = order[i];
-            int lo = loop.level(v);
-            int len = 0;
             int pick = -1;
             for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
                 int t = loop.succNode(s);
@@ -68,13 +67,7 @@ public final class Replayer {
                     pick = s;
                 }
             }
-            if (pick >= 0) {
-                int t = loop.succNode(pick);
-                lo = Math.min(lo, worst[t]);
-                len = length[t] + 1;
-            }
-            worst[v] = lo;
-            length[v] = len;
+            length[v] = pick < 0 ? 0 : length[loop.succNode(pick)] + 1;
             best[v] = pick;
         }
         Walk w = walkLoop(loop, (node, step) -> best[node], loop.floor());

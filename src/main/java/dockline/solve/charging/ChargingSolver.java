@@ -5,6 +5,7 @@ import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.MinMaxSearch;
+import dockline.util.Csr;
 import dockline.util.IntArrayList;
 import dockline.util.Progress;
 import java.util.Arrays;
@@ -144,7 +145,7 @@ public final class ChargingSolver {
             search.reset();
             // every robot vertex (cell and disturbance state: budget left, and closures with lasting events)
             for (int p = 0; p < robotN; p++) {
-                if (good[p] || goal.accepting(p % gc, arena.isDock(arena.cell(p / gc)))) {
+                if (good[p] || search.completes(p)) {
                     search.addTarget(p);
                 }
             }
@@ -152,11 +153,10 @@ public final class ChargingSolver {
             search.run(usable, INFINITE, -1, Progress.Tracker.NONE);
             int added = 0;
             for (int p = 0; p < robotN; p++) {
-                int r = p / gc;
-                int g = p - r * gc;
-                if (good[p] || goal.accepting(g, arena.isDock(arena.cell(r)))) {
+                if (good[p] || search.completes(p)) {
                     continue;
                 }
+                int r = p / gc;
                 int x = search.isFinal(p) ? search.need(p) : INFINITE;
                 if (x < best[p]) {
                     best[p] = x;
@@ -225,22 +225,16 @@ public final class ChargingSolver {
             this.good = good;
             this.rounds = rounds;
             this.goodDocks = goodDocks;
+            // the entries grouped by position by a counting sort; improvements were recorded round by round,
+            // so each position's entries come in falling thresholds
             int n = need.length;
-            this.entryStart = new int[n + 1];
-            for (int p : impPos) {
-                entryStart[p + 1]++;
-            }
-            for (int p = 0; p < n; p++) {
-                entryStart[p + 1] += entryStart[p];
-            }
+            this.entryStart = Csr.reverseOffsets(n, impPos.length, impPos);
+            int[] order = Csr.reverseEdges(n, impPos, entryStart);
             this.entryNeed = new int[impPos.length];
             this.entryEdge = new int[impPos.length];
-            int[] fill = Arrays.copyOf(entryStart, n);
-            // improvements were recorded round by round, so each position's entries come in falling thresholds
-            for (int i = 0; i < impPos.length; i++) {
-                int at = fill[impPos[i]]++;
-                entryNeed[at] = impNeed[i];
-                entryEdge[at] = impEdge[i];
+            for (int at = 0; at < order.length; at++) {
+                entryNeed[at] = impNeed[order[at]];
+                entryEdge[at] = impEdge[order[at]];
             }
         }
 

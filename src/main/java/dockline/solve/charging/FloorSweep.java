@@ -137,16 +137,12 @@ public final class FloorSweep extends MinMaxSearch {
         final int INF = ChargingSolver.INFINITE;
         Arrays.fill(need, INF);
         long dockPositions = 0;
-        for (int r = 0; r < rc; r++) {
-            boolean dock = arena.isDock(arena.cell(r));
-            dockPositions += dock ? gc : 0;
-            for (int g = 0; g < gc; g++) {
-                if (goal.accepting(g, dock)) {
-                    int p = r * gc + g;
-                    need[p] = 0;
-                    pending[p] = true;
-                    heap.push(0, p);
-                }
+        for (int p = 0; p < need.length; p++) {
+            dockPositions += arena.isDock(arena.cell(p / gc)) ? 1 : 0;
+            if (completes(p)) {
+                need[p] = 0;
+                pending[p] = true;
+                heap.push(0, p);
             }
         }
         int g0 = solver.startGoal();
@@ -227,11 +223,11 @@ public final class FloorSweep extends MinMaxSearch {
             return false;
         }
         pending[u] = false;
-        int r = u / gc;
-        if (!good[u] && !goal.accepting(u - r * gc, arena.isDock(arena.cell(r)))) {
+        if (!good[u] && !completes(u)) {
+            int r = u / gc;
             histPos.add(u);
             histNeed.add(x);
-            histEdge.add(arena.outBegin(r) + choice[u] - 1);
+            histEdge.add(chosenEdge(u));
             if (solver.chargeEdge(r) >= 0) {
                 docks.push(x, u);
             }
@@ -290,12 +286,9 @@ public final class FloorSweep extends MinMaxSearch {
         int[] v = new int[n];
         Arrays.fill(v, ChargingSolver.INFINITE);
         boolean[] g = new boolean[n];
-        for (int r = 0; r < rc; r++) {
-            boolean dock = arena.isDock(arena.cell(r));
-            for (int s = 0; s < gc; s++) {
-                if (goal.accepting(s, dock)) {
-                    v[r * gc + s] = 0;
-                }
+        for (int p = 0; p < n; p++) {
+            if (completes(p)) {
+                v[p] = 0;
             }
         }
         int t = batchEnd.get(batches - 1);

@@ -245,15 +245,9 @@ public final class MinChargeSolver {
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
         boolean feasible = available >= 0 && startP >= 0;
         if (feasible || !stopEarly && startP >= 0 || mode == Mode.ALL) {
-            for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-                int c = arena.freeCell(slot);
-                boolean dock = arena.isDock(c);
-                for (int g = 0; g < gc; g++) {
-                    if (goal.accepting(g, dock)) {
-                        for (int k = 0; k < arena.stateCount(); k++) {
-                            search.addTarget(arena.robotVertexInState(c, k) * gc + g);
-                        }
-                    }
+            for (int p = 0; p < robotN; p++) {
+                if (search.completes(p)) {
+                    search.addTarget(p);
                 }
             }
         }

@@ -161,6 +161,15 @@ public abstract class MinMaxSearch {
         return gc;
     }
 
+    /**
+     * Whether robot position p completes the mission: its goal state accepts on its cell (all tasks done,
+     * on a dock when the mission asks for one).
+     */
+    public final boolean completes(int p) {
+        int r = p / gc;
+        return goal.accepting(p - r * gc, arena.isDock(arena.cell(r)));
+    }
+
     /** The current value of robot position p. */
     public final int need(int p) {
         return need[p];
