@@ -176,7 +176,8 @@ public final class ResolutionBench {
         if (g0 == GoalAutomaton.REJECT) {
             return 0;
         }
-        VisitQueue queue = new VisitQueue(Math.multiplyExact(arena.vertexCount(), gc));
+        int n = Math.multiplyExact(arena.vertexCount(), gc);
+        VisitQueue queue = new VisitQueue(n, n); // the baseline allocates its whole queue up front, as it always did
         queue.visit(arena.startVertex() * gc + g0);
         while (queue.hasNext()) {
             int p = queue.next();

@@ -21,8 +21,16 @@ public final class VisitQueue {
 
     /** An empty queue over the ints {@code 0..n-1}, none visited. */
     public VisitQueue(int n) {
+        this(n, 1024);
+    }
+
+    /**
+     * The same with room for {@code capacity} ints before the queue first grows (n for a search that is
+     * known to reach most of them, such as a benchmark's baseline, so that it never copies).
+     */
+    public VisitQueue(int n, int capacity) {
         this.seen = new boolean[n];
-        this.queue = new int[Math.max(1, Math.min(n, 1024))];
+        this.queue = new int[Math.max(1, Math.min(n, capacity))];
     }
 
     /** Marks {@code x} visited and queues it, unless it was visited before; whether it was new. */
