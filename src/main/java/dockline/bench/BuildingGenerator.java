@@ -7,6 +7,7 @@ import dockline.model.EventKind;
 import dockline.model.EventRule;
 import dockline.model.Terrain;
 import dockline.model.Zone;
+import dockline.util.VisitQueue;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -389,9 +390,8 @@ public final class BuildingGenerator {
      * and the region behind it is flooded at once, so each region costs one door.
      */
     private void connect() {
-        boolean[] seen = new boolean[side * side];
-        int[] queue = new int[side * side];
-        flood(lines.get(0), lines.get(0), seen, queue);
+        VisitQueue seen = new VisitQueue(side * side);
+        flood(lines.get(0), lines.get(0), seen);
         boolean added = true;
         while (added) {
             added = false;
@@ -401,16 +401,17 @@ public final class BuildingGenerator {
                         continue;
                     }
                     int[] behind = null;
-                    if (free(x - 1, y) && free(x + 1, y) && seen[y * side + x - 1] != seen[y * side + x + 1]) {
-                        behind = seen[y * side + x - 1] ? new int[] {x + 1, y} : new int[] {x - 1, y};
-                    } else if (free(x, y - 1) && free(x, y + 1) && seen[(y - 1) * side + x] != seen[(y + 1) * side + x]) {
-                        behind = seen[(y - 1) * side + x] ? new int[] {x, y + 1} : new int[] {x, y - 1};
+                    if (free(x - 1, y) && free(x + 1, y) && seen.seen(y * side + x - 1) != seen.seen(y * side + x + 1)) {
+                        behind = seen.seen(y * side + x - 1) ? new int[] {x + 1, y} : new int[] {x - 1, y};
+                    } else if (free(x, y - 1) && free(x, y + 1)
+                            && seen.seen((y - 1) * side + x) != seen.seen((y + 1) * side + x)) {
+                        behind = seen.seen((y - 1) * side + x) ? new int[] {x, y + 1} : new int[] {x, y - 1};
                     }
                     if (behind != null) {
                         g[y][x] = DOOR;
                         roomDoors.add(new Cell(x, y));
-                        seen[y * side + x] = true;
-                        flood(behind[0], behind[1], seen, queue);
+                        seen.mark(y * side + x);
+                        flood(behind[0], behind[1], seen);
                         added = true;
                     }
                 }
@@ -422,23 +423,18 @@ public final class BuildingGenerator {
         return g[y][x] != WALL;
     }
 
-    /** Marks every free cell reachable from (sx, sy) through unmarked free cells. */
-    private void flood(int sx, int sy, boolean[] seen, int[] queue) {
-        int head = 0;
-        int tail = 0;
-        seen[sy * side + sx] = true;
-        queue[tail++] = sy * side + sx;
-        while (head < tail) {
-            int c = queue[head++];
+    /** Marks every free cell reachable from (sx, sy) through unmarked free cells (the queue is left empty). */
+    private void flood(int sx, int sy, VisitQueue seen) {
+        seen.visit(sy * side + sx);
+        while (seen.hasNext()) {
+            int c = seen.next();
             int x = c % side;
             int y = c / side;
             for (int i = 0; i < 4; i++) {
                 int nx = x + DX4[i];
                 int ny = y + DY4[i];
-                int n = ny * side + nx;
-                if (g[ny][nx] != WALL && !seen[n]) {
-                    seen[n] = true;
-                    queue[tail++] = n;
+                if (g[ny][nx] != WALL) {
+                    seen.visit(ny * side + nx);
                 }
             }
         }

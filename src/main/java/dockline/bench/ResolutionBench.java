@@ -12,6 +12,7 @@ import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
 import dockline.plan.Route;
 import dockline.replay.Replay;
+import dockline.util.VisitQueue;
 import java.math.BigDecimal;
 import java.util.Locale;
 
@@ -171,37 +172,27 @@ public final class ResolutionBench {
     /** Breadth-first search from the start over arena × goal (every vertex, both players); returns vertices seen. */
     static int bfs(Arena arena, GoalAutomaton goal) {
         int gc = goal.stateCount();
-        int n = Math.multiplyExact(arena.vertexCount(), gc);
-        boolean[] seen = new boolean[n];
-        int[] queue = new int[n];
-        int head = 0;
-        int tail = 0;
         int g0 = goal.initial(arena.cellZones(arena.cell(arena.startVertex())));
         if (g0 == GoalAutomaton.REJECT) {
             return 0;
         }
-        int s = arena.startVertex() * gc + g0;
-        seen[s] = true;
-        queue[tail++] = s;
-        while (head < tail) {
-            int p = queue[head++];
+        int n = Math.multiplyExact(arena.vertexCount(), gc);
+        VisitQueue queue = new VisitQueue(n, n); // the baseline allocates its whole queue up front, as it always did
+        queue.visit(arena.startVertex() * gc + g0);
+        while (queue.hasNext()) {
+            int p = queue.next();
             int v = p / gc;
             int g = p - v * gc;
             boolean robot = arena.isRobot(v);
             for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
                 int t = arena.target(e);
                 int g2 = robot ? g : goal.step(g, arena.cellZones(arena.cell(t)));
-                if (g2 == GoalAutomaton.REJECT) {
-                    continue;
-                }
-                int q = t * gc + g2;
-                if (!seen[q]) {
-                    seen[q] = true;
-                    queue[tail++] = q;
+                if (g2 != GoalAutomaton.REJECT) {
+                    queue.visit(t * gc + g2);
                 }
             }
         }
-        return tail;
+        return queue.visited();
     }
 
     private static final java.lang.management.ThreadMXBean THREADS =

@@ -100,19 +100,13 @@ public final class CertificateChecker {
                     floor, start);
         }
         int n = loop.nodeCount();
-        int[] worst = new int[n];
+        int[] worst = loop.lowestLevels(order);
         int[] longest = new int[n];
         for (int i = n - 1; i >= 0; i--) {
             int v = order[i];
-            int lo = loop.level(v);
-            int len = 0;
             for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
-                int t = loop.succNode(s);
-                lo = Math.min(lo, worst[t]);
-                len = Math.max(len, longest[t] + 1);
+                longest[v] = Math.max(longest[v], longest[loop.succNode(s)] + 1);
             }
-            worst[v] = lo;
-            longest[v] = len;
         }
         EnergyScale scale = loop.arena().mission().scale();
         String reason = "every run of the policy from " + loop.cell(0) + " with " + w.units(start)
@@ -120,6 +114,21 @@ public final class CertificateChecker {
                 + w.units(worst[0]) + " (reserve floor " + w.units(floor) + "); " + n + " states checked, longest run "
                 + longest[0] + " steps; " + scale.describe();
         return new Certificate(true, reason, n, worst[0], longest[0], floor, start);
+    }
+
+    /**
+     * Task progress in words, e.g. {@code 1 of 2 tasks done (pharmacy)}: the checker's wording, which the
+     * replays use too, so that a step reads the same in a certificate's reason and in a replay.
+     */
+    public static String progressWords(Mission mission, int mask) {
+        List<String> visit = mission.tasks().visit();
+        List<String> done = new ArrayList<>();
+        for (int i = 0; i < visit.size(); i++) {
+            if ((mask & (1 << i)) != 0) {
+                done.add(visit.get(i));
+            }
+        }
+        return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
     }
 
     /** Wording of states, steps and problems for the certificate's reason. */
@@ -136,14 +145,7 @@ public final class CertificateChecker {
         }
 
         String tasks(int mask) {
-            List<String> visit = mission.tasks().visit();
-            List<String> done = new ArrayList<>();
-            for (int i = 0; i < visit.size(); i++) {
-                if ((mask & (1 << i)) != 0) {
-                    done.add(visit.get(i));
-                }
-            }
-            return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
+            return progressWords(mission, mask);
         }
 
         String outcome(int e) {

@@ -235,6 +235,23 @@ public final class ClosedLoop extends LoopNodes {
         return arena.closures(nodeVertex.get(node));
     }
 
+    /**
+     * Per node the lowest battery level any run from it can reach, the node's own level included: a
+     * backward pass over a topological order ({@link #topologicalOrder()}) of this acyclic loop, O(N + E).
+     */
+    public int[] lowestLevels(int[] order) {
+        int[] lowest = new int[nodeCount()];
+        for (int i = order.length - 1; i >= 0; i--) {
+            int v = order[i];
+            int lo = level(v);
+            for (int s = succBegin(v); s < succEnd(v); s++) {
+                lo = Math.min(lo, lowest[succNode(s)]);
+            }
+            lowest[v] = lo;
+        }
+        return lowest;
+    }
+
     /** The level after following outcome edge {@code e} from level {@code level} (saturated at capacity). */
     public int levelAfter(int level, int e) {
         return (int) Math.min(capacity, (long) level + arena.weight(e));

@@ -11,17 +11,12 @@ import dockline.util.MonotoneSearch;
  * "guaranteed or not?" for one mission variant. Exact because winning is monotone in the start level
  * (more charge never hurts: saturation is monotone), in the floor (a run above f is above any lower
  * floor) and in the budget (fewer disturbances leave the disturbance fewer choices).
- * O(log range) solves each.
+ * O(log range) solves each, through the one bisection helper {@link MonotoneSearch}.
+ *
+ * @param mission the mission whose variants are probed
+ * @param options the product route's settings for every probe
  */
-public final class Bisection {
-
-    private final Mission mission;
-    private final ProductOptions options;
-
-    public Bisection(Mission mission, ProductOptions options) {
-        this.mission = mission;
-        this.options = options;
-    }
+public record Bisection(Mission mission, ProductOptions options) {
 
     /** The mission with the floor and start level given in units (exact: k units are k·unit Wh). */
     static Mission variant(Mission m, int floorUnits, int startUnits) {

@@ -53,13 +53,12 @@ public final class Replayer {
     public static Replay worstCase(ClosedLoop loop) {
         int[] order = requireAcyclic(loop);
         int n = loop.nodeCount();
-        int[] worst = new int[n];
+        // the outcome towards the lowest level reachable, the longer run on a tie
+        int[] worst = loop.lowestLevels(order);
         int[] length = new int[n];
         int[] best = new int[n];
         for (int i = n - 1; i >= 0; i--) {
             int v = order[i];
-            int lo = loop.level(v);
-            int len = 0;
             int pick = -1;
             for (int s = loop.succBegin(v); s < loop.succEnd(v); s++) {
                 int t = loop.succNode(s);
@@ -68,13 +67,7 @@ public final class Replayer {
                     pick = s;
                 }
             }
-            if (pick >= 0) {
-                int t = loop.succNode(pick);
-                lo = Math.min(lo, worst[t]);
-                len = length[t] + 1;
-            }
-            worst[v] = lo;
-            length[v] = len;
+            length[v] = pick < 0 ? 0 : length[loop.succNode(pick)] + 1;
             best[v] = pick;
         }
         Walk w = walkLoop(loop, (node, step) -> best[node], loop.floor());
@@ -526,13 +519,6 @@ public final class Replayer {
 
     /** Task progress in words, e.g. {@code 1 of 2 tasks done (pharmacy)}. */
     static String progressWords(Mission mission, int mask) {
-        List<String> visit = mission.tasks().visit();
-        List<String> done = new ArrayList<>();
-        for (int i = 0; i < visit.size(); i++) {
-            if ((mask & (1 << i)) != 0) {
-                done.add(visit.get(i));
-            }
-        }
-        return done.size() + " of " + visit.size() + " tasks done" + (done.isEmpty() ? "" : " (" + String.join(", ", done) + ")");
+        return CertificateChecker.progressWords(mission, mask);
     }
 }

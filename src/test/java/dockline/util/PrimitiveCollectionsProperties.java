@@ -15,10 +15,15 @@ import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Size;
+import org.jgrapht.Graph;
+import org.jgrapht.graph.DefaultDirectedGraph;
+import org.jgrapht.graph.DefaultEdge;
+import org.jgrapht.traverse.BreadthFirstIterator;
 
 /**
  * The primitive collections against the JDK's own collections as the reference ({@link HashMap},
- * {@link ArrayList}): the same sequence of operations gives the same answers.
+ * {@link ArrayList}), and the visit queue against jgrapht's breadth-first iterator: the same sequence
+ * of operations gives the same answers.
  */
 class PrimitiveCollectionsProperties {
 
@@ -72,6 +77,62 @@ class PrimitiveCollectionsProperties {
         assertThat(a.toArray()).containsExactly(ref.stream().mapToInt(Integer::intValue).toArray());
         for (int i = 0; i < ref.size(); i++) {
             assertThat(a.get(i)).isEqualTo(ref.get(i));
+        }
+    }
+
+    /**
+     * The visit queue's breadth-first search against jgrapht's {@link BreadthFirstIterator} (the reference
+     * library's own breadth-first order): the same ints in the same order, marked ints never entered. Up to
+     * 3,000 ints, so the queue grows past its first 1,024 slots.
+     */
+    @Property(tries = 100)
+    void visitQueue_agreesWithJgraphtBreadthFirst(@ForAll @IntRange(min = 1, max = 3000) int n,
+                                                  @ForAll @IntRange(min = 0, max = 4) int degree,
+                                                  @ForAll long seed) {
+        java.util.Random rnd = new java.util.Random(seed);
+        Graph<Integer, DefaultEdge> graph = new DefaultDirectedGraph<>(DefaultEdge.class);
+        List<List<Integer>> out = new ArrayList<>();
+        boolean[] marked = new boolean[n];
+        for (int v = 0; v < n; v++) {
+            out.add(new ArrayList<>());
+            marked[v] = v > 0 && rnd.nextInt(10) == 0;
+            if (!marked[v]) {
+                graph.addVertex(v);
+            }
+        }
+        for (int v = 0; v < n; v++) {
+            for (int k = 0; k < degree; k++) {
+                int t = rnd.nextInt(n);
+                out.get(v).add(t);
+                if (!marked[v] && !marked[t]) {
+                    graph.addEdge(v, t);
+                }
+            }
+        }
+        List<Integer> expected = new ArrayList<>();
+        new BreadthFirstIterator<>(graph, 0).forEachRemaining(expected::add);
+
+        VisitQueue queue = new VisitQueue(n);
+        for (int v = 0; v < n; v++) {
+            if (marked[v]) {
+                queue.mark(v);
+            }
+        }
+        assertThat(queue.visit(0)).isTrue();
+        List<Integer> order = new ArrayList<>();
+        while (queue.hasNext()) {
+            int v = queue.next();
+            order.add(v);
+            for (int t : out.get(v)) {
+                queue.visit(t);
+            }
+        }
+        assertThat(order).containsExactlyElementsOf(expected);
+        assertThat(queue.visited()).isEqualTo(expected.size());
+        assertThat(queue.visit(0)).isFalse();
+        java.util.Set<Integer> reached = new java.util.HashSet<>(expected);
+        for (int v = 0; v < n; v++) {
+            assertThat(queue.seen(v)).isEqualTo(marked[v] || reached.contains(v));
         }
     }
 

@@ -1,12 +1,13 @@
 package dockline.solve.charging;
 
-import dockline.util.PackedMinHeap;
-
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.solve.game.GoalPredecessors;
+import dockline.solve.game.MinMaxSearch;
+import dockline.util.Csr;
 import dockline.util.IntArrayList;
+import dockline.util.Progress;
 import java.util.Arrays;
 
 /**
@@ -17,7 +18,7 @@ import java.util.Arrays;
  * <p><b>Method.</b> Consumption games with reload states (Brázdil, Chatterjee, Kučera, Novotný,
  * "Efficient Controller Synthesis for Consumption Games with Multiple Resource Types", CAV 2012),
  * here with one resource, a capacity and a reachability objective: rounds of Knuth's min-max
- * Dijkstra on arena × goal (D. E. Knuth, 1977, "A generalization of Dijkstra's algorithm",
+ * Dijkstra on arena × goal ({@link MinMaxSearch.Counting}; D. E. Knuth, 1977, "A generalization of Dijkstra's algorithm",
  * Information Processing Letters 6(1):1-5), in which a <em>good</em> dock counts as a target.
  *
  * <p><b>Why it equals the product game.</b> Write λ = level − floor and U = capacity − floor. In
@@ -63,7 +64,7 @@ import java.util.Arrays;
 public final class ChargingSolver {
 
     /** Need of a position from which the robot cannot force completion. */
-    public static final int INFINITE = Integer.MAX_VALUE;
+    public static final int INFINITE = MinMaxSearch.INFINITE;
 
     private final Arena arena;
     private final GoalAutomaton goal;
@@ -128,18 +129,11 @@ public final class ChargingSolver {
             throw new IllegalArgumentException("usable range must not be negative: " + usable);
         }
         final int gc = goalCount;
-        final int rc = robotCount;
-        final int robotN = Math.multiplyExact(rc, gc);
-        final int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
+        final MinMaxSearch.Counting search = new MinMaxSearch.Counting(arena, goal, inverse);
+        final int robotN = search.positions();
         final boolean[] good = new boolean[robotN];
         final int[] best = new int[robotN];
         Arrays.fill(best, INFINITE);
-        final int[] need = new int[robotN];
-        final int[] distMax = new int[distN];
-        final byte[] processed = new byte[distN];
-        final boolean[] done = new boolean[robotN];
-        final byte[] choice = new byte[robotN];
-        final PackedMinHeap heap = new PackedMinHeap(Math.min(robotN, 1 << 20));
         // improvements, per round: position, threshold, out-edge
         IntArrayList impPos = new IntArrayList();
         IntArrayList impNeed = new IntArrayList();
@@ -148,36 +142,27 @@ public final class ChargingSolver {
         int goodCount = 0;
         while (true) {
             rounds++;
-            Arrays.fill(need, INFINITE);
-            Arrays.fill(distMax, 0);
-            Arrays.fill(processed, (byte) 0);
-            Arrays.fill(done, false);
-            Arrays.fill(choice, (byte) 0);
+            search.reset();
             // every robot vertex (cell and disturbance state: budget left, and closures with lasting events)
-            for (int r = 0; r < rc; r++) {
-                boolean dock = arena.isDock(arena.cell(r));
-                for (int g = 0; g < gc; g++) {
-                    int p = r * gc + g;
-                    if (goal.accepting(g, dock) || good[p]) {
-                        need[p] = 0;
-                        heap.push(0, p);
-                    }
+            for (int p = 0; p < robotN; p++) {
+                if (good[p] || search.completes(p)) {
+                    search.addTarget(p);
                 }
             }
-            dijkstra(usable, need, distMax, processed, done, choice, heap);
+            // one round of Knuth's min-max Dijkstra; charge steps are handled by the good docks (class comment, point 3)
+            search.run(usable, INFINITE, -1, Progress.Tracker.NONE);
             int added = 0;
             for (int p = 0; p < robotN; p++) {
-                int r = p / gc;
-                int g = p - r * gc;
-                if (good[p] || goal.accepting(g, arena.isDock(arena.cell(r)))) {
+                if (good[p] || search.completes(p)) {
                     continue;
                 }
-                int x = done[p] ? need[p] : INFINITE;
+                int r = p / gc;
+                int x = search.isFinal(p) ? search.need(p) : INFINITE;
                 if (x < best[p]) {
                     best[p] = x;
                     impPos.add(p);
                     impNeed.add(x);
-                    impEdge.add(arena.outBegin(r) + choice[p] - 1);
+                    impEdge.add(search.chosenEdge(p));
                 }
                 if (x != INFINITE && chargeEdge[r] >= 0) {
                     good[p] = true;
@@ -189,6 +174,7 @@ public final class ChargingSolver {
                 break;
             }
         }
+        int[] need = search.needs();
         for (int p = 0; p < robotN; p++) {
             if (good[p]) {
                 need[p] = 0;
@@ -196,63 +182,6 @@ public final class ChargingSolver {
         }
         return new Values(this, usable, need, good, rounds, goodCount, impPos.toArray(), impNeed.toArray(),
                 impEdge.toArray());
-    }
-
-    /** One round of Knuth's min-max Dijkstra from the targets already in the heap; charge outcomes left out. */
-    private void dijkstra(int usable, int[] need, int[] distMax, byte[] processed, boolean[] done, byte[] choice,
-                          PackedMinHeap heap) {
-        final int gc = goalCount;
-        final int rc = robotCount;
-        while (!heap.isEmpty()) {
-            long top = heap.poll();
-            int x = (int) (top >>> 32);
-            int u = (int) top;
-            if (done[u] || x != need[u]) {
-                continue; // stale entry
-            }
-            done[u] = true;
-            int r = u / gc;
-            int g2 = u - r * gc;
-            int cellR = arena.cell(r);
-            int gFrom = inverse.begin(cellR, g2);
-            int gTo = inverse.end(cellR, g2);
-            if (gFrom == gTo) {
-                continue;
-            }
-            for (int i = arena.inBegin(r), end = arena.inEnd(r); i < end; i++) {
-                int e = arena.inEdge(i);
-                int w = arena.weight(e);
-                if (w > 0) {
-                    continue; // a charge step: handled by the good docks (class comment, point 3)
-                }
-                int d = arena.source(e);
-                long costL = (long) x - w;
-                int cost = costL > usable ? INFINITE : (int) costL;
-                int dIdx = (d - rc) * gc;
-                int outdeg = arena.outEnd(d) - arena.outBegin(d);
-                for (int j = gFrom; j < gTo; j++) {
-                    int g = inverse.state(j);
-                    int dp = dIdx + g;
-                    if (cost > distMax[dp]) {
-                        distMax[dp] = cost;
-                    }
-                    if (++processed[dp] == outdeg) {
-                        int y = distMax[dp];
-                        if (y == INFINITE) {
-                            continue;
-                        }
-                        int ownerEdge = arena.inEdge(arena.inBegin(d));
-                        int owner = arena.source(ownerEdge);
-                        int rp = owner * gc + g;
-                        if (y < need[rp] && !done[rp]) {
-                            need[rp] = y;
-                            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
-                            heap.push(y, rp);
-                        }
-                    }
-                }
-            }
-        }
     }
 
     int chargeEdge(int r) {
@@ -296,22 +225,16 @@ public final class ChargingSolver {
             this.good = good;
             this.rounds = rounds;
             this.goodDocks = goodDocks;
+            // the entries grouped by position by a counting sort; improvements were recorded round by round,
+            // so each position's entries come in falling thresholds
             int n = need.length;
-            this.entryStart = new int[n + 1];
-            for (int p : impPos) {
-                entryStart[p + 1]++;
-            }
-            for (int p = 0; p < n; p++) {
-                entryStart[p + 1] += entryStart[p];
-            }
+            this.entryStart = Csr.reverseOffsets(n, impPos.length, impPos);
+            int[] order = Csr.reverseEdges(n, impPos, entryStart);
             this.entryNeed = new int[impPos.length];
             this.entryEdge = new int[impPos.length];
-            int[] fill = Arrays.copyOf(entryStart, n);
-            // improvements were recorded round by round, so each position's entries come in falling thresholds
-            for (int i = 0; i < impPos.length; i++) {
-                int at = fill[impPos[i]]++;
-                entryNeed[at] = impNeed[i];
-                entryEdge[at] = impEdge[i];
+            for (int at = 0; at < order.length; at++) {
+                entryNeed[at] = impNeed[order[at]];
+                entryEdge[at] = impEdge[order[at]];
             }
         }
 

@@ -1,8 +1,7 @@
 package dockline.solve.charging;
 
-import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
-import dockline.solve.game.GoalPredecessors;
+import dockline.solve.game.MinMaxSearch;
 import dockline.util.IntArrayList;
 import dockline.util.PackedMinHeap;
 import dockline.util.Progress;
@@ -45,7 +44,7 @@ import java.util.OptionalInt;
  * is 0 after a batch whose docks are all good at that floor (values only fall, and 0 is the least).
  *
  * <p><b>Lowering values.</b> Values only fall (more targets). A batch is a label-correcting
- * Dijkstra: a robot position taken from the queue recomputes each disturbance position before it
+ * Dijkstra ({@link MinMaxSearch} with a relaxation of its own): a robot position taken from the queue recomputes each disturbance position before it
  * (max over its outcomes of need − delta, ∞ above C), and improves that position's owner. A
  * disturbance position is recomputed only when none of its outcomes waits in the queue, so a robot
  * position's value is set only from values already taken from the queue, and since every delta is at
@@ -69,21 +68,13 @@ import java.util.OptionalInt;
  * number of battery levels except the size of the numbers: at ten times the resolution the same game
  * has every figure times ten, the same keys in the same order and the same batches.
  */
-public final class FloorSweep {
+public final class FloorSweep extends MinMaxSearch {
 
     private final ChargingSolver solver;
-    private final Arena arena;
-    private final GoalAutomaton goal;
-    private final GoalPredecessors inverse;
-    private final int gc;
-    private final int rc;
     private final int capacity;
 
-    private final int[] need;
     private final boolean[] pending;
-    private final byte[] choice;
     private final boolean[] good;
-    private final PackedMinHeap heap;
     private final PackedMinHeap docks;
 
     private final IntArrayList histPos = new IntArrayList(1 << 16);
@@ -116,19 +107,12 @@ public final class FloorSweep {
     private final Result result;
 
     private FloorSweep(ChargingSolver solver, int capacity, int floor, int start) {
+        super(solver.arena(), solver.goal(), solver.inverse());
         this.solver = solver;
-        this.arena = solver.arena();
-        this.goal = solver.goal();
-        this.inverse = solver.inverse();
-        this.gc = goal.stateCount();
-        this.rc = arena.robotCount();
         this.capacity = capacity;
-        int robotN = Math.multiplyExact(rc, gc);
-        this.need = new int[robotN];
+        int robotN = positions();
         this.pending = new boolean[robotN];
-        this.choice = new byte[robotN];
         this.good = new boolean[robotN];
-        this.heap = new PackedMinHeap(Math.min(robotN, 1 << 20));
         this.docks = new PackedMinHeap(1 << 10);
         this.result = run(floor, Math.min(start, capacity));
     }
@@ -153,16 +137,12 @@ public final class FloorSweep {
         final int INF = ChargingSolver.INFINITE;
         Arrays.fill(need, INF);
         long dockPositions = 0;
-        for (int r = 0; r < rc; r++) {
-            boolean dock = arena.isDock(arena.cell(r));
-            dockPositions += dock ? gc : 0;
-            for (int g = 0; g < gc; g++) {
-                if (goal.accepting(g, dock)) {
-                    int p = r * gc + g;
-                    need[p] = 0;
-                    pending[p] = true;
-                    heap.push(0, p);
-                }
+        for (int p = 0; p < need.length; p++) {
+            dockPositions += arena.isDock(arena.cell(p / gc)) ? 1 : 0;
+            if (completes(p)) {
+                need[p] = 0;
+                pending[p] = true;
+                heap.push(0, p);
             }
         }
         int g0 = solver.startGoal();
@@ -233,77 +213,60 @@ public final class FloorSweep {
 
     /** One batch: lowers every value the targets in the queue lower (class comment, "Lowering values"). */
     private void drain() {
-        final int INF = ChargingSolver.INFINITE;
-        while (!heap.isEmpty()) {
-            long top = heap.poll();
-            int x = (int) (top >>> 32);
-            int u = (int) top;
-            if (x != need[u] || !pending[u]) {
-                continue; // stale
-            }
-            pending[u] = false;
+        drain(INFINITE, -1, Progress.Tracker.NONE);
+    }
+
+    /** A robot position leaves the queue: its value and action go to the history; a charging dock is a candidate. */
+    @Override
+    protected boolean settle(int u, int x) {
+        if (x != need[u] || !pending[u]) {
+            return false;
+        }
+        pending[u] = false;
+        if (!good[u] && !completes(u)) {
             int r = u / gc;
-            int g2 = u - r * gc;
-            if (!good[u] && !goal.accepting(g2, arena.isDock(arena.cell(r)))) {
-                histPos.add(u);
-                histNeed.add(x);
-                histEdge.add(arena.outBegin(r) + choice[u] - 1);
-                if (solver.chargeEdge(r) >= 0) {
-                    docks.push(x, u);
-                }
+            histPos.add(u);
+            histNeed.add(x);
+            histEdge.add(chosenEdge(u));
+            if (solver.chargeEdge(r) >= 0) {
+                docks.push(x, u);
             }
-            int cellR = arena.cell(r);
-            int gFrom = inverse.begin(cellR, g2);
-            int gTo = inverse.end(cellR, g2);
-            if (gFrom == gTo) {
-                continue;
+        }
+        return true;
+    }
+
+    /** Recomputes disturbance position (d, g) from its outcomes and improves its owner (class comment). */
+    @Override
+    protected void relax(int d, int dp, int g, long cost) {
+        int ownerEdge = ownerEdge(d);
+        int owner = arena.source(ownerEdge);
+        int rp = owner * gc + g;
+        int current = need[rp];
+        if (current == 0) {
+            return; // completion or good dock: nothing to improve
+        }
+        recomputations++;
+        long val = 0;
+        for (int f = arena.outBegin(d), oEnd = arena.outEnd(d); f < oEnd; f++) {
+            int t = arena.target(f);
+            int gt = goal.step(g, arena.cellZones(arena.cell(t)));
+            if (gt == GoalAutomaton.REJECT) {
+                return;
             }
-            for (int i = arena.inBegin(r), end = arena.inEnd(r); i < end; i++) {
-                int e = arena.inEdge(i);
-                if (arena.weight(e) > 0) {
-                    continue; // a charge step: handled by the good docks
-                }
-                int d = arena.source(e);
-                int ownerEdge = arena.inEdge(arena.inBegin(d));
-                int owner = arena.source(ownerEdge);
-                int oBegin = arena.outBegin(d);
-                int oEnd = arena.outEnd(d);
-                for (int j = gFrom; j < gTo; j++) {
-                    int g = inverse.state(j);
-                    int rp = owner * gc + g;
-                    int current = need[rp];
-                    if (current == 0) {
-                        continue; // completion or good dock: nothing to improve
-                    }
-                    recomputations++;
-                    long val = 0;
-                    for (int f = oBegin; f < oEnd; f++) {
-                        int t = arena.target(f);
-                        int gt = goal.step(g, arena.cellZones(arena.cell(t)));
-                        if (gt == GoalAutomaton.REJECT) {
-                            val = INF;
-                            break;
-                        }
-                        int tp = t * gc + gt;
-                        int n = need[tp];
-                        if (n == INF || pending[tp]) {
-                            val = INF; // unknown yet (pending: recomputed when it leaves the queue)
-                            break;
-                        }
-                        val = Math.max(val, (long) n - arena.weight(f));
-                    }
-                    if (val > capacity) {
-                        continue;
-                    }
-                    int y = (int) val;
-                    if (y < current) {
-                        need[rp] = y;
-                        choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
-                        pending[rp] = true;
-                        heap.push(y, rp);
-                    }
-                }
+            int tp = t * gc + gt;
+            int n = need[tp];
+            if (n == INFINITE || pending[tp]) {
+                return; // unknown yet (pending: recomputed when it leaves the queue)
             }
+            val = Math.max(val, (long) n - arena.weight(f));
+        }
+        if (val > capacity) {
+            return;
+        }
+        int y = (int) val;
+        if (y < current) {
+            pending[rp] = true;
+            improve(rp, owner, ownerEdge, y);
         }
     }
 
@@ -323,12 +286,9 @@ public final class FloorSweep {
         int[] v = new int[n];
         Arrays.fill(v, ChargingSolver.INFINITE);
         boolean[] g = new boolean[n];
-        for (int r = 0; r < rc; r++) {
-            boolean dock = arena.isDock(arena.cell(r));
-            for (int s = 0; s < gc; s++) {
-                if (goal.accepting(s, dock)) {
-                    v[r * gc + s] = 0;
-                }
+        for (int p = 0; p < n; p++) {
+            if (completes(p)) {
+                v[p] = 0;
             }
         }
         int t = batchEnd.get(batches - 1);

@@ -10,6 +10,7 @@ import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
 import dockline.solve.Verdict;
+import dockline.util.VisitQueue;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -216,43 +217,29 @@ public final class FastPath {
             return new Rows(List.of(), 0); // complete at the start: nothing to do
         }
         // 1. the pairs (robot vertex, goal state) of the loop, without levels: a lower bound of its situations
-        boolean[] seenPair = new boolean[Math.multiplyExact(arena.robotCount(), gc)];
-        int[] queue = new int[1024];
-        int head = 0;
-        int tail = 0;
-        seenPair[a0 * gc + g0] = true;
-        queue[tail++] = a0 * gc + g0;
-        while (head < tail) {
-            int p = queue[head++];
+        VisitQueue pairs = new VisitQueue(Math.multiplyExact(arena.robotCount(), gc));
+        pairs.visit(a0 * gc + g0);
+        while (pairs.hasNext()) {
+            int p = pairs.next();
             int v = p / gc;
             int g = p - v * gc;
             int d = arena.target(values.chosenEdge(v, g));
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
                 int r = arena.target(e);
                 int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
-                if (goal.accepting(g2, arena.isDock(arena.cell(r)))) {
-                    continue;
-                }
-                int q = r * gc + g2;
-                if (!seenPair[q]) {
-                    seenPair[q] = true;
-                    if (tail == queue.length) {
-                        queue = Arrays.copyOf(queue, tail * 2);
-                    }
-                    queue[tail++] = q;
-                    if (tail > max) {
-                        return new Rows(null, tail);
-                    }
+                if (!goal.accepting(g2, arena.isDock(arena.cell(r))) && pairs.visit(r * gc + g2)
+                        && pairs.visited() > max) {
+                    return new Rows(null, pairs.visited());
                 }
             }
         }
-        seenPair = null;
+        pairs = null;
         // 2. the situations (pair, level); level = s − spent, packed as pair · (s + 1) + level
         long span = (long) s + 1;
         LongSet seen = new LongSet();
         long[] todo = new long[1024];
-        head = 0;
-        tail = 0;
+        int head = 0;
+        int tail = 0;
         long k0 = (long) (a0 * gc + g0) * span + s;
         seen.add(k0);
         todo[tail++] = k0;

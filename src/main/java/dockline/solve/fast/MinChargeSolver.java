@@ -1,14 +1,14 @@
 package dockline.solve.fast;
 
-import dockline.util.PackedMinHeap;
 import dockline.util.Progress;
+import dockline.util.VisitQueue;
 
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.solve.game.GoalPredecessors;
-import java.util.Arrays;
+import dockline.solve.game.MinMaxSearch;
 
 /**
  * The fast path for missions without charging before the end: the minimum charge needed at every
@@ -37,7 +37,8 @@ import java.util.Arrays;
  * </pre>
  * The capacity plays no further part. The result is independent of the energy resolution in
  * cost (values are plain ints): O(m·G·log(n·G)) time for an arena of n vertices and m edges and a
- * goal automaton of G states, with a 4-ary heap on a primitive long array (key and vertex packed in
+ * goal automaton of G states (the search is {@link MinMaxSearch.Counting}, shared with the charging route),
+ * with a 4-ary heap on a primitive long array (key and vertex packed in
  * one entry, lazy deletion); memory about 5 bytes per disturbance vertex of arena × goal (a 4-byte
  * running maximum and a 1-byte counter) and 5 bytes per robot vertex (value and a final flag), plus
  * 8 bytes per heap entry (at most one per improvement), on top of the arena.
@@ -55,12 +56,11 @@ import java.util.Arrays;
 public final class MinChargeSolver {
 
     /** Value of a vertex from which the robot cannot force completion. */
-    public static final int INFINITE = Integer.MAX_VALUE;
+    public static final int INFINITE = MinMaxSearch.INFINITE;
 
     private final Arena arena;
     private final GoalAutomaton goal;
     private final int goalCount;
-    private final int robotCount;
     private final int startGoal;
     private final int available;
     private final GoalPredecessors inverse;
@@ -97,7 +97,6 @@ public final class MinChargeSolver {
         this.goal = goal;
         this.goalCount = goal.stateCount();
         Math.multiplyExact(arena.vertexCount(), goalCount);
-        this.robotCount = arena.robotCount();
         Mission mission = arena.mission();
         int s = arena.startVertex();
         this.startGoal = goal.initial(arena.cellZones(arena.cell(s)));
@@ -135,7 +134,7 @@ public final class MinChargeSolver {
         return anyCharge;
     }
 
-    /** The forward search of {@link #applicable} when the arena can charge: O(m·G), 5 bytes per pair. */
+    /** The forward search of {@link #applicable} when the arena can charge: O(m·G), 1 to 5 bytes per pair. */
     private static boolean noChargeBeforeTheEnd(Arena arena, GoalAutomaton goal) {
         int gc = goal.stateCount();
         int s = arena.startVertex();
@@ -143,44 +142,24 @@ public final class MinChargeSolver {
         if (g0 == GoalAutomaton.REJECT) {
             return true;
         }
-        long n = Math.multiplyExact((long) arena.vertexCount(), gc);
-        boolean[] seen = new boolean[Math.toIntExact(n)];
-        int[] queue = new int[Math.toIntExact(n)];
-        int head = 0;
-        int tail = 0;
-        seen[s * gc + g0] = true;
-        queue[tail++] = s * gc + g0;
-        while (head < tail) {
-            int p = queue[head++];
+        VisitQueue queue = new VisitQueue(Math.toIntExact(Math.multiplyExact((long) arena.vertexCount(), gc)));
+        queue.visit(s * gc + g0);
+        while (queue.hasNext()) {
+            int p = queue.next();
             int v = p / gc;
             int g = p % gc;
-            if (arena.isRobot(v)) {
-                if (goal.accepting(g, arena.isDock(arena.cell(v)))) {
-                    continue;
+            boolean robot = arena.isRobot(v);
+            if (robot && goal.accepting(g, arena.isDock(arena.cell(v)))) {
+                continue;
+            }
+            for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
+                int t = arena.target(e);
+                if (robot && arena.actionKind(t) == ActionKind.CHARGE) {
+                    return false;
                 }
-                for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
-                    int d = arena.target(e);
-                    if (arena.actionKind(d) == ActionKind.CHARGE) {
-                        return false;
-                    }
-                    int q = d * gc + g;
-                    if (!seen[q]) {
-                        seen[q] = true;
-                        queue[tail++] = q;
-                    }
-                }
-            } else {
-                for (int e = arena.outBegin(v); e < arena.outEnd(v); e++) {
-                    int r = arena.target(e);
-                    int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
-                    if (g2 == GoalAutomaton.REJECT) {
-                        continue;
-                    }
-                    int q = r * gc + g2;
-                    if (!seen[q]) {
-                        seen[q] = true;
-                        queue[tail++] = q;
-                    }
+                int g2 = robot ? g : goal.step(g, arena.cellZones(arena.cell(t)));
+                if (g2 != GoalAutomaton.REJECT) {
+                    queue.visit(t * gc + g2);
                 }
             }
         }
@@ -213,22 +192,11 @@ public final class MinChargeSolver {
 
     /** The minimum charge needed per robot vertex of arena × goal, from {@link #solveAll()}. */
     public static final class Values {
-        private final Arena arena;
-        private final int[] robotNeed;
-        private final byte[] choice;
-        private final boolean[] done;
-        private final int goalCount;
-        private final int robotCount;
+        private final MinMaxSearch.Counting search;
         private final Result result;
 
-        private Values(Arena arena, int[] robotNeed, byte[] choice, boolean[] done, int goalCount, int robotCount,
-                       Result result) {
-            this.arena = arena;
-            this.robotNeed = robotNeed;
-            this.choice = choice;
-            this.done = done;
-            this.goalCount = goalCount;
-            this.robotCount = robotCount;
+        private Values(MinMaxSearch.Counting search, Result result) {
+            this.search = search;
             this.result = result;
         }
 
@@ -240,15 +208,8 @@ public final class MinChargeSolver {
          * completion. The choice does not depend on the battery level.
          */
         public int chosenEdge(int v, int g) {
-            if (v < 0 || v >= robotCount) {
-                throw new IllegalArgumentException("not a robot vertex: " + v);
-            }
-            if (g == GoalAutomaton.REJECT) {
-                return -1;
-            }
-            int p = v * goalCount + g;
-            int c = choice[p];
-            return done[p] && c > 0 ? arena.outBegin(v) + c - 1 : -1;
+            int p = position(v, g);
+            return p >= 0 && search.isFinal(p) ? search.chosenEdge(p) : -1;
         }
 
         /**
@@ -257,10 +218,16 @@ public final class MinChargeSolver {
          * or {@code g} is the reject sink.
          */
         public int need(int v, int g) {
-            if (v < 0 || v >= robotCount) {
+            int p = position(v, g);
+            return p < 0 ? INFINITE : search.need(p);
+        }
+
+        /** The position of (v, g), -1 for the reject sink. */
+        private int position(int v, int g) {
+            if (v < 0 || v >= search.arena().robotCount()) {
                 throw new IllegalArgumentException("not a robot vertex: " + v);
             }
-            return g == GoalAutomaton.REJECT ? INFINITE : robotNeed[v * goalCount + g];
+            return g == GoalAutomaton.REJECT ? -1 : v * search.goalCount() + g;
         }
 
         public Result result() {
@@ -272,103 +239,29 @@ public final class MinChargeSolver {
         final boolean stopEarly = mode == Mode.DECIDE;
         final boolean stopAtStart = mode != Mode.ALL;
         final int gc = goalCount;
-        final int rc = robotCount;
-        final int robotN = Math.multiplyExact(rc, gc);
-        final int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
-        final int[] robotNeed = new int[robotN];
-        Arrays.fill(robotNeed, INFINITE);
-        final int[] distMax = new int[distN];
-        final byte[] processed = new byte[distN];
-        final PackedMinHeap heap = new PackedMinHeap(Math.min(robotN, 1 << 20));
-        final boolean[] done = new boolean[robotN];
-        // the chosen action per robot vertex: 1 + its out-edge offset (0: none); out-degrees are small
-        final byte[] choice = new byte[robotN];
-        long explored = 0;
+        final MinMaxSearch.Counting search = new MinMaxSearch.Counting(arena, goal, inverse);
+        final int robotN = search.positions();
 
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
         boolean feasible = available >= 0 && startP >= 0;
         if (feasible || !stopEarly && startP >= 0 || mode == Mode.ALL) {
-            for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-                int c = arena.freeCell(slot);
-                boolean dock = arena.isDock(c);
-                for (int g = 0; g < gc; g++) {
-                    if (goal.accepting(g, dock)) {
-                        for (int k = 0; k < arena.stateCount(); k++) {
-                            int p = arena.robotVertexInState(c, k) * gc + g;
-                            robotNeed[p] = 0;
-                            heap.push(0, p);
-                        }
-                    }
+            for (int p = 0; p < robotN; p++) {
+                if (search.completes(p)) {
+                    search.addTarget(p);
                 }
             }
         }
         // per cent of the robot situations finalised: a bound, as the search may stop at the start
         Progress.Tracker progress = Progress.phase("least charge to finish (fast path)", robotN);
-        while (!heap.isEmpty()) {
-            long top = heap.peek();
-            int x = (int) (top >>> 32);
-            if (stopEarly && x > available) {
-                break;
-            }
-            heap.poll();
-            int u = (int) top;
-            if (done[u] || x != robotNeed[u]) {
-                continue; // a stale entry: u was final, or improved after this entry was pushed
-            }
-            done[u] = true;
-            explored++;
-            if ((explored & (Progress.EVERY - 1)) == 0) {
-                progress.at(explored);
-            }
-            if (u == startP && stopAtStart) {
-                break;
-            }
-            int r = u / gc;
-            int g2 = u - r * gc;
-            int cellR = arena.cell(r);
-            int gFrom = inverse.begin(cellR, g2);
-            int gTo = inverse.end(cellR, g2);
-            if (gFrom == gTo) {
-                continue;
-            }
-            for (int i = arena.inBegin(r), end = arena.inEnd(r); i < end; i++) {
-                int e = arena.inEdge(i);
-                int d = arena.source(e);
-                int w = arena.weight(e);
-                if (w > 0) {
-                    continue; // a charge outcome: outside the fast path (see the class comment)
-                }
-                int cost = Math.addExact(x, -w);
-                int dIdx = (d - rc) * gc;
-                int outdeg = arena.outEnd(d) - arena.outBegin(d);
-                for (int j = gFrom; j < gTo; j++) {
-                    int g = inverse.state(j);
-                    int dp = dIdx + g;
-                    if (cost > distMax[dp]) {
-                        distMax[dp] = cost;
-                    }
-                    if (++processed[dp] == outdeg) {
-                        // every outcome is final: the disturbance vertex is worth distMax; its owner may improve
-                        int y = distMax[dp];
-                        int ownerEdge = arena.inEdge(arena.inBegin(d));
-                        int owner = arena.source(ownerEdge);
-                        int rp = owner * gc + g;
-                        if (y < robotNeed[rp] && !done[rp]) {
-                            robotNeed[rp] = y;
-                            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
-                            heap.push(y, rp);
-                        }
-                    }
-                }
-            }
-        }
+        // no cap: a need is at most the int range, and one beyond it counts as never
+        long explored = search.run(INFINITE, stopEarly ? available : INFINITE, stopAtStart ? startP : -1, progress);
         // after a full run every vertex left with a value is final; in decide() mode an undecided start needs more
-        int startNeed = startP >= 0 && done[startP] ? robotNeed[startP] : INFINITE;
+        int startNeed = startP >= 0 && search.isFinal(startP) ? search.need(startP) : INFINITE;
         boolean guaranteed = feasible && startNeed != INFINITE && startNeed <= available;
         long productVertices = (long) arena.vertexCount() * gc;
         progress.done();
-        return new Values(arena, robotNeed, choice, done, gc, rc, new Result(guaranteed, startNeed, available, explored,
-                productVertices, mode == Mode.ALL));
+        return new Values(search, new Result(guaranteed, startNeed, available, explored, productVertices,
+                mode == Mode.ALL));
     }
 
 }

@@ -22,6 +22,13 @@ final class Attractor {
     private Attractor() {
     }
 
+    /** The whole product as a subgame: every one of the {@code n} vertices alive. */
+    static boolean[] everywhere(int n) {
+        boolean[] alive = new boolean[n];
+        Arrays.fill(alive, true);
+        return alive;
+    }
+
     /**
      * @param p       the product
      * @param robot   {@code true}: the robot's attractor; {@code false}: the disturbance's

@@ -4,6 +4,7 @@ import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.model.Mission;
 import dockline.policy.Policy;
+import dockline.util.MonotoneSearch;
 import java.util.Optional;
 import java.util.OptionalInt;
 
@@ -102,10 +103,9 @@ public final class DeadlineSolver {
     static Solved solve(Arena arena, int floor, int startLevel, long budgetBytes) {
         RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, floor, startLevel, budgetBytes);
         int n = p.vertexCount();
-        boolean[] alive = new boolean[n];
+        boolean[] alive = Attractor.everywhere(n);
         boolean[] target = new boolean[n];
         for (int v = 0; v < n; v++) {
-            alive[v] = true;
             target[v] = p.complete(v);
         }
         int[] choice = new int[n];
@@ -118,29 +118,15 @@ public final class DeadlineSolver {
 
     /**
      * The highest floor (0 .. start) at which the mission is still guaranteed within the deadline, by
-     * bisection; empty when not even a floor of 0 is.
+     * bisection ({@link MonotoneSearch}); empty when not even a floor of 0 is.
      *
      * @param known a floor already known to be guaranteed, or -1
      */
     static OptionalInt highestFloor(Arena arena, int start, int deadline, long budgetBytes, int known) {
-        int lo = known;
-        if (lo < 0) {
-            Solved s = solve(arena, 0, start, budgetBytes);
-            if (s.turns < 0 || s.turns > deadline) {
-                return OptionalInt.empty();
-            }
-            lo = 0;
-        }
-        int hi = start + 1; // not guaranteed: the start would be below the floor
-        while (hi - lo > 1) {
-            int mid = lo + (hi - lo) / 2;
-            Solved s = solve(arena, mid, start, budgetBytes);
-            if (s.turns >= 0 && s.turns <= deadline) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return OptionalInt.of(lo);
+        int f = MonotoneSearch.highest(known, start, floor -> {
+            int turns = solve(arena, floor, start, budgetBytes).turns;
+            return turns >= 0 && turns <= deadline;
+        });
+        return f < 0 ? OptionalInt.empty() : OptionalInt.of(f);
     }
 }

@@ -4,6 +4,7 @@ import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.model.Mission;
 import dockline.policy.Policy;
+import dockline.util.MonotoneSearch;
 import java.util.Optional;
 import java.util.OptionalInt;
 
@@ -54,35 +55,31 @@ public final class PatrolSolver {
         int floor = m.reserveUnits();
         int start = m.startUnits();
         Solved s = solve(arena, floor, start, budgetBytes);
-        Optional<Policy> policy = Optional.empty();
-        OptionalInt lowest = OptionalInt.empty();
-        OptionalInt lap = OptionalInt.empty();
-        OptionalInt wayIn = OptionalInt.empty();
-        int loopSize = 0;
-        if (s.guaranteed()) {
-            PolicyLoop loop = PolicyLoop.of(s.product, s.choice);
-            policy = Optional.of(loop.policy(s.choice));
-            lowest = OptionalInt.of(loop.lowestLevel());
-            lap = OptionalInt.of(loop.longestLap());
-            wayIn = OptionalInt.of(s.product.lapDone(s.product.start()) ? 0 : loop.firstStretch());
-            loopSize = loop.size();
-        }
+        LoopFigures loop = s.guaranteed() ? LoopFigures.of(s) : LoopFigures.NONE;
         OptionalInt highest = highestFloor(arena, start, budgetBytes, s.guaranteed() ? floor : -1);
         int policyFloor = floor;
         if (safest && s.guaranteed() && highest.getAsInt() > floor) {
             policyFloor = highest.getAsInt();
-            Solved hs = solve(arena, policyFloor, start, budgetBytes);
-            PolicyLoop loop = PolicyLoop.of(hs.product, hs.choice);
-            policy = Optional.of(loop.policy(hs.choice));
-            lowest = OptionalInt.of(loop.lowestLevel());
-            lap = OptionalInt.of(loop.longestLap());
-            wayIn = OptionalInt.of(hs.product.lapDone(hs.product.start()) ? 0 : loop.firstStretch());
-            loopSize = loop.size();
+            loop = LoopFigures.of(solve(arena, policyFloor, start, budgetBytes));
         }
         long millis = (System.nanoTime() - t0) / 1_000_000;
-        return new PatrolAnalysis(m, arena, s.guaranteed(), floor, start, m.capacityUnits(), policy, lowest, lap,
-                wayIn, highest, policyFloor, s.product.vertexCount(), s.product.edgeCount(), s.product.bound().vertices(),
-                s.rounds, loopSize, millis);
+        return new PatrolAnalysis(m, arena, s.guaranteed(), floor, start, m.capacityUnits(), loop.policy, loop.lowest,
+                loop.lap, loop.wayIn, highest, policyFloor, s.product.vertexCount(), s.product.edgeCount(),
+                s.product.bound().vertices(), s.rounds, loop.size, millis);
+    }
+
+    /** The policy of a won patrol product and the figures of its closed loop (none when it is lost). */
+    private record LoopFigures(Optional<Policy> policy, OptionalInt lowest, OptionalInt lap, OptionalInt wayIn,
+                               int size) {
+        static final LoopFigures NONE = new LoopFigures(Optional.empty(), OptionalInt.empty(), OptionalInt.empty(),
+                OptionalInt.empty(), 0);
+
+        static LoopFigures of(Solved s) {
+            PolicyLoop loop = PolicyLoop.of(s.product, s.choice);
+            return new LoopFigures(Optional.of(loop.policy(s.choice)), OptionalInt.of(loop.lowestLevel()),
+                    OptionalInt.of(loop.longestLap()),
+                    OptionalInt.of(s.product.lapDone(s.product.start()) ? 0 : loop.firstStretch()), loop.size());
+        }
     }
 
     /** The verdict alone and the size of the product it was decided on (for benchmarks). */
@@ -125,11 +122,10 @@ public final class PatrolSolver {
     /** The Büchi fixpoint on a built product. */
     static Solved solve(RoundsProduct p) {
         int n = p.vertexCount();
-        boolean[] alive = new boolean[n];
+        boolean[] alive = Attractor.everywhere(n);
         boolean[] accepting = new boolean[n];
         int[] removedIn = new int[n];
         for (int v = 0; v < n; v++) {
-            alive[v] = true;
             accepting[v] = p.lapDone(v);
         }
         int[] choice = new int[n];
@@ -196,28 +192,13 @@ public final class PatrolSolver {
     }
 
     /**
-     * The highest floor (0 .. start) at which the patrol is still guaranteed, by bisection; empty when not
-     * even a floor of 0 is.
+     * The highest floor (0 .. start) at which the patrol is still guaranteed, by bisection
+     * ({@link MonotoneSearch}); empty when not even a floor of 0 is.
      *
      * @param known a floor already known to be guaranteed, or -1
      */
     static OptionalInt highestFloor(Arena arena, int start, long budgetBytes, int known) {
-        int lo = known;
-        if (lo < 0) {
-            if (!solve(arena, 0, start, budgetBytes).guaranteed()) {
-                return OptionalInt.empty();
-            }
-            lo = 0;
-        }
-        int hi = start + 1;
-        while (hi - lo > 1) {
-            int mid = lo + (hi - lo) / 2;
-            if (solve(arena, mid, start, budgetBytes).guaranteed()) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return OptionalInt.of(lo);
+        int f = MonotoneSearch.highest(known, start, floor -> solve(arena, floor, start, budgetBytes).guaranteed());
+        return f < 0 ? OptionalInt.empty() : OptionalInt.of(f);
     }
 }
