@@ -1,6 +1,7 @@
 package dockline.solve.reserve;
 
 import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
@@ -71,6 +72,9 @@ public final class ImplicitReserveGame {
     private final byte[] actionIndex;
     // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
     private final int[] ownerOf;
+    // whether an outcome into a left-out closure phase (weight ArenaCompiler.LEFT_OUT) counts as won
+    // for the robot instead of lost: the strengthened game of PhasedLastingSolver
+    final boolean leftOutWins;
     // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
     private long budgetBytes = Long.MAX_VALUE;
     private long fixedBytes = 0;
@@ -86,12 +90,23 @@ public final class ImplicitReserveGame {
      * 2^62 slots (which no memory holds) is reported as {@code Long.MAX_VALUE} slots, never numbered.
      */
     public ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor) {
+        this(arena, goal, monitor, false);
+    }
+
+    /**
+     * The game, with an outcome into a left-out closure phase ({@link ArenaCompiler#LEFT_OUT}, see
+     * {@link ArenaCompiler#compileWithin}) counted as won for the robot when {@code leftOutWins} (the
+     * strengthened game: what the robot loses there it loses in the mission), else as lost (as any
+     * outcome below the floor: the weakened game, whose wins are wins in the mission).
+     */
+    ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, boolean leftOutWins) {
         if (arena == null || goal == null || monitor == null) {
             throw new IllegalArgumentException("arena, goal and monitor are required");
         }
         this.arena = arena;
         this.goal = goal;
         this.monitor = monitor;
+        this.leftOutWins = leftOutWins;
         this.gc = goal.stateCount();
         this.levels = (int) monitor.stateBound();
         this.gBits = bits(gc);
@@ -112,6 +127,16 @@ public final class ImplicitReserveGame {
             int deg = arena.outEnd(d) - arena.outBegin(d);
             if (deg > 15) {
                 throw new IllegalArgumentException("arena vertex " + d + " has " + deg + " out-edges; at most 15 fit");
+            }
+            if (leftOutWins) {
+                // a left-out outcome is won from the outset: the action waits only for its real outcomes
+                // (the left-out edge itself is never walked backwards, as its weight puts every level out of range)
+                for (int f = arena.outBegin(d); f < arena.outEnd(d); f++) {
+                    deg -= arena.weight(f) == ArenaCompiler.LEFT_OUT ? 1 : 0;
+                }
+                if (deg == 0) {
+                    throw new IllegalArgumentException("disturbance vertex " + d + " has only left-out outcomes");
+                }
             }
             revSource[i] = d;
             revWeight[i] = arena.weight(e);
@@ -149,6 +174,21 @@ public final class ImplicitReserveGame {
     /** The number of a triple: a long, as the numbering may pass 2^31 slots. */
     long id(int a, int g, int s) {
         return ((((long) a << gBits) | g) << lBits) | s;
+    }
+
+    /** The arena vertex of triple number p. */
+    int vertexOf(long p) {
+        return (int) (p >>> (lBits + gBits));
+    }
+
+    /** The goal state of triple number p. */
+    int goalOf(long p) {
+        return (int) (p >>> lBits) & ((1 << gBits) - 1);
+    }
+
+    /** The monitor state (level minus floor) of triple number p. */
+    int levelOf(long p) {
+        return (int) p & ((1 << lBits) - 1);
     }
 
     /** Slots of the numbering (every triple, padded): the length of the per-vertex arrays. */
@@ -294,6 +334,9 @@ public final class ImplicitReserveGame {
     int outcomes(int x, int g, int s, long[] succ, int[] arrive) {
         int k = 0;
         for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
+            if (leftOutWins && arena.weight(e) == ArenaCompiler.LEFT_OUT) {
+                continue; // won in the strengthened game, with nothing after it
+            }
             int s2 = monitor.step(s, arena.weight(e));
             int a2 = arena.target(e);
             int c2 = arena.cell(a2);
@@ -344,8 +387,6 @@ public final class ImplicitReserveGame {
         final int top = levels - 1;
         final int lb = lBits;
         final int gb = gBits;
-        final int sMask = (1 << lb) - 1;
-        final int gMask = (1 << gb) - 1;
         // 4 bits per vertex (out-degrees are at most 15): for a disturbance triple with several outcomes
         // the outcomes known to be won (won at its out-degree); for a robot triple 0 while not won, else
         // 1 + its chosen action's index (targets: 1). Half a byte per vertex keeps the whole table in the
@@ -402,9 +443,9 @@ public final class ImplicitReserveGame {
             if ((++expanded & (Progress.EVERY - 1)) == 0) {
                 progress.at(expanded);
             }
-            int s2 = (int) p & sMask;
-            int g2 = (int) (p >>> lb) & gMask;
-            int x = (int) (p >>> (lb + gb));
+            int s2 = levelOf(p);
+            int g2 = goalOf(p);
+            int x = vertexOf(p);
             int from = arena.inBegin(x);
             int to = arena.inEnd(x);
             edges += to - from;

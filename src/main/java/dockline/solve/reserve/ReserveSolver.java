@@ -203,7 +203,15 @@ public final class ReserveSolver {
      */
     static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
                                                     ProductOptions po) {
-        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
+        return budgeted(new ImplicitReserveGame(arena, goal, monitor), arena, po);
+    }
+
+    /**
+     * The game on {@code arena} checked against the memory budget ({@code po}) and with its worklist capped.
+     *
+     * @throws ProductTooLargeException if its counters do not fit the memory budget
+     */
+    static ImplicitReserveGame budgeted(ImplicitReserveGame game, Arena arena, ProductOptions po) {
         long bytes = implicitBytes(game, arena);
         long budget = po.effectiveMemoryBudget();
         if (bytes > budget) {
