@@ -7,6 +7,7 @@ import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
+import dockline.solve.game.Completions;
 import dockline.solve.game.GoalPredecessors;
 import java.util.Arrays;
 
@@ -288,18 +289,11 @@ public final class MinChargeSolver {
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;
         boolean feasible = available >= 0 && startP >= 0;
         if (feasible || !stopEarly && startP >= 0 || mode == Mode.ALL) {
-            for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-                int c = arena.freeCell(slot);
-                boolean dock = arena.isDock(c);
-                for (int g = 0; g < gc; g++) {
-                    if (goal.accepting(g, dock)) {
-                        for (int k = 0; k < arena.stateCount(); k++) {
-                            int p = arena.robotVertexInState(c, k) * gc + g;
-                            robotNeed[p] = 0;
-                            heap.push(0, p);
-                        }
-                    }
-                }
+            int[] targets = Completions.of(arena, goal);
+            for (int i = 0; i < targets.length; i += 2) {
+                int p = targets[i] * gc + targets[i + 1];
+                robotNeed[p] = 0;
+                heap.push(0, p);
             }
         }
         // per cent of the robot situations finalised: a bound, as the search may stop at the start

@@ -9,6 +9,7 @@ import dockline.policy.Policy;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
 import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.Completions;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
 import dockline.util.PagedBytes;
@@ -75,6 +76,8 @@ public final class ImplicitReserveGame {
     // whether an outcome into a left-out closure phase (weight ArenaCompiler.LEFT_OUT) counts as won
     // for the robot instead of lost: the strengthened game of PhasedLastingSolver
     final boolean leftOutWins;
+    // with leftOutWins, per disturbance (action) vertex x, how many of its outcomes are left-out closures
+    private final byte[] leftOutOf;
     // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
     private long budgetBytes = Long.MAX_VALUE;
     private long fixedBytes = 0;
@@ -128,16 +131,6 @@ public final class ImplicitReserveGame {
             if (deg > 15) {
                 throw new IllegalArgumentException("arena vertex " + d + " has " + deg + " out-edges; at most 15 fit");
             }
-            if (leftOutWins) {
-                // a left-out outcome is won from the outset: the action waits only for its real outcomes
-                // (the left-out edge itself is never walked backwards, as its weight puts every level out of range)
-                for (int f = arena.outBegin(d); f < arena.outEnd(d); f++) {
-                    deg -= arena.weight(f) == ArenaCompiler.LEFT_OUT ? 1 : 0;
-                }
-                if (deg == 0) {
-                    throw new IllegalArgumentException("disturbance vertex " + d + " has only left-out outcomes");
-                }
-            }
             revSource[i] = d;
             revWeight[i] = arena.weight(e);
             revNeed[i] = (byte) deg;
@@ -145,6 +138,7 @@ public final class ImplicitReserveGame {
         int rc = arena.robotCount();
         this.actionIndex = new byte[arena.vertexCount() - rc];
         this.ownerOf = new int[arena.vertexCount() - rc];
+        this.leftOutOf = leftOutWins ? new byte[arena.vertexCount() - rc] : null;
         for (int x = rc; x < arena.vertexCount(); x++) {
             if (arena.inEnd(x) - arena.inBegin(x) != 1) {
                 throw new IllegalArgumentException("disturbance vertex " + x + " must have exactly one way in, from its"
@@ -153,6 +147,11 @@ public final class ImplicitReserveGame {
             int e = arena.inEdge(arena.inBegin(x));
             actionIndex[x - rc] = (byte) (e - arena.outBegin(arena.source(e)));
             ownerOf[x - rc] = arena.source(e);
+            if (leftOutWins) {
+                for (int f = arena.outBegin(x); f < arena.outEnd(x); f++) {
+                    leftOutOf[x - rc] += arena.weight(f) == ArenaCompiler.LEFT_OUT ? 1 : 0;
+                }
+            }
         }
     }
 
@@ -404,29 +403,20 @@ public final class ImplicitReserveGame {
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
         // the targets: robot triples completing the mission (any level)
-        for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-            int c = arena.freeCell(slot);
-            boolean dock = arena.isDock(c);
-            for (int g = 0; g < gc; g++) {
-                if (goal.accepting(g, dock)) {
-                    for (int k = 0; k < arena.stateCount(); k++) {
-                        long base = id(arena.robotVertexInState(c, k), g, 0);
-                        for (int s = 0; s < levels; s++) {
-                            long t = base + s;
-                            count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
-                            if (tail - head == wl.length) {
-                                wl = grow(wl, head, tail);
-                                wmask = wl.length - 1;
-                                tail -= head;
-                                head = 0;
-                            }
-                            wl[(tail++) & wmask] = base + s;
-                            wonCount++;
-                            if (flags != null) {
-                                flags[(int) (base + s)] = true;
-                            }
-                        }
-                    }
+        int[] targets = Completions.of(arena, goal);
+        for (int i = 0; i < targets.length; i += 2) {
+            long base = id(targets[i], targets[i + 1], 0);
+            for (int s = 0; s < levels; s++) {
+                long t = base + s;
+                count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
+                if (tail - head == wl.length) {
+                    wl = grow(wl, head, tail);
+                    wmask = wl.length - 1;
+                }
+                wl[(tail++) & wmask] = t;
+                wonCount++;
+                if (flags != null) {
+                    flags[(int) t] = true;
                 }
             }
         }
@@ -437,76 +427,141 @@ public final class ImplicitReserveGame {
         Progress.Tracker progress = Progress.phase("solving the game at floor " + monitor.floorUnits() + " units",
                 vertexCount / Math.max(1, arena.vertexCount()) * rc);
         long expanded = 0;
+        // in the strengthened game the left-out outcomes count as won only once the real ones are exhausted:
+        // first the attractor of the weakened game (left-out lost), then, if the start is not won yet, every
+        // left-out outcome is won at once and the attractor goes on. The region is the strengthened game's
+        // (the least fixpoint does not depend on the order), and a recorded choice relies on a left-out
+        // closure only where the robot cannot win without one (fewer phases for PhasedLastingSolver to add).
+        boolean seeded = leftOutOf == null;
         expand:
-        while (tail != head) {
-            long p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
-            if ((++expanded & (Progress.EVERY - 1)) == 0) {
-                progress.at(expanded);
-            }
-            int s2 = levelOf(p);
-            int g2 = goalOf(p);
-            int x = vertexOf(p);
-            int from = arena.inBegin(x);
-            int to = arena.inEnd(x);
-            edges += to - from;
-            // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
-            int cell = arena.cell(x);
-            int gFrom = inverse.begin(cell, g2);
-            int gTo = inverse.end(cell, g2);
-            for (int i = from; i < to; i++) {
-                int d = revSource[i];
-                int w = revWeight[i];
-                int need = revNeed[i];
-                int sLo;
-                int sHi;
-                if (s2 < top) {
-                    sLo = s2 - w;
-                    sHi = sLo;
-                } else if (w >= 0) {
-                    sLo = Math.max(0, top - w);
-                    sHi = top;
-                } else {
-                    continue;
+        while (true) {
+            while (tail != head) {
+                long p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
+                if ((++expanded & (Progress.EVERY - 1)) == 0) {
+                    progress.at(expanded);
                 }
-                if (sLo < 0 || sHi > top) {
-                    continue;
-                }
-                long dBase = (long) d << gb;
-                int owner = ownerOf[d - rc];
-                long oBase = (long) owner << gb;
-                int choice = (actionIndex[d - rc] + 1);
-                for (int j = gFrom; j < gTo; j++) {
-                    int gj = inverse.state(j);
-                    long base = (dBase | gj) << lb;
-                    long ob = (oBase | gj) << lb;
-                    for (int s = sLo; s <= sHi; s++) {
-                        if (need > 1) {
-                            // an action the disturbance can spoil: won once all its outcomes are
-                            long q = base + s;
-                            int qs = ((int) q & 1) << 2;
-                            int cell8 = count.get(q >>> 1);
-                            int c = (cell8 >>> qs) & 15;
-                            if (c >= need) {
+                int s2 = levelOf(p);
+                int g2 = goalOf(p);
+                int x = vertexOf(p);
+                int from = arena.inBegin(x);
+                int to = arena.inEnd(x);
+                edges += to - from;
+                // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
+                int cell = arena.cell(x);
+                int gFrom = inverse.begin(cell, g2);
+                int gTo = inverse.end(cell, g2);
+                for (int i = from; i < to; i++) {
+                    int d = revSource[i];
+                    int w = revWeight[i];
+                    int need = revNeed[i];
+                    int sLo;
+                    int sHi;
+                    if (s2 < top) {
+                        sLo = s2 - w;
+                        sHi = sLo;
+                    } else if (w >= 0) {
+                        sLo = Math.max(0, top - w);
+                        sHi = top;
+                    } else {
+                        continue;
+                    }
+                    if (sLo < 0 || sHi > top) {
+                        continue;
+                    }
+                    long dBase = (long) d << gb;
+                    int owner = ownerOf[d - rc];
+                    long oBase = (long) owner << gb;
+                    int choice = (actionIndex[d - rc] + 1);
+                    for (int j = gFrom; j < gTo; j++) {
+                        int gj = inverse.state(j);
+                        long base = (dBase | gj) << lb;
+                        long ob = (oBase | gj) << lb;
+                        for (int s = sLo; s <= sHi; s++) {
+                            if (need > 1) {
+                                // an action the disturbance can spoil: won once all its outcomes are
+                                long q = base + s;
+                                int qs = ((int) q & 1) << 2;
+                                int cell8 = count.get(q >>> 1);
+                                int c = (cell8 >>> qs) & 15;
+                                if (c >= need) {
+                                    continue;
+                                }
+                                count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
+                                if (c + 1 < need) {
+                                    continue;
+                                }
+                                if (flags != null) {
+                                    flags[(int) q] = true;
+                                }
+                            } else if (flags != null) {
+                                flags[(int) (base + s)] = true;
+                            }
+                            // (d, gj, s) is won now. An action with one outcome needs no counter: its only
+                            // successor is the robot triple just expanded, which is expanded once. Its owner
+                            // (same goal state and level) is won by it unless already won; the owner's counter
+                            // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
+                            // The worklist holds robot triples only, so first-in first-out takes them in
+                            // order of rank and the first won action of an owner is one of least rank.
+                            wonCount++;
+                            edges++;
+                            long o = ob + s;
+                            int os = ((int) o & 1) << 2;
+                            int o8 = count.get(o >>> 1);
+                            if (((o8 >>> os) & 15) != 0) {
                                 continue;
                             }
-                            count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
-                            if (c + 1 < need) {
-                                continue;
+                            count.set(o >>> 1, (byte) (o8 | (choice << os)));
+                            if (tail - head == wl.length) {
+                                wl = grow(wl, head, tail);
+                                wmask = wl.length - 1;
                             }
+                            wl[(tail++) & wmask] = o;
+                            wonCount++;
                             if (flags != null) {
-                                flags[(int) q] = true;
+                                flags[(int) o] = true;
                             }
-                        } else if (flags != null) {
-                            flags[(int) (base + s)] = true;
+                            if (o == start && stopAtStart) {
+                                stopped = true;
+                                break expand;
+                            }
                         }
-                        // (d, gj, s) is won now. An action with one outcome needs no counter: its only
-                        // successor is the robot triple just expanded, which is expanded once. Its owner
-                        // (same goal state and level) is won by it unless already won; the owner's counter
-                        // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
-                        // The worklist holds robot triples only, so first-in first-out takes them in
-                        // order of rank and the first won action of an owner is one of least rank.
+                    }
+                }
+                if (++steps == AttractorSolver.POLL_INTERVAL) {
+                    steps = 0;
+                    if (cancelled.getAsBoolean()) {
+                        throw new CancellationException("solving was cancelled");
+                    }
+                }
+            }
+            if (seeded) {
+                break;
+            }
+            seeded = true;
+            for (int d = rc; d < arena.vertexCount(); d++) {
+                int lo = leftOutOf[d - rc];
+                if (lo == 0) {
+                    continue;
+                }
+                int need = arena.outEnd(d) - arena.outBegin(d);
+                int choice = actionIndex[d - rc] + 1;
+                for (int g = 0; g < gc; g++) {
+                    long base = id(d, g, 0);
+                    long ob = id(ownerOf[d - rc], g, 0);
+                    for (int s = 0; s < levels; s++) {
+                        long q = base + s;
+                        int qs = ((int) q & 1) << 2;
+                        int cell8 = count.get(q >>> 1);
+                        int c = (cell8 >>> qs) & 15;
+                        if (c >= need || c + lo < need) {
+                            count.set(q >>> 1, (byte) (cell8 + (c >= need ? 0 : lo << qs)));
+                            continue; // won already, or still waiting for real outcomes
+                        }
+                        count.set(q >>> 1, (byte) (cell8 + (lo << qs)));
                         wonCount++;
-                        edges++;
+                        if (flags != null) {
+                            flags[(int) q] = true;
+                        }
                         long o = ob + s;
                         int os = ((int) o & 1) << 2;
                         int o8 = count.get(o >>> 1);
@@ -517,8 +572,6 @@ public final class ImplicitReserveGame {
                         if (tail - head == wl.length) {
                             wl = grow(wl, head, tail);
                             wmask = wl.length - 1;
-                            tail -= head;
-                            head = 0;
                         }
                         wl[(tail++) & wmask] = o;
                         wonCount++;
@@ -530,12 +583,6 @@ public final class ImplicitReserveGame {
                             break expand;
                         }
                     }
-                }
-            }
-            if (++steps == AttractorSolver.POLL_INTERVAL) {
-                steps = 0;
-                if (cancelled.getAsBoolean()) {
-                    throw new CancellationException("solving was cancelled");
                 }
             }
         }
@@ -550,7 +597,11 @@ public final class ImplicitReserveGame {
         return new Result(won, wonCount, edges, stopped, vertexCount);
     }
 
-    /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
+    /**
+     * The full circular buffer (tail - head = its length) in one twice as long, each element at the same index
+     * modulo the new length, so that head and tail stay valid (any run of n consecutive indices is distinct
+     * modulo 2n; int overflow of the indices is harmless, as the lengths are powers of two).
+     */
     private long[] grow(long[] wl, int head, int tail) {
         // while copying, the old buffer and the new one (twice as long) are both live
         long bytes = fixedBytes + 24L * wl.length;
@@ -559,8 +610,9 @@ public final class ImplicitReserveGame {
         }
         long[] out = new long[wl.length * 2];
         int mask = wl.length - 1;
+        int outMask = out.length - 1;
         for (int i = head; i != tail; i++) {
-            out[i - head] = wl[i & mask];
+            out[i & outMask] = wl[i & mask];
         }
         return out;
     }
