@@ -394,12 +394,7 @@ public final class ImplicitReserveGame {
         // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
         // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
         // keeps the search near the counters it just touched, first-in first-out ranks the triples.
-        // One circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
-        // or at the head (queue); its length is a power of two so indices wrap by a mask
-        long[] wl = new long[1 << 12];
-        int wmask = wl.length - 1;
-        int head = 0;
-        int tail = 0;
+        final Worklist wl = new Worklist();
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
         // the targets: robot triples completing the mission (any level)
@@ -409,12 +404,7 @@ public final class ImplicitReserveGame {
             for (int s = 0; s < levels; s++) {
                 long t = base + s;
                 count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
-                if (tail - head == wl.length) {
-                    wl = grow(wl, head, tail);
-                    wmask = wl.length - 1;
-                }
-                wl[(tail++) & wmask] = t;
-                wonCount++;
+                wl.push(t);
                 if (flags != null) {
                     flags[(int) t] = true;
                 }
@@ -435,8 +425,8 @@ public final class ImplicitReserveGame {
         boolean seeded = leftOutOf == null;
         expand:
         while (true) {
-            while (tail != head) {
-                long p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
+            while (!wl.isEmpty()) {
+                long p = wl.pop(fifo);
                 if ((++expanded & (Progress.EVERY - 1)) == 0) {
                     progress.at(expanded);
                 }
@@ -505,22 +495,7 @@ public final class ImplicitReserveGame {
                             wonCount++;
                             edges++;
                             long o = ob + s;
-                            int os = ((int) o & 1) << 2;
-                            int o8 = count.get(o >>> 1);
-                            if (((o8 >>> os) & 15) != 0) {
-                                continue;
-                            }
-                            count.set(o >>> 1, (byte) (o8 | (choice << os)));
-                            if (tail - head == wl.length) {
-                                wl = grow(wl, head, tail);
-                                wmask = wl.length - 1;
-                            }
-                            wl[(tail++) & wmask] = o;
-                            wonCount++;
-                            if (flags != null) {
-                                flags[(int) o] = true;
-                            }
-                            if (o == start && stopAtStart) {
+                            if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
                                 stopped = true;
                                 break expand;
                             }
@@ -563,22 +538,7 @@ public final class ImplicitReserveGame {
                             flags[(int) q] = true;
                         }
                         long o = ob + s;
-                        int os = ((int) o & 1) << 2;
-                        int o8 = count.get(o >>> 1);
-                        if (((o8 >>> os) & 15) != 0) {
-                            continue;
-                        }
-                        count.set(o >>> 1, (byte) (o8 | (choice << os)));
-                        if (tail - head == wl.length) {
-                            wl = grow(wl, head, tail);
-                            wmask = wl.length - 1;
-                        }
-                        wl[(tail++) & wmask] = o;
-                        wonCount++;
-                        if (flags != null) {
-                            flags[(int) o] = true;
-                        }
-                        if (o == start && stopAtStart) {
+                        if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
                             stopped = true;
                             break expand;
                         }
@@ -594,27 +554,80 @@ public final class ImplicitReserveGame {
             countsOut[0] = count;
         }
         boolean won = start == -2 || start >= 0 && (stopped || ((count.get(start >>> 1) >>> ((start & 1) << 2)) & 15) > 0);
-        return new Result(won, wonCount, edges, stopped, vertexCount);
+        return new Result(won, wonCount + wl.pushed(), edges, stopped, vertexCount);
     }
 
     /**
-     * The full circular buffer (tail - head = its length) in one twice as long, each element at the same index
-     * modulo the new length, so that head and tail stay valid (any run of n consecutive indices is distinct
-     * modulo 2n; int overflow of the indices is harmless, as the lengths are powers of two).
+     * Robot triple o is won by the action of index {@code choice - 1} unless it is won already: its counter
+     * records the choice, and it joins the worklist (and the flags, when kept). Returns whether it was new.
      */
-    private long[] grow(long[] wl, int head, int tail) {
-        // while copying, the old buffer and the new one (twice as long) are both live
-        long bytes = fixedBytes + 24L * wl.length;
-        if (bytes > budgetBytes || wl.length >= (1 << 30)) {
-            throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes, true);
+    private static boolean winOwner(PagedBytes count, Worklist wl, boolean[] flags, long o, int choice) {
+        int os = ((int) o & 1) << 2;
+        int o8 = count.get(o >>> 1);
+        if (((o8 >>> os) & 15) != 0) {
+            return false;
         }
-        long[] out = new long[wl.length * 2];
-        int mask = wl.length - 1;
-        int outMask = out.length - 1;
-        for (int i = head; i != tail; i++) {
-            out[i & outMask] = wl[i & mask];
+        count.set(o >>> 1, (byte) (o8 | (choice << os)));
+        wl.push(o);
+        if (flags != null) {
+            flags[(int) o] = true;
         }
-        return out;
+        return true;
+    }
+
+    /**
+     * The won robot triples not yet expanded: one circular buffer serves as stack or queue (pushes at the
+     * tail, pops at the tail for last-in first-out or at the head for first-in first-out); its length is a
+     * power of two so indices wrap by a mask (int overflow of head and tail is harmless for the same reason),
+     * and it grows within the memory budget of {@link #limitWorklist}.
+     */
+    private final class Worklist {
+        private long[] buf = new long[1 << 12];
+        private int mask = buf.length - 1;
+        private int head;
+        private int tail;
+        private long pushed;
+
+        boolean isEmpty() {
+            return head == tail;
+        }
+
+        long pop(boolean fifo) {
+            return fifo ? buf[(head++) & mask] : buf[(--tail) & mask];
+        }
+
+        void push(long v) {
+            if (tail - head == buf.length) {
+                grow();
+            }
+            buf[(tail++) & mask] = v;
+            pushed++;
+        }
+
+        /** Triples pushed so far. */
+        long pushed() {
+            return pushed;
+        }
+
+        /**
+         * The full buffer in one twice as long, each element at the same index modulo the new length, so that
+         * head and tail stay valid (any run of n consecutive indices is distinct modulo 2n).
+         */
+        private void grow() {
+            // while copying, the old buffer and the new one (twice as long) are both live
+            long bytes = fixedBytes + 24L * buf.length;
+            if (bytes > budgetBytes || buf.length >= (1 << 30)) {
+                throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes,
+                        true);
+            }
+            long[] out = new long[buf.length * 2];
+            int outMask = out.length - 1;
+            for (int i = head; i != tail; i++) {
+                out[i & outMask] = buf[i & mask];
+            }
+            buf = out;
+            mask = outMask;
+        }
     }
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */

@@ -53,10 +53,53 @@ class LastingPhasesProperties {
             }
         }
         Statistics.label("refined (more than one round)").collect(rounds > 1);
+        Statistics.label("guaranteed at the mission's floor").collect(highest >= m.reserveUnits());
         Statistics.label("some phase left out").collect(partial);
         Statistics.label("lasting rule with budget").collect(m.map().disturbances().anyLasting()
                 && m.map().disturbances().budget() > 0);
         Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(p -> p >= 5));
         Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(p -> p >= 10));
+    }
+
+    /**
+     * The two abstractions of one round on their own, against {@link LastingBruteForce}: with only the phases
+     * without closures compiled, the game with every left-out closure lost (weakened) may only win where the
+     * mission is won, and the game with every left-out closure won (strengthened) may only lose where it is
+     * lost, at the mission's floor, at the oracle's highest floor and one above it.
+     */
+    @Property(tries = 1000)
+    void weakenedWinsAndStrengthenedLossesAreReal(@ForAll long seed) {
+        Mission m = LastingMissions.fromSeed(seed, true);
+        int highest = new LastingBruteForce(m).highestFloor();
+        String why = LastingMissions.describe(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        dockline.arena.DisturbanceStates st = ArenaCompiler.states(m);
+        boolean[] keep = new boolean[st.count()];
+        boolean partial = false;
+        for (int s = 0; s < st.count(); s++) {
+            keep[s] = st.closed(s).length == 0;
+            partial |= !keep[s];
+        }
+        dockline.arena.Arena base = ArenaCompiler.compileWithin(m, st, keep);
+        boolean apart = false;
+        for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
+            if (floor > m.startUnits() || floor > m.capacityUnits()) {
+                continue;
+            }
+            boolean expected = highest >= floor;
+            ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
+            boolean weak = new ImplicitReserveGame(base, goal, mon, false).solve(false).startWon();
+            boolean strong = new ImplicitReserveGame(base, goal, mon, true).solve(false).startWon();
+            if (weak) {
+                assertThat(expected).as("weakened game won at floor %d, mission lost\n%s", floor, why).isTrue();
+            }
+            if (!strong) {
+                assertThat(expected).as("strengthened game lost at floor %d, mission won\n%s", floor, why).isFalse();
+            }
+            apart |= weak != strong;
+        }
+        Statistics.label("some phase left out").collect(partial);
+        Statistics.label("weakened and strengthened differ").collect(apart);
+        Statistics.label("weakened and strengthened differ").coverage(c -> c.check(true).percentage(p -> p >= 5));
     }
 }
