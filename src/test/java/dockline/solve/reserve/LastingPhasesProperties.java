@@ -2,7 +2,9 @@ package dockline.solve.reserve;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import dockline.arena.DisturbanceStates;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
@@ -15,8 +17,9 @@ import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
 
 /**
- * {@link PhasedLastingSolver} (closure phases built only where the robot's attempts run into them, closures
- * into left-out phases lost, refined by the frontier) against {@link LastingBruteForce}, the separately written
+ * {@link PhasedLastingSolver} (closure phases built only where the strengthened game's strategy relies on
+ * them, a closure into a left-out phase counted as won, refined until that strategy meets none or the start
+ * is lost) against {@link LastingBruteForce}, the separately written
  * explicit-state oracle with closure sets and per-rule counts, on random tiny maps with lasting and momentary
  * doors and blockages, at-most limits, slips and budgets 0-3: the same verdict at the mission's floor and at
  * the brute force's highest floor and one above it. A guaranteed policy of the restricted game must pass the
@@ -73,14 +76,14 @@ class LastingPhasesProperties {
         int highest = new LastingBruteForce(m).highestFloor();
         String why = LastingMissions.describe(m);
         GoalAutomaton goal = GoalAutomaton.of(m);
-        dockline.arena.DisturbanceStates st = ArenaCompiler.states(m);
+        DisturbanceStates st = ArenaCompiler.states(m);
         boolean[] keep = new boolean[st.count()];
         boolean partial = false;
         for (int s = 0; s < st.count(); s++) {
             keep[s] = st.closed(s).length == 0;
             partial |= !keep[s];
         }
-        dockline.arena.Arena base = ArenaCompiler.compileWithin(m, st, keep);
+        Arena base = ArenaCompiler.compileWithin(m, st, keep);
         boolean apart = false;
         for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
             if (floor > m.startUnits() || floor > m.capacityUnits()) {
