@@ -109,7 +109,6 @@ public final class ImplicitReserveGame {
         this.arena = arena;
         this.goal = goal;
         this.monitor = monitor;
-        this.leftOutWins = leftOutWins;
         this.gc = goal.stateCount();
         this.levels = (int) monitor.stateBound();
         this.gBits = bits(gc);
@@ -138,6 +137,7 @@ public final class ImplicitReserveGame {
         int rc = arena.robotCount();
         this.actionIndex = new byte[arena.vertexCount() - rc];
         this.ownerOf = new int[arena.vertexCount() - rc];
+        this.leftOutWins = leftOutWins;
         this.leftOutOf = leftOutWins ? new byte[arena.vertexCount() - rc] : null;
         for (int x = rc; x < arena.vertexCount(); x++) {
             if (arena.inEnd(x) - arena.inBegin(x) != 1) {

@@ -37,10 +37,7 @@ class LastingPhasesProperties {
         ProductOptions po = ProductOptions.defaults();
         int rounds = 0;
         boolean partial = false;
-        for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
-            if (floor > m.startUnits() || floor > m.capacityUnits()) {
-                continue;
-            }
+        for (int floor : floors(m, highest)) {
             boolean expected = highest >= floor;
             ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
             PhasedLastingSolver.Result r = PhasedLastingSolver.solve(m, goal, mon, po);
@@ -85,10 +82,7 @@ class LastingPhasesProperties {
         }
         Arena base = ArenaCompiler.compileWithin(m, st, keep);
         boolean apart = false;
-        for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
-            if (floor > m.startUnits() || floor > m.capacityUnits()) {
-                continue;
-            }
+        for (int floor : floors(m, highest)) {
             boolean expected = highest >= floor;
             ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
             boolean weak = new ImplicitReserveGame(base, goal, mon, false).solve(false).startWon();
@@ -104,5 +98,11 @@ class LastingPhasesProperties {
         Statistics.label("some phase left out").collect(partial);
         Statistics.label("weakened and strengthened differ").collect(apart);
         Statistics.label("weakened and strengthened differ").coverage(c -> c.check(true).percentage(p -> p >= 5));
+    }
+
+    /** The floors tried: the mission's, the oracle's highest and one above it, those the mission allows. */
+    private static int[] floors(Mission m, int highest) {
+        return java.util.stream.IntStream.of(m.reserveUnits(), Math.max(0, highest), highest + 1)
+                .filter(f -> f <= m.startUnits() && f <= m.capacityUnits()).toArray();
     }
 }
