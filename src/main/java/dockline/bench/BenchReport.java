@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.TreeSet;
 
 /**
  * The rows of one benchmark run, the ratios between methods measured in that run, the targets of
@@ -42,7 +43,7 @@ public final class BenchReport {
         this.machine = Map.copyOf(machine);
         this.rows = List.copyOf(rows);
         this.totalMillis = totalMillis;
-        this.mismatches = Benchmark.mismatches(rows);
+        this.mismatches = mismatches(rows);
         computeRatios();
     }
 
@@ -310,5 +311,23 @@ public final class BenchReport {
 
     private static Double finiteOrNull(double v) {
         return Double.isFinite(v) ? round(v) : null;
+    }
+
+    /** Verdicts per instance that disagree: "size instance: method=verdict, ...". */
+    private static List<String> mismatches(List<BenchRow> rows) {
+        Map<String, Map<String, String>> byInstance = new LinkedHashMap<>();
+        for (BenchRow r : rows) {
+            if (r.verdict() != null) {
+                byInstance.computeIfAbsent(r.size() + "x" + r.size() + " " + r.instance(), k -> new LinkedHashMap<>())
+                        .put(r.method(), r.verdict());
+            }
+        }
+        List<String> out = new ArrayList<>();
+        byInstance.forEach((k, v) -> {
+            if (new TreeSet<>(v.values()).size() > 1) {
+                out.add(k + ": " + v);
+            }
+        });
+        return out;
     }
 }

@@ -53,4 +53,12 @@ public record BenchRow(int size, String instance, String method, long vertices, 
     static BenchRow skipped(int size, String instance, String method, long vertices, long edges, String why) {
         return new BenchRow(size, instance, method, vertices, edges, -1, -1, -1, -1, null, -1, vertices, -1, why);
     }
+
+    /** A row as one short progress line (the full row is in the final table). */
+    String compact() {
+        return String.format(java.util.Locale.ROOT, "  %s: %s", method(), ran()
+                ? String.format(java.util.Locale.ROOT, "%.1f ms%s", solveMillis(),
+                        verdict() == null ? "" : ", " + verdict())
+                : "skipped");
+    }
 }

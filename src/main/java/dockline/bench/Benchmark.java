@@ -2,6 +2,11 @@ package dockline.bench;
 
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import static dockline.bench.Timing.time;
+import static dockline.bench.Timing.timeInterleaved;
+
+import dockline.bench.Timing.Body;
+import dockline.bench.Timing.Timed;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
@@ -26,9 +31,7 @@ import dockline.solve.game.ProductGame;
 import dockline.solve.game.ReserveSizeForecast;
 import dockline.solve.game.Solution;
 import dockline.solve.reserve.ImplicitReserveGame;
-import dockline.solve.reserve.PhasedLastingSolver;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -172,7 +175,7 @@ public final class Benchmark {
                             inst.goal.stateCount(), inst.arenaMillis));
                     for (BenchRow r : measure(inst, sampler, config.reps(), full, false)) {
                         rows.add(r);
-                        progress.accept(compact(r));
+                        progress.accept(r.compact());
                     }
                 }
             }
@@ -181,28 +184,11 @@ public final class Benchmark {
     }
 
     /**
-     * Only the lasting rows (issue 13's door-shut events that stay shut) on the configured sides, after one
-     * warm-up of the same row on a 32x32 floor: a development aid ({@code bench --lasting-row}) for profiling
-     * the lasting route; each row times the momentary main route again back to back, so its ratio is of one run.
+     * Only the lasting rows (issue 13's door-shut events that stay shut) on the configured sides, after a
+     * warm-up: a development aid ({@code bench --lasting-row}); see {@link LastingBench#only}.
      */
     public List<BenchRow> lastingOnly() {
-        List<BenchRow> rows = new ArrayList<>();
-        try (HeapSampler sampler = new HeapSampler()) {
-            progress.accept("warming up the JIT compiler (the lasting row on a 32x32 floor)");
-            for (int w = 0; w < Math.max(1, config.warmups()); w++) {
-                lasting(instance(32, RESERVE), sampler, 1);
-            }
-            lastingPhased(instance(32, RESERVE), sampler, 1);
-            for (int side : config.sizes()) {
-                Instance inst = instance(side, RESERVE);
-                for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), lastingPhased(inst, sampler,
-                        config.reps()))) {
-                    rows.add(r);
-                    progress.accept(compact(r));
-                }
-            }
-        }
-        return rows;
+        return LastingBench.only(this, config, progress);
     }
 
     // ------------------------------------------------------------------ instances
@@ -237,7 +223,7 @@ public final class Benchmark {
                 rows.addAll(implicitMethods(inst, sampler, reps));
                 rows.add(fixpoint(inst, sampler, reps));
                 if (!warmup) {
-                    rows.add(lasting(inst, sampler, reps));
+                    rows.add(LastingBench.lasting(inst, sampler, reps));
                 }
             }
             case CONSUMPTION -> {
@@ -258,154 +244,6 @@ public final class Benchmark {
             default -> throw new IllegalStateException(inst.kind);
         }
         return rows;
-    }
-
-    /** Something timed; its value is kept from the last run. */
-    @FunctionalInterface
-    private interface Body<T> {
-        T run();
-    }
-
-    /** The value of the last run, the best wall and CPU times over the runs, the peak heap of the first run. */
-    private record Timed<T>(T value, double millis, double cpuMillis, long peak) {
-    }
-
-    private static final java.lang.management.ThreadMXBean THREADS =
-            java.lang.management.ManagementFactory.getThreadMXBean();
-
-    /**
-     * CPU time of this thread plus the garbage collector's pauses so far, in ns (other processes on the
-     * machine do not count); -1 when the platform cannot tell. Thread CPU time has nanosecond
-     * resolution (process CPU time on Linux only clock ticks); the pauses are added because the
-     * collector's work is done by its own threads.
-     */
-    private static long cpuNow() {
-        if (!THREADS.isCurrentThreadCpuTimeSupported()) {
-            return -1;
-        }
-        long gcMillis = 0;
-        for (java.lang.management.GarbageCollectorMXBean gc
-                : java.lang.management.ManagementFactory.getGarbageCollectorMXBeans()) {
-            gcMillis += Math.max(0, gc.getCollectionTime());
-        }
-        return THREADS.getCurrentThreadCpuTime() + gcMillis * 1_000_000L;
-    }
-
-    /** A first run shorter than this is repeated (see {@link #time(HeapSampler, long, int, Body)}). */
-    private static final double SHORT_RUN_MILLIS = 200;
-    private static final int SHORT_RUN_REPS = 7;
-    private static final int SHORT_RUN_MAX = 50;
-    private static final double SHORT_RUN_BUDGET_MILLIS = 300;
-
-    /** A run longer than this is not repeated (its time is stable enough, and the full run must stay short). */
-    private static final double REPEAT_BELOW_MILLIS = 2_000;
-
-    /**
-     * Runs {@code body} up to {@code reps} times (once when the first run takes over
-     * {@value #REPEAT_BELOW_MILLIS} ms); the heap is sampled during the first run, above {@code base}.
-     */
-    private static <T> Timed<T> time(HeapSampler sampler, long base, int reps, Body<T> body) {
-        double best = Double.MAX_VALUE;
-        double bestCpu = Double.MAX_VALUE;
-        long peak = -1;
-        T value = null;
-        // a method whose first run is under SHORT_RUN_MILLIS is run again until SHORT_RUN_BUDGET_MILLIS
-        // have been spent on it (at least SHORT_RUN_REPS runs, at most SHORT_RUN_MAX): the best of three is
-        // at the mercy of one collection or scheduling hiccup when a run takes a few milliseconds, and the
-        // best of many is a stable estimate of the undisturbed time
-        int tries = reps;
-        double spent = 0;
-        for (int r = 0; r < tries; r++) {
-            if (r == 0) {
-                // settled first, so that the peak is this method's and not also the garbage of the one before
-                System.gc();
-                sampler.start();
-            } else if (r < reps) {
-                // (the extra runs of a short method skip this: a collection costs more than such a run,
-                // and the best of many runs leaves out the few a collection falls into)
-                // Settle the heap between repetitions, outside the timing: without this a repetition starts
-                // with the previous one's result still referenced and its garbage uncollected, and pays
-                // (in the collector's pauses counted by cpuNow) for memory it did not allocate; the first
-                // repetition already starts from the heap the caller settled. A method's own collections
-                // during a repetition are still counted.
-                value = null;
-                System.gc();
-            }
-            long c0 = cpuNow();
-            long t0 = System.nanoTime();
-            value = body.run();
-            double ms = (System.nanoTime() - t0) / 1e6;
-            long c1 = cpuNow();
-            if (r == 0) {
-                peak = sampler.stop() - base;
-            }
-            best = Math.min(best, ms);
-            bestCpu = Math.min(bestCpu, c0 < 0 ? -1 : (c1 - c0) / 1e6);
-            spent += ms;
-            if (r == 0 && ms < SHORT_RUN_MILLIS && reps > 1) {
-                tries = SHORT_RUN_MAX;
-            }
-            if (tries == SHORT_RUN_MAX && r + 1 >= Math.max(reps, SHORT_RUN_REPS) && spent >= SHORT_RUN_BUDGET_MILLIS) {
-                break;
-            }
-            if (ms > REPEAT_BELOW_MILLIS) {
-                break;
-            }
-        }
-        return new Timed<>(value, best, bestCpu, peak);
-    }
-
-    /**
-     * Several methods whose ratio is a target, measured in {@code rounds} interleaved rounds: each round
-     * runs every method once after settling the heap (a method whose run is under
-     * {@value #SHORT_RUN_MILLIS} ms is run again within the round, until its share of
-     * {@value #SHORT_RUN_BUDGET_MILLIS} ms is spent), so that a slow phase of a shared machine, which
-     * lasts seconds, falls on every method alike instead of on whichever ran then. Per method: the best
-     * times over all rounds, the peak heap of its first run (above the heap settled just before it) and
-     * the value of its last run.
-     */
-    private static List<Timed<Object>> timeInterleaved(HeapSampler sampler, int rounds, List<Body<?>> bodies) {
-        int k = bodies.size();
-        double[] best = new double[k];
-        double[] bestCpu = new double[k];
-        long[] peak = new long[k];
-        Object[] value = new Object[k];
-        java.util.Arrays.fill(best, Double.MAX_VALUE);
-        java.util.Arrays.fill(bestCpu, Double.MAX_VALUE);
-        int minRuns = Math.max(1, (SHORT_RUN_REPS + rounds - 1) / rounds);
-        int maxRuns = Math.max(minRuns, SHORT_RUN_MAX / rounds);
-        double budget = SHORT_RUN_BUDGET_MILLIS / rounds;
-        for (int r = 0; r < rounds; r++) {
-            for (int i = 0; i < k; i++) {
-                value[i] = null;
-                long base = HeapSampler.settledUsed();
-                double spent = 0;
-                for (int run = 0; run < maxRuns; run++) {
-                    if (r == 0 && run == 0) {
-                        sampler.start();
-                    }
-                    long c0 = cpuNow();
-                    long t0 = System.nanoTime();
-                    value[i] = bodies.get(i).run();
-                    double ms = (System.nanoTime() - t0) / 1e6;
-                    long c1 = cpuNow();
-                    if (r == 0 && run == 0) {
-                        peak[i] = sampler.stop() - base;
-                    }
-                    best[i] = Math.min(best[i], ms);
-                    bestCpu[i] = Math.min(bestCpu[i], c0 < 0 ? -1 : (c1 - c0) / 1e6);
-                    spent += ms;
-                    if (ms >= SHORT_RUN_MILLIS || (run + 1 >= minRuns && spent >= budget)) {
-                        break;
-                    }
-                }
-            }
-        }
-        List<Timed<Object>> out = new ArrayList<>();
-        for (int i = 0; i < k; i++) {
-            out.add(new Timed<>(value[i], best[i], bestCpu[i], peak[i]));
-        }
-        return out;
     }
 
     private static final String[] CSR_METHODS = {"stored-attractor", "stored-compact", "stored-bfs", "sweep"};
@@ -568,127 +406,6 @@ public final class Benchmark {
                         early.value().stoppedEarly() ? "stopped early" : "ran to the end", early.value().wonVertices(),
                         100.0 * early.value().wonVertices() / Math.max(1, full.value().wonVertices()))));
         return rows;
-    }
-
-    /** The lasting row is skipped above this many robot vertices of its arena (compile time and heap). */
-    static final long LASTING_ROBOT_VERTEX_LIMIT = 1_500_000;
-
-    /** Disturbance states of a mission, counted on a one-row copy of nothing but its rules (cheap). */
-    private static long lastingStates(Mission m) {
-        int n = dockline.arena.ArenaCompiler.disturbanceStateCount(m, 1_000_000);
-        return n < 0 ? Long.MAX_VALUE / 4 : n;
-    }
-
-    /**
-     * The main route on the same instance with its door-shut events lasting (a shut door stays shut):
-     * the arena then carries the closed doors, found only as event sequences can close them. The row's
-     * note gives the ratio of its solve time to the momentary {@code attractor}'s (both CPU, the same
-     * work: implicit product, attractor with the robot's choices, policy and worst case), the arena sizes
-     * and compile times of both, and the size forecast against the reachable product.
-     */
-    private BenchRow lasting(Instance inst, HeapSampler sampler, int reps) {
-        Mission m = inst.mission;
-        List<dockline.model.EventRule> rules = new ArrayList<>();
-        for (dockline.model.EventRule r : m.map().disturbances().rules()) {
-            rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
-                    ? r.withDuration(dockline.model.EventDuration.REST_OF_MISSION) : r);
-        }
-        Mission lm = new Mission(m.name(), m.source(), m.map().withDisturbances(
-                new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
-                m.startCharge(), m.reserve(), m.tasks(), m.objective());
-        long states = lastingStates(lm);
-        long robots = states >= Long.MAX_VALUE / 4 ? states : states * inst.arena.freeCellCount();
-        if (robots > LASTING_ROBOT_VERTEX_LIMIT) {
-            return BenchRow.skipped(inst.side, inst.kind, "lasting", robots, 0, "skipped: the arena with lasting doors"
-                    + " would have " + robots + " robot vertices (" + states + " disturbance states), over this run's"
-                    + " limit of " + LASTING_ROBOT_VERTEX_LIMIT);
-        }
-        long t0 = System.nanoTime();
-        Arena arena;
-        try {
-            arena = ArenaCompiler.compile(lm);
-        } catch (ArithmeticException | OutOfMemoryError e) {
-            return BenchRow.skipped(inst.side, inst.kind, "lasting", 0, 0, "does not fit: " + e.getMessage());
-        }
-        double compileMs = (System.nanoTime() - t0) / 1e6;
-        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
-        ImplicitReserveGame game;
-        try {
-            game = new ImplicitReserveGame(arena, inst.goal, monitor);
-        } catch (ProductTooLargeException e) {
-            return BenchRow.skipped(inst.side, inst.kind, "lasting", arena.vertexCount(), arena.edgeCount(),
-                    "does not fit: more than 2^31 slots in the numbering");
-        }
-        if (game.slotCount() + 4 * game.vertexCount() > Runtime.getRuntime().maxMemory() - HeapSampler.settledUsed()) {
-            return BenchRow.skipped(inst.side, inst.kind, "lasting", game.vertexCount(), 0,
-                    "does not fit: " + megabytes(game.slotCount() + 4 * game.vertexCount()) + " needed at most");
-        }
-        long forecast;
-        try {
-            forecast = ReserveSizeForecast.of(arena, inst.goal, monitor).vertices();
-        } catch (ArithmeticException tooManyPairs) {
-            forecast = -1;
-        }
-        long base = HeapSampler.settledUsed();
-        Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, 1, game::bfs);
-        Timed<long[]> pol = time(sampler, base, reps, () -> policyRun(game));
-        long[] pv = pol.value();
-        long reachable = bfs.value().wonVertices();
-        // the momentary main route on the same instance, for the ratio (timed here again, back to back)
-        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena, inst.goal, monitor);
-        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
-        double ratio = pol.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
-        return new BenchRow(inst.side, inst.kind, "lasting", reachable, bfs.value().edgesScanned(), 0, pol.millis(),
-                pol.cpuMillis(), pol.peak(), Verdict.of(pv[0] == 1).word(), compileMs + pol.millis(), -1, forecast,
-                String.format(java.util.Locale.ROOT, "door-shut events lasting: %d disturbance states (%d closable"
-                                + " doors) against %d; arena %d vertices compiled in %.0f ms (momentary %d in %.0f ms);"
-                                + " solve %.2f x the momentary attractor's CPU time (%.1f ms); forecast / reachable"
-                                + " product %.3f; %s", arena.stateCount(), arena.states().itemCount(),
-                        inst.arena.stateCount(), arena.vertexCount(), compileMs, inst.arena.vertexCount(),
-                        inst.arenaMillis, ratio, mom.cpuMillis(), forecast / (double) Math.max(1, reachable),
-                        pv[0] == 1 ? "policy of " + pv[3] + " rows, worst case " + pv[1] + " units"
-                                : "not guaranteed"));
-    }
-
-    /**
-     * The lasting instance decided phase by phase ({@link PhasedLastingSolver}: only the closure phases the
-     * robot's attempts run into are compiled and solved, refined until exact), timed end to end (its restricted
-     * compiles included, as it builds them itself), against the momentary main route timed back to back.
-     */
-    private BenchRow lastingPhased(Instance inst, HeapSampler sampler, int reps) {
-        Mission lm = lastingMission(inst.mission);
-        ReserveMonitor monitor = new ReserveMonitor(lm.reserveUnits(), lm.capacityUnits(), lm.startUnits());
-        long base = HeapSampler.settledUsed();
-        Timed<PhasedLastingSolver.Result> ph;
-        try {
-            ph = time(sampler, base, reps, () -> PhasedLastingSolver.solve(lm, inst.goal, monitor,
-                    dockline.solve.ProductOptions.defaults()));
-        } catch (RuntimeException | OutOfMemoryError e) {
-            return BenchRow.skipped(inst.side, inst.kind, "lasting-phased", 0, 0, "does not fit: " + e.getMessage());
-        }
-        PhasedLastingSolver.Result r = ph.value();
-        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena, inst.goal, monitor);
-        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
-        double ratio = ph.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
-        return new BenchRow(inst.side, inst.kind, "lasting-phased", r.game().vertexCount(),
-                r.strategy().result().edgesScanned(), 0, ph.millis(), ph.cpuMillis(), ph.peak(),
-                Verdict.of(r.startWon()).word(), ph.millis(), -1, -1,
-                String.format(java.util.Locale.ROOT, "door-shut events lasting, phase by phase: %d of %d disturbance"
-                                + " states kept in %d rounds, last arena %d vertices; %.2f x the momentary attractor's"
-                                + " CPU time (%.1f ms)", r.keptStates(), r.totalStates(), r.rounds(),
-                        r.arena().vertexCount(), ratio, mom.cpuMillis()));
-    }
-
-    /** The instance's mission with its door-shut events lasting (the rest as they are). */
-    private static Mission lastingMission(Mission m) {
-        List<dockline.model.EventRule> rules = new ArrayList<>();
-        for (dockline.model.EventRule r : m.map().disturbances().rules()) {
-            rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
-                    ? r.withDuration(dockline.model.EventDuration.REST_OF_MISSION) : r);
-        }
-        return new Mission(m.name(), m.source(), m.map().withDisturbances(
-                new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
-                m.startCharge(), m.reserve(), m.tasks(), m.objective());
     }
 
     /**
@@ -861,37 +578,11 @@ public final class Benchmark {
         return (bytes >> 20) + " MB";
     }
 
-    /** A row as one short progress line (the full row is in the final table). */
-    static String compact(BenchRow r) {
-        return String.format(java.util.Locale.ROOT, "  %s: %s", r.method(), r.ran()
-                ? String.format(java.util.Locale.ROOT, "%.1f ms%s", r.solveMillis(),
-                        r.verdict() == null ? "" : ", " + r.verdict())
-                : "skipped");
-    }
-
-    /** Verdicts per instance that disagree: "size instance: method=verdict, ...". */
-    static List<String> mismatches(List<BenchRow> rows) {
-        Map<String, Map<String, String>> byInstance = new LinkedHashMap<>();
-        for (BenchRow r : rows) {
-            if (r.verdict() != null) {
-                byInstance.computeIfAbsent(r.size() + "x" + r.size() + " " + r.instance(), k -> new LinkedHashMap<>())
-                        .put(r.method(), r.verdict());
-            }
-        }
-        List<String> out = new ArrayList<>();
-        byInstance.forEach((k, v) -> {
-            if (new TreeSet<>(v.values()).size() > 1) {
-                out.add(k + ": " + v);
-            }
-        });
-        return out;
-    }
-
     /**
      * The implicit route end to end as the planner runs it: the attractor with the robot's choices, the
      * policy walk and the worst-case pass over the closed loop, as {won, worst level, edges scanned, rows}.
      */
-    private static long[] policyRun(ImplicitReserveGame game) {
+    static long[] policyRun(ImplicitReserveGame game) {
         ImplicitReserveGame.Strategy st = game.solveWithStrategy(() -> false);
         if (!st.startWon()) {
             return new long[] {0, -1, st.result().edgesScanned(), 0};

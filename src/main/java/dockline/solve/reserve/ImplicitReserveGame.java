@@ -1,6 +1,7 @@
 package dockline.solve.reserve;
 
 import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
 import dockline.monitor.ReserveMonitor;
@@ -8,6 +9,7 @@ import dockline.policy.Policy;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
 import dockline.solve.game.AttractorSolver;
+import dockline.solve.game.Completions;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
 import dockline.util.PagedBytes;
@@ -71,6 +73,11 @@ public final class ImplicitReserveGame {
     private final byte[] actionIndex;
     // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
     private final int[] ownerOf;
+    // whether an outcome into a left-out closure phase (weight ArenaCompiler.LEFT_OUT) counts as won
+    // for the robot instead of lost: the strengthened game of PhasedLastingSolver
+    final boolean leftOutWins;
+    // with leftOutWins, per disturbance (action) vertex x, how many of its outcomes are left-out closures
+    private final byte[] leftOutOf;
     // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
     private long budgetBytes = Long.MAX_VALUE;
     private long fixedBytes = 0;
@@ -86,6 +93,16 @@ public final class ImplicitReserveGame {
      * 2^62 slots (which no memory holds) is reported as {@code Long.MAX_VALUE} slots, never numbered.
      */
     public ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor) {
+        this(arena, goal, monitor, false);
+    }
+
+    /**
+     * The game, with an outcome into a left-out closure phase ({@link ArenaCompiler#LEFT_OUT}, see
+     * {@link ArenaCompiler#compileWithin}) counted as won for the robot when {@code leftOutWins} (the
+     * strengthened game: what the robot loses there it loses in the mission), else as lost (as any
+     * outcome below the floor: the weakened game, whose wins are wins in the mission).
+     */
+    ImplicitReserveGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor, boolean leftOutWins) {
         if (arena == null || goal == null || monitor == null) {
             throw new IllegalArgumentException("arena, goal and monitor are required");
         }
@@ -120,6 +137,8 @@ public final class ImplicitReserveGame {
         int rc = arena.robotCount();
         this.actionIndex = new byte[arena.vertexCount() - rc];
         this.ownerOf = new int[arena.vertexCount() - rc];
+        this.leftOutWins = leftOutWins;
+        this.leftOutOf = leftOutWins ? new byte[arena.vertexCount() - rc] : null;
         for (int x = rc; x < arena.vertexCount(); x++) {
             if (arena.inEnd(x) - arena.inBegin(x) != 1) {
                 throw new IllegalArgumentException("disturbance vertex " + x + " must have exactly one way in, from its"
@@ -128,6 +147,11 @@ public final class ImplicitReserveGame {
             int e = arena.inEdge(arena.inBegin(x));
             actionIndex[x - rc] = (byte) (e - arena.outBegin(arena.source(e)));
             ownerOf[x - rc] = arena.source(e);
+            if (leftOutWins) {
+                for (int f = arena.outBegin(x); f < arena.outEnd(x); f++) {
+                    leftOutOf[x - rc] += arena.weight(f) == ArenaCompiler.LEFT_OUT ? 1 : 0;
+                }
+            }
         }
     }
 
@@ -149,6 +173,21 @@ public final class ImplicitReserveGame {
     /** The number of a triple: a long, as the numbering may pass 2^31 slots. */
     long id(int a, int g, int s) {
         return ((((long) a << gBits) | g) << lBits) | s;
+    }
+
+    /** The arena vertex of triple number p. */
+    int vertexOf(long p) {
+        return (int) (p >>> (lBits + gBits));
+    }
+
+    /** The goal state of triple number p. */
+    int goalOf(long p) {
+        return (int) (p >>> lBits) & ((1 << gBits) - 1);
+    }
+
+    /** The monitor state (level minus floor) of triple number p. */
+    int levelOf(long p) {
+        return (int) p & ((1 << lBits) - 1);
     }
 
     /** Slots of the numbering (every triple, padded): the length of the per-vertex arrays. */
@@ -294,6 +333,9 @@ public final class ImplicitReserveGame {
     int outcomes(int x, int g, int s, long[] succ, int[] arrive) {
         int k = 0;
         for (int e = arena.outBegin(x); e < arena.outEnd(x); e++) {
+            if (leftOutWins && arena.weight(e) == ArenaCompiler.LEFT_OUT) {
+                continue; // won in the strengthened game, with nothing after it
+            }
             int s2 = monitor.step(s, arena.weight(e));
             int a2 = arena.target(e);
             int c2 = arena.cell(a2);
@@ -344,8 +386,6 @@ public final class ImplicitReserveGame {
         final int top = levels - 1;
         final int lb = lBits;
         final int gb = gBits;
-        final int sMask = (1 << lb) - 1;
-        final int gMask = (1 << gb) - 1;
         // 4 bits per vertex (out-degrees are at most 15): for a disturbance triple with several outcomes
         // the outcomes known to be won (won at its out-degree); for a robot triple 0 while not won, else
         // 1 + its chosen action's index (targets: 1). Half a byte per vertex keeps the whole table in the
@@ -354,38 +394,19 @@ public final class ImplicitReserveGame {
         // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
         // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
         // keeps the search near the counters it just touched, first-in first-out ranks the triples.
-        // One circular buffer serves as stack or queue: pushes at the tail, pops at the tail (stack)
-        // or at the head (queue); its length is a power of two so indices wrap by a mask
-        long[] wl = new long[1 << 12];
-        int wmask = wl.length - 1;
-        int head = 0;
-        int tail = 0;
+        final Worklist wl = new Worklist();
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
         // the targets: robot triples completing the mission (any level)
-        for (int slot = 0; slot < arena.freeCellCount(); slot++) {
-            int c = arena.freeCell(slot);
-            boolean dock = arena.isDock(c);
-            for (int g = 0; g < gc; g++) {
-                if (goal.accepting(g, dock)) {
-                    for (int k = 0; k < arena.stateCount(); k++) {
-                        long base = id(arena.robotVertexInState(c, k), g, 0);
-                        for (int s = 0; s < levels; s++) {
-                            long t = base + s;
-                            count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
-                            if (tail - head == wl.length) {
-                                wl = grow(wl, head, tail);
-                                wmask = wl.length - 1;
-                                tail -= head;
-                                head = 0;
-                            }
-                            wl[(tail++) & wmask] = base + s;
-                            wonCount++;
-                            if (flags != null) {
-                                flags[(int) (base + s)] = true;
-                            }
-                        }
-                    }
+        int[] targets = Completions.of(arena, goal);
+        for (int i = 0; i < targets.length; i += 2) {
+            long base = id(targets[i], targets[i + 1], 0);
+            for (int s = 0; s < levels; s++) {
+                long t = base + s;
+                count.set(t >>> 1, (byte) (count.get(t >>> 1) | (1 << ((t & 1) << 2))));
+                wl.push(t);
+                if (flags != null) {
+                    flags[(int) t] = true;
                 }
             }
         }
@@ -396,105 +417,132 @@ public final class ImplicitReserveGame {
         Progress.Tracker progress = Progress.phase("solving the game at floor " + monitor.floorUnits() + " units",
                 vertexCount / Math.max(1, arena.vertexCount()) * rc);
         long expanded = 0;
+        // in the strengthened game the left-out outcomes count as won only once the real ones are exhausted:
+        // first the attractor of the weakened game (left-out lost), then, if the start is not won yet, every
+        // left-out outcome is won at once and the attractor goes on. The region is the strengthened game's
+        // (the least fixpoint does not depend on the order), and a recorded choice relies on a left-out
+        // closure only where the robot cannot win without one (fewer phases for PhasedLastingSolver to add).
+        boolean seeded = leftOutOf == null;
         expand:
-        while (tail != head) {
-            long p = fifo ? wl[(head++) & wmask] : wl[(--tail) & wmask];
-            if ((++expanded & (Progress.EVERY - 1)) == 0) {
-                progress.at(expanded);
+        while (true) {
+            while (!wl.isEmpty()) {
+                long p = wl.pop(fifo);
+                if ((++expanded & (Progress.EVERY - 1)) == 0) {
+                    progress.at(expanded);
+                }
+                int s2 = levelOf(p);
+                int g2 = goalOf(p);
+                int x = vertexOf(p);
+                int from = arena.inBegin(x);
+                int to = arena.inEnd(x);
+                edges += to - from;
+                // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
+                int cell = arena.cell(x);
+                int gFrom = inverse.begin(cell, g2);
+                int gTo = inverse.end(cell, g2);
+                for (int i = from; i < to; i++) {
+                    int d = revSource[i];
+                    int w = revWeight[i];
+                    int need = revNeed[i];
+                    int sLo;
+                    int sHi;
+                    if (s2 < top) {
+                        sLo = s2 - w;
+                        sHi = sLo;
+                    } else if (w >= 0) {
+                        sLo = Math.max(0, top - w);
+                        sHi = top;
+                    } else {
+                        continue;
+                    }
+                    if (sLo < 0 || sHi > top) {
+                        continue;
+                    }
+                    long dBase = (long) d << gb;
+                    int owner = ownerOf[d - rc];
+                    long oBase = (long) owner << gb;
+                    int choice = (actionIndex[d - rc] + 1);
+                    for (int j = gFrom; j < gTo; j++) {
+                        int gj = inverse.state(j);
+                        long base = (dBase | gj) << lb;
+                        long ob = (oBase | gj) << lb;
+                        for (int s = sLo; s <= sHi; s++) {
+                            if (need > 1) {
+                                // an action the disturbance can spoil: won once all its outcomes are
+                                long q = base + s;
+                                int qs = ((int) q & 1) << 2;
+                                int cell8 = count.get(q >>> 1);
+                                int c = (cell8 >>> qs) & 15;
+                                if (c >= need) {
+                                    continue;
+                                }
+                                count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
+                                if (c + 1 < need) {
+                                    continue;
+                                }
+                                if (flags != null) {
+                                    flags[(int) q] = true;
+                                }
+                            } else if (flags != null) {
+                                flags[(int) (base + s)] = true;
+                            }
+                            // (d, gj, s) is won now. An action with one outcome needs no counter: its only
+                            // successor is the robot triple just expanded, which is expanded once. Its owner
+                            // (same goal state and level) is won by it unless already won; the owner's counter
+                            // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
+                            // The worklist holds robot triples only, so first-in first-out takes them in
+                            // order of rank and the first won action of an owner is one of least rank.
+                            wonCount++;
+                            edges++;
+                            long o = ob + s;
+                            if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
+                                stopped = true;
+                                break expand;
+                            }
+                        }
+                    }
+                }
+                if (++steps == AttractorSolver.POLL_INTERVAL) {
+                    steps = 0;
+                    if (cancelled.getAsBoolean()) {
+                        throw new CancellationException("solving was cancelled");
+                    }
+                }
             }
-            int s2 = (int) p & sMask;
-            int g2 = (int) (p >>> lb) & gMask;
-            int x = (int) (p >>> (lb + gb));
-            int from = arena.inBegin(x);
-            int to = arena.inEnd(x);
-            edges += to - from;
-            // a robot triple: predecessors are disturbance triples (d, g, s) with an outcome d -> x
-            int cell = arena.cell(x);
-            int gFrom = inverse.begin(cell, g2);
-            int gTo = inverse.end(cell, g2);
-            for (int i = from; i < to; i++) {
-                int d = revSource[i];
-                int w = revWeight[i];
-                int need = revNeed[i];
-                int sLo;
-                int sHi;
-                if (s2 < top) {
-                    sLo = s2 - w;
-                    sHi = sLo;
-                } else if (w >= 0) {
-                    sLo = Math.max(0, top - w);
-                    sHi = top;
-                } else {
+            if (seeded) {
+                break;
+            }
+            seeded = true;
+            for (int d = rc; d < arena.vertexCount(); d++) {
+                int lo = leftOutOf[d - rc];
+                if (lo == 0) {
                     continue;
                 }
-                if (sLo < 0 || sHi > top) {
-                    continue;
-                }
-                long dBase = (long) d << gb;
-                int owner = ownerOf[d - rc];
-                long oBase = (long) owner << gb;
-                int choice = (actionIndex[d - rc] + 1);
-                for (int j = gFrom; j < gTo; j++) {
-                    int gj = inverse.state(j);
-                    long base = (dBase | gj) << lb;
-                    long ob = (oBase | gj) << lb;
-                    for (int s = sLo; s <= sHi; s++) {
-                        if (need > 1) {
-                            // an action the disturbance can spoil: won once all its outcomes are
-                            long q = base + s;
-                            int qs = ((int) q & 1) << 2;
-                            int cell8 = count.get(q >>> 1);
-                            int c = (cell8 >>> qs) & 15;
-                            if (c >= need) {
-                                continue;
-                            }
-                            count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
-                            if (c + 1 < need) {
-                                continue;
-                            }
-                            if (flags != null) {
-                                flags[(int) q] = true;
-                            }
-                        } else if (flags != null) {
-                            flags[(int) (base + s)] = true;
+                int need = arena.outEnd(d) - arena.outBegin(d);
+                int choice = actionIndex[d - rc] + 1;
+                for (int g = 0; g < gc; g++) {
+                    long base = id(d, g, 0);
+                    long ob = id(ownerOf[d - rc], g, 0);
+                    for (int s = 0; s < levels; s++) {
+                        long q = base + s;
+                        int qs = ((int) q & 1) << 2;
+                        int cell8 = count.get(q >>> 1);
+                        int c = (cell8 >>> qs) & 15;
+                        if (c >= need || c + lo < need) {
+                            count.set(q >>> 1, (byte) (cell8 + (c >= need ? 0 : lo << qs)));
+                            continue; // won already, or still waiting for real outcomes
                         }
-                        // (d, gj, s) is won now. An action with one outcome needs no counter: its only
-                        // successor is the robot triple just expanded, which is expanded once. Its owner
-                        // (same goal state and level) is won by it unless already won; the owner's counter
-                        // records the choice, 1 + the index of d among the owner's out-edges (at most 15).
-                        // The worklist holds robot triples only, so first-in first-out takes them in
-                        // order of rank and the first won action of an owner is one of least rank.
-                        wonCount++;
-                        edges++;
-                        long o = ob + s;
-                        int os = ((int) o & 1) << 2;
-                        int o8 = count.get(o >>> 1);
-                        if (((o8 >>> os) & 15) != 0) {
-                            continue;
-                        }
-                        count.set(o >>> 1, (byte) (o8 | (choice << os)));
-                        if (tail - head == wl.length) {
-                            wl = grow(wl, head, tail);
-                            wmask = wl.length - 1;
-                            tail -= head;
-                            head = 0;
-                        }
-                        wl[(tail++) & wmask] = o;
+                        count.set(q >>> 1, (byte) (cell8 + (lo << qs)));
                         wonCount++;
                         if (flags != null) {
-                            flags[(int) o] = true;
+                            flags[(int) q] = true;
                         }
-                        if (o == start && stopAtStart) {
+                        long o = ob + s;
+                        if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
                             stopped = true;
                             break expand;
                         }
                     }
-                }
-            }
-            if (++steps == AttractorSolver.POLL_INTERVAL) {
-                steps = 0;
-                if (cancelled.getAsBoolean()) {
-                    throw new CancellationException("solving was cancelled");
                 }
             }
         }
@@ -506,22 +554,80 @@ public final class ImplicitReserveGame {
             countsOut[0] = count;
         }
         boolean won = start == -2 || start >= 0 && (stopped || ((count.get(start >>> 1) >>> ((start & 1) << 2)) & 15) > 0);
-        return new Result(won, wonCount, edges, stopped, vertexCount);
+        return new Result(won, wonCount + wl.pushed(), edges, stopped, vertexCount);
     }
 
-    /** The circular buffer's elements head..tail in order, in a buffer twice as long. */
-    private long[] grow(long[] wl, int head, int tail) {
-        // while copying, the old buffer and the new one (twice as long) are both live
-        long bytes = fixedBytes + 24L * wl.length;
-        if (bytes > budgetBytes || wl.length >= (1 << 30)) {
-            throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes, true);
+    /**
+     * Robot triple o is won by the action of index {@code choice - 1} unless it is won already: its counter
+     * records the choice, and it joins the worklist (and the flags, when kept). Returns whether it was new.
+     */
+    private static boolean winOwner(PagedBytes count, Worklist wl, boolean[] flags, long o, int choice) {
+        int os = ((int) o & 1) << 2;
+        int o8 = count.get(o >>> 1);
+        if (((o8 >>> os) & 15) != 0) {
+            return false;
         }
-        long[] out = new long[wl.length * 2];
-        int mask = wl.length - 1;
-        for (int i = head; i != tail; i++) {
-            out[i - head] = wl[i & mask];
+        count.set(o >>> 1, (byte) (o8 | (choice << os)));
+        wl.push(o);
+        if (flags != null) {
+            flags[(int) o] = true;
         }
-        return out;
+        return true;
+    }
+
+    /**
+     * The won robot triples not yet expanded: one circular buffer serves as stack or queue (pushes at the
+     * tail, pops at the tail for last-in first-out or at the head for first-in first-out); its length is a
+     * power of two so indices wrap by a mask (int overflow of head and tail is harmless for the same reason),
+     * and it grows within the memory budget of {@link #limitWorklist}.
+     */
+    private final class Worklist {
+        private long[] buf = new long[1 << 12];
+        private int mask = buf.length - 1;
+        private int head;
+        private int tail;
+        private long pushed;
+
+        boolean isEmpty() {
+            return head == tail;
+        }
+
+        long pop(boolean fifo) {
+            return fifo ? buf[(head++) & mask] : buf[(--tail) & mask];
+        }
+
+        void push(long v) {
+            if (tail - head == buf.length) {
+                grow();
+            }
+            buf[(tail++) & mask] = v;
+            pushed++;
+        }
+
+        /** Triples pushed so far. */
+        long pushed() {
+            return pushed;
+        }
+
+        /**
+         * The full buffer in one twice as long, each element at the same index modulo the new length, so that
+         * head and tail stay valid (any run of n consecutive indices is distinct modulo 2n).
+         */
+        private void grow() {
+            // while copying, the old buffer and the new one (twice as long) are both live
+            long bytes = fixedBytes + 24L * buf.length;
+            if (bytes > budgetBytes || buf.length >= (1 << 30)) {
+                throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes,
+                        true);
+            }
+            long[] out = new long[buf.length * 2];
+            int outMask = out.length - 1;
+            for (int i = head; i != tail; i++) {
+                out[i & outMask] = buf[i & mask];
+            }
+            buf = out;
+            mask = outMask;
+        }
     }
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */

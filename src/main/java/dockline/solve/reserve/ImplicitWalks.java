@@ -36,14 +36,30 @@ final class ImplicitWalks {
         final Arena arena = game.arena;
         final GoalAutomaton goal = game.goal;
         final ReserveMonitor monitor = game.monitor;
-        final int lBits = game.lBits;
-        final int gBits = game.gBits;
+        final int rc = arena.robotCount();
         List<PolicyEntry> entries = new ArrayList<>();
+        forEachInLoop(game, strategy, p -> {
+            int x = game.vertexOf(p);
+            if (x < rc) {
+                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
+                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(game.levelOf(p)), arena.budgetLeft(x),
+                        goal.progressMask(game.goalOf(p)), arena.action(d), null, arena.closures(x)));
+            }
+        });
+        return new Policy(entries);
+    }
+
+    /**
+     * Every triple of the closed loop of the recorded choices from the start (robot follows its choice,
+     * disturbance plays every outcome), once each, in depth-first order; nothing when the start is lost or
+     * already complete. O(closed loop); a bit per slot for the visited set.
+     */
+    static void forEachInLoop(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy,
+                              java.util.function.LongConsumer visit) {
         long start = game.start();
         if (start < 0) {
-            return new Policy(entries);
+            return;
         }
-        final int rc = arena.robotCount();
         PagedBytes seen = PagedBytes.bits(game.slotCount);
         long[] todo = new long[1 << 10];
         int tail = 0;
@@ -52,14 +68,7 @@ final class ImplicitWalks {
         long[] succ = new long[16];
         while (tail > 0) {
             long p = todo[--tail];
-            int x = (int) (p >>> (lBits + gBits));
-            if (x < rc) {
-                int s = (int) p & ((1 << lBits) - 1);
-                int g = (int) (p >>> lBits) & ((1 << gBits) - 1);
-                int d = arena.target(arena.outBegin(x) + strategy.choice(p));
-                entries.add(new PolicyEntry(arena.cellOf(x), monitor.level(s), arena.budgetLeft(x),
-                        goal.progressMask(g), arena.action(d), null, arena.closures(x)));
-            }
+            visit.accept(p);
             int k = loopSuccessors(game, strategy, p, succ, null);
             for (int i = 0; i < k; i++) {
                 long q = succ[i];
@@ -72,7 +81,6 @@ final class ImplicitWalks {
                 }
             }
         }
-        return new Policy(entries);
     }
 
     /**
@@ -102,7 +110,7 @@ final class ImplicitWalks {
                 continue;
             }
             int k = loopSuccessors(game, strategy, p, succ, arrive);
-            int w = monitor.level((int) p & ((1 << game.lBits) - 1));
+            int w = monitor.level(game.levelOf(p));
             boolean ready = true;
             for (int i = 0; i < k; i++) {
                 if (arrive[i] >= 0) {
@@ -141,11 +149,9 @@ final class ImplicitWalks {
      */
     private static int loopSuccessors(ImplicitReserveGame game, ImplicitReserveGame.Strategy strategy, long p,
                                       long[] succ, int[] arrive) {
-        final int lBits = game.lBits;
-        final int gBits = game.gBits;
-        int s = (int) p & ((1 << lBits) - 1);
-        int g = (int) (p >>> lBits) & ((1 << gBits) - 1);
-        int x = (int) (p >>> (lBits + gBits));
+        int s = game.levelOf(p);
+        int g = game.goalOf(p);
+        int x = game.vertexOf(p);
         if (x < game.arena.robotCount()) {
             int d = game.arena.target(game.arena.outBegin(x) + strategy.choice(p));
             succ[0] = game.id(d, g, s);
@@ -168,10 +174,6 @@ final class ImplicitWalks {
             return new ImplicitReserveGame.Result(start == -2, 0, 0, false, vertexCount);
         }
         final int rc = arena.robotCount();
-        final int lb = game.lBits;
-        final int gb = game.gBits;
-        final int sMask = (1 << lb) - 1;
-        final int gMask = (1 << gb) - 1;
         final PagedBytes seen = PagedBytes.bits(game.slotCount);
         LongQueue queue = new LongQueue();
         seen.setBit(start);
@@ -180,15 +182,15 @@ final class ImplicitWalks {
         long head = 0;
         while (head < queue.size()) {
             long p = queue.get(head++);
-            int s = (int) p & sMask;
-            int g = (int) (p >>> lb) & gMask;
-            int x = (int) (p >>> (lb + gb));
+            int s = game.levelOf(p);
+            int g = game.goalOf(p);
+            int x = game.vertexOf(p);
             int from = arena.outBegin(x);
             int to = arena.outEnd(x);
             edges += to - from;
             if (x < rc) {
                 for (int e = from; e < to; e++) {
-                    long q = ((((long) arena.target(e) << gb) | g) << lb) | s;
+                    long q = game.id(arena.target(e), g, s);
                     if (!seen.getBit(q)) {
                         seen.setBit(q);
                         queue.add(q);
@@ -207,7 +209,7 @@ final class ImplicitWalks {
                 if (g2 == GoalAutomaton.REJECT || goal.accepting(g2, arena.isDock(c2))) {
                     continue; // a sink (LOSE or WIN): nothing to explore
                 }
-                long q = ((((long) a2 << gb) | g2) << lb) | s2;
+                long q = game.id(a2, g2, s2);
                 if (!seen.getBit(q)) {
                     seen.setBit(q);
                     queue.add(q);

@@ -8,7 +8,6 @@ import dockline.model.EventKind;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
 import dockline.solve.ProductOptions;
-import dockline.util.LongIntMap;
 import java.util.Arrays;
 import java.util.function.BooleanSupplier;
 
@@ -16,27 +15,27 @@ import java.util.function.BooleanSupplier;
  * The reserve game of a mission with lasting events, solved phase by phase: a <em>phase</em> is a set of
  * doors and zones closed (all disturbance states with that closure set; each closure spends an event, so a
  * phase with C closed is a game of the map with C closed and at most K - |C| events). Only the phases the
- * robot's winning attempts run into are built.
+ * robot's winning attempts rely on are built.
  *
  * <p>The kept phases are compiled into a restricted arena ({@link ArenaCompiler#compileWithin}) in which a
- * closure into a left-out phase loses; that game is solved with {@link ImplicitReserveGame}. If the start is
- * won there it is won in the mission (the robot's winning policy never risks a left-out closure). If not,
- * the solve ran to the end and its winning region W is the least fixpoint of the restricted game. From the
- * start, a forward search follows the plays the building can keep outside W: from a robot triple not in W
- * every action, and from an action every real outcome not in W. An action met there whose real outcomes are
- * all in W but which has a left-out closure outcome is the frontier: the phase of that closure is added, and
- * the game is solved again. When the search meets no frontier, the building has a strategy in the mission
- * itself that keeps every play from the start outside W using real outcomes only (every action it meets has a
- * real outcome outside W, or a real loss), and W holds every completion, so the start is lost in the mission
- * as well: the verdict is exact either way. The attractor is that of
- * Grädel, Thomas and Wilke (eds.), "Automata, Logics, and Infinite Games", LNCS 2500 (2002), ch. 2; the
- * refinement of a pessimistic abstraction by its frontier is the counterexample-guided idea of Henzinger,
- * Jhala and Majumdar, "Counterexample-guided control" (ICALP 2003), here without any approximation left at
- * the end.
+ * closure into a left-out phase ends the play. Each round solves the <em>strengthened</em> game on it
+ * ({@link ImplicitReserveGame} with such a closure counted as won for the robot): the building there can do
+ * no more than in the mission, so a start the robot loses there is lost in the mission, and the round ends
+ * with "not guaranteed" without building any other phase. Otherwise the solve stopped as soon as the start
+ * was won, and the closed loop of its recorded choices from the start (robot follows its choice, the
+ * building plays every outcome) is walked: if no play of it meets a left-out closure, that strategy plays in
+ * the mission itself (every outcome it meets is real and leads into a kept phase) and wins: "guaranteed",
+ * with that strategy as the policy. Else the phases of the left-out closures that loop meets, and only
+ * those, are added and the next round starts. Each round adds a phase, so the rounds end, and the verdict
+ * is exact either way. This is two-sided abstraction refinement for games (Henzinger, Jhala and Majumdar,
+ * "Counterexample-guided control", ICALP 2003: an abstract strategy of the player is checked on the
+ * concrete game and the abstraction refined where it fails), here with no approximation left at the end; the
+ * attractor is that of Grädel, Thomas and Wilke (eds.), "Automata, Logics, and Infinite Games", LNCS 2500
+ * (2002), ch. 2.
  *
- * <p>Cost: one restricted compile and solve per round, each O(size of the kept phases' product); at most
- * as many rounds as there are closure sets, and then no cheaper than the whole arena (a mission the robot
- * cannot win needs every phase its attempts reach).
+ * <p>Cost: per round one restricted compile and one solve that stops once the start is won, O(size of the
+ * kept phases' product), and a walk of the closed loop; at most as many rounds as there are closure sets
+ * (a mission that needs every phase is then no cheaper than the whole arena).
  */
 public final class PhasedLastingSolver {
 
@@ -48,8 +47,9 @@ public final class PhasedLastingSolver {
      *
      * @param startWon   the verdict at the monitor's floor (exact)
      * @param arena      the restricted arena of the last round (its kept phases)
-     * @param game       the game on it
-     * @param strategy   the last round's solve (its recorded choices give a policy when the start is won)
+     * @param game       the (strengthened) game on it
+     * @param strategy   the last round's solve; when the start is won its closed loop from the start meets no
+     *                   left-out closure, so its policy and worst case are those of a strategy in the mission
      * @param rounds     rounds of the refinement
      * @param keptStates disturbance states kept in the end, of {@code totalStates}
      * @param totalStates the mission's disturbance states
@@ -70,16 +70,16 @@ public final class PhasedLastingSolver {
         while (true) {
             rounds++;
             Arena a = ArenaCompiler.compileWithin(mission, st, keep);
-            ImplicitReserveGame game = ReserveSolver.implicitGame(a, goal, monitor, po);
+            ImplicitReserveGame game = ReserveSolver.budgeted(new ImplicitReserveGame(a, goal, monitor, true), a, po);
             ImplicitReserveGame.Strategy s = game.solveWithStrategy(cancelled);
             int kept = 0;
             for (boolean k : keep) {
                 kept += k ? 1 : 0;
             }
-            if (s.startWon()) {
-                return new Result(true, a, game, s, rounds, kept, st.count());
+            if (!s.startWon()) {
+                return new Result(false, a, game, s, rounds, kept, st.count());
             }
-            boolean[] add = frontier(a, st, goal, monitor, s, keep, game.start());
+            boolean[] add = reliedOn(game, st, s, keep);
             boolean any = false;
             for (int t = 0; t < add.length; t++) {
                 if (add[t] && !keep[t]) {
@@ -93,7 +93,7 @@ public final class PhasedLastingSolver {
                 }
             }
             if (!any) {
-                return new Result(false, a, game, s, rounds, kept, st.count());
+                return new Result(true, a, game, s, rounds, kept, st.count());
             }
         }
     }
@@ -104,96 +104,34 @@ public final class PhasedLastingSolver {
     }
 
     /**
-     * The left-out states worth adding, found from the start: a forward search over the robot triples that
-     * are not won (the plays the building can keep outside W), following at each action every real outcome that
-     * is not won; an action whose real outcomes are all won but that has a left-out closure outcome is the
-     * frontier, and the state that closure leads to is added. When there is none, the building keeps every play
-     * from the start outside W with real outcomes only, so the start is lost in the mission too (exact).
-     * O(triples searched x out-degree).
+     * The left-out states the strengthened strategy relies on: per disturbance triple of the closed loop of
+     * its recorded choices from the start, the state each of its left-out closure outcomes leads to. None:
+     * the strategy never meets a left-out closure, so it is a winning strategy in the mission.
+     * O(closed loop x out-degree).
      */
-    private static boolean[] frontier(Arena a, DisturbanceStates st, GoalAutomaton goal, ReserveMonitor monitor,
-                                      ImplicitReserveGame.Strategy s, boolean[] keep, long startTriple) {
+    private static boolean[] reliedOn(ImplicitReserveGame game, DisturbanceStates st, ImplicitReserveGame.Strategy s,
+                                      boolean[] keep) {
         boolean[] add = new boolean[st.count()];
-        if (startTriple < 0) {
-            return add; // the start itself is lost (below the floor, or in an avoided zone)
-        }
-        long levels = monitor.stateBound();
-        long gc = goal.stateCount();
-        int a0 = a.startVertex();
-        int g0 = goal.initial(a.cellZones(a.cell(a0)));
-        int s0 = monitor.initialState();
-        LongIntMap seen = new LongIntMap(1 << 12);
-        long[] queue = new long[1 << 12];
-        int head = 0;
-        int tail = 0;
-        long k0 = (a0 * gc + g0) * levels + s0;
-        seen.put(k0, 1);
-        queue[tail++] = k0;
-        while (head < tail) {
-            long key = queue[head++];
-            int lv = (int) (key % levels);
-            int g = (int) ((key / levels) % gc);
-            int r = (int) (key / levels / gc);
-            for (int re = a.outBegin(r); re < a.outEnd(r); re++) {
-                int d = a.target(re);
-                int leftOut = -1;
-                boolean realNotWon = false;
-                for (int e = a.outBegin(d); e < a.outEnd(d); e++) {
-                    if (a.weight(e) == ArenaCompiler.LEFT_OUT) {
-                        leftOut = e;
-                        continue;
-                    }
-                    int ns = monitor.step(lv, a.weight(e));
-                    int u = a.target(e);
-                    int ng = ns == ReserveMonitor.REJECT ? GoalAutomaton.REJECT : goal.step(g, a.cellZones(a.cell(u)));
-                    if (ng == GoalAutomaton.REJECT) {
-                        realNotWon = true; // a real loss: the building may end the play here
-                        continue;
-                    }
-                    if (s.robotWins(u, ng, ns)) {
-                        continue;
-                    }
-                    realNotWon = true;
-                    long ku = (u * gc + ng) * levels + ns;
-                    if (seen.get(ku) < 0) {
-                        seen.put(ku, 1);
-                        if (tail == queue.length) {
-                            queue = Arrays.copyOf(queue, 2 * queue.length);
-                        }
-                        queue[tail++] = ku;
-                    }
+        Arena a = game.arena;
+        int rc = a.robotCount();
+        ImplicitWalks.forEachInLoop(game, s, p -> {
+            int d = game.vertexOf(p);
+            if (d < rc) {
+                return;
+            }
+            for (int e = a.outBegin(d); e < a.outEnd(d); e++) {
+                if (a.weight(e) != ArenaCompiler.LEFT_OUT) {
+                    continue;
                 }
-                if (leftOut >= 0 && !realNotWon) {
-                    // the item the closure would close: the door tried, or the blockage rule's zone
-                    int item = a.event(leftOut) == EventKind.DOOR_SHUT.ordinal() ? st.doorItem(a.actionTarget(d))
-                            : st.blockageItem(a.rule(leftOut));
-                    int t = st.after(a.state(d), a.rule(leftOut), item);
-                    if (t >= 0 && !keep[t]) {
-                        add[t] = true;
-                    }
+                // the item the closure would close: the door tried, or the blockage rule's zone
+                int item = a.event(e) == EventKind.DOOR_SHUT.ordinal() ? st.doorItem(a.actionTarget(d))
+                        : st.blockageItem(a.rule(e));
+                int t = st.after(a.state(d), a.rule(e), item);
+                if (t >= 0 && !keep[t]) {
+                    add[t] = true;
                 }
             }
-        }
+        });
         return add;
-    }
-
-    /** Whether every outcome of disturbance vertex d but {@code skip}, from goal state g and level lv, is won. */
-    private static boolean othersWon(Arena a, GoalAutomaton goal, ReserveMonitor monitor,
-                                     ImplicitReserveGame.Strategy s, int d, int skip, int g, int lv) {
-        for (int e = a.outBegin(d); e < a.outEnd(d); e++) {
-            if (e == skip) {
-                continue;
-            }
-            int ns = monitor.step(lv, a.weight(e));
-            if (ns == ReserveMonitor.REJECT) {
-                return false;
-            }
-            int u = a.target(e);
-            int ng = goal.step(g, a.cellZones(a.cell(u)));
-            if (ng == GoalAutomaton.REJECT || !s.robotWins(u, ng, ns)) {
-                return false;
-            }
-        }
-        return true;
     }
 }

@@ -162,7 +162,7 @@ public final class ReserveSolver {
         if (options.highestReserve() || options.safestPolicy()) {
             try {
                 // with lasting closures each verdict is found phase by phase (exact, and only the closure
-                // phases the robot's attempts run into are built); otherwise on the whole implicit product
+                // phases the robot's strategy relies on are built); otherwise on the whole implicit product
                 boolean phased = arena.states().itemCount() > 0 && arena.stateCount() == arena.states().count();
                 int lo = MonotoneSearch.highest(won ? worst.getAsInt() : -1, won ? start : Math.min(start, reserve - 1),
                         f -> phased ? PhasedLastingSolver.wins(arena.mission(), goal, monitor.withFloor(f), po)
@@ -203,7 +203,15 @@ public final class ReserveSolver {
      */
     static ImplicitReserveGame implicitGame(Arena arena, GoalAutomaton goal, ReserveMonitor monitor,
                                                     ProductOptions po) {
-        ImplicitReserveGame game = new ImplicitReserveGame(arena, goal, monitor);
+        return budgeted(new ImplicitReserveGame(arena, goal, monitor), arena, po);
+    }
+
+    /**
+     * The game on {@code arena} checked against the memory budget ({@code po}) and with its worklist capped.
+     *
+     * @throws ProductTooLargeException if its counters do not fit the memory budget
+     */
+    static ImplicitReserveGame budgeted(ImplicitReserveGame game, Arena arena, ProductOptions po) {
         long bytes = implicitBytes(game, arena);
         long budget = po.effectiveMemoryBudget();
         if (bytes > budget) {

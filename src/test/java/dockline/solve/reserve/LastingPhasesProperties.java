@@ -2,7 +2,9 @@ package dockline.solve.reserve;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import dockline.arena.DisturbanceStates;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.goal.GoalAutomaton;
@@ -15,8 +17,9 @@ import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
 
 /**
- * {@link PhasedLastingSolver} (closure phases built only where the robot's attempts run into them, closures
- * into left-out phases lost, refined by the frontier) against {@link LastingBruteForce}, the separately written
+ * {@link PhasedLastingSolver} (closure phases built only where the strengthened game's strategy relies on
+ * them, a closure into a left-out phase counted as won, refined until that strategy meets none or the start
+ * is lost) against {@link LastingBruteForce}, the separately written
  * explicit-state oracle with closure sets and per-rule counts, on random tiny maps with lasting and momentary
  * doors and blockages, at-most limits, slips and budgets 0-3: the same verdict at the mission's floor and at
  * the brute force's highest floor and one above it. A guaranteed policy of the restricted game must pass the
@@ -34,10 +37,7 @@ class LastingPhasesProperties {
         ProductOptions po = ProductOptions.defaults();
         int rounds = 0;
         boolean partial = false;
-        for (int floor : new int[] {m.reserveUnits(), Math.max(0, highest), highest + 1}) {
-            if (floor > m.startUnits() || floor > m.capacityUnits()) {
-                continue;
-            }
+        for (int floor : floors(m, highest)) {
             boolean expected = highest >= floor;
             ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
             PhasedLastingSolver.Result r = PhasedLastingSolver.solve(m, goal, mon, po);
@@ -53,10 +53,56 @@ class LastingPhasesProperties {
             }
         }
         Statistics.label("refined (more than one round)").collect(rounds > 1);
+        Statistics.label("guaranteed at the mission's floor").collect(highest >= m.reserveUnits());
         Statistics.label("some phase left out").collect(partial);
         Statistics.label("lasting rule with budget").collect(m.map().disturbances().anyLasting()
                 && m.map().disturbances().budget() > 0);
         Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(p -> p >= 5));
         Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(p -> p >= 10));
+    }
+
+    /**
+     * The two abstractions of one round on their own, against {@link LastingBruteForce}: with only the phases
+     * without closures compiled, the game with every left-out closure lost (weakened) may only win where the
+     * mission is won, and the game with every left-out closure won (strengthened) may only lose where it is
+     * lost, at the mission's floor, at the oracle's highest floor and one above it.
+     */
+    @Property(tries = 1000)
+    void weakenedWinsAndStrengthenedLossesAreReal(@ForAll long seed) {
+        Mission m = LastingMissions.fromSeed(seed, true);
+        int highest = new LastingBruteForce(m).highestFloor();
+        String why = LastingMissions.describe(m);
+        GoalAutomaton goal = GoalAutomaton.of(m);
+        DisturbanceStates st = ArenaCompiler.states(m);
+        boolean[] keep = new boolean[st.count()];
+        boolean partial = false;
+        for (int s = 0; s < st.count(); s++) {
+            keep[s] = st.closed(s).length == 0;
+            partial |= !keep[s];
+        }
+        Arena base = ArenaCompiler.compileWithin(m, st, keep);
+        boolean apart = false;
+        for (int floor : floors(m, highest)) {
+            boolean expected = highest >= floor;
+            ReserveMonitor mon = new ReserveMonitor(floor, m.capacityUnits(), m.startUnits());
+            boolean weak = new ImplicitReserveGame(base, goal, mon, false).solve(false).startWon();
+            boolean strong = new ImplicitReserveGame(base, goal, mon, true).solve(false).startWon();
+            if (weak) {
+                assertThat(expected).as("weakened game won at floor %d, mission lost\n%s", floor, why).isTrue();
+            }
+            if (!strong) {
+                assertThat(expected).as("strengthened game lost at floor %d, mission won\n%s", floor, why).isFalse();
+            }
+            apart |= weak != strong;
+        }
+        Statistics.label("some phase left out").collect(partial);
+        Statistics.label("weakened and strengthened differ").collect(apart);
+        Statistics.label("weakened and strengthened differ").coverage(c -> c.check(true).percentage(p -> p >= 5));
+    }
+
+    /** The floors tried: the mission's, the oracle's highest and one above it, those the mission allows. */
+    private static int[] floors(Mission m, int highest) {
+        return java.util.stream.IntStream.of(m.reserveUnits(), Math.max(0, highest), highest + 1)
+                .filter(f -> f <= m.startUnits() && f <= m.capacityUnits()).toArray();
     }
 }

@@ -1,0 +1,169 @@
+package dockline.bench;
+
+import static dockline.bench.Timing.time;
+
+import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
+import dockline.bench.Benchmark.Instance;
+import dockline.bench.Timing.Timed;
+import dockline.model.Mission;
+import dockline.monitor.ReserveMonitor;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.Verdict;
+import dockline.solve.game.ReserveSizeForecast;
+import dockline.solve.reserve.ImplicitReserveGame;
+import dockline.solve.reserve.PhasedLastingSolver;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+
+/**
+ * The benchmark's rows for lasting disturbances (issue 13): the reserve instance with its door-shut events
+ * lasting (a shut door stays shut), solved on the whole arena ({@code lasting}) and phase by phase
+ * ({@code lasting-phased}, {@link PhasedLastingSolver}), each against the momentary main route on the same
+ * instance timed again back to back, so that the ratio is of one run. See DEVELOPERS.md, "Lasting doors".
+ */
+final class LastingBench {
+
+    private LastingBench() {
+    }
+
+    /**
+     * Only the lasting rows (issue 13's door-shut events that stay shut) on the configured sides, after one
+     * warm-up of the same row on a 32x32 floor: a development aid ({@code bench --lasting-row}, used by {@link Benchmark#lastingOnly}) for profiling
+     * the lasting route; each row times the momentary main route again back to back, so its ratio is of one run.
+     */
+    static List<BenchRow> only(Benchmark bench, Benchmark.Config config, Consumer<String> progress) {
+        List<BenchRow> rows = new ArrayList<>();
+        try (HeapSampler sampler = new HeapSampler()) {
+            progress.accept("warming up the JIT compiler (the lasting row on a 32x32 floor)");
+            for (int w = 0; w < Math.max(1, config.warmups()); w++) {
+                lasting(bench.instance(32, Benchmark.RESERVE), sampler, 1);
+            }
+            phased(bench.instance(32, Benchmark.RESERVE), sampler, 1);
+            for (int side : config.sizes()) {
+                Instance inst = bench.instance(side, Benchmark.RESERVE);
+                for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), phased(inst, sampler,
+                        config.reps()))) {
+                    rows.add(r);
+                    progress.accept(r.compact());
+                }
+            }
+        }
+        return rows;
+    }
+
+    /** The lasting row is skipped above this many robot vertices of its arena (compile time and heap). */
+    static final long LASTING_ROBOT_VERTEX_LIMIT = 1_500_000;
+
+    /** Disturbance states of a mission, counted on a one-row copy of nothing but its rules (cheap). */
+    private static long lastingStates(Mission m) {
+        int n = dockline.arena.ArenaCompiler.disturbanceStateCount(m, 1_000_000);
+        return n < 0 ? Long.MAX_VALUE / 4 : n;
+    }
+
+    /**
+     * The main route on the same instance with its door-shut events lasting (a shut door stays shut):
+     * the arena then carries the closed doors, found only as event sequences can close them. The row's
+     * note gives the ratio of its solve time to the momentary {@code attractor}'s (both CPU, the same
+     * work: implicit product, attractor with the robot's choices, policy and worst case), the arena sizes
+     * and compile times of both, and the size forecast against the reachable product.
+     */
+    static BenchRow lasting(Instance inst, HeapSampler sampler, int reps) {
+        Mission m = inst.mission();
+        Mission lm = lastingMission(m);
+        long states = lastingStates(lm);
+        long robots = states >= Long.MAX_VALUE / 4 ? states : states * inst.arena().freeCellCount();
+        if (robots > LASTING_ROBOT_VERTEX_LIMIT) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting", robots, 0, "skipped: the arena with lasting doors"
+                    + " would have " + robots + " robot vertices (" + states + " disturbance states), over this run's"
+                    + " limit of " + LASTING_ROBOT_VERTEX_LIMIT);
+        }
+        long t0 = System.nanoTime();
+        Arena arena;
+        try {
+            arena = ArenaCompiler.compile(lm);
+        } catch (ArithmeticException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting", 0, 0, "does not fit: " + e.getMessage());
+        }
+        double compileMs = (System.nanoTime() - t0) / 1e6;
+        ReserveMonitor monitor = new ReserveMonitor(m.reserveUnits(), m.capacityUnits(), m.startUnits());
+        ImplicitReserveGame game;
+        try {
+            game = new ImplicitReserveGame(arena, inst.goal(), monitor);
+        } catch (ProductTooLargeException e) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting", arena.vertexCount(), arena.edgeCount(),
+                    "does not fit: more than 2^31 slots in the numbering");
+        }
+        if (game.slotCount() + 4 * game.vertexCount() > Runtime.getRuntime().maxMemory() - HeapSampler.settledUsed()) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting", game.vertexCount(), 0,
+                    "does not fit: " + Benchmark.megabytes(game.slotCount() + 4 * game.vertexCount()) + " needed at most");
+        }
+        long forecast;
+        try {
+            forecast = ReserveSizeForecast.of(arena, inst.goal(), monitor).vertices();
+        } catch (ArithmeticException tooManyPairs) {
+            forecast = -1;
+        }
+        long base = HeapSampler.settledUsed();
+        Timed<ImplicitReserveGame.Result> bfs = time(sampler, base, 1, game::bfs);
+        Timed<long[]> pol = time(sampler, base, reps, () -> Benchmark.policyRun(game));
+        long[] pv = pol.value();
+        long reachable = bfs.value().wonVertices();
+        // the momentary main route on the same instance, for the ratio (timed here again, back to back)
+        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena(), inst.goal(), monitor);
+        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
+        double ratio = pol.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
+        return new BenchRow(inst.side(), inst.kind(), "lasting", reachable, bfs.value().edgesScanned(), 0, pol.millis(),
+                pol.cpuMillis(), pol.peak(), Verdict.of(pv[0] == 1).word(), compileMs + pol.millis(), -1, forecast,
+                String.format(java.util.Locale.ROOT, "door-shut events lasting: %d disturbance states (%d closable"
+                                + " doors) against %d; arena %d vertices compiled in %.0f ms (momentary %d in %.0f ms);"
+                                + " solve %.2f x the momentary attractor's CPU time (%.1f ms); forecast / reachable"
+                                + " product %.3f; %s", arena.stateCount(), arena.states().itemCount(),
+                        inst.arena().stateCount(), arena.vertexCount(), compileMs, inst.arena().vertexCount(),
+                        inst.arenaMillis(), ratio, mom.cpuMillis(), forecast / (double) Math.max(1, reachable),
+                        pv[0] == 1 ? "policy of " + pv[3] + " rows, worst case " + pv[1] + " units"
+                                : "not guaranteed"));
+    }
+
+    /**
+     * The lasting instance decided phase by phase ({@link PhasedLastingSolver}: only the closure phases the
+     * robot's attempts run into are compiled and solved, refined until exact), timed end to end (its restricted
+     * compiles included, as it builds them itself), against the momentary main route timed back to back.
+     */
+    static BenchRow phased(Instance inst, HeapSampler sampler, int reps) {
+        Mission lm = lastingMission(inst.mission());
+        ReserveMonitor monitor = new ReserveMonitor(lm.reserveUnits(), lm.capacityUnits(), lm.startUnits());
+        long base = HeapSampler.settledUsed();
+        Timed<PhasedLastingSolver.Result> ph;
+        try {
+            ph = time(sampler, base, reps, () -> PhasedLastingSolver.solve(lm, inst.goal(), monitor,
+                    dockline.solve.ProductOptions.defaults()));
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting-phased", 0, 0, "does not fit: " + e.getMessage());
+        }
+        PhasedLastingSolver.Result r = ph.value();
+        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena(), inst.goal(), monitor);
+        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
+        double ratio = ph.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
+        return new BenchRow(inst.side(), inst.kind(), "lasting-phased", r.game().vertexCount(),
+                r.strategy().result().edgesScanned(), 0, ph.millis(), ph.cpuMillis(), ph.peak(),
+                Verdict.of(r.startWon()).word(), ph.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "door-shut events lasting, phase by phase: %d of %d disturbance"
+                                + " states kept in %d rounds, last arena %d vertices; %.2f x the momentary attractor's"
+                                + " CPU time (%.1f ms)", r.keptStates(), r.totalStates(), r.rounds(),
+                        r.arena().vertexCount(), ratio, mom.cpuMillis()));
+    }
+
+    /** The instance's mission with its door-shut events lasting (the rest as they are). */
+    private static Mission lastingMission(Mission m) {
+        List<dockline.model.EventRule> rules = new ArrayList<>();
+        for (dockline.model.EventRule r : m.map().disturbances().rules()) {
+            rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
+                    ? r.withDuration(dockline.model.EventDuration.REST_OF_MISSION) : r);
+        }
+        return new Mission(m.name(), m.source(), m.map().withDisturbances(
+                new dockline.model.DisturbanceModel(m.map().disturbances().budget(), rules)), m.robot(), m.start(),
+                m.startCharge(), m.reserve(), m.tasks(), m.objective());
+    }
+}
