@@ -47,33 +47,11 @@ public final class RoundsProduct extends CsrGraph {
     /** The losing sink. */
     public static final int LOST = 0;
 
-    private final Arena arena;
-    private final Kind kind;
-    private final int floor;
-    private final int capacity;
-    private final GoalAutomaton visitGoal;
-    private final LapAutomaton lapGoal;
-    private final SizeEstimate bound;
-    private final int[] vArena;
-    private final int[] vGoal;
-    private final int[] vLevel;
-    private final int[] edgeArena;
-    private final int start;
+    private final Exploration x;
 
-    private RoundsProduct(Builder b) {
-        super(b.vArena.length, b.edgeTarget.length, b.outStart, b.edgeTarget, Reverse.SOURCES);
-        this.arena = b.arena;
-        this.kind = b.kind;
-        this.floor = b.floor;
-        this.capacity = b.capacity;
-        this.visitGoal = b.visitGoal;
-        this.lapGoal = b.lapGoal;
-        this.bound = b.bound;
-        this.vArena = b.vArena;
-        this.vGoal = b.vGoal;
-        this.vLevel = b.vLevel;
-        this.edgeArena = b.edgeArena;
-        this.start = b.start;
+    private RoundsProduct(Exploration x) {
+        super(x.vArena.length, x.edgeTarget.length, x.outStart, x.edgeTarget, Reverse.SOURCES);
+        this.x = x;
     }
 
     /**
@@ -85,9 +63,9 @@ public final class RoundsProduct extends CsrGraph {
      * @throws ProductTooLargeException when the vertices and edges found pass the budget
      */
     public static RoundsProduct build(Arena arena, Kind kind, int floor, int startLevel, long budgetBytes) {
-        Builder b = new Builder(arena, kind, floor);
-        b.explore(startLevel, budgetBytes);
-        return new RoundsProduct(b);
+        Exploration x = new Exploration(arena, kind, floor);
+        x.explore(startLevel, budgetBytes);
+        return new RoundsProduct(x);
     }
 
     private static long satMul(long a, long b) {
@@ -101,8 +79,12 @@ public final class RoundsProduct extends CsrGraph {
         return ((a ^ r) & (b ^ r)) < 0 ? Long.MAX_VALUE : r;
     }
 
-    /** The breadth-first exploration from the start: the vertices' coordinates and the forward CSR arrays. */
-    private static final class Builder {
+    /**
+     * The product's setting (arena, goal, floor, capacity, size bound) and what the breadth-first exploration
+     * from the start found: per vertex its arena vertex, goal state and level, the forward CSR arrays and per
+     * edge its arena edge. Not changed after {@link #explore}.
+     */
+    private static final class Exploration {
         final Arena arena;
         final Kind kind;
         final int floor;
@@ -121,7 +103,7 @@ public final class RoundsProduct extends CsrGraph {
         int[] edgeArena;
         int start;
 
-        Builder(Arena arena, Kind kind, int floor) {
+        Exploration(Arena arena, Kind kind, int floor) {
             this.arena = arena;
             this.kind = kind;
             this.floor = floor;
@@ -194,7 +176,7 @@ public final class RoundsProduct extends CsrGraph {
                 int g = vg.get(x);
                 int level = vl.get(x);
                 boolean robot = arena.isRobot(av);
-                if (robot && complete(kind, visitGoal, g, arena.isDock(arena.cell(av)))) {
+                if (robot && completes(g, arena.cell(av))) {
                     continue; // absorbed: the mission is complete
                 }
                 for (int e = arena.outBegin(av); e < arena.outEnd(av); e++) {
@@ -246,6 +228,11 @@ public final class RoundsProduct extends CsrGraph {
             edgeArena = ea.toArray();
         }
 
+        /** Whether a robot vertex with this goal state on this cell ends the mission (visit goals only). */
+        boolean completes(int g, int cell) {
+            return kind == Kind.VISIT && visitGoal.accepting(g, arena.isDock(cell));
+        }
+
         private void check(long vertices, long edges, long budgetBytes) {
             long bytes = satAdd(satMul(vertices, SizeEstimate.BYTES_PER_VERTEX),
                     satMul(edges, SizeEstimate.BYTES_PER_EDGE));
@@ -255,81 +242,76 @@ public final class RoundsProduct extends CsrGraph {
         }
     }
 
-    /** Whether a robot vertex with this goal state on a dock or not ends the mission (visit goals only). */
-    private static boolean complete(Kind kind, GoalAutomaton visitGoal, int g, boolean dock) {
-        return kind == Kind.VISIT && visitGoal.accepting(g, dock);
-    }
-
     public Arena arena() {
-        return arena;
+        return x.arena;
     }
 
     public Kind kind() {
-        return kind;
+        return x.kind;
     }
 
     public int floor() {
-        return floor;
+        return x.floor;
     }
 
     public int capacity() {
-        return capacity;
+        return x.capacity;
     }
 
     /** The upper bound on the size stated before the build (arena vertices × goal states × levels). */
     public SizeEstimate bound() {
-        return bound;
+        return x.bound;
     }
 
     /** The start vertex ({@link #LOST} when the start itself breaks the floor or is avoided). */
     public int start() {
-        return start;
+        return x.start;
     }
 
     /** Whether the vertex belongs to the robot (the sink counts as the robot's: it has one move). */
     public boolean isRobot(int v) {
-        return v == LOST || arena.isRobot(vArena[v]);
+        return v == LOST || x.arena.isRobot(x.vArena[v]);
     }
 
     public int arenaVertex(int v) {
-        return vArena[v];
+        return x.vArena[v];
     }
 
     public int goal(int v) {
-        return vGoal[v];
+        return x.vGoal[v];
     }
 
     public int level(int v) {
-        return vLevel[v];
+        return x.vLevel[v];
     }
 
     /** A patrol's accepting vertex: a robot vertex whose lap has just been completed. */
     public boolean lapDone(int v) {
-        return kind == Kind.PATROL && v != LOST && vGoal[v] == lapGoal.lapDone() && arena.isRobot(vArena[v]);
+        return x.kind == Kind.PATROL && v != LOST && x.vGoal[v] == x.lapGoal.lapDone() && x.arena.isRobot(x.vArena[v]);
     }
 
     /** A visit mission's target: a robot vertex where the mission is complete. */
     public boolean complete(int v) {
-        return v != LOST && arena.isRobot(vArena[v]) && complete(kind, visitGoal, vGoal[v], arena.isDock(arena.cell(vArena[v])));
+        return v != LOST && x.arena.isRobot(x.vArena[v]) && x.completes(x.vGoal[v], x.arena.cell(x.vArena[v]));
     }
 
     /** The arena edge of a product edge (-1 on the sink's self-loop). */
     public int arenaEdge(int e) {
-        return edgeArena[e];
+        return x.edgeArena[e];
     }
 
     /** The lap automaton (patrols) or null. */
     public LapAutomaton lap() {
-        return lapGoal;
+        return x.lapGoal;
     }
 
     /** The goal automaton (visit missions) or null. */
     public GoalAutomaton visit() {
-        return visitGoal;
+        return x.visitGoal;
     }
 
     /** Task progress of a vertex as a bit mask over the tasks (visit) or checkpoints of the lap (patrol). */
     public int progressMask(int v) {
-        return kind == Kind.PATROL ? vGoal[v] : visitGoal.progressMask(vGoal[v]);
+        return x.kind == Kind.PATROL ? x.vGoal[v] : x.visitGoal.progressMask(x.vGoal[v]);
     }
 }
