@@ -300,11 +300,6 @@ public final class RoundsProduct extends CsrGraph {
         return x.edgeArena[e];
     }
 
-    /** The lap automaton (patrols) or null. */
-    public LapAutomaton lap() {
-        return x.lapGoal;
-    }
-
     /** The goal automaton (visit missions) or null. */
     public GoalAutomaton visit() {
         return x.visitGoal;
