@@ -164,8 +164,8 @@ public final class Arena extends CsrGraph {
      * {@code at-most} entry used, or -1 if the cell is a wall.
      */
     public int robotVertex(int cellIndex, int budgetLeft) {
-        int s = cellSlot[cellIndex];
-        return s < 0 ? -1 : s * stateCount + budgetLeft;
+        // states 0 .. K are (budget left k, nothing closed, no entry used): DisturbanceStates numbers them first
+        return robotVertexInState(cellIndex, budgetLeft);
     }
 
     /** The robot vertex of a free cell (row-major index) in a disturbance state, or -1 if the cell is a wall. */
