@@ -20,9 +20,8 @@ import java.util.Arrays;
  * a loop that wants the arrays themselves takes the read-only views ({@link #outStarts} etc.). The
  * arrays are taken without copying and may be longer than the counts (spare capacity of a builder is
  * kept rather than copied away, so the peak memory stays at one copy). Cost: O(n + m) time to check
- * the arrays and build the reverse index by a counting sort on the edge targets, no objects per vertex
- * or edge (counting sort as in Cormen, Leiserson, Rivest and Stein, "Introduction to Algorithms", 3rd
- * ed. 2009, section 8.2, from memory; CSR adjacency arrays are common practice).
+ * the arrays and build the reverse index by a counting sort on the edge targets ({@link Csr}), no objects
+ * per vertex or edge (CSR adjacency arrays are common practice).
  */
 public class CsrGraph {
 
@@ -77,50 +76,16 @@ public class CsrGraph {
         this.maxOutDegree = maxDegree;
         this.outStart = outStart;
         this.edgeTarget = edgeTarget;
-        this.inStart = reverseOffsets(n, m, edgeTarget);
+        this.inStart = Csr.reverseOffsets(n, m, edgeTarget);
         if (reverse == Reverse.SOURCES) {
-            this.inSource = reverseSources(n, outStart, edgeTarget, inStart);
+            this.inSource = Csr.reverseSources(n, outStart, edgeTarget, inStart);
             this.inEdge = null;
             this.edgeSource = null;
         } else {
             this.inSource = null;
-            this.inEdge = reverseEdges(n, edgeTarget, inStart);
+            this.inEdge = Csr.reverseEdges(n, edgeTarget, inStart);
             this.edgeSource = edgeSources(n, m, outStart);
         }
-    }
-
-    /** The in-degree count of every vertex, summed into offsets: the in-edges of v are slots in[v] .. in[v+1]-1. */
-    private static int[] reverseOffsets(int n, int m, int[] edgeTarget) {
-        int[] in = new int[n + 1];
-        for (int e = 0; e < m; e++) {
-            in[edgeTarget[e] + 1]++;
-        }
-        for (int v = 0; v < n; v++) {
-            in[v + 1] += in[v];
-        }
-        return in;
-    }
-
-    /** Per reverse slot the source vertex; sources come out in increasing order. */
-    private static int[] reverseSources(int n, int[] outStart, int[] edgeTarget, int[] in) {
-        int[] sources = new int[in[n]];
-        int[] fill = Arrays.copyOf(in, n);
-        for (int v = 0; v < n; v++) {
-            for (int e = outStart[v]; e < outStart[v + 1]; e++) {
-                sources[fill[edgeTarget[e]]++] = v;
-            }
-        }
-        return sources;
-    }
-
-    /** Per reverse slot the edge id; ids come out in increasing order. */
-    private static int[] reverseEdges(int n, int[] edgeTarget, int[] in) {
-        int[] edges = new int[in[n]];
-        int[] fill = Arrays.copyOf(in, n);
-        for (int e = 0; e < edges.length; e++) {
-            edges[fill[edgeTarget[e]]++] = e;
-        }
-        return edges;
     }
 
     private static int[] edgeSources(int n, int m, int[] outStart) {
