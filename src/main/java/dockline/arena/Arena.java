@@ -1,9 +1,9 @@
 package dockline.arena;
 
-import dockline.util.Csr;
 import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
+import dockline.util.CsrGraph;
 
 /**
  * The compiled two-player arena of one mission (maps/README.md, "Game semantics"), in compressed-sparse-row int
@@ -24,10 +24,12 @@ import dockline.model.Mission;
  * vertex and, within it, of the actions (moves in neighbour order N, E, S, W, NE, SE, SW, NW, then
  * wait, then charge).
  *
- * <p>Instances are immutable after construction; the accessors return views of internal arrays
- * through index methods, so hot loops stay on primitive ints without copying.
+ * <p>The graph itself (out-edges, targets, in-edges by edge id, sources) is a {@link CsrGraph}; the arena adds
+ * per vertex its cell and disturbance state, per edge its energy delta, event and rule, and per cell its labels.
+ * Instances are immutable after construction; the accessors return views of internal arrays through index
+ * methods, so hot loops stay on primitive ints without copying.
  */
-public final class Arena {
+public final class Arena extends CsrGraph {
 
     /** Event code on nominal outcomes. */
     public static final int NOMINAL = -1;
@@ -40,7 +42,6 @@ public final class Arena {
     private final int stateCount;
     private final int[] vertexState;
     private final int robotCount;
-    private final int vertexCount;
     private final int startVertex;
 
     // per vertex
@@ -50,20 +51,13 @@ public final class Arena {
     private final byte[] actionKind;
     private final int[] actionTarget;
 
-    // forward CSR
-    private final int[] outStart;
-    private final int[] edgeTarget;
+    // per edge, beside the graph's targets and sources
     private final int[] edgeWeight;
     private final byte[] edgeEvent;
     private final int[] edgeRule;
-    // reverse CSR: edge ids grouped by target
-    private final int[] inStart;
-    private final int[] inEdge;
-    private final int[] edgeSource;
     // layout facts, found once here so that solvers need not scan the arena per question
     private final boolean privateActions;
     private final boolean actionsByEdge;
-    private final int maxOutDegree;
 
     // per cell (row-major index)
     private final long[] cellZones;
@@ -86,6 +80,7 @@ public final class Arena {
           int[] vertexCell, int[] vertexBudget, byte[] actionKind, int[] actionTarget,
           int[] outStart, int[] edgeTarget, int[] edgeWeight, byte[] edgeEvent, int[] edgeRule,
           long[] cellZones, boolean[] cellDock, int[] cellSlot, int[] slotCell) {
+        super(vertexCount, edgeTarget.length, outStart, edgeTarget, Reverse.EDGES);
         this.mission = mission;
         this.width = width;
         this.height = height;
@@ -94,14 +89,11 @@ public final class Arena {
         this.stateCount = stateCount;
         this.vertexState = vertexState;
         this.robotCount = robotCount;
-        this.vertexCount = vertexCount;
         this.startVertex = startVertex;
         this.vertexCell = vertexCell;
         this.vertexBudget = vertexBudget;
         this.actionKind = actionKind;
         this.actionTarget = actionTarget;
-        this.outStart = outStart;
-        this.edgeTarget = edgeTarget;
         this.edgeWeight = edgeWeight;
         this.edgeEvent = edgeEvent;
         this.edgeRule = edgeRule;
@@ -109,32 +101,18 @@ public final class Arena {
         this.cellDock = cellDock;
         this.cellSlot = cellSlot;
         this.slotCell = slotCell;
-        int m = edgeTarget.length;
-        this.edgeSource = new int[m];
-        for (int v = 0; v < vertexCount; v++) {
-            for (int e = outStart[v]; e < outStart[v + 1]; e++) {
-                edgeSource[e] = v;
-            }
-        }
-        this.inStart = Csr.reverseOffsets(vertexCount, m, edgeTarget);
-        this.inEdge = Csr.reverseEdges(vertexCount, edgeTarget, inStart);
-        int maxDegree = 0;
         boolean byEdge = true;
-        for (int v = 0; v < vertexCount; v++) {
-            maxDegree = Math.max(maxDegree, outStart[v + 1] - outStart[v]);
-        }
         for (int x = 0; x < robotCount && byEdge; x++) {
-            for (int e = outStart[x]; e < outStart[x + 1]; e++) {
-                byEdge &= edgeTarget[e] == robotCount + e;
+            for (int e = outBegin(x); e < outEnd(x); e++) {
+                byEdge &= target(e) == robotCount + e;
             }
         }
         boolean priv = true;
         for (int a = robotCount; a < vertexCount && priv; a++) {
-            priv = inStart[a + 1] - inStart[a] == 1 && edgeSource[inEdge[inStart[a]]] < robotCount;
+            priv = inEnd(a) - inBegin(a) == 1 && source(inEdge(inBegin(a))) < robotCount;
         }
-        this.maxOutDegree = maxDegree;
         this.privateActions = priv;
-        this.actionsByEdge = byEdge && priv && outStart[robotCount] == vertexCount - robotCount;
+        this.actionsByEdge = byEdge && priv && outBegin(robotCount) == vertexCount - robotCount;
     }
 
     public Mission mission() {
@@ -156,14 +134,6 @@ public final class Arena {
 
     public int robotCount() {
         return robotCount;
-    }
-
-    public int vertexCount() {
-        return vertexCount;
-    }
-
-    public int edgeCount() {
-        return edgeTarget.length;
     }
 
     /** The robot vertex at the start cell with the full budget. */
@@ -194,8 +164,8 @@ public final class Arena {
      * {@code at-most} entry used, or -1 if the cell is a wall.
      */
     public int robotVertex(int cellIndex, int budgetLeft) {
-        int s = cellSlot[cellIndex];
-        return s < 0 ? -1 : s * stateCount + budgetLeft;
+        // states 0 .. K are (budget left k, nothing closed, no entry used): DisturbanceStates numbers them first
+        return robotVertexInState(cellIndex, budgetLeft);
     }
 
     /** The robot vertex of a free cell (row-major index) in a disturbance state, or -1 if the cell is a wall. */
@@ -241,8 +211,8 @@ public final class Arena {
         if (ev != EventKind.DOOR_SHUT.ordinal() && ev != EventKind.BLOCKAGE.ordinal() || states.itemCount() == 0) {
             return -1;
         }
-        int[] before = states.closed(vertexState[edgeSource[e]]);
-        int[] after = states.closed(vertexState[edgeTarget[e]]);
+        int[] before = states.closed(vertexState[source(e)]);
+        int[] after = states.closed(vertexState[target(e)]);
         if (after.length == before.length) {
             return -1;
         }
@@ -278,22 +248,6 @@ public final class Arena {
         return new Action(actionKind(d), Cell.ofIndex(actionTarget(d), width));
     }
 
-    public int outBegin(int v) {
-        return outStart[v];
-    }
-
-    public int outEnd(int v) {
-        return outStart[v + 1];
-    }
-
-    public int target(int e) {
-        return edgeTarget[e];
-    }
-
-    public int source(int e) {
-        return edgeSource[e];
-    }
-
     /** Energy delta of the edge in units (0 on robot edges). */
     public int weight(int e) {
         return edgeWeight[e];
@@ -307,19 +261,6 @@ public final class Arena {
     /** Index of the map's event rule that caused the outcome, or -1 when nominal. */
     public int rule(int e) {
         return edgeRule[e];
-    }
-
-    public int inBegin(int v) {
-        return inStart[v];
-    }
-
-    public int inEnd(int v) {
-        return inStart[v + 1];
-    }
-
-    /** The i-th incoming edge id (i from {@link #inBegin} to {@link #inEnd}). */
-    public int inEdge(int i) {
-        return inEdge[i];
     }
 
     /** The cell's label bits ({@link dockline.model.ZoneLabels}): the task zones it is in, and the avoid bit. */
@@ -347,11 +288,6 @@ public final class Arena {
      */
     public boolean actionsByEdge() {
         return actionsByEdge;
-    }
-
-    /** The largest out-degree of any vertex. */
-    public int maxOutDegree() {
-        return maxOutDegree;
     }
 
     /** Largest absolute edge weight (the bound mu of the discounted comparator). */

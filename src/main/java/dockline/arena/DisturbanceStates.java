@@ -37,7 +37,6 @@ public final class DisturbanceStates {
     private final int budget;
     private final int items;
     private final String[] itemName;
-    private final boolean[] itemDoor;
     private final int[][] itemCells;
     private final int[] cellItemStart;
     private final int[] cellItem;
@@ -45,7 +44,6 @@ public final class DisturbanceStates {
     private final int[] ruleItem;
     private final int[] ruleGroup;
     private final int[] groupLimit;
-    private final String[] groupLabel;
     // per state
     private final int[] stBudget;
     private final int[][] stClosed;
@@ -55,14 +53,13 @@ public final class DisturbanceStates {
     private final boolean plain;
     private final String[] keys;
 
-    private DisturbanceStates(int budget, int items, String[] itemName, boolean[] itemDoor, int[][] itemCells,
+    private DisturbanceStates(int budget, int items, String[] itemName, int[][] itemCells,
                               int[] cellItemStart, int[] cellItem, int[] doorItemOfCell, int[] ruleItem,
-                              int[] ruleGroup, int[] groupLimit, String[] groupLabel, int[] stBudget,
+                              int[] ruleGroup, int[] groupLimit, int[] stBudget,
                               int[][] stClosed, int[][] stUsed, LongIntMap next, int[] renewed) {
         this.budget = budget;
         this.items = items;
         this.itemName = itemName;
-        this.itemDoor = itemDoor;
         this.itemCells = itemCells;
         this.cellItemStart = cellItemStart;
         this.cellItem = cellItem;
@@ -70,7 +67,6 @@ public final class DisturbanceStates {
         this.ruleItem = ruleItem;
         this.ruleGroup = ruleGroup;
         this.groupLimit = groupLimit;
-        this.groupLabel = groupLabel;
         this.stBudget = stBudget;
         this.stClosed = stClosed;
         this.stUsed = stUsed;
@@ -117,7 +113,6 @@ public final class DisturbanceStates {
         int nr = rules.size();
         // closure items: lasting door cells in row-major order, then lasting blockage rules in file order
         List<String> names = new ArrayList<>();
-        List<Boolean> door = new ArrayList<>();
         List<int[]> icells = new ArrayList<>();
         int[] doorItemOfCell = new int[cells];
         Arrays.fill(doorItemOfCell, -1);
@@ -126,7 +121,6 @@ public final class DisturbanceStates {
                 doorItemOfCell[c] = names.size();
                 names.add(map.doorName(Cell.ofIndex(c, w)).startsWith("door ") ? map.doorName(Cell.ofIndex(c, w))
                         : "door " + map.doorName(Cell.ofIndex(c, w)));
-                door.add(true);
                 icells.add(new int[] {c});
             }
         }
@@ -143,7 +137,6 @@ public final class DisturbanceStates {
             if (rule.kind() == EventKind.BLOCKAGE && rule.lasting() && usedBlock[r]) {
                 ruleItem[r] = names.size();
                 names.add("zone " + rule.label());
-                door.add(false);
                 int[] cs = rule.cells().stream().filter(map::inside).mapToInt(x -> x.index(w)).toArray();
                 icells.add(cs);
             }
@@ -171,7 +164,6 @@ public final class DisturbanceStates {
         Arrays.fill(ruleGroup, -1);
         Map<Integer, Integer> groupOf = new LinkedHashMap<>();
         List<Integer> limits = new ArrayList<>();
-        List<String> glabels = new ArrayList<>();
         for (int r = 0; r < nr; r++) {
             EventRule rule = rules.get(r);
             if (!rule.limited()) {
@@ -183,9 +175,6 @@ public final class DisturbanceStates {
                 g = limits.size();
                 groupOf.put(key, g);
                 limits.add(Math.min(rule.atMost(), budget));
-                glabels.add(rule.kind().word() + " at " + rule.label());
-            } else if (!glabels.get(g).endsWith(", ...")) {
-                glabels.set(g, glabels.get(g) + ", ...");
             }
             ruleGroup[r] = g;
         }
@@ -251,9 +240,9 @@ public final class DisturbanceStates {
             // without closable items or limits every state renews to the full budget, id K
             renewed[s] = renewPerLap && (closable || groups > 0) ? renew[s] : budget;
         }
-        return new DisturbanceStates(budget, items, names.toArray(String[]::new), toBool(door),
+        return new DisturbanceStates(budget, items, names.toArray(String[]::new),
                 icells.toArray(int[][]::new), cnt, cellItem, doorItemOfCell, ruleItem, ruleGroup, groupLimit,
-                glabels.toArray(String[]::new), sb.stream().mapToInt(Integer::intValue).toArray(),
+                sb.stream().mapToInt(Integer::intValue).toArray(),
                 sc.toArray(int[][]::new), su.toArray(int[][]::new), next, renewed);
     }
 
@@ -269,8 +258,8 @@ public final class DisturbanceStates {
         }
         int[] renewed = new int[budget + 1];
         Arrays.fill(renewed, budget);
-        return new DisturbanceStates(budget, 0, new String[0], new boolean[0], new int[0][], new int[1], new int[0],
-                new int[0], new int[0], new int[0], new int[0], new String[0], sb, sc, su, new LongIntMap(4), renewed);
+        return new DisturbanceStates(budget, 0, new String[0], new int[0][], new int[1], new int[0],
+                new int[0], new int[0], new int[0], new int[0], sb, sc, su, new LongIntMap(4), renewed);
     }
 
     private static void addItem(int s, int r, int item, int k, int[] u2, List<Integer> sb, List<int[]> sc,
@@ -284,14 +273,6 @@ public final class DisturbanceStates {
         Arrays.sort(c2);
         int t = intern(k - 1, c2, u2, sb, sc, su, index);
         next.put(key(s, r, item), t);
-    }
-
-    private static boolean[] toBool(List<Boolean> l) {
-        boolean[] b = new boolean[l.size()];
-        for (int i = 0; i < b.length; i++) {
-            b[i] = l.get(i);
-        }
-        return b;
     }
 
     private static int intern(int k, int[] closed, int[] used, List<Integer> sb, List<int[]> sc, List<int[]> su,
@@ -354,11 +335,6 @@ public final class DisturbanceStates {
         return stClosed[state];
     }
 
-    /** Events used so far per {@code at-most} entry, in file order (do not modify). */
-    public int[] used(int state) {
-        return stUsed[state];
-    }
-
     /** Whether cell (row-major) is closed in the state: a closed door, or in a closed zone. */
     public boolean isClosed(int state, int cell) {
         int[] cl = stClosed[state];
@@ -383,10 +359,6 @@ public final class DisturbanceStates {
         return itemName[item];
     }
 
-    public boolean itemIsDoor(int item) {
-        return itemDoor[item];
-    }
-
     /** The cells (row-major) the item closes (do not modify). */
     public int[] itemCells(int item) {
         return itemCells[item];
@@ -405,11 +377,6 @@ public final class DisturbanceStates {
     /** Number of {@code at-most} entries. */
     public int limitCount() {
         return groupLimit.length;
-    }
-
-    /** What an {@code at-most} entry covers, for reports. */
-    public String limitLabel(int group) {
-        return groupLabel[group];
     }
 
     /**

@@ -9,21 +9,16 @@ package dockline.monitor;
  * <p>Every run that completes the mission without being rejected is accepted (the floor is a
  * safety condition), so {@link #acceptsAtCompletion} is always {@code true}. Each step is O(1)
  * in long arithmetic, so no sum can overflow.
+ *
+ * @param floorUnits    the reserve floor in units (0 &le; floor &le; capacity)
+ * @param capacityUnits the battery capacity in units
+ * @param startUnits    the starting level in units; above the capacity it is cut to the capacity,
+ *                      below the floor the monitor starts in {@link #REJECT}
  */
-public final class ReserveMonitor implements Monitor {
+public record ReserveMonitor(int floorUnits, int capacityUnits, int startUnits) implements Monitor {
 
-    private final int floor;
-    private final int capacity;
-    private final int start;
-
-    /**
-     * @param floorUnits    the reserve floor in units (0 &le; floor &le; capacity)
-     * @param capacityUnits the battery capacity in units
-     * @param startUnits    the starting level in units; above the capacity it is cut to the capacity,
-     *                      below the floor the monitor starts in {@link #REJECT}
-     * @throws IllegalArgumentException if the floor is negative or above the capacity
-     */
-    public ReserveMonitor(int floorUnits, int capacityUnits, int startUnits) {
+    /** @throws IllegalArgumentException if the floor is negative or above the capacity */
+    public ReserveMonitor {
         if (floorUnits < 0) {
             throw new IllegalArgumentException("reserve floor must not be negative: " + floorUnits);
         }
@@ -31,48 +26,34 @@ public final class ReserveMonitor implements Monitor {
             throw new IllegalArgumentException("reserve floor " + floorUnits + " units is above the capacity "
                     + capacityUnits + " units");
         }
-        this.floor = floorUnits;
-        this.capacity = capacityUnits;
-        this.start = Math.min(startUnits, capacityUnits);
-    }
-
-    public int floorUnits() {
-        return floor;
-    }
-
-    public int capacityUnits() {
-        return capacity;
-    }
-
-    public int startUnits() {
-        return start;
+        startUnits = Math.min(startUnits, capacityUnits);
     }
 
     /** The battery level in units of a (non-sink) state. */
     public int level(int s) {
-        return floor + s;
+        return floorUnits + s;
     }
 
     /** The state of a battery level, or {@link #REJECT} below the floor (above the capacity: full). */
     public int stateOf(int level) {
-        if (level < floor) {
+        if (level < floorUnits) {
             return REJECT;
         }
-        return Math.min(level, capacity) - floor;
+        return Math.min(level, capacityUnits) - floorUnits;
     }
 
     @Override
     public int initialState() {
-        return stateOf(start);
+        return stateOf(startUnits);
     }
 
     @Override
     public int step(int s, int w) {
-        long level = (long) floor + s + w;
-        if (level < floor) {
+        long level = (long) floorUnits + s + w;
+        if (level < floorUnits) {
             return REJECT;
         }
-        return (int) Math.min(level, capacity) - floor;
+        return (int) Math.min(level, capacityUnits) - floorUnits;
     }
 
     @Override
@@ -83,7 +64,7 @@ public final class ReserveMonitor implements Monitor {
     /** Exactly {@code capacity - floor + 1}: every state is in {@code 0 .. stateBound()-1}. */
     @Override
     public long stateBound() {
-        return (long) capacity - floor + 1;
+        return (long) capacityUnits - floorUnits + 1;
     }
 
     @Override
@@ -93,11 +74,11 @@ public final class ReserveMonitor implements Monitor {
 
     /** The same battery with another reserve floor. */
     public ReserveMonitor withFloor(int floorUnits) {
-        return new ReserveMonitor(floorUnits, capacity, start);
+        return new ReserveMonitor(floorUnits, capacityUnits, startUnits);
     }
 
     @Override
     public String toString() {
-        return "ReserveMonitor[floor=" + floor + ", capacity=" + capacity + ", start=" + start + "]";
+        return "ReserveMonitor[floor=" + floorUnits + ", capacity=" + capacityUnits + ", start=" + startUnits + "]";
     }
 }

@@ -7,8 +7,8 @@ import java.util.Arrays;
  * {@code outStart[v]} to {@code outStart[v+1]}, edge e goes to {@code edgeTarget[e]}): the in-edges of
  * every vertex, found by a counting sort on the edge targets, so linear time O(n + m) and no objects
  * (counting sort as in Cormen, Leiserson, Rivest and Stein, "Introduction to Algorithms", 3rd ed.
- * 2009, section 8.2, from memory). The arena, the game graph and the patrol product all keep their
- * reverse edges this way, for the backward sweeps of their attractors.
+ * 2009, section 8.2, from memory). {@link CsrGraph}, the shape of every stored graph, builds its reverse
+ * index this way, for the backward sweeps of the attractors; any other int-array CSR may use it too.
  */
 public final class Csr {
 

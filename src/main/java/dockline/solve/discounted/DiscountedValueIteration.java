@@ -407,7 +407,7 @@ public final class DiscountedValueIteration {
             }
             Rational value = exact == null ? null : new Rational(exact.num[s], exact.den[s]);
             return new Result(holds, new Rational(lo[s], scale), new Rational(hi[s], scale), value, sweeps,
-                    robotChoice, outcomeChoice, exact != null);
+                    exact != null, arena, robotChoice, outcomeChoice);
         }
     }
 
@@ -420,66 +420,29 @@ public final class DiscountedValueIteration {
 
     /**
      * What value iteration found at the start vertex.
+     *
+     * @param holds             the decision of {@link #decide} (false for {@link #solve})
+     * @param lower             lower end of the enclosure of the value at the start vertex
+     * @param upper             upper end of the enclosure
+     * @param exactValue        the exact value at the start vertex, when it was recovered ({@code null} if
+     *                          the enclosure sufficed)
+     * @param sweeps            the sweeps run
+     * @param strategiesOptimal whether the strategies are verified optimal (exact recovery took place)
+     * @param robotChoices      per robot vertex the disturbance vertex (action) the robot goes to (do not modify)
+     * @param outcomeChoices    per disturbance vertex {@code a}, at {@code a - robotCount}, the outcome edge id
+     *                          the disturbance takes (do not modify)
      */
-    public final class Result {
-        private final boolean holds;
-        private final Rational lower;
-        private final Rational upper;
-        private final Rational exact;
-        private final int sweeps;
-        private final int[] robotChoice;
-        private final int[] outcomeChoice;
-        private final boolean optimal;
-
-        Result(boolean holds, Rational lower, Rational upper, Rational exact, int sweeps, int[] robotChoice,
-               int[] outcomeChoice, boolean optimal) {
-            this.holds = holds;
-            this.lower = lower;
-            this.upper = upper;
-            this.exact = exact;
-            this.sweeps = sweeps;
-            this.robotChoice = robotChoice;
-            this.outcomeChoice = outcomeChoice;
-            this.optimal = optimal;
-        }
-
-        /** The decision of {@link #decide} (false for {@link #solve}). */
-        public boolean holds() {
-            return holds;
-        }
-
-        /** Lower end of the enclosure of the value at the start vertex. */
-        public Rational lower() {
-            return lower;
-        }
-
-        /** Upper end of the enclosure of the value at the start vertex. */
-        public Rational upper() {
-            return upper;
-        }
-
-        /** The exact value at the start vertex, when it was recovered ({@code null} if the enclosure sufficed). */
-        public Rational exactValue() {
-            return exact;
-        }
-
-        public int sweeps() {
-            return sweeps;
-        }
-
-        /** Whether the strategies below are verified optimal (exact recovery took place). */
-        public boolean strategiesOptimal() {
-            return optimal;
-        }
+    public record Result(boolean holds, Rational lower, Rational upper, Rational exactValue, int sweeps,
+                         boolean strategiesOptimal, Arena arena, int[] robotChoices, int[] outcomeChoices) {
 
         /** The robot's positional choice at robot vertex {@code r}: the disturbance vertex (action) it goes to. */
         public int robotChoice(int r) {
-            return robotChoice[r];
+            return robotChoices[r];
         }
 
         /** The disturbance's positional choice at disturbance vertex {@code a}: the outcome edge id. */
         public int outcomeChoice(int a) {
-            return outcomeChoice[a - arena.robotCount()];
+            return outcomeChoices[a - arena.robotCount()];
         }
 
         /** The play from the start vertex when both players follow these strategies. */
@@ -492,7 +455,7 @@ public final class DiscountedValueIteration {
             while (seenAt[r] < 0) {
                 seenAt[r] = len;
                 seq[len++] = r;
-                r = arena.target(outcomeChoice(robotChoice[r]));
+                r = arena.target(outcomeChoice(robotChoices[r]));
             }
             return new Lasso(Arrays.copyOf(seq, len), seenAt[r]);
         }

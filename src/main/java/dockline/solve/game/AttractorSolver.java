@@ -41,13 +41,7 @@ public final class AttractorSolver implements GameSolver {
 
     @Override
     public Solution solve() {
-        final int n = g.n;
-        final byte[] owner = g.owner;
-        final int[] outStart = g.outStart;
-        final int[] edgeTarget = g.edgeTarget;
-        final int[] inStart = g.inStart;
-        final int[] inSource = g.inSource;
-
+        final int n = g.vertexCount();
         int[] rank = new int[n];
         Arrays.fill(rank, Solution.LOSING);
         int[] strategy = new int[n];
@@ -58,16 +52,16 @@ public final class AttractorSolver implements GameSolver {
         int head = 0;
         int tail = 0;
         for (int v = 0; v < n; v++) {
-            if (g.target[v]) {
+            if (g.isTarget(v)) {
                 rank[v] = 0;
                 queue[tail++] = v;
-            } else if (owner[v] == GameGraph.DISTURBANCE) {
-                counter[v] = outStart[v + 1] - outStart[v];
+            } else if (!g.isRobot(v)) {
+                counter[v] = g.outDegree(v);
             }
         }
         // a disturbance vertex without moves is won vacuously, in round 1 (as in the fixpoint definition)
         for (int v = 0; v < n; v++) {
-            if (!g.target[v] && owner[v] == GameGraph.DISTURBANCE && counter[v] == 0) {
+            if (!g.isTarget(v) && !g.isRobot(v) && counter[v] == 0) {
                 rank[v] = 1;
                 queue[tail++] = v;
             }
@@ -76,20 +70,20 @@ public final class AttractorSolver implements GameSolver {
         while (head < tail) {
             int v = queue[head++];
             int next = rank[v] + 1;
-            for (int i = inStart[v]; i < inStart[v + 1]; i++) {
+            for (int i = g.inBegin(v); i < g.inEnd(v); i++) {
                 if (++steps == POLL_INTERVAL) {
                     steps = 0;
                     if (cancelled.getAsBoolean()) {
                         throw new CancellationException("solving was cancelled");
                     }
                 }
-                int u = inSource[i];
+                int u = g.inSource(i);
                 if (rank[u] != Solution.LOSING) {
                     continue;
                 }
-                if (owner[u] == GameGraph.ROBOT) {
+                if (g.isRobot(u)) {
                     rank[u] = next;
-                    strategy[u] = edgeTo(outStart, edgeTarget, u, v);
+                    strategy[u] = edgeTo(u, v);
                     queue[tail++] = u;
                 } else if (--counter[u] == 0) {
                     rank[u] = next;
@@ -101,9 +95,9 @@ public final class AttractorSolver implements GameSolver {
     }
 
     /** The first out-edge of u that enters v; scanned once per robot vertex, so O(|E|) in total. */
-    private static int edgeTo(int[] outStart, int[] edgeTarget, int u, int v) {
-        for (int e = outStart[u]; e < outStart[u + 1]; e++) {
-            if (edgeTarget[e] == v) {
+    private int edgeTo(int u, int v) {
+        for (int e = g.outBegin(u); e < g.outEnd(u); e++) {
+            if (g.target(e) == v) {
                 return e;
             }
         }

@@ -57,7 +57,7 @@ public final class CompactAttractorSolver implements GameSolver {
         if (graph == null || cancelled == null) {
             throw new IllegalArgumentException("graph and cancellation flag are required");
         }
-        if (stopAt < -1 || stopAt >= graph.n) {
+        if (stopAt < -1 || stopAt >= graph.vertexCount()) {
             throw new IllegalArgumentException("no vertex " + stopAt);
         }
         this.g = graph;
@@ -75,27 +75,22 @@ public final class CompactAttractorSolver implements GameSolver {
 
     @Override
     public Solution solve() {
-        final int n = g.n;
-        final int[] outStart = g.outStart;
-        int maxDeg = 0;
-        for (int v = 0; v < n; v++) {
-            maxDeg = Math.max(maxDeg, outStart[v + 1] - outStart[v]);
-        }
+        final int n = g.vertexCount();
         int[] queue = new int[n];
         int[] via = new int[n];
-        int tail = maxDeg <= Byte.MAX_VALUE ? searchBytes(queue, via) : searchInts(queue, via);
+        int tail = g.maxOutDegree() <= Byte.MAX_VALUE ? searchBytes(queue, via) : searchInts(queue, via);
         wonCount = tail;
         return finish(queue, tail, via);
     }
 
     /** Fills the queue with the won vertices in the order they are won, records the layers; returns the count. */
     private int searchBytes(int[] queue, int[] via) {
-        final int n = g.n;
+        final int n = g.vertexCount();
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
-        final int[] outStart = g.outStart;
-        final int[] inStart = g.inStart;
-        final int[] inSource = g.inSource;
+        final int[] outStart = g.outStarts();
+        final int[] inStart = g.inStarts();
+        final int[] inSource = g.inSources();
         final byte[] counter = new byte[n];
         for (int v = 0; v < n; v++) {
             if (!target[v]) {
@@ -138,12 +133,12 @@ public final class CompactAttractorSolver implements GameSolver {
     }
 
     private int searchInts(int[] queue, int[] via) {
-        final int n = g.n;
+        final int n = g.vertexCount();
         final byte[] owner = g.owner;
         final boolean[] target = g.target;
-        final int[] outStart = g.outStart;
-        final int[] inStart = g.inStart;
-        final int[] inSource = g.inSource;
+        final int[] outStart = g.outStarts();
+        final int[] inStart = g.inStarts();
+        final int[] inSource = g.inSources();
         final int[] counter = new int[n];
         for (int v = 0; v < n; v++) {
             if (!target[v]) {
@@ -190,10 +185,8 @@ public final class CompactAttractorSolver implements GameSolver {
      * (won vacuously, rank 1); starts the layer marks. Returns the queue's tail.
      */
     private int seed(int[] queue) {
-        final int n = g.n;
-        final byte[] owner = g.owner;
+        final int n = g.vertexCount();
         final boolean[] target = g.target;
-        final int[] outStart = g.outStart;
         int tail = 0;
         for (int v = 0; v < n; v++) {
             if (target[v]) {
@@ -204,7 +197,7 @@ public final class CompactAttractorSolver implements GameSolver {
         layerStarts.add(0);
         layerStarts.add(tail);
         for (int v = 0; v < n; v++) {
-            if (!target[v] && owner[v] != GameGraph.ROBOT && outStart[v + 1] == outStart[v]) {
+            if (!target[v] && !g.isRobot(v) && g.outDegree(v) == 0) {
                 queue[tail++] = v;
             }
         }
@@ -233,7 +226,7 @@ public final class CompactAttractorSolver implements GameSolver {
      * vertices in discovery order.
      */
     private Solution finish(int[] queue, int tail, int[] via) {
-        final int n = g.n;
+        final int n = g.vertexCount();
         int[] rank = new int[n];
         Arrays.fill(rank, Solution.LOSING);
         layerStarts.add(tail);
@@ -245,13 +238,11 @@ public final class CompactAttractorSolver implements GameSolver {
         }
         int[] strategy = queue; // reuse the queue's memory: it is no longer needed
         Arrays.fill(strategy, Solution.NONE);
-        final int[] outStart = g.outStart;
-        final int[] edgeTarget = g.edgeTarget;
         for (int u = 0; u < n; u++) {
-            if (rank[u] > 0 && g.owner[u] == GameGraph.ROBOT) {
+            if (rank[u] > 0 && g.isRobot(u)) {
                 int v = via[u];
-                for (int e = outStart[u]; e < outStart[u + 1]; e++) {
-                    if (edgeTarget[e] == v) {
+                for (int e = g.outBegin(u); e < g.outEnd(u); e++) {
+                    if (g.target(e) == v) {
                         strategy[u] = e;
                         break;
                     }

@@ -251,41 +251,53 @@ public final class ProductGame {
             throw new IllegalArgumentException("the robot does not win from the start");
         }
         List<PolicyEntry> entries = new ArrayList<>();
-        boolean[] seen = new boolean[vertexCount()];
-        int[] todo = new int[vertexCount()];
-        int head = 0;
-        int tail = 0;
-        seen[start] = true;
-        todo[tail++] = start;
-        while (head < tail) {
-            int p = todo[head++];
-            if (isSink(p)) {
-                continue;
-            }
-            if (graph.isRobot(p)) {
-                int e = solution.strategyEdge(p);
-                if (e < 0) {
-                    throw new IllegalArgumentException("no chosen edge at winning vertex " + describe(p));
-                }
-                int d = graph.target(e);
+        for (int p : closedLoop(solution)) {
+            if (!isSink(p) && graph.isRobot(p)) {
+                int d = graph.target(solution.strategyEdge(p));
                 entries.add(new PolicyEntry(arena.cellOf(vArena[p]), levelOf.applyAsInt(vMonitor[p]),
                         arena.budgetLeft(vArena[p]), goal.progressMask(vGoal[p]), arena.action(vArena[d]), null,
                         arena.closures(vArena[p])));
-                if (!seen[d]) {
-                    seen[d] = true;
-                    todo[tail++] = d;
-                }
-            } else {
-                for (int e = graph.outBegin(p); e < graph.outEnd(p); e++) {
-                    int t = graph.target(e);
-                    if (!seen[t]) {
-                        seen[t] = true;
-                        todo[tail++] = t;
-                    }
-                }
             }
         }
         return new Policy(entries);
+    }
+
+    /**
+     * The closed loop of a solution from the start: the vertices a play can reach when the robot follows
+     * the solution's chosen edges and the disturbance plays every outcome, in breadth-first order from the
+     * start (the sinks are listed but not expanded). O(size of the closed loop) time, O(|V|) memory.
+     *
+     * @throws IllegalArgumentException if a robot vertex reached has no chosen edge
+     */
+    public int[] closedLoop(Solution solution) {
+        boolean[] seen = new boolean[vertexCount()];
+        int[] todo = new int[vertexCount()];
+        int tail = 0;
+        seen[start] = true;
+        todo[tail++] = start;
+        for (int head = 0; head < tail; head++) {
+            int p = todo[head];
+            if (isSink(p)) {
+                continue;
+            }
+            int begin = graph.outBegin(p);
+            int end = graph.outEnd(p);
+            if (graph.isRobot(p)) {
+                begin = solution.strategyEdge(p);
+                if (begin < 0) {
+                    throw new IllegalArgumentException("no chosen edge at winning vertex " + describe(p));
+                }
+                end = begin + 1;
+            }
+            for (int e = begin; e < end; e++) {
+                int t = graph.target(e);
+                if (!seen[t]) {
+                    seen[t] = true;
+                    todo[tail++] = t;
+                }
+            }
+        }
+        return Arrays.copyOf(todo, tail);
     }
 
     // ---------------------------------------------------------------- index

@@ -317,33 +317,8 @@ public final class ReserveSolver {
         GameGraph g = game.graph();
         Arena arena = game.arena();
         int n = g.vertexCount();
-        // closed loop from the start
-        boolean[] in = new boolean[n];
-        int[] list = new int[n];
-        int size = 0;
-        in[start] = true;
-        list[size++] = start;
-        for (int i = 0; i < size; i++) {
-            int p = list[i];
-            if (game.isSink(p)) {
-                continue;
-            }
-            if (g.isRobot(p)) {
-                int t = g.target(sol.strategyEdge(p));
-                if (!in[t]) {
-                    in[t] = true;
-                    list[size++] = t;
-                }
-            } else {
-                for (int e = g.outBegin(p); e < g.outEnd(p); e++) {
-                    int t = g.target(e);
-                    if (!in[t]) {
-                        in[t] = true;
-                        list[size++] = t;
-                    }
-                }
-            }
-        }
+        int[] list = game.closedLoop(sol);
+        int size = list.length;
         // counting sort by rank
         int maxRank = 0;
         for (int i = 0; i < size; i++) {

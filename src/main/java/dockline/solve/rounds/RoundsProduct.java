@@ -1,12 +1,12 @@
 package dockline.solve.rounds;
 
-import dockline.util.Csr;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.goal.LapAutomaton;
 import dockline.model.Mission;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.SizeEstimate;
+import dockline.util.CsrGraph;
 import dockline.util.IntArrayList;
 import dockline.util.LongIntMap;
 
@@ -29,13 +29,17 @@ import dockline.util.LongIntMap;
  *       with the same doors and zones closed ({@link Arena#renewedAtLap}).</li>
  * </ul>
  *
+ * <p>The graph itself is a {@link CsrGraph} whose reverse index holds the sources (the predecessors the
+ * attractors sweep back over); the product adds per vertex its arena vertex, goal state and level, and per
+ * edge its arena edge.
+ *
  * <p>Size: at most (arena vertices × goal states × levels) vertices, stated before the build as an upper
  * bound; the build stops with {@link ProductTooLargeException} (exit 3) as soon as the vertices and edges
  * found need more than the memory budget, at {@link SizeEstimate#BYTES_PER_VERTEX} and
  * {@link SizeEstimate#BYTES_PER_EDGE}. Cost: O(N + M) time and memory for N vertices and M edges found,
  * plus one hash look-up per edge.
  */
-public final class RoundsProduct {
+public final class RoundsProduct extends CsrGraph {
 
     /** The goal of the product. */
     public enum Kind { VISIT, PATROL }
@@ -43,49 +47,25 @@ public final class RoundsProduct {
     /** The losing sink. */
     public static final int LOST = 0;
 
-    private final Arena arena;
-    private final Kind kind;
-    private final int floor;
-    private final int capacity;
-    private final int goalStates;
-    private final GoalAutomaton visitGoal;
-    private final LapAutomaton lapGoal;
-    private final boolean budgetPerLap;
-    private final SizeEstimate bound;
+    private final Exploration x;
 
-    private int[] vArena;
-    private int[] vGoal;
-    private int[] vLevel;
-    private int[] outStart;
-    private int[] edgeTarget;
-    private int[] edgeArena;
-    private int[] inStart;
-    private int[] inSource;
-    private int start;
+    private RoundsProduct(Exploration x) {
+        super(x.vArena.length, x.edgeTarget.length, x.outStart, x.edgeTarget, Reverse.SOURCES);
+        this.x = x;
+    }
 
-    private RoundsProduct(Arena arena, Kind kind, int floor) {
-        this.arena = arena;
-        this.kind = kind;
-        this.floor = floor;
-        Mission m = arena.mission();
-        this.capacity = m.capacityUnits();
-        if (kind == Kind.PATROL) {
-            this.lapGoal = LapAutomaton.of(m);
-            this.visitGoal = null;
-            this.goalStates = lapGoal.stateCount();
-            this.budgetPerLap = m.map().disturbances().budgetPerLap();
-        } else {
-            this.visitGoal = GoalAutomaton.of(m);
-            this.lapGoal = null;
-            this.goalStates = visitGoal.stateCount();
-            this.budgetPerLap = false;
-        }
-        long levels = Math.max(0, capacity - floor + 1);
-        long perArena = satMul(goalStates, levels);
-        long v = satMul(arena.vertexCount(), perArena) + 1;
-        long e = satMul(arena.edgeCount(), perArena) + 1;
-        this.bound = new SizeEstimate(v, e, satAdd(satMul(v, SizeEstimate.BYTES_PER_VERTEX),
-                satMul(e, SizeEstimate.BYTES_PER_EDGE)), 0);
+    /**
+     * Builds the product reachable from the arena's start vertex at the given start level.
+     *
+     * @param floor       the reserve floor in units (levels below it are lost)
+     * @param startLevel  the starting level in units
+     * @param budgetBytes memory budget
+     * @throws ProductTooLargeException when the vertices and edges found pass the budget
+     */
+    public static RoundsProduct build(Arena arena, Kind kind, int floor, int startLevel, long budgetBytes) {
+        Exploration x = new Exploration(arena, kind, floor);
+        x.explore(startLevel, budgetBytes);
+        return new RoundsProduct(x);
     }
 
     private static long satMul(long a, long b) {
@@ -100,239 +80,233 @@ public final class RoundsProduct {
     }
 
     /**
-     * Builds the product reachable from the arena's start vertex at the given start level.
-     *
-     * @param floor       the reserve floor in units (levels below it are lost)
-     * @param startLevel  the starting level in units
-     * @param budgetBytes memory budget
-     * @throws ProductTooLargeException when the vertices and edges found pass the budget
+     * The product's setting (arena, goal, floor, capacity, size bound) and what the breadth-first exploration
+     * from the start found: per vertex its arena vertex, goal state and level, the forward CSR arrays and per
+     * edge its arena edge. Not changed after {@link #explore}.
      */
-    public static RoundsProduct build(Arena arena, Kind kind, int floor, int startLevel, long budgetBytes) {
-        RoundsProduct p = new RoundsProduct(arena, kind, floor);
-        p.explore(startLevel, budgetBytes);
-        return p;
-    }
+    private static final class Exploration {
+        final Arena arena;
+        final Kind kind;
+        final int floor;
+        final int capacity;
+        final int goalStates;
+        final GoalAutomaton visitGoal;
+        final LapAutomaton lapGoal;
+        final boolean budgetPerLap;
+        final SizeEstimate bound;
 
-    private long key(int av, int g, int level) {
-        long k = Math.addExact(Math.multiplyExact((long) av, goalStates), g);
-        return Math.addExact(Math.multiplyExact(k, (long) capacity - floor + 1), level - floor);
-    }
+        int[] vArena;
+        int[] vGoal;
+        int[] vLevel;
+        int[] outStart;
+        int[] edgeTarget;
+        int[] edgeArena;
+        int start;
 
-    private int goalStep(int g, long zones) {
-        return kind == Kind.PATROL ? lapGoal.step(g, zones) : visitGoal.step(g, zones);
-    }
-
-    private int goalInitial(long zones) {
-        return kind == Kind.PATROL ? lapGoal.initial(zones) : visitGoal.initial(zones);
-    }
-
-    /** Whether a robot vertex with this goal state on this cell ends the mission (visit goals only). */
-    private boolean complete(int g, int cell) {
-        return kind == Kind.VISIT && visitGoal.accepting(g, arena.isDock(cell));
-    }
-
-    private void explore(int startLevel, long budgetBytes) {
-        // sized from the bound (capped), so that small games stay small and large ones grow less often
-        int guess = (int) Math.max(16, Math.min(bound.vertices() / 4, 1 << 21));
-        IntArrayList va = new IntArrayList(guess);
-        IntArrayList vg = new IntArrayList(guess);
-        IntArrayList vl = new IntArrayList(guess);
-        IntArrayList out = new IntArrayList(guess);
-        IntArrayList tgt = new IntArrayList(2 * guess);
-        IntArrayList ea = new IntArrayList(2 * guess);
-        LongIntMap ids = new LongIntMap(guess);
-        va.add(-1);
-        vg.add(-1);
-        vl.add(-1);
-        int v0 = arena.startVertex();
-        int g0 = goalInitial(arena.cellZones(arena.cell(v0)));
-        if (startLevel < floor || g0 == GoalAutomaton.REJECT) {
-            start = LOST;
-        } else {
-            start = 1;
-            va.add(v0);
-            vg.add(g0);
-            vl.add(Math.min(capacity, startLevel));
-            ids.put(key(v0, g0, Math.min(capacity, startLevel)), 1);
+        Exploration(Arena arena, Kind kind, int floor) {
+            this.arena = arena;
+            this.kind = kind;
+            this.floor = floor;
+            Mission m = arena.mission();
+            this.capacity = m.capacityUnits();
+            if (kind == Kind.PATROL) {
+                this.lapGoal = LapAutomaton.of(m);
+                this.visitGoal = null;
+                this.goalStates = lapGoal.stateCount();
+                this.budgetPerLap = m.map().disturbances().budgetPerLap();
+            } else {
+                this.visitGoal = GoalAutomaton.of(m);
+                this.lapGoal = null;
+                this.goalStates = visitGoal.stateCount();
+                this.budgetPerLap = false;
+            }
+            long levels = Math.max(0, capacity - floor + 1);
+            long perArena = satMul(goalStates, levels);
+            long v = satMul(arena.vertexCount(), perArena) + 1;
+            long e = satMul(arena.edgeCount(), perArena) + 1;
+            this.bound = new SizeEstimate(v, e, satAdd(satMul(v, SizeEstimate.BYTES_PER_VERTEX),
+                    satMul(e, SizeEstimate.BYTES_PER_EDGE)), 0);
         }
-        for (int x = 0; x < va.size(); x++) {
+
+        private long key(int av, int g, int level) {
+            long k = Math.addExact(Math.multiplyExact((long) av, goalStates), g);
+            return Math.addExact(Math.multiplyExact(k, (long) capacity - floor + 1), level - floor);
+        }
+
+        private int goalStep(int g, long zones) {
+            return kind == Kind.PATROL ? lapGoal.step(g, zones) : visitGoal.step(g, zones);
+        }
+
+        private int goalInitial(long zones) {
+            return kind == Kind.PATROL ? lapGoal.initial(zones) : visitGoal.initial(zones);
+        }
+
+        private void explore(int startLevel, long budgetBytes) {
+            // sized from the bound (capped), so that small games stay small and large ones grow less often
+            int guess = (int) Math.max(16, Math.min(bound.vertices() / 4, 1 << 21));
+            IntArrayList va = new IntArrayList(guess);
+            IntArrayList vg = new IntArrayList(guess);
+            IntArrayList vl = new IntArrayList(guess);
+            IntArrayList out = new IntArrayList(guess);
+            IntArrayList tgt = new IntArrayList(2 * guess);
+            IntArrayList ea = new IntArrayList(2 * guess);
+            LongIntMap ids = new LongIntMap(guess);
+            va.add(-1);
+            vg.add(-1);
+            vl.add(-1);
+            int v0 = arena.startVertex();
+            int g0 = goalInitial(arena.cellZones(arena.cell(v0)));
+            if (startLevel < floor || g0 == GoalAutomaton.REJECT) {
+                start = LOST;
+            } else {
+                start = 1;
+                va.add(v0);
+                vg.add(g0);
+                vl.add(Math.min(capacity, startLevel));
+                ids.put(key(v0, g0, Math.min(capacity, startLevel)), 1);
+            }
+            for (int x = 0; x < va.size(); x++) {
+                out.add(tgt.size());
+                if (x == LOST) {
+                    tgt.add(LOST);
+                    ea.add(-1);
+                    continue;
+                }
+                int av = va.get(x);
+                int g = vg.get(x);
+                int level = vl.get(x);
+                boolean robot = arena.isRobot(av);
+                if (robot && completes(g, arena.cell(av))) {
+                    continue; // absorbed: the mission is complete
+                }
+                for (int e = arena.outBegin(av); e < arena.outEnd(av); e++) {
+                    int u = arena.target(e);
+                    int ng = g;
+                    int nl = level;
+                    if (!robot) {
+                        long raw = (long) level + arena.weight(e);
+                        if (raw < floor) {
+                            tgt.add(LOST);
+                            ea.add(e);
+                            continue;
+                        }
+                        nl = (int) Math.min(capacity, raw);
+                        ng = goalStep(g, arena.cellZones(arena.cell(u)));
+                        if (ng == GoalAutomaton.REJECT) {
+                            tgt.add(LOST);
+                            ea.add(e);
+                            continue;
+                        }
+                        if (budgetPerLap && ng == lapGoal.lapDone()) {
+                            // new events are counted afresh; what a lasting event closed stays closed
+                            u = arena.renewedAtLap(u);
+                        }
+                    }
+                    long k = key(u, ng, nl);
+                    int id = ids.get(k);
+                    if (id < 0) {
+                        id = va.size();
+                        va.add(u);
+                        vg.add(ng);
+                        vl.add(nl);
+                        ids.put(k, id);
+                        if ((id & 0xFFFF) == 0) {
+                            check(id, tgt.size(), budgetBytes);
+                        }
+                    }
+                    tgt.add(id);
+                    ea.add(e);
+                }
+            }
             out.add(tgt.size());
-            if (x == LOST) {
-                tgt.add(LOST);
-                ea.add(-1);
-                continue;
-            }
-            int av = va.get(x);
-            int g = vg.get(x);
-            int level = vl.get(x);
-            boolean robot = arena.isRobot(av);
-            if (robot && complete(g, arena.cell(av))) {
-                continue; // absorbed: the mission is complete
-            }
-            for (int e = arena.outBegin(av); e < arena.outEnd(av); e++) {
-                int u = arena.target(e);
-                int ng = g;
-                int nl = level;
-                if (!robot) {
-                    long raw = (long) level + arena.weight(e);
-                    if (raw < floor) {
-                        tgt.add(LOST);
-                        ea.add(e);
-                        continue;
-                    }
-                    nl = (int) Math.min(capacity, raw);
-                    ng = goalStep(g, arena.cellZones(arena.cell(u)));
-                    if (ng == GoalAutomaton.REJECT) {
-                        tgt.add(LOST);
-                        ea.add(e);
-                        continue;
-                    }
-                    if (budgetPerLap && ng == lapGoal.lapDone()) {
-                        // new events are counted afresh; what a lasting event closed stays closed
-                        u = arena.renewedAtLap(u);
-                    }
-                }
-                long k = key(u, ng, nl);
-                int id = ids.get(k);
-                if (id < 0) {
-                    id = va.size();
-                    va.add(u);
-                    vg.add(ng);
-                    vl.add(nl);
-                    ids.put(k, id);
-                    if ((id & 0xFFFF) == 0) {
-                        check(id, tgt.size(), budgetBytes);
-                    }
-                }
-                tgt.add(id);
-                ea.add(e);
-            }
+            check(va.size(), tgt.size(), budgetBytes);
+            vArena = va.toArray();
+            vGoal = vg.toArray();
+            vLevel = vl.toArray();
+            outStart = out.toArray();
+            edgeTarget = tgt.toArray();
+            edgeArena = ea.toArray();
         }
-        out.add(tgt.size());
-        check(va.size(), tgt.size(), budgetBytes);
-        vArena = va.toArray();
-        vGoal = vg.toArray();
-        vLevel = vl.toArray();
-        outStart = out.toArray();
-        edgeTarget = tgt.toArray();
-        edgeArena = ea.toArray();
-        int n = vArena.length;
-        int m = edgeTarget.length;
-        inStart = Csr.reverseOffsets(n, m, edgeTarget);
-        inSource = Csr.reverseSources(n, outStart, edgeTarget, inStart);
-    }
 
-    private void check(long vertices, long edges, long budgetBytes) {
-        long bytes = satAdd(satMul(vertices, SizeEstimate.BYTES_PER_VERTEX),
-                satMul(edges, SizeEstimate.BYTES_PER_EDGE));
-        if (bytes > budgetBytes) {
-            throw new ProductTooLargeException(new SizeEstimate(vertices, edges, bytes, 0), budgetBytes, true);
+        /** Whether a robot vertex with this goal state on this cell ends the mission (visit goals only). */
+        boolean completes(int g, int cell) {
+            return kind == Kind.VISIT && visitGoal.accepting(g, arena.isDock(cell));
+        }
+
+        private void check(long vertices, long edges, long budgetBytes) {
+            long bytes = satAdd(satMul(vertices, SizeEstimate.BYTES_PER_VERTEX),
+                    satMul(edges, SizeEstimate.BYTES_PER_EDGE));
+            if (bytes > budgetBytes) {
+                throw new ProductTooLargeException(new SizeEstimate(vertices, edges, bytes, 0), budgetBytes, true);
+            }
         }
     }
 
     public Arena arena() {
-        return arena;
+        return x.arena;
     }
 
     public Kind kind() {
-        return kind;
+        return x.kind;
     }
 
     public int floor() {
-        return floor;
+        return x.floor;
     }
 
     public int capacity() {
-        return capacity;
+        return x.capacity;
     }
 
     /** The upper bound on the size stated before the build (arena vertices × goal states × levels). */
     public SizeEstimate bound() {
-        return bound;
-    }
-
-    public int vertexCount() {
-        return vArena.length;
-    }
-
-    public int edgeCount() {
-        return edgeTarget.length;
+        return x.bound;
     }
 
     /** The start vertex ({@link #LOST} when the start itself breaks the floor or is avoided). */
     public int start() {
-        return start;
+        return x.start;
     }
 
     /** Whether the vertex belongs to the robot (the sink counts as the robot's: it has one move). */
     public boolean isRobot(int v) {
-        return v == LOST || arena.isRobot(vArena[v]);
+        return v == LOST || x.arena.isRobot(x.vArena[v]);
     }
 
     public int arenaVertex(int v) {
-        return vArena[v];
+        return x.vArena[v];
     }
 
     public int goal(int v) {
-        return vGoal[v];
+        return x.vGoal[v];
     }
 
     public int level(int v) {
-        return vLevel[v];
+        return x.vLevel[v];
     }
 
     /** A patrol's accepting vertex: a robot vertex whose lap has just been completed. */
     public boolean lapDone(int v) {
-        return kind == Kind.PATROL && v != LOST && vGoal[v] == lapGoal.lapDone() && arena.isRobot(vArena[v]);
+        return x.kind == Kind.PATROL && v != LOST && x.vGoal[v] == x.lapGoal.lapDone() && x.arena.isRobot(x.vArena[v]);
     }
 
     /** A visit mission's target: a robot vertex where the mission is complete. */
     public boolean complete(int v) {
-        return kind == Kind.VISIT && v != LOST && arena.isRobot(vArena[v]) && complete(vGoal[v], arena.cell(vArena[v]));
-    }
-
-    public int outBegin(int v) {
-        return outStart[v];
-    }
-
-    public int outEnd(int v) {
-        return outStart[v + 1];
-    }
-
-    public int target(int e) {
-        return edgeTarget[e];
+        return v != LOST && x.arena.isRobot(x.vArena[v]) && x.completes(x.vGoal[v], x.arena.cell(x.vArena[v]));
     }
 
     /** The arena edge of a product edge (-1 on the sink's self-loop). */
     public int arenaEdge(int e) {
-        return edgeArena[e];
-    }
-
-    public int inBegin(int v) {
-        return inStart[v];
-    }
-
-    public int inEnd(int v) {
-        return inStart[v + 1];
-    }
-
-    /** The source of the i-th in-edge (i from {@link #inBegin} to {@link #inEnd}). */
-    public int inSource(int i) {
-        return inSource[i];
-    }
-
-    /** The lap automaton (patrols) or null. */
-    public LapAutomaton lap() {
-        return lapGoal;
+        return x.edgeArena[e];
     }
 
     /** The goal automaton (visit missions) or null. */
     public GoalAutomaton visit() {
-        return visitGoal;
+        return x.visitGoal;
     }
 
     /** Task progress of a vertex as a bit mask over the tasks (visit) or checkpoints of the lap (patrol). */
     public int progressMask(int v) {
-        return kind == Kind.PATROL ? vGoal[v] : visitGoal.progressMask(vGoal[v]);
+        return x.kind == Kind.PATROL ? x.vGoal[v] : x.visitGoal.progressMask(x.vGoal[v]);
     }
 }
