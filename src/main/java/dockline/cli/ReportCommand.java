@@ -9,6 +9,7 @@ import dockline.report.MissionResult;
 import dockline.report.ReportMeta;
 import dockline.report.ReportRun;
 import dockline.view.ReportPictures;
+import dockline.util.ProgressListener;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -86,12 +87,14 @@ public final class ReportCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         int threads = jobs != null ? jobs : Runtime.getRuntime().availableProcessors();
-        boolean progress = !quiet && stderrIsTerminal();
+        boolean progress = ProgressLine.wanted(false, quiet);
         List<MissionResult> results = ReportRun.check(files, threads, new ReportPictures(), progress
-                ? (done, total, r, millis) -> {
-                    err.println("[" + done + "/" + total + "] " + r.file() + ": " + r.status().word() + " ("
-                            + millis + " ms)");
-                    err.flush();
+                ? new ProgressListener() {
+                    @Override
+                    public void stage(int percent, String missionDone) {
+                        err.println(missionDone);
+                        err.flush();
+                    }
                 } : null);
         for (MissionResult r : results) {
             for (MissionResult.Input in : r.inputs()) {
@@ -159,22 +162,5 @@ public final class ReportCommand extends CommandBase {
     static String version() {
         String v = new Main.Version().getVersion()[0];
         return v.startsWith("dockline ") ? v.substring("dockline ".length()) : v;
-    }
-
-    /**
-     * Whether standard error is a terminal: on Linux its file descriptor links to a terminal device; elsewhere
-     * the JDK's console (present only when the process is interactive) stands in.
-     */
-    static boolean stderrIsTerminal() {
-        Path fd = Path.of("/proc/self/fd/2");
-        try {
-            if (Files.isSymbolicLink(fd)) {
-                String target = Files.readSymbolicLink(fd).toString();
-                return target.startsWith("/dev/pts/") || target.startsWith("/dev/tty") || target.equals("/dev/console");
-            }
-        } catch (IOException | SecurityException | UnsupportedOperationException e) {
-            // fall through
-        }
-        return System.console() != null;
     }
 }

@@ -13,26 +13,11 @@ import java.util.function.BooleanSupplier;
  * @param cancelled         polled by the solvers; when it turns true the plan stops with
  *                          {@link java.util.concurrent.CancellationException}
  * @param route             how the mission is answered
- * @param progress          told how far the plan has got (stage boundaries of the route); never null
+ *
+ * <p>How far a plan has got is told to the planning thread's progress listener
+ * ({@link dockline.util.Progress#stage}, {@link dockline.util.Progress#listen}), not through these options.
  */
-public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route, Progress progress) {
-
-    /**
-     * Where a plan is: a per cent of its stages done (stage boundaries, not time: the stages differ in
-     * cost from mission to mission) and the stage now running, in words. Called on the planning thread.
-     */
-    @FunctionalInterface
-    public interface Progress {
-        /** Nobody listens. */
-        Progress NONE = (percent, stage) -> { };
-
-        void reached(int percent, String stage);
-    }
-
-    /** Options that nobody watches the progress of. */
-    public PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route) {
-        this(memoryBudgetBytes, cancelled, route, Progress.NONE);
-    }
+public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route) {
 
     public PlanOptions {
         if (memoryBudgetBytes < 0) {
@@ -43,9 +28,6 @@ public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Rou
         }
         if (route == null) {
             throw new IllegalArgumentException("a route is needed");
-        }
-        if (progress == null) {
-            progress = Progress.NONE;
         }
     }
 
@@ -64,19 +46,15 @@ public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Rou
     }
 
     public PlanOptions withMemoryBudget(long bytes) {
-        return new PlanOptions(bytes, cancelled, route, progress);
+        return new PlanOptions(bytes, cancelled, route);
     }
 
     public PlanOptions withCancelled(BooleanSupplier flag) {
-        return new PlanOptions(memoryBudgetBytes, flag, route, progress);
+        return new PlanOptions(memoryBudgetBytes, flag, route);
     }
 
     public PlanOptions withRoute(Route r) {
-        return new PlanOptions(memoryBudgetBytes, cancelled, r, progress);
-    }
-
-    public PlanOptions withProgress(Progress p) {
-        return new PlanOptions(memoryBudgetBytes, cancelled, route, p);
+        return new PlanOptions(memoryBudgetBytes, cancelled, r);
     }
 
     /** The product-game options of these limits. */
