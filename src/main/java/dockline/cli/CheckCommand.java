@@ -16,7 +16,6 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -35,11 +34,10 @@ import picocli.CommandLine.Parameters;
  * checked as its errors object); the exit code is the worst of them. One mission prints exactly what it
  * did before (one JSON object), so scripts and the schema's object form hold.
  */
-@Command(name = "check", mixinStandardHelpOptions = true,
+@Command(name = "check",
         description = {"Decides, for each mission given, whether the robot can always finish the mission and dock without its battery going"
                 + " below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only); with several missions: all are",
                 "1:not guaranteed (several: at least one, and none of the worse codes)",
                 "2:bad input or usage", "3:over a resource limit (the game is too large for the memory limit)",
@@ -181,10 +179,7 @@ public final class CheckCommand extends MissionCommand {
                 return ExitCodes.BAD_INPUT;
             }
             // never a silent "guaranteed": a policy that failed its independent certificate is an internal error
-            Optional<String> problem = p.certification().problem();
-            if (problem.isPresent()) {
-                err.println("dockline: internal error: " + problem.get());
-                err.println("No verdict is given. Please report this with the input files.");
+            if (Failures.uncertified(p, "No verdict is given.", err)) {
                 return ExitCodes.INTERNAL;
             }
             if (json) {

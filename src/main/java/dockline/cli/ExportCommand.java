@@ -19,7 +19,6 @@ import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Optional;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -34,14 +33,13 @@ import picocli.CommandLine.Option;
  * mission with a discounted objective the rows carry the robot's score memory (format version 2,
  * see missions/POLICY-FORMAT.md); the reserve floor is kept as well, as {@code check} does by default.
  */
-@Command(name = "export", mixinStandardHelpOptions = true,
+@Command(name = "export",
         description = {"Writes the certified policy of a guaranteed mission: the action to take in every situation the"
                 + " robot can meet.",
                 "A situation is the cell, the battery level, the disturbances left, the tasks done and, for a discounted"
                 + " score, the score gap. The safest policy of a mission with charging is written as level thresholds"
                 + " per position (at or above X units do this, below it do that). JSON, or CSV for a .csv name;"
                 + " nothing is written when the mission is not guaranteed."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate; nothing written)"})
@@ -82,10 +80,7 @@ public final class ExportCommand extends MissionCommand {
                         : "there is no safe policy to export", out);
                 return ExitCodes.NOT_GUARANTEED;
             }
-            Optional<String> problem = p.certification().problem();
-            if (problem.isPresent()) {
-                err.println("dockline: internal error: " + problem.get());
-                err.println("No policy is written. Please report this with the input files.");
+            if (Failures.uncertified(p, "No policy is written.", err)) {
                 return ExitCodes.INTERNAL;
             }
             Policy pol = p.policy().orElseThrow();

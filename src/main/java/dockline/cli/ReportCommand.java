@@ -29,12 +29,11 @@ import picocli.CommandLine.Parameters;
  * summary. Progress goes to standard error when it is a terminal and {@code --quiet} is not given.
  * Exit code: the worst of the missions' (0 all guaranteed, 1 some not, 2 bad input, 3, 4).
  */
-@Command(name = "report", mixinStandardHelpOptions = true,
+@Command(name = "report",
         description = {"Checks every mission given (a folder: every mission file in it, sorted) and writes one"
                 + " self-contained HTML sign-off report: a summary table, then per mission the map with the worst"
                 + " case, the battery chart, the suggestions, the disturbance model, the rule of thumb beside the"
                 + " verdict, the safety cautions, and the input files' SHA-256."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:report written; every mission guaranteed", "1:report written; some mission not guaranteed",
                 "2:bad input (a bad mission is still listed with its errors), or no report written",
                 "3:some mission over a resource limit", "4:internal error"})
@@ -56,18 +55,7 @@ public final class ReportCommand extends CommandBase {
     boolean quiet;
 
     @Override
-    public Integer call() {
-        PrintWriter o = out();
-        PrintWriter err = err();
-        try {
-            return run(o, err);
-        } finally {
-            o.flush();
-            err.flush();
-        }
-    }
-
-    private int run(PrintWriter o, PrintWriter err) {
+    int run(PrintWriter o, PrintWriter err) {
         if (jobs != null && (jobs < 1 || jobs > 256)) {
             err.println("dockline: --jobs must be a whole number from 1 to 256, not " + jobs);
             return ExitCodes.BAD_INPUT;
