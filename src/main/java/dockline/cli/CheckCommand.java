@@ -51,8 +51,8 @@ public final class CheckCommand extends MissionCommand {
     @Mixin
     PolicyOption policy;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     DiscountedCheck discounted;
@@ -83,10 +83,10 @@ public final class CheckCommand extends MissionCommand {
         for (int i = 0; i < files.size(); i++) {
             mission.missionFile = files.get(i);
             StringWriter captured = new StringWriter();
-            PrintWriter o = json ? new PrintWriter(captured, true) : out;
+            PrintWriter o = json.requested ? new PrintWriter(captured, true) : out;
             Failures.Tee tee = new Failures.Tee(err);
             PrintWriter e = new PrintWriter(tee, true);
-            if (!json) {
+            if (!json.requested) {
                 out.println((i == 0 ? "" : System.lineSeparator()) + "== " + files.get(i) + " (" + (i + 1) + " of "
                         + files.size() + ")");
                 out.flush();
@@ -100,11 +100,11 @@ public final class CheckCommand extends MissionCommand {
             o.flush();
             e.flush();
             worst = Math.max(worst, code);
-            if (json) {
+            if (json.requested) {
                 array.add(result(mapper, captured.toString(), tee.copy.toString(), code, files.get(i)));
             }
         }
-        if (json) {
+        if (json.requested) {
             out.println(Json.pretty(array));
         }
         return worst;
@@ -143,7 +143,7 @@ public final class CheckCommand extends MissionCommand {
                     err.println("dockline: " + refused);
                     return ExitCodes.BAD_INPUT;
                 }
-                return RoundsCheck.run(m, mission.memoryBudgetBytes(), policy.choice() == dockline.plan.PolicyChoice.SAFEST, json,
+                return RoundsCheck.run(m, mission.memoryBudgetBytes(), policy.choice() == dockline.plan.PolicyChoice.SAFEST, json.requested,
                         out, err);
             }
             Route r;
@@ -182,7 +182,7 @@ public final class CheckCommand extends MissionCommand {
             if (Failures.uncertified(p, "No verdict is given.", err)) {
                 return ExitCodes.INTERNAL;
             }
-            if (json) {
+            if (json.requested) {
                 out.println(CheckReport.json(p));
             } else {
                 CheckReport.text(p, out);

@@ -51,8 +51,8 @@ public final class ExportCommand extends MissionCommand {
     @Option(names = "--policy", required = true, paramLabel = "FILE", description = "where to write the policy (.json or .csv)")
     Path policyFile;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
@@ -90,7 +90,7 @@ public final class ExportCommand extends MissionCommand {
                 DiscountedAnalysis a = dd.analysis();
                 Objective.Discounted o = a.objective();
                 PolicyFiles.write(policyFile, PolicyFiles.Header.of(m, o, a.maxAbsWeight(), a.reserveKept()), pol);
-                if (json) {
+                if (json.requested) {
                     ObjectNode j = summary(m, pol, states);
                     j.put("lowestScore", ((Certification.Discounted) p.certification()).certificate().worstScore()
                             .map(Object::toString).orElse(null));
@@ -108,7 +108,7 @@ public final class ExportCommand extends MissionCommand {
             if (p.detail() instanceof Plan.Detail.Charging ch && ch.thresholds() != null) {
                 ThresholdPolicy tp = ch.thresholds();
                 PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), tp);
-                if (json) {
+                if (json.requested) {
                     ObjectNode o = summary(m, pol, states);
                     o.put("thresholdPositions", tp.size());
                     o.put("thresholds", tp.stepCount());
@@ -125,7 +125,7 @@ public final class ExportCommand extends MissionCommand {
                 return ExitCodes.OK;
             }
             PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
-            if (json) {
+            if (json.requested) {
                 ObjectNode o = summary(m, pol, states);
                 o.put("lowestLevelUnits", lowest);
                 o.put("policyChoice", p.policyChoice() == PolicyChoice.SAFEST ? "safest" : "fewest-moves");
@@ -171,7 +171,7 @@ public final class ExportCommand extends MissionCommand {
                 > m.reserveUnits();
         PolicyFiles.write(policyFile, PolicyFiles.Header.ofRounds(m), pol);
         int states = plan.certificate().statesChecked();
-        if (json) {
+        if (json.requested) {
             ObjectNode o = summary(m, pol, states);
             o.put("goal", patrol ? "patrol" : "deadline");
             o.put("lowestLevelUnits", lowest);
@@ -203,7 +203,7 @@ public final class ExportCommand extends MissionCommand {
     }
 
     private void notGuaranteed(Mission m, String why, PrintWriter out) {
-        if (json) {
+        if (json.requested) {
             ObjectNode o = Json.header(m, Verdict.NOT_GUARANTEED);
             o.put("written", false);
             o.putNull("policyFile");

@@ -61,8 +61,8 @@ public final class RenderCommand extends CommandBase {
             description = "starting charge instead of the mission's, e.g. 80%% or '30 Wh'")
     String start;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     QuietOption quiet;
@@ -110,7 +110,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         ViewData data;
-        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
+        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json.requested, quiet.quiet)) {
             // a patrol or a deadline mission goes through the core's rounds plan and its lasso (or slowest
             // play), as in the window
             data = new SolverAnalyzer().analyze(m, () -> false);
@@ -128,7 +128,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         VerdictSummary v = data.verdict();
-        if (json) {
+        if (json.requested) {
             ObjectNode o = Json.object();
             o.put("mission", m.name());
             o.put("file", m.source() == null ? null : m.source().toString());

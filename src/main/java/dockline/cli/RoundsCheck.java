@@ -117,9 +117,8 @@ final class RoundsCheck {
             out.println("  Run 'dockline replay " + (m.source() == null ? "MISSION" : m.source()) + "' for a lap where"
                     + " the building wins (the battery or a checkpoint is lost).");
         }
-        highest(a.highestGuaranteedReserveUnits(), m, out, "");
-        changesText(changes(a), out);
-        CheckReport.batteryLine(a.startUnits(), a.reserveUnits(), a.capacityUnits(), m, out);
+        figures(a.highestGuaranteedReserveUnits(), "", changes(a), a.startUnits(), a.reserveUnits(), a.capacityUnits(),
+                m, out);
         out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
                 + " checkpoints of the lap x battery levels)");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
@@ -176,9 +175,8 @@ final class RoundsCheck {
         } else {
             out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
         }
-        highest(a.highestGuaranteedReserveUnits(), m, out, " (within the deadline)");
-        changesText(changes(a), out);
-        CheckReport.batteryLine(a.startUnits(), a.reserveUnits(), a.capacityUnits(), m, out);
+        figures(a.highestGuaranteedReserveUnits(), " (within the deadline)", changes(a), a.startUnits(),
+                a.reserveUnits(), a.capacityUnits(), m, out);
         out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
                 + " stand for the ticks-left monitor");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
@@ -273,9 +271,13 @@ final class RoundsCheck {
         }
     }
 
-    private static void highest(OptionalInt h, Mission m, PrintWriter out, String what) {
+    /** The highest floor ({@code what}: of which goal), the changes that make it guaranteed, the battery. */
+    private static void figures(OptionalInt h, String what, java.util.List<Change> changes, int startUnits,
+                                int reserveUnits, int capacityUnits, Mission m, PrintWriter out) {
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
                 ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
+        changesText(changes, out);
+        CheckReport.batteryLine(startUnits, reserveUnits, capacityUnits, m, out);
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method) {
