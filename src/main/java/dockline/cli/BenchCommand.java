@@ -14,11 +14,10 @@ import picocli.CommandLine.Option;
  * one run and prints the table, the ratios and the targets; {@code --json} prints the same as JSON.
  * Exit 0 when every method agrees on every instance, 4 when any two disagree (an internal error).
  */
-@Command(name = "bench", mixinStandardHelpOptions = true,
+@Command(name = "bench",
         description = {"Measures the solving methods on generated buildings, from 32x32 up to 512x512 cells.",
                 "In one run it prints product vertices and edges, build and solve time, edges per second, peak heap, and the ratios",
                 "between methods. Every method must give the same verdict on an instance."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:all methods agree on every instance", "2:bad usage",
                 "4:two methods disagree on an instance (internal error)"})
 public final class BenchCommand extends CommandBase {
@@ -59,19 +58,13 @@ public final class BenchCommand extends CommandBase {
     boolean view;
 
     @Override
-    public Integer call() {
-        PrintWriter out = out();
-        PrintWriter err = err();
+    int run(PrintWriter out, PrintWriter err) {
         if (view) {
             return ViewBenchRun.run(sizes, seed, json, out, err);
         }
         if (resolutionRow) {
             int side = sizes != null && !sizes.isEmpty() ? sizes.get(0) : 256;
-            if (side < BuildingGenerator.MIN_SIDE || side > BuildingGenerator.MAX_SIDE) {
-                err.println("dockline: --sizes: " + side + " is outside " + BuildingGenerator.MIN_SIDE + ".."
-                        + BuildingGenerator.MAX_SIDE);
-                err.println("Try 'dockline bench --help'.");
-                err.flush();
+            if (!sideOk(side, err)) {
                 return ExitCodes.BAD_INPUT;
             }
             ResolutionBench.Row row = ResolutionBench.run(side, seed, 2, 3);
@@ -80,7 +73,7 @@ public final class BenchCommand extends CommandBase {
             // further sides: the full check at 1,000 levels once (e.g. --sizes 256,512)
             for (int i = 1; sizes != null && i < sizes.size(); i++) {
                 int s = sizes.get(i);
-                if (s < BuildingGenerator.MIN_SIDE || s > BuildingGenerator.MAX_SIDE) {
+                if (!inRange(s)) {
                     continue;
                 }
                 out.print(ResolutionBench.coarseText(s, ResolutionBench.coarseOnly(s, seed, 2)));
@@ -114,11 +107,7 @@ public final class BenchCommand extends CommandBase {
         Benchmark.Config base = quick ? Benchmark.Config.quick() : Benchmark.Config.full();
         if (sizes != null) {
             for (int s : sizes) {
-                if (s < BuildingGenerator.MIN_SIDE || s > BuildingGenerator.MAX_SIDE) {
-                    err.println("dockline: --sizes: " + s + " is outside " + BuildingGenerator.MIN_SIDE + ".."
-                            + BuildingGenerator.MAX_SIDE);
-                    err.println("Try 'dockline bench --help'.");
-                    err.flush();
+                if (!sideOk(s, err)) {
                     return ExitCodes.BAD_INPUT;
                 }
             }
@@ -161,5 +150,21 @@ public final class BenchCommand extends CommandBase {
             return ExitCodes.INTERNAL;
         }
         return ExitCodes.OK;
+    }
+
+    private static boolean inRange(int side) {
+        return side >= BuildingGenerator.MIN_SIDE && side <= BuildingGenerator.MAX_SIDE;
+    }
+
+    /** Whether a floor side of --sizes is in range; if not, says so (exit 2 follows). */
+    private static boolean sideOk(int side, PrintWriter err) {
+        if (inRange(side)) {
+            return true;
+        }
+        err.println("dockline: --sizes: " + side + " is outside " + BuildingGenerator.MIN_SIDE + ".."
+                + BuildingGenerator.MAX_SIDE);
+        err.println("Try 'dockline bench --help'.");
+        err.flush();
+        return false;
     }
 }

@@ -16,7 +16,6 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -35,11 +34,10 @@ import picocli.CommandLine.Parameters;
  * checked as its errors object); the exit code is the worst of them. One mission prints exactly what it
  * did before (one JSON object), so scripts and the schema's object form hold.
  */
-@Command(name = "check", mixinStandardHelpOptions = true,
+@Command(name = "check",
         description = {"Decides, for each mission given, whether the robot can always finish the mission and dock without its battery going"
                 + " below the reserve floor, whatever the building's disturbance model allows.",
                 "With a discounted objective (in the mission, or --objective discounted) the score is checked too."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed (and its policy certified, unless --verdict-only); with several missions: all are",
                 "1:not guaranteed (several: at least one, and none of the worse codes)",
                 "2:bad input or usage", "3:over a resource limit (the game is too large for the memory limit)",
@@ -53,8 +51,8 @@ public final class CheckCommand extends MissionCommand {
     @Mixin
     PolicyOption policy;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     DiscountedCheck discounted;
@@ -85,10 +83,10 @@ public final class CheckCommand extends MissionCommand {
         for (int i = 0; i < files.size(); i++) {
             mission.missionFile = files.get(i);
             StringWriter captured = new StringWriter();
-            PrintWriter o = json ? new PrintWriter(captured, true) : out;
+            PrintWriter o = json.requested ? new PrintWriter(captured, true) : out;
             Failures.Tee tee = new Failures.Tee(err);
             PrintWriter e = new PrintWriter(tee, true);
-            if (!json) {
+            if (!json.requested) {
                 out.println((i == 0 ? "" : System.lineSeparator()) + "== " + files.get(i) + " (" + (i + 1) + " of "
                         + files.size() + ")");
                 out.flush();
@@ -102,11 +100,11 @@ public final class CheckCommand extends MissionCommand {
             o.flush();
             e.flush();
             worst = Math.max(worst, code);
-            if (json) {
+            if (json.requested) {
                 array.add(result(mapper, captured.toString(), tee.copy.toString(), code, files.get(i)));
             }
         }
-        if (json) {
+        if (json.requested) {
             out.println(Json.pretty(array));
         }
         return worst;
@@ -145,7 +143,7 @@ public final class CheckCommand extends MissionCommand {
                     err.println("dockline: " + refused);
                     return ExitCodes.BAD_INPUT;
                 }
-                return RoundsCheck.run(m, mission.memoryBudgetBytes(), policy.choice() == dockline.plan.PolicyChoice.SAFEST, json,
+                return RoundsCheck.run(m, mission.memoryBudgetBytes(), policy.choice() == dockline.plan.PolicyChoice.SAFEST, json.requested,
                         out, err);
             }
             Route r;
@@ -181,13 +179,10 @@ public final class CheckCommand extends MissionCommand {
                 return ExitCodes.BAD_INPUT;
             }
             // never a silent "guaranteed": a policy that failed its independent certificate is an internal error
-            Optional<String> problem = p.certification().problem();
-            if (problem.isPresent()) {
-                err.println("dockline: internal error: " + problem.get());
-                err.println("No verdict is given. Please report this with the input files.");
+            if (Failures.uncertified(p, "No verdict is given.", err)) {
                 return ExitCodes.INTERNAL;
             }
-            if (json) {
+            if (json.requested) {
                 out.println(CheckReport.json(p));
             } else {
                 CheckReport.text(p, out);

@@ -68,8 +68,7 @@ final class CheckReport {
                 : "none (not even a floor of 0 can be guaranteed)"));
         out.println("  Lowest starting charge for the floor:  " + (p.lowestStartUnits().isPresent()
                 ? amount(p.lowestStartUnits().getAsInt(), m) : "none (no starting charge is enough)"));
-        out.println("  Start " + amount(m.startUnits(), m) + ", reserve floor " + amount(m.reserveUnits(), m)
-                + ", capacity " + s.formatWh(m.capacityUnits()) + " (" + m.capacityUnits() + " units)");
+        batteryLine(m.startUnits(), m.reserveUnits(), m.capacityUnits(), m, out);
         out.println("  Method: charging route (least charge per place x task progress, the good docks as targets,"
                 + " every floor in one pass): no battery levels in the game");
         out.println("  Game: " + p.size().vertices() + " positions of arena x goal, one pass of " + a.rounds() + " batch"
@@ -102,8 +101,7 @@ final class CheckReport {
         } else {
             out.println("  Highest reserve floor guaranteed:      not computed");
         }
-        out.println("  Start " + amount(a.startUnits(), m) + ", reserve floor " + amount(a.reserveUnits(), m)
-                + ", capacity " + s.formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
+        batteryLine(a.startUnits(), a.reserveUnits(), a.capacityUnits(), m, out);
         if (a.storedProduct()) {
             out.println("  Method: product game (arena x goal x battery levels) stored in arrays, and attractor");
             out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges; solved in "
@@ -169,8 +167,7 @@ final class CheckReport {
                 ? (a.verdictOnly() ? "more than is available" : "the robot cannot force completion")
                 : a.startNeedUnits() + " units") + " (available above the floor: " + (a.startUnits() - a.reserveUnits())
                 + " units)");
-        out.println("  Start " + amount(a.startUnits(), m) + ", reserve floor " + amount(a.reserveUnits(), m)
-                + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " (" + a.capacityUnits() + " units)");
+        batteryLine(a.startUnits(), a.reserveUnits(), a.capacityUnits(), m, out);
         out.println("  Game: " + a.pairVertices() + " vertices of arena x goal, " + a.exploredVertices()
                 + " explored; solved in " + a.solveMillis() + " ms (" + p.timings().totalMillis() + " ms in all)");
         out.println("  Energy: " + m.scale().describe());
@@ -270,6 +267,12 @@ final class CheckReport {
     }
 
     /** E.g. {@code 49 units = 24.5 Wh (40.8%)}; the share of the capacity in Wh, one decimal, is for display only. */
+    /** E.g. {@code   Start 90 units = 45 Wh (75%), reserve floor ..., capacity 60 Wh (120 units)}. */
+    static void batteryLine(int startUnits, int reserveUnits, int capacityUnits, Mission m, PrintWriter out) {
+        out.println("  Start " + amount(startUnits, m) + ", reserve floor " + amount(reserveUnits, m) + ", capacity "
+                + m.scale().formatWh(capacityUnits) + " (" + capacityUnits + " units)");
+    }
+
     static String amount(int units, Mission m) {
         EnergyScale s = m.scale();
         BigDecimal cap = m.robot().capacityWh();
@@ -305,9 +308,7 @@ final class CheckReport {
             discountedJson(o, p, dd.analysis());
         } else {
             o.put("objective", "reserve");
-            o.put("startUnits", m.startUnits());
-            o.put("reserveUnits", m.reserveUnits());
-            o.put("capacityUnits", m.capacityUnits());
+            Json.putBattery(o, m.startUnits(), m.reserveUnits(), m.capacityUnits());
             if (!p.verdictOnly()) {
                 Json.putOptional(o, "lowestLevelUnits", p.lowestLevelUnits());
                 Json.putOptional(o, "highestReserveUnits", p.highestFloorUnits());
@@ -341,8 +342,7 @@ final class CheckReport {
                 Json.putGameSize(o, a.productVertices(), a.productEdges(), a.estimate(), a.buildMillis(),
                         a.solveMillis());
             }
-            o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
-            o.put("budget", m.map().disturbances().budget());
+            Json.putUnitAndBudget(o, m);
         }
         o.put("compileMillis", p.timings().compileMillis());
         o.put("totalMillis", p.timings().totalMillis());
@@ -364,11 +364,8 @@ final class CheckReport {
     }
 
     private static void fastJson(ObjectNode o, FastPath.Analysis a) {
-        if (a.startNeedUnits() == MinChargeSolver.INFINITE) {
-            o.putNull("startNeedUnits");
-        } else {
-            o.put("startNeedUnits", a.startNeedUnits());
-        }
+        Json.putOptional(o, "startNeedUnits", a.startNeedUnits() == MinChargeSolver.INFINITE ? OptionalInt.empty()
+                : OptionalInt.of(a.startNeedUnits()));
         o.put("exploredVertices", a.exploredVertices());
         o.put("productVertices", a.pairVertices());
         o.put("solveMillis", a.solveMillis());
@@ -404,9 +401,7 @@ final class CheckReport {
         o.put("threshold", ob.threshold().toString());
         o.put("relation", ob.relation().symbol());
         o.put("reserveKept", a.reserveKept());
-        o.put("startUnits", m.startUnits());
-        o.put("reserveUnits", m.reserveUnits());
-        o.put("capacityUnits", m.capacityUnits());
+        Json.putBattery(o, m.startUnits(), m.reserveUnits(), m.capacityUnits());
         o.put("weightBoundUnits", a.maxAbsWeight());
         o.put("comparatorStates", a.comparatorStates());
         o.put("comparatorStateBound", a.comparatorStateBound());
@@ -418,8 +413,7 @@ final class CheckReport {
         }
         ArrayNode plan = o.putArray("nominalPlan");
         a.nominalPlan().forEach(x -> plan.add(x.toString()));
-        o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
-        o.put("budget", m.map().disturbances().budget());
+        Json.putUnitAndBudget(o, m);
         Json.putGameSize(o, a.productVertices(), a.productEdges(), a.estimate(), a.buildMillis(), a.solveMillis());
         if (a.baseline().isPresent()) {
             DiscountedAnalysis.Baseline b = a.baseline().get();

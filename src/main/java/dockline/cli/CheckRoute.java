@@ -52,19 +52,11 @@ final class CheckRoute {
         }
         switch (m) {
             case "fast":
-                if (policy.fewestMoves) {
-                    err.println("dockline: --fewest-moves applies to the product routes; the fast path has one policy,"
-                            + " that of least energy needed, which is the safest");
-                    return null;
-                }
-                return Route.Fast.defaults();
+                return onePolicy(policy, Route.Fast.defaults(), "the fast path has one policy, that of least energy"
+                        + " needed", err);
             case "charging":
-                if (policy.fewestMoves) {
-                    err.println("dockline: --fewest-moves applies to the product routes; the charging route has one"
-                            + " policy, the threshold policy at the highest floor, which is the safest");
-                    return null;
-                }
-                return Route.Charging.defaults();
+                return onePolicy(policy, Route.Charging.defaults(), "the charging route has one policy, the threshold"
+                        + " policy at the highest floor", err);
             case "product":
                 return Route.Product.of(choice);
             case "stored":
@@ -72,5 +64,14 @@ final class CheckRoute {
             default:
                 return new Route.Auto(choice);
         }
+    }
+
+    /** {@code route}, whose one policy ({@code which}) is the safest; null after the refusal when --fewest-moves asks another. */
+    private static Route onePolicy(PolicyOption policy, Route route, String which, PrintWriter err) {
+        if (policy.fewestMoves) {
+            err.println("dockline: --fewest-moves applies to the product routes; " + which + ", which is the safest");
+            return null;
+        }
+        return route;
     }
 }

@@ -6,7 +6,9 @@ import picocli.CommandLine;
 
 /**
  * What every subcommand starts from: the command line picocli hands it, whose writers (set by
- * {@link Main}) it prints to, and an exit code ({@link ExitCodes}) as its result.
+ * {@link Main}) it prints to, and one frame around its work ({@link #call}): the work runs on those
+ * writers, a bad input already reported ({@link MissionOptions.BadInput}) is exit 2, and both writers
+ * are flushed whatever happens. The result is an exit code ({@link ExitCodes}).
  */
 abstract class CommandBase implements Callable<Integer> {
 
@@ -28,4 +30,26 @@ abstract class CommandBase implements Callable<Integer> {
     PrintWriter err() {
         return spec.commandLine().getErr();
     }
+
+    @Override
+    public final Integer call() {
+        PrintWriter out = out();
+        PrintWriter err = err();
+        try {
+            return frame(out, err);
+        } catch (MissionOptions.BadInput e) {
+            return ExitCodes.BAD_INPUT;
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    /** Runs {@link #run} on the writers; a command that shows progress wraps it ({@link MissionCommand}). */
+    int frame(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
+        return run(out, err);
+    }
+
+    /** The command's work: prints to {@code out} and {@code err} and returns the exit code. */
+    abstract int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput;
 }

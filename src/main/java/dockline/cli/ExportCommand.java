@@ -19,7 +19,6 @@ import dockline.solve.Verdict;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Optional;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -34,14 +33,13 @@ import picocli.CommandLine.Option;
  * mission with a discounted objective the rows carry the robot's score memory (format version 2,
  * see missions/POLICY-FORMAT.md); the reserve floor is kept as well, as {@code check} does by default.
  */
-@Command(name = "export", mixinStandardHelpOptions = true,
+@Command(name = "export",
         description = {"Writes the certified policy of a guaranteed mission: the action to take in every situation the"
                 + " robot can meet.",
                 "A situation is the cell, the battery level, the disturbances left, the tasks done and, for a discounted"
                 + " score, the score gap. The safest policy of a mission with charging is written as level thresholds"
                 + " per position (at or above X units do this, below it do that). JSON, or CSV for a .csv name;"
                 + " nothing is written when the mission is not guaranteed."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:policy certified and written", "1:not guaranteed (nothing written)", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its independent certificate; nothing written)"})
@@ -53,8 +51,8 @@ public final class ExportCommand extends MissionCommand {
     @Option(names = "--policy", required = true, paramLabel = "FILE", description = "where to write the policy (.json or .csv)")
     Path policyFile;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     int run(PrintWriter out, PrintWriter err) throws MissionOptions.BadInput {
@@ -82,10 +80,7 @@ public final class ExportCommand extends MissionCommand {
                         : "there is no safe policy to export", out);
                 return ExitCodes.NOT_GUARANTEED;
             }
-            Optional<String> problem = p.certification().problem();
-            if (problem.isPresent()) {
-                err.println("dockline: internal error: " + problem.get());
-                err.println("No policy is written. Please report this with the input files.");
+            if (Failures.uncertified(p, "No policy is written.", err)) {
                 return ExitCodes.INTERNAL;
             }
             Policy pol = p.policy().orElseThrow();
@@ -95,7 +90,7 @@ public final class ExportCommand extends MissionCommand {
                 DiscountedAnalysis a = dd.analysis();
                 Objective.Discounted o = a.objective();
                 PolicyFiles.write(policyFile, PolicyFiles.Header.of(m, o, a.maxAbsWeight(), a.reserveKept()), pol);
-                if (json) {
+                if (json.requested) {
                     ObjectNode j = summary(m, pol, states);
                     j.put("lowestScore", ((Certification.Discounted) p.certification()).certificate().worstScore()
                             .map(Object::toString).orElse(null));
@@ -113,7 +108,7 @@ public final class ExportCommand extends MissionCommand {
             if (p.detail() instanceof Plan.Detail.Charging ch && ch.thresholds() != null) {
                 ThresholdPolicy tp = ch.thresholds();
                 PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), tp);
-                if (json) {
+                if (json.requested) {
                     ObjectNode o = summary(m, pol, states);
                     o.put("thresholdPositions", tp.size());
                     o.put("thresholds", tp.stepCount());
@@ -130,7 +125,7 @@ public final class ExportCommand extends MissionCommand {
                 return ExitCodes.OK;
             }
             PolicyFiles.write(policyFile, PolicyFiles.Header.of(m), pol);
-            if (json) {
+            if (json.requested) {
                 ObjectNode o = summary(m, pol, states);
                 o.put("lowestLevelUnits", lowest);
                 o.put("policyChoice", p.policyChoice() == PolicyChoice.SAFEST ? "safest" : "fewest-moves");
@@ -176,7 +171,7 @@ public final class ExportCommand extends MissionCommand {
                 > m.reserveUnits();
         PolicyFiles.write(policyFile, PolicyFiles.Header.ofRounds(m), pol);
         int states = plan.certificate().statesChecked();
-        if (json) {
+        if (json.requested) {
             ObjectNode o = summary(m, pol, states);
             o.put("goal", patrol ? "patrol" : "deadline");
             o.put("lowestLevelUnits", lowest);
@@ -208,7 +203,7 @@ public final class ExportCommand extends MissionCommand {
     }
 
     private void notGuaranteed(Mission m, String why, PrintWriter out) {
-        if (json) {
+        if (json.requested) {
             ObjectNode o = Json.header(m, Verdict.NOT_GUARANTEED);
             o.put("written", false);
             o.putNull("policyFile");

@@ -37,6 +37,21 @@ public final class Failures {
     private Failures() {
     }
 
+    /**
+     * Never a silent "guaranteed": when the plan's policy failed its independent certificate, prints the
+     * problem and what is withheld ({@code withheld}, e.g. {@code No policy is written.}) and returns
+     * true (the command then exits with {@link ExitCodes#INTERNAL}); else prints nothing and returns false.
+     */
+    static boolean uncertified(dockline.plan.Plan p, String withheld, PrintWriter err) {
+        java.util.Optional<String> problem = p.certification().problem();
+        if (problem.isEmpty()) {
+            return false;
+        }
+        err.println("dockline: internal error: " + problem.get());
+        err.println(withheld + " Please report this with the input files.");
+        return true;
+    }
+
     /** The message and exit code for a failure of solving, certifying or replaying the mission read from {@code file}. */
     static int report(Throwable e, Object file, PrintWriter err) {
         String head = "dockline: " + (file != null ? file + ": " : "");

@@ -30,12 +30,11 @@ import picocli.CommandLine.Parameters;
  * Every option is checked before the image is read, the image before anything is written, and the
  * map is written atomically; on any problem nothing is written (exit 2).
  */
-@Command(name = "import", mixinStandardHelpOptions = true,
+@Command(name = "import",
         description = {"Turns an occupancy image (PGM P2/P5, PBM P1/P4 or PNG; dark = occupied, light = free) into a map.",
                 "A cell is free only if every pixel in it is free (unknown counts as occupied).",
                 "With --robot-radius, cells whose centre is closer than the radius to an obstacle become walls.",
                 "No zones or doors are added; see maps/README.md, \"Imported maps\"."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:map written", "2:bad image, option or output path (nothing written)"})
 public final class ImportCommand extends CommandBase {
 
@@ -84,9 +83,7 @@ public final class ImportCommand extends CommandBase {
     boolean json;
 
     @Override
-    public Integer call() {
-        PrintWriter outw = out();
-        PrintWriter err = err();
+    int run(PrintWriter outw, PrintWriter err) {
         List<String> bad = new ArrayList<>();
         ImportRequest request = new ImportRequest(image, pixelSize, cellSize, robotRadius, docks, occupiedAtMost,
                 freeAtLeast, invert, surface, name);

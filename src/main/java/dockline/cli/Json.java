@@ -63,6 +63,32 @@ final class Json {
         return o;
     }
 
+    /**
+     * Puts the battery of the question: {@code startUnits}, {@code reserveUnits} and {@code capacityUnits},
+     * in that order (the same three keys in every command's object).
+     */
+    static void putBattery(ObjectNode o, int startUnits, int reserveUnits, int capacityUnits) {
+        o.put("startUnits", startUnits);
+        o.put("reserveUnits", reserveUnits);
+        o.put("capacityUnits", capacityUnits);
+    }
+
+    /** Puts the energy unit in Wh ({@code unitWh}) and the map's disturbance budget ({@code budget}). */
+    static void putUnitAndBudget(ObjectNode o, dockline.model.Mission m) {
+        o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
+        o.put("budget", m.map().disturbances().budget());
+    }
+
+    /** Puts {@code key + "Units"} and {@code key + "Wh"} of an energy figure, both null when there is none. */
+    static void putUnitsAndWh(ObjectNode o, String key, java.util.OptionalInt u, dockline.model.EnergyScale s) {
+        putOptional(o, key + "Units", u);
+        if (u.isPresent()) {
+            o.put(key + "Wh", s.toWh(u.getAsInt()));
+        } else {
+            o.putNull(key + "Wh");
+        }
+    }
+
     /** Puts the value, or null when empty. */
     static void putOptional(ObjectNode o, String key, java.util.OptionalInt v) {
         if (v.isPresent()) {

@@ -117,6 +117,14 @@ public final class Main implements Runnable {
         for (Object sub : subcommands()) {
             cl.addSubcommand(sub);
         }
+        // what every subcommand's help has, set once: -h/--help and -V/--version (the tool's version), and the
+        // heading of its exit codes
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            CommandLine.Model.CommandSpec spec = sub.getCommandSpec();
+            spec.mixinStandardHelpOptions(true);
+            spec.versionProvider(new Version());
+            spec.usageMessage().exitCodeListHeading("%nExit codes:%n");
+        }
         cl.setExecutionStrategy(Main::execute);
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();

@@ -30,10 +30,9 @@ import picocli.CommandLine.Option;
  * "fixpoint" in the output), with both timings. The
  * two must agree; if they do not, that is an internal error (exit 4).
  */
-@Command(name = "margin", mixinStandardHelpOptions = true,
+@Command(name = "margin",
         description = {"Finds the highest reserve floor and the lowest starting charge that still guarantee a mission,"
                 + " two independent ways, and what would make a mission that is not guaranteed guaranteed."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:the mission as written is guaranteed", "1:not guaranteed", "2:bad input or usage",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (the two methods disagree)"})
@@ -189,13 +188,10 @@ public final class MarginCommand extends MissionCommand {
         EnergyScale s = m.scale();
         ObjectNode root = Json.header(m, Verdict.of(r.guaranteed()));
         root.put("guaranteed", r.guaranteed());
-        root.put("startUnits", r.startUnits());
-        root.put("reserveUnits", r.floorUnits());
-        root.put("capacityUnits", r.capacityUnits());
-        root.put("unitWh", s.unitWh().stripTrailingZeros());
-        root.put("budget", m.map().disturbances().budget());
-        units(root, "highestReserve", r.highestReserveUnits(), s);
-        units(root, "lowestStart", r.lowestStartUnits(), s);
+        Json.putBattery(root, r.startUnits(), r.floorUnits(), r.capacityUnits());
+        Json.putUnitAndBudget(root, m);
+        Json.putUnitsAndWh(root, "highestReserve", r.highestReserveUnits(), s);
+        Json.putUnitsAndWh(root, "lowestStart", r.lowestStartUnits(), s);
         root.put("agree", r.agree());
         method(root.putObject("bisection"), r.bisection(), s);
         method(root.putObject("fixpoint"), r.fixpoint(), s);
@@ -205,18 +201,8 @@ public final class MarginCommand extends MissionCommand {
     }
 
     private static void method(ObjectNode o, MarginReport.Method m, EnergyScale s) {
-        units(o, "highestReserve", m.highestReserveUnits(), s);
-        units(o, "lowestStart", m.lowestStartUnits(), s);
+        Json.putUnitsAndWh(o, "highestReserve", m.highestReserveUnits(), s);
+        Json.putUnitsAndWh(o, "lowestStart", m.lowestStartUnits(), s);
         o.put("millis", m.millis());
-    }
-
-    private static void units(ObjectNode o, String key, OptionalInt u, EnergyScale s) {
-        if (u.isPresent()) {
-            o.put(key + "Units", u.getAsInt());
-            o.put(key + "Wh", s.toWh(u.getAsInt()));
-        } else {
-            o.putNull(key + "Units");
-            o.putNull(key + "Wh");
-        }
     }
 }

@@ -56,31 +56,15 @@ final class MissionOptions {
 
     /** Loads the mission and applies the overrides; prints problems to {@code err}. */
     Mission load(PrintWriter err) throws BadInput {
-        Mission m;
-        try {
-            m = MissionLoader.load(missionFile);
-        } catch (InputException e) {
-            for (Problem p : e.problems()) {
-                err.println(p.format());
-            }
-            throw new BadInput();
+        Mission m = read(missionFile, err);
+        Charge newReserve = reserve == null ? null : charge("--reserve", reserve, m, err);
+        Charge newStart = startCharge == null ? null : charge("--start-charge", startCharge, m, err);
+        boolean bad = (reserve != null && newReserve == null) || (startCharge != null && newStart == null);
+        if (newReserve != null) {
+            m = m.withReserve(newReserve);
         }
-        boolean bad = false;
-        if (reserve != null) {
-            Charge c = charge("--reserve", reserve, m, err);
-            if (c == null) {
-                bad = true;
-            } else {
-                m = m.withReserve(c);
-            }
-        }
-        if (startCharge != null) {
-            Charge c = charge("--start-charge", startCharge, m, err);
-            if (c == null) {
-                bad = true;
-            } else {
-                m = m.withStartCharge(c);
-            }
+        if (newStart != null) {
+            m = m.withStartCharge(newStart);
         }
         if (budget != null) {
             if (budget < 0 || budget > MapLoader.MAX_BUDGET) {
@@ -119,6 +103,18 @@ final class MissionOptions {
             throw new BadInput();
         }
         return m;
+    }
+
+    /** Loads the mission file as it is; prints its problems ({@code file:line:column: message}) to {@code err}. */
+    static Mission read(Path file, PrintWriter err) throws BadInput {
+        try {
+            return MissionLoader.load(file);
+        } catch (InputException e) {
+            for (Problem p : e.problems()) {
+                err.println(p.format());
+            }
+            throw new BadInput();
+        }
     }
 
     private static Charge charge(String option, String text, Mission m, PrintWriter err) {

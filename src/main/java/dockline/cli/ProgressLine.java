@@ -53,7 +53,7 @@ final class ProgressLine implements ProgressListener {
         try {
             if (Files.isSymbolicLink(fd2)) {
                 String target = Files.readSymbolicLink(fd2).toString();
-                return target.startsWith("/dev/pts/") || target.startsWith("/dev/tty");
+                return target.startsWith("/dev/pts/") || target.startsWith("/dev/tty") || target.equals("/dev/console");
             }
         } catch (IOException | SecurityException | UnsupportedOperationException e) {
             // fall through to the console test
@@ -106,8 +106,13 @@ final class ProgressLine implements ProgressListener {
         return new Frame(line, new PrintWriter(line.guard(out), true), new PrintWriter(line.guard(err), true));
     }
 
+    /** The stages of a plan are not shown: the phases inside them say more about how far the work is. */
     @Override
-    public void progress(String phase, int percent) {
+    public void stage(int percent, String stage) {
+    }
+
+    @Override
+    public void phase(String phase, int percent) {
         long now = clock.getAsLong();
         if (lastPrint != Long.MIN_VALUE && now - lastPrint < INTERVAL_NANOS) {
             return;

@@ -1,9 +1,6 @@
 package dockline.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dockline.io.InputException;
-import dockline.io.MissionLoader;
-import dockline.io.Problem;
 import dockline.io.Quantities;
 import dockline.model.Charge;
 import dockline.model.Mission;
@@ -32,11 +29,10 @@ import picocli.CommandLine.Parameters;
  * or a deadline mission is planned by {@link dockline.plan.RoundsPlan} (the window's adapter of it): the picture shows
  * its lasso (the way in and one lap of the loop) or its slowest play.
  */
-@Command(name = "render", mixinStandardHelpOptions = true,
+@Command(name = "render",
         description = {"Solves a mission and draws it as a PNG picture, with no display needed.",
                 "The picture shows the map with the charge needed per cell (or the policy), the worst-case path,",
                 "the battery chart and the safety caveat."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:picture written; the mission is guaranteed", "1:picture written; the mission is not guaranteed",
                 "2:bad input or usage (nothing written)", "3:over a resource limit (nothing written)",
                 "4:internal error (also: the solver's policy failed the independent certificate check)"})
@@ -65,16 +61,14 @@ public final class RenderCommand extends CommandBase {
             description = "starting charge instead of the mission's, e.g. 80%% or '30 Wh'")
     String start;
 
-    @Option(names = "--json", description = "print the result as one JSON object instead of the text")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     QuietOption quiet;
 
     @Override
-    public Integer call() {
-        PrintWriter outw = out();
-        PrintWriter err = err();
+    int run(PrintWriter outw, PrintWriter err) throws MissionOptions.BadInput {
         Matcher sm = SIZE.matcher(size.trim());
         Overlay overlay;
         try {
@@ -93,15 +87,7 @@ public final class RenderCommand extends CommandBase {
             err.println("dockline render: --size " + size + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        Mission m;
-        try {
-            m = MissionLoader.load(mission);
-        } catch (InputException e) {
-            for (Problem p : e.problems()) {
-                err.println(p.format());
-            }
-            return ExitCodes.BAD_INPUT;
-        }
+        Mission m = MissionOptions.read(mission, err);
         try {
             if (reserve != null) {
                 m = m.withReserve(charge("--reserve", reserve, m));
@@ -124,7 +110,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         ViewData data;
-        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json, quiet.quiet)) {
+        try (ProgressLine.Frame progress = ProgressLine.open(outw, err, json.requested, quiet.quiet)) {
             // a patrol or a deadline mission goes through the core's rounds plan and its lasso (or slowest
             // play), as in the window
             data = new SolverAnalyzer().analyze(m, () -> false);
@@ -142,7 +128,7 @@ public final class RenderCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         VerdictSummary v = data.verdict();
-        if (json) {
+        if (json.requested) {
             ObjectNode o = Json.object();
             o.put("mission", m.name());
             o.put("file", m.source() == null ? null : m.source().toString());

@@ -30,10 +30,9 @@ import picocli.CommandLine.Mixin;
  * disturbance choices that drive the battery lowest). For a mission that is not guaranteed the worst
  * case is the counterexample: the disturbance's winning strategy against the robot's best effort.
  */
-@Command(name = "replay", mixinStandardHelpOptions = true,
+@Command(name = "replay",
         description = {"Replays the robot's policy for a mission step by step, with what the disturbances do.",
                 "Guaranteed missions: the certified policy; not guaranteed: the counterexample that defeats every plan."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:guaranteed (policy certified)", "1:not guaranteed", "2:bad input or usage (also an impossible --force event)",
                 "3:over a resource limit (the game is too large for the memory limit)",
                 "4:internal error (e.g. the policy failed its certificate)"})
@@ -102,9 +101,7 @@ public final class ReplayCommand extends MissionCommand {
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }
-        if (plan.certification().problem().isPresent()) {
-            err.println("dockline: internal error: " + plan.certification().problem().get());
-            err.println("No replay is shown; please report this with the input files.");
+        if (Failures.uncertified(plan, "No replay is shown.", err)) {
             return ExitCodes.INTERNAL;
         }
         PlanReplays mr = plan.replays().orElseThrow();

@@ -9,6 +9,7 @@ import dockline.report.MissionResult;
 import dockline.report.ReportMeta;
 import dockline.report.ReportRun;
 import dockline.view.ReportPictures;
+import dockline.util.ProgressListener;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -28,12 +29,11 @@ import picocli.CommandLine.Parameters;
  * summary. Progress goes to standard error when it is a terminal and {@code --quiet} is not given.
  * Exit code: the worst of the missions' (0 all guaranteed, 1 some not, 2 bad input, 3, 4).
  */
-@Command(name = "report", mixinStandardHelpOptions = true,
+@Command(name = "report",
         description = {"Checks every mission given (a folder: every mission file in it, sorted) and writes one"
                 + " self-contained HTML sign-off report: a summary table, then per mission the map with the worst"
                 + " case, the battery chart, the suggestions, the disturbance model, the rule of thumb beside the"
                 + " verdict, the safety cautions, and the input files' SHA-256."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:report written; every mission guaranteed", "1:report written; some mission not guaranteed",
                 "2:bad input (a bad mission is still listed with its errors), or no report written",
                 "3:some mission over a resource limit", "4:internal error"})
@@ -55,18 +55,7 @@ public final class ReportCommand extends CommandBase {
     boolean quiet;
 
     @Override
-    public Integer call() {
-        PrintWriter o = out();
-        PrintWriter err = err();
-        try {
-            return run(o, err);
-        } finally {
-            o.flush();
-            err.flush();
-        }
-    }
-
-    private int run(PrintWriter o, PrintWriter err) {
+    int run(PrintWriter o, PrintWriter err) {
         if (jobs != null && (jobs < 1 || jobs > 256)) {
             err.println("dockline: --jobs must be a whole number from 1 to 256, not " + jobs);
             return ExitCodes.BAD_INPUT;
@@ -86,12 +75,14 @@ public final class ReportCommand extends CommandBase {
             return ExitCodes.BAD_INPUT;
         }
         int threads = jobs != null ? jobs : Runtime.getRuntime().availableProcessors();
-        boolean progress = !quiet && stderrIsTerminal();
+        boolean progress = ProgressLine.wanted(false, quiet);
         List<MissionResult> results = ReportRun.check(files, threads, new ReportPictures(), progress
-                ? (done, total, r, millis) -> {
-                    err.println("[" + done + "/" + total + "] " + r.file() + ": " + r.status().word() + " ("
-                            + millis + " ms)");
-                    err.flush();
+                ? new ProgressListener() {
+                    @Override
+                    public void stage(int percent, String missionDone) {
+                        err.println(missionDone);
+                        err.flush();
+                    }
                 } : null);
         for (MissionResult r : results) {
             for (MissionResult.Input in : r.inputs()) {
@@ -159,22 +150,5 @@ public final class ReportCommand extends CommandBase {
     static String version() {
         String v = new Main.Version().getVersion()[0];
         return v.startsWith("dockline ") ? v.substring("dockline ".length()) : v;
-    }
-
-    /**
-     * Whether standard error is a terminal: on Linux its file descriptor links to a terminal device; elsewhere
-     * the JDK's console (present only when the process is interactive) stands in.
-     */
-    static boolean stderrIsTerminal() {
-        Path fd = Path.of("/proc/self/fd/2");
-        try {
-            if (Files.isSymbolicLink(fd)) {
-                String target = Files.readSymbolicLink(fd).toString();
-                return target.startsWith("/dev/pts/") || target.startsWith("/dev/tty") || target.equals("/dev/console");
-            }
-        } catch (IOException | SecurityException | UnsupportedOperationException e) {
-            // fall through
-        }
-        return System.console() != null;
     }
 }

@@ -117,21 +117,14 @@ final class RoundsCheck {
             out.println("  Run 'dockline replay " + (m.source() == null ? "MISSION" : m.source()) + "' for a lap where"
                     + " the building wins (the battery or a checkpoint is lost).");
         }
-        highest(a.highestGuaranteedReserveUnits(), m, out, "");
-        changesText(changes(a), out);
-        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
-                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
-                + a.capacityUnits() + " units)");
+        figures(a.highestGuaranteedReserveUnits(), "", changes(a), a.startUnits(), a.reserveUnits(), a.capacityUnits(),
+                m, out);
         out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
                 + " checkpoints of the lap x battery levels)");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + " vertices); " + a.rounds() + " round" + (a.rounds() == 1 ? "" : "s")
                 + " of the fixpoint; " + a.millis() + " ms in all (the highest floor included)");
-        out.println("  Energy: " + m.scale().describe());
-        if (cert != null) {
-            out.println("  certified: " + cert.ok() + " (" + cert.reason() + ")");
-        }
-        out.println(Caveats.block());
+        tail(m, cert, out);
     }
 
     static String patrolJson(PatrolAnalysis a, RoundsCertificate cert) {
@@ -139,26 +132,17 @@ final class RoundsCheck {
         ObjectNode o = header(m, a.guaranteed(), "patrol");
         o.putPOJO("checkpoints", m.tasks().patrol());
         o.put("budgetPer", m.map().disturbances().budgetPerLap() ? "lap" : "mission");
-        o.put("startUnits", a.startUnits());
-        o.put("reserveUnits", a.reserveUnits());
-        o.put("capacityUnits", a.capacityUnits());
-        put(o, "lowestLevelUnits", a.lowestLevelUnits());
-        o.put("policyReserveUnits", a.policyFloorUnits());
-        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
-        put(o, "longestLapTicks", a.longestLapTicks());
-        put(o, "wayInTicks", a.wayInTicks());
+        Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
+        Json.putOptional(o, "lowestLevelUnits", a.lowestLevelUnits());
+        policy(o, a.policyFloorUnits(), a.reserveUnits());
+        Json.putOptional(o, "longestLapTicks", a.longestLapTicks());
+        Json.putOptional(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
-        put(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
         tick(o, m);
-        o.put("productVertices", a.productVertices());
-        o.put("productEdges", a.productEdges());
-        o.put("boundVertices", a.boundVertices());
+        game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("fixpointRounds", a.rounds());
-        o.put("totalMillis", a.millis());
-        certificate(o, cert);
-        changesJson(o, changes(a));
-        o.put("rounding", m.scale().describe());
-        return Json.withCaveats(o);
+        return end(o, m, a.millis(), cert, changes(a));
     }
 
     // ---------------------------------------------------------------- deadline
@@ -191,49 +175,33 @@ final class RoundsCheck {
         } else {
             out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
         }
-        highest(a.highestGuaranteedReserveUnits(), m, out, " (within the deadline)");
-        changesText(changes(a), out);
-        out.println("  Start " + CheckReport.amount(a.startUnits(), m) + ", reserve floor "
-                + CheckReport.amount(a.reserveUnits(), m) + ", capacity " + m.scale().formatWh(a.capacityUnits()) + " ("
-                + a.capacityUnits() + " units)");
+        figures(a.highestGuaranteedReserveUnits(), " (within the deadline)", changes(a), a.startUnits(),
+                a.reserveUnits(), a.capacityUnits(), m, out);
         out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
                 + " stand for the ticks-left monitor");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + "); with ticks left " + a.timedVertices() + " vertices, kept as one rank per"
                 + " vertex; " + a.millis() + " ms in all (the highest floor included)");
-        out.println("  Energy: " + m.scale().describe());
-        if (cert != null) {
-            out.println("  certified: " + cert.ok() + " (" + cert.reason() + ")");
-        }
-        out.println(Caveats.block());
+        tail(m, cert, out);
     }
 
     static String deadlineJson(DeadlineAnalysis a, RoundsCertificate cert) {
         Mission m = a.mission();
         ObjectNode o = header(m, a.guaranteed(), "deadline");
-        o.put("startUnits", a.startUnits());
-        o.put("reserveUnits", a.reserveUnits());
-        o.put("capacityUnits", a.capacityUnits());
+        Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
         tick(o, m);
         o.put("deadlineSeconds", m.timing().deadlineSeconds().stripTrailingZeros());
         o.put("deadlineTicks", a.deadlineTicks());
-        put(o, "worstFinishTicks", a.worstFinishTicks());
+        Json.putOptional(o, "worstFinishTicks", a.worstFinishTicks());
         seconds(o, "worstFinishSeconds", m, a.worstFinishTicks());
-        put(o, "tightestDeadlineTicks", a.tightestTicks());
+        Json.putOptional(o, "tightestDeadlineTicks", a.tightestTicks());
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
-        put(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
-        put(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
-        o.put("policyReserveUnits", a.policyFloorUnits());
-        o.put("policyChoice", a.policyFloorUnits() > a.reserveUnits() ? "safest" : "fewest-moves");
-        o.put("productVertices", a.productVertices());
-        o.put("productEdges", a.productEdges());
-        o.put("boundVertices", a.boundVertices());
+        Json.putOptional(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
+        Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        policy(o, a.policyFloorUnits(), a.reserveUnits());
+        game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("timedVertices", a.timedVertices());
-        o.put("totalMillis", a.millis());
-        certificate(o, cert);
-        changesJson(o, changes(a));
-        o.put("rounding", m.scale().describe());
-        return Json.withCaveats(o);
+        return end(o, m, a.millis(), cert, changes(a));
     }
 
     // ---------------------------------------------------------------- shared
@@ -282,7 +250,17 @@ final class RoundsCheck {
         }
     }
 
-    private static void changesJson(ObjectNode o, java.util.List<Change> changes) {
+    /** The energy, the certificate (when there is one) and the safety cautions: the last lines of the text. */
+    private static void tail(Mission m, RoundsCertificate cert, PrintWriter out) {
+        out.println("  Energy: " + m.scale().describe());
+        if (cert != null) {
+            out.println("  certified: " + cert.ok() + " (" + cert.reason() + ")");
+        }
+        out.println(Caveats.block());
+    }
+
+    /** The {@code suggestions} array of the changes: kind, from, to and the sentence (as {@link Json#putSuggestions}). */
+    static void changesJson(ObjectNode o, java.util.List<Change> changes) {
         com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
         for (Change c : changes) {
             ObjectNode so = arr.addObject();
@@ -293,19 +271,19 @@ final class RoundsCheck {
         }
     }
 
-    private static void highest(OptionalInt h, Mission m, PrintWriter out, String what) {
+    /** The highest floor ({@code what}: of which goal), the changes that make it guaranteed, the battery. */
+    private static void figures(OptionalInt h, String what, java.util.List<Change> changes, int startUnits,
+                                int reserveUnits, int capacityUnits, Mission m, PrintWriter out) {
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
                 ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
+        changesText(changes, out);
+        CheckReport.batteryLine(startUnits, reserveUnits, capacityUnits, m, out);
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method) {
-        ObjectNode o = Json.object();
-        o.put("mission", m.name());
-        o.put("file", m.source() == null ? null : m.source().toString());
-        o.put("verdict", ok ? "guaranteed" : "not-guaranteed");
+        ObjectNode o = Json.header(m, dockline.solve.Verdict.of(ok));
         o.put("method", method);
-        o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
-        o.put("budget", m.map().disturbances().budget());
+        Json.putUnitAndBudget(o, m);
         return o;
     }
 
@@ -317,7 +295,8 @@ final class RoundsCheck {
         }
     }
 
-    private static void seconds(ObjectNode o, String key, Mission m, OptionalInt ticks) {
+    /** Puts the seconds of {@code ticks} turns, or null when the mission has no tick length or there are no ticks. */
+    static void seconds(ObjectNode o, String key, Mission m, OptionalInt ticks) {
         if (m.timing().hasTick() && ticks.isPresent()) {
             BigDecimal s = m.timing().seconds(ticks.getAsInt()).stripTrailingZeros();
             o.put(key, s);
@@ -326,20 +305,34 @@ final class RoundsCheck {
         }
     }
 
+    /** The policy's floor and which policy it is: above the mission's floor, the safest. */
+    private static void policy(ObjectNode o, int policyFloorUnits, int reserveUnits) {
+        o.put("policyReserveUnits", policyFloorUnits);
+        o.put("policyChoice", policyFloorUnits > reserveUnits ? "safest" : "fewest-moves");
+    }
+
+    /** The stored product's size and its bound. */
+    private static void game(ObjectNode o, long vertices, long edges, long boundVertices) {
+        o.put("productVertices", vertices);
+        o.put("productEdges", edges);
+        o.put("boundVertices", boundVertices);
+    }
+
+    /** The last keys of both goals' objects (time, certificate, suggestions, rounding, cautions), as text. */
+    private static String end(ObjectNode o, Mission m, long millis, RoundsCertificate cert, java.util.List<Change> changes) {
+        o.put("totalMillis", millis);
+        certificate(o, cert);
+        changesJson(o, changes);
+        o.put("rounding", m.scale().describe());
+        return Json.withCaveats(o);
+    }
+
     private static void certificate(ObjectNode o, RoundsCertificate cert) {
         o.put("certified", cert != null && cert.ok());
         if (cert != null) {
             o.put("certifiedStates", cert.statesChecked());
             o.put("certifiedLowestLevelUnits", cert.worstMinimumUnits());
             o.put("certification", cert.reason());
-        }
-    }
-
-    private static void put(ObjectNode o, String key, OptionalInt v) {
-        if (v.isPresent()) {
-            o.put(key, v.getAsInt());
-        } else {
-            o.putNull(key);
         }
     }
 }

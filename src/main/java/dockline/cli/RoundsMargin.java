@@ -89,35 +89,15 @@ final class RoundsMargin {
         ObjectNode o = Json.header(m, Verdict.of(f.guaranteed()));
         o.put("guaranteed", f.guaranteed());
         o.put("goal", f.goal());
-        o.put("startUnits", f.startUnits());
-        o.put("reserveUnits", f.reserveUnits());
-        o.put("capacityUnits", f.capacityUnits());
-        o.put("unitWh", m.scale().unitWh().stripTrailingZeros());
-        o.put("budget", m.map().disturbances().budget());
-        Json.putOptional(o, "highestReserveUnits", f.highestReserveUnits());
-        if (f.highestReserveUnits().isPresent()) {
-            o.put("highestReserveWh", m.scale().toWh(f.highestReserveUnits().getAsInt()));
-        } else {
-            o.putNull("highestReserveWh");
-        }
+        Json.putBattery(o, f.startUnits(), f.reserveUnits(), f.capacityUnits());
+        Json.putUnitAndBudget(o, m);
+        Json.putUnitsAndWh(o, "highestReserve", f.highestReserveUnits(), m.scale());
         if (!f.goal().equals("patrol")) {
             o.put("deadlineTicks", f.deadlineTicks());
             Json.putOptional(o, "tightestDeadlineTicks", f.tightestDeadlineTicks());
-            if (m.timing().hasTick() && f.tightestDeadlineTicks().isPresent()) {
-                o.put("tightestDeadlineSeconds", m.timing().seconds(f.tightestDeadlineTicks().getAsInt())
-                        .stripTrailingZeros());
-            } else {
-                o.putNull("tightestDeadlineSeconds");
-            }
+            RoundsCheck.seconds(o, "tightestDeadlineSeconds", m, f.tightestDeadlineTicks());
         }
-        com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
-        for (RoundsCheck.Change c : f.changes()) {
-            ObjectNode so = arr.addObject();
-            so.put("kind", c.kind());
-            so.put("from", c.from());
-            so.put("to", c.to());
-            so.put("text", c.text());
-        }
+        RoundsCheck.changesJson(o, f.changes());
         o.put("rounding", m.scale().describe());
         return Json.withCaveats(o) + "\n";
     }

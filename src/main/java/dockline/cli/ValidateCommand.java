@@ -26,10 +26,9 @@ import picocli.CommandLine.Parameters;
  * prints one {@code ok} line per valid file with a short summary, or every problem on stderr.
  * Exit code 0 when all files are valid, 2 when any is not.
  */
-@Command(name = "validate", mixinStandardHelpOptions = true,
+@Command(name = "validate",
         description = {"Checks map and mission files and reports every problem as file:line:column: message.",
                 "A mission is checked together with the map it names."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:every file is valid", "2:a file has problems, or bad usage"})
 public final class ValidateCommand extends CommandBase {
 
@@ -41,9 +40,7 @@ public final class ValidateCommand extends CommandBase {
     boolean json;
 
     @Override
-    public Integer call() {
-        PrintWriter out = out();
-        PrintWriter err = err();
+    int run(PrintWriter out, PrintWriter err) {
         boolean allValid = true;
         boolean anyMission = false;
         ObjectNode root = Json.object();

@@ -18,12 +18,11 @@ import picocli.CommandLine.Parameters;
  * when one is given. Returns when the window is closed. The window only reads mission and map
  * files; it writes nothing but its own recent-files list under the user's home.
  */
-@Command(name = "view", mixinStandardHelpOptions = true,
+@Command(name = "view",
         description = {"Opens the desktop window to look at a mission and replay its worst-case runs.",
                 "It shows the map, the charge needed per cell, the policy, the reserve and starting-charge",
                 "controls, and the worst-case replay with its battery chart.",
                 "More missions and maps can be opened from the window."},
-        exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:the window was closed", "2:the file has problems, or there is no display"})
 public final class ViewCommand extends CommandBase {
 
@@ -35,8 +34,7 @@ public final class ViewCommand extends CommandBase {
     boolean json;
 
     @Override
-    public Integer call() throws InterruptedException {
-        PrintWriter err = err();
+    int run(PrintWriter out, PrintWriter err) {
         MissionSource source = new FileMissionSource();
         if (file != null) {
             try {
@@ -49,6 +47,9 @@ public final class ViewCommand extends CommandBase {
             ViewLauncher.show(file, new SolverAnalyzer(), source);
         } catch (ViewLauncher.NoDisplayException e) {
             return finish(false, List.of("dockline view: " + e.getMessage()), err);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while the window was open", e);
         }
         return finish(true, List.of(), err);
     }

@@ -30,6 +30,7 @@ import dockline.solve.charging.FloorSweep;
 import dockline.solve.WinningRegion;
 import dockline.policy.ThresholdPolicy;
 import dockline.util.MonotoneSearch;
+import dockline.util.Progress;
 import dockline.policy.Policy;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
@@ -340,8 +341,7 @@ public final class MissionPlanner {
                 .withSafestPolicy(choice == PolicyChoice.SAFEST)
                 .withRoute(!stored ? ReserveOptions.Route.IMPLICIT : solver == null ? ReserveOptions.Route.PRODUCT
                         : ReserveOptions.Route.stored(solver));
-        PlanOptions.Progress progress = c.options().progress();
-        progress.reached(5, "solving the game" + (highestFloor || choice == PolicyChoice.SAFEST
+        Progress.stage(5, "solving the game" + (highestFloor || choice == PolicyChoice.SAFEST
                 ? ", the highest floor and the safest policy" : ""));
         ReserveAnalysis a = ReserveSolver.analyse(m, c.arena(), c.goal(), ro);
         if (wantReplays && !a.guaranteed() && !highestFloor) {
@@ -350,7 +350,7 @@ public final class MissionPlanner {
         }
         Certification cert;
         ClosedLoop loop = null;
-        progress.reached(55, a.guaranteed() ? "certifying the policy" : "looking for suggestions");
+        Progress.stage(55, a.guaranteed() ? "certifying the policy" : "looking for suggestions");
         if (a.guaranteed()) {
             // never a silent "guaranteed": the policy is re-checked on an independent code path
             ClosedLoop l = CertificateChecker.closedLoop(c.arena(), a.policy().orElseThrow(), a.reserveUnits(),
@@ -368,16 +368,16 @@ public final class MissionPlanner {
                         : OptionalInt.empty());
         Optional<PlanReplays> replays = Optional.empty();
         if (wantReplays) {
-            progress.reached(65, "preparing the replays");
+            Progress.stage(65, "preparing the replays");
             replays = Optional.of(replays(c, a, loop, cert));
         }
         Optional<ChargeNeeded> heat = Optional.empty();
         if (wantHeatMap) {
-            progress.reached(75, "the charge needed on every cell");
+            Progress.stage(75, "the charge needed on every cell");
             heat = Optional.of(ChargeNeeded.computeImplicitly(c.arena(), c.goal(),
                     new ReserveMonitor(a.reserveUnits(), a.capacityUnits(), a.startUnits()), c.product()));
         }
-        progress.reached(100, "planned");
+        Progress.stage(100, "planned");
         return new Plan(m, new Objective.Reserve(), a.verdict(), a.storedProduct() ? Method.STORED_PRODUCT
                 : Method.PRODUCT, reason, a.policy(), choice, a.policyFloorUnits(), cert, a.worstCaseMinimumUnits(),
                 Optional.empty(), a.highestGuaranteedReserveUnits(), a.highestReserveSearched(), OptionalInt.empty(),

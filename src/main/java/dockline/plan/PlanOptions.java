@@ -9,49 +9,28 @@ import java.util.function.BooleanSupplier;
  * The options of {@link MissionPlanner#plan}: the limits every route shares and the route itself
  * (which carries its own settings).
  *
- * @param memoryBudgetBytes refuse games estimated to need more than this; 0: half the JVM's heap
- * @param cancelled         polled by the solvers; when it turns true the plan stops with
- *                          {@link java.util.concurrent.CancellationException}
- * @param route             how the mission is answered
- * @param progress          told how far the plan has got (stage boundaries of the route); never null
+ * @param limits the memory budget (0: half the JVM's heap) and the cancellation flag, polled by the
+ *               solvers (when it turns true the plan stops with
+ *               {@link java.util.concurrent.CancellationException}), as the product games take them
+ * @param route  how the mission is answered
+ *
+ * <p>How far a plan has got is told to the planning thread's progress listener
+ * ({@link dockline.util.Progress#stage}, {@link dockline.util.Progress#listen}), not through these options.
  */
-public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route, Progress progress) {
-
-    /**
-     * Where a plan is: a per cent of its stages done (stage boundaries, not time: the stages differ in
-     * cost from mission to mission) and the stage now running, in words. Called on the planning thread.
-     */
-    @FunctionalInterface
-    public interface Progress {
-        /** Nobody listens. */
-        Progress NONE = (percent, stage) -> { };
-
-        void reached(int percent, String stage);
-    }
-
-    /** Options that nobody watches the progress of. */
-    public PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Route route) {
-        this(memoryBudgetBytes, cancelled, route, Progress.NONE);
-    }
+public record PlanOptions(ProductOptions limits, Route route) {
 
     public PlanOptions {
-        if (memoryBudgetBytes < 0) {
-            throw new IllegalArgumentException("memory budget must not be negative");
-        }
-        if (cancelled == null) {
-            cancelled = () -> false;
+        if (limits == null) {
+            limits = ProductOptions.defaults();
         }
         if (route == null) {
             throw new IllegalArgumentException("a route is needed");
-        }
-        if (progress == null) {
-            progress = Progress.NONE;
         }
     }
 
     /** The given route, the default memory budget, never cancelled. */
     public static PlanOptions of(Route route) {
-        return new PlanOptions(0, () -> false, route);
+        return new PlanOptions(ProductOptions.defaults(), route);
     }
 
     /**
@@ -63,24 +42,27 @@ public record PlanOptions(long memoryBudgetBytes, BooleanSupplier cancelled, Rou
                 : new Route.Auto(PolicyChoice.SAFEST));
     }
 
+    /** Refuse games estimated to need more than {@code bytes} (must not be negative; 0: the default). */
     public PlanOptions withMemoryBudget(long bytes) {
-        return new PlanOptions(bytes, cancelled, route, progress);
+        return new PlanOptions(limits.withMemoryBudget(bytes), route);
     }
 
     public PlanOptions withCancelled(BooleanSupplier flag) {
-        return new PlanOptions(memoryBudgetBytes, flag, route, progress);
+        return new PlanOptions(limits.withCancelled(flag), route);
     }
 
-    public PlanOptions withRoute(Route r) {
-        return new PlanOptions(memoryBudgetBytes, cancelled, r, progress);
+    /** The memory budget asked for, 0 for the default. */
+    public long memoryBudgetBytes() {
+        return limits.memoryBudgetBytes();
     }
 
-    public PlanOptions withProgress(Progress p) {
-        return new PlanOptions(memoryBudgetBytes, cancelled, route, p);
+    /** Polled by the solvers. */
+    public BooleanSupplier cancelled() {
+        return limits.cancelled();
     }
 
     /** The product-game options of these limits. */
     ProductOptions product() {
-        return ProductOptions.defaults().withMemoryBudget(memoryBudgetBytes).withCancelled(cancelled);
+        return limits;
     }
 }

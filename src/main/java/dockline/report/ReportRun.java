@@ -1,5 +1,6 @@
 package dockline.report;
 
+import dockline.util.ProgressListener;
 import java.io.IOException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -23,11 +24,6 @@ import java.util.concurrent.atomic.AtomicInteger;
  * <p>Cost: the sum of the missions' checks divided by the workers, at best.
  */
 public final class ReportRun {
-
-    /** Told when one mission is done (from a worker thread; calls are serialised). */
-    public interface Progress {
-        void done(int finished, int total, MissionResult result, long millis);
-    }
 
     private ReportRun() {
     }
@@ -91,9 +87,12 @@ public final class ReportRun {
      * @param files    the mission files, in report order
      * @param threads  the most missions checked at once (at least 1)
      * @param pictures draws the map pictures
-     * @param progress told as each mission is done, or null
+     * @param progress told, as a stage, each mission that is done (from a worker thread; one call at a time):
+     *                 the per cent of the missions done and e.g. {@code [2/5] missions/a.yaml: guaranteed (812 ms)};
+     *                 or null
      */
-    public static List<MissionResult> check(List<Path> files, int threads, Pictures pictures, Progress progress) {
+    public static List<MissionResult> check(List<Path> files, int threads, Pictures pictures,
+                                            ProgressListener progress) {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1");
         }
@@ -114,8 +113,9 @@ public final class ReportRun {
                     MissionResult r = MissionChecker.check(f, budget, pictures);
                     if (progress != null) {
                         synchronized (lock) {
-                            progress.done(finished.incrementAndGet(), files.size(), r,
-                                    (System.nanoTime() - t0) / 1_000_000L);
+                            int done = finished.incrementAndGet();
+                            progress.stage(done * 100 / files.size(), "[" + done + "/" + files.size() + "] " + r.file()
+                                    + ": " + r.status().word() + " (" + (System.nanoTime() - t0) / 1_000_000L + " ms)");
                         }
                     }
                     return r;

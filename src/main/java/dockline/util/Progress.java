@@ -2,15 +2,16 @@ package dockline.util;
 
 /**
  * Where the core reports progress: a {@link ProgressListener} in force for the current thread
- * ({@link #listen}, for the length of a try-with-resources block), and a {@link Tracker} per phase of
- * work, which turns "done of total" into whole per cents and tells the listener only when the per
- * cent rises. With no listener every tracker is {@link Tracker#NONE}, whose calls do nothing, so work
- * that nobody watches pays one field test per report. Hot loops report every few thousand steps
- * ({@link #EVERY}), never per element.
+ * ({@link #listen}, for the length of a try-with-resources block), the stages of a job
+ * ({@link #stage}: the planner's steps), and a {@link Tracker} per phase of work, which turns "done of
+ * total" into whole per cents and tells the listener only when the per cent rises. With no listener
+ * every tracker is {@link Tracker#NONE}, whose calls do nothing, so work that nobody watches pays one
+ * field test per report. Hot loops report every few thousand steps ({@link #EVERY}), never per element.
  *
- * <p>A listener per thread rather than a parameter on every solver, because the same solvers run
- * under the command line (which prints progress), the window and the tests (which do not), and a
- * phase deep in a route (one solve of the highest-floor search) need not know who asked.
+ * <p>A listener per thread rather than a parameter on every solver, because the same planner and
+ * solvers run under the command line (which prints progress), the window (which shows it) and the tests
+ * (which mostly do not), and a phase deep in a route (one solve of the highest-floor search) need not
+ * know who asked.
  */
 public final class Progress {
 
@@ -33,6 +34,14 @@ public final class Progress {
         return new Scope(before);
     }
 
+    /** Tells this thread's listener, if any, that a stage of its job begins ({@link ProgressListener#stage}). */
+    public static void stage(int percent, String stage) {
+        ProgressListener l = LISTENER.get();
+        if (l != null) {
+            l.stage(percent, stage);
+        }
+    }
+
     /**
      * Begins a phase of {@code total} steps (at least 1 is assumed): the listener hears 0 per cent now.
      * Returns {@link Tracker#NONE} when nobody listens on this thread.
@@ -42,7 +51,7 @@ public final class Progress {
         if (l == null) {
             return Tracker.NONE;
         }
-        l.progress(name, 0);
+        l.phase(name, 0);
         return new Tracker(l, name, Math.max(1, total));
     }
 
@@ -102,7 +111,7 @@ public final class Progress {
         private void report(int p) {
             if (p > last) {
                 last = p;
-                listener.progress(phase, p);
+                listener.phase(phase, p);
             }
         }
     }

@@ -3,7 +3,8 @@
  * growable int array and a long-to-int hash map, with no boxing and no per-entry objects.
  *
  * <p>Also where the core reports progress ({@link dockline.util.Progress}, {@link dockline.util.ProgressListener}):
- * the command line listens and prints it; the core never knows who listens.
+ * one listener type for the stages of a job and the phases inside them; the command line, the window and
+ * the report listen; the core never knows who listens.
  *
  * <p>Entry points: {@link dockline.util.IntArrayList} and {@link dockline.util.LongIntMap}. This
  * package depends on nothing else of dockline, so sharing it keeps the certificate checker

@@ -1,6 +1,7 @@
 package dockline.view;
 
 import dockline.model.Mission;
+import dockline.util.ProgressListener;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -20,17 +21,12 @@ public interface Analyzer {
      */
     ViewData analyze(Mission mission, BooleanSupplier cancelled);
 
-    /** How far a solve has got: a per cent of its stages and the stage now running, in words. */
-    @FunctionalInterface
-    interface Progress {
-        void reached(int percent, String stage);
-    }
-
     /**
-     * Solves the mission and tells {@code progress} how far it has got (from the solving thread).
-     * By default the progress is not told.
+     * Solves the mission and tells {@code progress} how far it has got (from the solving thread): the
+     * stages with the per cent of the solve, and the solver's phases inside them. By default the progress
+     * is not told.
      */
-    default ViewData analyze(Mission mission, BooleanSupplier cancelled, Progress progress) {
+    default ViewData analyze(Mission mission, BooleanSupplier cancelled, ProgressListener progress) {
         return analyze(mission, cancelled);
     }
 }

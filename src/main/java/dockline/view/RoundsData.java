@@ -9,6 +9,7 @@ import dockline.plan.RoundsPlan;
 import dockline.policy.Policy;
 import dockline.replay.RoundsReplay;
 import dockline.solve.ProductOptions;
+import dockline.util.ProgressListener;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -31,17 +32,17 @@ record RoundsData(Mission mission, VerdictSummary verdict, List<ViewReplay> repl
         replays = List.copyOf(replays);
     }
 
-    static RoundsData analyze(Mission m, BooleanSupplier cancelled, Analyzer.Progress progress) {
+    static RoundsData analyze(Mission m, BooleanSupplier cancelled, ProgressListener progress) {
         long budget = ProductOptions.defaults().effectiveMemoryBudget();
         boolean patrol = m.tasks().patrols();
-        progress.reached(5, patrol ? "solving the patrol game and certifying its policy"
+        progress.stage(5, patrol ? "solving the patrol game and certifying its policy"
                 : "solving the deadline game and certifying its policy");
         RoundsPlan plan;
         Optional<RoundsReplay> play;
         try {
             plan = RoundsPlan.of(m, budget, PolicyChoice.SAFEST);
             SolverAnalyzer.stopIf(cancelled);
-            progress.reached(60, patrol ? "finding the lasso: the way in and the lap" : "finding the slowest play");
+            progress.stage(60, patrol ? "finding the lasso: the way in and the lap" : "finding the slowest play");
             play = RoundsPlan.replay(m, budget, PolicyChoice.SAFEST);
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);

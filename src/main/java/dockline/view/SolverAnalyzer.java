@@ -17,6 +17,8 @@ import dockline.replay.Replay;
 import dockline.solve.reserve.ChargeNeeded;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
+import dockline.util.Progress;
+import dockline.util.ProgressListener;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -35,32 +37,35 @@ public final class SolverAnalyzer implements Analyzer {
 
     @Override
     public ViewData analyze(Mission mission, BooleanSupplier cancelled) {
-        return analyze(mission, cancelled, (p, s) -> { });
+        return analyze(mission, cancelled, ProgressListener.NONE);
     }
 
     /**
-     * Plans the mission and adapts the plan. Progress: the plan's own stages scaled to 0-85 %, then the
-     * worst case (85 %) and the run with no disturbance (93 %); a patrol or deadline mission reports
-     * its two stages (solve and certify, then its replay).
+     * Plans the mission and adapts the plan. Progress: the plan's own stages scaled to 0-85 %, with the
+     * solver's phases inside them, then the worst case (85 %) and the run with no disturbance (93 %); a
+     * patrol or deadline mission reports its two stages (solve and certify, then its replay).
      */
     @Override
-    public ViewData analyze(Mission mission, BooleanSupplier cancelled, Progress progress) {
+    public ViewData analyze(Mission mission, BooleanSupplier cancelled, ProgressListener progress) {
         if (mission.beyondOneTrip()) {
             return RoundsData.analyze(mission, cancelled, progress);
         }
         Plan plan;
-        // the plan's stages move the bar; the solver's own phases (util.Progress) say inside the stage how far
-        // it is, without moving the bar back when a new phase starts at 0 %
-        int[] stageAt = {0};
-        String[] stageName = {""};
-        try (dockline.util.Progress.Scope phases = dockline.util.Progress.listen((phase, pct) ->
-                progress.reached(stageAt[0], stageName[0] + " (" + phase + ": " + pct + " %)"))) {
+        // the core tells this thread's listener: the plan's stages take the first 85 % of the bar (the replays
+        // below the rest), the solver's phases pass as they are
+        try (Progress.Scope scope = Progress.listen(new ProgressListener() {
+            @Override
+            public void stage(int percent, String stage) {
+                progress.stage(percent * 85 / 100, stage);
+            }
+
+            @Override
+            public void phase(String phase, int percent) {
+                progress.phase(phase, percent);
+            }
+        })) {
             plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
-                    true, true)).withCancelled(cancelled).withProgress((p, stage) -> {
-                        stageAt[0] = p * 85 / 100;
-                        stageName[0] = stage;
-                        progress.reached(stageAt[0], stage);
-                    }));
+                    true, true)).withCancelled(cancelled));
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
@@ -75,15 +80,15 @@ public final class SolverAnalyzer implements Analyzer {
      * the worst case or counterexample, and the nominal run when there is a policy. Used by the report's pictures.
      */
     static ViewData of(Plan plan) {
-        return of(plan, (percent, stage) -> { });
+        return of(plan, ProgressListener.NONE);
     }
 
-    private static ViewData of(Plan plan, Progress progress) {
+    private static ViewData of(Plan plan, ProgressListener progress) {
         Mission mission = plan.mission();
         PlanReplays mr = plan.replays().orElseThrow();
         List<ViewReplay> replays = new ArrayList<>();
         List<String> problems = new ArrayList<>();
-        progress.reached(85, plan.guaranteed() ? "replaying the worst case" : "replaying the counterexample");
+        progress.stage(85, plan.guaranteed() ? "replaying the worst case" : "replaying the counterexample");
         try {
             Replay w = mr.worstCase();
             replays.add(ReplayAdapter.of(mission, w, plan.guaranteed() ? ViewReplay.Kind.WORST_CASE
@@ -92,7 +97,7 @@ public final class SolverAnalyzer implements Analyzer {
             problems.add(e.getMessage());
         }
         if (mr.policy().isPresent()) {
-            progress.reached(93, "replaying the run with no disturbance");
+            progress.stage(93, "replaying the run with no disturbance");
             try {
                 Replay n = mr.nominal();
                 replays.add(ReplayAdapter.of(mission, n, ViewReplay.Kind.NOMINAL, title(mission, n, "no disturbance")));

@@ -9,6 +9,7 @@ import dockline.plan.PlanOptions;
 import dockline.plan.PolicyChoice;
 import dockline.plan.Route;
 import dockline.util.Progress;
+import dockline.util.ProgressListener;
 import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -45,14 +46,35 @@ class ProgressLineTest {
     private record Event(String phase, int percent) {
     }
 
+    /** A listener that keeps the phases in {@code phases} and the stages in {@code stages}. */
+    private static ProgressListener recording(List<Event> phases, List<Event> stages) {
+        return new ProgressListener() {
+            @Override
+            public void phase(String phase, int percent) {
+                phases.add(new Event(phase, percent));
+            }
+
+            @Override
+            public void stage(int percent, String stage) {
+                stages.add(new Event(stage, percent));
+            }
+        };
+    }
+
     @Test
     void theCoreReportsPhasesWhosePerCentOnlyRises() throws Exception {
         Mission m = MissionLoader.load(Path.of("missions/night-round.yaml"));
         for (var route : List.of(new Route.Auto(PolicyChoice.SAFEST), Route.Product.of(PolicyChoice.SAFEST),
                 new Route.Stored(PolicyChoice.SAFEST, null))) {
             List<Event> events = new ArrayList<>();
-            try (Progress.Scope s = Progress.listen((phase, p) -> events.add(new Event(phase, p)))) {
+            List<Event> stages = new ArrayList<>();
+            try (Progress.Scope s = Progress.listen(recording(events, stages))) {
                 MissionPlanner.plan(m, PlanOptions.of(route));
+            }
+            // the product routes' stages reach the same listener: their per cent of the plan only rises, to 100
+            if (!(route instanceof Route.Auto)) {
+                assertThat(stages).as(route.toString()).isNotEmpty();
+                assertThat(stages).extracting(Event::percent).isSorted().endsWith(100);
             }
             assertThat(events).as(route.toString()).isNotEmpty();
             assertThat(events.get(0).percent()).isZero();
@@ -81,7 +103,7 @@ class ProgressLineTest {
     @Test
     void aTrackerReportsWholePerCentsRisingOnly() {
         List<Event> events = new ArrayList<>();
-        try (Progress.Scope s = Progress.listen((phase, p) -> events.add(new Event(phase, p)))) {
+        try (Progress.Scope s = Progress.listen(recording(events, new ArrayList<>()))) {
             Progress.Tracker t = Progress.phase("counting", 1000);
             t.at(5);   // 0 %: not again
             t.at(10);  // 1 %
@@ -104,11 +126,11 @@ class ProgressLineTest {
         StringWriter w = new StringWriter();
         AtomicLong now = new AtomicLong(1_000_000_000L);
         ProgressLine line = new ProgressLine(w, now::get);
-        line.progress("solving the game at floor 3 units", 0);
+        line.phase("solving the game at floor 3 units", 0);
         now.addAndGet(100_000_000L);
-        line.progress("solving the game at floor 3 units", 10); // 100 ms later: dropped
+        line.phase("solving the game at floor 3 units", 10); // 100 ms later: dropped
         now.addAndGet(200_000_000L);
-        line.progress("solving", 20); // 300 ms after the first: shown, padded over the longer line
+        line.phase("solving", 20); // 300 ms after the first: shown, padded over the longer line
         String first = "dockline: solving the game at floor 3 units  0 %  0.0 s";
         String second = "dockline: solving  20 %  0.3 s";
         assertThat(w.toString()).isEqualTo("\r" + first + "\r" + second + " ".repeat(first.length() - second.length()));

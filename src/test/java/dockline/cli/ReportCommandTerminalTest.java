@@ -10,7 +10,8 @@ class ReportCommandTerminalTest {
     @Test
     void stderrIsNotATerminal_underTheTestRunner() {
         // surefire redirects the forked JVM's standard error to a pipe
-        assertThat(ReportCommand.stderrIsTerminal()).isFalse();
+        assertThat(ProgressLine.stderrIsTerminal()).isFalse();
+        assertThat(ProgressLine.wanted(false, false)).isFalse();
     }
 
     @Test

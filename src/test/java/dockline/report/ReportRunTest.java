@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.model.Mission;
 import dockline.plan.Plan;
 import dockline.replay.Replay;
+import dockline.util.ProgressListener;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -59,9 +60,22 @@ class ReportRunTest {
         }
         Counting two = new Counting();
         List<String> order = new ArrayList<>();
-        List<MissionResult> parallel = ReportRun.check(files, 2, two, (done, total, r, ms) -> order.add(r.mission()));
+        List<Integer> percents = new ArrayList<>();
+        List<MissionResult> parallel = ReportRun.check(files, 2, two, new ProgressListener() {
+            @Override
+            public void stage(int percent, String missionDone) {
+                order.add(missionDone);
+                percents.add(percent);
+            }
+        });
         assertThat(two.most.get()).isBetween(1, 2);
-        assertThat(order).hasSize(6).containsExactlyInAnyOrder("run-0", "run-1", "run-2", "run-3", "run-4", "run-5");
+        assertThat(order).hasSize(6);
+        for (int i = 0; i < 6; i++) {
+            assertThat(order.get(i)).as("one stage per mission done, counted in order").startsWith("[" + (i + 1) + "/6] ");
+            String file = files.get(i).toString();
+            assertThat(order).as("every mission once").filteredOn(w -> w.contains(file + ": ")).hasSize(1);
+        }
+        assertThat(percents).isSorted().endsWith(100);
         List<MissionResult> serial = ReportRun.check(files, 1, new Counting(), null);
         for (int i = 0; i < files.size(); i++) {
             assertThat(parallel.get(i).file()).isEqualTo(files.get(i));

@@ -6,6 +6,7 @@ import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
+import dockline.util.ProgressListener;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -29,8 +30,8 @@ final class FakeAnalyzer implements Analyzer {
 
     /** Reports 40 % ("halfway through the stand-in"), then works as {@link #analyze(Mission, BooleanSupplier)}. */
     @Override
-    public ViewData analyze(Mission m, BooleanSupplier cancelled, Progress progress) {
-        progress.reached(40, "halfway through the stand-in");
+    public ViewData analyze(Mission m, BooleanSupplier cancelled, ProgressListener progress) {
+        progress.stage(40, "halfway through the stand-in");
         return analyze(m, cancelled);
     }
 

@@ -11,7 +11,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The window's progress while it solves: the bar only rises (the plan's stages), and the solver's own
- * phases show in the words with their per cent (the core's util.Progress), so a long solve is seen to move.
+ * phases show in the words with their per cent (one util.ProgressListener for both), so a long solve is seen
+ * to move.
  */
 class SolverAnalyzerProgressTest {
 
@@ -20,10 +21,10 @@ class SolverAnalyzerProgressTest {
         Mission m = MissionLoader.load(Path.of("missions/night-round.yaml"));
         List<Integer> percents = new ArrayList<>();
         List<String> words = new ArrayList<>();
-        new SolverAnalyzer().analyze(m, () -> false, (p, stage) -> {
+        new SolverAnalyzer().analyze(m, () -> false, new SolveTask.Status((w, p) -> {
             percents.add(p);
-            words.add(stage);
-        });
+            words.add(w);
+        }));
         for (int i = 1; i < percents.size(); i++) {
             assertThat(percents.get(i)).as("step %d of %s", i, words).isGreaterThanOrEqualTo(percents.get(i - 1));
         }
