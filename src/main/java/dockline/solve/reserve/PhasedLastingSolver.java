@@ -67,10 +67,15 @@ public final class PhasedLastingSolver {
         }
         BooleanSupplier cancelled = po.cancelled();
         int rounds = 0;
+        ImplicitReserveGame previous = null;
         while (true) {
             rounds++;
             Arena a = ArenaCompiler.compileWithin(mission, st, keep);
             ImplicitReserveGame game = ReserveSolver.budgeted(new ImplicitReserveGame(a, goal, monitor, true), a, po);
+            if (previous != null) {
+                game.carryFrom(previous);
+            }
+            previous = null;
             ImplicitReserveGame.Strategy s = game.solveWithStrategy(cancelled);
             int kept = 0;
             for (boolean k : keep) {
@@ -95,6 +100,7 @@ public final class PhasedLastingSolver {
             if (!any) {
                 return new Result(true, a, game, s, rounds, kept, st.count());
             }
+            previous = game;
         }
     }
 
