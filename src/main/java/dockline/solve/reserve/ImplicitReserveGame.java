@@ -186,6 +186,8 @@ public final class ImplicitReserveGame {
             throw new IllegalArgumentException("only a strengthened game whose weakened fixpoint was kept carries over");
         }
         this.previous = prev;
+        // its counters stay live until they are copied, besides this game's: the worklist's budget counts them
+        this.fixedBytes += prev.weakened.length();
     }
 
     private static int bits(int n) {
@@ -421,6 +423,10 @@ public final class ImplicitReserveGame {
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
         // the vertices carried over from the previous round with their counters (none without carryFrom)
         final boolean[] carried = previous != null && flags == null ? carry(count) : null;
+        if (previous != null) {
+            fixedBytes -= previous.weakened.length(); // copied: they may go
+            previous = null;
+        }
         // the targets: robot triples completing the mission (any level); the carried ones are won and expanded
         int[] targets = Completions.of(arena, goal);
         for (int i = 0; i < targets.length; i += 2) {
@@ -546,6 +552,7 @@ public final class ImplicitReserveGame {
             seeded = true;
             if (flags == null) {
                 weakened = copyOf(count); // the weakened fixpoint, for the next round (carryFrom)
+                fixedBytes += weakened.length(); // and it takes from the worklist's budget
             }
             for (int d = rc; d < arena.vertexCount(); d++) {
                 int lo = leftOutOf[d - rc];
@@ -581,7 +588,6 @@ public final class ImplicitReserveGame {
             }
         }
         progress.done();
-        previous = null; // its counters are copied; let them go
         if (flagsOut != null) {
             flagsOut[0] = flags;
         }
