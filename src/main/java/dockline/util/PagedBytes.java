@@ -52,6 +52,18 @@ public final class PagedBytes {
         pages[(int) (i >>> SHIFT)][(int) (i & MASK)] = b;
     }
 
+    /** Copies {@code n} bytes of {@code src} from index {@code from} into this array at {@code to}, page by page. O(n). */
+    public void copyFrom(PagedBytes src, long from, long to, long n) {
+        while (n > 0) {
+            int chunk = (int) Math.min(n, Math.min((1L << SHIFT) - (from & MASK), (1L << SHIFT) - (to & MASK)));
+            System.arraycopy(src.pages[(int) (from >>> SHIFT)], (int) (from & MASK), pages[(int) (to >>> SHIFT)],
+                    (int) (to & MASK), chunk);
+            from += chunk;
+            to += chunk;
+            n -= chunk;
+        }
+    }
+
     /** Bit {@code i} (of the {@code 8 · length} bits). */
     public boolean getBit(long i) {
         return (get(i >>> 3) & (1 << (i & 7))) != 0;

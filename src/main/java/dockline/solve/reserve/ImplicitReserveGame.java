@@ -14,6 +14,7 @@ import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
 import dockline.util.PagedBytes;
 import dockline.util.Progress;
+import java.util.Arrays;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -81,6 +82,11 @@ public final class ImplicitReserveGame {
     // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
     private long budgetBytes = Long.MAX_VALUE;
     private long fixedBytes = 0;
+    // with leftOutWins, the counters at the weakened game's fixpoint (the first stage of run, exhausted
+    // without winning the start), which the next round of PhasedLastingSolver starts from (carryFrom)
+    private PagedBytes weakened;
+    // the previous round's game whose weakened fixpoint this solve starts from, or null (see carryFrom)
+    private ImplicitReserveGame previous;
 
     /** What a solve found. */
     public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
@@ -164,6 +170,24 @@ public final class ImplicitReserveGame {
     void limitWorklist(long fixedBytes, long totalBudgetBytes) {
         this.fixedBytes = Math.max(0, fixedBytes);
         this.budgetBytes = totalBudgetBytes;
+    }
+
+    /**
+     * Makes the next solve start from the weakened fixpoint of {@code prev}, the game of the previous round of
+     * {@link PhasedLastingSolver} on the same mission with a subset of this arena's phases kept: adding phases
+     * turns left-out closures into real outcomes and adds vertices, so every triple the weakened game of
+     * {@code prev} won is won here too, with the same choice (the kept phases' moves are the same, in the same
+     * order). Its counters are copied over and the attractor continues from the new phases' completions and
+     * from the new actions whose outcomes lead into won triples of the kept phases, instead of winning the
+     * kept phases again.
+     */
+    void carryFrom(ImplicitReserveGame prev) {
+        if (!leftOutWins || prev.weakened == null || prev.gBits != gBits || prev.lBits != lBits) {
+            throw new IllegalArgumentException("only a strengthened game whose weakened fixpoint was kept carries over");
+        }
+        this.previous = prev;
+        // its counters stay live until they are copied, besides this game's: the worklist's budget counts them
+        this.fixedBytes += prev.weakened.length();
     }
 
     private static int bits(int n) {
@@ -397,9 +421,18 @@ public final class ImplicitReserveGame {
         final Worklist wl = new Worklist();
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
-        // the targets: robot triples completing the mission (any level)
+        // the vertices carried over from the previous round with their counters (none without carryFrom)
+        final boolean[] carried = previous != null && flags == null ? carry(count) : null;
+        if (previous != null) {
+            fixedBytes -= previous.weakened.length(); // copied: they may go
+            previous = null;
+        }
+        // the targets: robot triples completing the mission (any level); the carried ones are won and expanded
         int[] targets = Completions.of(arena, goal);
         for (int i = 0; i < targets.length; i += 2) {
+            if (carried != null && carried[targets[i]]) {
+                continue;
+            }
             long base = id(targets[i], targets[i + 1], 0);
             for (int s = 0; s < levels; s++) {
                 long t = base + s;
@@ -423,8 +456,19 @@ public final class ImplicitReserveGame {
         // (the least fixpoint does not depend on the order), and a recorded choice relies on a left-out
         // closure only where the robot cannot win without one (fewer phases for PhasedLastingSolver to add).
         boolean seeded = leftOutOf == null;
+        boolean intoCarried = carried == null;
         expand:
         while (true) {
+            if (!intoCarried) {
+                intoCarried = true;
+                long[] tally = {0};
+                boolean hit = countIntoCarried(count, wl, carried, start, stopAtStart, tally);
+                wonCount += tally[0];
+                if (hit) {
+                    stopped = true;
+                    break expand;
+                }
+            }
             while (!wl.isEmpty()) {
                 long p = wl.pop(fifo);
                 if ((++expanded & (Progress.EVERY - 1)) == 0) {
@@ -470,14 +514,7 @@ public final class ImplicitReserveGame {
                             if (need > 1) {
                                 // an action the disturbance can spoil: won once all its outcomes are
                                 long q = base + s;
-                                int qs = ((int) q & 1) << 2;
-                                int cell8 = count.get(q >>> 1);
-                                int c = (cell8 >>> qs) & 15;
-                                if (c >= need) {
-                                    continue;
-                                }
-                                count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
-                                if (c + 1 < need) {
+                                if (!wonByOneMore(count, q, need)) {
                                     continue;
                                 }
                                 if (flags != null) {
@@ -513,6 +550,10 @@ public final class ImplicitReserveGame {
                 break;
             }
             seeded = true;
+            if (flags == null) {
+                weakened = copyOf(count); // the weakened fixpoint, for the next round (carryFrom)
+                fixedBytes += weakened.length(); // and it takes from the worklist's budget
+            }
             for (int d = rc; d < arena.vertexCount(); d++) {
                 int lo = leftOutOf[d - rc];
                 if (lo == 0) {
@@ -555,6 +596,130 @@ public final class ImplicitReserveGame {
         }
         boolean won = start == -2 || start >= 0 && (stopped || ((count.get(start >>> 1) >>> ((start & 1) << 2)) & 15) > 0);
         return new Result(won, wonCount + wl.pushed(), edges, stopped, vertexCount);
+    }
+
+    /**
+     * Copies the weakened fixpoint of {@link #previous} into {@code count} (per arena vertex of the previous
+     * arena, the block of its goal states and levels, which is contiguous in both numberings) and returns
+     * which of this arena's vertices were there. O(previous slots).
+     */
+    private boolean[] carry(PagedBytes count) {
+        ImplicitReserveGame old = previous;
+        Arena oa = old.arena;
+        int orc = oa.robotCount();
+        int rc = arena.robotCount();
+        // robot vertices are numbered cell slot x kept states + the state's place among the kept ones
+        int oldPer = orc / Math.max(1, oa.freeCellCount());
+        int newPer = rc / Math.max(1, arena.freeCellCount());
+        int[] place = new int[arena.states().count()];
+        Arrays.fill(place, -1);
+        for (int v = 0; v < newPer; v++) {
+            place[arena.state(v)] = v;
+        }
+        int[] map = new int[oa.vertexCount()];
+        boolean[] carried = new boolean[arena.vertexCount()];
+        for (int v = 0; v < oa.vertexCount(); v++) {
+            int nv;
+            if (v < orc) {
+                int at = place[oa.state(v)];
+                nv = at < 0 ? -1 : v / oldPer * newPer + at;
+            } else {
+                int no = map[old.ownerOf[v - orc]];
+                nv = arena.target(arena.outBegin(no) + old.actionIndex[v - orc]);
+            }
+            if (nv < 0 || arena.cell(nv) != oa.cell(v) || arena.state(nv) != oa.state(v) || (v < orc) != (nv < rc)) {
+                throw new IllegalStateException("the previous round's vertex " + v + " is not in this arena");
+            }
+            map[v] = nv;
+            carried[nv] = true;
+        }
+        int b = gBits + lBits;
+        PagedBytes from = old.weakened;
+        for (int v = 0; v < map.length; v++) {
+            if (b == 0) {
+                // one nibble per vertex: two vertices share a byte
+                int nib = (from.get(v >>> 1) >>> ((v & 1) << 2)) & 15;
+                int t = map[v];
+                count.set(t >>> 1, (byte) (count.get(t >>> 1) | (nib << ((t & 1) << 2))));
+                continue;
+            }
+            count.copyFrom(from, (long) v << (b - 1), (long) map[v] << (b - 1), 1L << (b - 1));
+        }
+        return carried;
+    }
+
+    /**
+     * After {@link #carry}: the outcomes of this arena's new actions into won triples of the carried vertices,
+     * counted forward (those triples were expanded in an earlier round, before these actions existed), with
+     * the owners so won joining the worklist. {@code tally[0]} counts the disturbance triples won. Returns
+     * whether the start was won (when {@code stopAtStart}). O(new actions x outcomes x goal states x levels).
+     */
+    private boolean countIntoCarried(PagedBytes count, Worklist wl, boolean[] carried, long start, boolean stopAtStart,
+                                     long[] tally) {
+        int rc = arena.robotCount();
+        for (int d = rc; d < arena.vertexCount(); d++) {
+            if (carried[d]) {
+                continue;
+            }
+            int need = arena.outEnd(d) - arena.outBegin(d);
+            int choice = actionIndex[d - rc] + 1;
+            int owner = ownerOf[d - rc];
+            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+                int x = arena.target(e);
+                int w = arena.weight(e);
+                if (!carried[x] || w == ArenaCompiler.LEFT_OUT) {
+                    continue;
+                }
+                long zones = arena.cellZones(arena.cell(x));
+                for (int g = 0; g < gc; g++) {
+                    int g2 = goal.step(g, zones);
+                    if (g2 == GoalAutomaton.REJECT) {
+                        continue;
+                    }
+                    for (int s = 0; s < levels; s++) {
+                        int s2 = monitor.step(s, w);
+                        if (s2 == Monitor.REJECT) {
+                            continue;
+                        }
+                        long t = id(x, g2, s2);
+                        if (((count.get(t >>> 1) >>> ((t & 1) << 2)) & 15) == 0) {
+                            continue;
+                        }
+                        if (need > 1 && !wonByOneMore(count, id(d, g, s), need)) {
+                            continue;
+                        }
+                        tally[0]++;
+                        long o = id(owner, g, s);
+                        if (winOwner(count, wl, null, o, choice) && o == start && stopAtStart) {
+                            return true;
+                        }
+                    }
+                }
+            }
+        }
+        return false;
+    }
+
+    /**
+     * One more outcome of disturbance triple q (out-degree {@code need}) is known to be won: counts it unless q
+     * is won already, and returns whether that made q won (all its outcomes won).
+     */
+    private static boolean wonByOneMore(PagedBytes count, long q, int need) {
+        int qs = ((int) q & 1) << 2;
+        int cell8 = count.get(q >>> 1);
+        int c = (cell8 >>> qs) & 15;
+        if (c >= need) {
+            return false;
+        }
+        count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
+        return c + 1 == need;
+    }
+
+    /** A copy of the counters (the weakened fixpoint kept for the next round). */
+    private static PagedBytes copyOf(PagedBytes count) {
+        PagedBytes out = new PagedBytes(count.length());
+        out.copyFrom(count, 0, 0, count.length());
+        return out;
     }
 
     /**
