@@ -14,7 +14,6 @@ import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.ProductGame;
 import dockline.util.PagedBytes;
 import dockline.util.Progress;
-import java.util.Arrays;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
@@ -57,8 +56,8 @@ public final class ImplicitReserveGame {
     final Arena arena;
     final GoalAutomaton goal;
     final ReserveMonitor monitor;
-    private final int gc;
-    private final int levels;
+    final int gc;
+    final int levels;
     final int gBits;
     final int lBits;
     final long slotCount;
@@ -71,22 +70,22 @@ public final class ImplicitReserveGame {
     private final byte[] revNeed;
     // per disturbance (action) vertex x, the index of x among its owner's out-edges: the robot's choice
     // recorded in the owner's counter (see run)
-    private final byte[] actionIndex;
+    final byte[] actionIndex;
     // per disturbance (action) vertex x, its owner: the robot vertex whose action it is
-    private final int[] ownerOf;
+    final int[] ownerOf;
     // whether an outcome into a left-out closure phase (weight ArenaCompiler.LEFT_OUT) counts as won
     // for the robot instead of lost: the strengthened game of PhasedLastingSolver
     final boolean leftOutWins;
     // with leftOutWins, per disturbance (action) vertex x, how many of its outcomes are left-out closures
     private final byte[] leftOutOf;
     // the memory budget and the bytes taken besides the worklist (Long.MAX_VALUE, 0: no limit); see limitWorklist
-    private long budgetBytes = Long.MAX_VALUE;
-    private long fixedBytes = 0;
+    long budgetBytes = Long.MAX_VALUE;
+    long fixedBytes = 0;
     // with leftOutWins, the counters at the weakened game's fixpoint (the first stage of run, exhausted
     // without winning the start), which the next round of PhasedLastingSolver starts from (carryFrom)
-    private PagedBytes weakened;
+    PagedBytes weakened;
     // the previous round's game whose weakened fixpoint this solve starts from, or null (see carryFrom)
-    private ImplicitReserveGame previous;
+    ImplicitReserveGame previous;
 
     /** What a solve found. */
     public record Result(boolean startWon, long wonVertices, long edgesScanned, boolean stoppedEarly,
@@ -418,15 +417,10 @@ public final class ImplicitReserveGame {
         // the worklist holds won robot triples not yet expanded (a won disturbance triple is handled on the
         // spot: its owner is won at once). Any order reaches the same least fixpoint; last-in first-out
         // keeps the search near the counters it just touched, first-in first-out ranks the triples.
-        final Worklist wl = new Worklist();
+        final Worklist wl = new Worklist(this);
         long wonCount = 0;
         final boolean[] flags = flagsOut != null ? new boolean[Math.toIntExact(n)] : null;
-        // the vertices carried over from the previous round with their counters (none without carryFrom)
-        final boolean[] carried = previous != null && flags == null ? carry(count) : null;
-        if (previous != null) {
-            fixedBytes -= previous.weakened.length(); // copied: they may go
-            previous = null;
-        }
+        final boolean[] carried = CarriedRound.take(this, count, flags == null);
         // the targets: robot triples completing the mission (any level); the carried ones are won and expanded
         int[] targets = Completions.of(arena, goal);
         for (int i = 0; i < targets.length; i += 2) {
@@ -462,7 +456,7 @@ public final class ImplicitReserveGame {
             if (!intoCarried) {
                 intoCarried = true;
                 long[] tally = {0};
-                boolean hit = countIntoCarried(count, wl, carried, start, stopAtStart, tally);
+                boolean hit = CarriedRound.countIntoCarried(this, count, wl, carried, start, stopAtStart, tally);
                 wonCount += tally[0];
                 if (hit) {
                     stopped = true;
@@ -514,7 +508,7 @@ public final class ImplicitReserveGame {
                             if (need > 1) {
                                 // an action the disturbance can spoil: won once all its outcomes are
                                 long q = base + s;
-                                if (!wonByOneMore(count, q, need)) {
+                                if (!NibbleCounters.wonByOneMore(count, q, need)) {
                                     continue;
                                 }
                                 if (flags != null) {
@@ -532,7 +526,7 @@ public final class ImplicitReserveGame {
                             wonCount++;
                             edges++;
                             long o = ob + s;
-                            if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
+                            if (NibbleCounters.winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
                                 stopped = true;
                                 break expand;
                             }
@@ -551,7 +545,7 @@ public final class ImplicitReserveGame {
             }
             seeded = true;
             if (flags == null) {
-                weakened = copyOf(count); // the weakened fixpoint, for the next round (carryFrom)
+                weakened = NibbleCounters.copyOf(count); // the weakened fixpoint, for the next round (carryFrom)
                 fixedBytes += weakened.length(); // and it takes from the worklist's budget
             }
             for (int d = rc; d < arena.vertexCount(); d++) {
@@ -579,7 +573,7 @@ public final class ImplicitReserveGame {
                             flags[(int) q] = true;
                         }
                         long o = ob + s;
-                        if (winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
+                        if (NibbleCounters.winOwner(count, wl, flags, o, choice) && o == start && stopAtStart) {
                             stopped = true;
                             break expand;
                         }
@@ -596,203 +590,6 @@ public final class ImplicitReserveGame {
         }
         boolean won = start == -2 || start >= 0 && (stopped || ((count.get(start >>> 1) >>> ((start & 1) << 2)) & 15) > 0);
         return new Result(won, wonCount + wl.pushed(), edges, stopped, vertexCount);
-    }
-
-    /**
-     * Copies the weakened fixpoint of {@link #previous} into {@code count} (per arena vertex of the previous
-     * arena, the block of its goal states and levels, which is contiguous in both numberings) and returns
-     * which of this arena's vertices were there. O(previous slots).
-     */
-    private boolean[] carry(PagedBytes count) {
-        ImplicitReserveGame old = previous;
-        Arena oa = old.arena;
-        int orc = oa.robotCount();
-        int rc = arena.robotCount();
-        // robot vertices are numbered cell slot x kept states + the state's place among the kept ones
-        int oldPer = orc / Math.max(1, oa.freeCellCount());
-        int newPer = rc / Math.max(1, arena.freeCellCount());
-        int[] place = new int[arena.states().count()];
-        Arrays.fill(place, -1);
-        for (int v = 0; v < newPer; v++) {
-            place[arena.state(v)] = v;
-        }
-        int[] map = new int[oa.vertexCount()];
-        boolean[] carried = new boolean[arena.vertexCount()];
-        for (int v = 0; v < oa.vertexCount(); v++) {
-            int nv;
-            if (v < orc) {
-                int at = place[oa.state(v)];
-                nv = at < 0 ? -1 : v / oldPer * newPer + at;
-            } else {
-                int no = map[old.ownerOf[v - orc]];
-                nv = arena.target(arena.outBegin(no) + old.actionIndex[v - orc]);
-            }
-            if (nv < 0 || arena.cell(nv) != oa.cell(v) || arena.state(nv) != oa.state(v) || (v < orc) != (nv < rc)) {
-                throw new IllegalStateException("the previous round's vertex " + v + " is not in this arena");
-            }
-            map[v] = nv;
-            carried[nv] = true;
-        }
-        int b = gBits + lBits;
-        PagedBytes from = old.weakened;
-        for (int v = 0; v < map.length; v++) {
-            if (b == 0) {
-                // one nibble per vertex: two vertices share a byte
-                int nib = (from.get(v >>> 1) >>> ((v & 1) << 2)) & 15;
-                int t = map[v];
-                count.set(t >>> 1, (byte) (count.get(t >>> 1) | (nib << ((t & 1) << 2))));
-                continue;
-            }
-            count.copyFrom(from, (long) v << (b - 1), (long) map[v] << (b - 1), 1L << (b - 1));
-        }
-        return carried;
-    }
-
-    /**
-     * After {@link #carry}: the outcomes of this arena's new actions into won triples of the carried vertices,
-     * counted forward (those triples were expanded in an earlier round, before these actions existed), with
-     * the owners so won joining the worklist. {@code tally[0]} counts the disturbance triples won. Returns
-     * whether the start was won (when {@code stopAtStart}). O(new actions x outcomes x goal states x levels).
-     */
-    private boolean countIntoCarried(PagedBytes count, Worklist wl, boolean[] carried, long start, boolean stopAtStart,
-                                     long[] tally) {
-        int rc = arena.robotCount();
-        for (int d = rc; d < arena.vertexCount(); d++) {
-            if (carried[d]) {
-                continue;
-            }
-            int need = arena.outEnd(d) - arena.outBegin(d);
-            int choice = actionIndex[d - rc] + 1;
-            int owner = ownerOf[d - rc];
-            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
-                int x = arena.target(e);
-                int w = arena.weight(e);
-                if (!carried[x] || w == ArenaCompiler.LEFT_OUT) {
-                    continue;
-                }
-                long zones = arena.cellZones(arena.cell(x));
-                for (int g = 0; g < gc; g++) {
-                    int g2 = goal.step(g, zones);
-                    if (g2 == GoalAutomaton.REJECT) {
-                        continue;
-                    }
-                    for (int s = 0; s < levels; s++) {
-                        int s2 = monitor.step(s, w);
-                        if (s2 == Monitor.REJECT) {
-                            continue;
-                        }
-                        long t = id(x, g2, s2);
-                        if (((count.get(t >>> 1) >>> ((t & 1) << 2)) & 15) == 0) {
-                            continue;
-                        }
-                        if (need > 1 && !wonByOneMore(count, id(d, g, s), need)) {
-                            continue;
-                        }
-                        tally[0]++;
-                        long o = id(owner, g, s);
-                        if (winOwner(count, wl, null, o, choice) && o == start && stopAtStart) {
-                            return true;
-                        }
-                    }
-                }
-            }
-        }
-        return false;
-    }
-
-    /**
-     * One more outcome of disturbance triple q (out-degree {@code need}) is known to be won: counts it unless q
-     * is won already, and returns whether that made q won (all its outcomes won).
-     */
-    private static boolean wonByOneMore(PagedBytes count, long q, int need) {
-        int qs = ((int) q & 1) << 2;
-        int cell8 = count.get(q >>> 1);
-        int c = (cell8 >>> qs) & 15;
-        if (c >= need) {
-            return false;
-        }
-        count.set(q >>> 1, (byte) (cell8 + (1 << qs)));
-        return c + 1 == need;
-    }
-
-    /** A copy of the counters (the weakened fixpoint kept for the next round). */
-    private static PagedBytes copyOf(PagedBytes count) {
-        PagedBytes out = new PagedBytes(count.length());
-        out.copyFrom(count, 0, 0, count.length());
-        return out;
-    }
-
-    /**
-     * Robot triple o is won by the action of index {@code choice - 1} unless it is won already: its counter
-     * records the choice, and it joins the worklist (and the flags, when kept). Returns whether it was new.
-     */
-    private static boolean winOwner(PagedBytes count, Worklist wl, boolean[] flags, long o, int choice) {
-        int os = ((int) o & 1) << 2;
-        int o8 = count.get(o >>> 1);
-        if (((o8 >>> os) & 15) != 0) {
-            return false;
-        }
-        count.set(o >>> 1, (byte) (o8 | (choice << os)));
-        wl.push(o);
-        if (flags != null) {
-            flags[(int) o] = true;
-        }
-        return true;
-    }
-
-    /**
-     * The won robot triples not yet expanded: one circular buffer serves as stack or queue (pushes at the
-     * tail, pops at the tail for last-in first-out or at the head for first-in first-out); its length is a
-     * power of two so indices wrap by a mask (int overflow of head and tail is harmless for the same reason),
-     * and it grows within the memory budget of {@link #limitWorklist}.
-     */
-    private final class Worklist {
-        private long[] buf = new long[1 << 12];
-        private int mask = buf.length - 1;
-        private int head;
-        private int tail;
-        private long pushed;
-
-        boolean isEmpty() {
-            return head == tail;
-        }
-
-        long pop(boolean fifo) {
-            return fifo ? buf[(head++) & mask] : buf[(--tail) & mask];
-        }
-
-        void push(long v) {
-            if (tail - head == buf.length) {
-                grow();
-            }
-            buf[(tail++) & mask] = v;
-            pushed++;
-        }
-
-        /** Triples pushed so far. */
-        long pushed() {
-            return pushed;
-        }
-
-        /**
-         * The full buffer in one twice as long, each element at the same index modulo the new length, so that
-         * head and tail stay valid (any run of n consecutive indices is distinct modulo 2n).
-         */
-        private void grow() {
-            // while copying, the old buffer and the new one (twice as long) are both live
-            long bytes = fixedBytes + 24L * buf.length;
-            if (bytes > budgetBytes || buf.length >= (1 << 30)) {
-                throw new ProductTooLargeException(new SizeEstimate(vertexCount, edgeCount(), bytes, 0), budgetBytes,
-                        true);
-            }
-            long[] out = new long[buf.length * 2];
-            int outMask = out.length - 1;
-            for (int i = head; i != tail; i++) {
-                out[i & outMask] = buf[i & mask];
-            }
-            buf = out;
-            mask = outMask;
-        }
     }
 
     /** Breadth-first search over the implicit product from the start: vertices reached and edges scanned. */
