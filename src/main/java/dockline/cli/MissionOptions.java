@@ -79,30 +79,42 @@ final class MissionOptions {
             err.println("dockline: --max-memory must be a positive number of MB, not " + maxMemoryMb);
             bad = true;
         }
-        if (!bad && m.reserveUnits() > m.capacityUnits()) {
-            // both are within the capacity in Wh, but the floor rounds up and the capacity down
-            err.println("dockline: " + missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
-                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ") in whole energy units"
-                    + " (hint: the floor rounds up and the capacity down to units of " + m.scale().formatWh(1)
-                    + "; give a lower reserve)");
-            bad = true;
-        }
-        if (!bad && (reserve != null || startCharge != null)
-                && m.reserveUnits() > Math.min(m.capacityUnits(), m.startUnits())) {
-            // the same check as a mission file's (MissionReading): a robot that starts below its floor is
-            // an input mistake, not a question the solver should answer with "not guaranteed"
-            String fix = reserve != null && startCharge != null ? "lower --reserve or raise --start-charge"
-                    : reserve != null ? "lower --reserve" : "raise --start-charge";
-            err.println("dockline: " + missionFile + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
-                    + ") is above the starting charge (" + m.scale().formatWh(Math.min(m.capacityUnits(), m.startUnits()))
-                    + ") in whole energy units (hint: " + fix + "; the floor rounds up and the charge down to units of "
-                    + m.scale().formatWh(1) + ")");
+        if (!bad && floorProblem(missionFile, m, reserve != null, startCharge != null, err)) {
             bad = true;
         }
         if (bad) {
             throw new BadInput();
         }
         return m;
+    }
+
+    /**
+     * Whether the floor, after {@code --reserve} / {@code --start-charge}, is above the capacity or the starting
+     * charge in whole energy units; prints the problem with its hint to {@code err}. Shared by every command
+     * that takes these options.
+     */
+    static boolean floorProblem(Path file, Mission m, boolean reserveGiven, boolean startGiven, PrintWriter err) {
+        if (m.reserveUnits() > m.capacityUnits()) {
+            // both are within the capacity in Wh, but the floor rounds up and the capacity down
+            err.println("dockline: " + file + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the capacity (" + m.scale().formatWh(m.capacityUnits()) + ") in whole energy units"
+                    + " (hint: the floor rounds up and the capacity down to units of " + m.scale().formatWh(1)
+                    + "; give a lower reserve)");
+            return true;
+        }
+        if ((reserveGiven || startGiven)
+                && m.reserveUnits() > Math.min(m.capacityUnits(), m.startUnits())) {
+            // the same check as a mission file's (MissionReading): a robot that starts below its floor is
+            // an input mistake, not a question the solver should answer with "not guaranteed"
+            String fix = reserveGiven && startGiven ? "lower --reserve or raise --start-charge"
+                    : reserveGiven ? "lower --reserve" : "raise --start-charge";
+            err.println("dockline: " + file + ": the reserve floor (" + m.scale().formatWh(m.reserveUnits())
+                    + ") is above the starting charge (" + m.scale().formatWh(Math.min(m.capacityUnits(), m.startUnits()))
+                    + ") in whole energy units (hint: " + fix + "; the floor rounds up and the charge down to units of "
+                    + m.scale().formatWh(1) + ")");
+            return true;
+        }
+        return false;
     }
 
     /** Loads the mission file as it is; prints its problems ({@code file:line:column: message}) to {@code err}. */

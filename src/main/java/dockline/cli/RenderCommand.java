@@ -99,6 +99,9 @@ public final class RenderCommand extends CommandBase {
             err.println("dockline render: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
+        if (MissionOptions.floorProblem(mission, m, reserve != null, start != null, err)) {
+            return ExitCodes.BAD_INPUT;
+        }
         if (m.beyondOneTrip() && overlay == Overlay.HEAT) {
             // no charge-needed map for these goals (it would depend on the lap or the turns left): the plain map
             overlay = Overlay.PLAIN;

@@ -108,6 +108,16 @@ class RenderCommandTest {
         assertThat(r.err()).contains("--reserve").contains("capacity");
     }
 
+    /** The same refusal as check's and margin's: a floor above the starting charge (48 Wh) is an input mistake. */
+    @Test
+    void a_reserve_above_the_starting_charge_is_refused_and_nothing_is_written() {
+        Path png = tmp.resolve("above-start.png");
+        Run r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--reserve", "90%");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("above the starting charge").contains("lower --reserve");
+        assertThat(png).doesNotExist();
+    }
+
     @Test
     void view_and_render_are_listed_with_help() {
         Run r = run("--help");
