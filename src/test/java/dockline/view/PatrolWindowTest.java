@@ -6,7 +6,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Mission;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 import javafx.scene.control.Label;
 import javafx.scene.control.Slider;
 import javafx.stage.Stage;
@@ -32,16 +31,12 @@ class PatrolWindowTest {
 
     @Start
     void start(Stage stage) {
-        window = new MissionWindow(new SolverAnalyzer(), new FileMissionSource(), null);
-        stage.setScene(window.scene(1280, 800));
-        window.attach(stage);
-        stage.show();
-        window.open(MISSION);
+        window = FxTests.openReal(stage, 1280, 800, MISSION);
     }
 
     @AfterEach
     void stop() throws Exception {
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
+        FxTests.dispose(window);
     }
 
     private boolean solved() {

@@ -34,16 +34,12 @@ class ReportExportWindowTest {
 
     @Start
     void start(Stage stage) {
-        window = new MissionWindow(new SolverAnalyzer(), new FileMissionSource(), null);
-        stage.setScene(window.scene(1180, 780));
-        window.attach(stage);
-        stage.show();
-        window.open(MISSION);
+        window = FxTests.openReal(stage, 1180, 780, MISSION);
     }
 
     @AfterEach
     void stop() throws Exception {
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
+        FxTests.dispose(window);
     }
 
     @Test

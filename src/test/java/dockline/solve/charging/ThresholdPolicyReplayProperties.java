@@ -7,10 +7,10 @@ import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.fixtures.ModelMoves;
+import dockline.fixtures.TaskBook;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
 import dockline.model.Mission;
-import dockline.model.Zone;
 import dockline.solve.RandomMissions;
 import java.util.HashMap;
 import java.util.List;
@@ -121,6 +121,7 @@ class ThresholdPolicyReplayProperties {
         private final int floor;
         private final int cap;
         private final List<String> visit;
+        private final TaskBook book;
         private final Map<Long, Boolean> state = new HashMap<>(); // false: on the stack, true: finished
         int charges;
 
@@ -133,31 +134,12 @@ class ThresholdPolicyReplayProperties {
             this.floor = floor;
             this.cap = cap;
             this.visit = m.tasks().visit();
+            this.book = new TaskBook(m);
         }
 
-        /** Own task bookkeeping: mask after occupying c, -1 for an avoided zone. */
+        /** Task progress by the model's own bookkeeping ({@link TaskBook}): mask after occupying c, -1 for an avoided zone. */
         int step(int mask, Cell c) {
-            for (String avoid : m.tasks().avoid()) {
-                if (zone(avoid).contains(c)) {
-                    return -1;
-                }
-            }
-            boolean again = true;
-            while (again) {
-                again = false;
-                for (int i = 0; i < visit.size(); i++) {
-                    boolean next = !m.tasks().ordered() || Integer.bitCount(mask) == i;
-                    if ((mask & (1 << i)) == 0 && next && zone(visit.get(i)).contains(c)) {
-                        mask |= 1 << i;
-                        again = true;
-                    }
-                }
-            }
-            return mask;
-        }
-
-        private Zone zone(String name) {
-            return m.map().zones().stream().filter(z -> z.name().equals(name)).findFirst().orElseThrow();
+            return book.step(mask, c);
         }
 
         void visit(Cell c, int k, int mask, int level) {
