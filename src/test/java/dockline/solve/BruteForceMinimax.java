@@ -1,6 +1,7 @@
 package dockline.solve;
 
 import dockline.fixtures.ModelMoves;
+import dockline.fixtures.TaskBook;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.Mission;
@@ -36,9 +37,8 @@ public final class BruteForceMinimax {
     private final int cells;
     /** Per (cell index, events left): the actions, each a list of outcomes (from the model). */
     private final List<List<ModelMoves.Outcome>>[] actions;
-    private final List<String> visit;
-    private final List<String> avoid;
-    private final int tasks;
+    // task progress by the model's own bookkeeping, shared with the other record-reading oracles
+    private final TaskBook book;
     private final int masks;
 
     public BruteForceMinimax(Mission mission) {
@@ -47,10 +47,8 @@ public final class BruteForceMinimax {
         this.cap = mission.capacityUnits();
         this.budget = map.disturbances().budget();
         this.cells = map.cellCount();
-        this.visit = mission.tasks().visit();
-        this.avoid = mission.tasks().avoid();
-        this.tasks = visit.size();
-        this.masks = 1 << tasks;
+        this.book = new TaskBook(mission);
+        this.masks = book.masks();
         @SuppressWarnings("unchecked")
         List<List<ModelMoves.Outcome>>[] a = new List[cells * (budget + 1)];
         ModelMoves moves = new ModelMoves(mission);
@@ -69,34 +67,6 @@ public final class BruteForceMinimax {
         return c.index(map.width()) * (budget + 1) + k;
     }
 
-    /** Progress after occupying a cell, or -1 if the cell lies in an avoided zone. */
-    private int progress(int mask, Cell c) {
-        List<String> names = mission.map().zonesAt(c);
-        for (String a : avoid) {
-            if (names.contains(a)) {
-                return -1;
-            }
-        }
-        if (mission.tasks().ordered()) {
-            int i = Integer.bitCount(mask);
-            while (i < tasks && names.contains(visit.get(i))) {
-                mask |= 1 << i;
-                i++;
-            }
-        } else {
-            for (int i = 0; i < tasks; i++) {
-                if (names.contains(visit.get(i))) {
-                    mask |= 1 << i;
-                }
-            }
-        }
-        return mask;
-    }
-
-    private boolean complete(int mask, Cell c) {
-        return mask == masks - 1 && (!mission.tasks().finishOnDock() || mission.map().terrainAt(c).dock());
-    }
-
     private int state(int robotVertex, int level, int mask) {
         // robotVertex = cell index * (budget + 1) + events left
         return (robotVertex * (cap + 1) + level) * masks + mask;
@@ -112,11 +82,11 @@ public final class BruteForceMinimax {
         if (start < floor) {
             return false;
         }
-        int p0 = progress(0, mission.start());
+        int p0 = book.step(0, mission.start());
         if (p0 < 0) {
             return false;
         }
-        if (complete(p0, mission.start())) {
+        if (book.complete(p0, mission.start())) {
             return true;
         }
         int n = actions.length * (cap + 1) * masks;
@@ -147,10 +117,10 @@ public final class BruteForceMinimax {
                                     break;
                                 }
                                 Cell c2 = o.to();
-                                int m2 = progress(mask, c2);
+                                int m2 = book.step(mask, c2);
                                 if (m2 < 0) {
                                     all = false;
-                                } else if (!complete(m2, c2)) {
+                                } else if (!book.complete(m2, c2)) {
                                     all = cur[state(to, l2, m2)];
                                 }
                             }
@@ -175,11 +145,11 @@ public final class BruteForceMinimax {
     /** The highest floor that can be guaranteed from the start (the max-min lowest level), or -1. */
     public int highestFloor() {
         int start = mission.startUnits();
-        int p0 = progress(0, mission.start());
+        int p0 = book.step(0, mission.start());
         if (p0 < 0) {
             return -1;
         }
-        if (complete(p0, mission.start())) {
+        if (book.complete(p0, mission.start())) {
             return start;
         }
         int n = actions.length * (cap + 1) * masks;
@@ -208,11 +178,11 @@ public final class BruteForceMinimax {
                                     break;
                                 }
                                 Cell c2 = o.to();
-                                int m2 = progress(mask, c2);
+                                int m2 = book.step(mask, c2);
                                 int v;
                                 if (m2 < 0) {
                                     v = -1;
-                                } else if (complete(m2, c2)) {
+                                } else if (book.complete(m2, c2)) {
                                     v = l2;
                                 } else {
                                     v = cur[state(to, l2, m2)];
