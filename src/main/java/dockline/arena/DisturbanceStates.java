@@ -141,6 +141,7 @@ public final class DisturbanceStates {
                 icells.add(cs);
             }
         }
+        unique(names, icells, w);
         int items = names.size();
         // cell -> items covering it (CSR)
         int[] cnt = new int[cells + 1];
@@ -352,6 +353,34 @@ public final class DisturbanceStates {
     /** Number of closure items (lasting door cells and lasting blockage zones). */
     public int itemCount() {
         return items;
+    }
+
+    /**
+     * Gives every closure item a name of its own: a name that several items share (door cells under one
+     * name, as a map built in code may have; or two lasting blockage rules over one zone) gets the item's
+     * first cell added ("door fire door 2 at 5:15"). The closures are part of every policy's situation key,
+     * so two items under one name would make two positions one. O(items).
+     */
+    private static void unique(List<String> names, List<int[]> icells, int w) {
+        Map<String, Integer> count = new HashMap<>();
+        for (String n : names) {
+            count.merge(n, 1, Integer::sum);
+        }
+        for (int i = 0; i < names.size(); i++) {
+            if (count.get(names.get(i)) > 1 && icells.get(i).length > 0) {
+                names.set(i, names.get(i) + " at " + Cell.ofIndex(icells.get(i)[0], w));
+            }
+        }
+        // still shared (two lasting rules over one zone start at the same cell): the item's number too
+        Map<String, Integer> again = new HashMap<>();
+        for (String n : names) {
+            again.merge(n, 1, Integer::sum);
+        }
+        for (int i = 0; i < names.size(); i++) {
+            if (again.get(names.get(i)) > 1) {
+                names.set(i, names.get(i) + " (closure " + (i + 1) + ")");
+            }
+        }
     }
 
     /** The item's name for reports: {@code door NAME} or {@code zone NAME}. */

@@ -156,7 +156,7 @@ final class LastingBench {
     }
 
     /** The instance's mission with its door-shut events lasting (the rest as they are). */
-    private static Mission lastingMission(Mission m) {
+    static Mission lastingMission(Mission m) {
         List<dockline.model.EventRule> rules = new ArrayList<>();
         for (dockline.model.EventRule r : m.map().disturbances().rules()) {
             rules.add(r.kind() == dockline.model.EventKind.DOOR_SHUT
