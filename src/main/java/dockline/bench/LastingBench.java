@@ -44,7 +44,7 @@ final class LastingBench {
             for (int side : config.sizes()) {
                 Instance inst = bench.instance(side, Benchmark.RESERVE);
                 for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), phased(inst, sampler,
-                        config.reps()))) {
+                        config.reps()), knownPhases(inst, sampler, config.reps()))) {
                     rows.add(r);
                     progress.accept(r.compact());
                 }
@@ -153,6 +153,44 @@ final class LastingBench {
                                 + " states kept in %d rounds, last arena %d vertices; %.2f x the momentary attractor's"
                                 + " CPU time (%.1f ms)", r.keptStates(), r.totalStates(), r.rounds(),
                         r.arena().vertexCount(), ratio, mom.cpuMillis()));
+    }
+
+    /**
+     * The phases the phased solve ends with, given in advance, solved in one round (the weakened game on them,
+     * {@link PhasedLastingSolver#solveKept}; compile included), against the momentary main route back to back:
+     * what the phased solver's last round would cost even if its phases were known before the first round (the
+     * rounds before it and the strengthened stage are saved, the kept phases are not).
+     */
+    static BenchRow knownPhases(Instance inst, HeapSampler sampler, int reps) {
+        Mission lm = lastingMission(inst.mission());
+        ReserveMonitor monitor = new ReserveMonitor(lm.reserveUnits(), lm.capacityUnits(), lm.startUnits());
+        dockline.solve.ProductOptions po = dockline.solve.ProductOptions.defaults();
+        PhasedLastingSolver.Result r;
+        try {
+            r = PhasedLastingSolver.solve(lm, inst.goal(), monitor, po);
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting-known-phases", 0, 0, "does not fit: "
+                    + e.getMessage());
+        }
+        boolean[] keep = PhasedLastingSolver.kept(r);
+        dockline.arena.DisturbanceStates st = ArenaCompiler.states(lm);
+        long base = HeapSampler.settledUsed();
+        Timed<ImplicitReserveGame.Strategy> one = time(sampler, base, reps, () -> PhasedLastingSolver.solveKept(lm,
+                inst.goal(), monitor, st, keep, po));
+        ImplicitReserveGame mgame = new ImplicitReserveGame(inst.arena(), inst.goal(), monitor);
+        Timed<Boolean> mom = time(sampler, base, reps, () -> mgame.solveWithStrategy(() -> false).startWon());
+        double ratio = one.cpuMillis() / Math.max(mom.cpuMillis(), 1e-3);
+        int[] byBudget = new int[lm.map().disturbances().budget() + 1];
+        for (int s = 0; s < keep.length; s++) {
+            byBudget[st.budgetLeft(s)] += keep[s] ? 1 : 0;
+        }
+        return new BenchRow(inst.side(), inst.kind(), "lasting-known-phases", r.game().vertexCount(),
+                one.value().result().edgesScanned(), 0, one.millis(), one.cpuMillis(), one.peak(),
+                Verdict.of(one.value().startWon()).word(), one.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "the %d of %d disturbance states the phased solve ends with"
+                                + " (by budget left 0..K: %s), given in advance and solved in one round: %.2f x the"
+                                + " momentary attractor's CPU time (%.1f ms)", r.keptStates(), r.totalStates(), java.util.Arrays.toString(byBudget), ratio,
+                        mom.cpuMillis()));
     }
 
     /** The instance's mission with its door-shut events lasting (the rest as they are). */

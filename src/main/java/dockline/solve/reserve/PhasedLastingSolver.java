@@ -111,6 +111,31 @@ public final class PhasedLastingSolver {
         }
     }
 
+    /**
+     * One round on the given phases only, with no refinement: the weakened game (a closure into a left-out
+     * phase counts as lost) on {@code ArenaCompiler.compileWithin(mission, states, keep)}, solved with the
+     * robot's choices. Its win is a real win; its loss is real only when no phase the mission needs was left
+     * out. The benchmark uses it with the phases a {@link #solve} ended with, given in advance, to measure what
+     * its last round costs even when no earlier round is needed. Cost: one restricted compile and one
+     * solve that stops once the start is won.
+     */
+    public static ImplicitReserveGame.Strategy solveKept(Mission mission, GoalAutomaton goal, ReserveMonitor monitor,
+                                                         DisturbanceStates states, boolean[] keep, ProductOptions po) {
+        Arena a = ArenaCompiler.compileWithin(mission, states, keep);
+        return ReserveSolver.budgeted(new ImplicitReserveGame(a, goal, monitor, false), a, po)
+                .solveWithStrategy(po.cancelled());
+    }
+
+    /** The phases a result kept (per disturbance state of the mission, whether its vertices are in the last arena). */
+    public static boolean[] kept(Result r) {
+        boolean[] keep = new boolean[r.totalStates()];
+        Arena a = r.arena();
+        for (int v = 0; v < a.vertexCount(); v++) {
+            keep[a.state(v)] = true;
+        }
+        return keep;
+    }
+
     /** Whether the robot wins at the monitor's floor (exact); see {@link #solve}. */
     public static boolean wins(Mission mission, GoalAutomaton goal, ReserveMonitor monitor, ProductOptions po) {
         return solve(mission, goal, monitor, po).startWon();
