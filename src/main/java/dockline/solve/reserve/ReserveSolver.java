@@ -225,15 +225,21 @@ public final class ReserveSolver {
 
     /**
      * Verdict only (no policy, no search), for callers that probe many variants: the implicit product
-     * ({@link ImplicitReserveGame}), its attractor stopping as soon as the start is won.
+     * ({@link ImplicitReserveGame}), its attractor stopping as soon as the start is won; with lasting closures
+     * {@link PhasedLastingSolver}, which builds only the closure phases the robot's strategy relies on.
      *
      * @throws ProductTooLargeException if the implicit game's counters do not fit the memory budget
      */
     public static boolean guaranteed(Mission mission, ProductOptions options) {
-        Arena arena = ArenaCompiler.compile(mission);
         GoalAutomaton goal = GoalAutomaton.of(mission);
         ReserveMonitor monitor = new ReserveMonitor(mission.reserveUnits(), mission.capacityUnits(),
                 mission.startUnits());
+        if (!mission.beyondOneTrip() && ArenaCompiler.states(mission).itemCount() > 0) {
+            // lasting closures: phase by phase (exact), as the highest-floor search does, so that a probe builds
+            // only the closure phases the robot's strategy relies on instead of every closure set
+            return PhasedLastingSolver.wins(mission, goal, monitor, options);
+        }
+        Arena arena = ArenaCompiler.compile(mission);
         return implicitGame(arena, goal, monitor, options).solve(true, options.cancelled()).startWon();
     }
 
