@@ -8,46 +8,36 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * The options that mean nothing outside the reserve objective are refused by {@code check} and {@code export}
  * in one wording (exit 2, nothing written), on the demo missions/discounted-trap.yaml (a discounted objective,
- * missions/README.md).
+ * missions/README.md). Run through the command-line harness of {@link CheckCommandTest}.
  */
 class ReserveOnlyRefusalTest {
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
+    private static CheckCommandTest.Run run(String... args) {
+        return CheckCommandTest.run(args);
     }
 
     @Test
     void aPolicyChoiceOnADiscountedMission_isRefusedInTheSameWordsByCheckAndExport(@TempDir Path dir) {
         String line = "dockline: --fewest-moves applies to the reserve objective only";
-        Run check = run("check", "missions/discounted-trap.yaml", "--fewest-moves");
+        CheckCommandTest.Run check = run("check", "missions/discounted-trap.yaml", "--fewest-moves");
         assertThat(check.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(check.err().strip()).isEqualTo(line);
         Path policy = dir.resolve("p.json");
-        Run export = run("export", "missions/discounted-trap.yaml", "--fewest-moves", "--policy", policy.toString());
+        CheckCommandTest.Run export = run("export", "missions/discounted-trap.yaml", "--fewest-moves", "--policy", policy.toString());
         assertThat(export.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(export.err().strip()).isEqualTo(line);
         assertThat(Files.exists(policy)).as("no output is written on bad input").isFalse();
-        Run older = run("export", "missions/discounted-trap.yaml", "--safest-policy", "--policy", policy.toString());
+        CheckCommandTest.Run older = run("export", "missions/discounted-trap.yaml", "--safest-policy", "--policy", policy.toString());
         assertThat(older.err().strip()).isEqualTo("dockline: --safest-policy applies to the reserve objective only");
     }
 
     @Test
     void theRouteOptionsOnADiscountedMission_areRefusedTogether() {
-        Run r = run("check", "missions/discounted-trap.yaml", "--method", "product");
+        CheckCommandTest.Run r = run("check", "missions/discounted-trap.yaml", "--method", "product");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err().strip()).isEqualTo("dockline: --method and --verdict-only apply to the reserve objective only");
         assertThat(r.err()).doesNotContain("Exception");

@@ -10,6 +10,9 @@ import dockline.fixtures.BruteForce;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Mission;
 import dockline.policy.PolicyEntry;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Predicate;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -22,54 +25,54 @@ import org.junit.jupiter.api.Test;
  */
 class FastPathRowsInvariantTest {
 
-    @Test
-    void aStartThatCannotWin_stopsTheRowsWithTheNamedInvariant() {
-        int found = 0;
-        for (long seed = 1; seed <= 400 && found < 5; seed++) {
+    /** A tiny mission the fast path applies to, with its game solved from the start. */
+    private record Solved(long seed, Mission mission, Arena arena, GoalAutomaton goal, MinChargeSolver.Values values) {
+        int startNeed() {
+            return values.result().startNeed();
+        }
+    }
+
+    /** The first {@code n} tiny missions (seeds 1 to 400) the fast path applies to and {@code keep} accepts. */
+    private static List<Solved> tiny(int n, Predicate<Solved> keep) {
+        List<Solved> out = new ArrayList<>();
+        for (long seed = 1; seed <= 400 && out.size() < n; seed++) {
             Mission m = TinyMissions.random(seed, false);
             Arena arena = ArenaCompiler.compile(m);
             GoalAutomaton goal = GoalAutomaton.of(m);
-            if (!MinChargeSolver.applicable(arena, goal)) {
-                continue;
+            if (MinChargeSolver.applicable(arena, goal)) {
+                Solved s = new Solved(seed, m, arena, goal, new MinChargeSolver(arena, goal).solveStart());
+                if (keep.test(s)) {
+                    out.add(s);
+                }
             }
-            MinChargeSolver.Values values = new MinChargeSolver(arena, goal).solveStart();
-            if (values.result().startNeed() != MinChargeSolver.INFINITE) {
-                continue;
-            }
-            found++;
-            assertThatThrownBy(() -> FastPath.rows(arena, goal, values, m.startUnits(), 10_000))
+        }
+        assertThat(out).as("tiny missions found").hasSize(n);
+        return out;
+    }
+
+    @Test
+    void aStartThatCannotWin_stopsTheRowsWithTheNamedInvariant() {
+        for (Solved s : tiny(5, x -> x.startNeed() == MinChargeSolver.INFINITE)) {
+            assertThatThrownBy(() -> FastPath.rows(s.arena(), s.goal(), s.values(), s.mission().startUnits(), 10_000))
+                    .as("seed %d", s.seed())
                     .isInstanceOf(IllegalStateException.class)
                     .hasMessageContaining("internal:").hasMessageContaining("read only from a guaranteed start");
         }
-        assertThat(found).as("tiny missions whose start no charge wins").isEqualTo(5);
     }
 
     @Test
     void onGuaranteedStarts_everyRowIsASituationTheRobotWins_bruteForce() {
-        int found = 0;
         long rows = 0;
-        for (long seed = 1; seed <= 400 && found < 20; seed++) {
-            Mission m = TinyMissions.random(seed, false);
-            Arena arena = ArenaCompiler.compile(m);
-            GoalAutomaton goal = GoalAutomaton.of(m);
-            if (!MinChargeSolver.applicable(arena, goal)) {
-                continue;
-            }
-            MinChargeSolver.Values values = new MinChargeSolver(arena, goal).solveStart();
-            if (!values.result().guaranteed()) {
-                continue;
-            }
-            found++;
-            BruteForce brute = new BruteForce(m, m.reserveUnits());
-            assertThat(brute.guaranteed()).as("seed %d", seed).isTrue();
-            var r = FastPath.rows(arena, goal, values, m.startUnits(), 10_000);
+        for (Solved s : tiny(20, x -> x.values().result().guaranteed())) {
+            BruteForce brute = new BruteForce(s.mission(), s.mission().reserveUnits());
+            assertThat(brute.guaranteed()).as("seed %d", s.seed()).isTrue();
+            var r = FastPath.rows(s.arena(), s.goal(), s.values(), s.mission().startUnits(), 10_000);
             for (PolicyEntry e : r.entries()) {
                 rows++;
                 assertThat(brute.wins(e.cell(), e.budgetLeft(), e.progress(), e.level()))
-                        .as("seed %d row %s", seed, e).isTrue();
+                        .as("seed %d row %s", s.seed(), e).isTrue();
             }
         }
-        assertThat(found).as("guaranteed tiny missions").isEqualTo(20);
         assertThat(rows).as("rows checked").isPositive();
     }
 }
