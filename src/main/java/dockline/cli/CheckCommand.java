@@ -149,12 +149,10 @@ public final class CheckCommand extends MissionCommand {
             Route r;
             if (objective instanceof Objective.Discounted d) {
                 if (policy.given()) {
-                    err.println("dockline: " + policy.name() + " applies to the reserve objective only");
-                    return ExitCodes.BAD_INPUT;
+                    return MissionOptions.reserveObjectiveOnly(err, policy.name());
                 }
                 if (route.nonDefault()) {
-                    err.println("dockline: --method and --verdict-only apply to the reserve objective only");
-                    return ExitCodes.BAD_INPUT;
+                    return MissionOptions.reserveObjectiveOnly(err, "--method", "--verdict-only");
                 }
                 m = m.withObjective(d);
                 r = discounted.route();

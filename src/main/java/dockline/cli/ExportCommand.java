@@ -66,8 +66,7 @@ public final class ExportCommand extends MissionCommand {
             }
             boolean discounted = m.objective() instanceof Objective.Discounted;
             if (discounted && policy.given()) {
-                err.println("dockline: " + policy.name() + " applies to the reserve objective only");
-                return ExitCodes.BAD_INPUT;
+                return MissionOptions.reserveObjectiveOnly(err, policy.name());
             }
             // the safest policy of a mission with charging comes as level thresholds (missions/POLICY-FORMAT.md)
             Route route = discounted ? Route.Discounted.defaults()

@@ -117,6 +117,18 @@ final class MissionOptions {
         return false;
     }
 
+    /**
+     * Refuses options that mean nothing outside the reserve objective (for example a policy choice on a
+     * discounted mission), in the one wording every command uses: {@code dockline: OPTION applies to the
+     * reserve objective only} (several: {@code A and B apply ...}) on {@code err}. Returns the exit code of
+     * bad input.
+     */
+    static int reserveObjectiveOnly(PrintWriter err, String... options) {
+        err.println("dockline: " + String.join(" and ", options) + (options.length == 1 ? " applies" : " apply")
+                + " to the reserve objective only");
+        return ExitCodes.BAD_INPUT;
+    }
+
     /** Loads the mission file as it is; prints its problems ({@code file:line:column: message}) to {@code err}. */
     static Mission read(Path file, PrintWriter err) throws BadInput {
         try {

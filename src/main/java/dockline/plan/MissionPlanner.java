@@ -201,7 +201,7 @@ public final class MissionPlanner {
     /** The charging route's solver, when its game applies (the only energy gains are charge steps on a dock). */
     private static Optional<ChargingSolver> chargingSolver(Context c) {
         try {
-            return Optional.of(new ChargingSolver(c.arena(), c.goal()));
+            return Optional.of(new ChargingSolver(c.arena(), c.goal(), c.options().cancelled()));
         } catch (IllegalArgumentException | ArithmeticException e) {
             return Optional.empty();
         }

@@ -42,17 +42,27 @@ public record MissionResult(Path file, Status status, List<LocatedError> errors,
         return picture == null ? null : picture.clone();
     }
 
-    /** How the check of one mission ended, with the command line's exit code. */
+    /**
+     * How the check of one mission ended, with the command line's exit code. Each constant names its code (the
+     * numbers of README's "Exit codes", which the command line keeps in {@code cli.ExitCodes}; the report may
+     * not depend on the command line), so that the order of the constants means nothing.
+     */
     public enum Status implements Worded {
-        GUARANTEED,
-        NOT_GUARANTEED,
-        BAD_INPUT,
-        OVER_RESOURCE_LIMIT,
-        INTERNAL_ERROR;
+        GUARANTEED(0),
+        NOT_GUARANTEED(1),
+        BAD_INPUT(2),
+        OVER_RESOURCE_LIMIT(3),
+        INTERNAL_ERROR(4);
 
-        /** The command line's exit code (0 to 4, README): the constants stand in that order. */
+        private final int exitCode;
+
+        Status(int exitCode) {
+            this.exitCode = exitCode;
+        }
+
+        /** The command line's exit code (0 to 4, README). */
         public int exitCode() {
-            return ordinal();
+            return exitCode;
         }
     }
 

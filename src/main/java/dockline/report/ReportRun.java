@@ -142,7 +142,12 @@ public final class ReportRun {
         }
     }
 
-    /** The exit code of the whole run: the worst of the missions' (0 all guaranteed, 1, 2 bad input, 3, 4). */
+    /**
+     * The exit code of the whole run: the highest of the missions' codes (0 all guaranteed, 1 some not, 2 bad
+     * input, 3 over a resource limit, 4 internal error), whatever their order, as for several missions in
+     * {@code check}. A code above 1 is a mission without a verdict, and the higher one takes more than editing
+     * an input to clear, so it is not hidden behind a bad file elsewhere (README.md, "Exit codes"). O(missions).
+     */
     public static int exitCode(List<MissionResult> results) {
         int code = 0;
         for (MissionResult r : results) {

@@ -3,12 +3,15 @@ package dockline.solve.charging;
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
+import dockline.solve.game.AttractorSolver;
 import dockline.solve.game.GoalPredecessors;
 import dockline.solve.game.MinMaxSearch;
 import dockline.util.Csr;
 import dockline.util.IntArrayList;
 import dockline.util.Progress;
 import java.util.Arrays;
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
 
 /**
  * The reserve question <em>with</em> charging, solved without the battery levels in the game: per
@@ -73,12 +76,29 @@ public final class ChargingSolver {
     private final GoalPredecessors inverse;
     /** Per robot vertex: the out-edge of its charge action, or -1. */
     private final int[] chargeEdge;
+    /** Polled by the rounds and by {@link FloorSweep}; raised: the solve stops (a window's Cancel). */
+    private final BooleanSupplier cancelled;
 
     /**
+     * A solver that is never cancelled.
+     *
      * @throws IllegalArgumentException if arena × goal has more than {@code Integer.MAX_VALUE} vertices, or a
      *                                  positive delta is not a charge action's only outcome back to its robot vertex
      */
     public ChargingSolver(Arena arena, GoalAutomaton goal) {
+        this(arena, goal, () -> false);
+    }
+
+    /**
+     * A solver whose rounds and whose {@link FloorSweep} poll {@code cancelled} (once per round, and every
+     * {@value AttractorSolver#POLL_INTERVAL} queue pops of the pass) and stop with a
+     * {@link CancellationException} once it is raised, as the product routes do.
+     *
+     * @throws IllegalArgumentException if arena × goal has more than {@code Integer.MAX_VALUE} vertices, or a
+     *                                  positive delta is not a charge action's only outcome back to its robot vertex
+     */
+    public ChargingSolver(Arena arena, GoalAutomaton goal, BooleanSupplier cancelled) {
+        this.cancelled = cancelled == null ? () -> false : cancelled;
         this.arena = arena;
         this.goal = goal;
         this.goalCount = goal.stateCount();
@@ -141,6 +161,7 @@ public final class ChargingSolver {
         int rounds = 0;
         int goodCount = 0;
         while (true) {
+            poll(0);
             rounds++;
             search.reset();
             // every robot vertex (cell and disturbance state: budget left, and closures with lasting events)
@@ -182,6 +203,16 @@ public final class ChargingSolver {
         }
         return new Values(this, usable, need, good, rounds, goodCount, impPos.toArray(), impNeed.toArray(),
                 impEdge.toArray());
+    }
+
+    /**
+     * Stops the solve when its flag is raised, polled at every {@value AttractorSolver#POLL_INTERVAL}-th
+     * {@code step} the caller counts (step 0: now, as each round does).
+     */
+    void poll(int step) {
+        if ((step & (AttractorSolver.POLL_INTERVAL - 1)) == 0 && cancelled.getAsBoolean()) {
+            throw new CancellationException("the charging route was cancelled");
+        }
     }
 
     int chargeEdge(int r) {

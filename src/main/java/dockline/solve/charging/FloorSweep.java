@@ -84,6 +84,7 @@ public final class FloorSweep extends MinMaxSearch {
     private final IntArrayList added = new IntArrayList(64);
     private final IntArrayList batchEnd = new IntArrayList(64);
     private long recomputations;
+    private int pops; // queue pops, for polling the solver's cancellation flag
 
     /**
      * The result of one pass.
@@ -219,6 +220,7 @@ public final class FloorSweep extends MinMaxSearch {
     /** A robot position leaves the queue: its value and action go to the history; a charging dock is a candidate. */
     @Override
     protected boolean settle(int u, int x) {
+        solver.poll(++pops);
         if (x != need[u] || !pending[u]) {
             return false;
         }

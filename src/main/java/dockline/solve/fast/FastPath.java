@@ -202,12 +202,25 @@ public final class FastPath {
                 (solved - t0) / 1_000_000L, (t1 - t0) / 1_000_000L));
     }
 
-    private record Rows(List<PolicyEntry> entries, long states) {
+    /** The rows (null when over the bound) and the robot situations met. */
+    record Rows(List<PolicyEntry> entries, long states) {
     }
 
     /**
      * The rows of the policy of least need over its closed loop from the start at level s, or
      * {@code entries == null} when the loop has more than {@code max} robot situations.
+     *
+     * <p>Every pair (robot vertex, goal state) the loop meets has a chosen action, and no outcome of that
+     * action enters the reject sink, so {@code r * gc + g2} always names a pair of the numbering. Why: a
+     * pair has a chosen action only once the search has settled it at a finite need, which it does only
+     * when every outcome of the action has a finite need (Knuth's max over outcomes), and an outcome into an
+     * avoided zone never has one (the search never counts it). So from a start with a chosen action (a
+     * guaranteed one) the invariant holds by induction along the loop. It is still checked
+     * ({@link #chosenAction}, and the reject test below), at one branch per pair: a break of it is an internal
+     * error that names it, not a wrong row or an index out of bounds.
+     *
+     * @throws IllegalStateException if the start (or a pair of its loop) has no chosen action, e.g. when the
+     *                               rows are asked for a start that is not guaranteed
      */
     static Rows rows(Arena arena, GoalAutomaton goal, MinChargeSolver.Values values, int s, int max) {
         int gc = goal.stateCount();
@@ -216,6 +229,7 @@ public final class FastPath {
         if (goal.accepting(g0, arena.isDock(arena.cell(a0)))) {
             return new Rows(List.of(), 0); // complete at the start: nothing to do
         }
+        chosenAction(arena, values, a0, g0); // the invariant at the start (a start that is not guaranteed fails it)
         // 1. the pairs (robot vertex, goal state) of the loop, without levels: a lower bound of its situations
         VisitQueue pairs = new VisitQueue(Math.multiplyExact(arena.robotCount(), gc));
         pairs.visit(a0 * gc + g0);
@@ -223,10 +237,13 @@ public final class FastPath {
             int p = pairs.next();
             int v = p / gc;
             int g = p - v * gc;
-            int d = arena.target(values.chosenEdge(v, g));
+            int d = chosenAction(arena, values, v, g);
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
                 int r = arena.target(e);
                 int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
+                if (g2 == GoalAutomaton.REJECT) {
+                    throw brokenLoop(v, g, "an outcome of its chosen action enters an avoided zone");
+                }
                 if (!goal.accepting(g2, arena.isDock(arena.cell(r))) && pairs.visit(r * gc + g2)
                         && pairs.visited() > max) {
                     return new Rows(null, pairs.visited());
@@ -250,7 +267,7 @@ public final class FastPath {
             int level = (int) (key - p * span);
             int v = p / gc;
             int g = p - v * gc;
-            int d = arena.target(values.chosenEdge(v, g));
+            int d = chosenAction(arena, values, v, g);
             entries.add(new PolicyEntry(arena.cellOf(v), level, arena.budgetLeft(v), goal.progressMask(g),
                     arena.action(d), null, arena.closures(v)));
             for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
@@ -258,7 +275,9 @@ public final class FastPath {
                 int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
                 int l2 = level + arena.weight(e); // weights are never positive on the fast path's choices
                 if (goal.accepting(g2, arena.isDock(arena.cell(r))) || g2 == GoalAutomaton.REJECT || l2 < 0) {
-                    continue; // complete, or a breach the certificate will find (it cannot happen when guaranteed)
+                    // complete, or a breach the certificate will find (it cannot happen when guaranteed; the
+                    // reject sink cannot either: step 1 met every pair this step meets and checked it)
+                    continue;
                 }
                 long k = (long) (r * gc + g2) * span + l2;
                 if (seen.add(k)) {
@@ -273,6 +292,24 @@ public final class FastPath {
             }
         }
         return new Rows(entries, tail);
+    }
+
+    /**
+     * The arena vertex of the action the policy of least need takes at pair (v, g): the invariant of
+     * {@link #rows} (a pair of the loop has a chosen action), checked.
+     */
+    private static int chosenAction(Arena arena, MinChargeSolver.Values values, int v, int g) {
+        int e = g == GoalAutomaton.REJECT ? -1 : values.chosenEdge(v, g);
+        if (e < 0) {
+            throw brokenLoop(v, g, "it has no chosen action");
+        }
+        return arena.target(e);
+    }
+
+    private static IllegalStateException brokenLoop(int v, int g, String what) {
+        return new IllegalStateException("internal: the fast path's policy rows met robot vertex " + v
+                + " in goal state " + g + " and " + what + "; the rows are read only from a guaranteed start, whose"
+                + " loop meets only pairs of finite need (FastPath.rows)");
     }
 
     /** An open-addressing hash set of non-negative longs (linear probing, load at most 1/2). */

@@ -4,6 +4,8 @@ import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.monitor.Monitor;
+import dockline.solve.ProductTooLargeException;
+import dockline.solve.SizeEstimate;
 import dockline.util.PagedBytes;
 import java.util.Arrays;
 
@@ -17,6 +19,25 @@ import java.util.Arrays;
 final class CarriedRound {
 
     private CarriedRound() {
+    }
+
+    /**
+     * Counts {@code bytes} of counters held on top of the game's own against its memory budget
+     * ({@link ImplicitReserveGame#limitWorklist}): the previous round's weakened fixpoint until it is copied
+     * ({@link ImplicitReserveGame#carryFrom}), or the round's own copy of it kept for the next round. Called
+     * before they are held, so a round whose counters and carried counters pass the budget is refused with the
+     * usual "too large" message (and the real total) instead of holding more than the budget. O(1).
+     *
+     * @param whileSolving whether the solve has begun (the message then says the game grew past the budget)
+     * @throws ProductTooLargeException if the game's bytes with {@code bytes} more pass the budget
+     */
+    static void hold(ImplicitReserveGame game, long bytes, boolean whileSolving) {
+        long total = Math.addExact(game.fixedBytes, bytes);
+        if (total > game.budgetBytes) {
+            throw new ProductTooLargeException(new SizeEstimate(game.vertexCount, game.edgeCount(), total, 0),
+                    game.budgetBytes, whileSolving);
+        }
+        game.fixedBytes = total;
     }
 
     /**

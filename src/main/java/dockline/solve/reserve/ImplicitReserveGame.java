@@ -184,9 +184,9 @@ public final class ImplicitReserveGame {
         if (!leftOutWins || prev.weakened == null || prev.gBits != gBits || prev.lBits != lBits) {
             throw new IllegalArgumentException("only a strengthened game whose weakened fixpoint was kept carries over");
         }
+        // its counters stay live until they are copied, besides this game's: the budget counts them, first
+        CarriedRound.hold(this, prev.weakened.length(), false);
         this.previous = prev;
-        // its counters stay live until they are copied, besides this game's: the worklist's budget counts them
-        this.fixedBytes += prev.weakened.length();
     }
 
     private static int bits(int n) {
@@ -545,8 +545,8 @@ public final class ImplicitReserveGame {
             }
             seeded = true;
             if (flags == null) {
+                CarriedRound.hold(this, count.length(), true); // the copy is held on top, counted before it is made
                 weakened = NibbleCounters.copyOf(count); // the weakened fixpoint, for the next round (carryFrom)
-                fixedBytes += weakened.length(); // and it takes from the worklist's budget
             }
             for (int d = rc; d < arena.vertexCount(); d++) {
                 int lo = leftOutOf[d - rc];

@@ -208,6 +208,9 @@ public final class ReserveSolver {
 
     /**
      * The game on {@code arena} checked against the memory budget ({@code po}) and with its worklist capped.
+     * The counters a round of {@link PhasedLastingSolver} holds on top of the game's own (the previous round's,
+     * until copied, and its own copy for the next round) are counted against the same budget when they are
+     * held ({@link CarriedRound#hold}).
      *
      * @throws ProductTooLargeException if its counters do not fit the memory budget
      */
