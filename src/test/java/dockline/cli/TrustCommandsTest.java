@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dockline.fixtures.CliRun;
+import dockline.fixtures.DemoFiles;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -136,14 +137,10 @@ class TrustCommandsTest {
         assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
     }
 
-    static java.util.stream.Stream<Path> demoMissions() throws java.io.IOException {
-        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
-
     /** The demo missions with the reserve objective (the certificate covers that objective). */
     static java.util.stream.Stream<Path> reserveDemoMissions() throws Exception {
         java.util.List<Path> out = new java.util.ArrayList<>();
-        for (Path p : demoMissions().toList()) {
+        for (Path p : DemoFiles.missions().toList()) {
             if (dockline.io.MissionLoader.load(p).objective() instanceof dockline.model.Objective.Reserve) {
                 out.add(p);
             }
