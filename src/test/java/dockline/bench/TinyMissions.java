@@ -1,5 +1,7 @@
 package dockline.bench;
 
+import static dockline.fixtures.RandomMissions.pick;
+
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.Charge;
@@ -126,11 +128,4 @@ public final class TinyMissions {
                 Charge.wh(BigDecimal.ZERO), new Tasks(List.of("far"), true, List.of(), true), new Objective.Reserve());
     }
 
-    private static List<Cell> pick(Random rnd, List<Cell> from, int n) {
-        List<Cell> out = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            out.add(from.get(rnd.nextInt(from.size())));
-        }
-        return out;
-    }
 }

@@ -1,46 +1,32 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
+import dockline.fixtures.CliRun;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 class BenchCommandTest {
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void help_listsTheOptions() {
-        Run r = run("bench", "--help");
+        CliRun r = run("bench", "--help");
         assertThat(r.code()).isZero();
         assertThat(r.out()).contains("--quick", "--json", "--sizes", "--seed");
     }
 
     @Test
     void sizeOutOfRange_isBadUsage() {
-        Run r = run("bench", "--sizes", "8");
+        CliRun r = run("bench", "--sizes", "8");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("--sizes");
     }
 
     @Test
     void json_onTheSmallestFloor_agreesAndHasRowsAndRatios() throws Exception {
-        Run r = run("bench", "--quick", "--json", "--sizes", "32");
+        CliRun r = run("bench", "--quick", "--json", "--sizes", "32");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertThat(root.get("rows").size()).isPositive();
@@ -51,14 +37,14 @@ class BenchCommandTest {
 
     @Test
     void unknownInstance_isBadUsage() {
-        Run r = run("bench", "--instances", "discountd");
+        CliRun r = run("bench", "--instances", "discountd");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("--instances", "discounted");
     }
 
     @Test
     void oneInstance_runsOnlyThatInstance_andBothRoutesAgree() throws Exception {
-        Run r = run("bench", "--json", "--sizes", "32", "--instances", "discounted");
+        CliRun r = run("bench", "--json", "--sizes", "32", "--instances", "discounted");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
         // the published schema of the output (general-purpose validator, as in JsonOutputSchemaTest)

@@ -1,18 +1,17 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.fixtures.CliRun;
 import dockline.io.PolicyFiles;
 import dockline.report.Caveats;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** {@code dockline check} and {@code dockline export} on the demo missions: exit codes and output. */
 class CheckCommandTest {
@@ -20,22 +19,9 @@ class CheckCommandTest {
     @TempDir
     Path dir;
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void guaranteedMission_exitsZeroWithTheSummary() {
-        Run r = run("check", "missions/night-round.yaml");
+        CliRun r = run("check", "missions/night-round.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         String[] lines = r.out().split("\\R");
         assertThat(lines[0]).startsWith("GUARANTEED: Night round, clinic east wing");
@@ -51,7 +37,7 @@ class CheckCommandTest {
      */
     @Test
     void severalMissions_oneResultEach_exitCodeTheWorst() throws Exception {
-        Run ok = run("check", "missions/night-round.yaml", "missions/supply-run.yaml");
+        CliRun ok = run("check", "missions/night-round.yaml", "missions/supply-run.yaml");
         assertThat(ok.code()).as(ok.err()).isEqualTo(ExitCodes.OK);
         int first = ok.out().indexOf("== missions/night-round.yaml (1 of 2)");
         int second = ok.out().indexOf("== missions/supply-run.yaml (2 of 2)");
@@ -60,29 +46,29 @@ class CheckCommandTest {
         assertThat(ok.out().substring(first, second)).contains("GUARANTEED: Night round").contains(Caveats.block());
         assertThat(ok.out().substring(second)).contains("GUARANTEED: Supply run").contains(Caveats.block());
 
-        Run mixed = run("check", "missions/night-round.yaml", "missions/late-return.yaml");
+        CliRun mixed = run("check", "missions/night-round.yaml", "missions/late-return.yaml");
         assertThat(mixed.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(mixed.out()).contains("GUARANTEED: Night round").contains("NOT GUARANTEED: ");
 
         Path bad = dir.resolve("bad.yaml");
         java.nio.file.Files.writeString(bad, "name: x\nmap: nowhere.yaml\n");
-        Run withBad = run("check", "missions/late-return.yaml", bad.toString(), "missions/night-round.yaml");
+        CliRun withBad = run("check", "missions/late-return.yaml", bad.toString(), "missions/night-round.yaml");
         assertThat(withBad.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(withBad.out()).contains("== " + bad + " (2 of 3)").contains("GUARANTEED: Night round");
         assertThat(withBad.err()).containsPattern(java.util.regex.Pattern.quote(bad.toString()) + ":\\d+:\\d+: ");
 
-        Run json = run("check", "missions/night-round.yaml", "missions/late-return.yaml", "--json");
+        CliRun json = run("check", "missions/night-round.yaml", "missions/late-return.yaml", "--json");
         JsonNode a = new ObjectMapper().readTree(json.out());
         assertThat(a.isArray()).isTrue();
         assertThat(a).extracting(n -> n.get("verdict").asText()).containsExactly("guaranteed", "not-guaranteed");
         // one mission prints what it always did: one object and no heading
-        Run one = run("check", "missions/night-round.yaml");
+        CliRun one = run("check", "missions/night-round.yaml");
         assertThat(one.out()).startsWith("GUARANTEED: ").doesNotContain("== ");
     }
 
     @Test
     void json_hasTheDocumentedKeys() throws Exception {
-        Run r = run("check", "missions/night-round.yaml", "--json");
+        CliRun r = run("check", "missions/night-round.yaml", "--json");
         assertThat(r.code()).isEqualTo(ExitCodes.OK);
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
@@ -102,23 +88,23 @@ class CheckCommandTest {
 
     @Test
     void notGuaranteedMission_exitsOneWithNullWorstCase() throws Exception {
-        Run r = run("check", "missions/late-return.yaml", "--json");
+        CliRun r = run("check", "missions/late-return.yaml", "--json");
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("verdict").asText()).isEqualTo("not-guaranteed");
         assertThat(j.get("lowestLevelUnits").isNull()).isTrue();
-        Run human = run("check", "missions/late-return.yaml");
+        CliRun human = run("check", "missions/late-return.yaml");
         assertThat(human.out()).startsWith("NOT GUARANTEED: ").contains("none (there is no safe policy)");
     }
 
     @Test
     void overrides_changeTheVerdict() {
         // no charge beats a bridge fire door that stays shut (lasting, the map's default) ...
-        Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%");
+        CliRun r = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("reserve floor 30 units = 15 Wh (10%)");
         // ... but with no disturbance at all the fuller battery and the lower floor make it safe
-        Run none = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%", "--budget",
+        CliRun none = run("check", "missions/late-return.yaml", "--start-charge", "100%", "--reserve", "10%", "--budget",
                 "0", "--json");
         assertThat(none.code()).as(none.err()).isEqualTo(ExitCodes.OK);
         assertThat(none.out()).contains("\"budget\" : 0");
@@ -156,7 +142,7 @@ class CheckCommandTest {
     @Test
     void overMemoryLimit_exitsThreeAndSaysWhatToChange() {
         // the product route (late-return would take the fast path, whose game is small enough for 1 MB)
-        Run r = run("check", "missions/late-return.yaml", "--max-memory", "1", "--method", "product");
+        CliRun r = run("check", "missions/late-return.yaml", "--max-memory", "1", "--method", "product");
         assertThat(r.code()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(r.err()).contains("vertices", "MB", "coarser energy resolution", "smaller disturbance budget K");
         assertThat(r.out()).isEmpty();
@@ -164,7 +150,7 @@ class CheckCommandTest {
 
     @Test
     void badOverrides_areAllReportedWithExitTwo() {
-        Run r = run("check", "missions/late-return.yaml", "--reserve", "120%", "--start-charge", "2x", "--budget", "-1");
+        CliRun r = run("check", "missions/late-return.yaml", "--reserve", "120%", "--start-charge", "2x", "--budget", "-1");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("--reserve", "--start-charge", "--budget").doesNotContain("Exception");
         assertThat(run("check", dir.resolve("missing.yaml").toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
@@ -175,7 +161,7 @@ class CheckCommandTest {
     void export_writesAPolicyThatReadsBack() throws Exception {
         for (String name : new String[] {"night.csv", "night.json"}) {
             Path f = dir.resolve(name);
-            Run r = run("export", "missions/night-round.yaml", "--policy", f.toString());
+            CliRun r = run("export", "missions/night-round.yaml", "--policy", f.toString());
             assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
             PolicyFiles.Document d = PolicyFiles.read(f);
             assertThat(d.header().mission()).isEqualTo("Night round, clinic east wing");
@@ -190,14 +176,14 @@ class CheckCommandTest {
     void export_ofANotGuaranteedMission_writesNothing() throws Exception {
         Path f = dir.resolve("keep.json");
         Files.writeString(f, "old content");
-        Run r = run("export", "missions/late-return.yaml", "--policy", f.toString());
+        CliRun r = run("export", "missions/late-return.yaml", "--policy", f.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(Files.readString(f)).isEqualTo("old content");
     }
 
     @Test
     void help_listsTheNewSubcommands() {
-        Run r = run("--help");
+        CliRun r = run("--help");
         assertThat(r.out()).contains("check", "export");
         assertThat(run("check", "--help").out()).contains("--reserve", "--start-charge", "--budget", "--json");
     }

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.fixtures.CliRun;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.BeforeEach;
@@ -31,14 +32,14 @@ class CheckRouteTest {
         Files.writeString(noCharge, text);
     }
 
-    private static JsonNode json(CheckCommandTest.Run r) throws Exception {
+    private static JsonNode json(CliRun r) throws Exception {
         return new ObjectMapper().readTree(r.out());
     }
 
     @Test
     void auto_takesTheFastPath_andAgreesWithTheProductRoute() throws Exception {
-        CheckCommandTest.Run fast = CheckCommandTest.run("check", noCharge.toString(), "--json");
-        CheckCommandTest.Run product = CheckCommandTest.run("check", noCharge.toString(), "--json", "--method", "product");
+        CliRun fast = CliRun.run("check", noCharge.toString(), "--json");
+        CliRun product = CliRun.run("check", noCharge.toString(), "--json", "--method", "product");
         assertThat(fast.code()).as(fast.err()).isEqualTo(ExitCodes.OK);
         assertThat(product.code()).as(product.err()).isEqualTo(ExitCodes.OK);
         JsonNode f = json(fast);
@@ -51,23 +52,23 @@ class CheckRouteTest {
         // the policy of least need is the safest one: its worst level is the highest floor
         assertThat(f.get("lowestLevelUnits").asInt()).isEqualTo(f.get("highestReserveUnits").asInt());
         assertThat(f.get("certifiedLowestLevelUnits").asInt()).isEqualTo(f.get("lowestLevelUnits").asInt());
-        CheckCommandTest.Run text = CheckCommandTest.run("check", noCharge.toString());
+        CliRun text = CliRun.run("check", noCharge.toString());
         assertThat(text.out()).contains("Method: fast path", "certified: true", "Highest reserve floor guaranteed:");
     }
 
     @Test
     void chargingMission_takesTheChargingRoute_andRefusesAForcedFastPath() throws Exception {
-        CheckCommandTest.Run auto = CheckCommandTest.run("check", "missions/night-round.yaml", "--json");
+        CliRun auto = CliRun.run("check", "missions/night-round.yaml", "--json");
         assertThat(json(auto).get("method").asText()).isEqualTo("charging");
-        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml").out()).contains("Method: charging route");
-        CheckCommandTest.Run fewest = CheckCommandTest.run("check", "missions/night-round.yaml", "--json",
+        assertThat(CliRun.run("check", "missions/night-round.yaml").out()).contains("Method: charging route");
+        CliRun fewest = CliRun.run("check", "missions/night-round.yaml", "--json",
                 "--fewest-moves");
         assertThat(json(fewest).get("method").asText()).isEqualTo("product");
-        CheckCommandTest.Run forced = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "fast");
+        CliRun forced = CliRun.run("check", "missions/night-round.yaml", "--method", "fast");
         assertThat(forced.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(forced.err()).contains("--method fast does not apply", "charge").doesNotContain("Exception");
         assertThat(forced.out()).isEmpty();
-        CheckCommandTest.Run bad = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "quick");
+        CliRun bad = CliRun.run("check", "missions/night-round.yaml", "--method", "quick");
         assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(bad.err()).contains("auto, fast, charging, product or stored");
     }
@@ -76,8 +77,8 @@ class CheckRouteTest {
     @Test
     void storedRoute_agreesWithTheDefaultProductRoute() throws Exception {
         for (String file : new String[] {"missions/night-round.yaml", "missions/late-return.yaml"}) {
-            JsonNode implicit = json(CheckCommandTest.run("check", file, "--json", "--method", "product"));
-            CheckCommandTest.Run storedRun = CheckCommandTest.run("check", file, "--json", "--method", "stored");
+            JsonNode implicit = json(CliRun.run("check", file, "--json", "--method", "product"));
+            CliRun storedRun = CliRun.run("check", file, "--json", "--method", "stored");
             JsonNode stored = json(storedRun);
             assertThat(stored.get("method").asText()).isEqualTo("stored-product");
             assertThat(implicit.get("method").asText()).isEqualTo("product");
@@ -85,9 +86,9 @@ class CheckRouteTest {
             assertThat(stored.get("highestReserveUnits")).isEqualTo(implicit.get("highestReserveUnits"));
             assertThat(stored.get("certified")).isEqualTo(implicit.get("certified"));
         }
-        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "stored").out())
+        assertThat(CliRun.run("check", "missions/night-round.yaml", "--method", "stored").out())
                 .contains("stored in arrays");
-        CheckCommandTest.Run both = CheckCommandTest.run("check", "missions/night-round.yaml", "--method", "stored",
+        CliRun both = CliRun.run("check", "missions/night-round.yaml", "--method", "stored",
                 "--verdict-only");
         assertThat(both.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(both.err()).contains("drop --method stored");
@@ -98,17 +99,17 @@ class CheckRouteTest {
         for (String[] args : new String[][] {{"check", noCharge.toString(), "--verdict-only"},
             {"check", "missions/night-round.yaml", "--verdict-only"},
             {"check", noCharge.toString(), "--verdict-only", "--method", "product"}}) {
-            CheckCommandTest.Run r = CheckCommandTest.run(args);
+            CliRun r = CliRun.run(args);
             assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
             assertThat(r.out()).startsWith("GUARANTEED: ").contains("Verdict only, not certified").contains("Safety:");
         }
-        CheckCommandTest.Run implicit = CheckCommandTest.run("check", "missions/night-round.yaml", "--verdict-only", "--json");
+        CliRun implicit = CliRun.run("check", "missions/night-round.yaml", "--verdict-only", "--json");
         JsonNode j = json(implicit);
         assertThat(j.get("method").asText()).isEqualTo("implicit-product");
         assertThat(j.get("certified").asBoolean()).isFalse();
         assertThat(j.get("exploredVertices").asLong()).isPositive();
         assertThat(j.get("forecastVertices").asLong()).isPositive();
-        CheckCommandTest.Run lost = CheckCommandTest.run("check", "missions/late-return.yaml", "--verdict-only");
+        CliRun lost = CliRun.run("check", "missions/late-return.yaml", "--verdict-only");
         assertThat(lost.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(lost.out()).startsWith("NOT GUARANTEED: ");
     }

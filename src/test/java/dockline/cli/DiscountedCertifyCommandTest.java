@@ -6,6 +6,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dockline.certify.DiscountedCertificate;
 import dockline.certify.DiscountedCertificateChecker;
+import dockline.fixtures.CliRun;
 import dockline.io.MissionLoader;
 import dockline.io.PolicyFiles;
 import dockline.model.Mission;
@@ -39,11 +40,11 @@ class DiscountedCertifyCommandTest {
 
     @Test
     void check_printsCertified_andTheWorstScoreEqualsTheCertificates() throws Exception {
-        CheckCommandTest.Run text = CheckCommandTest.run("check", "missions/discounted-trap.yaml");
+        CliRun text = CliRun.run("check", "missions/discounted-trap.yaml");
         assertThat(text.code()).as(text.err()).isEqualTo(ExitCodes.OK);
         assertThat(text.out()).contains("certified: true").contains("worst score exactly 16385/16384")
                 .contains(Caveats.block());
-        CheckCommandTest.Run json = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--json");
+        CliRun json = CliRun.run("check", "missions/discounted-trap.yaml", "--json");
         JsonNode j = new ObjectMapper().readTree(json.out());
         assertThat(j.get("certified").asBoolean()).isTrue();
         assertThat(j.get("certifiedLowestScore").asText()).isEqualTo(j.get("lowestScore").asText())
@@ -57,13 +58,13 @@ class DiscountedCertifyCommandTest {
                 new String[] {"--threshold", "-40"})) {
             List<String> args = new ArrayList<>(List.of("check", "missions/discounted-trap.yaml", "--json"));
             args.addAll(List.of(extra));
-            CheckCommandTest.Run r = CheckCommandTest.run(args.toArray(new String[0]));
+            CliRun r = CliRun.run(args.toArray(new String[0]));
             assertThat(r.code()).as(String.join(" ", extra) + r.err()).isEqualTo(ExitCodes.OK);
             JsonNode j = new ObjectMapper().readTree(r.out());
             assertThat(j.get("certified").asBoolean()).as(String.join(" ", extra)).isTrue();
             assertThat(j.get("certifiedLowestScore").asText()).isEqualTo(j.get("lowestScore").asText());
         }
-        CheckCommandTest.Run no = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--threshold", "6",
+        CliRun no = CliRun.run("check", "missions/discounted-trap.yaml", "--threshold", "6",
                 "--json");
         assertThat(no.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(new ObjectMapper().readTree(no.out()).get("certified").asBoolean()).isFalse();
@@ -75,7 +76,7 @@ class DiscountedCertifyCommandTest {
         Objective.Discounted o = (Objective.Discounted) m.objective();
         for (String name : List.of("trap.json", "trap.csv")) {
             Path f = dir.resolve(name);
-            CheckCommandTest.Run r = CheckCommandTest.run("export", "missions/discounted-trap.yaml", "--policy",
+            CliRun r = CliRun.run("export", "missions/discounted-trap.yaml", "--policy",
                     f.toString());
             assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
             assertThat(r.out()).contains("rows with the score memory").contains(Caveats.block());
@@ -99,7 +100,7 @@ class DiscountedCertifyCommandTest {
         Files.writeString(mission, Files.readString(Path.of("missions/discounted-trap.yaml"))
                 .replace("threshold: \"3/4\"", "threshold: 6"));
         Path f = dir.resolve("p.json");
-        CheckCommandTest.Run r = CheckCommandTest.run("export", mission.toString(), "--policy", f.toString());
+        CliRun r = CliRun.run("export", mission.toString(), "--policy", f.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).startsWith("NOT GUARANTEED:");
         assertThat(f).doesNotExist();

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.fixtures.CliRun;
 import dockline.report.Caveats;
 import org.junit.jupiter.api.Test;
 
@@ -17,7 +18,7 @@ class DiscountedCheckTest {
 
     @Test
     void trapDemo_guaranteed_andTheBaselinesPolicyNeverCompletes() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--also-optimise");
+        CliRun r = CliRun.run("check", "missions/discounted-trap.yaml", "--also-optimise");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).startsWith("GUARANTEED: Gauge reading, pump hall")
                 .contains("DS >= 3/4 (discount 2)")
@@ -29,14 +30,14 @@ class DiscountedCheckTest {
 
     @Test
     void trapDemo_atTheOptimum_notGuaranteed() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--threshold", "6");
+        CliRun r = CliRun.run("check", "missions/discounted-trap.yaml", "--threshold", "6");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).startsWith("NOT GUARANTEED:");
     }
 
     @Test
     void json_addsTheObjectiveAndTheComparatorSize() throws Exception {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/night-round.yaml", "--objective", "discounted",
+        CliRun r = CliRun.run("check", "missions/night-round.yaml", "--objective", "discounted",
                 "--discount", "2", "--threshold", "3/4", "--relation", ">=", "--json", "--also-optimise");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         JsonNode j = new ObjectMapper().readTree(r.out());
@@ -53,39 +54,39 @@ class DiscountedCheckTest {
 
     @Test
     void scoreOnly_dropsTheReserve() throws Exception {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--score-only", "--json");
+        CliRun r = CliRun.run("check", "missions/discounted-trap.yaml", "--score-only", "--json");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(new ObjectMapper().readTree(r.out()).get("reserveKept").asBoolean()).isFalse();
     }
 
     @Test
     void badUsage_exitsTwoWithAMessage() {
-        CheckCommandTest.Run a = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--relation", "=>");
+        CliRun a = CliRun.run("check", "missions/discounted-trap.yaml", "--relation", "=>");
         assertThat(a.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(a.err()).contains("--relation must be '>=' (at-least) or '>' (above)");
-        CheckCommandTest.Run b = CheckCommandTest.run("check", "missions/night-round.yaml", "--objective", "discounted");
+        CliRun b = CliRun.run("check", "missions/night-round.yaml", "--objective", "discounted");
         assertThat(b.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(b.err()).contains("needs --discount").contains("needs --threshold");
-        CheckCommandTest.Run c = CheckCommandTest.run("check", "missions/night-round.yaml", "--objective", "reserve",
+        CliRun c = CliRun.run("check", "missions/night-round.yaml", "--objective", "reserve",
                 "--discount", "2");
         assertThat(c.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        CheckCommandTest.Run d = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--threshold", "1/0");
+        CliRun d = CliRun.run("check", "missions/discounted-trap.yaml", "--threshold", "1/0");
         assertThat(d.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(d.err()).doesNotContain("Exception");
-        CheckCommandTest.Run e = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--discount", "1");
+        CliRun e = CliRun.run("check", "missions/discounted-trap.yaml", "--discount", "1");
         assertThat(e.code()).isEqualTo(ExitCodes.BAD_INPUT);
     }
 
     @Test
     void reserveObjectiveOverride_onADiscountedMission_checksTheReserve() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--objective", "reserve");
+        CliRun r = CliRun.run("check", "missions/discounted-trap.yaml", "--objective", "reserve");
         assertThat(r.code()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("Highest reserve floor guaranteed:");
     }
 
     @Test
     void hugeThreshold_isAResourceLimit() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/discounted-trap.yaml", "--threshold",
+        CliRun r = CliRun.run("check", "missions/discounted-trap.yaml", "--threshold",
                 "1/999999999999999999");
         assertThat(r.code()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(r.err()).doesNotContain("Exception");

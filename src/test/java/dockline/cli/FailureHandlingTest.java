@@ -1,11 +1,13 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.fixtures.CliRun;
 import dockline.model.ResourceLimitException;
 import dockline.solve.ProductOptions;
 import dockline.solve.ProductTooLargeException;
@@ -19,7 +21,6 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * Exit codes by type (issue 15, bullets 2-4): resource limits are 3 with the real size, the limit
@@ -31,19 +32,6 @@ class FailureHandlingTest {
 
     @TempDir
     Path dir;
-
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     private static String report(Throwable t, int[] code) {
         StringWriter w = new StringWriter();
@@ -97,7 +85,7 @@ class FailureHandlingTest {
     /** The refusal said "over the budget of 2048 MB" whatever -Xmx or --max-memory said. */
     @Test
     void theMemoryRefusal_namesTheBudgetThatApplied() {
-        Run r = run("check", "missions/night-round.yaml", "--max-memory", "1", "--method", "stored");
+        CliRun r = run("check", "missions/night-round.yaml", "--max-memory", "1", "--method", "stored");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(r.err()).contains("over the memory budget of 1 MB").contains("--max-memory")
                 .contains("maximum heap is " + (Runtime.getRuntime().maxMemory() >> 20) + " MB");
@@ -120,12 +108,12 @@ class FailureHandlingTest {
     @Test
     void outputsToADeviceOrALink_areRefusedWithExit2() throws IOException {
         assumeTrue(Files.exists(Path.of("/dev/null")));
-        Run r = run("export", "missions/night-round.yaml", "--policy", "/dev/null");
+        CliRun r = run("export", "missions/night-round.yaml", "--policy", "/dev/null");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("device");
         Path target = Files.writeString(dir.resolve("t.json"), "keep");
         Path link = Files.createSymbolicLink(dir.resolve("l.json"), target);
-        Run l = run("export", "missions/night-round.yaml", "--policy", link.toString());
+        CliRun l = run("export", "missions/night-round.yaml", "--policy", link.toString());
         assertThat(l.code()).as(l.err()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(Files.readString(target)).isEqualTo("keep");
         assertThat(Files.isSymbolicLink(link)).isTrue();
@@ -142,7 +130,7 @@ class FailureHandlingTest {
                 {"bench", "--sizes", "x"}}) {
             String[] withJson = java.util.Arrays.copyOf(args, args.length + 1);
             withJson[args.length] = "--json";
-            Run r = run(withJson);
+            CliRun r = run(withJson);
             assertThat(r.code()).as(String.join(" ", withJson) + "\n" + r.err()).isEqualTo(ExitCodes.BAD_INPUT);
             assertThat(r.err()).as("the text stays on stderr").isNotBlank();
             JsonNode j = om.readTree(r.out());

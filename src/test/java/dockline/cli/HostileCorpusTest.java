@@ -1,10 +1,10 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,7 +16,6 @@ import java.util.concurrent.TimeUnit;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * A mutation corpus of hostile map and mission files, generated here from the demo night round and
@@ -32,20 +31,6 @@ class HostileCorpusTest {
     Path dir;
 
     private static final Pattern LOCATED = Pattern.compile(".+?:\\d+:\\d+: .+ \\(hint: .+\\)");
-
-    record Run(int code, String out, String err, long millis) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        long t0 = System.nanoTime();
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString(), (System.nanoTime() - t0) / 1_000_000);
-    }
 
     /** One case: the mission's bytes and the map's bytes (null: the demo map as it is). */
     record Case(String name, byte[] mission, byte[] map) {
@@ -239,7 +224,7 @@ class HostileCorpusTest {
             }
             Files.write(mf, mb);
             for (String command : new String[] {"validate", "check"}) {
-                Run r = command.equals("check") ? run(command, mf.toString(), "--verdict-only") : run(command, mf.toString());
+                CliRun r = command.equals("check") ? run(command, mf.toString(), "--verdict-only") : run(command, mf.toString());
                 String tag = c.name() + " / " + command + " (exit " + r.code() + ", " + r.millis() + " ms)";
                 if (r.code() == ExitCodes.INTERNAL || r.code() < 0 || r.code() > ExitCodes.RESOURCE_LIMIT) {
                     failures.add(tag + ": " + r.err());

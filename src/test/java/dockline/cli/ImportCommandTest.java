@@ -1,17 +1,17 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dockline.fixtures.CliRun;
 import dockline.io.MapLoader;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.report.Caveats;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -21,7 +21,6 @@ import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * {@code dockline import} through the command line: the demo image gives the committed map, the
@@ -35,19 +34,6 @@ class ImportCommandTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    record Run(int exit, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int exit = cl.execute(args);
-        return new Run(exit, out.toString(), err.toString());
-    }
-
     private static final String[] DEMO_OPTIONS = {"--pixel-size", "0.1", "--cell-size", "0.3", "--robot-radius", "0.25",
         "--docks", "36,13;36,20", "--name", "Depot annex (demo, imported)"};
 
@@ -56,8 +42,8 @@ class ImportCommandTest {
         Path out = dir.resolve("depot-annex.yaml");
         String[] args = Stream.concat(Stream.of("import", "maps/depot-annex.pgm"),
                 Stream.concat(Stream.of(DEMO_OPTIONS), Stream.of("--out", out.toString()))).toArray(String[]::new);
-        Run r = run(args);
-        assertThat(r.exit()).as(r.err()).isZero();
+        CliRun r = run(args);
+        assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.err()).isEmpty();
         assertThat(Files.readString(out)).isEqualTo(Files.readString(Path.of("maps/depot-annex.yaml")));
         assertThat(r.out()).contains("map: 40 x 28 cells of 0.3 m (3 x 3 pixels each)")
@@ -72,28 +58,28 @@ class ImportCommandTest {
                 .contains("# options: --pixel-size 0.1 --cell-size 0.3 --occupied-at-most 25% --free-at-least 90%"
                         + " --robot-radius 0.25 --docks '36,13;36,20' --surface floor --name 'Depot annex (demo, imported)'")
                 .doesNotContain("zones:").doesNotContain("doors:");
-        Run v = run("validate", out.toString());
-        assertThat(v.exit()).as(v.err()).isZero();
+        CliRun v = run("validate", out.toString());
+        assertThat(v.code()).as(v.err()).isZero();
         assertThat(v.out()).contains("40 x 28 cells of 0.3 m (334 free), 0 zones, 2 docks, 0 doors");
     }
 
     @Test
     void demo_mission_verdicts_as_documented() {
         // missions/README.md: guaranteed from 35 %, 47 units needed; not from 30 %
-        Run ok = run("check", "missions/aisle-return.yaml", "--json");
-        assertThat(ok.exit()).as(ok.err()).isEqualTo(ExitCodes.OK);
+        CliRun ok = run("check", "missions/aisle-return.yaml", "--json");
+        assertThat(ok.code()).as(ok.err()).isEqualTo(ExitCodes.OK);
         assertThat(ok.out()).contains("\"startNeedUnits\" : 47").contains("\"lowestLevelUnits\" : 23")
                 .contains("\"highestReserveUnits\" : 23");
-        assertThat(run("check", "missions/aisle-return.yaml", "--start-charge", "30%").exit()).isEqualTo(ExitCodes.NOT_GUARANTEED);
+        assertThat(run("check", "missions/aisle-return.yaml", "--start-charge", "30%").code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
     }
 
     @Test
     void a_dock_cut_off_from_the_largest_area_is_warned_about_in_text_and_json() throws IOException {
         Path out = dir.resolve("m.yaml");
         // 3,10 is in the west strip that a speck of noise cuts off (maps/README.md)
-        Run r = run("import", "maps/depot-annex.pgm", "--pixel-size", "0.1", "--cell-size", "0.3", "--robot-radius", "0.25",
+        CliRun r = run("import", "maps/depot-annex.pgm", "--pixel-size", "0.1", "--cell-size", "0.3", "--robot-radius", "0.25",
                 "--docks", "3,10;36,13", "--out", out.toString(), "--json");
-        assertThat(r.exit()).as(r.err()).isZero();
+        assertThat(r.code()).as(r.err()).isZero();
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("imported").asBoolean()).isTrue();
         assertThat(j.get("freeCells").asInt()).isEqualTo(334);
@@ -196,8 +182,8 @@ class ImportCommandTest {
             dy++;
         }
         args[7] = typed.get(dy).indexOf('C') + "," + dy;
-        Run r = run(args);
-        assertThat(r.exit()).as(r.err()).isZero();
+        CliRun r = run(args);
+        assertThat(r.code()).as(r.err()).isZero();
         Path hand = dir.resolve("hand.yaml");
         Files.writeString(hand, handMap(typed));
 
@@ -221,17 +207,17 @@ class ImportCommandTest {
             Files.writeString(dir.resolve("on-imported.yaml"), mission("imported.yaml", sx, sy, chargeRate));
             Files.writeString(dir.resolve("on-hand.yaml"), mission("hand.yaml", sx, sy, chargeRate));
             for (String start : new String[] {"1", "2", "3", "4", "5", "6", "8", "10"}) {
-                Run ri = run("check", dir.resolve("on-imported.yaml").toString(), "--start-charge", start, "--json");
-                Run rh = run("check", dir.resolve("on-hand.yaml").toString(), "--start-charge", start, "--json");
-                assertThat(ri.exit()).as(ri.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
-                assertThat(ri.exit()).as("start " + start).isEqualTo(rh.exit());
+                CliRun ri = run("check", dir.resolve("on-imported.yaml").toString(), "--start-charge", start, "--json");
+                CliRun rh = run("check", dir.resolve("on-hand.yaml").toString(), "--start-charge", start, "--json");
+                assertThat(ri.code()).as(ri.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
+                assertThat(ri.code()).as("start " + start).isEqualTo(rh.code());
                 JsonNode ji = JSON.readTree(ri.out());
                 JsonNode jh = JSON.readTree(rh.out());
                 for (String key : new String[] {"verdict", "startNeedUnits", "lowestLevelUnits",
                     "highestReserveUnits"}) {
                     assertThat(String.valueOf(ji.get(key))).as(key + " from " + start).isEqualTo(String.valueOf(jh.get(key)));
                 }
-                if (ri.exit() == ExitCodes.OK) {
+                if (ri.code() == ExitCodes.OK) {
                     guaranteed++;
                 } else {
                     notGuaranteed++;
@@ -268,8 +254,8 @@ class ImportCommandTest {
         }
         Path out = dir.resolve("out.yaml");
         long t0 = System.nanoTime();
-        Run r = run("import", fifo.toString(), "--pixel-size", "0.1", "--cell-size", "0.3", "--out", out.toString());
-        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run("import", fifo.toString(), "--pixel-size", "0.1", "--cell-size", "0.3", "--out", out.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("not a regular file");
         assertThat(out).doesNotExist();
         assertThat(System.nanoTime() - t0).isLessThan(5_000_000_000L);
@@ -287,11 +273,11 @@ class ImportCommandTest {
 
     // ---- bad input: exit 2, a clear message, nothing written ----
 
-    private Run refused(String... args) {
+    private CliRun refused(String... args) {
         Path out = dir.resolve("never.yaml");
         String[] all = Stream.concat(Stream.of(args), Stream.of("--out", out.toString())).toArray(String[]::new);
-        Run r = run(all);
-        assertThat(r.exit()).as(r.out() + r.err()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run(all);
+        assertThat(r.code()).as(r.out() + r.err()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(out).doesNotExist();
         assertThat(r.err()).doesNotContain("Exception").doesNotContain("\tat ");
         try (Stream<Path> s = Files.list(dir)) {
@@ -310,9 +296,9 @@ class ImportCommandTest {
 
     @Test
     void unreadable_truncated_and_bad_maxval_images() throws IOException {
-        Run missing = refused("import", dir.resolve("none.pgm").toString(), "--pixel-size", "0.1", "--cell-size", "0.1");
+        CliRun missing = refused("import", dir.resolve("none.pgm").toString(), "--pixel-size", "0.1", "--cell-size", "0.1");
         assertThat(missing.err()).contains("none.pgm: cannot read the image: it does not exist");
-        Run folder = refused("import", dir.toString(), "--pixel-size", "0.1", "--cell-size", "0.1");
+        CliRun folder = refused("import", dir.toString(), "--pixel-size", "0.1", "--cell-size", "0.1");
         assertThat(folder.err()).contains(": cannot read the image: it is a folder");
         Path cut = file("cut.pgm", "P5\n4 4\n255\nabc".getBytes(StandardCharsets.US_ASCII));
         assertThat(refused("import", cut.toString(), "--pixel-size", "0.1", "--cell-size", "0.1").err())
@@ -335,27 +321,27 @@ class ImportCommandTest {
     void cell_size_must_be_a_whole_multiple_of_the_pixel_size() throws IOException {
         Path img = file("room.pgm", pgm(ROOM));
         // 0.3 / 0.2 = 1.5 pixels: exact decimal arithmetic, no binary rounding (0.3 / 0.1 is exactly 3)
-        Run r = refused("import", img.toString(), "--pixel-size", "0.2", "--cell-size", "0.3");
+        CliRun r = refused("import", img.toString(), "--pixel-size", "0.2", "--cell-size", "0.3");
         assertThat(r.err()).contains("--cell-size 0.3: the cell size 0.3 m is not a whole multiple of the pixel size 0.2 m"
                 + " (hint: a cell covers whole pixels; try --cell-size 0.2 or 0.4)");
         assertThat(refused("import", img.toString(), "--pixel-size", "0.5", "--cell-size", "0.25").err())
                 .contains("try --cell-size 0.5");
         // every option problem at once
-        Run all = refused("import", img.toString(), "--pixel-size", "abc", "--cell-size", "0", "--docks", "1;2,x",
+        CliRun all = refused("import", img.toString(), "--pixel-size", "abc", "--cell-size", "0", "--docks", "1;2,x",
                 "--free-at-least", "lots");
         assertThat(all.err().lines().filter(l -> l.startsWith("dockline import: ")).count()).isEqualTo(5);
         assertThat(run("import", img.toString(), "--pixel-size", "0.1", "--cell-size", "0.3", "--out",
-                dir.resolve("ok.yaml").toString()).exit()).isZero();
+                dir.resolve("ok.yaml").toString()).code()).isZero();
     }
 
     @Test
     void a_radius_larger_than_the_map_and_docks_on_occupied_cells_or_outside() throws IOException {
         Path img = file("room.pgm", pgm(ROOM));
         // the room is 14 x 9 cells of 0.2 m: 2.8 x 1.8 m
-        Run wide = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--robot-radius", "1");
+        CliRun wide = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--robot-radius", "1");
         assertThat(wide.err()).isEqualTo(img + ": the robot (radius 1 m) is wider than the whole map (2.8 x 1.8 m)"
                 + " (hint: --robot-radius is in metres, like --pixel-size and --cell-size)" + System.lineSeparator());
-        Run docks = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--robot-radius", "0.15",
+        CliRun docks = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--robot-radius", "0.15",
                 "--docks", "0,0;14,2;1,1;6,4;3,3");
         List<String> lines = docks.err().lines().toList();
         assertThat(lines).containsExactly(
@@ -367,7 +353,7 @@ class ImportCommandTest {
                         + " dock further from walls, or check --robot-radius)",
                 img + ": dock 6:4 is on an occupied cell: pixels 24..27 by 16..19 are not all free (hint: put the dock on a"
                         + " free cell, or check the thresholds and --invert)");
-        Run json = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--docks", "0,0", "--json");
+        CliRun json = refused("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--docks", "0,0", "--json");
         JsonNode j = JSON.readTree(json.out());
         assertThat(j.get("imported").asBoolean()).isFalse();
         assertThat(j.get("problems").get(0).get("message").asText()).startsWith("dock 0:0 is on an occupied cell");
@@ -378,19 +364,19 @@ class ImportCommandTest {
     void never_over_the_input_and_an_existing_map_survives_a_failed_import() throws IOException {
         Path img = file("room.pgm", pgm(ROOM));
         byte[] before = Files.readAllBytes(img);
-        Run r = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--out", img.toString());
-        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--out", img.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("that is the input image");
         assertThat(Files.readAllBytes(img)).isEqualTo(before);
         Path old = dir.resolve("old.yaml");
         Files.writeString(old, "kept\n");
-        Run bad = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--docks", "0,0",
+        CliRun bad = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--docks", "0,0",
                 "--out", old.toString());
-        assertThat(bad.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(Files.readString(old)).isEqualTo("kept\n");
-        Run noFolder = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--out",
+        CliRun noFolder = run("import", img.toString(), "--pixel-size", "0.05", "--cell-size", "0.2", "--out",
                 dir.resolve("missing/m.yaml").toString());
-        assertThat(noFolder.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(noFolder.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(noFolder.err()).contains("does not exist");
     }
 
@@ -399,22 +385,22 @@ class ImportCommandTest {
         // a 2 x 1 bitmap, one cell per pixel: black | white; inverted, the black pixel is the free one
         Path pbm = file("two.pbm", "P1\n2 1\n1 0\n".getBytes(StandardCharsets.US_ASCII));
         Path out = dir.resolve("two.yaml");
-        assertThat(run("import", pbm.toString(), "--pixel-size", "1", "--cell-size", "1", "--out", out.toString()).exit()).isZero();
+        assertThat(run("import", pbm.toString(), "--pixel-size", "1", "--cell-size", "1", "--out", out.toString()).code()).isZero();
         assertThat(Files.readString(out)).contains("plan: |\n  #.\n");
         assertThat(run("import", pbm.toString(), "--pixel-size", "1", "--cell-size", "1", "--invert", "--out",
-                out.toString()).exit()).isZero();
+                out.toString()).code()).isZero();
         assertThat(Files.readString(out)).contains("plan: |\n  .#\n").contains("--invert");
         // grey levels as levels and as percentages; between the two is unknown (a wall)
         Path pgm = file("three.pgm", "P2\n3 1\n100\n20 50 95\n".getBytes(StandardCharsets.US_ASCII));
         assertThat(run("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--occupied-at-most", "20",
-                "--free-at-least", "50%", "--out", out.toString()).exit()).isZero();
+                "--free-at-least", "50%", "--out", out.toString()).code()).isZero();
         assertThat(Files.readString(out)).contains("plan: |\n  #..\n");
         assertThat(run("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--free-at-least", "51%",
-                "--out", out.toString()).exit()).isZero();
+                "--out", out.toString()).code()).isZero();
         assertThat(Files.readString(out)).contains("plan: |\n  ##.\n");
-        Run above = refused("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--free-at-least", "101");
+        CliRun above = refused("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--free-at-least", "101");
         assertThat(above.err()).contains("level 101 is above the image's maxval 100");
-        Run crossed = refused("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--occupied-at-most", "60%",
+        CliRun crossed = refused("import", pgm.toString(), "--pixel-size", "1", "--cell-size", "1", "--occupied-at-most", "60%",
                 "--free-at-least", "60%");
         assertThat(crossed.err()).contains("must be below the free bound");
     }

@@ -9,6 +9,7 @@ import com.networknt.schema.JsonSchema;
 import com.networknt.schema.JsonSchemaFactory;
 import com.networknt.schema.SpecVersion;
 import com.networknt.schema.ValidationMessage;
+import dockline.fixtures.CliRun;
 import java.io.File;
 import java.io.InputStream;
 import java.nio.file.Files;
@@ -54,7 +55,7 @@ class JsonOutputSchemaTest {
     }
 
     private static JsonNode command(String schema, int exit, String... args) throws Exception {
-        CheckCommandTest.Run r = CheckCommandTest.run(args);
+        CliRun r = CliRun.run(args);
         assertThat(r.code()).as(String.join(" ", args) + "\n" + r.err()).isEqualTo(exit);
         return valid(schema, r.out());
     }
@@ -279,7 +280,7 @@ class JsonOutputSchemaTest {
     /** The schemas can fail: a key under an earlier name, or a missing key, is a problem. */
     @Test
     void schemas_rejectOtherNames_andMissingKeys() throws Exception {
-        ObjectNode o = (ObjectNode) JSON.readTree(CheckCommandTest.run("check", "missions/night-round.yaml",
+        ObjectNode o = (ObjectNode) JSON.readTree(CliRun.run("check", "missions/night-round.yaml",
                 "--json").out());
         ObjectNode renamed = o.deepCopy();
         renamed.set("worstCaseMinimumUnits", renamed.remove("lowestLevelUnits"));

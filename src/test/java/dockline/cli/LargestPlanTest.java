@@ -2,14 +2,14 @@ package dockline.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import dockline.io.MapLoader;
-import java.io.File;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -50,21 +50,10 @@ class LargestPlanTest {
                 objective:
                   kind: reserve
                 """);
-        List<String> cmd = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx256m",
-                "-cp", System.getProperty("java.class.path"), "dockline.cli.Main", "check", mission.toString());
-        ProcessBuilder pb = new ProcessBuilder(cmd);
-        pb.environment().remove("JAVA_TOOL_OPTIONS");
-        File out = dir.resolve("out.txt").toFile();
-        pb.redirectErrorStream(true);
-        pb.redirectOutput(out);
-        Process p = pb.start();
-        boolean done = p.waitFor(5, TimeUnit.MINUTES);
-        if (!done) {
-            p.destroyForcibly();
-        }
-        String text = Files.readString(out.toPath());
-        assertThat(done).as("check finished:\n%s", text).isTrue();
-        assertThat(p.exitValue()).as(text).isEqualTo(ExitCodes.RESOURCE_LIMIT);
+        CliRun.Forked p = CliRun.fork(dir, Duration.ofMinutes(5), List.of("-Xmx256m"), "check", mission.toString());
+        String text = p.all();
+        assertThat(p.finished()).as("check finished:\n%s", text).isTrue();
+        assertThat(p.code()).as(text).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(text).contains(3 * free + " robot positions (" + free + " free cells x 3 disturbance states)")
                 .contains("more than the JVM's maximum heap of 256 MB (set by -Xmx)").contains("hint: give the JVM more memory")
                 .doesNotContain("Java heap space").doesNotContain("ran out of memory").doesNotContain("Exception");

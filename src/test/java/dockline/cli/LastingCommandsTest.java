@@ -2,6 +2,7 @@ package dockline.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -33,7 +34,7 @@ class LastingCommandsTest {
         Files.writeString(tmp.resolve("m.yaml"), Files.readString(Path.of("missions/vault-check.yaml"))
                 .replace("../maps/herbarium-annex.yaml", "hall.yaml").replace("  visit: [seed-vault]\n", ""));
         long t0 = System.nanoTime();
-        CheckCommandTest.Run r = CheckCommandTest.run("check", tmp.resolve("m.yaml").toString());
+        CliRun r = CliRun.run("check", tmp.resolve("m.yaml").toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.RESOURCE_LIMIT);
         assertThat(r.err()).contains("robot vertices", "disturbance states", "duration: momentary", "at-most");
         assertThat(System.nanoTime() - t0).as("refused quickly").isLessThan(60_000_000_000L);
@@ -42,7 +43,7 @@ class LastingCommandsTest {
     /** missions/README.md, "The shut fire door": not guaranteed as written, highest 4 units. */
     @Test
     void vaultCheck_isNotGuaranteed_exit1() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/vault-check.yaml");
+        CliRun r = CliRun.run("check", "missions/vault-check.yaml");
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("Highest reserve floor guaranteed:      4 units = 2 Wh (5%)").contains("Safety: ");
     }

@@ -1,11 +1,11 @@
 package dockline.cli;
 
-import static dockline.cli.CheckCommandTest.run;
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import dockline.cli.CheckCommandTest.Run;
+import dockline.fixtures.CliRun;
 import dockline.io.PolicyFiles;
 import dockline.report.Caveats;
 import java.nio.file.Files;
@@ -36,7 +36,7 @@ class NewUserRegressionTest {
     @Test
     void export_intoAMissingFolder_isRefused_andCreatesNothing() {
         Path target = dir.resolve("typo").resolve("sub").resolve("p.json");
-        Run r = run("export", NIGHT, "--policy", target.toString());
+        CliRun r = run("export", NIGHT, "--policy", target.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).startsWith("dockline: --policy " + target + ": the folder ").contains("does not exist")
                 .doesNotContain(".part").doesNotContain("Exception");
@@ -53,11 +53,11 @@ class NewUserRegressionTest {
         byte[] mission = Files.readAllBytes(Path.of(NIGHT));
         byte[] map = Files.readAllBytes(Path.of("maps/clinic-wing.yaml"));
         for (String target : new String[] {NIGHT, "maps/clinic-wing.yaml", "missions/../maps/clinic-wing.yaml"}) {
-            Run r = run("export", NIGHT, "--policy", target);
+            CliRun r = run("export", NIGHT, "--policy", target);
             assertThat(r.code()).as(target).isEqualTo(ExitCodes.BAD_INPUT);
             assertThat(r.err()).contains("input file of this mission");
         }
-        Run replay = run("replay", NIGHT, "--csv", NIGHT);
+        CliRun replay = run("replay", NIGHT, "--csv", NIGHT);
         assertThat(replay.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(Files.readAllBytes(Path.of(NIGHT))).isEqualTo(mission);
         assertThat(Files.readAllBytes(Path.of("maps/clinic-wing.yaml"))).isEqualTo(map);
@@ -70,10 +70,10 @@ class NewUserRegressionTest {
      */
     @Test
     void outputThatIsAFolderOrEmpty_isRefusedBeforeSolving_inPlainWords() {
-        Run folder = run("replay", NIGHT, "--csv", dir.toString());
+        CliRun folder = run("replay", NIGHT, "--csv", dir.toString());
         assertThat(folder.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(folder.err().trim()).isEqualTo("dockline: --csv " + dir + ": it is a folder, not a file");
-        Run empty = run("margin", NIGHT, "--json-file", "");
+        CliRun empty = run("margin", NIGHT, "--json-file", "");
         assertThat(empty.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(empty.err().trim()).isEqualTo("dockline: --json-file '': the file name is empty");
         assertThat(run("export", NIGHT, "--policy", "").err()).contains("the file name is empty");
@@ -107,7 +107,7 @@ class NewUserRegressionTest {
     @Test
     void replay_forceWithNoEvent_isExit2() {
         for (String f : new String[] {"", ",", " , "}) {
-            Run r = run("replay", NIGHT, "--force", f);
+            CliRun r = run("replay", NIGHT, "--force", f);
             assertThat(r.code()).as("'" + f + "'").isEqualTo(ExitCodes.BAD_INPUT);
             assertThat(r.err()).contains("names no event").contains("STEP:EVENT");
             assertThat(r.out()).isEmpty();
@@ -120,7 +120,7 @@ class NewUserRegressionTest {
      */
     @Test
     void budgetOverride_aboveTheMapLimit_isExit2() {
-        Run r = run("check", NIGHT, "--budget", "1000000");
+        CliRun r = run("check", NIGHT, "--budget", "1000000");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err().trim()).isEqualTo("dockline: --budget must be a whole number from 0 to 1000, not 1000000");
         assertThat(run("margin", NIGHT, "--budget", "-1").err()).contains("from 0 to 1000, not -1");
@@ -129,7 +129,7 @@ class NewUserRegressionTest {
     /** {@code --start-charge 10 Wh} unquoted said only "Unmatched argument at index 4: 'Wh'"; it says how to write it now. */
     @Test
     void unquotedAmountWithUnit_getsAHint() {
-        Run r = run("check", NIGHT, "--start-charge", "10", "Wh");
+        CliRun r = run("check", NIGHT, "--start-charge", "10", "Wh");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("Unmatched argument").contains("write 12Wh, or '12 Wh' in quotes");
         assertThat(run("check", NIGHT, "--start-charge", "30Wh").code()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
@@ -142,11 +142,11 @@ class NewUserRegressionTest {
     @Test
     void startChargeBelowTheFloor_isBadInputLikeInTheFile() {
         // night-round: 60 Wh battery, reserve 20 % = 12 Wh
-        Run r = run("check", NIGHT, "--start-charge", "10Wh");
+        CliRun r = run("check", NIGHT, "--start-charge", "10Wh");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("the reserve floor (12 Wh) is above the starting charge (10 Wh)")
                 .contains("raise --start-charge").doesNotContain("Exception");
-        Run both = run("margin", NIGHT, "--start-charge", "50%", "--reserve", "60%");
+        CliRun both = run("margin", NIGHT, "--start-charge", "50%", "--reserve", "60%");
         assertThat(both.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(both.err()).contains("lower --reserve or raise --start-charge");
     }
@@ -157,7 +157,7 @@ class NewUserRegressionTest {
      */
     @Test
     void mapGivenAsMission_isOneClearLine() {
-        Run r = run("check", "maps/clinic-wing.yaml");
+        CliRun r = run("check", "maps/clinic-wing.yaml");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err().lines().toList()).hasSize(1);
         assertThat(r.err()).startsWith("maps/clinic-wing.yaml:").contains("this is a map file, not a mission");
@@ -169,7 +169,7 @@ class NewUserRegressionTest {
         Path m = dir.resolve("m.yaml");
         Files.writeString(m, Files.readString(Path.of(NIGHT)).replace("map: ../maps/clinic-wing.yaml",
                 "map: " + Path.of("maps").toAbsolutePath()));
-        Run r = run("validate", m.toString());
+        CliRun r = run("validate", m.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("is a folder, not a map file").doesNotContain("not found");
     }
@@ -192,7 +192,7 @@ class NewUserRegressionTest {
             List<String> a = new ArrayList<>(List.of(args));
             a.add(1, m.toString());
             a.addAll(List.of("--reserve", "100%", "--start-charge", "100%"));
-            Run r = run(a.toArray(String[]::new));
+            CliRun r = run(a.toArray(String[]::new));
             assertThat(r.code()).as(args[0]).isEqualTo(ExitCodes.BAD_INPUT);
             messages.add(r.err());
         }
@@ -230,7 +230,7 @@ class NewUserRegressionTest {
             {"margin", NIGHT, "--json"}, {"export", "missions/late-return.yaml", "--policy", policy + ".x", "--json"},
             {"check", "missions/late-return.yaml", "--json"}, {"check", "missions/late-return.yaml", "--json", "--verdict-only"}};
         for (String[] args : runs) {
-            Run r = run(args);
+            CliRun r = run(args);
             assertThat(r.code()).as(String.join(" ", args) + r.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
             JsonNode j = om.readTree(r.out());
             assertThat(j.get("caveats")).as(args[0]).hasSize(Caveats.LINES.size());
@@ -249,7 +249,7 @@ class NewUserRegressionTest {
     @Test
     void validateJson_carriesTheProblems() throws Exception {
         Path bad = Files.writeString(dir.resolve("bad.yaml"), "name: x\nmap: ../nowhere.yaml\n");
-        Run r = run("validate", "--json", bad.toString());
+        CliRun r = run("validate", "--json", bad.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).containsPattern("bad\\.yaml:\\d+:\\d+: ");
         JsonNode j = new ObjectMapper().readTree(r.out());
@@ -263,7 +263,7 @@ class NewUserRegressionTest {
     @Test
     void jsonFile_equalsThePrintedJson() throws Exception {
         Path file = dir.resolve("m.json");
-        Run text = run("margin", NIGHT, "--json-file", file.toString());
+        CliRun text = run("margin", NIGHT, "--json-file", file.toString());
         assertThat(text.out()).contains("Safety: ");
         JsonNode printed = new ObjectMapper().readTree(run("margin", NIGHT, "--json").out());
         JsonNode written = new ObjectMapper().readTree(file.toFile());
@@ -285,7 +285,7 @@ class NewUserRegressionTest {
     void export_certifiesBeforeWriting() throws Exception {
         for (String mission : new String[] {NIGHT, "missions/discounted-trap.yaml"}) {
             Path f = dir.resolve(Path.of(mission).getFileName() + ".json");
-            Run r = run("export", mission, "--policy", f.toString());
+            CliRun r = run("export", mission, "--policy", f.toString());
             assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
             assertThat(r.out()).contains("certified: true").contains(Caveats.block());
             PolicyFiles.Document d = PolicyFiles.read(f);
@@ -309,7 +309,7 @@ class NewUserRegressionTest {
         for (String c : new String[] {"validate", "check", "export", "replay", "margin"}) {
             String first = cl.getSubcommands().get(c).getCommandSpec().usageMessage().description()[0];
             assertThat(first).as(c).endsWith(".");
-            Run help = run(c, "--help");
+            CliRun help = run(c, "--help");
             assertThat(help.code()).isZero();
             assertThat(help.err()).as(c).isEmpty();
             assertThat(help.out()).as(c).doesNotContain("%%").doesNotContain("%n").contains("--json").contains("Exit codes:");
@@ -323,7 +323,7 @@ class NewUserRegressionTest {
      */
     @Test
     void threshold_outOfRange_isToldApartFromBadSyntax() {
-        Run big = run("check", "missions/discounted-trap.yaml", "--threshold", "99999999999999999999999");
+        CliRun big = run("check", "missions/discounted-trap.yaml", "--threshold", "99999999999999999999999");
         assertThat(big.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(big.err()).contains("is out of range").contains("64-bit").doesNotContain("not a rational");
         assertThat(run("check", "missions/discounted-trap.yaml", "--threshold", "1/0").err()).contains("denominator not 0");

@@ -2,6 +2,7 @@ package dockline.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
 import dockline.plan.MissionPlanner;
@@ -161,7 +162,7 @@ class ProgressLineTest {
     @Test
     void onATerminalCheckShowsProgressAndErasesIt() {
         ProgressLine.terminal = () -> true;
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/night-round.yaml");
+        CliRun r = CliRun.run("check", "missions/night-round.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.err()).startsWith("\rdockline: building the move graph  0 %");
         assertThat(r.err()).endsWith("\r");
@@ -172,9 +173,9 @@ class ProgressLineTest {
     @Test
     void noProgressWithoutATerminalOrWithJsonOrQuiet() throws Exception {
         ProgressLine.terminal = () -> false;
-        assertThat(CheckCommandTest.run("check", "missions/night-round.yaml").err()).isEmpty();
+        assertThat(CliRun.run("check", "missions/night-round.yaml").err()).isEmpty();
         ProgressLine.terminal = () -> true;
-        CheckCommandTest.Run json = CheckCommandTest.run("check", "missions/night-round.yaml", "--json");
+        CliRun json = CliRun.run("check", "missions/night-round.yaml", "--json");
         assertThat(json.err()).isEmpty();
         assertThat(json.out()).doesNotContain("\r", "%  ");
         Path policy = dir.resolve("p.yaml");
@@ -184,7 +185,7 @@ class ProgressLineTest {
                 new String[] {"margin", "missions/night-round.yaml", "--quiet"},
                 new String[] {"replay", "missions/night-round.yaml", "--csv", csv.toString(), "--quiet"},
                 new String[] {"check", "missions/late-return.yaml", "--quiet"})) {
-            CheckCommandTest.Run r = CheckCommandTest.run(args);
+            CliRun r = CliRun.run(args);
             assertThat(r.code()).as(String.join(" ", args) + "\n" + r.err()).isIn(ExitCodes.OK, ExitCodes.NOT_GUARANTEED);
             assertThat(r.err()).as(String.join(" ", args)).doesNotContain("\r");
         }

@@ -1,39 +1,23 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import java.awt.image.BufferedImage;
-import java.io.File;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
+import java.time.Duration;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** {@code dockline render}: a PNG of the asked size with no display; bad input writes nothing. */
 class RenderCommandTest {
 
     @TempDir
     Path tmp;
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     /**
      * Runs the command in a fresh JVM whose environment has no display and no JavaFX platform
@@ -42,32 +26,11 @@ class RenderCommandTest {
     @Test
     void renders_a_png_of_the_asked_size_in_a_jvm_without_a_display() throws Exception {
         Path png = tmp.resolve("night.png");
-        List<String> cmd = new ArrayList<>();
-        cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
-        cmd.add("-cp");
-        cmd.add(System.getProperty("java.class.path"));
-        cmd.add("dockline.cli.Main");
-        cmd.add("render");
-        cmd.add("missions/night-round.yaml");
-        cmd.add("--out");
-        cmd.add(png.toString());
-        cmd.add("--size");
-        cmd.add("900x600");
-        ProcessBuilder pb = new ProcessBuilder(cmd);
-        pb.environment().remove("DISPLAY");
-        pb.environment().remove("WAYLAND_DISPLAY");
-        pb.environment().remove("JAVA_TOOL_OPTIONS");
-        pb.redirectErrorStream(true);
-        File log = tmp.resolve("log.txt").toFile();
-        pb.redirectOutput(log);
-        Process p = pb.start();
-        boolean done = p.waitFor(5, TimeUnit.MINUTES);
-        if (!done) {
-            p.destroyForcibly();
-        }
-        String text = Files.readString(log.toPath());
-        assertThat(done).as("render finished; output:\n%s", text).isTrue();
-        assertThat(p.exitValue()).as(text).isEqualTo(ExitCodes.OK);
+        CliRun.Forked p = CliRun.fork(tmp, Duration.ofMinutes(5), List.of(), "render", "missions/night-round.yaml",
+                "--out", png.toString(), "--size", "900x600");
+        String text = p.all();
+        assertThat(p.finished()).as("render finished; output:\n%s", text).isTrue();
+        assertThat(p.code()).as(text).isEqualTo(ExitCodes.OK);
         assertThat(text).contains("wrote ").contains("Guaranteed").contains("Safety:");
         BufferedImage img = ImageIO.read(png.toFile());
         assertThat(img.getWidth()).isEqualTo(900);
@@ -77,7 +40,7 @@ class RenderCommandTest {
     @Test
     void a_bad_size_is_refused_and_nothing_is_written() {
         Path png = tmp.resolve("x.png");
-        Run r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--size", "big");
+        CliRun r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--size", "big");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("--size").contains("WIDTHxHEIGHT");
         assertThat(png).doesNotExist();
@@ -85,7 +48,7 @@ class RenderCommandTest {
 
     @Test
     void an_unknown_layer_is_refused() {
-        Run r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--layer", "fog");
+        CliRun r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--layer", "fog");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("unknown overlay 'fog'");
     }
@@ -95,7 +58,7 @@ class RenderCommandTest {
         Path bad = tmp.resolve("bad.yaml");
         Files.writeString(bad, "name: broken\nmap: nowhere.yaml\nrobot: 3\n");
         Path png = tmp.resolve("x.png");
-        Run r = run("render", bad.toString(), "--out", png.toString());
+        CliRun r = run("render", bad.toString(), "--out", png.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).containsPattern("bad\\.yaml:\\d+:\\d+: ");
         assertThat(png).doesNotExist();
@@ -103,7 +66,7 @@ class RenderCommandTest {
 
     @Test
     void a_reserve_above_the_capacity_is_refused() {
-        Run r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--reserve", "70 Wh");
+        CliRun r = run("render", "missions/night-round.yaml", "--out", tmp.resolve("x.png").toString(), "--reserve", "70 Wh");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("--reserve").contains("capacity");
     }
@@ -112,7 +75,7 @@ class RenderCommandTest {
     @Test
     void a_reserve_above_the_starting_charge_is_refused_and_nothing_is_written() {
         Path png = tmp.resolve("above-start.png");
-        Run r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--reserve", "90%");
+        CliRun r = run("render", "missions/night-round.yaml", "--out", png.toString(), "--reserve", "90%");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("above the starting charge").contains("lower --reserve");
         assertThat(png).doesNotExist();
@@ -120,9 +83,9 @@ class RenderCommandTest {
 
     @Test
     void view_and_render_are_listed_with_help() {
-        Run r = run("--help");
+        CliRun r = run("--help");
         assertThat(r.out()).contains("view").contains("render");
-        Run h = run("render", "--help");
+        CliRun h = run("render", "--help");
         assertThat(h.out()).contains("--out").contains("--size").contains("--layer");
         assertThat(h.code()).isEqualTo(ExitCodes.OK);
     }
@@ -140,13 +103,13 @@ class RenderCommandTest {
         Files.writeString(mission, Files.readString(Path.of("missions/night-round.yaml"))
                 .replace("../maps/clinic-wing.yaml", "clinic-wing.yaml"));
         byte[] before = Files.readAllBytes(mission);
-        Run self = run("render", mission.toString(), "--out", mission.toString());
+        CliRun self = run("render", mission.toString(), "--out", mission.toString());
         assertThat(self.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(self.err()).contains("input file");
         assertThat(Files.readAllBytes(mission)).isEqualTo(before);
-        Run ofMap = run("render", mission.toString(), "--out", map.toString());
+        CliRun ofMap = run("render", mission.toString(), "--out", map.toString());
         assertThat(ofMap.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        Run missing = run("render", mission.toString(), "--out", tmp.resolve("no-such-folder/x.png").toString());
+        CliRun missing = run("render", mission.toString(), "--out", tmp.resolve("no-such-folder/x.png").toString());
         assertThat(missing.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(tmp.resolve("no-such-folder")).doesNotExist();
     }

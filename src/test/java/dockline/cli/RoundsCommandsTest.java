@@ -9,6 +9,7 @@ import dockline.arena.ArenaCompiler;
 import dockline.certify.DeadlineCertificateChecker;
 import dockline.certify.PatrolCertificateChecker;
 import dockline.certify.RoundsCertificate;
+import dockline.fixtures.CliRun;
 import dockline.io.InputException;
 import dockline.io.MissionLoader;
 import dockline.io.PolicyFiles;
@@ -45,7 +46,7 @@ class RoundsCommandsTest {
         return p;
     }
 
-    private static JsonNode json(CheckCommandTest.Run r) throws Exception {
+    private static JsonNode json(CliRun r) throws Exception {
         return JSON.readTree(r.out());
     }
 
@@ -53,7 +54,7 @@ class RoundsCommandsTest {
     void exportedPatrolPolicy_readBack_passesTheIndependentCertificate() throws Exception {
         for (String name : new String[] {"patrol.json", "patrol.csv"}) {
             Path file = dir.resolve(name);
-            CheckCommandTest.Run r = CheckCommandTest.run("export", "missions/night-patrol.yaml", "--policy",
+            CliRun r = CliRun.run("export", "missions/night-patrol.yaml", "--policy",
                     file.toString());
             assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
             assertThat(r.out()).contains("Wrote the patrol policy").contains("longest lap").contains("Safety:");
@@ -66,7 +67,7 @@ class RoundsCommandsTest {
             RoundsCertificate c = PatrolCertificateChecker.check(arena, doc.policy(), doc.header().floorUnits(),
                     m.startUnits());
             assertThat(c.ok()).as(c.reason()).isTrue();
-            JsonNode check = json(CheckCommandTest.run("check", "missions/night-patrol.yaml", "--json"));
+            JsonNode check = json(CliRun.run("check", "missions/night-patrol.yaml", "--json"));
             assertThat(c.worstMinimumUnits()).isEqualTo(check.get("lowestLevelUnits").asInt());
             assertThat(c.longestLapTicks()).isEqualTo(check.get("longestLapTicks").asInt());
         }
@@ -76,7 +77,7 @@ class RoundsCommandsTest {
     void exportedDeadlinePolicy_readBack_docksInTime() throws Exception {
         Path mission = earlyClean(dir, "3 min");
         Path file = dir.resolve("clean.csv");
-        CheckCommandTest.Run r = CheckCommandTest.run("export", mission.toString(), "--policy", file.toString());
+        CliRun r = CliRun.run("export", mission.toString(), "--policy", file.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         PolicyFiles.Document doc = PolicyFiles.read(file);
         assertThat(doc.header().rounds().orElseThrow().deadlineTicks()).isEqualTo(45);
@@ -87,7 +88,7 @@ class RoundsCommandsTest {
         assertThat(c.longestLapTicks()).isLessThanOrEqualTo(45);
         // the demo's own deadline is missed: nothing is written
         Path none = dir.resolve("none.json");
-        CheckCommandTest.Run late = CheckCommandTest.run("export", "missions/early-clean.yaml", "--policy",
+        CliRun late = CliRun.run("export", "missions/early-clean.yaml", "--policy",
                 none.toString());
         assertThat(late.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(none).doesNotExist();
@@ -96,7 +97,7 @@ class RoundsCommandsTest {
     @Test
     void policyFileGoal_badValues_areLocatedWithAHint() throws Exception {
         Path file = dir.resolve("p.json");
-        assertThat(CheckCommandTest.run("export", "missions/night-patrol.yaml", "--policy", file.toString()).code())
+        assertThat(CliRun.run("export", "missions/night-patrol.yaml", "--policy", file.toString()).code())
                 .isEqualTo(ExitCodes.OK);
         String text = Files.readString(file);
         Path bad = dir.resolve("bad.json");
@@ -121,25 +122,25 @@ class RoundsCommandsTest {
 
     @Test
     void patrolMargin_isCheckHighestFloor() throws Exception {
-        JsonNode check = json(CheckCommandTest.run("check", "missions/night-patrol.yaml", "--json"));
-        CheckCommandTest.Run r = CheckCommandTest.run("margin", "missions/night-patrol.yaml", "--json");
+        JsonNode check = json(CliRun.run("check", "missions/night-patrol.yaml", "--json"));
+        CliRun r = CliRun.run("margin", "missions/night-patrol.yaml", "--json");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         JsonNode mj = json(r);
         assertThat(mj.get("highestReserveUnits").asInt()).isEqualTo(check.get("highestReserveUnits").asInt());
-        CheckCommandTest.Run text = CheckCommandTest.run("margin", "missions/night-patrol.yaml");
+        CliRun text = CliRun.run("margin", "missions/night-patrol.yaml");
         assertThat(text.out()).contains("highest reserve floor guaranteed from this start: "
                 + check.get("highestReserveUnits").asInt() + " units").contains("Safety:");
     }
 
     @Test
     void deadlineMargin_isTheTightestDeadlineAndTheHighestFloor() throws Exception {
-        JsonNode check = json(CheckCommandTest.run("check", "missions/early-clean.yaml", "--json"));
-        CheckCommandTest.Run r = CheckCommandTest.run("margin", "missions/early-clean.yaml");
+        JsonNode check = json(CliRun.run("check", "missions/early-clean.yaml", "--json"));
+        CliRun r = CliRun.run("margin", "missions/early-clean.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         // missions/README.md: the early clean needs 43 turns = 2 min 52 s, its deadline is 37 turns
         assertThat(r.out()).contains("tightest deadline guaranteed at this floor: 43 turns = 2 min 52 s")
                 .contains("allow a deadline of at least");
-        JsonNode mj = json(CheckCommandTest.run("margin", "missions/early-clean.yaml", "--json"));
+        JsonNode mj = json(CliRun.run("margin", "missions/early-clean.yaml", "--json"));
         assertThat(mj.get("tightestDeadlineTicks").asInt()).isEqualTo(check.get("tightestDeadlineTicks").asInt());
         assertThat(mj.get("highestReserveUnits")).isEqualTo(check.get("highestReserveUnits"));
         assertThat(mj.get("deadlineTicks").asInt()).isEqualTo(37);

@@ -2,10 +2,14 @@ package dockline.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Bad patrol and deadline input: exit 2, located as file:line:column, with a hint, never a stack trace; and
@@ -26,50 +30,43 @@ class RoundsInputTest {
         return p;
     }
 
-    private static CheckCommandTest.Run check(Path p) {
-        return CheckCommandTest.run("check", p.toString());
+    private static CliRun check(Path p) {
+        return CliRun.run("check", p.toString());
     }
 
-    private static void badAt(CheckCommandTest.Run r, Path p, int line, String message) {
+    private static void badAt(CliRun r, Path p, int line, String message) {
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains(p + ":" + line + ":").contains(message).contains("hint:")
                 .doesNotContain("Exception").doesNotContain("\tat ");
     }
 
-    @Test
-    void emptyPatrol() throws Exception {
-        Path p = mission("tasks:\n  patrol: []\n", "");
-        badAt(check(p), p, 17, "the patrol has no checkpoints");
+    /** One bad mission: the tasks and what the robot says beyond the common profile, the line blamed, the message. */
+    record BadCase(String name, String tail, String robotExtra, int line, String message) {
+        @Override
+        public String toString() {
+            return name;
+        }
     }
 
-    @Test
-    void checkpointAlsoAvoided() throws Exception {
-        Path p = mission("tasks:\n  patrol: [ward-a, sluice]\n  avoid: [sluice]\n", "");
-        badAt(check(p), p, 18, "both a checkpoint of the patrol and avoided");
+    static Stream<BadCase> badCases() {
+        return Stream.of(
+                new BadCase("empty patrol", "tasks:\n  patrol: []\n", "", 17, "the patrol has no checkpoints"),
+                new BadCase("checkpoint also avoided", "tasks:\n  patrol: [ward-a, sluice]\n  avoid: [sluice]\n", "", 18,
+                        "both a checkpoint of the patrol and avoided"),
+                new BadCase("deadline below one tick", "deadline: 3 s\ntasks:\n  visit: [ward-a]\n", "  tick: 4 s\n", 17,
+                        "shorter than one tick"),
+                new BadCase("deadline without tick", "deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "", 16,
+                        "a deadline needs the robot's tick"),
+                new BadCase("tick zero", "deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "  tick: 0 s\n", 12,
+                        "tick must be more than 0 s"),
+                new BadCase("tick without unit", "tasks:\n  visit: [ward-a]\n", "  tick: 4\n", 12, "has no unit"));
     }
 
-    @Test
-    void deadlineBelowOneTick() throws Exception {
-        Path p = mission("deadline: 3 s\ntasks:\n  visit: [ward-a]\n", "  tick: 4 s\n");
-        badAt(check(p), p, 17, "shorter than one tick");
-    }
-
-    @Test
-    void deadlineWithoutTick() throws Exception {
-        Path p = mission("deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "");
-        badAt(check(p), p, 16, "a deadline needs the robot's tick");
-    }
-
-    @Test
-    void tickZero() throws Exception {
-        Path p = mission("deadline: 45 min\ntasks:\n  visit: [ward-a]\n", "  tick: 0 s\n");
-        badAt(check(p), p, 12, "tick must be more than 0 s");
-    }
-
-    @Test
-    void tickWithoutUnit() throws Exception {
-        Path p = mission("tasks:\n  visit: [ward-a]\n", "  tick: 4\n");
-        badAt(check(p), p, 12, "has no unit");
+    @ParameterizedTest
+    @MethodSource("badCases")
+    void badPatrolOrDeadlineInput_isLocatedWithAHint(BadCase c) throws Exception {
+        Path p = mission(c.tail(), c.robotExtra());
+        badAt(check(p), p, c.line(), c.message());
     }
 
     @Test
@@ -81,7 +78,7 @@ class RoundsInputTest {
         Path p = mission("tasks:\n  patrol: [ward-a]\n", "").toAbsolutePath();
         Files.writeString(p, Files.readString(p).replace(Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString(),
                 mp.toString()));
-        CheckCommandTest.Run r = check(p);
+        CliRun r = check(p);
         int line = map.lines().toList().indexOf("  budget-per: night") + 1;
         badAt(r, mp, line, "budget-per must be 'mission' or 'lap', not 'night'");
     }
@@ -89,14 +86,14 @@ class RoundsInputTest {
     @Test
     void allProblemsAtOnce() throws Exception {
         Path p = mission("deadline: 45 min\ntasks:\n  patrol: []\n", "  tick: 0 s\n");
-        CheckCommandTest.Run r = check(p);
+        CliRun r = check(p);
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("tick must be more than 0 s").contains("the patrol has no checkpoints");
     }
 
     @Test
     void demoNightPatrol_isGuaranteedAndCertified() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/night-patrol.yaml");
+        CliRun r = CliRun.run("check", "missions/night-patrol.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).startsWith("GUARANTEED: Night patrol").contains("Longest lap in the worst case:")
                 .contains("certified: true").contains("Safety:");
@@ -104,7 +101,7 @@ class RoundsInputTest {
 
     @Test
     void demoEarlyClean_failsOnlyBecauseOfTheDeadline() {
-        CheckCommandTest.Run r = CheckCommandTest.run("check", "missions/early-clean.yaml");
+        CliRun r = CliRun.run("check", "missions/early-clean.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("Only the deadline is missed").contains("43 turns = 2 min 52 s");
     }
@@ -112,7 +109,7 @@ class RoundsInputTest {
     @Test
     void patrolReplay_marksTheLoopInJsonAndCsv() throws Exception {
         Path csv = dir.resolve("lap.csv");
-        CheckCommandTest.Run r = CheckCommandTest.run("replay", "missions/night-patrol.yaml", "--json", "--csv",
+        CliRun r = CliRun.run("replay", "missions/night-patrol.yaml", "--json", "--csv",
                 csv.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         com.fasterxml.jackson.databind.JsonNode j = new com.fasterxml.jackson.databind.ObjectMapper().readTree(r.out());
@@ -130,7 +127,7 @@ class RoundsInputTest {
 
     @Test
     void patrolReplay_text_marksTheLoop() {
-        CheckCommandTest.Run r = CheckCommandTest.run("replay", "missions/night-patrol.yaml");
+        CliRun r = CliRun.run("replay", "missions/night-patrol.yaml");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("---- the loop: steps ").contains("repeat for ever ----").contains("---- back to step ")
                 .contains("Safety:");
@@ -143,11 +140,11 @@ class RoundsInputTest {
         Files.writeString(p, Files.readString(Path.of("missions/early-clean.yaml"))
                 .replace("../maps/clinic-wing.yaml", Path.of("maps/clinic-wing.yaml").toAbsolutePath().toString())
                 .replaceFirst("deadline: 2.5 min", "deadline: 3 min"));
-        CheckCommandTest.Run r = CheckCommandTest.run("check", p.toString(), "--fewest-moves");
+        CliRun r = CliRun.run("check", p.toString(), "--fewest-moves");
         assertThat(r.code()).as(r.out() + r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("Worst finishing time under the policy:  43 turns").contains("certified: true");
         // the default, the safest policy, keeps the highest floor that still meets the deadline (45 turns)
-        CheckCommandTest.Run safest = check(p);
+        CliRun safest = check(p);
         assertThat(safest.code()).isEqualTo(ExitCodes.OK);
         assertThat(safest.out()).contains("Worst finishing time under the policy:  45 turns")
                 .contains("(the safest policy that keeps the deadline)").contains("certified: true");

@@ -1,40 +1,27 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
+import dockline.fixtures.CliRun;
+import dockline.fixtures.DemoFiles;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 class TrustCommandsTest {
 
     @TempDir
     Path tmp;
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void replay_guaranteedMission_isCertified_printsTableExplanationAndCaveats() throws Exception {
         Path csv = tmp.resolve("worst.csv");
         Path json = tmp.resolve("worst.json");
-        Run r = run("replay", "missions/night-round.yaml", "--csv", csv.toString(), "--json-file", json.toString());
+        CliRun r = run("replay", "missions/night-round.yaml", "--csv", csv.toString(), "--json-file", json.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("guaranteed").contains("certified: true").contains("Worst case of the certified policy")
                 .contains("step  cell").contains("Safety: ");
@@ -82,14 +69,14 @@ class TrustCommandsTest {
     /** With lasting fire doors no start charge guarantees the late return: a shut bridge door cuts off both docks. */
     @Test
     void lateReturn_withLastingFireDoors_isNotGuaranteedEvenWhenFull() {
-        Run r = run("check", "missions/late-return.yaml", "--start-charge", "100%");
+        CliRun r = run("check", "missions/late-return.yaml", "--start-charge", "100%");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("cannot force completion");
     }
 
     @Test
     void replay_notGuaranteed_showsTheCounterexample_exit1() throws Exception {
-        Run r = run("replay", momentaryLateReturn());
+        CliRun r = run("replay", momentaryLateReturn());
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("NOT guaranteed").contains("counterexample").contains("below the reserve floor")
                 .contains("link-bridge").contains("Safety: ");
@@ -99,7 +86,7 @@ class TrustCommandsTest {
     void replay_impossibleForcedEvent_isExit2_andWritesNoFile() {
         Path csv = tmp.resolve("never.csv");
         // the policy of fewest moves (the default before the safest policy): its step 5 is a move past no door
-        Run r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "5:door-shut", "--csv",
+        CliRun r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "5:door-shut", "--csv",
                 csv.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("step 5: door-shut cannot happen there").contains("is not a door that may shut");
@@ -112,7 +99,7 @@ class TrustCommandsTest {
     @Test
     void replay_forcedDoor_isAnswered() {
         // the policy of fewest moves walks through ward A's door at step 4 (the safest one charges first)
-        Run r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "4:door-shut");
+        CliRun r = run("replay", "missions/night-round.yaml", "--fewest-moves", "--force", "4:door-shut");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("door ward-a-entry at 3:4 shut").contains("The mission completes");
     }
@@ -121,7 +108,7 @@ class TrustCommandsTest {
     void badMissionFile_isExit2_withFileLineColumn() throws Exception {
         Path bad = tmp.resolve("bad.yaml");
         Files.writeString(bad, "name: x\nmap: ../nowhere.yaml\nresrve: 20%\n");
-        Run r = run("replay", bad.toString());
+        CliRun r = run("replay", bad.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).containsPattern("bad\\.yaml:\\d+:\\d+: ");
         assertThat(run("margin", bad.toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
@@ -130,7 +117,7 @@ class TrustCommandsTest {
     @Test
     void margin_guaranteed_jsonHasBothMethods() throws Exception {
         Path json = tmp.resolve("m.json");
-        Run r = run("margin", "missions/night-round.yaml", "--json-file", json.toString());
+        CliRun r = run("margin", "missions/night-round.yaml", "--json-file", json.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("bisection over the threshold solver").contains("minimum-credit fixpoint")
                 .contains("the two methods agree").contains("Safety: ");
@@ -145,19 +132,15 @@ class TrustCommandsTest {
 
     @Test
     void margin_notGuaranteed_printsSuggestions_exit1() throws Exception {
-        Run r = run("margin", momentaryLateReturn(), "--json");
+        CliRun r = run("margin", momentaryLateReturn(), "--json");
         assertThat(r.code()).isEqualTo(ExitCodes.NOT_GUARANTEED);
         assertThat(r.out()).contains("\"suggestions\"").contains("start-charge");
-    }
-
-    static java.util.stream.Stream<Path> demoMissions() throws java.io.IOException {
-        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
     }
 
     /** The demo missions with the reserve objective (the certificate covers that objective). */
     static java.util.stream.Stream<Path> reserveDemoMissions() throws Exception {
         java.util.List<Path> out = new java.util.ArrayList<>();
-        for (Path p : demoMissions().toList()) {
+        for (Path p : DemoFiles.missions().toList()) {
             if (dockline.io.MissionLoader.load(p).objective() instanceof dockline.model.Objective.Reserve) {
                 out.add(p);
             }
@@ -170,8 +153,8 @@ class TrustCommandsTest {
     @org.junit.jupiter.params.ParameterizedTest
     @org.junit.jupiter.params.provider.MethodSource("reserveDemoMissions")
     void check_certifiesEveryGuaranteedDemoMission(Path file) throws Exception {
-        Run text = run("check", file.toString());
-        Run json = run("check", "--json", file.toString());
+        CliRun text = run("check", file.toString());
+        CliRun json = run("check", "--json", file.toString());
         JsonNode j = new ObjectMapper().readTree(json.out());
         assertThat(json.code()).isEqualTo(text.code());
         if (text.code() == ExitCodes.OK) {
@@ -193,7 +176,7 @@ class TrustCommandsTest {
     @Test
     void replay_withSuggestedStartCharge_isGuaranteed() throws Exception {
         String mission = momentaryLateReturn();
-        Run r = run("replay", mission, "--start-charge", "82");
+        CliRun r = run("replay", mission, "--start-charge", "82");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("certified: true");
         assertThat(run("replay", mission, "--start-charge", "81.5").code())

@@ -1,45 +1,26 @@
 package dockline.cli;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import dockline.report.Caveats;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
-import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 class ValidateCommandTest {
 
     @TempDir
     Path dir;
 
-    private record Run(int exit, String out, String err) {
-        List<String> errLines() {
-            return err.isEmpty() ? List.of() : Arrays.asList(err.split("\\R"));
-        }
-    }
-
-    private static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int exit = cl.execute(args);
-        return new Run(exit, out.toString(), err.toString());
-    }
-
     @Test
     void demo_files_are_valid() {
-        Run r = run("validate", "maps/clinic-wing.yaml", "maps/research-block.yaml", "missions/night-round.yaml",
+        CliRun r = run("validate", "maps/clinic-wing.yaml", "maps/research-block.yaml", "missions/night-round.yaml",
                 "missions/supply-run.yaml", "missions/late-return.yaml");
-        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.err()).isEmpty();
         assertThat(r.out().lines().filter(l -> l.startsWith("ok ")).count()).isEqualTo(5);
         assertThat(r.out()).contains("ok maps/clinic-wing.yaml: map 'Day clinic, east wing (demo)', 20 x 12 cells");
@@ -50,8 +31,8 @@ class ValidateCommandTest {
 
     @Test
     void a_map_alone_shows_no_mission_caveat_block() {
-        Run r = run("validate", "maps/clinic-wing.yaml");
-        assertThat(r.exit()).isEqualTo(ExitCodes.OK);
+        CliRun r = run("validate", "maps/clinic-wing.yaml");
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).contains("1 dock,").doesNotContain("Safety:");
     }
 
@@ -64,8 +45,8 @@ class ValidateCommandTest {
                 .replace("reserve: 20%", "reserve: 120%");
         Path f = dir.resolve("bad.yaml");
         Files.writeString(f, mission);
-        Run r = run("validate", f.toString(), "maps/clinic-wing.yaml");
-        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run("validate", f.toString(), "maps/clinic-wing.yaml");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.errLines()).hasSize(3).allMatch(l -> l.matches(".+:\\d+:\\d+: .+"));
         assertThat(r.errLines().get(0)).contains("unknown key 'wait-enrgy', did you mean 'wait-energy'?");
         assertThat(r.errLines().get(1)).contains("start cell 0:6 is a wall");
@@ -80,8 +61,8 @@ class ValidateCommandTest {
         Files.writeString(odd, "colour: blue\n");
         Path empty = dir.resolve("empty.yaml");
         Files.writeString(empty, "");
-        Run r = run("validate", odd.toString(), empty.toString(), dir.resolve("none.yaml").toString());
-        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run("validate", odd.toString(), empty.toString(), dir.resolve("none.yaml").toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.errLines()).hasSize(3);
         assertThat(r.errLines().get(0)).endsWith("odd.yaml:1:1: cannot tell whether this is a map or a mission"
                 + " (hint: a map has 'plan:' and 'legend:'; a mission has 'map:' and 'robot:' (see maps/README.md, missions/README.md))");
@@ -93,15 +74,15 @@ class ValidateCommandTest {
 
     @Test
     void no_files_is_a_usage_error() {
-        Run r = run("validate");
-        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        CliRun r = run("validate");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("FILE");
     }
 
     @Test
     void help_lists_exit_codes() {
-        Run r = run("validate", "--help");
-        assertThat(r.exit()).isZero();
+        CliRun r = run("validate", "--help");
+        assertThat(r.code()).isZero();
         assertThat(r.out()).contains("Exit codes").contains("file:line:column");
     }
 
@@ -113,8 +94,8 @@ class ValidateCommandTest {
                 .replace("    carpet: 1\n", "    carpet: 0.7\n");
         Path f = dir.resolve("m.yaml");
         Files.writeString(f, mission);
-        Run r = run("validate", f.toString());
-        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.OK);
+        CliRun r = run("validate", f.toString());
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         // 0.7 Wh at 0.5 Wh per unit rounds up to 2 units; 0.3 Wh of charging rounds down to none (hand-worked)
         assertThat(r.out()).contains("carpet 0.7 Wh = 2 units").contains("no charging (0.3 Wh rounds down to 0 units)");
     }

@@ -4,13 +4,11 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
+import dockline.fixtures.CliRun;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 /** {@code bench --view}: one row per bundled map and generated floor, in the published schema. */
 class ViewBenchCommandTest {
@@ -23,14 +21,9 @@ class ViewBenchCommandTest {
 
     @Test
     void json_hasARowPerMapWithStepAndFullRepaint_andFollowsTheSchema() throws Exception {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute("bench", "--view", "--json", "--sizes", "64");
-        assertThat(code).as(err.toString()).isZero();
-        JsonNode root = new ObjectMapper().readTree(out.toString());
+        CliRun r = CliRun.run("bench", "--view", "--json", "--sizes", "64");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(r.out());
         // the published schema (general-purpose validator, as in JsonOutputSchemaTest)
         assertThat(JsonOutputSchemaTest.schema("bench").validate(root)).as("%s", root).isEmpty();
         List<String> maps = new ArrayList<>();
@@ -49,11 +42,8 @@ class ViewBenchCommandTest {
 
     @Test
     void aSideOutsideTheRange_isBadUsage() {
-        CommandLine cl = Main.commandLine();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(new StringWriter()));
-        cl.setErr(new PrintWriter(err));
-        assertThat(cl.execute("bench", "--view", "--sizes", "8")).isEqualTo(ExitCodes.BAD_INPUT);
-        assertThat(err.toString()).contains("--sizes");
+        CliRun r = CliRun.run("bench", "--view", "--sizes", "8");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--sizes");
     }
 }

@@ -6,13 +6,13 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import dockline.fixtures.CliRun;
 import dockline.io.MissionLoader;
 import dockline.model.Mission;
-import java.io.File;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -85,24 +85,11 @@ class WideNumberingTest {
         int firstAction = arena.target(arena.outBegin(arena.startVertex()));
         assertThat((long) firstAction << 15).as("the start's actions are numbered past 2^31").isGreaterThan(1L << 31);
 
-        List<String> cmd = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx3g",
-                "-cp", System.getProperty("java.class.path"), "dockline.cli.Main", "check", mission.toString(),
+        CliRun.Forked p = CliRun.fork(dir, Duration.ofMinutes(10), List.of("-Xmx3g"), "check", mission.toString(),
                 "--method", "product", "--max-memory", "2500", "--json");
-        ProcessBuilder pb = new ProcessBuilder(cmd);
-        pb.environment().remove("JAVA_TOOL_OPTIONS");
-        File out = dir.resolve("out.json").toFile();
-        File err = dir.resolve("err.txt").toFile();
-        pb.redirectOutput(out);
-        pb.redirectError(err);
-        Process p = pb.start();
-        boolean done = p.waitFor(10, TimeUnit.MINUTES);
-        if (!done) {
-            p.destroyForcibly();
-        }
-        String errText = Files.readString(err.toPath());
-        assertThat(done).as("check finished; stderr:\n%s", errText).isTrue();
-        assertThat(p.exitValue()).as(errText + Files.readString(out.toPath())).isEqualTo(ExitCodes.OK);
-        JsonNode j = new ObjectMapper().readTree(out);
+        assertThat(p.finished()).as("check finished; stderr:\n%s", p.err()).isTrue();
+        assertThat(p.code()).as(p.err() + p.out()).isEqualTo(ExitCodes.OK);
+        JsonNode j = new ObjectMapper().readTree(p.out());
         assertThat(j.get("verdict").asText()).isEqualTo("guaranteed");
         assertThat(j.get("highestReserveUnits").asInt()).isEqualTo(990);
         assertThat(j.get("lowestLevelUnits").asInt()).isEqualTo(990);

@@ -3,6 +3,7 @@ package dockline.io;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.catchThrowableOfType;
 
+import dockline.policy.Policy;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -84,6 +85,28 @@ final class Fixtures {
         Path p = dir.resolve(name);
         Files.write(p, content);
         return p;
+    }
+
+    /** The lines of the policy file that {@link PolicyFiles#write} makes of {@code policy} at dir/name. */
+    static List<String> writtenPolicy(Path dir, String name, PolicyFiles.Header header, Policy policy)
+            throws IOException {
+        Path f = dir.resolve(name);
+        PolicyFiles.write(f, header, policy);
+        return Files.readAllLines(f);
+    }
+
+    /**
+     * Writes {@code policy} to dir/name and reads it back: the header and the rows must come back as they
+     * were. Returns what was read.
+     */
+    static PolicyFiles.Document policyRoundTrip(Path dir, String name, PolicyFiles.Header header, Policy policy)
+            throws IOException, InputException {
+        Path f = dir.resolve(name);
+        PolicyFiles.write(f, header, policy);
+        PolicyFiles.Document d = PolicyFiles.read(f);
+        assertThat(d.header()).isEqualTo(header);
+        assertThat(d.policy().entries()).isEqualTo(policy.entries());
+        return d;
     }
 
     /** Writes the map and the mission into dir; returns the mission's path. */

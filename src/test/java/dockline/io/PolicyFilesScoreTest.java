@@ -43,11 +43,7 @@ class PolicyFilesScoreTest {
     @Test
     void jsonAndCsv_roundTrip_withTheScoreMemory() throws Exception {
         for (String name : List.of("p.json", "p.csv")) {
-            Path f = dir.resolve(name);
-            PolicyFiles.write(f, HEADER, sample());
-            PolicyFiles.Document d = PolicyFiles.read(f);
-            assertThat(d.header()).isEqualTo(HEADER);
-            assertThat(d.policy().entries()).isEqualTo(sample().entries());
+            PolicyFiles.Document d = Fixtures.policyRoundTrip(dir, name, HEADER, sample());
             assertThat(d.policy().lookup(new Cell(1, 1), 51, 1, 0, PolicyScore.gap(Rational.of(9, 4))))
                     .contains(new Action(ActionKind.MOVE, new Cell(2, 1)));
         }
@@ -55,9 +51,7 @@ class PolicyFilesScoreTest {
 
     @Test
     void csv_looksAsDocumented() throws Exception {
-        Path f = dir.resolve("p.csv");
-        PolicyFiles.write(f, HEADER, sample());
-        List<String> lines = Files.readAllLines(f);
+        List<String> lines = Fixtures.writtenPolicy(dir, "p.csv", HEADER, sample());
         assertThat(lines.get(0)).isEqualTo("# dockline-policy 3");
         assertThat(lines).contains("# objective: discounted", "# discount: 2", "# threshold: 3/4", "# relation: >=",
                 "# weightBoundUnits: 3", "# reserveKept: true", "cell,levelUnits,budgetLeft,progress,score,action,to",
@@ -66,9 +60,7 @@ class PolicyFilesScoreTest {
 
     @Test
     void json_hasTheScoreInEachRow() throws Exception {
-        Path f = dir.resolve("p.json");
-        PolicyFiles.write(f, HEADER, sample());
-        List<String> lines = Files.readAllLines(f);
+        List<String> lines = Fixtures.writtenPolicy(dir, "p.json", HEADER, sample());
         assertThat(lines).anyMatch(l -> l.trim().equals("\"version\" : 3,"));
         assertThat(lines).anyMatch(l -> l.trim().equals("\"objective\" : \"discounted\","));
         assertThat(lines).anyMatch(l -> l.trim().replaceAll(",$", "").equals(

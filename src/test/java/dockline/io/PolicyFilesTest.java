@@ -34,19 +34,13 @@ class PolicyFilesTest {
     @Test
     void jsonAndCsv_roundTrip() throws Exception {
         for (String name : List.of("p.json", "p.csv", "P.CSV")) {
-            Path f = dir.resolve(name);
-            PolicyFiles.write(f, HEADER, sample());
-            PolicyFiles.Document d = PolicyFiles.read(f);
-            assertThat(d.header()).isEqualTo(HEADER);
-            assertThat(d.policy().entries()).isEqualTo(sample().entries());
+            Fixtures.policyRoundTrip(dir, name, HEADER, sample());
         }
     }
 
     @Test
     void csv_looksAsDocumented() throws Exception {
-        Path f = dir.resolve("p.csv");
-        PolicyFiles.write(f, HEADER, sample());
-        List<String> lines = Files.readAllLines(f);
+        List<String> lines = Fixtures.writtenPolicy(dir, "p.csv", HEADER, sample());
         assertThat(lines.get(0)).isEqualTo("# dockline-policy 3");
         assertThat(lines).contains("cell,levelUnits,budgetLeft,progress,action,to", "1:6,96,1,0,move,2:6",
                 "2:6,95,1,0,wait,", "# tasks: ward-a ward-b", "# unitWh: 0.5");
@@ -54,9 +48,7 @@ class PolicyFilesTest {
 
     @Test
     void json_hasOneRowPerLine() throws Exception {
-        Path f = dir.resolve("p.json");
-        PolicyFiles.write(f, HEADER, sample());
-        assertThat(Files.readAllLines(f)).anyMatch(l -> l.trim().equals(
+        assertThat(Fixtures.writtenPolicy(dir, "p.json", HEADER, sample())).anyMatch(l -> l.trim().equals(
                 "{\"cell\":\"1:6\",\"levelUnits\":96,\"budgetLeft\":1,\"progress\":0,\"action\":\"move\",\"to\":\"2:6\"},"));
     }
 

@@ -7,25 +7,18 @@ import dockline.model.Mission;
 import dockline.solve.ProductOptions;
 import dockline.solve.reserve.ReserveOptions;
 import dockline.solve.reserve.ReserveSolver;
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 class DemoMarginsTest {
-
-    static Stream<Path> demoMissions() throws IOException {
-        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
 
     /**
      * The fixpoint (optimisation) and the bisection over the threshold solver (satisficing) agree on
      * every demo mission, and with the solver's own highest-floor search (ReserveSolver.analyse).
      */
     @ParameterizedTest
-    @MethodSource("demoMissions")
+    @MethodSource("dockline.fixtures.DemoFiles#missions")
     void bothMethodsAgree(Path file) throws Exception {
         Mission m = MissionLoader.load(file);
         MarginReport r = Margins.compute(m, ProductOptions.defaults());

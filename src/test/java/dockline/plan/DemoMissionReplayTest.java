@@ -10,26 +10,19 @@ import dockline.replay.Replay;
 import dockline.replay.ReplayFormats;
 import dockline.replay.ReplayStep;
 import dockline.solve.reserve.ReserveAnalysis;
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /** Every demo mission: certified when guaranteed, a real breach when not, and byte-identical files. */
 class DemoMissionReplayTest {
 
-    static Stream<Path> demoMissions() throws IOException {
-        return Files.list(Path.of("missions")).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
-
     /**
      * Oracles: the threshold solver's own worst case (ReserveSolver's dynamic programme over its
      * ranks) for the worst-case replay; the arena's step semantics (maps/README.md, "Game semantics") for every row.
      */
     @ParameterizedTest
-    @MethodSource("demoMissions")
+    @MethodSource("dockline.fixtures.DemoFiles#missions")
     void guaranteed_isCertified_andWorstReplayMatchesSolver_elseCounterexampleBreaches(Path file) throws Exception {
         Mission m = MissionLoader.load(file);
         Plan plan = PlanReplaysProperties.replays(m, PolicyChoice.SAFEST);
@@ -64,7 +57,7 @@ class DemoMissionReplayTest {
 
     /** Same input, byte-identical CSV and JSON, from two independent runs of the whole pipeline. */
     @ParameterizedTest
-    @MethodSource("demoMissions")
+    @MethodSource("dockline.fixtures.DemoFiles#missions")
     void replays_areDeterministic(Path file) throws Exception {
         Mission m1 = MissionLoader.load(file);
         Mission m2 = MissionLoader.load(file);

@@ -1,13 +1,10 @@
 package dockline.report;
 
-import dockline.cli.Main;
+import dockline.fixtures.CliRun;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import picocli.CommandLine;
 
 /**
  * The report of the bundled demo folder {@code missions/} plus one bad mission file, made once per test JVM
@@ -60,14 +57,9 @@ public final class DemoReport {
                 Files.writeString(bad, BAD);
                 Path html = dir.resolve("report.html");
                 Path json = dir.resolve("report.json");
-                CommandLine cl = Main.commandLine();
-                StringWriter out = new StringWriter();
-                StringWriter err = new StringWriter();
-                cl.setOut(new PrintWriter(out, true));
-                cl.setErr(new PrintWriter(err, true));
-                int code = cl.execute("report", "missions", bad.toString(), "--out", html.toString(), "--json",
+                CliRun r = CliRun.run("report", "missions", bad.toString(), "--out", html.toString(), "--json",
                         json.toString(), "--quiet");
-                made = new Made(code, out.toString(), err.toString(), html, json, bad);
+                made = new Made(r.code(), r.out(), r.err(), html, json, bad);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             } catch (java.util.concurrent.TimeoutException e) {

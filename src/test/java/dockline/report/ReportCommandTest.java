@@ -1,17 +1,15 @@
 package dockline.report;
 
+import static dockline.fixtures.CliRun.run;
 import static org.assertj.core.api.Assertions.assertThat;
 
-import dockline.cli.Main;
-import java.io.PrintWriter;
-import java.io.StringWriter;
+import dockline.fixtures.CliRun;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * {@code dockline report} on small hand-made missions: the outputs, the exit codes, the refusals before any
@@ -29,26 +27,13 @@ class ReportCommandTest {
     @TempDir
     Path dir;
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void twoMissions_bothFiles_exitOneForTheUnsafeOne_noProgressOffATerminal() throws Exception {
         Path heavy = ReportRuleOfThumbTest.mission(dir, ReportRuleOfThumbTest.lane(dir, "heavy", 25), "heavy-run", 60, 5);
         Path light = ReportRuleOfThumbTest.mission(dir, ReportRuleOfThumbTest.lane(dir, "light", 1), "light-run", 40, 10);
         Path html = dir.resolve("out.html");
         Path json = dir.resolve("out.json");
-        Run r = run("report", light.toString(), heavy.toString(), "--out", html.toString(), "--json", json.toString(),
+        CliRun r = run("report", light.toString(), heavy.toString(), "--out", html.toString(), "--json", json.toString(),
                 "--jobs", "2");
         assertThat(r.code()).as(r.err()).isEqualTo(1);
         assertThat(r.err()).as("no progress when stderr is not a terminal").doesNotContain("[1/2]");
@@ -68,20 +53,20 @@ class ReportCommandTest {
     void refusals_beforeAnyWork_writeNothing() throws Exception {
         Path light = ReportRuleOfThumbTest.mission(dir, ReportRuleOfThumbTest.lane(dir, "light", 1), "light-run", 40, 10);
         Path html = dir.resolve("r.html");
-        Run jobs = run("report", light.toString(), "--out", html.toString(), "--jobs", "0");
+        CliRun jobs = run("report", light.toString(), "--out", html.toString(), "--jobs", "0");
         assertThat(jobs.code()).isEqualTo(2);
         assertThat(jobs.err()).contains("--jobs");
-        Run same = run("report", light.toString(), "--out", html.toString(), "--json", html.toString());
+        CliRun same = run("report", light.toString(), "--out", html.toString(), "--json", html.toString());
         assertThat(same.code()).isEqualTo(2);
         assertThat(same.err()).contains("the same file as --out");
-        Run folderOut = run("report", light.toString(), "--out", dir.toString());
+        CliRun folderOut = run("report", light.toString(), "--out", dir.toString());
         assertThat(folderOut.code()).isEqualTo(2);
-        Run overInput = run("report", light.toString(), "--out", light.toString(), "--quiet");
+        CliRun overInput = run("report", light.toString(), "--out", light.toString(), "--quiet");
         assertThat(overInput.code()).isEqualTo(2);
         assertThat(overInput.err()).contains("is an input of the report");
         assertThat(Files.readString(light)).startsWith("name: light-run");
         assertThat(html).doesNotExist();
-        Run missing = run("report", dir.resolve("missing.yaml").toString(), "--out", html.toString(), "--quiet");
+        CliRun missing = run("report", dir.resolve("missing.yaml").toString(), "--out", html.toString(), "--quiet");
         assertThat(missing.code()).as("a missing mission is a bad input, listed in the report").isEqualTo(2);
         assertThat(Jsoup.parse(Files.readString(html)).select("section.mission ul.errors li")).isNotEmpty();
     }

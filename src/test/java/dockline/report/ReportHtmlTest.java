@@ -2,11 +2,9 @@ package dockline.report;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import dockline.cli.Main;
+import dockline.fixtures.CliRun;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
@@ -22,7 +20,6 @@ import org.jsoup.nodes.Element;
 import org.jsoup.select.Elements;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * The HTML report's structure and self-containment, read with a general-purpose HTML parser (jsoup, which
@@ -169,13 +166,9 @@ class ReportHtmlTest {
         Path empty = Files.createDirectory(dir.resolve("empty"));
         Files.writeString(empty.resolve("notes.txt"), "not a mission\n");
         Path out = dir.resolve("r.html");
-        StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(new StringWriter(), true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute("report", empty.toString(), "--out", out.toString(), "--quiet");
-        assertThat(code).isEqualTo(2);
-        assertThat(err.toString()).contains("holds no mission files").contains("hint:");
+        CliRun r = CliRun.run("report", empty.toString(), "--out", out.toString(), "--quiet");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("holds no mission files").contains("hint:");
         assertThat(out).doesNotExist();
         try (var files = Files.list(dir)) {
             assertThat(files.map(f -> f.getFileName().toString())).containsExactly("empty");

@@ -2,22 +2,23 @@ package dockline.solve;
 
 import dockline.arena.Action;
 import dockline.arena.Arena;
+import dockline.fixtures.TaskBook;
 import dockline.model.Cell;
 import dockline.model.Mission;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
 import java.util.HashMap;
 import java.util.HashSet;
-import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
 /**
  * Runs an exported {@link Policy} against every disturbance choice, by depth-first search over
- * situations (cell, level, budget left, tasks done), with the battery and the task progress redone
- * here from maps/README.md, "Game semantics" (independent of the product game). Fails on a situation the policy does
- * not cover, a level below the floor, an avoided zone, or a cycle (a play that never completes).
+ * situations (cell, level, budget left, tasks done), with the battery redone here and the task progress
+ * by {@link TaskBook}, both from maps/README.md, "Game semantics" (independent of the product game).
+ * Fails on a situation the policy does not cover, a level below the floor, an avoided zone, or a cycle
+ * (a play that never completes).
  * Reports the lowest level over all plays and the situations met.
  */
 public final class PolicyWalk {
@@ -30,6 +31,7 @@ public final class PolicyWalk {
     private final Policy policy;
     private final int floor;
     private final int cap;
+    private final TaskBook tasks;
     private final Map<String, Integer> done = new HashMap<>();
     private final Set<String> onPath = new HashSet<>();
 
@@ -39,16 +41,17 @@ public final class PolicyWalk {
         this.policy = policy;
         this.floor = mission.reserveUnits();
         this.cap = mission.capacityUnits();
+        this.tasks = new TaskBook(mission);
     }
 
     public Result run() {
         Cell s = mission.start();
-        int p = progress(0, s);
+        int p = tasks.startMask();
         int level = mission.startUnits();
         if (p < 0 || level < floor) {
             throw new AssertionError("start is already lost");
         }
-        int low = complete(p, s) ? level : visit(s, level, mission.map().disturbances().budget(), p);
+        int low = tasks.complete(p, s) ? level : visit(s, level, mission.map().disturbances().budget(), p);
         return new Result(low, done.keySet());
     }
 
@@ -83,43 +86,15 @@ public final class PolicyWalk {
                 throw new AssertionError("level " + l2 + " below the floor after " + act.get() + " at " + key);
             }
             Cell c2 = arena.cellOf(to);
-            int p2 = progress(prog, c2);
+            int p2 = tasks.step(prog, c2);
             if (p2 < 0) {
                 throw new AssertionError("avoided zone entered from " + key);
             }
-            low = Math.min(low, complete(p2, c2) ? l2 : visit(c2, l2, arena.budgetLeft(to), p2));
+            low = Math.min(low, tasks.complete(p2, c2) ? l2 : visit(c2, l2, arena.budgetLeft(to), p2));
         }
         onPath.remove(key);
         done.put(key, low);
         return low;
-    }
-
-    private int progress(int mask, Cell c) {
-        List<String> names = mission.map().zonesAt(c);
-        for (String a : mission.tasks().avoid()) {
-            if (names.contains(a)) {
-                return -1;
-            }
-        }
-        List<String> visit = mission.tasks().visit();
-        if (mission.tasks().ordered()) {
-            int i = Integer.bitCount(mask);
-            while (i < visit.size() && names.contains(visit.get(i))) {
-                mask |= 1 << i++;
-            }
-        } else {
-            for (int i = 0; i < visit.size(); i++) {
-                if (names.contains(visit.get(i))) {
-                    mask |= 1 << i;
-                }
-            }
-        }
-        return mask;
-    }
-
-    private boolean complete(int mask, Cell c) {
-        return mask == (1 << mission.tasks().visit().size()) - 1
-                && (!mission.tasks().finishOnDock() || mission.map().terrainAt(c).dock());
     }
 
     /** The situation key of a policy entry, as {@link #visit} writes it. */

@@ -1,5 +1,7 @@
 package dockline.solve;
 
+import static dockline.fixtures.RandomMissions.pick;
+
 import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
@@ -96,14 +98,6 @@ public final class RandomMissions {
             f.event(EventKind.DRAG, r.nextInt(4), pick(r, free, 1 + r.nextInt(2)));
         }
         return f.build();
-    }
-
-    public static List<Cell> pick(Random r, List<Cell> from, int k) {
-        List<Cell> out = new ArrayList<>();
-        for (int i = 0; i < k; i++) {
-            out.add(from.get(r.nextInt(from.size())));
-        }
-        return out;
     }
 
     /** The mission in a few lines, for failure messages. */

@@ -10,11 +10,8 @@ import java.nio.file.Path;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -22,21 +19,13 @@ import org.testfx.util.WaitForAsyncUtils;
  * The window on a demo mission with the real loader and solver, headless: what it shows must be
  * what the solver computed (verdict, heat map under the pointer, replay, chart).
  */
-@ExtendWith(ApplicationExtension.class)
-class DemoMissionWindowTest {
+class DemoMissionWindowTest extends RealWindowCase {
 
     private static final Path MISSION = Path.of("missions/night-round.yaml");
 
-    private MissionWindow window;
-
     @Start
     void start(Stage stage) {
-        window = FxTests.openReal(stage, 1180, 780, MISSION);
-    }
-
-    @AfterEach
-    void stop() throws Exception {
-        FxTests.dispose(window);
+        open(stage, 1180, 780, MISSION);
     }
 
     private boolean solvedWithReserve(int units) {

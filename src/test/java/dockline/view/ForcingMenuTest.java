@@ -1,5 +1,6 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.BuildingMap;
@@ -11,7 +12,6 @@ import dockline.model.Mission;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.geometry.Point2D;
 import javafx.scene.control.ContextMenu;
@@ -55,24 +55,13 @@ class ForcingMenuTest {
     @Start
     void start(Stage stage) {
         Mission m = mission();
-        window = new MissionWindow(new FakeAnalyzer(), p -> new MissionSource.Opened(p, m, m.map()), null);
-        stage.setScene(window.scene(1280, 800));
-        window.attach(stage);
-        stage.show();
+        window = FxTests.show(stage, new MissionWindow(new FakeAnalyzer(), FxTests.always(m), null), 1280, 800);
         window.open(java.nio.file.Path.of("mat.yaml"));
     }
 
     @AfterEach
     void stop() throws Exception {
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(20, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
+        FxTests.dispose(window);
     }
 
     @Test

@@ -1,6 +1,7 @@
 package dockline.view;
 
 import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.solved;
 import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -9,7 +10,6 @@ import dockline.model.Cell;
 import dockline.model.EventKind;
 import dockline.model.Mission;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import javafx.geometry.Point2D;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
@@ -37,21 +37,13 @@ class ForcingWindowTest {
 
     @Start
     void start(Stage stage) {
-        window = new MissionWindow(new SolverAnalyzer(), p -> new MissionSource.Opened(p, mission, mission.map()), null);
-        stage.setScene(window.scene(1280, 800));
-        window.attach(stage);
-        stage.show();
+        window = FxTests.show(stage, new MissionWindow(new SolverAnalyzer(), FxTests.always(mission), null), 1280, 800);
         window.open(java.nio.file.Path.of("two-doors.yaml"));
     }
 
     @AfterEach
     void stop() throws Exception {
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private boolean solved() {
-        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
-                && window.dataProperty().get().solved());
+        FxTests.dispose(window);
     }
 
     /** The door cell the run's first move into a door enters, and the step of that move. */
@@ -74,7 +66,7 @@ class ForcingWindowTest {
 
     @Test
     void right_clicking_a_door_ahead_shuts_it_there_for_good_and_adds_the_forced_run(FxRobot robot) throws Exception {
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         ViewData d = fx(() -> window.dataProperty().get());
         assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.GUARANTEED);
         @SuppressWarnings("unchecked")
@@ -107,7 +99,7 @@ class ForcingWindowTest {
 
     @Test
     void a_door_the_run_has_already_passed_cannot_be_forced_and_nothing_is_added(FxRobot robot) throws Exception {
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         ViewData d = fx(() -> window.dataProperty().get());
         @SuppressWarnings("unchecked")
         ComboBox<ViewReplay> runs = robot.lookup("#replay").queryAs(ComboBox.class);

@@ -1,5 +1,8 @@
 package dockline.view;
 
+import dockline.model.Mission;
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
@@ -36,12 +39,36 @@ final class FxTests {
      * opening {@code mission} (the solve runs in the background). Called from a TestFX {@code @Start} method.
      */
     static MissionWindow openReal(Stage stage, int width, int height, Path mission) {
-        MissionWindow window = new MissionWindow(new SolverAnalyzer(), new FileMissionSource(), null);
+        MissionWindow window = show(stage, new MissionWindow(new SolverAnalyzer(), new FileMissionSource(), null), width,
+                height);
+        window.open(mission);
+        return window;
+    }
+
+    /** {@code window} on {@code stage}, in a scene of the given size, shown. Called from a TestFX {@code @Start} method. */
+    static MissionWindow show(Stage stage, MissionWindow window, int width, int height) {
         stage.setScene(window.scene(width, height));
         window.attach(stage);
         stage.show();
-        window.open(mission);
         return window;
+    }
+
+    /** A source that opens every path as {@code mission}: the window tests' stand-in for the loader. */
+    static MissionSource always(Mission mission) {
+        return p -> new MissionSource.Opened(p, mission, mission.map());
+    }
+
+    /** A new mission file in {@code dir} for a stand-in source to open (which ignores its content). */
+    static Path standInFile(Path dir) throws IOException {
+        Path file = Files.createTempFile(dir, "mission", ".yaml");
+        Files.writeString(file, "# stand-in; the test source ignores the content\n");
+        return file;
+    }
+
+    /** Whether the window has no task running and shows a solved mission (read on the FX thread). */
+    static boolean solved(MissionWindow window) {
+        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
+                && window.dataProperty().get().solved());
     }
 
     /** Disposes the window on the FX thread (at most ten seconds). */

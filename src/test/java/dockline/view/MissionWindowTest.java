@@ -1,5 +1,8 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.solved;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Cell;
@@ -8,7 +11,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
 import java.util.concurrent.TimeUnit;
-import java.util.function.BooleanSupplier;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.scene.input.KeyCode;
@@ -34,36 +36,21 @@ class MissionWindowTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        missionFile = Files.createTempFile(tmp, "mission", ".yaml");
-        Files.writeString(missionFile, "# stand-in; the test source ignores the content\n");
-        Mission m = TestMissions.twoRooms();
-        MissionSource src = p -> new MissionSource.Opened(p, m, m.map());
-        window = new MissionWindow(analyzer, src, null);
-        stage.setScene(window.scene(1180, 780));
-        window.attach(stage);
-        stage.show();
+        missionFile = FxTests.standInFile(tmp);
+        window = FxTests.show(stage, new MissionWindow(analyzer, FxTests.always(TestMissions.twoRooms()), null), 1180,
+                780);
         window.open(missionFile);
     }
 
     @org.junit.jupiter.api.AfterEach
     void stop() throws Exception {
         analyzer.release = true;
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private boolean idleAndSolved() {
-        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
-                && window.dataProperty().get().solved());
+        FxTests.dispose(window);
     }
 
     @Test
     void opening_a_mission_solves_it_and_shows_the_verdict_in_words(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         Label v = robot.lookup("#verdict").queryAs(Label.class);
         assertThat(v.getText()).startsWith("Guaranteed");
         assertThat(robot.lookup("#certificate").queryAs(Label.class).getText()).startsWith("Certificate:");
@@ -72,7 +59,7 @@ class MissionWindowTest {
 
     @Test
     void raising_the_reserve_rechecks_and_changes_the_verdict(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
         TextField start = robot.lookup("#start-charge").queryAs(TextField.class);
         robot.interact(() -> {
@@ -80,13 +67,13 @@ class MissionWindowTest {
             start.setText("100");
         });
         robot.clickOn("#check");
-        waitUntil(() -> idleAndSolved() && window.dataProperty().get().mission().reserveUnits() == 380);
+        waitUntil(() -> solved(window) && window.dataProperty().get().mission().reserveUnits() == 380);
         assertThat(robot.lookup("#verdict").queryAs(Label.class).getText()).startsWith("Not guaranteed");
     }
 
     @Test
     void a_bad_reserve_is_refused_with_a_message_and_nothing_is_solved(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         int before = analyzer.calls;
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
         robot.interact(() -> reserve.setText("lots"));
@@ -99,7 +86,7 @@ class MissionWindowTest {
 
     @Test
     void stepping_the_replay_moves_the_robot_to_the_replay_cell(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         ViewReplay r = window.dataProperty().get().replays().get(0);
         assertThat(r.length()).isGreaterThanOrEqualTo(3);
         int n = 3;
@@ -117,7 +104,7 @@ class MissionWindowTest {
 
     @Test
     void keyboard_steps_the_replay(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         robot.clickOn("#map");
         robot.type(KeyCode.F8);
         robot.type(KeyCode.F8);
@@ -130,7 +117,7 @@ class MissionWindowTest {
 
     @Test
     void the_chart_minimum_is_the_worst_case_minimum(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         VerdictSummary v = window.dataProperty().get().verdict();
         assertThat(v.worstCaseMinimumUnits()).isPresent();
         assertThat(window.chart().minimumUnits()).isEqualTo(v.worstCaseMinimumUnits().getAsInt());
@@ -142,7 +129,7 @@ class MissionWindowTest {
 
     @Test
     void cancelling_a_long_check_keeps_the_previous_result_and_the_window_responsive(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         ViewData before = window.dataProperty().get();
         String verdictBefore = robot.lookup("#verdict").queryAs(Label.class).getText();
         analyzer.slow = true;
@@ -166,7 +153,7 @@ class MissionWindowTest {
 
     @Test
     void hovering_a_cell_tells_its_coordinates_surface_zones_and_charge_needed(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         MapView mv = window.mapView();
         Cell c = new Cell(7, 2);
         double[] p = mv.centreOf(c);
@@ -180,7 +167,7 @@ class MissionWindowTest {
 
     @Test
     void a_changed_mission_file_is_offered_for_reload_and_never_written(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         String content = Files.readString(missionFile);
         Files.setLastModifiedTime(missionFile, FileTime.fromMillis(Files.getLastModifiedTime(missionFile).toMillis() + 5000));
         FileTime stamp = Files.getLastModifiedTime(missionFile);
@@ -188,7 +175,7 @@ class MissionWindowTest {
         assertThat(offered).isTrue();
         assertThat(robot.lookup("#reload-yes").tryQuery()).isPresent();
         robot.clickOn("#reload-yes");
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         assertThat(robot.lookup("#reload-yes").tryQuery()).isEmpty();
         assertThat(Files.readString(missionFile)).isEqualTo(content);
         assertThat(Files.getLastModifiedTime(missionFile)).isEqualTo(stamp);

@@ -1,6 +1,7 @@
 package dockline.view;
 
 import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.solved;
 import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -9,11 +10,8 @@ import java.nio.file.Path;
 import javafx.scene.control.Label;
 import javafx.scene.control.Slider;
 import javafx.stage.Stage;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -22,33 +20,20 @@ import org.testfx.util.WaitForAsyncUtils;
  * refused patrols before), its lasso is the run shown (the way in, then the lap), and playing goes
  * round the lap for ever.
  */
-@ExtendWith(ApplicationExtension.class)
-class PatrolWindowTest {
+class PatrolWindowTest extends RealWindowCase {
 
     private static final Path MISSION = Path.of("missions/night-patrol.yaml");
 
-    private MissionWindow window;
-
     @Start
     void start(Stage stage) {
-        window = FxTests.openReal(stage, 1280, 800, MISSION);
-    }
-
-    @AfterEach
-    void stop() throws Exception {
-        FxTests.dispose(window);
-    }
-
-    private boolean solved() {
-        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
-                && window.dataProperty().get().solved());
+        open(stage, 1280, 800, MISSION);
     }
 
     @Test
     void the_night_patrol_opens_shows_its_lasso_and_plays_the_lap_in_a_loop(FxRobot robot) throws Exception {
         Mission m = dockline.io.MissionLoader.load(MISSION);
         assertThat(m.tasks().patrols()).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         ViewData d = fx(() -> window.dataProperty().get());
         // missions/README.md lists the night patrol as guaranteed
         assertThat(d.verdict().outcome()).isEqualTo(VerdictSummary.Outcome.GUARANTEED);

@@ -9,11 +9,8 @@ import java.util.concurrent.TimeUnit;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.stage.Stage;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -22,21 +19,13 @@ import org.testfx.util.WaitForAsyncUtils;
  * pointing at the robot's cell says the policy's levels there in words, and the move it names is
  * the one the replay makes next.
  */
-@ExtendWith(ApplicationExtension.class)
-class PolicyWordsWindowTest {
+class PolicyWordsWindowTest extends RealWindowCase {
 
     private static final Path MISSION = Path.of("missions/night-round.yaml");
 
-    private MissionWindow window;
-
     @Start
     void start(Stage stage) {
-        window = FxTests.openReal(stage, 1180, 780, MISSION);
-    }
-
-    @AfterEach
-    void stop() throws Exception {
-        FxTests.dispose(window);
+        open(stage, 1180, 780, MISSION);
     }
 
     @Test

@@ -1,6 +1,7 @@
 package dockline.view;
 
 import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Mission;
@@ -19,7 +20,6 @@ import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * Cancelling a check that runs the real solver: the window stays responsive, the solver stops on
@@ -60,21 +60,14 @@ class RealCancelWindowTest {
     @Start
     void start(Stage stage) {
         window = new MissionWindow(analyzer, new FileMissionSource(), null);
-        stage.setScene(window.scene(1180, 780));
-        window.attach(stage);
-        stage.show();
+        FxTests.show(stage, window, 1180, 780);
         window.open(Path.of("missions/supply-run.yaml"));
     }
 
     @AfterEach
     void stop() throws Exception {
         analyzer.gate.countDown();
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(120, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
+        FxTests.dispose(window);
     }
 
     @Test

@@ -9,11 +9,8 @@ import javafx.stage.Stage;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -22,24 +19,16 @@ import org.testfx.util.WaitForAsyncUtils;
  * the mission it shows. The HTML is read back with jsoup (a general-purpose HTML parser): one summary
  * row for the mission with the verdict missions/README.md documents, and nothing outside the file.
  */
-@ExtendWith(ApplicationExtension.class)
-class ReportExportWindowTest {
+class ReportExportWindowTest extends RealWindowCase {
 
     private static final Path MISSION = Path.of("missions/aisle-return.yaml");
 
     @TempDir
     Path dir;
 
-    private MissionWindow window;
-
     @Start
     void start(Stage stage) {
-        window = FxTests.openReal(stage, 1180, 780, MISSION);
-    }
-
-    @AfterEach
-    void stop() throws Exception {
-        FxTests.dispose(window);
+        open(stage, 1180, 780, MISSION);
     }
 
     @Test

@@ -1,13 +1,13 @@
 package dockline.view;
 
 import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.solved;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
-import java.util.concurrent.TimeUnit;
-import java.util.function.BooleanSupplier;
 import javafx.scene.control.Label;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
@@ -34,24 +34,12 @@ class WindowFilesAndKeysTest {
     void start(Stage stage) throws Exception {
         store = Files.createTempDirectory(tmp, "home").resolve(".dockline/recent-files.txt");
         window = new MissionWindow(new FakeAnalyzer(), new FileMissionSource(), store);
-        stage.setScene(window.scene(1180, 780));
-        window.attach(stage);
-        stage.show();
+        FxTests.show(stage, window, 1180, 780);
     }
 
     @AfterEach
     void stop() throws Exception {
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private boolean solved() {
-        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
-                && window.dataProperty().get().solved());
+        FxTests.dispose(window);
     }
 
     @Test
@@ -60,7 +48,7 @@ class WindowFilesAndKeysTest {
         FileTime before = Files.getLastModifiedTime(mission);
         byte[] content = Files.readAllBytes(mission);
         assertThat(fx(() -> window.open(mission))).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         assertThat(fx(() -> window.recentFiles())).containsExactly(mission.toAbsolutePath().normalize());
         assertThat(Files.readString(store)).contains(mission.toAbsolutePath().normalize().toString());
         assertThat(Files.getLastModifiedTime(mission)).isEqualTo(before);
@@ -83,7 +71,7 @@ class WindowFilesAndKeysTest {
     @Test
     void a_broken_file_shows_every_problem_and_keeps_the_mission_shown(FxRobot robot) throws Exception {
         assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         ViewData shown = fx(() -> window.dataProperty().get());
         Path bad = tmp.resolve("broken.yaml");
         Files.writeString(bad, "name: broken\nmap: nowhere.yaml\nrobot: 3\n");
@@ -97,7 +85,7 @@ class WindowFilesAndKeysTest {
     @Test
     void shortcuts_switch_the_overlay_and_start_a_check(FxRobot robot) throws Exception {
         assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         ViewData first = fx(() -> window.dataProperty().get());
         robot.clickOn("#map");
         robot.push(KeyCode.CONTROL, KeyCode.DIGIT3);
@@ -107,13 +95,13 @@ class WindowFilesAndKeysTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertThat(fx(() -> window.mapView().layers().overlay())).isEqualTo(Overlay.PLAIN);
         robot.push(KeyCode.F5);
-        waitUntil(() -> solved() && fx(() -> window.dataProperty().get()) != first);
+        waitUntil(() -> solved(window) && fx(() -> window.dataProperty().get()) != first);
     }
 
     @Test
     void the_map_pans_by_dragging_and_zooms_by_scrolling(FxRobot robot) throws Exception {
         assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         MapView mv = window.mapView();
         double x0 = fx(mv::originX);
         robot.drag("#map").moveBy(60, 0).drop();
@@ -129,7 +117,7 @@ class WindowFilesAndKeysTest {
     @Test
     void the_map_zooms_and_pans_with_keys(FxRobot robot) throws Exception {
         assertThat(fx(() -> window.open(Path.of("missions/night-round.yaml")))).isTrue();
-        waitUntil(this::solved);
+        waitUntil(() -> solved(window));
         MapView mv = window.mapView();
         double s0 = fx(mv::cellPx);
         robot.clickOn("#map");

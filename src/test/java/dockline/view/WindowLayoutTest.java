@@ -1,5 +1,8 @@
 package dockline.view;
 
+import static dockline.view.FxTests.fx;
+import static dockline.view.FxTests.solved;
+import static dockline.view.FxTests.waitUntil;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.model.Mission;
@@ -7,9 +10,6 @@ import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import java.util.function.BooleanSupplier;
 import java.util.logging.Handler;
 import java.util.logging.Level;
 import java.util.logging.LogRecord;
@@ -50,42 +50,21 @@ class WindowLayoutTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        Path missionFile = Files.createTempFile(tmp, "mission", ".yaml");
-        Files.writeString(missionFile, "# stand-in; the test source ignores the content\n");
+        Path missionFile = FxTests.standInFile(tmp);
         mission = TestMissions.twoRooms();
         Path mapFile = tmp.resolve("floor.yaml");
         Files.writeString(mapFile, "# stand-in map\n");
         MissionSource src = p -> p.equals(mapFile) ? new MissionSource.Opened(p, null, mission.map())
                 : new MissionSource.Opened(p, mission, mission.map());
         window = new MissionWindow(analyzer, src, null);
-        stage.setScene(window.scene(1280, 800));
-        window.attach(stage);
-        stage.show();
+        FxTests.show(stage, window, 1280, 800);
         window.open(missionFile);
     }
 
     @AfterEach
     void stop() throws Exception {
         analyzer.release = true;
-        WaitForAsyncUtils.asyncFx(() -> window.dispose()).get(10, TimeUnit.SECONDS);
-    }
-
-    private static <T> T fx(Callable<T> c) {
-        try {
-            return WaitForAsyncUtils.asyncFx(c).get(20, TimeUnit.SECONDS);
-        } catch (Exception e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static void waitUntil(BooleanSupplier c) throws Exception {
-        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, c::getAsBoolean);
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private boolean idleAndSolved() {
-        return fx(() -> window.taskProperty().get() == null && window.dataProperty().get() != null
-                && window.dataProperty().get().solved());
+        FxTests.dispose(window);
     }
 
     /** The text the label draws (its skin's text node): shorter than the label's text when cut off with "...". */
@@ -96,7 +75,7 @@ class WindowLayoutTest {
     @Test
     void the_run_box_the_step_label_and_the_notes_show_their_full_text_or_a_tooltip_with_it(FxRobot robot)
             throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         @SuppressWarnings("unchecked")
         ComboBox<ViewReplay> runs = robot.lookup("#replay").queryAs(ComboBox.class);
         assertThat(fx(() -> runs.getTooltip().getText())).isEqualTo(fx(() -> runs.getValue().title()));
@@ -117,7 +96,7 @@ class WindowLayoutTest {
 
     @Test
     void the_replay_buttons_stay_where_they_are_while_the_step_text_changes(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         List<String> ids = List.of("#step-back", "#play", "#step-forward");
         double[] before = xs(robot, ids);
         Label step = robot.lookup("#step-label").queryAs(Label.class);
@@ -150,7 +129,7 @@ class WindowLayoutTest {
     @Test
     void the_chart_has_a_legend_of_floor_capacity_charging_and_disturbances_and_a_click_goes_to_that_step(FxRobot robot)
             throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         List<String> words = fx(() -> window.chart().legendWords());
         assertThat(words).contains("reserve floor (dashed)", "capacity (dotted)", "charging step", "disturbance",
                 "battery", "current step");
@@ -171,14 +150,14 @@ class WindowLayoutTest {
     @Test
     void a_map_alone_after_a_mission_leaves_no_battery_line_and_a_recheck_clears_the_scenario_message(FxRobot robot)
             throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         robot.interact(() -> robot.lookup("#force-add").queryButton().fire());
         robot.interact(() -> robot.lookup("#force-run").queryButton().fire());
         WaitForAsyncUtils.waitForFxEvents();
         Label status = robot.lookup("#status").queryAs(Label.class);
         assertThat(fx(status::getText)).startsWith("scenario added");
         robot.clickOn("#check");
-        waitUntil(() -> idleAndSolved() && analyzer.calls >= 2);
+        waitUntil(() -> solved(window) && analyzer.calls >= 2);
         assertThat(fx(status::getText)).doesNotContain("scenario added");
 
         assertThat(fx(() -> window.chart().batterySeries().getData().size())).isPositive();
@@ -197,7 +176,7 @@ class WindowLayoutTest {
 
     @Test
     void a_running_check_shows_its_per_cent(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         analyzer.slow = true;
         TextField reserve = robot.lookup("#reserve").queryAs(TextField.class);
         robot.interact(() -> reserve.setText("30"));
@@ -208,13 +187,13 @@ class WindowLayoutTest {
         assertThat(fx(() -> robot.lookup("#solving").queryAs(javafx.scene.control.ProgressBar.class).getProgress()))
                 .isEqualTo(0.4, org.assertj.core.data.Offset.offset(1e-9));
         analyzer.release = true;
-        waitUntil(() -> idleAndSolved() && window.dataProperty().get().mission().reserveUnits() == 120);
+        waitUntil(() -> solved(window) && window.dataProperty().get().mission().reserveUnits() == 120);
         assertThat(fx(st::getText)).startsWith("checked with reserve 30%");
     }
 
     @Test
     void the_picture_is_exported_as_a_png_that_decodes(FxRobot robot) throws Exception {
-        waitUntil(this::idleAndSolved);
+        waitUntil(() -> solved(window));
         robot.clickOn("#step-forward");
         Path dir = Files.createDirectories(tmp.resolve("pictures"));
         Path out = dir.resolve("floor.png");

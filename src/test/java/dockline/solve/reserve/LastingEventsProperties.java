@@ -22,8 +22,8 @@ class LastingEventsProperties {
 
     /**
      * Oracle: {@link LastingBruteForce}, a separate explicit-state max-min fixpoint whose state
-     * carries the closure set and the per-rule counts, with its own move generation from the map and
-     * mission records (no arena compiler, no goal automaton). Both production routes must agree on the
+     * carries the closure set and the per-rule counts, with move generation read from the map and
+     * mission records by the test layer fixtures/LastingMoves (no arena compiler, no goal automaton). Both production routes must agree on the
      * verdict and the highest guaranteed reserve; a guaranteed policy must pass the independent
      * certificate checker, and the fast path (when the robot cannot charge) must agree too.
      */

@@ -1,5 +1,8 @@
 package dockline.solve.reserve;
 
+import static dockline.fixtures.RandomMissions.pick;
+
+import dockline.fixtures.RandomMissions;
 import dockline.fixtures.TinyMission;
 import dockline.model.Cell;
 import dockline.model.DisturbanceModel;
@@ -28,28 +31,10 @@ public final class LastingMissions {
         Random r = new Random(seed);
         int w = 2 + r.nextInt(3);
         int h = 2 + r.nextInt(2);
-        char[][] g = new char[h][w];
-        for (int y = 0; y < h; y++) {
-            for (int x = 0; x < w; x++) {
-                int k = r.nextInt(10);
-                g[y][x] = k < 1 ? '#' : k < 3 ? 'c' : k < 6 ? '|' : '.';
-            }
-        }
-        Cell start = new Cell(r.nextInt(w), r.nextInt(h));
-        g[start.y()][start.x()] = '.';
-        Cell dock = new Cell(r.nextInt(w), r.nextInt(h));
-        g[dock.y()][dock.x()] = 'D';
-        String[] rows = new String[h];
-        List<Cell> free = new ArrayList<>();
-        for (int y = 0; y < h; y++) {
-            rows[y] = new String(g[y]);
-            for (int x = 0; x < w; x++) {
-                if (g[y][x] != '#') {
-                    free.add(new Cell(x, y));
-                }
-            }
-        }
-        TinyMission m = TinyMission.plan(rows);
+        RandomMissions.Plan p = RandomMissions.plan(r, w, h, 1, 3, 6, false);
+        List<Cell> free = p.free();
+        Cell start = p.start();
+        TinyMission m = TinyMission.plan(p.rows());
         int cap = 5 + r.nextInt(10);
         m.capacity(cap).costs(1 + r.nextInt(2), 1 + r.nextInt(3), r.nextInt(2), r.nextInt(3) == 0 ? 1 + r.nextInt(2) : 0);
         if (r.nextInt(5) == 0) {
@@ -111,14 +96,6 @@ public final class LastingMissions {
         return new Mission(base.name(), base.source(),
                 base.map().withDisturbances(new DisturbanceModel(base.map().disturbances().budget(), rules)),
                 base.robot(), base.start(), base.startCharge(), base.reserve(), base.tasks(), base.objective());
-    }
-
-    private static List<Cell> pick(Random r, List<Cell> free, int n) {
-        List<Cell> out = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            out.add(free.get(r.nextInt(free.size())));
-        }
-        return out;
     }
 
     public static String describe(Mission m) {

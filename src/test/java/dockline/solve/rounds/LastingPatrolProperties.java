@@ -60,8 +60,9 @@ class LastingPatrolProperties {
                 Tasks.patrol(cps, avoid), m.objective(), new Timing(BigDecimal.ONE, null));
     }
 
-    // Oracle: LastingPatrolBruteForce (own move generation with closure sets and counts, own lap rule, the
-    // νZ.μY fixpoint for Büchi games, Emerson and Jutla 1991); certificate: PatrolCertificateChecker.
+    // Oracle: LastingPatrolBruteForce (moves with closure sets and counts read from the records by the test
+    // layer fixtures/LastingMoves, own lap rule, the νZ.μY fixpoint for Büchi games, Emerson and Jutla 1991);
+    // certificate: PatrolCertificateChecker.
     @Property(tries = 2000)
     void lastingPatrol_agreesWithBruteForce(@ForAll long seed) {
         Mission m = patrolOf(seed);

@@ -1,5 +1,8 @@
 package dockline.solve.rounds;
 
+import dockline.fixtures.GameSweeps;
+import dockline.fixtures.LapBook;
+import dockline.fixtures.TaskBook;
 import dockline.model.BuildingMap;
 import dockline.model.Cell;
 import dockline.model.EnergyScale;
@@ -8,8 +11,6 @@ import dockline.model.EventRule;
 import dockline.model.Mission;
 import dockline.model.Neighbourhood;
 import dockline.model.RobotProfile;
-import dockline.model.Terrain;
-import dockline.model.Zone;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,9 +19,9 @@ import java.util.List;
  * Test oracle, written apart from the production route: the game of a patrol or a deadline mission on
  * the explicit state space (cell, disturbances left, task or lap mask, battery level), with its own move
  * generation read straight from the map and mission records by the game rules of maps/README.md ("Game
- * semantics"), its own task and lap bookkeeping, and naive fixpoint sweeps instead of worklist
- * attractors. It uses neither the arena compiler nor the goal or lap automaton; only the model records
- * and their {@link EnergyScale} rounding.
+ * semantics"), task and lap bookkeeping redone from the records ({@link TaskBook}, {@link LapBook}), and
+ * naive fixpoint sweeps ({@link GameSweeps}) instead of worklist attractors. It uses neither the arena
+ * compiler nor the goal or lap automaton; only the model records and their {@link EnergyScale} rounding.
  *
  * <ul>
  *   <li>Deadline: W_0 = complete states; W_{t+1} = W_t ∪ {s : some action has every outcome safe and in
@@ -46,9 +47,13 @@ final class RoundsBruteForce {
     private final int masks;
     private final int levels;
     private final int floor;
+    private final TaskBook tasks;
+    private final LapBook laps;
 
     RoundsBruteForce(Mission m, int floor) {
         this.floor = floor;
+        this.tasks = new TaskBook(m);
+        this.laps = new LapBook(m);
         BuildingMap map = m.map();
         RobotProfile robot = m.robot();
         EnergyScale scale = m.scale();
@@ -148,7 +153,7 @@ final class RoundsBruteForce {
             }
         }
         int sc = m.start().y() * w + m.start().x();
-        int m0 = progress(m, 0, m.start(), patrol);
+        int m0 = progress(0, m.start(), patrol);
         int l0 = Math.min(cap, m.startUnits());
         this.start = m0 < 0 || l0 < floor ? -1 : id(sc, budget, m0, l0);
     }
@@ -164,7 +169,7 @@ final class RoundsBruteForce {
             return -1;
         }
         int nl = (int) Math.min(levels - 1, raw);
-        int nm = progress(m, mask, cell, patrol);
+        int nm = progress(mask, cell, patrol);
         if (nm < 0) {
             return -1;
         }
@@ -176,43 +181,8 @@ final class RoundsBruteForce {
     }
 
     /** Task (visit, in order or any order) or lap (patrol) progress after occupying a cell; -1 avoided. */
-    private static int progress(Mission m, int mask, Cell cell, boolean patrol) {
-        BuildingMap map = m.map();
-        for (String a : m.tasks().avoid()) {
-            if (zone(map, a).contains(cell)) {
-                return -1;
-            }
-        }
-        if (patrol) {
-            List<String> cps = m.tasks().patrol();
-            int full = (1 << cps.size()) - 1;
-            int s = mask == full ? 0 : mask;
-            for (int i = 0; i < cps.size(); i++) {
-                if (zone(map, cps.get(i)).contains(cell)) {
-                    s |= 1 << i;
-                }
-            }
-            return s;
-        }
-        List<String> v = m.tasks().visit();
-        if (m.tasks().ordered()) {
-            int done = Integer.bitCount(mask);
-            while (done < v.size() && zone(map, v.get(done)).contains(cell)) {
-                done++;
-            }
-            return (1 << done) - 1;
-        }
-        int s = mask;
-        for (int i = 0; i < v.size(); i++) {
-            if (zone(map, v.get(i)).contains(cell)) {
-                s |= 1 << i;
-            }
-        }
-        return s;
-    }
-
-    private static Zone zone(BuildingMap map, String name) {
-        return map.zone(name).orElseThrow();
+    private int progress(int mask, Cell cell, boolean patrol) {
+        return patrol ? laps.step(mask, cell) : tasks.step(mask, cell);
     }
 
     /** Free neighbours in the order N, E, S, W (then the diagonals, not cutting a wall corner). */
@@ -238,23 +208,6 @@ final class RoundsBruteForce {
         return out;
     }
 
-    /** Whether some action of s has every outcome safe and inside {@code in}. */
-    private boolean cpre(int s, boolean[] in) {
-        for (int[] outs : outcomes[s]) {
-            boolean all = true;
-            for (int u : outs) {
-                if (u < 0 || !in[u]) {
-                    all = false;
-                    break;
-                }
-            }
-            if (all) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     /** The fewest turns the robot can force completion within, or -1 if never (up to {@code maxTurns}). */
     int fewestTurns(int maxTurns) {
         if (start < 0) {
@@ -267,7 +220,7 @@ final class RoundsBruteForce {
             }
             boolean[] next = win.clone();
             for (int s = 0; s < win.length; s++) {
-                if (!win[s] && outcomes[s] != null && cpre(s, win)) {
+                if (!win[s] && outcomes[s] != null && GameSweeps.cpre(outcomes[s], win)) {
                     next[s] = true;
                 }
             }
@@ -282,32 +235,15 @@ final class RoundsBruteForce {
         return t >= 0 && t <= deadline;
     }
 
-    /** Whether the patrol is won: νZ. μY. (F ∩ CPre(Z)) ∪ CPre(Y), by sweeps. */
+    /** Whether the patrol is won: νZ. μY. (F ∩ CPre(Z)) ∪ CPre(Y), by sweeps over the states at or above the floor. */
     boolean patrolWon() {
         if (start < 0) {
             return false;
         }
-        int n = outcomes.length;
-        boolean[] z = new boolean[n];
-        for (int s = 0; s < n; s++) {
-            z[s] = outcomes[s] != null;
+        boolean[] live = new boolean[outcomes.length];
+        for (int s = 0; s < outcomes.length; s++) {
+            live[s] = outcomes[s] != null;
         }
-        while (true) {
-            boolean[] y = new boolean[n];
-            boolean changed = true;
-            while (changed) {
-                changed = false;
-                for (int s = 0; s < n; s++) {
-                    if (!y[s] && outcomes[s] != null && ((lapDone[s] && cpre(s, z)) || cpre(s, y))) {
-                        y[s] = true;
-                        changed = true;
-                    }
-                }
-            }
-            if (java.util.Arrays.equals(y, z)) {
-                return z[start];
-            }
-            z = y;
-        }
+        return GameSweeps.recurrence(outcomes, live, lapDone)[start];
     }
 }
