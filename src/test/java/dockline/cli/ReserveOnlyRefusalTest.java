@@ -2,6 +2,7 @@ package dockline.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import dockline.fixtures.CliRun;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
@@ -12,32 +13,32 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The options that mean nothing outside the reserve objective are refused by {@code check} and {@code export}
  * in one wording (exit 2, nothing written), on the demo missions/discounted-trap.yaml (a discounted objective,
- * missions/README.md). Run through the command-line harness of {@link CheckCommandTest}.
+ * missions/README.md). Run through the shared command-line harness ({@link CliRun}).
  */
 class ReserveOnlyRefusalTest {
 
-    private static CheckCommandTest.Run run(String... args) {
-        return CheckCommandTest.run(args);
+    private static CliRun run(String... args) {
+        return CliRun.run(args);
     }
 
     @Test
     void aPolicyChoiceOnADiscountedMission_isRefusedInTheSameWordsByCheckAndExport(@TempDir Path dir) {
         String line = "dockline: --fewest-moves applies to the reserve objective only";
-        CheckCommandTest.Run check = run("check", "missions/discounted-trap.yaml", "--fewest-moves");
+        CliRun check = run("check", "missions/discounted-trap.yaml", "--fewest-moves");
         assertThat(check.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(check.err().strip()).isEqualTo(line);
         Path policy = dir.resolve("p.json");
-        CheckCommandTest.Run export = run("export", "missions/discounted-trap.yaml", "--fewest-moves", "--policy", policy.toString());
+        CliRun export = run("export", "missions/discounted-trap.yaml", "--fewest-moves", "--policy", policy.toString());
         assertThat(export.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(export.err().strip()).isEqualTo(line);
         assertThat(Files.exists(policy)).as("no output is written on bad input").isFalse();
-        CheckCommandTest.Run older = run("export", "missions/discounted-trap.yaml", "--safest-policy", "--policy", policy.toString());
+        CliRun older = run("export", "missions/discounted-trap.yaml", "--safest-policy", "--policy", policy.toString());
         assertThat(older.err().strip()).isEqualTo("dockline: --safest-policy applies to the reserve objective only");
     }
 
     @Test
     void theRouteOptionsOnADiscountedMission_areRefusedTogether() {
-        CheckCommandTest.Run r = run("check", "missions/discounted-trap.yaml", "--method", "product");
+        CliRun r = run("check", "missions/discounted-trap.yaml", "--method", "product");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err().strip()).isEqualTo("dockline: --method and --verdict-only apply to the reserve objective only");
         assertThat(r.err()).doesNotContain("Exception");
