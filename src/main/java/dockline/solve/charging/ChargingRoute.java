@@ -71,8 +71,20 @@ public final class ChargingRoute {
      * @throws IllegalArgumentException if the floor is negative or above the capacity
      */
     public static Analysis analyse(ChargingSolver solver, int capacity, int floor, int start) {
+        return analyse(solver, capacity, floor, start, false);
+    }
+
+    /**
+     * As {@link #analyse(ChargingSolver, int, int, int)}; with {@code leftOutWins} the pass solves the
+     * strengthened game of a restricted arena (an outcome into a left-out phase is not the building's to choose:
+     * {@link FloorSweep#run(ChargingSolver, int, int, int, boolean)}), whose figures bound the mission's from the
+     * robot's side: its needs from below, its highest floor from above.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public static Analysis analyse(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         long t0 = System.nanoTime();
-        FloorSweep sweep = FloorSweep.run(solver, capacity, floor, start);
+        FloorSweep sweep = FloorSweep.run(solver, capacity, floor, start, leftOutWins);
         FloorSweep.Result r = sweep.result();
         int s = Math.min(start, capacity);
         int need = r.startNeed();

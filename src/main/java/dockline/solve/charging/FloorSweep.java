@@ -1,5 +1,6 @@
 package dockline.solve.charging;
 
+import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.solve.game.MinMaxSearch;
 import dockline.util.IntArrayList;
@@ -72,6 +73,8 @@ public final class FloorSweep extends MinMaxSearch {
 
     private final ChargingSolver solver;
     private final int capacity;
+    /** Whether an outcome into a left-out phase ({@link ArenaCompiler#LEFT_OUT}) is skipped in a disturbance max. */
+    private final boolean leftOutWins;
 
     private final boolean[] pending;
     private final boolean[] good;
@@ -106,10 +109,11 @@ public final class FloorSweep extends MinMaxSearch {
 
     private final Result result;
 
-    private FloorSweep(ChargingSolver solver, int capacity, int floor, int start) {
+    private FloorSweep(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         super(solver.arena(), solver.goal(), solver.inverse());
         this.solver = solver;
         this.capacity = capacity;
+        this.leftOutWins = leftOutWins;
         int robotN = positions();
         this.pending = new boolean[robotN];
         this.good = new boolean[robotN];
@@ -123,10 +127,25 @@ public final class FloorSweep extends MinMaxSearch {
      * @throws IllegalArgumentException if the floor is negative or above the capacity
      */
     public static FloorSweep run(ChargingSolver solver, int capacity, int floor, int start) {
+        return run(solver, capacity, floor, start, false);
+    }
+
+    /**
+     * As {@link #run(ChargingSolver, int, int, int)}; with {@code leftOutWins} on a restricted arena
+     * ({@link ArenaCompiler#compileWithin}) the pass solves the <em>strengthened</em> game: an outcome into a
+     * left-out phase (energy change {@link ArenaCompiler#LEFT_OUT}) is not the building's to choose, so it is
+     * left out of the disturbance position's maximum (the nominal outcome always remains). The building can
+     * then do no more than in the mission: every need is a lower bound of the mission's, the highest floor an
+     * upper bound, and a start lost there is lost in the mission. Off, such an outcome loses (the
+     * <em>weakened</em> game, whose wins are real). On an arena without left-out outcomes both are the same.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public static FloorSweep run(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         if (floor < 0 || floor > capacity) {
             throw new IllegalArgumentException("reserve floor " + floor + " units is outside 0.." + capacity);
         }
-        return new FloorSweep(solver, capacity, floor, start);
+        return new FloorSweep(solver, capacity, floor, start, leftOutWins);
     }
 
     public Result result() {
@@ -248,6 +267,9 @@ public final class FloorSweep extends MinMaxSearch {
         recomputations++;
         long val = 0;
         for (int f = arena.outBegin(d), oEnd = arena.outEnd(d); f < oEnd; f++) {
+            if (leftOutWins && arena.weight(f) == ArenaCompiler.LEFT_OUT) {
+                continue; // the strengthened game: not the building's to choose (see run)
+            }
             int t = arena.target(f);
             int gt = goal.step(g, arena.cellZones(arena.cell(t)));
             if (gt == GoalAutomaton.REJECT) {
