@@ -8,6 +8,7 @@ import dockline.model.Mission;
 import dockline.solve.charging.ChargingPolicies;
 import dockline.solve.charging.ChargingRoute;
 import dockline.solve.charging.ChargingSolver;
+import dockline.solve.charging.FloorSweep;
 import dockline.solve.fast.MinChargeSolver;
 import dockline.solve.reserve.PhasedLastingSolver;
 import java.util.Optional;
@@ -20,29 +21,33 @@ import java.util.OptionalInt;
  * ({@code states} must be {@link #states}'s for the mission). A <em>phase</em> is a set of closed doors and zones (all
  * disturbance states with those closures); a round compiles the kept phases only
  * ({@link ArenaCompiler#compileWithin}: a closure into a left-out phase is an edge of energy change
- * {@link ArenaCompiler#LEFT_OUT}) and runs the charging pass twice on it:
+ * {@link ArenaCompiler#LEFT_OUT}). Two games live on it:
  * <ul>
  *   <li>the <em>weakened</em> game (a left-out closure loses): its wins are real wins, so its highest floor
  *       h<sub>w</sub> is a lower bound of the mission's and its need at the start an upper bound;</li>
  *   <li>the <em>strengthened</em> game (a left-out closure is not the building's to choose): its losses are
  *       real losses, so h<sub>s</sub> is an upper bound and its need a lower bound.</li>
  * </ul>
- * When both highest floors and both start needs at the mission's floor agree, they are the mission's. Otherwise
- * the strengthened threshold policy is played from the start (at floor h<sub>s</sub> from the starting level,
- * and at the mission's floor from the strengthened lowest start), every outcome followed, and the phases of the
- * left-out closures its plays meet are added. If those plays met none, the policy would win the weakened game
- * as well and the bounds would agree; so each round that does not end adds a phase, and the rounds end. This
- * is two-sided abstraction refinement for games (T. A. Henzinger, R. Jhala and R. Majumdar,
- * "Counterexample-guided control", ICALP 2003): the abstract strategy is checked on the concrete game and the
- * abstraction refined only where it relies on what was left out.
+ * A round runs the strengthened pass and plays its threshold policy from the start (at floor h<sub>s</sub> from
+ * the starting level, and at the mission's floor from the strengthened lowest start), every outcome followed.
+ * If those plays meet no left-out closure, the policy wins the weakened game as well, so h<sub>w</sub> =
+ * h<sub>s</sub> and the needs agree: the figures are the mission's, and the weakened pass, run once at the end,
+ * gives the policy (its figures are checked to agree; if they did not, the whole arena would answer). Otherwise
+ * the phases of the left-out closures the plays meet are added and the next round starts; each such round adds
+ * a phase, so the rounds end. When the strengthened game wins nothing from the start, neither does the mission.
+ * For the verdict alone the plays at the mission's floor from the starting level decide. This is two-sided
+ * abstraction refinement for games (T. A. Henzinger, R. Jhala and R. Majumdar, "Counterexample-guided
+ * control", ICALP 2003): the abstract strategy is checked on the concrete game and the abstraction refined
+ * only where it relies on what was left out.
  *
  * <p>At the end the weakened game on the final restricted arena gives the policy (certified there by the
  * independent checker, for which a left-out closure loses, so a certified policy never risks one and plays
  * the same in the mission) and the strengthened one the counterexample's region (its losses are real, and the
  * building's answers outside it never need a left-out closure).
  *
- * <p>Cost: per round one restricted compile and two charging passes on the kept phases
- * ({@link dockline.solve.charging.FloorSweep}) and a walk of the strengthened policy's plays; at most as many
+ * <p>Cost: per round one restricted compile, one charging pass on the kept phases
+ * ({@link dockline.solve.charging.FloorSweep}) and a walk of the strengthened policy's plays, and one more pass
+ * in the last round; at most as many
  * rounds as there are closure sets (a mission that needs every phase is then no cheaper than the whole arena).
  */
 final class LastingPhases {
@@ -56,7 +61,8 @@ final class LastingPhases {
      * @param arena         the restricted arena of the last round
      * @param solver        the charging game on it
      * @param weakened      the weakened pass (a left-out closure loses): the plan's figures and policy; the
-     *                      strengthened pass itself when that one wins nothing from the start (nor at the floor)
+     *                      strengthened pass itself when that one wins nothing from the start (nor at the floor),
+     *                      and for the verdict alone (whose plays then met no left-out closure)
      * @param strengthened  the strengthened pass (a left-out closure is not the building's): the region of the
      *                      counterexample
      * @param rounds        rounds of the refinement
@@ -71,9 +77,9 @@ final class LastingPhases {
         /** The note of the plan. */
         String note() {
             return "lasting closures phase by phase: " + keptStates + " of " + totalStates + " disturbance states"
-                    + " kept, in " + rounds + " round" + (rounds == 1 ? "" : "s") + " (each round the charging pass"
-                    + " with a closure into a left-out phase lost, and counted as not the building's; both agree on"
-                    + " the figures)";
+                    + " kept, in " + rounds + " round" + (rounds == 1 ? "" : "s") + " (a closure into a left-out"
+                    + " phase counted as not the building's, until the policy's plays meet none; the figures checked"
+                    + " with such a closure lost)";
         }
     }
 
@@ -140,33 +146,58 @@ final class LastingPhases {
                 return Optional.empty();
             }
             ChargingRoute.Analysis s = ChargingRoute.analyse(solver, cap, floor, start, true);
-            // the strengthened game first: when it wins nothing from the start (or loses at the floor, for the
-            // verdict alone) neither does the weakened one, whose pass is then not needed
-            boolean lost = verdictOnly ? !s.guaranteed()
-                    : s.highestFloorUnits().isEmpty() && s.startNeed() == ChargingSolver.INFINITE;
-            ChargingRoute.Analysis w = lost ? s : ChargingRoute.analyse(solver, cap, floor, start, false);
-            boolean exact = lost || (verdictOnly ? w.guaranteed()
-                    : w.highestFloorUnits().equals(s.highestFloorUnits()) && w.startNeed() == s.startNeed());
-            if (exact) {
+            boolean[] add = new boolean[st.count()];
+            boolean[] met = new boolean[1];
+            java.util.function.IntConsumer mark = e -> {
+                met[0] = true;
+                int t = PhasedLastingSolver.leftOutState(a, st, e);
+                if (t >= 0) {
+                    add[t] = true;
+                }
+            };
+            // the strengthened policy's plays: where they meet no left-out closure, that policy wins the weakened
+            // game too, so the weakened figure is the same; the weakened pass is run only once all of them agree
+            OptionalInt hs = s.highestFloorUnits();
+            boolean lost;
+            if (verdictOnly) {
+                lost = !s.guaranteed();
+                if (!lost) {
+                    ChargingPolicies.leftOutOutcomes(solver, s.values(), floor, start, cap, mark);
+                }
+            } else {
+                lost = hs.isEmpty() && s.startNeed() == ChargingSolver.INFINITE;
+                if (hs.isPresent()) {
+                    ChargingPolicies.leftOutOutcomes(solver, s.highest(), hs.getAsInt(), start, cap, mark);
+                }
+                if (s.startNeed() != ChargingSolver.INFINITE) {
+                    ChargingPolicies.leftOutOutcomes(solver, s.values(), floor, floor + s.startNeed(), cap, mark);
+                }
+            }
+            // the weakened pass: in full when the plays met nothing left out (its figures must then agree); else
+            // only while its highest floor can still reach the strengthened one (or the mission's floor, for the
+            // verdict), which it often cannot, and then the phases met are added without finishing it
+            ChargingRoute.Analysis w = null;
+            if (lost || verdictOnly && !met[0]) {
+                w = s; // nothing won, so nothing in the weakened game either; or the plays won it as they are
+            } else if (verdictOnly || hs.isPresent()) {
+                long tw = System.nanoTime();
+                Optional<FloorSweep> ws = FloorSweep.runReaching(solver, cap, floor, start,
+                        verdictOnly ? floor : hs.getAsInt());
+                w = ws.isPresent() ? ChargingRoute.of(ws.get(), tw) : null;
+            } else if (!met[0]) {
+                w = ChargingRoute.analyse(solver, cap, floor, start, false);
+            }
+            boolean agree = lost || w != null && (verdictOnly ? w.guaranteed()
+                    : w.highestFloorUnits().equals(hs) && w.startNeed() == s.startNeed());
+            if (agree) {
                 int kept = 0;
                 for (boolean k : keep) {
                     kept += k ? 1 : 0;
                 }
                 return Optional.of(new Result(a, solver, w, s, round, kept, st.count(), compileNanos / 1_000_000));
             }
-            boolean[] add = new boolean[st.count()];
-            java.util.function.IntConsumer mark = e -> {
-                int t = PhasedLastingSolver.leftOutState(a, st, e);
-                if (t >= 0) {
-                    add[t] = true;
-                }
-            };
-            OptionalInt hs = s.highestFloorUnits();
-            if (hs.isPresent() && !hs.equals(w.highestFloorUnits())) {
-                ChargingPolicies.leftOutOutcomes(solver, s.highest(), hs.getAsInt(), start, cap, mark);
-            }
-            if (s.startNeed() != ChargingSolver.INFINITE && s.startNeed() != w.startNeed()) {
-                ChargingPolicies.leftOutOutcomes(solver, s.values(), floor, floor + s.startNeed(), cap, mark);
+            if (!met[0]) {
+                return Optional.empty(); // not expected (class comment): the whole arena answers
             }
             if (!PhasedLastingSolver.addPhases(st, keep, add)) {
                 return Optional.empty();

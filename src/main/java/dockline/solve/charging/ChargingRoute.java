@@ -84,9 +84,15 @@ public final class ChargingRoute {
      */
     public static Analysis analyse(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         long t0 = System.nanoTime();
-        FloorSweep sweep = FloorSweep.run(solver, capacity, floor, start, leftOutWins);
+        return of(FloorSweep.run(solver, capacity, floor, start, leftOutWins), t0);
+    }
+
+    /** The analysis of a pass already run, begun at {@code t0} ({@link System#nanoTime}). */
+    public static Analysis of(FloorSweep sweep, long t0) {
         FloorSweep.Result r = sweep.result();
-        int s = Math.min(start, capacity);
+        int capacity = r.capacityUnits();
+        int floor = r.floorUnits();
+        int s = r.startUnits();
         int need = r.startNeed();
         boolean won = need != ChargingSolver.INFINITE && s >= floor && need <= s - floor;
         OptionalInt lowest = need == ChargingSolver.INFINITE ? OptionalInt.empty() : OptionalInt.of(floor + need);

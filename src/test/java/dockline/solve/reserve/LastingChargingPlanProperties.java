@@ -82,6 +82,8 @@ class LastingChargingPlanProperties {
 
         Matcher x = PHASES.matcher(String.join("\n", p.notes()));
         boolean phased = x.find();
+        // every mission with something a lasting event closes is decided phase by phase, never handed back
+        assertThat(phased).as("phase by phase\n%s", why).isEqualTo(ArenaCompiler.states(m).itemCount() > 0);
         Statistics.label("phase by phase").collect(phased);
         Statistics.label("refined (more than one round)").collect(phased && Integer.parseInt(x.group(3)) > 1);
         Statistics.label("some phase left out").collect(phased && Integer.parseInt(x.group(1))
