@@ -262,10 +262,17 @@ public final class MissionPlanner {
     private static Plan charging(Context c, ChargingSolver solver, ChargingRoute.Analysis a,
                                  ChargingRoute.Analysis losses, boolean wantReplays, boolean wantSuggestions,
                                  String reason, String note) {
+        List<String> notes = new ArrayList<>();
+        if (note != null) {
+            notes.add(note);
+        }
         Mission m = c.mission();
         int floor = m.reserveUnits();
         int start = m.startUnits();
         int cap = m.capacityUnits();
+        if (a.sweep().floorUnits() != floor || losses.sweep().floorUnits() != floor) {
+            throw new IllegalArgumentException("internal: a charging analysis of another floor than the mission's");
+        }
         OptionalInt highest = a.highestFloorUnits();
         ThresholdPolicy thresholds = null;
         ClosedLoop loop = null;
@@ -316,10 +323,6 @@ public final class MissionPlanner {
                 replays = Optional.of(new PlanReplays(false, c.arena(), floor, start, loop, highest.orElse(-1), region,
                         null));
             }
-        }
-        List<String> notes = new ArrayList<>();
-        if (note != null) {
-            notes.add(note);
         }
         FloorSweep.Result sw = a.sweep();
         notes.add("charging route: one pass, " + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
