@@ -4,8 +4,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import dockline.arena.DisturbanceStates;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
+import dockline.goal.GoalAutomaton;
 import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.plan.MissionPlanner;
@@ -14,6 +16,8 @@ import dockline.plan.PlanOptions;
 import dockline.plan.Route;
 import dockline.replay.Replay;
 import dockline.solve.charging.ChargingRoute;
+import dockline.solve.charging.ChargingSolver;
+import dockline.solve.charging.FloorSweep;
 import java.util.OptionalInt;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -96,6 +100,48 @@ class LastingChargingPlanProperties {
             c.check(true).percentage(q -> q >= 10);
             c.check(false).percentage(q -> q >= 10);
         });
+    }
+
+    /**
+     * The two passes of one round on their own, on the base phase only (nothing closed), against
+     * {@link LastingBruteForce}: the strengthened pass's highest floor (a left-out closure not the building's) is
+     * at least the mission's and the weakened one's (a left-out closure lost) at most; the weakened pass cut short
+     * below a target floor ({@code FloorSweep.runReaching}) answers exactly when the full pass reaches it, with
+     * the same figures.
+     */
+    @Property(tries = 500)
+    void strengthenedAndWeakenedPassesBoundTheMission(@ForAll long seed) {
+        Mission m = LastingMissions.fromSeed(seed, true);
+        String why = LastingMissions.describe(m);
+        int highest = new LastingBruteForce(m).highestFloor();
+        DisturbanceStates st = ArenaCompiler.states(m);
+        boolean[] keep = new boolean[st.count()];
+        boolean partial = false;
+        for (int s = 0; s < st.count(); s++) {
+            keep[s] = st.closed(s).length == 0;
+            partial |= !keep[s];
+        }
+        ChargingSolver solver = new ChargingSolver(ArenaCompiler.compileWithin(m, st, keep), GoalAutomaton.of(m));
+        int cap = m.capacityUnits();
+        int floor = m.reserveUnits();
+        int start = m.startUnits();
+        ChargingRoute.Analysis weak = ChargingRoute.analyse(solver, cap, floor, start, false);
+        ChargingRoute.Analysis strong = ChargingRoute.analyse(solver, cap, floor, start, true);
+        int hw = weak.highestFloorUnits().orElse(-1);
+        int hs = strong.highestFloorUnits().orElse(-1);
+        assertThat(hs).as("strengthened highest floor is an upper bound\n%s", why).isGreaterThanOrEqualTo(highest);
+        assertThat(hw).as("weakened highest floor is a lower bound\n%s", why).isLessThanOrEqualTo(highest);
+        for (int target : new int[] {0, Math.max(0, hw), hw + 1, Math.max(0, hs)}) {
+            var cut = FloorSweep.runReaching(solver, cap, floor, start, target);
+            assertThat(cut.isPresent()).as("cut short at %d\n%s", target, why).isEqualTo(hw >= target);
+            if (cut.isPresent()) {
+                assertThat(cut.get().result().highestFloorUnits()).isEqualTo(weak.highestFloorUnits());
+                assertThat(cut.get().result().startNeed()).isEqualTo(weak.startNeed());
+            }
+        }
+        Statistics.label("some phase left out").collect(partial);
+        Statistics.label("the passes differ").collect(hw != hs);
+        Statistics.label("the passes differ").coverage(c -> c.check(true).percentage(q -> q >= 5));
     }
 
     /**
