@@ -115,12 +115,8 @@ class LastingChargingPlanProperties {
         String why = LastingMissions.describe(m);
         int highest = new LastingBruteForce(m).highestFloor();
         DisturbanceStates st = ArenaCompiler.states(m);
-        boolean[] keep = new boolean[st.count()];
-        boolean partial = false;
-        for (int s = 0; s < st.count(); s++) {
-            keep[s] = st.closed(s).length == 0;
-            partial |= !keep[s];
-        }
+        boolean[] keep = LastingMissions.basePhase(st);
+        boolean partial = LastingMissions.leavesOut(keep);
         ChargingSolver solver = new ChargingSolver(ArenaCompiler.compileWithin(m, st, keep), GoalAutomaton.of(m));
         int cap = m.capacityUnits();
         int floor = m.reserveUnits();
