@@ -7,6 +7,9 @@ import dockline.arena.ArenaCompiler;
 import dockline.bench.Benchmark.Instance;
 import dockline.bench.Timing.Timed;
 import dockline.model.Mission;
+import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
+import dockline.plan.PlanOptions;
 import dockline.monitor.ReserveMonitor;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.Verdict;
@@ -20,7 +23,8 @@ import java.util.function.Consumer;
 /**
  * The benchmark's rows for lasting disturbances (issue 13): the reserve instance with its door-shut events
  * lasting (a shut door stays shut), solved on the whole arena ({@code lasting}) and phase by phase
- * ({@code lasting-phased}, {@link PhasedLastingSolver}), each against the momentary main route on the same
+ * ({@code lasting-phased}, {@link PhasedLastingSolver}), and {@code check} end to end on it ({@code lasting-check}:
+ * {@link MissionPlanner#plan}, the charging route phase by phase), each against the momentary main route on the same
  * instance timed again back to back, so that the ratio is of one run. See DEVELOPERS.md, "Lasting doors".
  */
 final class LastingBench {
@@ -41,10 +45,12 @@ final class LastingBench {
                 lasting(bench.instance(32, Benchmark.RESERVE), sampler, 1);
             }
             phased(bench.instance(32, Benchmark.RESERVE), sampler, 1);
+            check(bench.instance(32, Benchmark.RESERVE), sampler, 1);
             for (int side : config.sizes()) {
                 Instance inst = bench.instance(side, Benchmark.RESERVE);
                 for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), phased(inst, sampler,
-                        config.reps()), knownPhases(inst, sampler, config.reps()))) {
+                        config.reps()), knownPhases(inst, sampler, config.reps()), check(inst, sampler,
+                        config.reps()))) {
                     rows.add(r);
                     progress.accept(r.compact());
                 }
@@ -191,6 +197,36 @@ final class LastingBench {
                                 + " (by budget left 0..K: %s), given in advance and solved in one round: %.2f x the"
                                 + " momentary attractor's CPU time (%.1f ms)", r.keptStates(), r.totalStates(), java.util.Arrays.toString(byBudget), ratio,
                         mom.cpuMillis()));
+    }
+
+    /**
+     * What {@code check} runs, end to end: {@link MissionPlanner#plan} with the mission's default options (the
+     * compile, the route's solve, the certificate, the suggestions when not guaranteed) on the lasting instance,
+     * then on the momentary one back to back, so that the ratio is of one run. On the lasting instance the
+     * charging route decides phase by phase (its note, quoted in the row's, gives the disturbance states kept and
+     * the rounds).
+     */
+    static BenchRow check(Instance inst, HeapSampler sampler, int reps) {
+        Mission m = inst.mission();
+        Mission lm = lastingMission(m);
+        long base = HeapSampler.settledUsed();
+        Timed<Plan> lp;
+        try {
+            lp = time(sampler, base, reps, () -> MissionPlanner.plan(lm, PlanOptions.defaults(lm)));
+        } catch (RuntimeException | OutOfMemoryError e) {
+            return BenchRow.skipped(inst.side(), inst.kind(), "lasting-check", 0, 0, "does not fit: " + e.getMessage());
+        }
+        Timed<Plan> mp = time(sampler, base, reps, () -> MissionPlanner.plan(m, PlanOptions.defaults(m)));
+        Plan p = lp.value();
+        double ratio = lp.cpuMillis() / Math.max(mp.cpuMillis(), 1e-3);
+        String phases = p.notes().stream().filter(n -> n.startsWith("lasting closures")).findFirst()
+                .orElse("the whole arena (not phase by phase)");
+        return new BenchRow(inst.side(), inst.kind(), "lasting-check", p.size().vertices(), -1, 0, lp.millis(),
+                lp.cpuMillis(), lp.peak(), p.verdict().word(), lp.millis(), -1, -1,
+                String.format(java.util.Locale.ROOT, "check end to end (MissionPlanner.plan, default route %s),"
+                                + " door-shut events lasting: %.1f ms CPU, %.2f x the momentary mission's %.1f ms"
+                                + " (%s, %s); %s", p.method(), lp.cpuMillis(), ratio, mp.cpuMillis(),
+                        mp.value().method(), mp.value().verdict().word(), phases));
     }
 
     /** The instance's mission with its door-shut events lasting (the rest as they are). */

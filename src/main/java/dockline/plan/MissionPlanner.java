@@ -2,6 +2,7 @@ package dockline.plan;
 
 import dockline.arena.Arena;
 import dockline.arena.ArenaCompiler;
+import dockline.arena.DisturbanceStates;
 import dockline.certify.Certificate;
 import dockline.certify.CertificateChecker;
 import dockline.certify.ClosedLoop;
@@ -95,6 +96,10 @@ public final class MissionPlanner {
      */
     public static Plan plan(Mission mission, PlanOptions options) {
         long t0 = System.nanoTime();
+        Optional<Plan> phased = phasedCharging(mission, options, t0);
+        if (phased.isPresent()) {
+            return phased.get();
+        }
         Arena arena = ArenaCompiler.compile(mission);
         GoalAutomaton goal = GoalAutomaton.of(mission);
         Context c = new Context(mission, arena, goal, options, t0, millis(System.nanoTime() - t0));
@@ -210,10 +215,64 @@ public final class MissionPlanner {
     private static Plan charging(Context c, ChargingSolver solver, boolean wantReplays, boolean wantSuggestions,
                                  String reason) {
         Mission m = c.mission();
+        ChargingRoute.Analysis a = ChargingRoute.analyse(solver, m.capacityUnits(), m.reserveUnits(), m.startUnits());
+        return charging(c, solver, a, a, wantReplays, wantSuggestions, reason, null);
+    }
+
+    /**
+     * The charging route on a mission with lasting closures, phase by phase ({@link LastingPhases}), when the
+     * route asked for is the automatic one with the safest policy or the charging route: the whole arena is then
+     * never built. Empty when the route is another, the mission has nothing a lasting event closes, or the
+     * refinement hands the mission back to the whole arena (the fast path may apply, or no round could refine).
+     */
+    private static Optional<Plan> phasedCharging(Mission mission, PlanOptions options, long t0) {
+        Route r = options.route();
+        boolean auto = r instanceof Route.Auto a && a.policy() == PolicyChoice.SAFEST;
+        if (!auto && !(r instanceof Route.Charging)) {
+            return Optional.empty();
+        }
+        Optional<DisturbanceStates> st = LastingPhases.states(mission);
+        if (st.isEmpty()) {
+            return Optional.empty();
+        }
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, auto);
+        if (lp.isEmpty()) {
+            return Optional.empty();
+        }
+        LastingPhases.Result p = lp.get();
+        Context c = new Context(mission, p.arena(), goal, options, t0, p.compileMillis());
+        if (auto) {
+            return Optional.of(charging(c, p.solver(), p.weakened(), p.strengthened(), false, true, "the robot can"
+                    + " charge on a dock before the mission is complete: the least charge per position with the good"
+                    + " docks as targets, every floor in one pass, no battery levels in the game", p.note()));
+        }
+        Route.Charging ch = (Route.Charging) r;
+        return Optional.of(charging(c, p.solver(), p.weakened(), p.strengthened(), ch.replays(), ch.suggestions(),
+                "the charging route was asked for: the least charge per position with the good docks as targets,"
+                        + " every floor in one pass", p.note()));
+    }
+
+    /**
+     * The plan of the charging route from its analysis {@code a} on the context's arena; {@code losses} is an
+     * analysis whose losses are real (the same one on a whole arena, the strengthened one on a restricted arena),
+     * whose values at the mission's floor give the counterexample's region; {@code note} (or null) goes first
+     * in the notes.
+     */
+    private static Plan charging(Context c, ChargingSolver solver, ChargingRoute.Analysis a,
+                                 ChargingRoute.Analysis losses, boolean wantReplays, boolean wantSuggestions,
+                                 String reason, String note) {
+        List<String> notes = new ArrayList<>();
+        if (note != null) {
+            notes.add(note);
+        }
+        Mission m = c.mission();
         int floor = m.reserveUnits();
         int start = m.startUnits();
         int cap = m.capacityUnits();
-        ChargingRoute.Analysis a = ChargingRoute.analyse(solver, cap, floor, start);
+        if (a.sweep().floorUnits() != floor || losses.sweep().floorUnits() != floor) {
+            throw new IllegalArgumentException("internal: a charging analysis of another floor than the mission's");
+        }
         OptionalInt highest = a.highestFloorUnits();
         ThresholdPolicy thresholds = null;
         ClosedLoop loop = null;
@@ -257,7 +316,7 @@ public final class MissionPlanner {
                 replays = Optional.of(new PlanReplays(true, c.arena(), floor, start, cert.ok() ? loop : null, -1,
                         null, why));
             } else {
-                ChargingSolver.Values v = a.values();
+                ChargingSolver.Values v = losses.values();
                 GoalAutomaton goal = c.goal();
                 WinningRegion region = (vertex, mask, level) -> level >= floor && level <= cap
                         && v.need(vertex, goal.stateOfMask(mask)) <= level - floor;
@@ -265,7 +324,6 @@ public final class MissionPlanner {
                         null));
             }
         }
-        List<String> notes = new ArrayList<>();
         FloorSweep.Result sw = a.sweep();
         notes.add("charging route: one pass, " + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
                 + (sw.batches() - 1) + " dock position" + (sw.batches() == 2 ? "" : "s") + " added in decreasing"
@@ -283,6 +341,13 @@ public final class MissionPlanner {
 
     /** The charging route's verdict on a variant of the mission (compiled on its own). */
     private static boolean chargingWins(Mission m) {
+        Optional<DisturbanceStates> st = LastingPhases.states(m);
+        if (st.isPresent()) {
+            Optional<Boolean> w = LastingPhases.wins(m, st.get(), GoalAutomaton.of(m));
+            if (w.isPresent()) {
+                return w.get();
+            }
+        }
         Arena arena = ArenaCompiler.compile(m);
         ChargingSolver s = new ChargingSolver(arena, GoalAutomaton.of(m));
         return ChargingRoute.analyse(s, m.capacityUnits(), m.reserveUnits(), m.startUnits()).guaranteed();

@@ -3,6 +3,7 @@ package dockline.replay;
 import dockline.arena.Action;
 import dockline.arena.ActionKind;
 import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
 import dockline.certify.CertificateChecker;
 import dockline.certify.ClosedLoop;
 import dockline.goal.GoalAutomaton;
@@ -400,12 +401,19 @@ public final class Replayer {
         return l2 < floor || goal.step(g, arena.cellZones(arena.cell(arena.target(e)))) == GoalAutomaton.REJECT;
     }
 
-    /** The disturbance's answer at d: a loss if it can (lowest level), else an outcome outside the region (lowest level). */
+    /**
+     * The disturbance's answer at d: a loss if it can (lowest level), else an outcome outside the region (lowest
+     * level); never an outcome into a left-out phase of a restricted arena ({@link ArenaCompiler#compileWithin}),
+     * whose region must then be one whose losses are real without it.
+     */
     private static int disturbanceAnswer(Arena arena, GoalAutomaton goal, int d, int g, int level, int floor,
                                          WinningRegion region, int cap) {
         int best = -1;
         long bestKey = Long.MAX_VALUE;
         for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+            if (arena.weight(e) == ArenaCompiler.LEFT_OUT) {
+                continue; // a closure into a phase a restricted arena left out is not a move the building can show
+            }
             long l2 = Math.min(cap, (long) level + arena.weight(e));
             int u = arena.target(e);
             int g2 = goal.step(g, arena.cellZones(arena.cell(u)));

@@ -71,10 +71,28 @@ public final class ChargingRoute {
      * @throws IllegalArgumentException if the floor is negative or above the capacity
      */
     public static Analysis analyse(ChargingSolver solver, int capacity, int floor, int start) {
+        return analyse(solver, capacity, floor, start, false);
+    }
+
+    /**
+     * As {@link #analyse(ChargingSolver, int, int, int)}; with {@code leftOutWins} the pass solves the
+     * strengthened game of a restricted arena (an outcome into a left-out phase is not the building's to choose:
+     * {@link FloorSweep#run(ChargingSolver, int, int, int, boolean)}), whose figures bound the mission's from the
+     * robot's side: its needs from below, its highest floor from above.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public static Analysis analyse(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         long t0 = System.nanoTime();
-        FloorSweep sweep = FloorSweep.run(solver, capacity, floor, start);
+        return of(FloorSweep.run(solver, capacity, floor, start, leftOutWins), t0);
+    }
+
+    /** The analysis of a pass already run, begun at {@code t0} ({@link System#nanoTime}). */
+    public static Analysis of(FloorSweep sweep, long t0) {
         FloorSweep.Result r = sweep.result();
-        int s = Math.min(start, capacity);
+        int capacity = r.capacityUnits();
+        int floor = r.floorUnits();
+        int s = r.startUnits();
         int need = r.startNeed();
         boolean won = need != ChargingSolver.INFINITE && s >= floor && need <= s - floor;
         OptionalInt lowest = need == ChargingSolver.INFINITE ? OptionalInt.empty() : OptionalInt.of(floor + need);

@@ -1,11 +1,13 @@
 package dockline.solve.charging;
 
+import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.solve.game.MinMaxSearch;
 import dockline.util.IntArrayList;
 import dockline.util.PackedMinHeap;
 import dockline.util.Progress;
 import java.util.Arrays;
+import java.util.Optional;
 import java.util.OptionalInt;
 
 /**
@@ -72,6 +74,8 @@ public final class FloorSweep extends MinMaxSearch {
 
     private final ChargingSolver solver;
     private final int capacity;
+    /** Whether an outcome into a left-out phase ({@link ArenaCompiler#LEFT_OUT}) is skipped in a disturbance max. */
+    private final boolean leftOutWins;
 
     private final boolean[] pending;
     private final boolean[] good;
@@ -107,10 +111,17 @@ public final class FloorSweep extends MinMaxSearch {
 
     private final Result result;
 
-    private FloorSweep(ChargingSolver solver, int capacity, int floor, int start) {
+    /** The pass gives up once its highest floor cannot reach this (-1: never). */
+    private final int giveUpBelow;
+    private boolean gaveUp;
+
+    private FloorSweep(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins,
+                       int giveUpBelow) {
         super(solver.arena(), solver.goal(), solver.inverse());
         this.solver = solver;
         this.capacity = capacity;
+        this.leftOutWins = leftOutWins;
+        this.giveUpBelow = giveUpBelow;
         int robotN = positions();
         this.pending = new boolean[robotN];
         this.good = new boolean[robotN];
@@ -124,10 +135,43 @@ public final class FloorSweep extends MinMaxSearch {
      * @throws IllegalArgumentException if the floor is negative or above the capacity
      */
     public static FloorSweep run(ChargingSolver solver, int capacity, int floor, int start) {
+        return run(solver, capacity, floor, start, false);
+    }
+
+    /**
+     * As {@link #run(ChargingSolver, int, int, int)}; with {@code leftOutWins} on a restricted arena
+     * ({@link ArenaCompiler#compileWithin}) the pass solves the <em>strengthened</em> game: an outcome into a
+     * left-out phase (energy change {@link ArenaCompiler#LEFT_OUT}) is not the building's to choose, so it is
+     * left out of the disturbance position's maximum (the nominal outcome always remains). The building can
+     * then do no more than in the mission: every need is a lower bound of the mission's, the highest floor an
+     * upper bound, and a start lost there is lost in the mission. Off, such an outcome loses (the
+     * <em>weakened</em> game, whose wins are real). On an arena without left-out outcomes both are the same.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public static FloorSweep run(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins) {
         if (floor < 0 || floor > capacity) {
             throw new IllegalArgumentException("reserve floor " + floor + " units is outside 0.." + capacity);
         }
-        return new FloorSweep(solver, capacity, floor, start);
+        return new FloorSweep(solver, capacity, floor, start, leftOutWins, -1);
+    }
+
+    /**
+     * The pass of the weakened game ({@link #run(ChargingSolver, int, int, int, boolean)} with {@code leftOutWins}
+     * off) when its highest floor is at least {@code atLeast}; empty as soon as it cannot be (every term after
+     * a dock of floor φ is at most φ, so once the next dock's key is below {@code atLeast} and no term has reached
+     * it, none will), which saves the rest of the docks.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity, or {@code atLeast} is negative
+     */
+    public static Optional<FloorSweep> runReaching(ChargingSolver solver, int capacity, int floor, int start,
+                                                   int atLeast) {
+        if (floor < 0 || floor > capacity || atLeast < 0) {
+            throw new IllegalArgumentException("reserve floor " + floor + " units outside 0.." + capacity
+                    + " or a negative target floor " + atLeast);
+        }
+        FloorSweep sweep = new FloorSweep(solver, capacity, floor, start, false, atLeast);
+        return sweep.gaveUp ? Optional.empty() : Optional.of(sweep);
     }
 
     public Result result() {
@@ -175,6 +219,10 @@ public final class FloorSweep extends MinMaxSearch {
             }
             int next = nextDock();
             long key = next < 0 ? -1 : Math.min(phi, capacity - need[next]);
+            if (best < giveUpBelow && key < giveUpBelow) {
+                gaveUp = true; // no later term reaches it (runReaching)
+                break;
+            }
             if (floorBatches < 0 && key < floor) {
                 floorNeed = sNeed == INF || sNeed > capacity - floor ? INF : sNeed;
                 floorBatches = batchEnd.size();
@@ -249,7 +297,12 @@ public final class FloorSweep extends MinMaxSearch {
         }
         recomputations++;
         long val = 0;
+        boolean leftOut = false;
         for (int f = arena.outBegin(d), oEnd = arena.outEnd(d); f < oEnd; f++) {
+            if (leftOutWins && arena.weight(f) == ArenaCompiler.LEFT_OUT) {
+                leftOut = true;
+                continue; // the strengthened game: not the building's to choose (see run)
+            }
             int t = arena.target(f);
             int gt = goal.step(g, arena.cellZones(arena.cell(t)));
             if (gt == GoalAutomaton.REJECT) {
@@ -269,7 +322,22 @@ public final class FloorSweep extends MinMaxSearch {
         if (y < current) {
             pending[rp] = true;
             improve(rp, owner, ownerEdge, y);
+        } else if (leftOutWins && !leftOut && y == current && pending[rp] && reliesOnLeftOut(rp)) {
+            // as good, and without relying on a left-out phase: the refinement then needs fewer phases (the
+            // position is not settled yet, and the value and its queue entry stay as they are)
+            choice[rp] = (byte) (1 + ownerEdge - arena.outBegin(owner));
         }
+    }
+
+    /** Whether robot position p's chosen action has an outcome into a left-out phase. O(out-degree). */
+    private boolean reliesOnLeftOut(int p) {
+        int d = arena.target(chosenEdge(p));
+        for (int f = arena.outBegin(d); f < arena.outEnd(d); f++) {
+            if (arena.weight(f) == ArenaCompiler.LEFT_OUT) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -92,19 +92,7 @@ public final class PhasedLastingSolver {
                 return new Result(false, a, game, s, rounds, kept, st.count());
             }
             boolean[] add = reliedOn(game, st, s, keep);
-            boolean any = false;
-            for (int t = 0; t < add.length; t++) {
-                if (add[t] && !keep[t]) {
-                    any = true;
-                    int[] closed = st.closed(t);
-                    for (int u = 0; u < st.count(); u++) {
-                        if (!keep[u] && Arrays.equals(st.closed(u), closed)) {
-                            keep[u] = true;
-                        }
-                    }
-                }
-            }
-            if (!any) {
+            if (!addPhases(st, keep, add)) {
                 return new Result(true, a, game, s, rounds, kept, st.count());
             }
             previous = game;
@@ -142,6 +130,41 @@ public final class PhasedLastingSolver {
     }
 
     /**
+     * Adds to {@code keep} the whole phase (every state with the same closures) of each state marked in
+     * {@code add} that is not kept yet. O(states² · budget).
+     *
+     * @return whether anything was added
+     */
+    public static boolean addPhases(DisturbanceStates st, boolean[] keep, boolean[] add) {
+        boolean any = false;
+        for (int t = 0; t < add.length; t++) {
+            if (add[t] && !keep[t]) {
+                any = true;
+                int[] closed = st.closed(t);
+                for (int u = 0; u < st.count(); u++) {
+                    if (!keep[u] && Arrays.equals(st.closed(u), closed)) {
+                        keep[u] = true;
+                    }
+                }
+            }
+        }
+        return any;
+    }
+
+    /**
+     * The disturbance state (an id of {@code st}, the states {@code a} was restricted from) that outcome
+     * {@code e} of a restricted arena would lead into if the phase it closes into were kept: for an edge of
+     * energy change {@link ArenaCompiler#LEFT_OUT} the state after its closure (the door tried, or the
+     * blockage rule's zone); -1 when the rule allows no more events there.
+     */
+    public static int leftOutState(Arena a, DisturbanceStates st, int e) {
+        int d = a.source(e);
+        int item = a.event(e) == EventKind.DOOR_SHUT.ordinal() ? st.doorItem(a.actionTarget(d))
+                : st.blockageItem(a.rule(e));
+        return st.after(a.state(d), a.rule(e), item);
+    }
+
+    /**
      * The left-out states the strengthened strategy relies on: per disturbance triple of the closed loop of
      * its recorded choices from the start, the state each of its left-out closure outcomes leads to. None:
      * the strategy never meets a left-out closure, so it is a winning strategy in the mission.
@@ -161,10 +184,7 @@ public final class PhasedLastingSolver {
                 if (a.weight(e) != ArenaCompiler.LEFT_OUT) {
                     continue;
                 }
-                // the item the closure would close: the door tried, or the blockage rule's zone
-                int item = a.event(e) == EventKind.DOOR_SHUT.ordinal() ? st.doorItem(a.actionTarget(d))
-                        : st.blockageItem(a.rule(e));
-                int t = st.after(a.state(d), a.rule(e), item);
+                int t = leftOutState(a, st, e);
                 if (t >= 0 && !keep[t]) {
                     add[t] = true;
                 }

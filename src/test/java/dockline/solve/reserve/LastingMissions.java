@@ -92,6 +92,25 @@ public final class LastingMissions {
         return withRules(base, rules);
     }
 
+    /** The base phase of a restricted arena: the disturbance states with nothing closed. */
+    static boolean[] basePhase(dockline.arena.DisturbanceStates st) {
+        boolean[] keep = new boolean[st.count()];
+        for (int s = 0; s < st.count(); s++) {
+            keep[s] = st.closed(s).length == 0;
+        }
+        return keep;
+    }
+
+    /** Whether a phase is left out ({@code keep} false somewhere). */
+    static boolean leavesOut(boolean[] keep) {
+        for (boolean k : keep) {
+            if (!k) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     public static Mission withRules(Mission base, List<EventRule> rules) {
         return new Mission(base.name(), base.source(),
                 base.map().withDisturbances(new DisturbanceModel(base.map().disturbances().budget(), rules)),

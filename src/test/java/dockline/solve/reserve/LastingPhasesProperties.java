@@ -74,12 +74,8 @@ class LastingPhasesProperties {
         String why = LastingMissions.describe(m);
         GoalAutomaton goal = GoalAutomaton.of(m);
         DisturbanceStates st = ArenaCompiler.states(m);
-        boolean[] keep = new boolean[st.count()];
-        boolean partial = false;
-        for (int s = 0; s < st.count(); s++) {
-            keep[s] = st.closed(s).length == 0;
-            partial |= !keep[s];
-        }
+        boolean[] keep = LastingMissions.basePhase(st);
+        boolean partial = LastingMissions.leavesOut(keep);
         Arena base = ArenaCompiler.compileWithin(m, st, keep);
         boolean apart = false;
         for (int floor : floors(m, highest)) {
