@@ -56,25 +56,23 @@ final class RoundsCheck {
 
     /** Plans the mission through the core ({@link RoundsPlan}), prints the result, returns the exit code. */
     static int run(Mission m, long memoryBudgetBytes, boolean safest, boolean json, PrintWriter out, PrintWriter err) {
-        RoundsPlan plan = RoundsPlan.of(m, budget(memoryBudgetBytes), safest ? PolicyChoice.SAFEST
-                : PolicyChoice.FEWEST_MOVES);
-        RoundsCertificate cert = plan.certificate();
+        long bytes = budget(memoryBudgetBytes);
+        RoundsPlan plan = RoundsPlan.of(m, bytes, safest ? PolicyChoice.SAFEST : PolicyChoice.FEWEST_MOVES);
         if (plan.certificateDisagrees()) {
-            return internal(err, cert);
+            return internal(err, plan.certificate());
         }
+        plan = plan.withLowestStart(bytes);
         if (plan.patrol().isPresent()) {
-            PatrolAnalysis a = plan.patrol().get();
             if (json) {
-                out.println(patrolJson(a, cert));
+                out.println(patrolJson(plan));
             } else {
-                patrolText(a, cert, out);
+                patrolText(plan, out);
             }
         } else {
-            DeadlineAnalysis a = plan.deadline().orElseThrow();
             if (json) {
-                out.println(deadlineJson(a, cert));
+                out.println(deadlineJson(plan));
             } else {
-                deadlineText(a, cert, out);
+                deadlineText(plan, out);
             }
         }
         return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
@@ -99,7 +97,9 @@ final class RoundsCheck {
 
     // ---------------------------------------------------------------- patrol
 
-    static void patrolText(PatrolAnalysis a, RoundsCertificate cert, PrintWriter out) {
+    static void patrolText(RoundsPlan p, PrintWriter out) {
+        PatrolAnalysis a = p.patrol().orElseThrow();
+        RoundsCertificate cert = p.certificate();
         Mission m = a.mission();
         Timing t = m.timing();
         String cps = String.join(", ", m.tasks().patrol());
@@ -117,8 +117,7 @@ final class RoundsCheck {
             out.println("  Run 'dockline replay " + (m.source() == null ? "MISSION" : m.source()) + "' for a lap where"
                     + " the building wins (the battery or a checkpoint is lost).");
         }
-        figures(a.highestGuaranteedReserveUnits(), "", changes(a), a.startUnits(), a.reserveUnits(), a.capacityUnits(),
-                m, out);
+        figures(p, "", out);
         out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
                 + " checkpoints of the lap x battery levels)");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
@@ -127,7 +126,8 @@ final class RoundsCheck {
         tail(m, cert, out);
     }
 
-    static String patrolJson(PatrolAnalysis a, RoundsCertificate cert) {
+    static String patrolJson(RoundsPlan p) {
+        PatrolAnalysis a = p.patrol().orElseThrow();
         Mission m = a.mission();
         ObjectNode o = header(m, a.guaranteed(), "patrol");
         o.putPOJO("checkpoints", m.tasks().patrol());
@@ -139,15 +139,18 @@ final class RoundsCheck {
         Json.putOptional(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
         Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        lowestStartJson(o, p);
         tick(o, m);
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("fixpointRounds", a.rounds());
-        return end(o, m, a.millis(), cert, changes(a));
+        return end(o, m, a.millis(), p.certificate(), changes(p));
     }
 
     // ---------------------------------------------------------------- deadline
 
-    static void deadlineText(DeadlineAnalysis a, RoundsCertificate cert, PrintWriter out) {
+    static void deadlineText(RoundsPlan p, PrintWriter out) {
+        DeadlineAnalysis a = p.deadline().orElseThrow();
+        RoundsCertificate cert = p.certificate();
         Mission m = a.mission();
         Timing t = m.timing();
         String deadline = Timing.clock(t.deadlineSeconds()) + " (" + a.deadlineTicks() + " turns of "
@@ -175,8 +178,7 @@ final class RoundsCheck {
         } else {
             out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
         }
-        figures(a.highestGuaranteedReserveUnits(), " (within the deadline)", changes(a), a.startUnits(),
-                a.reserveUnits(), a.capacityUnits(), m, out);
+        figures(p, " (within the deadline)", out);
         out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
                 + " stand for the ticks-left monitor");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
@@ -185,7 +187,8 @@ final class RoundsCheck {
         tail(m, cert, out);
     }
 
-    static String deadlineJson(DeadlineAnalysis a, RoundsCertificate cert) {
+    static String deadlineJson(RoundsPlan p) {
+        DeadlineAnalysis a = p.deadline().orElseThrow();
         Mission m = a.mission();
         ObjectNode o = header(m, a.guaranteed(), "deadline");
         Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
@@ -198,10 +201,11 @@ final class RoundsCheck {
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
         Json.putOptional(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
         Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        lowestStartJson(o, p);
         policy(o, a.policyFloorUnits(), a.reserveUnits());
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("timedVertices", a.timedVertices());
-        return end(o, m, a.millis(), cert, changes(a));
+        return end(o, m, a.millis(), p.certificate(), changes(p));
     }
 
     // ---------------------------------------------------------------- shared
@@ -210,7 +214,25 @@ final class RoundsCheck {
     record Change(String kind, long from, long to, String text) {
     }
 
-    static java.util.List<Change> changes(PatrolAnalysis a) {
+    /**
+     * The changes that make the planned mission guaranteed: those of its floor (and deadline), then a higher
+     * starting charge when the plan's lowest start is above the mission's.
+     */
+    static java.util.List<Change> changes(RoundsPlan p) {
+        java.util.List<Change> out = p.patrol().isPresent() ? changes(p.patrol().get())
+                : changes(p.deadline().orElseThrow());
+        Mission m = p.mission();
+        int start = m.startUnits();
+        if (!p.guaranteed() && p.lowestStartUnits().isPresent() && p.lowestStartUnits().getAsInt() > start) {
+            int low = p.lowestStartUnits().getAsInt();
+            out.add(new Change("start-charge", start, low, "start with at least " + CheckReport.amount(low, m)
+                    + " (from " + CheckReport.amount(start, m) + ")" + (p.patrol().isPresent() ? ""
+                    : ", which keeps the deadline")));
+        }
+        return out;
+    }
+
+    private static java.util.List<Change> changes(PatrolAnalysis a) {
         java.util.List<Change> out = new java.util.ArrayList<>();
         if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
             int h = a.highestGuaranteedReserveUnits().getAsInt();
@@ -221,7 +243,7 @@ final class RoundsCheck {
         return out;
     }
 
-    static java.util.List<Change> changes(DeadlineAnalysis a) {
+    private static java.util.List<Change> changes(DeadlineAnalysis a) {
         java.util.List<Change> out = new java.util.ArrayList<>();
         if (a.guaranteed()) {
             return out;
@@ -271,13 +293,34 @@ final class RoundsCheck {
         }
     }
 
-    /** The highest floor ({@code what}: of which goal), the changes that make it guaranteed, the battery. */
-    private static void figures(OptionalInt h, String what, java.util.List<Change> changes, int startUnits,
-                                int reserveUnits, int capacityUnits, Mission m, PrintWriter out) {
+    /**
+     * The highest floor and the lowest start ({@code what}: of which goal), the changes that make it guaranteed,
+     * the battery.
+     */
+    private static void figures(RoundsPlan p, String what, PrintWriter out) {
+        Mission m = p.mission();
+        OptionalInt h = p.patrol().isPresent() ? p.patrol().get().highestGuaranteedReserveUnits()
+                : p.deadline().orElseThrow().highestGuaranteedReserveUnits();
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
                 ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
-        changesText(changes, out);
-        CheckReport.batteryLine(startUnits, reserveUnits, capacityUnits, m, out);
+        out.println("  Lowest starting charge for the floor" + what + ": " + lowestStartWords(p));
+        changesText(changes(p), out);
+        CheckReport.batteryLine(m.startUnits(), m.reserveUnits(), m.capacityUnits(), m, out);
+    }
+
+    /** The lowest start in words: the amount, none, or why it was not computed. */
+    static String lowestStartWords(RoundsPlan p) {
+        if (p.lowestStartUnits().isPresent()) {
+            return CheckReport.amount(p.lowestStartUnits().getAsInt(), p.mission());
+        }
+        return p.lowestStartSearched() ? "none (not even a full battery is enough)"
+                : "not computed (a game from a higher starting charge passes the memory budget)";
+    }
+
+    /** The lowest start ({@code null} when none or not searched) and whether its search ran to the end. */
+    private static void lowestStartJson(ObjectNode o, RoundsPlan p) {
+        Json.putOptional(o, "lowestStartUnits", p.lowestStartUnits());
+        o.put("lowestStartSearched", p.lowestStartSearched());
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method) {

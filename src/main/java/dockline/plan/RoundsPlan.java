@@ -5,11 +5,13 @@ import dockline.certify.PatrolCertificateChecker;
 import dockline.certify.RoundsCertificate;
 import dockline.model.Mission;
 import dockline.replay.RoundsReplay;
+import dockline.solve.ProductTooLargeException;
 import dockline.solve.rounds.DeadlineAnalysis;
 import dockline.solve.rounds.DeadlineSolver;
 import dockline.solve.rounds.PatrolAnalysis;
 import dockline.solve.rounds.PatrolSolver;
 import java.util.Optional;
+import java.util.OptionalInt;
 
 /**
  * The core's answer for the missions beyond one trip, a patrol or a visit mission with a deadline: the
@@ -20,15 +22,18 @@ import java.util.Optional;
  * which they report as an internal error (never a silent "guaranteed").
  *
  * <p>Cost: that of the route's stored product (see the solvers), plus one pass over the policy's closed
- * loop for the certificate.
+ * loop for the certificate; {@link #withLowestStart} adds O(log C) products for capacity C.
  *
  * @param mission     the mission as planned (overrides applied)
  * @param patrol      the patrol analysis, for a patrol
  * @param deadline    the deadline analysis, for a visit mission with a deadline
  * @param certificate the certificate of the guaranteed policy; null when not guaranteed
+ * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (and its deadline);
+ *                            empty when none does or when it was not searched
+ * @param lowestStartSearched whether that search ran ({@link #withLowestStart}) to the end
  */
 public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optional<DeadlineAnalysis> deadline,
-                         RoundsCertificate certificate) {
+                         RoundsCertificate certificate, OptionalInt lowestStartUnits, boolean lowestStartSearched) {
 
     /**
      * Solves and certifies a patrol or deadline mission ({@link Mission#beyondOneTrip()}).
@@ -42,12 +47,39 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
             PatrolAnalysis a = PatrolSolver.analyse(m, budgetBytes, safest);
             RoundsCertificate cert = a.guaranteed() ? PatrolCertificateChecker.check(a.arena(),
                     a.policy().orElseThrow(), a.reserveUnits(), a.startUnits()) : null;
-            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert);
+            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert, OptionalInt.empty(), false);
         }
         DeadlineAnalysis a = DeadlineSolver.analyse(m, budgetBytes, safest);
         RoundsCertificate cert = a.guaranteed() ? DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(),
                 a.reserveUnits(), a.startUnits(), a.deadlineTicks()) : null;
-        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert);
+        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert, OptionalInt.empty(), false);
+    }
+
+    /**
+     * This plan with the lowest starting charge that guarantees the mission's floor (within its deadline, for a
+     * deadline mission): bisection over the start ({@link PatrolSolver#lowestStart},
+     * {@link DeadlineSolver#lowestStart}), exact in energy units. When a product from a higher start passes the
+     * memory budget the figure is left out and {@link #lowestStartSearched()} is false; nothing else changes.
+     *
+     * @param budgetBytes the memory budget of each product
+     */
+    public RoundsPlan withLowestStart(long budgetBytes) {
+        try {
+            OptionalInt low = patrol.isPresent() ? PatrolSolver.lowestStart(patrol.get(), budgetBytes)
+                    : DeadlineSolver.lowestStart(deadline.orElseThrow(), budgetBytes);
+            return new RoundsPlan(mission, patrol, deadline, certificate, low, true);
+        } catch (ProductTooLargeException e) {
+            return new RoundsPlan(mission, patrol, deadline, certificate, OptionalInt.empty(), false);
+        }
+    }
+
+    /**
+     * The fewest turns in which the robot can be sure to finish and dock, at the mission's floor and start and with
+     * no deadline ({@link DeadlineSolver#fewestTurns}); empty when it cannot be sure to finish. For a visit mission
+     * (one trip or with a deadline), not a patrol.
+     */
+    public static OptionalInt fewestTurns(Mission m, long budgetBytes) {
+        return DeadlineSolver.fewestTurns(m, budgetBytes);
     }
 
     /**

@@ -117,6 +117,34 @@ public final class DeadlineSolver {
     }
 
     /**
+     * The lowest starting charge (the floor .. the capacity) from which the analysed mission is guaranteed at its
+     * floor within its deadline ({@link StartSearch}: bisection over the start, one product and attractor per
+     * step, the mission's own start reused when it is guaranteed); empty when not even a full battery is.
+     *
+     * @throws dockline.solve.ProductTooLargeException when a product from a higher start passes the budget
+     */
+    public static OptionalInt lowestStart(DeadlineAnalysis a, long budgetBytes) {
+        return StartSearch.lowest(a.reserveUnits(), a.capacityUnits(), a.guaranteed() ? a.startUnits() : -1, s -> {
+            int turns = solve(a.arena(), a.reserveUnits(), s, budgetBytes).turns;
+            return turns >= 0 && turns <= a.deadlineTicks();
+        });
+    }
+
+    /**
+     * The fewest turns in which the robot can be sure to finish and dock from the mission's start at its floor,
+     * with no deadline (one product and one attractor, O(N + M)); empty when it cannot be sure to finish at all.
+     * With a disturbance budget of 0 this is the undisturbed shortest run the rule of thumb sets against the
+     * deadline.
+     */
+    public static OptionalInt fewestTurns(Mission m, long budgetBytes) {
+        if (m.tasks().patrols()) {
+            throw new IllegalArgumentException("a patrol has no finishing time");
+        }
+        int turns = solve(ArenaCompiler.compile(m), m.reserveUnits(), m.startUnits(), budgetBytes).turns;
+        return turns < 0 ? OptionalInt.empty() : OptionalInt.of(turns);
+    }
+
+    /**
      * The highest floor (0 .. start) at which the mission is still guaranteed within the deadline, by
      * bisection ({@link MonotoneSearch}); empty when not even a floor of 0 is.
      *

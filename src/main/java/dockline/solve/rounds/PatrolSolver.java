@@ -192,6 +192,18 @@ public final class PatrolSolver {
     }
 
     /**
+     * The lowest starting charge (the floor .. the capacity) from which the analysed patrol is guaranteed at its
+     * floor ({@link StartSearch}: bisection over the start, one product and Büchi fixpoint per step, the mission's
+     * own start reused when it is guaranteed); empty when not even a full battery is.
+     *
+     * @throws dockline.solve.ProductTooLargeException when a product from a higher start passes the budget
+     */
+    public static OptionalInt lowestStart(PatrolAnalysis a, long budgetBytes) {
+        return StartSearch.lowest(a.reserveUnits(), a.capacityUnits(), a.guaranteed() ? a.startUnits() : -1,
+                s -> solve(a.arena(), a.reserveUnits(), s, budgetBytes).guaranteed());
+    }
+
+    /**
      * The highest floor (0 .. start) at which the patrol is still guaranteed, by bisection
      * ({@link MonotoneSearch}); empty when not even a floor of 0 is.
      *

@@ -1,0 +1,89 @@
+package dockline.solve.rounds;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dockline.model.Charge;
+import dockline.model.Mission;
+import dockline.plan.PolicyChoice;
+import dockline.plan.RoundsPlan;
+import java.math.BigDecimal;
+import java.util.OptionalInt;
+import java.util.function.BiPredicate;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.statistics.Statistics;
+
+/**
+ * The lowest starting charge of patrols and deadline missions ({@link RoundsPlan#withLowestStart}: bisection
+ * over the start on the production solvers) against the separately written brute force ({@link RoundsBruteForce}:
+ * its own move generation from the records, the μ-calculus fixpoint for patrols, explicit ticks left for
+ * deadlines), on random tiny games: the lowest start equals the least start, from the floor up to the capacity,
+ * at which the brute force says guaranteed, tried one start after the other (no bisection, so no monotonicity is
+ * assumed by the oracle). Every case runs; the statistics show how the figure falls against the mission's start.
+ */
+class RoundsLowestStartProperties {
+
+    private static final long BUDGET = 1L << 30;
+
+    /** The mission with a starting charge of exactly {@code units} energy units. */
+    private static Mission startingAt(Mission m, int units) {
+        BigDecimal wh = m.scale().unitWh().multiply(BigDecimal.valueOf(units));
+        Mission out = m.withStartCharge(Charge.wh(wh));
+        assertThat(out.startUnits()).as("start in units").isEqualTo(units);
+        return out;
+    }
+
+    /** The least start from the floor to the capacity that the brute force wins, one start after the other; -1 if none. */
+    private static int bruteLowestStart(Mission m, BiPredicate<RoundsBruteForce, Mission> won) {
+        for (int s = m.reserveUnits(); s <= m.capacityUnits(); s++) {
+            Mission at = startingAt(m, s);
+            if (won.test(new RoundsBruteForce(at, at.reserveUnits()), at)) {
+                return s;
+            }
+        }
+        return -1;
+    }
+
+    private static String against(OptionalInt low, Mission m) {
+        if (low.isEmpty()) {
+            return "none";
+        }
+        int s = m.startUnits();
+        return low.getAsInt() < s ? "below the start" : low.getAsInt() == s ? "the start" : "above the start";
+    }
+
+    // Oracle: RoundsBruteForce.patrolWon (νZ.μY fixpoint of the μ-calculus for Büchi games, Emerson and Jutla 1991 /
+    // Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002), at every start from the floor to the capacity.
+    @Property(tries = 400)
+    void patrol_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
+        Mission m = RoundsAgreementProperties.patrolOf(seed);
+        RoundsPlan p = RoundsPlan.of(m, BUDGET, PolicyChoice.FEWEST_MOVES).withLowestStart(BUDGET);
+        int expected = bruteLowestStart(m, (bf, at) -> bf.patrolWon());
+        assertThat(p.lowestStartSearched()).isTrue();
+        assertThat(p.lowestStartUnits().orElse(-1)).as("lowest start").isEqualTo(expected);
+        Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
+        Statistics.label("lowest start").coverage(c -> {
+            c.check("below the start").percentage(q -> q >= 20);
+            c.check("above the start").percentage(q -> q >= 8);
+            c.check("none").percentage(q -> q >= 15);
+        });
+    }
+
+    // Oracle: RoundsBruteForce.deadlineWon (the "force within t steps" layers W_0 ⊆ W_1 ⊆ ... with the ticks left
+    // as an explicit counter, Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002, chapter 2), at every start.
+    @Property(tries = 400)
+    void deadline_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
+        Mission m = RoundsAgreementProperties.deadlineOf(seed);
+        int deadline = m.timing().deadlineTicks();
+        RoundsPlan p = RoundsPlan.of(m, BUDGET, PolicyChoice.FEWEST_MOVES).withLowestStart(BUDGET);
+        int expected = bruteLowestStart(m, (bf, at) -> bf.deadlineWon(deadline));
+        assertThat(p.lowestStartSearched()).isTrue();
+        assertThat(p.lowestStartUnits().orElse(-1)).as("lowest start").isEqualTo(expected);
+        Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
+        Statistics.label("lowest start").coverage(c -> {
+            c.check("below the start").percentage(q -> q >= 20);
+            c.check("above the start").percentage(q -> q >= 8);
+            c.check("none").percentage(q -> q >= 15);
+        });
+    }
+}
