@@ -143,8 +143,9 @@ public final class Html {
         sb.append("</tbody>\n</table>\n<p>").append(escape("Worst case: the lowest battery level the disturbances can"
                 + " force under the certified policy. Rule of thumb (common practice, not a guarantee): safe when the"
                 + " charge above the floor covers the cheapest run with no disturbance plus the margin, in percent of"
-                + " the capacity. Marked red where it calls an unsafe mission safe, yellow where it turns down a"
-                + " guaranteed one.")).append("</p>\n</section>\n");
+                + " the capacity; for a mission with a deadline, also when the shortest run with no disturbance plus"
+                + " the same percentage of the deadline fits in the deadline. Marked red where it calls an unsafe"
+                + " mission safe, yellow where it turns down a guaranteed one.")).append("</p>\n</section>\n");
     }
 
     private static String flagClass(RuleOfThumb r) {
@@ -201,7 +202,8 @@ public final class Html {
         dt(sb, "Highest guaranteed floor", f.highestFloorUnits().isPresent() ? f.wh(f.highestFloorUnits().getAsInt())
                 : "none can be guaranteed from this start");
         dt(sb, "Lowest start", f.lowestStartUnits().isPresent() ? f.wh(f.lowestStartUnits().getAsInt())
-                : r.kind().equals("one-trip") ? "no start charge guarantees the floor" : "not computed");
+                : r.notes().contains(MissionChecker.LOWEST_START_NOT_COMPUTED) ? "not computed (see the notes)"
+                : "no start charge guarantees the floor");
         dt(sb, "Method", f.method() + " \u2014 " + f.methodReason());
         dt(sb, "Certificate", f.certification());
         sb.append("</dl>\n");
@@ -273,7 +275,22 @@ public final class Html {
                 : "more than the starting charge";
         return rule.marginPercent() + " % margin (" + f.wh(rule.marginUnits()) + "): cheapest run with no disturbance"
                 + " needs " + need + ", the charge above the floor is " + f.wh(f.startUnits() - f.reserveUnits())
-                + "; the rule says " + rule.words() + ".";
+                + rule.deadline().map(Html::timeWords).orElse("") + "; the rule says " + rule.words() + ".";
+    }
+
+    /** The time half of the rule in words: the shortest run and the buffer against the deadline. */
+    private static String timeWords(RuleOfThumb.Time t) {
+        String deadline = t.deadlineTicks() + (t.deadlineTicks() == 1 ? " turn" : " turns");
+        if (t.shortestRunTicks().isEmpty()) {
+            return "; no run with no disturbance finishes, so none fits the deadline of " + deadline;
+        }
+        int run = t.shortestRunTicks().getAsInt();
+        String runWords = "the shortest run with no disturbance takes " + run + (run == 1 ? " turn" : " turns");
+        if (t.shortestRunTooLong()) {
+            return "; even " + runWords + ", more than the deadline of " + deadline;
+        }
+        return "; " + runWords + ", with a buffer of " + t.marginTicks() + (t.marginTicks() == 1 ? " turn" : " turns")
+                + (t.fits() ? " it fits in" : " it does not fit in") + " the deadline of " + deadline;
     }
 
     private static void dt(StringBuilder sb, String term, String value) {
