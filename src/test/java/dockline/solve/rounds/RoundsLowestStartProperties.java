@@ -20,6 +20,8 @@ import net.jqwik.api.statistics.Statistics;
  * deadlines), on random tiny games: the lowest start equals the least start, from the floor up to the capacity,
  * at which the brute force says guaranteed, tried one start after the other (no bisection, so no monotonicity is
  * assumed by the oracle). Every case runs; the statistics show how the figure falls against the mission's start.
+ * Also the rule of thumb's shortest run ({@link RoundsPlan#fewestTurns} at a budget of 0) against the brute
+ * force's fewest turns.
  */
 class RoundsLowestStartProperties {
 
@@ -84,6 +86,21 @@ class RoundsLowestStartProperties {
             c.check("below the start").percentage(q -> q >= 20);
             c.check("above the start").percentage(q -> q >= 8);
             c.check("none").percentage(q -> q >= 15);
+        });
+    }
+
+    // Oracle: RoundsBruteForce.fewestTurns (the least t with the start in the layer W_t) on the same mission with no
+    // disturbance: the rule of thumb's shortest run.
+    @Property(tries = 400)
+    void shortestRunWithNoDisturbance_isTheBruteForcesFewestTurns(@ForAll long seed) {
+        Mission m = RoundsAgreementProperties.deadlineOf(seed).withBudget(0);
+        OptionalInt turns = RoundsPlan.fewestTurns(m, BUDGET);
+        int expected = new RoundsBruteForce(m, m.reserveUnits()).fewestTurns(10_000);
+        assertThat(turns.orElse(-1)).as("fewest turns").isEqualTo(expected);
+        Statistics.label("finishes").collect(turns.isPresent());
+        Statistics.label("finishes").coverage(c -> {
+            c.check(true).percentage(q -> q >= 30);
+            c.check(false).percentage(q -> q >= 5);
         });
     }
 }
