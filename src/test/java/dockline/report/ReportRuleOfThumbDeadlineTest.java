@@ -2,10 +2,6 @@ package dockline.report;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import dockline.model.Mission;
-import dockline.plan.Plan;
-import dockline.replay.Replay;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.OptionalInt;
 import org.junit.jupiter.api.Test;
@@ -24,72 +20,19 @@ class ReportRuleOfThumbDeadlineTest {
     @TempDir
     Path dir;
 
-    private static final Pictures NO_PICTURES = new Pictures() {
-        @Override
-        public byte[] oneTrip(Plan plan) {
-            return new byte[] {1};
-        }
-
-        @Override
-        public byte[] run(Mission mission, Replay run, boolean guaranteed, String headline) {
-            return new byte[] {1};
-        }
-    };
+    private static final Pictures NO_PICTURES = ReportRuleOfThumbTest.NO_PICTURES;
 
     /** The lane with a budget and one event rule on the lane's cells x = 2 .. 9 (invented test data). */
     private Path lane(String name, int budget, String event) throws Exception {
-        Path map = dir.resolve(name + "-map.yaml");
-        Files.writeString(map, """
-                # a hand-made test lane (invented data)
-                name: Test lane
-                cell-size: 1
-                legend:
-                  "#": wall
-                  ".": tile
-                  "C": {surface: tile, dock: true}
-                plan: |
-                  ############
-                  #.........C#
-                  ############
-                zones:
-                  lane: {from: [2, 1], to: [9, 1]}
-                disturbances:
-                  budget: %d
-                  events:
-                    - %s
-                """.formatted(budget, event));
-        return map;
+        return ReportRuleOfThumbTest.lane(dir, name, budget, event);
     }
 
     private Path mission(Path map, String name, int startPercent, int reservePercent, String deadline)
             throws Exception {
-        Path m = dir.resolve(name + ".yaml");
-        Files.writeString(m, """
-                name: %s
-                map: %s
-                robot:
-                  capacity: 100
-                  resolution: 1
-                  move-energy:
-                    tile: 1
-                  wait-energy: 1
-                  charge-rate: 1
-                  neighbourhood: 4
-                  tick: 4 s
-                start:
-                  cell: [1, 1]
-                  charge: %d%%
-                reserve: %d%%
-                deadline: %s
-                tasks:
-                  finish-on-dock: true
-                objective:
-                  kind: reserve
-                """.formatted(name, map.getFileName(), startPercent, reservePercent, deadline));
-        return m;
+        return ReportRuleOfThumbTest.mission(dir, map, name, startPercent, reservePercent, deadline);
     }
 
-    private static final String DRAG = "{kind: drag, where: lane, extra: 1}";
+    private static final String DRAG = "kind: drag\n      where: lane\n      extra: 1";
 
     /**
      * Worked by hand: deadline 32 s = 8 turns of 4 s. The shortest run with no disturbance takes 9 turns > 8, so
@@ -153,7 +96,7 @@ class ReportRuleOfThumbDeadlineTest {
     @Test
     void blockagesCostTime_theRuleCallsAnUnsafeMissionSafe() throws Exception {
         MissionResult r = MissionChecker.check(mission(lane("blocked", 12,
-                "{kind: blockage, where: lane, duration: momentary}"), "blocked-lane", 60, 5, "80 s"), 0, NO_PICTURES);
+                "kind: blockage\n      where: lane\n      duration: momentary"), "blocked-lane", 60, 5, "80 s"), 0, NO_PICTURES);
         assertThat(r.errors()).isEmpty();
         MissionResult.Figures f = r.figures();
         assertThat(f.guaranteed()).isFalse();

@@ -8,7 +8,7 @@ import dockline.plan.PolicyChoice;
 import dockline.plan.RoundsPlan;
 import java.math.BigDecimal;
 import java.util.OptionalInt;
-import java.util.function.BiPredicate;
+import java.util.function.Predicate;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
@@ -36,10 +36,10 @@ class RoundsLowestStartProperties {
     }
 
     /** The least start from the floor to the capacity that the brute force wins, one start after the other; -1 if none. */
-    private static int bruteLowestStart(Mission m, BiPredicate<RoundsBruteForce, Mission> won) {
+    private static int bruteLowestStart(Mission m, Predicate<RoundsBruteForce> won) {
         for (int s = m.reserveUnits(); s <= m.capacityUnits(); s++) {
             Mission at = startingAt(m, s);
-            if (won.test(new RoundsBruteForce(at, at.reserveUnits()), at)) {
+            if (won.test(new RoundsBruteForce(at, at.reserveUnits()))) {
                 return s;
             }
         }
@@ -54,13 +54,10 @@ class RoundsLowestStartProperties {
         return low.getAsInt() < s ? "below the start" : low.getAsInt() == s ? "the start" : "above the start";
     }
 
-    // Oracle: RoundsBruteForce.patrolWon (νZ.μY fixpoint of the μ-calculus for Büchi games, Emerson and Jutla 1991 /
-    // Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002), at every start from the floor to the capacity.
-    @Property(tries = 400)
-    void patrol_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
-        Mission m = RoundsAgreementProperties.patrolOf(seed);
+    /** The production lowest start of {@code m} against the brute force's least winning start, with statistics. */
+    private static void agrees(Mission m, Predicate<RoundsBruteForce> won) {
         RoundsPlan p = RoundsPlan.of(m, BUDGET, PolicyChoice.FEWEST_MOVES).withLowestStart(BUDGET);
-        int expected = bruteLowestStart(m, (bf, at) -> bf.patrolWon());
+        int expected = bruteLowestStart(m, won);
         assertThat(p.lowestStartSearched()).isTrue();
         assertThat(p.lowestStartUnits().orElse(-1)).as("lowest start").isEqualTo(expected);
         Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
@@ -71,22 +68,20 @@ class RoundsLowestStartProperties {
         });
     }
 
+    // Oracle: RoundsBruteForce.patrolWon (νZ.μY fixpoint of the μ-calculus for Büchi games, Emerson and Jutla 1991 /
+    // Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002), at every start from the floor to the capacity.
+    @Property(tries = 400)
+    void patrol_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
+        agrees(RoundsAgreementProperties.patrolOf(seed), bf -> bf.patrolWon());
+    }
+
     // Oracle: RoundsBruteForce.deadlineWon (the "force within t steps" layers W_0 ⊆ W_1 ⊆ ... with the ticks left
     // as an explicit counter, Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002, chapter 2), at every start.
     @Property(tries = 400)
     void deadline_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
         Mission m = RoundsAgreementProperties.deadlineOf(seed);
         int deadline = m.timing().deadlineTicks();
-        RoundsPlan p = RoundsPlan.of(m, BUDGET, PolicyChoice.FEWEST_MOVES).withLowestStart(BUDGET);
-        int expected = bruteLowestStart(m, (bf, at) -> bf.deadlineWon(deadline));
-        assertThat(p.lowestStartSearched()).isTrue();
-        assertThat(p.lowestStartUnits().orElse(-1)).as("lowest start").isEqualTo(expected);
-        Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
-        Statistics.label("lowest start").coverage(c -> {
-            c.check("below the start").percentage(q -> q >= 20);
-            c.check("above the start").percentage(q -> q >= 8);
-            c.check("none").percentage(q -> q >= 15);
-        });
+        agrees(m, bf -> bf.deadlineWon(deadline));
     }
 
     // Oracle: RoundsBruteForce.fewestTurns (the least t with the start in the layer W_t) on the same mission with no
