@@ -62,18 +62,10 @@ final class RoundsCheck {
             return internal(err, plan.certificate());
         }
         plan = plan.withLowestStart(bytes);
-        if (plan.patrol().isPresent()) {
-            if (json) {
-                out.println(patrolJson(plan));
-            } else {
-                patrolText(plan, out);
-            }
+        if (json) {
+            out.println(json(plan));
         } else {
-            if (json) {
-                out.println(deadlineJson(plan));
-            } else {
-                deadlineText(plan, out);
-            }
+            text(plan, out);
         }
         return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
@@ -95,11 +87,35 @@ final class RoundsCheck {
                 : "");
     }
 
+    /** The text of either goal, ending in the energy, the certificate and the safety cautions. */
+    static void text(RoundsPlan p, PrintWriter out) {
+        if (p.patrol().isPresent()) {
+            patrolText(p, out);
+        } else {
+            deadlineText(p, out);
+        }
+        tail(p.mission(), p.certificate(), out);
+    }
+
+    /** The JSON object of either goal: the shared header, the goal's own keys, then the shared last keys. */
+    static String json(RoundsPlan p) {
+        Mission m = p.mission();
+        ObjectNode o = header(m, p.guaranteed(), p.patrol().isPresent() ? "patrol" : "deadline");
+        long millis;
+        if (p.patrol().isPresent()) {
+            patrolKeys(o, p);
+            millis = p.patrol().get().millis();
+        } else {
+            deadlineKeys(o, p);
+            millis = p.deadline().orElseThrow().millis();
+        }
+        return end(o, m, millis, p.certificate(), changes(p));
+    }
+
     // ---------------------------------------------------------------- patrol
 
-    static void patrolText(RoundsPlan p, PrintWriter out) {
+    private static void patrolText(RoundsPlan p, PrintWriter out) {
         PatrolAnalysis a = p.patrol().orElseThrow();
-        RoundsCertificate cert = p.certificate();
         Mission m = a.mission();
         Timing t = m.timing();
         String cps = String.join(", ", m.tasks().patrol());
@@ -123,13 +139,11 @@ final class RoundsCheck {
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + " vertices); " + a.rounds() + " round" + (a.rounds() == 1 ? "" : "s")
                 + " of the fixpoint; " + a.millis() + " ms in all (the highest floor included)");
-        tail(m, cert, out);
     }
 
-    static String patrolJson(RoundsPlan p) {
+    private static void patrolKeys(ObjectNode o, RoundsPlan p) {
         PatrolAnalysis a = p.patrol().orElseThrow();
         Mission m = a.mission();
-        ObjectNode o = header(m, a.guaranteed(), "patrol");
         o.putPOJO("checkpoints", m.tasks().patrol());
         o.put("budgetPer", m.map().disturbances().budgetPerLap() ? "lap" : "mission");
         Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
@@ -143,14 +157,12 @@ final class RoundsCheck {
         tick(o, m);
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("fixpointRounds", a.rounds());
-        return end(o, m, a.millis(), p.certificate(), changes(p));
     }
 
     // ---------------------------------------------------------------- deadline
 
-    static void deadlineText(RoundsPlan p, PrintWriter out) {
+    private static void deadlineText(RoundsPlan p, PrintWriter out) {
         DeadlineAnalysis a = p.deadline().orElseThrow();
-        RoundsCertificate cert = p.certificate();
         Mission m = a.mission();
         Timing t = m.timing();
         String deadline = Timing.clock(t.deadlineSeconds()) + " (" + a.deadlineTicks() + " turns of "
@@ -184,13 +196,11 @@ final class RoundsCheck {
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + "); with ticks left " + a.timedVertices() + " vertices, kept as one rank per"
                 + " vertex; " + a.millis() + " ms in all (the highest floor included)");
-        tail(m, cert, out);
     }
 
-    static String deadlineJson(RoundsPlan p) {
+    private static void deadlineKeys(ObjectNode o, RoundsPlan p) {
         DeadlineAnalysis a = p.deadline().orElseThrow();
         Mission m = a.mission();
-        ObjectNode o = header(m, a.guaranteed(), "deadline");
         Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
         tick(o, m);
         o.put("deadlineSeconds", m.timing().deadlineSeconds().stripTrailingZeros());
@@ -205,7 +215,6 @@ final class RoundsCheck {
         policy(o, a.policyFloorUnits(), a.reserveUnits());
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("timedVertices", a.timedVertices());
-        return end(o, m, a.millis(), p.certificate(), changes(p));
     }
 
     // ---------------------------------------------------------------- shared
