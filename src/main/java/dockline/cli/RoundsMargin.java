@@ -70,8 +70,9 @@ final class RoundsMargin {
                     ? t.describeTicks(f.tightestDeadlineTicks().getAsInt())
                     : "none (the robot cannot always finish at this floor)"));
         }
-        out.println("  (the same figures as 'dockline check'; found by bisection over the floor and the start on the "
-                + (patrol ? "recurrence game" : "attractor ranks") + ")");
+        out.println("  (the same figures as 'dockline check'; found by bisection over the floor on the "
+                + (patrol ? "recurrence game" : "attractor ranks") + ", and the start from one game of every starting"
+                + " level)");
         if (!f.changes().isEmpty()) {
             out.println();
             out.println("to make it guaranteed, change one of:");

@@ -22,7 +22,8 @@ import java.util.OptionalInt;
  * which they report as an internal error (never a silent "guaranteed").
  *
  * <p>Cost: that of the route's stored product (see the solvers), plus one pass over the policy's closed
- * loop for the certificate; {@link #withLowestStart} adds O(log C) products for capacity C.
+ * loop for the certificate; {@link #withLowestStart} adds one product from every start level (at most the
+ * product's size bound), or O(log C) products for capacity C when that one is too large.
  *
  * @param mission     the mission as planned (overrides applied)
  * @param patrol      the patrol analysis, for a patrol
@@ -57,9 +58,10 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
 
     /**
      * This plan with the lowest starting charge that guarantees the mission's floor (within its deadline, for a
-     * deadline mission): bisection over the start ({@link PatrolSolver#lowestStart},
-     * {@link DeadlineSolver#lowestStart}), exact in energy units. When a product from a higher start passes the
-     * memory budget the figure is left out and {@link #lowestStartSearched()} is false; nothing else changes.
+     * deadline mission), exact in energy units: one product from every start level, or bisection over the start
+     * when that is too large ({@link PatrolSolver#lowestStart}, {@link DeadlineSolver#lowestStart}). When the
+     * bisection's products pass the memory budget too, the figure is left out and {@link #lowestStartSearched()}
+     * is false; nothing else changes.
      *
      * @param budgetBytes the memory budget of each product
      */

@@ -14,8 +14,9 @@ import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
 
 /**
- * The lowest starting charge of patrols and deadline missions ({@link RoundsPlan#withLowestStart}: bisection
- * over the start on the production solvers) against the separately written brute force ({@link RoundsBruteForce}:
+ * The lowest starting charge of patrols and deadline missions ({@link RoundsPlan#withLowestStart}: one product
+ * from every start level; and the bisection over the start it falls back to when that product is too large)
+ * against the separately written brute force ({@link RoundsBruteForce}:
  * its own move generation from the records, the μ-calculus fixpoint for patrols, explicit ticks left for
  * deadlines), on random tiny games: the lowest start equals the least start, from the floor up to the capacity,
  * at which the brute force says guaranteed, tried one start after the other (no bisection, so no monotonicity is
@@ -60,6 +61,9 @@ class RoundsLowestStartProperties {
         int expected = bruteLowestStart(m, won);
         assertThat(p.lowestStartSearched()).isTrue();
         assertThat(p.lowestStartUnits().orElse(-1)).as("lowest start").isEqualTo(expected);
+        OptionalInt bisection = p.patrol().isPresent() ? PatrolSolver.lowestStartByBisection(p.patrol().get(), BUDGET)
+                : DeadlineSolver.lowestStartByBisection(p.deadline().orElseThrow(), BUDGET);
+        assertThat(bisection.orElse(-1)).as("lowest start by bisection (the fallback)").isEqualTo(expected);
         Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
         Statistics.label("lowest start").coverage(c -> {
             c.check("below the start").percentage(q -> q >= 20);
