@@ -203,6 +203,7 @@ public final class Html {
                 : "none can be guaranteed from this start");
         dt(sb, "Lowest start", f.lowestStartUnits().isPresent() ? f.wh(f.lowestStartUnits().getAsInt())
                 : r.notes().contains(MissionChecker.LOWEST_START_NOT_COMPUTED) ? "not computed (see the notes)"
+                : r.kind().equals("deadline") ? "no start charge guarantees the floor within the deadline"
                 : "no start charge guarantees the floor");
         dt(sb, "Method", f.method() + " \u2014 " + f.methodReason());
         dt(sb, "Certificate", f.certification());
@@ -262,12 +263,22 @@ public final class Html {
         MissionResult.Figures f = r.figures();
         String k = f.budget() == 0 ? "with no disturbance" : "under every sequence of up to " + f.budget()
                 + " disturbances the model allows";
+        String floor = "the reserve floor of " + f.wh(f.reserveUnits());
         if (f.guaranteed()) {
-            return "GUARANTEED: the robot can always complete the mission " + k + " without its battery going below"
-                    + " the reserve floor of " + f.wh(f.reserveUnits()) + ".";
+            String what = switch (r.kind()) {
+                case "patrol" -> "keep visiting every checkpoint, lap after lap,";
+                case "deadline" -> "complete the mission and dock within the deadline";
+                default -> "complete the mission";
+            };
+            return "GUARANTEED: the robot can always " + what + " " + k + " without its battery going below " + floor
+                    + ".";
         }
-        return "NOT GUARANTEED: " + k + ", the building can drive the battery below the reserve floor of "
-                + f.wh(f.reserveUnits()) + " (or stop the mission), whatever the robot does.";
+        String what = switch (r.kind()) {
+            case "patrol" -> "drive the battery below " + floor + " or keep the robot from completing its laps";
+            case "deadline" -> "make the robot miss the deadline or drive the battery below " + floor;
+            default -> "drive the battery below " + floor + " (or stop the mission)";
+        };
+        return "NOT GUARANTEED: " + k + ", the building can " + what + ", whatever the robot does.";
     }
 
     private static String ruleWords(MissionResult.Figures f, RuleOfThumb rule) {
