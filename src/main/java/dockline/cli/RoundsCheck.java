@@ -219,63 +219,15 @@ final class RoundsCheck {
 
     // ---------------------------------------------------------------- shared
 
-    /** A change that makes the mission guaranteed: kind, from, to (units or turns) and the sentence. */
-    record Change(String kind, long from, long to, String text) {
+    /** The plan's changes that make the mission guaranteed, the amounts worded as {@code check} words them. */
+    static java.util.List<RoundsPlan.Change> changes(RoundsPlan p) {
+        return p.changes(u -> CheckReport.amount(u, p.mission()));
     }
 
-    /**
-     * The changes that make the planned mission guaranteed: those of its floor (and deadline), then a higher
-     * starting charge when the plan's lowest start is above the mission's.
-     */
-    static java.util.List<Change> changes(RoundsPlan p) {
-        java.util.List<Change> out = p.patrol().isPresent() ? changes(p.patrol().get())
-                : changes(p.deadline().orElseThrow());
-        Mission m = p.mission();
-        int start = m.startUnits();
-        if (!p.guaranteed() && p.lowestStartUnits().isPresent() && p.lowestStartUnits().getAsInt() > start) {
-            int low = p.lowestStartUnits().getAsInt();
-            out.add(new Change("start-charge", start, low, "start with at least " + CheckReport.amount(low, m)
-                    + " (from " + CheckReport.amount(start, m) + ")" + (p.patrol().isPresent() ? ""
-                    : ", which keeps the deadline")));
-        }
-        return out;
-    }
-
-    private static java.util.List<Change> changes(PatrolAnalysis a) {
-        java.util.List<Change> out = new java.util.ArrayList<>();
-        if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
-            int h = a.highestGuaranteedReserveUnits().getAsInt();
-            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
-                    + ")"));
-        }
-        return out;
-    }
-
-    private static java.util.List<Change> changes(DeadlineAnalysis a) {
-        java.util.List<Change> out = new java.util.ArrayList<>();
-        if (a.guaranteed()) {
-            return out;
-        }
-        Timing t = a.mission().timing();
-        if (a.tightestTicks().isPresent()) {
-            int k = a.tightestTicks().getAsInt();
-            out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least " + Timing.clock(t.seconds(k))
-                    + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
-        }
-        if (a.highestGuaranteedReserveUnits().isPresent()) {
-            int h = a.highestGuaranteedReserveUnits().getAsInt();
-            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
-                    + "), which keeps the deadline"));
-        }
-        return out;
-    }
-
-    private static void changesText(java.util.List<Change> changes, PrintWriter out) {
+    private static void changesText(java.util.List<RoundsPlan.Change> changes, PrintWriter out) {
         if (!changes.isEmpty()) {
             out.println("  To make it guaranteed, change one of:");
-            for (Change c : changes) {
+            for (RoundsPlan.Change c : changes) {
                 out.println("    - " + c.text());
             }
         }
@@ -290,16 +242,12 @@ final class RoundsCheck {
         out.println(Caveats.block());
     }
 
-    /** The {@code suggestions} array of the changes: kind, from, to and the sentence (as {@link Json#putSuggestions}). */
-    static void changesJson(ObjectNode o, java.util.List<Change> changes) {
-        com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
-        for (Change c : changes) {
-            ObjectNode so = arr.addObject();
-            so.put("kind", c.kind());
-            so.put("from", c.from());
-            so.put("to", c.to());
-            so.put("text", c.text());
-        }
+    /**
+     * The {@code suggestions} array of the changes: kind, from, to and the sentence (as {@link Json#putSuggestions}),
+     * written from the records themselves (their components are the keys, in that order).
+     */
+    static void changesJson(ObjectNode o, java.util.List<RoundsPlan.Change> changes) {
+        o.putPOJO("suggestions", java.util.List.copyOf(changes));
     }
 
     /**
@@ -371,7 +319,7 @@ final class RoundsCheck {
     }
 
     /** The last keys of both goals' objects (time, certificate, suggestions, rounding, cautions), as text. */
-    private static String end(ObjectNode o, Mission m, long millis, RoundsCertificate cert, java.util.List<Change> changes) {
+    private static String end(ObjectNode o, Mission m, long millis, RoundsCertificate cert, java.util.List<RoundsPlan.Change> changes) {
         o.put("totalMillis", millis);
         certificate(o, cert);
         changesJson(o, changes);

@@ -30,7 +30,7 @@ final class RoundsMargin {
     /** The figures of one run, for the text and the JSON. */
     record Figures(Mission mission, boolean guaranteed, String goal, int startUnits, int reserveUnits,
                    int capacityUnits, OptionalInt highestReserveUnits, OptionalInt tightestDeadlineTicks,
-                   int deadlineTicks, RoundsPlan plan, List<RoundsCheck.Change> changes) {
+                   int deadlineTicks, RoundsPlan plan, List<RoundsPlan.Change> changes) {
     }
 
     /** Plans the mission (the highest floor included) and reads off the margins. */
@@ -77,7 +77,7 @@ final class RoundsMargin {
             out.println();
             out.println("to make it guaranteed, change one of:");
             int i = 1;
-            for (RoundsCheck.Change c : f.changes()) {
+            for (RoundsPlan.Change c : f.changes()) {
                 out.println("  " + i++ + ". " + c.text());
             }
         } else if (!f.guaranteed()) {

@@ -4,14 +4,18 @@ import dockline.certify.DeadlineCertificateChecker;
 import dockline.certify.PatrolCertificateChecker;
 import dockline.certify.RoundsCertificate;
 import dockline.model.Mission;
+import dockline.model.Timing;
 import dockline.replay.RoundsReplay;
 import dockline.solve.ProductTooLargeException;
 import dockline.solve.rounds.DeadlineAnalysis;
 import dockline.solve.rounds.DeadlineSolver;
 import dockline.solve.rounds.PatrolAnalysis;
 import dockline.solve.rounds.PatrolSolver;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.function.IntFunction;
 
 /**
  * The core's answer for the missions beyond one trip, a patrol or a visit mission with a deadline: the
@@ -92,6 +96,58 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
         boolean safest = choice == PolicyChoice.SAFEST;
         return m.tasks().patrols() ? Optional.of(RoundsReplay.patrol(m, budgetBytes, safest))
                 : RoundsReplay.deadline(m, budgetBytes, safest);
+    }
+
+    /**
+     * A change that makes the mission guaranteed.
+     *
+     * @param kind {@code reserve} (a lower floor), {@code deadline} (a longer deadline) or {@code start-charge}
+     * @param from the value now (units, or turns for a deadline)
+     * @param to   the value that works: the smallest change of its kind
+     * @param text the change in words
+     */
+    public record Change(String kind, long from, long to, String text) {
+    }
+
+    /**
+     * The changes that make a mission that is not guaranteed guaranteed, one of each kind that exists: the highest
+     * floor that is guaranteed (for a deadline mission, within the deadline), for a deadline mission the tightest
+     * deadline that is guaranteed at this floor, and the lowest start when it was searched and is above the
+     * mission's; none for a guaranteed mission. They are the plan's figures, no search of their own.
+     *
+     * @param amount words for an energy figure in units (each front end has its own)
+     */
+    public List<Change> changes(IntFunction<String> amount) {
+        List<Change> out = new ArrayList<>();
+        if (guaranteed()) {
+            return out;
+        }
+        int floor = mission.reserveUnits();
+        OptionalInt highest;
+        String keeps = deadline.isPresent() ? ", which keeps the deadline" : "";
+        if (deadline.isPresent()) {
+            DeadlineAnalysis a = deadline.get();
+            highest = a.highestGuaranteedReserveUnits();
+            if (a.tightestTicks().isPresent()) {
+                int k = a.tightestTicks().getAsInt();
+                out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least "
+                        + Timing.clock(mission.timing().seconds(k)) + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
+            }
+        } else {
+            highest = patrol.orElseThrow().highestGuaranteedReserveUnits();
+        }
+        if (highest.isPresent()) {
+            int h = highest.getAsInt();
+            out.add(new Change("reserve", floor, h, "lower the reserve floor to " + amount.apply(h) + " (from "
+                    + amount.apply(floor) + ")" + keeps));
+        }
+        int start = mission.startUnits();
+        if (lowestStartUnits.isPresent() && lowestStartUnits.getAsInt() > start) {
+            int low = lowestStartUnits.getAsInt();
+            out.add(new Change("start-charge", start, low, "start with at least " + amount.apply(low) + " (from "
+                    + amount.apply(start) + ")" + keeps));
+        }
+        return out;
     }
 
     public boolean guaranteed() {

@@ -292,7 +292,16 @@ public final class MissionChecker {
             pictureNote = "no run to show: the robot cannot finish at all at this floor";
         }
         return new MissionResult(file, ok ? MissionResult.Status.GUARANTEED : MissionResult.Status.NOT_GUARANTEED,
-                List.of(), inputs, m.name(), kind, f, List.of(), words, run, png, pictureNote, notes);
+                List.of(), inputs, m.name(), kind, f, suggestions(rp), words, run, png, pictureNote, notes);
+    }
+
+    /** The changes that make a patrol or deadline mission guaranteed, in words with the figures in Wh. */
+    private static List<String> suggestions(RoundsPlan rp) {
+        List<String> out = new ArrayList<>();
+        for (RoundsPlan.Change c : rp.changes(u -> rp.mission().scale().formatWh(u))) {
+            out.add(c.text());
+        }
+        return out;
     }
 
     // ---- shared

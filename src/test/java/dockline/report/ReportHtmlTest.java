@@ -117,6 +117,9 @@ class ReportHtmlTest {
             assertThat(rule.text()).contains("the deadline of 37 turns");
         }
         assertThat(clean.select("dl.figures").text()).contains("no start charge guarantees the floor within the deadline");
+        // missions/README.md: the early clean is guaranteed with a deadline of its worst case, 43 turns
+        assertThat(clean.select("ul.suggestions li").eachText()).anyMatch(t -> t.contains("allow a deadline of at least"
+                + " 2 min 52 s (43 turns; now 37)"));
         Element patrol = section(d, "night-patrol.yaml");
         assertThat(patrol.selectFirst("p.verdict").text()).contains("lap after lap");
         assertThat(patrol.select("dl.figures").text()).contains("Lowest start 12 Wh");
