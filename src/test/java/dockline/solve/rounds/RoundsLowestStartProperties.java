@@ -21,7 +21,8 @@ import net.jqwik.api.statistics.Statistics;
  * deadlines), on random tiny games: the lowest start equals the least start, from the floor up to the capacity,
  * at which the brute force says guaranteed, tried one start after the other (no bisection, so no monotonicity is
  * assumed by the oracle). Every case runs; the statistics show how the figure falls against the mission's start.
- * Also the rule of thumb's shortest run ({@link RoundsPlan#fewestTurns} at a budget of 0) against the brute
+ * Patrols with lasting closures, at-most limits and a budget per lap are checked the same way against
+ * {@link LastingPatrolBruteForce}. Also the rule of thumb's shortest run ({@link RoundsPlan#fewestTurns} at a budget of 0) against the brute
  * force's fewest turns.
  */
 class RoundsLowestStartProperties {
@@ -37,10 +38,10 @@ class RoundsLowestStartProperties {
     }
 
     /** The least start from the floor to the capacity that the brute force wins, one start after the other; -1 if none. */
-    private static int bruteLowestStart(Mission m, Predicate<RoundsBruteForce> won) {
+    private static int bruteLowestStart(Mission m, Predicate<Mission> won) {
         for (int s = m.reserveUnits(); s <= m.capacityUnits(); s++) {
             Mission at = startingAt(m, s);
-            if (won.test(new RoundsBruteForce(at, at.reserveUnits()))) {
+            if (won.test(at)) {
                 return s;
             }
         }
@@ -56,7 +57,7 @@ class RoundsLowestStartProperties {
     }
 
     /** The production lowest start of {@code m} against the brute force's least winning start, with statistics. */
-    private static void agrees(Mission m, Predicate<RoundsBruteForce> won) {
+    private static void agrees(Mission m, Predicate<Mission> won) {
         RoundsPlan p = RoundsPlan.of(m, BUDGET, PolicyChoice.FEWEST_MOVES).withLowestStart(BUDGET);
         int expected = bruteLowestStart(m, won);
         assertThat(p.lowestStartSearched()).isTrue();
@@ -76,7 +77,7 @@ class RoundsLowestStartProperties {
     // Grädel, Thomas, Wilke (eds.), LNCS 2500, 2002), at every start from the floor to the capacity.
     @Property(tries = 400)
     void patrol_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
-        agrees(RoundsAgreementProperties.patrolOf(seed), bf -> bf.patrolWon());
+        agrees(RoundsAgreementProperties.patrolOf(seed), at -> new RoundsBruteForce(at, at.reserveUnits()).patrolWon());
     }
 
     // Oracle: RoundsBruteForce.deadlineWon (the "force within t steps" layers W_0 ⊆ W_1 ⊆ ... with the ticks left
@@ -85,7 +86,14 @@ class RoundsLowestStartProperties {
     void deadline_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
         Mission m = RoundsAgreementProperties.deadlineOf(seed);
         int deadline = m.timing().deadlineTicks();
-        agrees(m, bf -> bf.deadlineWon(deadline));
+        agrees(m, at -> new RoundsBruteForce(at, at.reserveUnits()).deadlineWon(deadline));
+    }
+
+    // Oracle: LastingPatrolBruteForce (own move generation with closure sets and at-most counts, its own lap rule
+    // and budget per lap, the νZ.μY fixpoint for Büchi games, Emerson and Jutla 1991), at every start.
+    @Property(tries = 300)
+    void lastingPatrol_lowestStartIsTheBruteForcesLeastWinningStart(@ForAll long seed) {
+        agrees(LastingPatrolProperties.patrolOf(seed), at -> new LastingPatrolBruteForce(at).won(at.reserveUnits()));
     }
 
     // Oracle: RoundsBruteForce.fewestTurns (the least t with the start in the layer W_t) on the same mission with no
