@@ -56,26 +56,16 @@ final class RoundsCheck {
 
     /** Plans the mission through the core ({@link RoundsPlan}), prints the result, returns the exit code. */
     static int run(Mission m, long memoryBudgetBytes, boolean safest, boolean json, PrintWriter out, PrintWriter err) {
-        RoundsPlan plan = RoundsPlan.of(m, budget(memoryBudgetBytes), safest ? PolicyChoice.SAFEST
-                : PolicyChoice.FEWEST_MOVES);
-        RoundsCertificate cert = plan.certificate();
+        long bytes = budget(memoryBudgetBytes);
+        RoundsPlan plan = RoundsPlan.of(m, bytes, safest ? PolicyChoice.SAFEST : PolicyChoice.FEWEST_MOVES);
         if (plan.certificateDisagrees()) {
-            return internal(err, cert);
+            return internal(err, plan.certificate());
         }
-        if (plan.patrol().isPresent()) {
-            PatrolAnalysis a = plan.patrol().get();
-            if (json) {
-                out.println(patrolJson(a, cert));
-            } else {
-                patrolText(a, cert, out);
-            }
+        plan = plan.withLowestStart(bytes);
+        if (json) {
+            out.println(json(plan));
         } else {
-            DeadlineAnalysis a = plan.deadline().orElseThrow();
-            if (json) {
-                out.println(deadlineJson(a, cert));
-            } else {
-                deadlineText(a, cert, out);
-            }
+            text(plan, out);
         }
         return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
@@ -97,9 +87,35 @@ final class RoundsCheck {
                 : "");
     }
 
+    /** The text of either goal, ending in the energy, the certificate and the safety cautions. */
+    static void text(RoundsPlan p, PrintWriter out) {
+        if (p.patrol().isPresent()) {
+            patrolText(p, out);
+        } else {
+            deadlineText(p, out);
+        }
+        tail(p.mission(), p.certificate(), out);
+    }
+
+    /** The JSON object of either goal: the shared header, the goal's own keys, then the shared last keys. */
+    static String json(RoundsPlan p) {
+        Mission m = p.mission();
+        ObjectNode o = header(m, p.guaranteed(), p.patrol().isPresent() ? "patrol" : "deadline");
+        long millis;
+        if (p.patrol().isPresent()) {
+            patrolKeys(o, p);
+            millis = p.patrol().get().millis();
+        } else {
+            deadlineKeys(o, p);
+            millis = p.deadline().orElseThrow().millis();
+        }
+        return end(o, m, millis, p.certificate(), changes(p));
+    }
+
     // ---------------------------------------------------------------- patrol
 
-    static void patrolText(PatrolAnalysis a, RoundsCertificate cert, PrintWriter out) {
+    private static void patrolText(RoundsPlan p, PrintWriter out) {
+        PatrolAnalysis a = p.patrol().orElseThrow();
         Mission m = a.mission();
         Timing t = m.timing();
         String cps = String.join(", ", m.tasks().patrol());
@@ -117,19 +133,17 @@ final class RoundsCheck {
             out.println("  Run 'dockline replay " + (m.source() == null ? "MISSION" : m.source()) + "' for a lap where"
                     + " the building wins (the battery or a checkpoint is lost).");
         }
-        figures(a.highestGuaranteedReserveUnits(), "", changes(a), a.startUnits(), a.reserveUnits(), a.capacityUnits(),
-                m, out);
+        figures(p, "", out);
         out.println("  Method: recurrence (Büchi) game solved by nested attractors on the stored product (arena x"
                 + " checkpoints of the lap x battery levels)");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + " vertices); " + a.rounds() + " round" + (a.rounds() == 1 ? "" : "s")
                 + " of the fixpoint; " + a.millis() + " ms in all (the highest floor included)");
-        tail(m, cert, out);
     }
 
-    static String patrolJson(PatrolAnalysis a, RoundsCertificate cert) {
+    private static void patrolKeys(ObjectNode o, RoundsPlan p) {
+        PatrolAnalysis a = p.patrol().orElseThrow();
         Mission m = a.mission();
-        ObjectNode o = header(m, a.guaranteed(), "patrol");
         o.putPOJO("checkpoints", m.tasks().patrol());
         o.put("budgetPer", m.map().disturbances().budgetPerLap() ? "lap" : "mission");
         Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
@@ -139,15 +153,16 @@ final class RoundsCheck {
         Json.putOptional(o, "wayInTicks", a.wayInTicks());
         seconds(o, "longestLapSeconds", m, a.longestLapTicks());
         Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        lowestStartJson(o, p);
         tick(o, m);
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("fixpointRounds", a.rounds());
-        return end(o, m, a.millis(), cert, changes(a));
     }
 
     // ---------------------------------------------------------------- deadline
 
-    static void deadlineText(DeadlineAnalysis a, RoundsCertificate cert, PrintWriter out) {
+    private static void deadlineText(RoundsPlan p, PrintWriter out) {
+        DeadlineAnalysis a = p.deadline().orElseThrow();
         Mission m = a.mission();
         Timing t = m.timing();
         String deadline = Timing.clock(t.deadlineSeconds()) + " (" + a.deadlineTicks() + " turns of "
@@ -175,19 +190,17 @@ final class RoundsCheck {
         } else {
             out.println("  Tightest deadline still guaranteed:     none (no deadline is, at this floor)");
         }
-        figures(a.highestGuaranteedReserveUnits(), " (within the deadline)", changes(a), a.startUnits(),
-                a.reserveUnits(), a.capacityUnits(), m, out);
+        figures(p, " (within the deadline)", out);
         out.println("  Method: reachability attractor on the stored product (arena x goal x battery levels); its ranks"
                 + " stand for the ticks-left monitor");
         out.println("  Game: " + a.productVertices() + " vertices, " + a.productEdges() + " edges (at most "
                 + a.boundVertices() + "); with ticks left " + a.timedVertices() + " vertices, kept as one rank per"
                 + " vertex; " + a.millis() + " ms in all (the highest floor included)");
-        tail(m, cert, out);
     }
 
-    static String deadlineJson(DeadlineAnalysis a, RoundsCertificate cert) {
+    private static void deadlineKeys(ObjectNode o, RoundsPlan p) {
+        DeadlineAnalysis a = p.deadline().orElseThrow();
         Mission m = a.mission();
-        ObjectNode o = header(m, a.guaranteed(), "deadline");
         Json.putBattery(o, a.startUnits(), a.reserveUnits(), a.capacityUnits());
         tick(o, m);
         o.put("deadlineSeconds", m.timing().deadlineSeconds().stripTrailingZeros());
@@ -198,53 +211,23 @@ final class RoundsCheck {
         seconds(o, "tightestDeadlineSeconds", m, a.tightestTicks());
         Json.putOptional(o, "lowestLevelUnits", a.worstCaseMinimumUnits());
         Json.putOptional(o, "highestReserveUnits", a.highestGuaranteedReserveUnits());
+        lowestStartJson(o, p);
         policy(o, a.policyFloorUnits(), a.reserveUnits());
         game(o, a.productVertices(), a.productEdges(), a.boundVertices());
         o.put("timedVertices", a.timedVertices());
-        return end(o, m, a.millis(), cert, changes(a));
     }
 
     // ---------------------------------------------------------------- shared
 
-    /** A change that makes the mission guaranteed: kind, from, to (units or turns) and the sentence. */
-    record Change(String kind, long from, long to, String text) {
+    /** The plan's changes that make the mission guaranteed, the amounts worded as {@code check} words them. */
+    static java.util.List<RoundsPlan.Change> changes(RoundsPlan p) {
+        return p.changes(u -> CheckReport.amount(u, p.mission()));
     }
 
-    static java.util.List<Change> changes(PatrolAnalysis a) {
-        java.util.List<Change> out = new java.util.ArrayList<>();
-        if (!a.guaranteed() && a.highestGuaranteedReserveUnits().isPresent()) {
-            int h = a.highestGuaranteedReserveUnits().getAsInt();
-            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
-                    + ")"));
-        }
-        return out;
-    }
-
-    static java.util.List<Change> changes(DeadlineAnalysis a) {
-        java.util.List<Change> out = new java.util.ArrayList<>();
-        if (a.guaranteed()) {
-            return out;
-        }
-        Timing t = a.mission().timing();
-        if (a.tightestTicks().isPresent()) {
-            int k = a.tightestTicks().getAsInt();
-            out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least " + Timing.clock(t.seconds(k))
-                    + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
-        }
-        if (a.highestGuaranteedReserveUnits().isPresent()) {
-            int h = a.highestGuaranteedReserveUnits().getAsInt();
-            out.add(new Change("reserve", a.reserveUnits(), h, "lower the reserve floor to "
-                    + CheckReport.amount(h, a.mission()) + " (from " + CheckReport.amount(a.reserveUnits(), a.mission())
-                    + "), which keeps the deadline"));
-        }
-        return out;
-    }
-
-    private static void changesText(java.util.List<Change> changes, PrintWriter out) {
+    private static void changesText(java.util.List<RoundsPlan.Change> changes, PrintWriter out) {
         if (!changes.isEmpty()) {
             out.println("  To make it guaranteed, change one of:");
-            for (Change c : changes) {
+            for (RoundsPlan.Change c : changes) {
                 out.println("    - " + c.text());
             }
         }
@@ -259,25 +242,42 @@ final class RoundsCheck {
         out.println(Caveats.block());
     }
 
-    /** The {@code suggestions} array of the changes: kind, from, to and the sentence (as {@link Json#putSuggestions}). */
-    static void changesJson(ObjectNode o, java.util.List<Change> changes) {
-        com.fasterxml.jackson.databind.node.ArrayNode arr = o.putArray("suggestions");
-        for (Change c : changes) {
-            ObjectNode so = arr.addObject();
-            so.put("kind", c.kind());
-            so.put("from", c.from());
-            so.put("to", c.to());
-            so.put("text", c.text());
-        }
+    /**
+     * The {@code suggestions} array of the changes: kind, from, to and the sentence (as {@link Json#putSuggestions}),
+     * written from the records themselves (their components are the keys, in that order).
+     */
+    static void changesJson(ObjectNode o, java.util.List<RoundsPlan.Change> changes) {
+        o.putPOJO("suggestions", java.util.List.copyOf(changes));
     }
 
-    /** The highest floor ({@code what}: of which goal), the changes that make it guaranteed, the battery. */
-    private static void figures(OptionalInt h, String what, java.util.List<Change> changes, int startUnits,
-                                int reserveUnits, int capacityUnits, Mission m, PrintWriter out) {
+    /**
+     * The highest floor and the lowest start ({@code what}: of which goal), the changes that make it guaranteed,
+     * the battery.
+     */
+    private static void figures(RoundsPlan p, String what, PrintWriter out) {
+        Mission m = p.mission();
+        OptionalInt h = p.patrol().isPresent() ? p.patrol().get().highestGuaranteedReserveUnits()
+                : p.deadline().orElseThrow().highestGuaranteedReserveUnits();
         out.println("  Highest reserve floor guaranteed" + what + ": " + (h.isPresent()
                 ? CheckReport.amount(h.getAsInt(), m) : "none (not even a floor of 0 can be guaranteed)"));
-        changesText(changes, out);
-        CheckReport.batteryLine(startUnits, reserveUnits, capacityUnits, m, out);
+        out.println("  Lowest starting charge for the floor" + what + ": " + lowestStartWords(p));
+        changesText(changes(p), out);
+        CheckReport.batteryLine(m.startUnits(), m.reserveUnits(), m.capacityUnits(), m, out);
+    }
+
+    /** The lowest start in words: the amount, none, or why it was not computed. */
+    static String lowestStartWords(RoundsPlan p) {
+        if (p.lowestStartUnits().isPresent()) {
+            return CheckReport.amount(p.lowestStartUnits().getAsInt(), p.mission());
+        }
+        return p.lowestStartSearched() ? "none (not even a full battery is enough)"
+                : "not computed (a game from a higher starting charge passes the memory budget)";
+    }
+
+    /** The lowest start ({@code null} when none or not searched) and whether its search ran to the end. */
+    private static void lowestStartJson(ObjectNode o, RoundsPlan p) {
+        Json.putOptional(o, "lowestStartUnits", p.lowestStartUnits());
+        o.put("lowestStartSearched", p.lowestStartSearched());
     }
 
     private static ObjectNode header(Mission m, boolean ok, String method) {
@@ -319,7 +319,7 @@ final class RoundsCheck {
     }
 
     /** The last keys of both goals' objects (time, certificate, suggestions, rounding, cautions), as text. */
-    private static String end(ObjectNode o, Mission m, long millis, RoundsCertificate cert, java.util.List<Change> changes) {
+    private static String end(ObjectNode o, Mission m, long millis, RoundsCertificate cert, java.util.List<RoundsPlan.Change> changes) {
         o.put("totalMillis", millis);
         certificate(o, cert);
         changesJson(o, changes);

@@ -18,7 +18,8 @@ import java.util.OptionalInt;
  * core's {@link RoundsPlan} (no search of its own): for a patrol the highest reserve floor that keeps it going
  * for ever; for a deadline mission the highest floor that still keeps the deadline and the tightest deadline
  * still guaranteed at the mission's floor (the start's attractor rank, see
- * {@link dockline.solve.rounds.DeadlineSolver}). The JSON object follows
+ * {@link dockline.solve.rounds.DeadlineSolver}); for both the lowest starting charge that guarantees the
+ * mission's floor ({@link RoundsPlan#withLowestStart}). The JSON object follows
  * src/main/resources/dockline/schemas/margin-rounds.schema.json.
  */
 final class RoundsMargin {
@@ -29,24 +30,26 @@ final class RoundsMargin {
     /** The figures of one run, for the text and the JSON. */
     record Figures(Mission mission, boolean guaranteed, String goal, int startUnits, int reserveUnits,
                    int capacityUnits, OptionalInt highestReserveUnits, OptionalInt tightestDeadlineTicks,
-                   int deadlineTicks, List<RoundsCheck.Change> changes) {
+                   int deadlineTicks, RoundsPlan plan, List<RoundsPlan.Change> changes) {
     }
 
     /** Plans the mission (the highest floor included) and reads off the margins. */
     static Figures of(Mission m, long memoryBudgetBytes) {
-        RoundsPlan plan = RoundsPlan.of(m, RoundsCheck.budget(memoryBudgetBytes), PolicyChoice.FEWEST_MOVES);
-        if (plan.certificateDisagrees()) {
+        long bytes = RoundsCheck.budget(memoryBudgetBytes);
+        RoundsPlan first = RoundsPlan.of(m, bytes, PolicyChoice.FEWEST_MOVES);
+        if (first.certificateDisagrees()) {
             throw new IllegalStateException("the solver says guaranteed, but its policy failed the independent"
-                    + " certificate: " + plan.certificate().reason());
+                    + " certificate: " + first.certificate().reason());
         }
+        RoundsPlan plan = first.withLowestStart(bytes);
         if (plan.patrol().isPresent()) {
             PatrolAnalysis a = plan.patrol().get();
             return new Figures(m, a.guaranteed(), "patrol", a.startUnits(), a.reserveUnits(), a.capacityUnits(),
-                    a.highestGuaranteedReserveUnits(), OptionalInt.empty(), -1, RoundsCheck.changes(a));
+                    a.highestGuaranteedReserveUnits(), OptionalInt.empty(), -1, plan, RoundsCheck.changes(plan));
         }
         DeadlineAnalysis a = plan.deadline().orElseThrow();
         return new Figures(m, a.guaranteed(), "deadline", a.startUnits(), a.reserveUnits(), a.capacityUnits(),
-                a.highestGuaranteedReserveUnits(), a.tightestTicks(), a.deadlineTicks(), RoundsCheck.changes(a));
+                a.highestGuaranteedReserveUnits(), a.tightestTicks(), a.deadlineTicks(), plan, RoundsCheck.changes(plan));
     }
 
     static void text(Figures f, String title, PrintWriter out) {
@@ -60,24 +63,30 @@ final class RoundsMargin {
         out.println("highest reserve floor guaranteed from this start" + (patrol ? "" : " within the deadline") + ": "
                 + (f.highestReserveUnits().isPresent() ? CheckReport.amount(f.highestReserveUnits().getAsInt(), m)
                 : "none (not even a floor of 0)"));
+        out.println("lowest starting charge that guarantees this floor" + (patrol ? "" : " within the deadline") + ": "
+                + RoundsCheck.lowestStartWords(f.plan()));
         if (!patrol) {
             out.println("tightest deadline guaranteed at this floor: " + (f.tightestDeadlineTicks().isPresent()
                     ? t.describeTicks(f.tightestDeadlineTicks().getAsInt())
                     : "none (the robot cannot always finish at this floor)"));
         }
         out.println("  (the same figures as 'dockline check'; found by bisection over the floor on the "
-                + (patrol ? "recurrence game" : "attractor ranks") + ")");
+                + (patrol ? "recurrence game" : "attractor ranks") + ", and the start from one game of every starting"
+                + " level)");
         if (!f.changes().isEmpty()) {
             out.println();
             out.println("to make it guaranteed, change one of:");
             int i = 1;
-            for (RoundsCheck.Change c : f.changes()) {
+            for (RoundsPlan.Change c : f.changes()) {
                 out.println("  " + i++ + ". " + c.text());
             }
         } else if (!f.guaranteed()) {
             out.println();
-            out.println("no change of the reserve floor" + (patrol ? "" : " or the deadline") + " alone makes it"
-                    + " guaranteed; consider another route, a second dock or a different robot");
+            String what = f.plan().lowestStartSearched() ? (patrol ? "the reserve floor or the starting charge"
+                    : "the reserve floor, the starting charge or the deadline") : patrol ? "the reserve floor"
+                    : "the reserve floor or the deadline";
+            out.println("no change of " + what + " alone makes it guaranteed; consider another route, a second dock or"
+                    + " a different robot");
         }
         out.println();
         out.println("Energy: " + m.scale().describe() + ".");
@@ -92,6 +101,8 @@ final class RoundsMargin {
         Json.putBattery(o, f.startUnits(), f.reserveUnits(), f.capacityUnits());
         Json.putUnitAndBudget(o, m);
         Json.putUnitsAndWh(o, "highestReserve", f.highestReserveUnits(), m.scale());
+        Json.putUnitsAndWh(o, "lowestStart", f.plan().lowestStartUnits(), m.scale());
+        o.put("lowestStartSearched", f.plan().lowestStartSearched());
         if (!f.goal().equals("patrol")) {
             o.put("deadlineTicks", f.deadlineTicks());
             Json.putOptional(o, "tightestDeadlineTicks", f.tightestDeadlineTicks());

@@ -4,12 +4,18 @@ import dockline.certify.DeadlineCertificateChecker;
 import dockline.certify.PatrolCertificateChecker;
 import dockline.certify.RoundsCertificate;
 import dockline.model.Mission;
+import dockline.model.Timing;
 import dockline.replay.RoundsReplay;
+import dockline.solve.ProductTooLargeException;
 import dockline.solve.rounds.DeadlineAnalysis;
 import dockline.solve.rounds.DeadlineSolver;
 import dockline.solve.rounds.PatrolAnalysis;
 import dockline.solve.rounds.PatrolSolver;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.function.IntFunction;
 
 /**
  * The core's answer for the missions beyond one trip, a patrol or a visit mission with a deadline: the
@@ -20,15 +26,19 @@ import java.util.Optional;
  * which they report as an internal error (never a silent "guaranteed").
  *
  * <p>Cost: that of the route's stored product (see the solvers), plus one pass over the policy's closed
- * loop for the certificate.
+ * loop for the certificate; {@link #withLowestStart} adds one product from every start level (at most the
+ * product's size bound), or O(log C) products for capacity C when that one is too large.
  *
  * @param mission     the mission as planned (overrides applied)
  * @param patrol      the patrol analysis, for a patrol
  * @param deadline    the deadline analysis, for a visit mission with a deadline
  * @param certificate the certificate of the guaranteed policy; null when not guaranteed
+ * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (and its deadline);
+ *                            empty when none does or when it was not searched
+ * @param lowestStartSearched whether that search ran ({@link #withLowestStart}) to the end
  */
 public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optional<DeadlineAnalysis> deadline,
-                         RoundsCertificate certificate) {
+                         RoundsCertificate certificate, OptionalInt lowestStartUnits, boolean lowestStartSearched) {
 
     /**
      * Solves and certifies a patrol or deadline mission ({@link Mission#beyondOneTrip()}).
@@ -42,12 +52,40 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
             PatrolAnalysis a = PatrolSolver.analyse(m, budgetBytes, safest);
             RoundsCertificate cert = a.guaranteed() ? PatrolCertificateChecker.check(a.arena(),
                     a.policy().orElseThrow(), a.reserveUnits(), a.startUnits()) : null;
-            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert);
+            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert, OptionalInt.empty(), false);
         }
         DeadlineAnalysis a = DeadlineSolver.analyse(m, budgetBytes, safest);
         RoundsCertificate cert = a.guaranteed() ? DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(),
                 a.reserveUnits(), a.startUnits(), a.deadlineTicks()) : null;
-        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert);
+        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert, OptionalInt.empty(), false);
+    }
+
+    /**
+     * This plan with the lowest starting charge that guarantees the mission's floor (within its deadline, for a
+     * deadline mission), exact in energy units: one product from every start level, or bisection over the start
+     * when that is too large ({@link PatrolSolver#lowestStart}, {@link DeadlineSolver#lowestStart}). When the
+     * bisection's products pass the memory budget too, the figure is left out and {@link #lowestStartSearched()}
+     * is false; nothing else changes.
+     *
+     * @param budgetBytes the memory budget of each product
+     */
+    public RoundsPlan withLowestStart(long budgetBytes) {
+        try {
+            OptionalInt low = patrol.isPresent() ? PatrolSolver.lowestStart(patrol.get(), budgetBytes)
+                    : DeadlineSolver.lowestStart(deadline.orElseThrow(), budgetBytes);
+            return new RoundsPlan(mission, patrol, deadline, certificate, low, true);
+        } catch (ProductTooLargeException e) {
+            return new RoundsPlan(mission, patrol, deadline, certificate, OptionalInt.empty(), false);
+        }
+    }
+
+    /**
+     * The fewest turns in which the robot can be sure to finish and dock, at the mission's floor and start and with
+     * no deadline ({@link DeadlineSolver#fewestTurns}); empty when it cannot be sure to finish. For a visit mission
+     * (one trip or with a deadline), not a patrol.
+     */
+    public static OptionalInt fewestTurns(Mission m, long budgetBytes) {
+        return DeadlineSolver.fewestTurns(m, budgetBytes);
     }
 
     /**
@@ -58,6 +96,58 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
         boolean safest = choice == PolicyChoice.SAFEST;
         return m.tasks().patrols() ? Optional.of(RoundsReplay.patrol(m, budgetBytes, safest))
                 : RoundsReplay.deadline(m, budgetBytes, safest);
+    }
+
+    /**
+     * A change that makes the mission guaranteed.
+     *
+     * @param kind {@code reserve} (a lower floor), {@code deadline} (a longer deadline) or {@code start-charge}
+     * @param from the value now (units, or turns for a deadline)
+     * @param to   the value that works: the smallest change of its kind
+     * @param text the change in words
+     */
+    public record Change(String kind, long from, long to, String text) {
+    }
+
+    /**
+     * The changes that make a mission that is not guaranteed guaranteed, one of each kind that exists: the highest
+     * floor that is guaranteed (for a deadline mission, within the deadline), for a deadline mission the tightest
+     * deadline that is guaranteed at this floor, and the lowest start when it was searched and is above the
+     * mission's; none for a guaranteed mission. They are the plan's figures, no search of their own.
+     *
+     * @param amount words for an energy figure in units (each front end has its own)
+     */
+    public List<Change> changes(IntFunction<String> amount) {
+        List<Change> out = new ArrayList<>();
+        if (guaranteed()) {
+            return out;
+        }
+        int floor = mission.reserveUnits();
+        OptionalInt highest;
+        String keeps = deadline.isPresent() ? ", which keeps the deadline" : "";
+        if (deadline.isPresent()) {
+            DeadlineAnalysis a = deadline.get();
+            highest = a.highestGuaranteedReserveUnits();
+            if (a.tightestTicks().isPresent()) {
+                int k = a.tightestTicks().getAsInt();
+                out.add(new Change("deadline", a.deadlineTicks(), k, "allow a deadline of at least "
+                        + Timing.clock(mission.timing().seconds(k)) + " (" + k + " turns; now " + a.deadlineTicks() + ")"));
+            }
+        } else {
+            highest = patrol.orElseThrow().highestGuaranteedReserveUnits();
+        }
+        if (highest.isPresent()) {
+            int h = highest.getAsInt();
+            out.add(new Change("reserve", floor, h, "lower the reserve floor to " + amount.apply(h) + " (from "
+                    + amount.apply(floor) + ")" + keeps));
+        }
+        int start = mission.startUnits();
+        if (lowestStartUnits.isPresent() && lowestStartUnits.getAsInt() > start) {
+            int low = lowestStartUnits.getAsInt();
+            out.add(new Change("start-charge", start, low, "start with at least " + amount.apply(low) + " (from "
+                    + amount.apply(start) + ")" + keeps));
+        }
+        return out;
     }
 
     public boolean guaranteed() {

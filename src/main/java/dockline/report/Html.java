@@ -143,8 +143,9 @@ public final class Html {
         sb.append("</tbody>\n</table>\n<p>").append(escape("Worst case: the lowest battery level the disturbances can"
                 + " force under the certified policy. Rule of thumb (common practice, not a guarantee): safe when the"
                 + " charge above the floor covers the cheapest run with no disturbance plus the margin, in percent of"
-                + " the capacity. Marked red where it calls an unsafe mission safe, yellow where it turns down a"
-                + " guaranteed one.")).append("</p>\n</section>\n");
+                + " the capacity; for a mission with a deadline, also when the shortest run with no disturbance plus"
+                + " the same percentage of the deadline fits in the deadline. Marked red where it calls an unsafe"
+                + " mission safe, yellow where it turns down a guaranteed one.")).append("</p>\n</section>\n");
     }
 
     private static String flagClass(RuleOfThumb r) {
@@ -201,7 +202,9 @@ public final class Html {
         dt(sb, "Highest guaranteed floor", f.highestFloorUnits().isPresent() ? f.wh(f.highestFloorUnits().getAsInt())
                 : "none can be guaranteed from this start");
         dt(sb, "Lowest start", f.lowestStartUnits().isPresent() ? f.wh(f.lowestStartUnits().getAsInt())
-                : r.kind().equals("one-trip") ? "no start charge guarantees the floor" : "not computed");
+                : r.notes().contains(MissionChecker.LOWEST_START_NOT_COMPUTED) ? "not computed (see the notes)"
+                : r.kind().equals("deadline") ? "no start charge guarantees the floor within the deadline"
+                : "no start charge guarantees the floor");
         dt(sb, "Method", f.method() + " \u2014 " + f.methodReason());
         dt(sb, "Certificate", f.certification());
         sb.append("</dl>\n");
@@ -260,12 +263,22 @@ public final class Html {
         MissionResult.Figures f = r.figures();
         String k = f.budget() == 0 ? "with no disturbance" : "under every sequence of up to " + f.budget()
                 + " disturbances the model allows";
+        String floor = "the reserve floor of " + f.wh(f.reserveUnits());
         if (f.guaranteed()) {
-            return "GUARANTEED: the robot can always complete the mission " + k + " without its battery going below"
-                    + " the reserve floor of " + f.wh(f.reserveUnits()) + ".";
+            String what = switch (r.kind()) {
+                case "patrol" -> "keep visiting every checkpoint, lap after lap,";
+                case "deadline" -> "complete the mission and dock within the deadline";
+                default -> "complete the mission";
+            };
+            return "GUARANTEED: the robot can always " + what + " " + k + " without its battery going below " + floor
+                    + ".";
         }
-        return "NOT GUARANTEED: " + k + ", the building can drive the battery below the reserve floor of "
-                + f.wh(f.reserveUnits()) + " (or stop the mission), whatever the robot does.";
+        String what = switch (r.kind()) {
+            case "patrol" -> "drive the battery below " + floor + " or keep the robot from completing its laps";
+            case "deadline" -> "make the robot miss the deadline or drive the battery below " + floor;
+            default -> "drive the battery below " + floor + " (or stop the mission)";
+        };
+        return "NOT GUARANTEED: " + k + ", the building can " + what + ", whatever the robot does.";
     }
 
     private static String ruleWords(MissionResult.Figures f, RuleOfThumb rule) {
@@ -273,7 +286,22 @@ public final class Html {
                 : "more than the starting charge";
         return rule.marginPercent() + " % margin (" + f.wh(rule.marginUnits()) + "): cheapest run with no disturbance"
                 + " needs " + need + ", the charge above the floor is " + f.wh(f.startUnits() - f.reserveUnits())
-                + "; the rule says " + rule.words() + ".";
+                + rule.deadline().map(Html::timeWords).orElse("") + "; the rule says " + rule.words() + ".";
+    }
+
+    /** The time half of the rule in words: the shortest run and the buffer against the deadline. */
+    private static String timeWords(RuleOfThumb.Time t) {
+        String deadline = t.deadlineTicks() + (t.deadlineTicks() == 1 ? " turn" : " turns");
+        if (t.shortestRunTicks().isEmpty()) {
+            return "; no run with no disturbance finishes, so none fits the deadline of " + deadline;
+        }
+        int run = t.shortestRunTicks().getAsInt();
+        String runWords = "the shortest run with no disturbance takes " + run + (run == 1 ? " turn" : " turns");
+        if (t.shortestRunTooLong()) {
+            return "; even " + runWords + ", more than the deadline of " + deadline;
+        }
+        return "; " + runWords + ", with a buffer of " + t.marginTicks() + (t.marginTicks() == 1 ? " turn" : " turns")
+                + (t.fits() ? " it fits in" : " it does not fit in") + " the deadline of " + deadline;
     }
 
     private static void dt(StringBuilder sb, String term, String value) {

@@ -89,6 +89,13 @@ public final class JsonReport {
                 n.put("marginPercent", rule.marginPercent());
                 n.put("marginUnits", rule.marginUnits());
                 optional(n, "nominalNeedUnits", rule.nominalNeedUnits());
+                if (rule.deadline().isPresent()) {
+                    RuleOfThumb.Time t = rule.deadline().get();
+                    n.put("deadlineTicks", t.deadlineTicks());
+                    n.put("marginTicks", t.marginTicks());
+                    optional(n, "shortestRunTicks", t.shortestRunTicks());
+                    n.put("fitsDeadline", t.fits());
+                }
                 n.put("saysSafe", rule.saysSafe());
                 n.put("flag", rule.flag().word());
             }

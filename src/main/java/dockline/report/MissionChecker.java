@@ -40,11 +40,17 @@ import java.util.OptionalInt;
  * {@code dockline check} uses ({@link PlanOptions#defaults}); the lowest start comes from the core's
  * margins route, the pictured run from its product route with replays (the one {@code render} draws), and
  * the rule of thumb's nominal need from the core at a disturbance budget of 0. Patrols and deadlines go
- * through {@link RoundsPlan} the same way.
+ * through {@link RoundsPlan} the same way (the lowest start by {@link RoundsPlan#withLowestStart}; for a
+ * deadline, the rule's shortest run by {@link RoundsPlan#fewestTurns} at a budget of 0).
  *
- * <p>Cost: four plans of the mission (one-trip) or three (patrols, deadlines), see {@link MissionPlanner}.
+ * <p>Cost: four plans of the mission (one-trip) or three (patrols, deadlines) and, for these, the bisection over
+ * the start and for a deadline one more attractor; see {@link MissionPlanner} and {@link RoundsPlan}.
  */
 public final class MissionChecker {
+
+    /** The note of a patrol or deadline mission whose lowest start could not be searched within the memory budget. */
+    static final String LOWEST_START_NOT_COMPUTED = "the lowest start was not computed: a game from a higher starting"
+            + " charge passes the memory budget";
 
     private MissionChecker() {
     }
@@ -167,7 +173,7 @@ public final class MissionChecker {
         MissionResult.Figures f = new MissionResult.Figures(m.scale(), a.guaranteed(), a.method().word(),
                 a.methodReason(), a.certification().ok(), certificationWords(a), m.capacityUnits(), m.startUnits(),
                 m.reserveUnits(), m.map().disturbances().budget(), a.lowestLevelUnits(), highest,
-                margins.lowestStartUnits(), rules(m, need, a.guaranteed()));
+                margins.lowestStartUnits(), rules(m, need, OptionalInt.empty(), OptionalInt.empty(), a.guaranteed()));
         MissionResult.Run run = null;
         byte[] png = null;
         String pictureNote = null;
@@ -207,12 +213,13 @@ public final class MissionChecker {
     private static MissionResult rounds(Path file, Mission m, List<MissionResult.Input> inputs, String kind,
                                         String words, long budget, Pictures pictures) {
         long bytes = ProductOptions.defaults().withMemoryBudget(budget).effectiveMemoryBudget();
-        RoundsPlan rp = RoundsPlan.of(m, bytes, PolicyChoice.SAFEST);
-        RoundsCertificate cert = rp.certificate();
-        if (rp.certificateDisagrees()) {
+        RoundsPlan first = RoundsPlan.of(m, bytes, PolicyChoice.SAFEST);
+        RoundsCertificate cert = first.certificate();
+        if (first.certificateDisagrees()) {
             return internal(file, m, inputs, kind, words, "the solver says guaranteed, but its policy " + (cert.ok()
                     ? "has other figures under" : "failed") + " the independent certificate: " + cert.reason());
         }
+        RoundsPlan rp = first.withLowestStart(bytes);
         boolean ok = rp.guaranteed();
         List<String> notes = new ArrayList<>();
         OptionalInt lowest;
@@ -235,8 +242,12 @@ public final class MissionChecker {
                     + m.timing().describeTicks(a.tightestTicks().getAsInt())
                     : "; the robot cannot be sure to finish at all at this floor"));
         }
-        notes.add("the lowest start is not computed for patrols and deadline missions");
+        if (!rp.lowestStartSearched()) {
+            notes.add(LOWEST_START_NOT_COMPUTED);
+        }
         OptionalInt nominalHighest;
+        OptionalInt deadlineTicks = OptionalInt.empty();
+        OptionalInt shortestRun = OptionalInt.empty();
         if (m.tasks().patrols()) {
             nominalHighest = RoundsPlan.of(m.withBudget(0), bytes, PolicyChoice.SAFEST).patrol().orElseThrow()
                     .highestGuaranteedReserveUnits();
@@ -245,8 +256,13 @@ public final class MissionChecker {
             Mission noDeadline = m.withBudget(0).withTiming(new Timing(m.timing().tickSeconds(), null));
             nominalHighest = MissionPlanner.plan(noDeadline, PlanOptions.of(new Route.Auto(PolicyChoice.SAFEST))
                     .withMemoryBudget(budget)).highestFloorUnits();
-            notes.add("the rule of thumb's nominal need is that of the cheapest run with no disturbance and no"
-                    + " deadline (the rule looks at energy only)");
+            // and about time: the shortest run when nothing happens, against the deadline
+            deadlineTicks = OptionalInt.of(rp.deadline().orElseThrow().deadlineTicks());
+            shortestRun = RoundsPlan.fewestTurns(m.withBudget(0), bytes);
+            notes.add("the rule of thumb's energy need is that of the cheapest run with no disturbance and no deadline;"
+                    + " its time is that of the shortest run with no disturbance (" + (shortestRun.isPresent()
+                    ? m.timing().describeTicks(shortestRun.getAsInt()) : "none finishes") + "), which with the same"
+                    + " percentage of the deadline as a buffer must fit in the deadline");
         }
         OptionalInt need = nominalNeed(m.startUnits(), nominalHighest);
         String certification = cert == null ? "not certified: not guaranteed, there is no policy to certify"
@@ -256,7 +272,8 @@ public final class MissionChecker {
                 ? "a patrol: a Büchi game within the reserve floor on the stored product"
                 : "a visit mission with a deadline: attractor ranks as the ticks left, on the stored product",
                 cert != null && cert.ok(), certification, m.capacityUnits(), m.startUnits(), m.reserveUnits(),
-                m.map().disturbances().budget(), lowest, highest, OptionalInt.empty(), rules(m, need, ok));
+                m.map().disturbances().budget(), lowest, highest, rp.lowestStartUnits(), rules(m, need, deadlineTicks,
+                shortestRun, ok));
         MissionResult.Run run = null;
         byte[] png = null;
         String pictureNote = null;
@@ -275,7 +292,16 @@ public final class MissionChecker {
             pictureNote = "no run to show: the robot cannot finish at all at this floor";
         }
         return new MissionResult(file, ok ? MissionResult.Status.GUARANTEED : MissionResult.Status.NOT_GUARANTEED,
-                List.of(), inputs, m.name(), kind, f, List.of(), words, run, png, pictureNote, notes);
+                List.of(), inputs, m.name(), kind, f, suggestions(rp), words, run, png, pictureNote, notes);
+    }
+
+    /** The changes that make a patrol or deadline mission guaranteed, in words with the figures in Wh. */
+    private static List<String> suggestions(RoundsPlan rp) {
+        List<String> out = new ArrayList<>();
+        for (RoundsPlan.Change c : rp.changes(u -> rp.mission().scale().formatWh(u))) {
+            out.add(c.text());
+        }
+        return out;
     }
 
     // ---- shared
@@ -286,10 +312,13 @@ public final class MissionChecker {
                 nominalHighestFloor.getAsInt())) : OptionalInt.empty();
     }
 
-    private static List<RuleOfThumb> rules(Mission m, OptionalInt need, boolean guaranteed) {
+    /** The rule at each margin; with a deadline ({@code deadlineTicks}) also on time ({@code shortestRun}). */
+    private static List<RuleOfThumb> rules(Mission m, OptionalInt need, OptionalInt deadlineTicks,
+                                           OptionalInt shortestRun, boolean guaranteed) {
         List<RuleOfThumb> rules = new ArrayList<>();
         for (int pct : RuleOfThumb.MARGINS) {
-            rules.add(RuleOfThumb.judge(pct, m.capacityUnits(), m.startUnits(), m.reserveUnits(), need, guaranteed));
+            rules.add(RuleOfThumb.judge(pct, m.capacityUnits(), m.startUnits(), m.reserveUnits(), need, deadlineTicks,
+                    shortestRun, guaranteed));
         }
         return rules;
     }

@@ -130,6 +130,12 @@ class RoundsCommandsTest {
         CliRun text = CliRun.run("margin", "missions/night-patrol.yaml");
         assertThat(text.out()).contains("highest reserve floor guaranteed from this start: "
                 + check.get("highestReserveUnits").asInt() + " units").contains("Safety:");
+        // missions/README.md, worked by hand: the patrol starts on its dock, so its lowest start is its floor
+        assertThat(check.get("lowestStartUnits").asInt()).isEqualTo(24);
+        assertThat(check.get("lowestStartSearched").asBoolean()).isTrue();
+        assertThat(mj.get("lowestStartUnits").asInt()).isEqualTo(24);
+        assertThat(mj.get("lowestStartWh").asDouble()).isEqualTo(12.0);
+        assertThat(text.out()).contains("lowest starting charge that guarantees this floor: 24 units = 12 Wh (20%)");
     }
 
     @Test
@@ -144,6 +150,11 @@ class RoundsCommandsTest {
         assertThat(mj.get("tightestDeadlineTicks").asInt()).isEqualTo(check.get("tightestDeadlineTicks").asInt());
         assertThat(mj.get("highestReserveUnits")).isEqualTo(check.get("highestReserveUnits"));
         assertThat(mj.get("deadlineTicks").asInt()).isEqualTo(37);
+        // no charge keeps the deadline (missions/README.md); the search ran to the end
+        assertThat(mj.get("lowestStartUnits").isNull()).isTrue();
+        assertThat(mj.get("lowestStartSearched").asBoolean()).isTrue();
+        assertThat(check.get("lowestStartUnits")).isEqualTo(mj.get("lowestStartUnits"));
+        assertThat(r.out()).contains("lowest starting charge that guarantees this floor within the deadline: none");
     }
 
     /** The picture's path is the lasso: the way in, then one lap, which ends where the loop starts again. */

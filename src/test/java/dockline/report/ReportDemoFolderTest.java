@@ -53,6 +53,17 @@ class ReportDemoFolderTest {
         assertThat(byFile.get("late-return.yaml").get("highestReserveUnits").isNull()).isTrue();
         assertThat(byFile.get("night-patrol.yaml").get("kind").asText()).isEqualTo("patrol");
         assertThat(byFile.get("early-clean.yaml").get("kind").asText()).isEqualTo("deadline");
+        // worked by hand: the patrol starts on its dock, so from the floor itself (24 units) it charges to full
+        // first and is then better off than from its own start of 96 units: its lowest start is the floor
+        assertThat(byFile.get("night-patrol.yaml").get("lowestStartUnits").asInt()).isEqualTo(24);
+        // early-clean misses its 37 turns at any charge (its worst case needs 43 turns): no lowest start; the rule
+        // of thumb judges it against those 37 turns (2.5 min of 4 s, rounded down)
+        assertThat(byFile.get("early-clean.yaml").get("lowestStartUnits").isNull()).isTrue();
+        for (JsonNode rule : byFile.get("early-clean.yaml").get("ruleOfThumb")) {
+            assertThat(rule.get("deadlineTicks").asInt()).isEqualTo(37);
+            assertThat(rule.get("shortestRunTicks").asInt()).isPositive().isLessThanOrEqualTo(43);
+        }
+        assertThat(byFile.get("night-patrol.yaml").get("ruleOfThumb").get(0).has("deadlineTicks")).isFalse();
         for (JsonNode m : byFile.values()) {
             assertThat(m.get("picture").asBoolean()).as(m.get("file").asText()).isTrue();
             assertThat(m.get("run").get("levelUnits")).isNotEmpty();

@@ -94,6 +94,37 @@ class ReportHtmlTest {
         }
     }
 
+    /** The section of a demo mission, found by its place in {@link DemoReport#DEMOS}. */
+    private static Element section(Document d, String demo) {
+        int i = java.util.Arrays.asList(DemoReport.DEMOS).indexOf(demo);
+        return d.getElementById("mission-" + (i + 1));
+    }
+
+    /**
+     * A deadline mission's section says what its verdict covers (the deadline) and sets the rule of thumb's
+     * shortest run against the deadline; a patrol's says laps; the lowest start of both is shown (missions/README.md:
+     * the patrol's is its floor of 12 Wh, none keeps the early clean's deadline).
+     */
+    @Test
+    void patrolAndDeadlineSections_wordTheirGoal() {
+        Document d = doc();
+        Element clean = section(d, "early-clean.yaml");
+        assertThat(clean.selectFirst("p.verdict").text()).contains("miss the deadline");
+        for (Element rule : clean.select("ul.rule-of-thumb li")) {
+            assertThat(rule.text()).contains("the deadline of 37 turns");
+        }
+        assertThat(clean.select("dl.figures").text()).contains("no start charge guarantees the floor within the deadline");
+        // missions/README.md: the early clean is guaranteed with a deadline of its worst case, 43 turns
+        assertThat(clean.select("ul.suggestions li").eachText()).anyMatch(t -> t.contains("allow a deadline of at least"
+                + " 2 min 52 s (43 turns; now 37)"));
+        Element patrol = section(d, "night-patrol.yaml");
+        assertThat(patrol.selectFirst("p.verdict").text()).contains("lap after lap");
+        assertThat(patrol.select("dl.figures").text()).contains("Lowest start 12 Wh");
+        for (Element rule : patrol.select("ul.rule-of-thumb li")) {
+            assertThat(rule.text()).doesNotContain("deadline");
+        }
+    }
+
     @Test
     void referencesNothingOutsideItself() {
         Document d = doc();

@@ -24,7 +24,8 @@ class ReportRuleOfThumbTest {
     @TempDir
     Path dir;
 
-    private static final Pictures NO_PICTURES = new Pictures() {
+    /** Pictures that draw nothing (the rule of thumb tests read figures only). */
+    static final Pictures NO_PICTURES = new Pictures() {
         @Override
         public byte[] oneTrip(Plan plan) {
             return new byte[] {1};
@@ -37,6 +38,14 @@ class ReportRuleOfThumbTest {
     };
 
     static Path lane(Path dir, String name, int extraWh) throws Exception {
+        return lane(dir, name, 2, "kind: drag\n      where: lane\n      extra: " + extraWh);
+    }
+
+    /**
+     * The lane with a disturbance budget and one event rule ({@code event}: its keys, the first line after the
+     * list's dash, the others indented by six spaces), e.g. on the zone {@code lane} of the cells x = 2 .. 9.
+     */
+    static Path lane(Path dir, String name, int budget, String event) throws Exception {
         Path map = dir.resolve(name + ".yaml");
         Files.writeString(map, """
                 # a hand-made test lane (invented data)
@@ -53,16 +62,20 @@ class ReportRuleOfThumbTest {
                 zones:
                   lane: {from: [2, 1], to: [9, 1]}
                 disturbances:
-                  budget: 2
+                  budget: %d
                   events:
-                    - kind: drag
-                      where: lane
-                      extra: %d
-                """.formatted(extraWh));
+                    - %s
+                """.formatted(budget, event));
         return map;
     }
 
     static Path mission(Path dir, Path map, String name, int startPercent, int reservePercent) throws Exception {
+        return mission(dir, map, name, startPercent, reservePercent, null);
+    }
+
+    /** The lane's mission; with a {@code deadline} (e.g. {@code 50 s}) also a tick of 4 s. */
+    static Path mission(Path dir, Path map, String name, int startPercent, int reservePercent, String deadline)
+            throws Exception {
         Path m = dir.resolve(name + ".yaml");
         Files.writeString(m, """
                 name: %s
@@ -75,15 +88,16 @@ class ReportRuleOfThumbTest {
                   wait-energy: 1
                   charge-rate: 1
                   neighbourhood: 4
-                start:
+                %sstart:
                   cell: [1, 1]
                   charge: %d%%
                 reserve: %d%%
-                tasks:
+                %stasks:
                   finish-on-dock: true
                 objective:
                   kind: reserve
-                """.formatted(name, map.getFileName(), startPercent, reservePercent));
+                """.formatted(name, map.getFileName(), deadline == null ? "" : "  tick: 4 s\n", startPercent,
+                reservePercent, deadline == null ? "" : "deadline: " + deadline + "\n"));
         return m;
     }
 

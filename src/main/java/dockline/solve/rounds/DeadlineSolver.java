@@ -101,7 +101,11 @@ public final class DeadlineSolver {
     }
 
     static Solved solve(Arena arena, int floor, int startLevel, long budgetBytes) {
-        RoundsProduct p = RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, floor, startLevel, budgetBytes);
+        return solve(RoundsProduct.build(arena, RoundsProduct.Kind.VISIT, floor, startLevel, budgetBytes));
+    }
+
+    /** The attractor of the completed mission on a built product, with the start's rank in turns. O(N + M). */
+    static Solved solve(RoundsProduct p) {
         int n = p.vertexCount();
         boolean[] alive = Attractor.everywhere(n);
         boolean[] target = new boolean[n];
@@ -114,6 +118,48 @@ public final class DeadlineSolver {
         int r = p.start() == RoundsProduct.LOST ? Attractor.OUT : rank[p.start()];
         // ranks count edges; a turn is two (the robot's action, then the building's outcome)
         return new Solved(p, choice, rank, r == Attractor.OUT ? -1 : r / 2);
+    }
+
+    /**
+     * The lowest starting charge (the floor .. the capacity) from which the analysed mission is guaranteed at its
+     * floor within its deadline; empty when not even a full battery is. One product from every start level at once
+     * ({@link RoundsProduct#buildFromEveryStart}) and one attractor: a root is won within the deadline when its rank
+     * in turns is at most the deadline; when that product passes the budget, bisection over the start instead
+     * ({@link StartSearch}, one product per step).
+     *
+     * @throws dockline.solve.ProductTooLargeException when a product of the bisection passes the budget too
+     */
+    public static OptionalInt lowestStart(DeadlineAnalysis a, long budgetBytes) {
+        try {
+            Solved s = solve(RoundsProduct.buildFromEveryStart(a.arena(), RoundsProduct.Kind.VISIT, a.reserveUnits(),
+                    budgetBytes));
+            return StartSearch.lowestRoot(s.product, a.reserveUnits(), root -> s.rank[root] != Attractor.OUT
+                    && s.rank[root] / 2 <= a.deadlineTicks());
+        } catch (dockline.solve.ProductTooLargeException e) {
+            return lowestStartByBisection(a, budgetBytes);
+        }
+    }
+
+    /** The same by bisection over the start, one product from one start per step. */
+    static OptionalInt lowestStartByBisection(DeadlineAnalysis a, long budgetBytes) {
+        return StartSearch.lowest(a.reserveUnits(), a.capacityUnits(), a.guaranteed() ? a.startUnits() : -1, s -> {
+            int turns = solve(a.arena(), a.reserveUnits(), s, budgetBytes).turns;
+            return turns >= 0 && turns <= a.deadlineTicks();
+        });
+    }
+
+    /**
+     * The fewest turns in which the robot can be sure to finish and dock from the mission's start at its floor,
+     * with no deadline (one product and one attractor, O(N + M)); empty when it cannot be sure to finish at all.
+     * With a disturbance budget of 0 this is the undisturbed shortest run the rule of thumb sets against the
+     * deadline.
+     */
+    public static OptionalInt fewestTurns(Mission m, long budgetBytes) {
+        if (m.tasks().patrols()) {
+            throw new IllegalArgumentException("a patrol has no finishing time");
+        }
+        int turns = solve(ArenaCompiler.compile(m), m.reserveUnits(), m.startUnits(), budgetBytes).turns;
+        return turns < 0 ? OptionalInt.empty() : OptionalInt.of(turns);
     }
 
     /**

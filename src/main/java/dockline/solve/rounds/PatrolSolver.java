@@ -192,6 +192,31 @@ public final class PatrolSolver {
     }
 
     /**
+     * The lowest starting charge (the floor .. the capacity) from which the analysed patrol is guaranteed at its
+     * floor; empty when not even a full battery is. One product from every start level at once
+     * ({@link RoundsProduct#buildFromEveryStart}) and one Büchi fixpoint, read at each level's root; when that
+     * product passes the budget, bisection over the start instead ({@link StartSearch}, one product per step).
+     *
+     * @throws dockline.solve.ProductTooLargeException when a product of the bisection passes the budget too
+     */
+    public static OptionalInt lowestStart(PatrolAnalysis a, long budgetBytes) {
+        try {
+            RoundsProduct p = RoundsProduct.buildFromEveryStart(a.arena(), RoundsProduct.Kind.PATROL, a.reserveUnits(),
+                    budgetBytes);
+            boolean[] alive = solve(p).alive();
+            return StartSearch.lowestRoot(p, a.reserveUnits(), root -> alive[root]);
+        } catch (dockline.solve.ProductTooLargeException e) {
+            return lowestStartByBisection(a, budgetBytes);
+        }
+    }
+
+    /** The same by bisection over the start, one product from one start per step (each no larger than the one above). */
+    static OptionalInt lowestStartByBisection(PatrolAnalysis a, long budgetBytes) {
+        return StartSearch.lowest(a.reserveUnits(), a.capacityUnits(), a.guaranteed() ? a.startUnits() : -1,
+                s -> solve(a.arena(), a.reserveUnits(), s, budgetBytes).guaranteed());
+    }
+
+    /**
      * The highest floor (0 .. start) at which the patrol is still guaranteed, by bisection
      * ({@link MonotoneSearch}); empty when not even a floor of 0 is.
      *

@@ -64,7 +64,21 @@ public final class RoundsProduct extends CsrGraph {
      */
     public static RoundsProduct build(Arena arena, Kind kind, int floor, int startLevel, long budgetBytes) {
         Exploration x = new Exploration(arena, kind, floor);
-        x.explore(startLevel, budgetBytes);
+        x.explore(startLevel < floor ? 0 : 1, Math.min(x.capacity, startLevel), budgetBytes);
+        return new RoundsProduct(x);
+    }
+
+    /**
+     * Builds the product reachable from the arena's start vertex at every start level from the floor to the
+     * capacity at once: one root per level, the root of level {@code l} is {@link #rootAt}{@code (l)}. Whether a
+     * vertex is won depends only on what is reachable from it, so one solve of this product answers every starting
+     * charge (the lowest start without a search over the start). At most the size bound, as {@link #build}.
+     *
+     * @throws ProductTooLargeException when the vertices and edges found pass the budget
+     */
+    public static RoundsProduct buildFromEveryStart(Arena arena, Kind kind, int floor, long budgetBytes) {
+        Exploration x = new Exploration(arena, kind, floor);
+        x.explore(Math.max(0, x.capacity - floor + 1), x.capacity, budgetBytes);
         return new RoundsProduct(x);
     }
 
@@ -141,7 +155,11 @@ public final class RoundsProduct extends CsrGraph {
             return kind == Kind.PATROL ? lapGoal.initial(zones) : visitGoal.initial(zones);
         }
 
-        private void explore(int startLevel, long budgetBytes) {
+        /**
+         * Explores breadth-first from {@code count} roots at the start vertex: the levels {@code top - count + 1} ..
+         * {@code top} (ids 1 .. count in that order); none when {@code count} is 0. The start is the root of {@code top}.
+         */
+        private void explore(int count, int top, long budgetBytes) {
             // sized from the bound (capped), so that small games stay small and large ones grow less often
             int guess = (int) Math.max(16, Math.min(bound.vertices() / 4, 1 << 21));
             IntArrayList va = new IntArrayList(guess);
@@ -156,14 +174,16 @@ public final class RoundsProduct extends CsrGraph {
             vl.add(-1);
             int v0 = arena.startVertex();
             int g0 = goalInitial(arena.cellZones(arena.cell(v0)));
-            if (startLevel < floor || g0 == GoalAutomaton.REJECT) {
+            if (count == 0 || g0 == GoalAutomaton.REJECT) {
                 start = LOST;
             } else {
-                start = 1;
-                va.add(v0);
-                vg.add(g0);
-                vl.add(Math.min(capacity, startLevel));
-                ids.put(key(v0, g0, Math.min(capacity, startLevel)), 1);
+                for (int level = top - count + 1; level <= top; level++) {
+                    ids.put(key(v0, g0, level), va.size());
+                    va.add(v0);
+                    vg.add(g0);
+                    vl.add(level);
+                }
+                start = count;
             }
             for (int x = 0; x < va.size(); x++) {
                 out.add(tgt.size());
@@ -263,9 +283,25 @@ public final class RoundsProduct extends CsrGraph {
         return x.bound;
     }
 
-    /** The start vertex ({@link #LOST} when the start itself breaks the floor or is avoided). */
+    /**
+     * The start vertex ({@link #LOST} when the start itself breaks the floor or is avoided); for a product from every
+     * start, the root of a full battery.
+     */
     public int start() {
         return x.start;
+    }
+
+    /**
+     * The root of start level {@code level} in a product from every start ({@link #buildFromEveryStart}), or
+     * {@link #LOST} when that level is below the floor or the start cell is avoided. In a product from one start,
+     * the root of that start's level only.
+     */
+    public int rootAt(int level) {
+        if (x.start == LOST || level > x.vLevel[x.start]) {
+            return LOST;
+        }
+        int id = x.start - (x.vLevel[x.start] - level); // the roots are ids 1 .. start, one level apart
+        return id < 1 ? LOST : id;
     }
 
     /** Whether the vertex belongs to the robot (the sink counts as the robot's: it has one move). */
