@@ -36,6 +36,20 @@ public final class Margins {
     public static MarginReport compute(Mission mission, Arena arena, GoalAutomaton goal, ProductOptions options) {
         int floor = mission.reserveUnits();
         int start = mission.startUnits();
+        return compute(mission, () -> floor > mission.capacityUnits()
+                ? new FixpointMargins.Both(FixpointMargins.highestFloor(arena, goal, start), -1)
+                : FixpointMargins.both(arena, goal, floor, start), options);
+    }
+
+    /**
+     * As {@link #compute(Mission, Arena, GoalAutomaton, ProductOptions)}, with the minimum-credit figures from
+     * the caller's pass (for a mission with lasting closures, the charging route decided phase by phase on
+     * the closure phases it needs, so that the whole closure arena is never built); they are timed here.
+     */
+    public static MarginReport compute(Mission mission, java.util.function.Supplier<FixpointMargins.Both> fixpoint,
+                                       ProductOptions options) {
+        int floor = mission.reserveUnits();
+        int start = mission.startUnits();
         int cap = mission.capacityUnits();
         int k = mission.map().disturbances().budget();
 
@@ -44,16 +58,9 @@ public final class Margins {
         int bHigh = b.highestFloor(start);
         int bLow = b.lowestStart(floor);
         long t1 = System.nanoTime();
-        int fHigh;
-        int fLow;
-        if (floor > cap) {
-            fHigh = FixpointMargins.highestFloor(arena, goal, start);
-            fLow = -1;
-        } else {
-            FixpointMargins.Both both = FixpointMargins.both(arena, goal, floor, start);
-            fHigh = both.highestFloorUnits();
-            fLow = both.lowestStartUnits();
-        }
+        FixpointMargins.Both both = fixpoint.get();
+        int fHigh = both.highestFloorUnits();
+        int fLow = both.lowestStartUnits();
         long t2 = System.nanoTime();
 
         boolean guaranteed = bLow >= 0 && bLow <= start;

@@ -97,6 +97,9 @@ public final class MissionPlanner {
     public static Plan plan(Mission mission, PlanOptions options) {
         long t0 = System.nanoTime();
         Optional<Plan> phased = phasedCharging(mission, options, t0);
+        if (phased.isEmpty()) {
+            phased = phasedMargins(mission, options, t0);
+        }
         if (phased.isPresent()) {
             return phased.get();
         }
@@ -491,9 +494,42 @@ public final class MissionPlanner {
     // ---- margins
 
     private static Plan margins(Context c) {
+        return margins(c, Margins.compute(c.mission(), c.arena(), c.goal(), c.product()), null);
+    }
+
+    /**
+     * The margins of a mission with lasting closures without the whole closure arena: the bisection decides
+     * each probe phase by phase on the product game ({@code PhasedLastingSolver}), and the minimum-credit
+     * figures come from the charging route phase by phase ({@link LastingPhases}), two independent
+     * computations as on the whole arena. Empty when the route is another, the mission has nothing a lasting
+     * event closes, its floor is above the capacity, or the phases hand it back to the whole arena.
+     */
+    private static Optional<Plan> phasedMargins(Mission mission, PlanOptions options, long t0) {
+        if (!(options.route() instanceof Route.Margins) || mission.reserveUnits() > mission.capacityUnits()) {
+            return Optional.empty();
+        }
+        Optional<DisturbanceStates> st = LastingPhases.states(mission);
+        if (st.isEmpty()) {
+            return Optional.empty();
+        }
+        GoalAutomaton goal = GoalAutomaton.of(mission);
+        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, false);
+        if (lp.isEmpty()) {
+            return Optional.empty();
+        }
+        LastingPhases.Result p = lp.get();
+        Context c = new Context(mission, p.arena(), goal, options, t0, p.compileMillis());
+        MarginReport r = Margins.compute(mission, () -> new FixpointMargins.Both(
+                p.weakened().highestFloorUnits().orElse(-1), p.weakened().lowestStartUnits().orElse(-1)), c.product());
+        return Optional.of(margins(c, r, p.note()));
+    }
+
+    private static Plan margins(Context c, MarginReport r, String note) {
         Mission m = c.mission();
-        MarginReport r = Margins.compute(m, c.arena(), c.goal(), c.product());
         List<String> notes = new ArrayList<>();
+        if (note != null) {
+            notes.add(note);
+        }
         if (!r.agree()) {
             notes.add("the bisection over the threshold solver and the minimum-credit fixpoint disagree");
         }

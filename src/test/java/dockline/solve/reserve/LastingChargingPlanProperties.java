@@ -103,6 +103,30 @@ class LastingChargingPlanProperties {
     }
 
     /**
+     * The margins of a mission with lasting closures (the margin command's route, which decides each bisection
+     * probe phase by phase on the product game and takes the minimum-credit figures from the charging route
+     * phase by phase): both ways agree, and equal {@link LastingBruteForce}'s highest floor and lowest start
+     * (the separately written oracle; the lowest start by bisection over the start, as above).
+     */
+    @Property(tries = 300)
+    void phasedMargins_matchTheBruteForce(@ForAll long seed) {
+        Mission m = LastingMissions.fromSeed(seed, true);
+        String why = LastingMissions.describe(m);
+        int highest = new LastingBruteForce(m).highestFloor();
+        Plan p = MissionPlanner.plan(m, PlanOptions.of(new Route.Margins()));
+        var r = ((Plan.Detail.Margins) p.detail()).report();
+        assertThat(r.agree()).as("the two ways agree\n%s", why).isTrue();
+        assertThat(p.highestFloorUnits()).as("highest floor against the brute force\n%s", why)
+                .isEqualTo(highest >= 0 ? OptionalInt.of(highest) : OptionalInt.empty());
+        assertThat(p.lowestStartUnits()).as("lowest start against the brute force\n%s", why).isEqualTo(lowestStart(m));
+        boolean phased = PHASES.matcher(String.join("\n", p.notes())).find();
+        assertThat(phased).as("phase by phase\n%s", why).isEqualTo(ArenaCompiler.states(m).itemCount() > 0
+                && m.reserveUnits() <= m.capacityUnits());
+        Statistics.label("phase by phase").collect(phased);
+        Statistics.label("phase by phase").coverage(c -> c.check(true).percentage(q -> q >= 30));
+    }
+
+    /**
      * The two passes of one round on their own, on the base phase only (nothing closed), against
      * {@link LastingBruteForce}: the strengthened pass's highest floor (a left-out closure not the building's) is
      * at least the mission's and the weakened one's (a left-out closure lost) at most; the weakened pass cut short
