@@ -4,6 +4,7 @@ import dockline.arena.Arena;
 import dockline.goal.GoalAutomaton;
 import dockline.solve.charging.ChargingRoute;
 import dockline.solve.charging.ChargingSolver;
+import java.util.function.BooleanSupplier;
 
 /**
  * The margins of a mission from the minimum-credit solver of the charging route alone
@@ -39,8 +40,17 @@ public final class FixpointMargins {
 
     /** Both margins of the mission's floor and a starting level, from one pass. */
     public static Both both(Arena arena, GoalAutomaton goal, int floor, int start) {
+        return both(arena, goal, floor, start, () -> false);
+    }
+
+    /**
+     * Both margins, the pass polling {@code cancelled} (a {@link java.util.concurrent.CancellationException}
+     * when it is raised).
+     */
+    public static Both both(Arena arena, GoalAutomaton goal, int floor, int start, BooleanSupplier cancelled) {
         int cap = arena.mission().capacityUnits();
-        ChargingRoute.Analysis a = ChargingRoute.analyse(new ChargingSolver(arena, goal), cap, floor, start);
+        ChargingRoute.Analysis a = ChargingRoute.analyse(new ChargingSolver(arena, goal, cancelled), cap, floor,
+                start);
         return new Both(a.highestFloorUnits().orElse(-1), a.lowestStartUnits().orElse(-1));
     }
 

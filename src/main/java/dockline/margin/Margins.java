@@ -37,8 +37,9 @@ public final class Margins {
         int floor = mission.reserveUnits();
         int start = mission.startUnits();
         return compute(mission, () -> floor > mission.capacityUnits()
-                ? new FixpointMargins.Both(FixpointMargins.highestFloor(arena, goal, start), -1)
-                : FixpointMargins.both(arena, goal, floor, start), options);
+                ? new FixpointMargins.Both(FixpointMargins.both(arena, goal, 0, start, options.cancelled())
+                        .highestFloorUnits(), -1)
+                : FixpointMargins.both(arena, goal, floor, start, options.cancelled()), options);
     }
 
     /**

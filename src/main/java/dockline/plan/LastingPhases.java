@@ -13,6 +13,7 @@ import dockline.solve.fast.MinChargeSolver;
 import dockline.solve.reserve.PhasedLastingSolver;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.function.BooleanSupplier;
 
 /**
  * The charging route on a mission with lasting closures, phase by phase: the same figures as the charging
@@ -108,20 +109,23 @@ final class LastingPhases {
      * before the end), the charging game does not apply, or a round could not refine (never expected; the whole
      * arena then answers, never a guess).
      */
-    static Optional<Result> solve(Mission mission, DisturbanceStates st, GoalAutomaton goal, boolean fastFirst) {
-        return refine(mission, st, goal, fastFirst, false);
+    static Optional<Result> solve(Mission mission, DisturbanceStates st, GoalAutomaton goal, boolean fastFirst,
+                                  BooleanSupplier cancelled) {
+        return refine(mission, st, goal, fastFirst, false, cancelled);
     }
 
     /**
      * The verdict at the mission's floor only (the rounds stop once a weakened win or a strengthened loss is
      * found); empty as for {@link #solve}.
      */
-    static Optional<Boolean> wins(Mission mission, DisturbanceStates st, GoalAutomaton goal) {
-        return refine(mission, st, goal, false, true).map(r -> r.weakened().guaranteed());
+    static Optional<Boolean> wins(Mission mission, DisturbanceStates st, GoalAutomaton goal,
+                                  BooleanSupplier cancelled) {
+        return refine(mission, st, goal, false, true, cancelled).map(r -> r.weakened().guaranteed());
     }
 
+    /** The rounds; every pass polls {@code cancelled} (a {@code CancellationException} when it is raised). */
     private static Optional<Result> refine(Mission mission, DisturbanceStates st, GoalAutomaton goal,
-                                           boolean fastFirst, boolean verdictOnly) {
+                                           boolean fastFirst, boolean verdictOnly, BooleanSupplier cancelled) {
         boolean[] keep = new boolean[st.count()];
         for (int s = 0; s < st.count(); s++) {
             keep[s] = st.closed(s).length == 0;
@@ -141,7 +145,7 @@ final class LastingPhases {
             }
             ChargingSolver solver;
             try {
-                solver = new ChargingSolver(a, goal);
+                solver = new ChargingSolver(a, goal, cancelled);
             } catch (IllegalArgumentException | ArithmeticException e) {
                 return Optional.empty();
             }

@@ -239,7 +239,7 @@ public final class MissionPlanner {
             return Optional.empty();
         }
         GoalAutomaton goal = GoalAutomaton.of(mission);
-        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, auto);
+        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, auto, options.cancelled());
         if (lp.isEmpty()) {
             return Optional.empty();
         }
@@ -309,7 +309,7 @@ public final class MissionPlanner {
         List<Suggestion> suggestions = List.of();
         if (wantSuggestions && !a.guaranteed()) {
             int k = m.map().disturbances().budget();
-            int budget = MonotoneSearch.highest(-1, k - 1, b -> chargingWins(m.withBudget(b)));
+            int budget = MonotoneSearch.highest(-1, k - 1, b -> chargingWins(m.withBudget(b), c.options().cancelled()));
             suggestions = Suggestions.find(m, a.lowestStartUnits().orElse(-1), highest.orElse(-1), budget);
         }
         Optional<PlanReplays> replays = Optional.empty();
@@ -343,16 +343,16 @@ public final class MissionPlanner {
     }
 
     /** The charging route's verdict on a variant of the mission (compiled on its own). */
-    private static boolean chargingWins(Mission m) {
+    private static boolean chargingWins(Mission m, java.util.function.BooleanSupplier cancelled) {
         Optional<DisturbanceStates> st = LastingPhases.states(m);
         if (st.isPresent()) {
-            Optional<Boolean> w = LastingPhases.wins(m, st.get(), GoalAutomaton.of(m));
+            Optional<Boolean> w = LastingPhases.wins(m, st.get(), GoalAutomaton.of(m), cancelled);
             if (w.isPresent()) {
                 return w.get();
             }
         }
         Arena arena = ArenaCompiler.compile(m);
-        ChargingSolver s = new ChargingSolver(arena, GoalAutomaton.of(m));
+        ChargingSolver s = new ChargingSolver(arena, GoalAutomaton.of(m), cancelled);
         return ChargingRoute.analyse(s, m.capacityUnits(), m.reserveUnits(), m.startUnits()).guaranteed();
     }
 
@@ -513,7 +513,7 @@ public final class MissionPlanner {
             return Optional.empty();
         }
         GoalAutomaton goal = GoalAutomaton.of(mission);
-        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, false);
+        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, false, options.cancelled());
         if (lp.isEmpty()) {
             return Optional.empty();
         }

@@ -9,9 +9,11 @@ import dockline.bench.BuildingGenerator;
 import dockline.bench.MissionGenerator;
 import dockline.bench.MissionSpec;
 import dockline.goal.GoalAutomaton;
+import dockline.model.EventDuration;
 import dockline.model.Mission;
 import dockline.plan.Method;
 import dockline.plan.MissionPlanner;
+import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
 import dockline.plan.Route;
 import java.util.concurrent.CancellationException;
@@ -67,5 +69,23 @@ class ChargingCancelTest {
         assertThat(MissionPlanner.plan(M, PlanOptions.of(Route.Charging.defaults())
                 .withCancelled(() -> never.incrementAndGet() < 0)).method()).isEqualTo(Method.CHARGING);
         assertThat(never.get()).as("asked during the pass").isPositive();
+    }
+
+    /**
+     * With its door-shut events lasting the mission is planned phase by phase (plan.LastingPhases), with the
+     * margins too; both poll the plan's flag in every pass.
+     */
+    @Test
+    void thePhasesOfALastingMissionPollThePlansFlag() {
+        Mission lasting = M.withDoorsAndBlockages(EventDuration.REST_OF_MISSION);
+        for (Route r : new Route[] {Route.Charging.defaults(), new Route.Margins()}) {
+            AtomicInteger asked = new AtomicInteger();
+            PlanOptions o = PlanOptions.of(r).withCancelled(() -> asked.incrementAndGet() > 0);
+            assertThatThrownBy(() -> MissionPlanner.plan(lasting, o)).as("%s", r)
+                    .isInstanceOf(CancellationException.class);
+            assertThat(asked.get()).as("%s", r).isPositive();
+        }
+        Plan p = MissionPlanner.plan(lasting, PlanOptions.of(Route.Charging.defaults()));
+        assertThat(p.notes()).anyMatch(n -> n.startsWith("lasting closures phase by phase"));
     }
 }
