@@ -104,6 +104,18 @@ final class LastingPhases {
     }
 
     /**
+     * {@link #solve} when the mission has something a lasting event closes (and at most {@link #MAX_STATES}
+     * states), with the plan's cancellation flag; empty for the whole arena.
+     */
+    static Optional<Result> of(Mission mission, PlanOptions options, boolean fastFirst) {
+        Optional<DisturbanceStates> st = states(mission);
+        if (st.isEmpty()) {
+            return Optional.empty();
+        }
+        return solve(mission, st.get(), GoalAutomaton.of(mission), fastFirst, options.cancelled());
+    }
+
+    /**
      * The charging route's figures phase by phase, exact; empty when the mission is to be planned on the whole
      * arena: the fast path may apply ({@code fastFirst}, the automatic route: the robot may be unable to charge
      * before the end), the charging game does not apply, or a round could not refine (never expected; the whole

@@ -234,17 +234,12 @@ public final class MissionPlanner {
         if (!auto && !(r instanceof Route.Charging)) {
             return Optional.empty();
         }
-        Optional<DisturbanceStates> st = LastingPhases.states(mission);
-        if (st.isEmpty()) {
-            return Optional.empty();
-        }
-        GoalAutomaton goal = GoalAutomaton.of(mission);
-        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, auto, options.cancelled());
+        Optional<LastingPhases.Result> lp = LastingPhases.of(mission, options, auto);
         if (lp.isEmpty()) {
             return Optional.empty();
         }
         LastingPhases.Result p = lp.get();
-        Context c = new Context(mission, p.arena(), goal, options, t0, p.compileMillis());
+        Context c = phasedContext(mission, options, t0, p);
         if (auto) {
             return Optional.of(charging(c, p.solver(), p.weakened(), p.strengthened(), false, true, "the robot can"
                     + " charge on a dock before the mission is complete: the least charge per position with the good"
@@ -497,6 +492,11 @@ public final class MissionPlanner {
         return margins(c, Margins.compute(c.mission(), c.arena(), c.goal(), c.product()), null);
     }
 
+    /** The plan's context on the last round's restricted arena. */
+    private static Context phasedContext(Mission mission, PlanOptions options, long t0, LastingPhases.Result p) {
+        return new Context(mission, p.arena(), p.solver().goal(), options, t0, p.compileMillis());
+    }
+
     /**
      * The margins of a mission with lasting closures without the whole closure arena: the bisection decides
      * each probe phase by phase on the product game ({@code PhasedLastingSolver}), and the minimum-credit
@@ -508,17 +508,12 @@ public final class MissionPlanner {
         if (!(options.route() instanceof Route.Margins) || mission.reserveUnits() > mission.capacityUnits()) {
             return Optional.empty();
         }
-        Optional<DisturbanceStates> st = LastingPhases.states(mission);
-        if (st.isEmpty()) {
-            return Optional.empty();
-        }
-        GoalAutomaton goal = GoalAutomaton.of(mission);
-        Optional<LastingPhases.Result> lp = LastingPhases.solve(mission, st.get(), goal, false, options.cancelled());
+        Optional<LastingPhases.Result> lp = LastingPhases.of(mission, options, false);
         if (lp.isEmpty()) {
             return Optional.empty();
         }
         LastingPhases.Result p = lp.get();
-        Context c = new Context(mission, p.arena(), goal, options, t0, p.compileMillis());
+        Context c = phasedContext(mission, options, t0, p);
         MarginReport r = Margins.compute(mission, () -> new FixpointMargins.Both(
                 p.weakened().highestFloorUnits().orElse(-1), p.weakened().lowestStartUnits().orElse(-1)), c.product());
         return Optional.of(margins(c, r, p.note()));
