@@ -96,8 +96,14 @@ public final class ReplayCommand extends MissionCommand {
         }
         Plan plan;
         try {
-            plan = MissionPlanner.plan(m, PlanOptions.of(new Route.Product(policy.choice(), false, false, true, false))
-                    .withMemoryBudget(mission.memoryBudgetBytes()));
+            // with lasting closures the safest policy's worst case, counterexample and nominal run come from the
+            // charging route phase by phase (the whole closure arena is never built); forced events may close
+            // what those phases left out, so they keep the product route on the whole arena
+            boolean phased = forced.isEmpty() && policy.choice() == dockline.plan.PolicyChoice.SAFEST
+                    && m.map().disturbances().anyLasting();
+            Route route = phased ? new Route.Charging(true, false, true)
+                    : new Route.Product(policy.choice(), false, false, true, false);
+            plan = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
         } catch (RuntimeException | OutOfMemoryError e) {
             return mission.failure(e, err);
         }
