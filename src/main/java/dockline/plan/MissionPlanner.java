@@ -508,15 +508,11 @@ public final class MissionPlanner {
         if (!(options.route() instanceof Route.Margins) || mission.reserveUnits() > mission.capacityUnits()) {
             return Optional.empty();
         }
-        Optional<LastingPhases.Result> lp = LastingPhases.of(mission, options, false);
-        if (lp.isEmpty()) {
-            return Optional.empty();
-        }
-        LastingPhases.Result p = lp.get();
-        Context c = phasedContext(mission, options, t0, p);
-        MarginReport r = Margins.compute(mission, () -> new FixpointMargins.Both(
-                p.weakened().highestFloorUnits().orElse(-1), p.weakened().lowestStartUnits().orElse(-1)), c.product());
-        return Optional.of(margins(c, r, p.note()));
+        return LastingPhases.of(mission, options, false).map(p -> {
+            Context c = phasedContext(mission, options, t0, p);
+            return margins(c, Margins.compute(mission, () -> new FixpointMargins.Both(p.weakened().highestFloorUnits()
+                    .orElse(-1), p.weakened().lowestStartUnits().orElse(-1)), c.product()), p.note());
+        });
     }
 
     private static Plan margins(Context c, MarginReport r, String note) {
