@@ -202,7 +202,7 @@ public final class Html {
         dt(sb, "Highest guaranteed floor", f.highestFloorUnits().isPresent() ? f.wh(f.highestFloorUnits().getAsInt())
                 : "none can be guaranteed from this start");
         dt(sb, "Lowest start", f.lowestStartUnits().isPresent() ? f.wh(f.lowestStartUnits().getAsInt())
-                : r.notes().contains(MissionChecker.LOWEST_START_NOT_COMPUTED) ? "not computed (see the notes)"
+                : !f.lowestStartSearched() ? "not computed (see the notes)"
                 : r.kind().equals("deadline") ? "no start charge guarantees the floor within the deadline"
                 : "no start charge guarantees the floor");
         dt(sb, "Method", f.method() + " \u2014 " + f.methodReason());

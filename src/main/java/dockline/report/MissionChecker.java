@@ -49,7 +49,7 @@ import java.util.OptionalInt;
 public final class MissionChecker {
 
     /** The note of a patrol or deadline mission whose lowest start could not be searched within the memory budget. */
-    static final String LOWEST_START_NOT_COMPUTED = "the lowest start was not computed: a game from a higher starting"
+    private static final String LOWEST_START_NOT_COMPUTED = "the lowest start was not computed: a game from a higher starting"
             + " charge passes the memory budget";
 
     private MissionChecker() {
@@ -173,7 +173,8 @@ public final class MissionChecker {
         MissionResult.Figures f = new MissionResult.Figures(m.scale(), a.guaranteed(), a.method().word(),
                 a.methodReason(), a.certification().ok(), certificationWords(a), m.capacityUnits(), m.startUnits(),
                 m.reserveUnits(), m.map().disturbances().budget(), a.lowestLevelUnits(), highest,
-                margins.lowestStartUnits(), rules(m, need, OptionalInt.empty(), OptionalInt.empty(), a.guaranteed()));
+                margins.lowestStartUnits(), true, rules(m, need, OptionalInt.empty(), OptionalInt.empty(),
+                a.guaranteed()));
         MissionResult.Run run = null;
         byte[] png = null;
         String pictureNote = null;
@@ -272,8 +273,8 @@ public final class MissionChecker {
                 ? "a patrol: a Büchi game within the reserve floor on the stored product"
                 : "a visit mission with a deadline: attractor ranks as the ticks left, on the stored product",
                 cert != null && cert.ok(), certification, m.capacityUnits(), m.startUnits(), m.reserveUnits(),
-                m.map().disturbances().budget(), lowest, highest, rp.lowestStartUnits(), rules(m, need, deadlineTicks,
-                shortestRun, ok));
+                m.map().disturbances().budget(), lowest, highest, rp.lowestStartUnits(), rp.lowestStartSearched(),
+                rules(m, need, deadlineTicks, shortestRun, ok));
         MissionResult.Run run = null;
         byte[] png = null;
         String pictureNote = null;

@@ -95,13 +95,15 @@ public record MissionResult(Path file, Status status, List<LocatedError> errors,
      * @param budget           the disturbance budget K
      * @param lowestLevelUnits the worst case: the lowest level the disturbances can force under the policy
      * @param highestFloorUnits the highest reserve floor that can be guaranteed from the start
-     * @param lowestStartUnits the lowest starting charge that guarantees the floor (one-trip missions)
+     * @param lowestStartUnits the lowest starting charge that guarantees the floor
+     * @param lowestStartSearched whether its search ran to the end (false: a patrol's or deadline mission's
+     *                          search passed the memory budget, and the figure is not known; the notes say so)
      * @param rules            the rule of thumb at each margin of {@link RuleOfThumb#MARGINS}
      */
     public record Figures(EnergyScale scale, boolean guaranteed, String method, String methodReason, boolean certified,
                           String certification, int capacityUnits, int startUnits, int reserveUnits, int budget,
                           OptionalInt lowestLevelUnits, OptionalInt highestFloorUnits, OptionalInt lowestStartUnits,
-                          List<RuleOfThumb> rules) {
+                          boolean lowestStartSearched, List<RuleOfThumb> rules) {
         public Figures {
             rules = List.copyOf(rules);
         }
