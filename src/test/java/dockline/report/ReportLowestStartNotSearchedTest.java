@@ -2,9 +2,6 @@ package dockline.report;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import dockline.model.Mission;
-import dockline.plan.Plan;
-import dockline.replay.Replay;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -20,17 +17,7 @@ import org.junit.jupiter.api.Test;
  */
 class ReportLowestStartNotSearchedTest {
 
-    private static final Pictures NONE = new Pictures() {
-        @Override
-        public byte[] oneTrip(Plan plan) {
-            return null;
-        }
-
-        @Override
-        public byte[] run(Mission mission, Replay run, boolean guaranteed, String headline) {
-            return null;
-        }
-    };
+    private static final Pictures NONE = NoPictures.NONE;
 
     private static String lowestStart(MissionResult r) {
         String html = Html.report(List.of(r), new ReportMeta("test", Instant.EPOCH));

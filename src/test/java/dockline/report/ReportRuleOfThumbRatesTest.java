@@ -5,8 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.fixtures.RandomMissions;
 import dockline.model.Mission;
 import dockline.model.Timing;
-import dockline.plan.Plan;
-import dockline.replay.Replay;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -24,17 +22,7 @@ import org.junit.jupiter.api.Test;
  */
 class ReportRuleOfThumbRatesTest {
 
-    private static final Pictures NONE = new Pictures() {
-        @Override
-        public byte[] oneTrip(Plan plan) {
-            return null;
-        }
-
-        @Override
-        public byte[] run(Mission mission, Replay run, boolean guaranteed, String headline) {
-            return null;
-        }
-    };
+    private static final Pictures NONE = NoPictures.NONE;
 
     /** The margins the rates are measured at: none, and the report's two. */
     private static final int[] MARGINS = {0, 20, 30};
