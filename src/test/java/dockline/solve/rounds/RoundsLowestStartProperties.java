@@ -66,10 +66,13 @@ class RoundsLowestStartProperties {
                 : DeadlineSolver.lowestStartByBisection(p.deadline().orElseThrow(), BUDGET);
         assertThat(bisection.orElse(-1)).as("lowest start by bisection (the fallback)").isEqualTo(expected);
         Statistics.label("lowest start").collect(against(p.lowestStartUnits(), m));
+        // each case must really occur; the bounds sit well below the shares seen (lasting patrols, 300 tries:
+        // 22 % below, 6 % above, 67 % none; the other properties 39 %, 18 % to 21 %, 32 % to 38 %), so that a
+        // run's random draws do not fail them (an 8 % bound failed once at 6.3 %)
         Statistics.label("lowest start").coverage(c -> {
-            c.check("below the start").percentage(q -> q >= 20);
-            c.check("above the start").percentage(q -> q >= 8);
-            c.check("none").percentage(q -> q >= 15);
+            c.check("below the start").percentage(q -> q >= 10);
+            c.check("above the start").percentage(q -> q >= 2);
+            c.check("none").percentage(q -> q >= 10);
         });
     }
 
