@@ -36,9 +36,12 @@ import java.util.function.IntFunction;
  * @param lowestStartUnits    the lowest starting charge that guarantees the mission's floor (and its deadline);
  *                            empty when none does or when it was not searched
  * @param lowestStartSearched whether that search ran ({@link #withLowestStart}) to the end
+ * @param lowestStartMillis   wall time of that search (0 before {@link #withLowestStart}); it is not part of the
+ *                            analysis' own time, which covers the solve and the highest floor
  */
 public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optional<DeadlineAnalysis> deadline,
-                         RoundsCertificate certificate, OptionalInt lowestStartUnits, boolean lowestStartSearched) {
+                         RoundsCertificate certificate, OptionalInt lowestStartUnits, boolean lowestStartSearched,
+                         long lowestStartMillis) {
 
     /**
      * Solves and certifies a patrol or deadline mission ({@link Mission#beyondOneTrip()}).
@@ -52,12 +55,12 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
             PatrolAnalysis a = PatrolSolver.analyse(m, budgetBytes, safest);
             RoundsCertificate cert = a.guaranteed() ? PatrolCertificateChecker.check(a.arena(),
                     a.policy().orElseThrow(), a.reserveUnits(), a.startUnits()) : null;
-            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert, OptionalInt.empty(), false);
+            return new RoundsPlan(m, Optional.of(a), Optional.empty(), cert, OptionalInt.empty(), false, 0);
         }
         DeadlineAnalysis a = DeadlineSolver.analyse(m, budgetBytes, safest);
         RoundsCertificate cert = a.guaranteed() ? DeadlineCertificateChecker.check(a.arena(), a.policy().orElseThrow(),
                 a.reserveUnits(), a.startUnits(), a.deadlineTicks()) : null;
-        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert, OptionalInt.empty(), false);
+        return new RoundsPlan(m, Optional.empty(), Optional.of(a), cert, OptionalInt.empty(), false, 0);
     }
 
     /**
@@ -70,13 +73,18 @@ public record RoundsPlan(Mission mission, Optional<PatrolAnalysis> patrol, Optio
      * @param budgetBytes the memory budget of each product
      */
     public RoundsPlan withLowestStart(long budgetBytes) {
+        long t0 = System.nanoTime();
         try {
             OptionalInt low = patrol.isPresent() ? PatrolSolver.lowestStart(patrol.get(), budgetBytes)
                     : DeadlineSolver.lowestStart(deadline.orElseThrow(), budgetBytes);
-            return new RoundsPlan(mission, patrol, deadline, certificate, low, true);
+            return new RoundsPlan(mission, patrol, deadline, certificate, low, true, millisSince(t0));
         } catch (ProductTooLargeException e) {
-            return new RoundsPlan(mission, patrol, deadline, certificate, OptionalInt.empty(), false);
+            return new RoundsPlan(mission, patrol, deadline, certificate, OptionalInt.empty(), false, millisSince(t0));
         }
+    }
+
+    private static long millisSince(long t0) {
+        return (System.nanoTime() - t0) / 1_000_000;
     }
 
     /**
