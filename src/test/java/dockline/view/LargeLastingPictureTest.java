@@ -7,7 +7,6 @@ import dockline.plan.PictureRoute;
 import dockline.report.Caveats;
 import javafx.scene.Parent;
 import javafx.scene.control.Label;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -19,14 +18,9 @@ import org.junit.jupiter.api.Test;
  */
 class LargeLastingPictureTest {
 
-    /** The toolkit as TestFX starts it (see {@code PictureRendererTest}). */
-    @BeforeAll
-    static void toolkit() throws Exception {
-        org.testfx.api.FxToolkit.registerPrimaryStage();
-    }
-
     @Test
     void the_64_floor_with_lasting_doors_is_pictured_from_the_phases_with_a_heat_key_that_says_so() throws Exception {
+        org.testfx.api.FxToolkit.registerPrimaryStage(); // the toolkit as TestFX starts it (see PictureRendererTest)
         Mission m = LargeLastingMissions.floor(64);
         assertThat(PictureRoute.phased(m)).isTrue();
         ViewData d = new SolverAnalyzer().analyze(m, () -> false);

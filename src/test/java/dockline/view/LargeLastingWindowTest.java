@@ -12,11 +12,8 @@ import javafx.geometry.Point2D;
 import javafx.scene.control.Label;
 import javafx.scene.control.Spinner;
 import javafx.stage.Stage;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -27,21 +24,13 @@ import org.testfx.util.WaitForAsyncUtils;
  * knows (enough charge, and a range where the need is not known exactly) instead of a number it does not know.
  * The brackets themselves are checked against the whole arena and a brute force in {@code HeatBoundsProperties}.
  */
-@ExtendWith(ApplicationExtension.class)
-class LargeLastingWindowTest {
+class LargeLastingWindowTest extends RealWindowCase {
 
-    private MissionWindow window;
     private final Mission mission = LargeLastingMissions.floor(32);
 
     @Start
     void start(Stage stage) {
-        window = FxTests.show(stage, new MissionWindow(new SolverAnalyzer(), FxTests.always(mission), null), 1280, 800);
-        window.open(java.nio.file.Path.of("generated-32.yaml"));
-    }
-
-    @AfterEach
-    void stop() throws Exception {
-        FxTests.dispose(window);
+        open(stage, 1280, 800, mission, java.nio.file.Path.of("generated-32.yaml"));
     }
 
     @Test

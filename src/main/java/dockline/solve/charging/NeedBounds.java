@@ -128,21 +128,4 @@ public final class NeedBounds {
     public boolean restricted() {
         return restricted;
     }
-
-    public int floorUnits() {
-        return floor;
-    }
-
-    public int budget() {
-        return arena.budget();
-    }
-
-    /** The largest finite upper bound (the top of a colour scale), or the floor if none. */
-    public int maxUnitsNeeded() {
-        int m = 0;
-        for (int x : high) {
-            m = x == ChargingSolver.INFINITE ? m : Math.max(m, x);
-        }
-        return Math.addExact(floor, m);
-    }
 }

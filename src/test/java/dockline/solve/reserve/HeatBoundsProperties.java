@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.model.Cell;
-import dockline.model.Charge;
 import dockline.model.Mission;
 import dockline.monitor.ReserveMonitor;
 import dockline.plan.MissionPlanner;
@@ -14,6 +13,7 @@ import dockline.plan.PlanOptions;
 import dockline.plan.Route;
 import dockline.solve.ProductOptions;
 import dockline.solve.charging.NeedBounds;
+import java.util.OptionalInt;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
@@ -30,7 +30,8 @@ import net.jqwik.api.statistics.Statistics;
  *       exact need and the upper bound at least it, and a position the bounds call exact has exactly that need;</li>
  *   <li>{@link LastingBruteForce}, the separately written explicit-state oracle (own move generation, closure sets
  *       in its states; no arena compiler, goal automaton or solver), with the start moved to each free cell and
- *       the least start it guarantees found by bisection over the start (winning is upward closed in it): the
+ *       the least start it guarantees found by bisection over the start (winning is upward closed in it; the
+ *       bisection of {@code LastingChargingPlanProperties}): the
  *       same bracket at the full budget with no task done.</li>
  * </ul>
  * "No level will do" counts as above every level, and "no level is known to be enough" as an upper bound of
@@ -121,31 +122,11 @@ class HeatBoundsProperties {
         return u == NeedBounds.IMPOSSIBLE || u == NeedBounds.UNBOUNDED ? NONE : u;
     }
 
-    /** The least start on cell {@code c} that the brute force guarantees (bisection), or {@link #NONE}. */
+    /** The least start on cell {@code c} that the brute force guarantees, or {@link #NONE}. */
     private static long leastStart(Mission m, Cell c) {
         Mission moved = new Mission(m.name(), m.source(), m.map(), m.robot(), c, m.startCharge(), m.reserve(),
                 m.tasks(), m.objective());
-        int floor = m.reserveUnits();
-        int cap = m.capacityUnits();
-        if (floor > cap || !winsFrom(moved, cap)) {
-            return NONE;
-        }
-        int lo = floor - 1; // loses (below the floor)
-        int hi = cap; // wins
-        while (hi - lo > 1) {
-            int mid = (lo + hi) >>> 1;
-            if (winsFrom(moved, mid)) {
-                hi = mid;
-            } else {
-                lo = mid;
-            }
-        }
-        return hi;
-    }
-
-    private static boolean winsFrom(Mission m, int startUnits) {
-        Mission s = m.withStartCharge(Charge.wh(m.scale().toWh(startUnits)));
-        assertThat(s.startUnits()).as("start charge round trip").isEqualTo(startUnits);
-        return startUnits >= s.reserveUnits() && new LastingBruteForce(s).highestFloor() >= s.reserveUnits();
+        OptionalInt least = LastingChargingPlanProperties.lowestStart(moved);
+        return least.isPresent() ? least.getAsInt() : NONE;
     }
 }
