@@ -128,8 +128,9 @@ public final class MissionPlanner {
         if (r instanceof Route.Charging ch) {
             Optional<ChargingSolver> cs = chargingSolver(c);
             if (cs.isPresent()) {
-                return charging(c, cs.get(), ch.replays(), ch.suggestions(), "the charging route was asked for: the"
-                        + " least charge per position with the good docks as targets, every floor in one pass");
+                return PictureRoute.withBounds(ch, cs.get(), charging(c, cs.get(), ch.replays(), ch.suggestions(),
+                        "the charging route was asked for: the least charge per position with the good docks as"
+                                + " targets, every floor in one pass"));
             }
             if (!ch.orProduct()) {
                 throw new RouteNotApplicableException("the charging route does not apply: an energy gain other than"
@@ -246,9 +247,9 @@ public final class MissionPlanner {
                     + " docks as targets, every floor in one pass, no battery levels in the game", p.note()));
         }
         Route.Charging ch = (Route.Charging) r;
-        return Optional.of(charging(c, p.solver(), p.weakened(), p.strengthened(), ch.replays(), ch.suggestions(),
-                "the charging route was asked for: the least charge per position with the good docks as targets,"
-                        + " every floor in one pass", p.note()));
+        return Optional.of(PictureRoute.withBounds(ch, p.solver(), charging(c, p.solver(), p.weakened(),
+                p.strengthened(), ch.replays(), ch.suggestions(), "the charging route was asked for: the least charge"
+                        + " per position with the good docks as targets, every floor in one pass", p.note())));
     }
 
     /**

@@ -9,6 +9,7 @@ import dockline.solve.reserve.ChargeNeeded;
 import dockline.solve.discounted.DiscountedAnalysis;
 import dockline.solve.fast.FastPath;
 import dockline.solve.charging.ChargingRoute;
+import dockline.solve.charging.NeedBounds;
 import dockline.policy.ThresholdPolicy;
 import dockline.policy.Policy;
 import dockline.solve.reserve.ReserveAnalysis;
@@ -43,7 +44,9 @@ import java.util.OptionalInt;
  * @param suggestions         what would make a mission that is not guaranteed guaranteed, smallest change first
  * @param suggestionsNote     why there are no suggestions although they were asked for, or null
  * @param replays             the replays, when asked for
- * @param heatMap             the charge needed from every situation, when asked for
+ * @param heatMap             the charge needed from every situation, when asked for (the product route: exact)
+ * @param heatBounds          the charge needed from every situation as a lower and an upper bound, when asked for
+ *                            (the charging route: exact on a whole arena, bounds on the kept closure phases)
  * @param size                the size of the game solved
  * @param timings             where the time went
  * @param notes               things the reader should know
@@ -54,11 +57,31 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
                    Certification certification, OptionalInt lowestLevelUnits, Optional<Rational> worstScore,
                    OptionalInt highestFloorUnits, boolean highestFloorSearched, OptionalInt lowestStartUnits,
                    List<Suggestion> suggestions, String suggestionsNote, Optional<PlanReplays> replays,
-                   Optional<ChargeNeeded> heatMap, Size size, Timings timings, List<String> notes, Detail detail) {
+                   Optional<ChargeNeeded> heatMap, Optional<NeedBounds> heatBounds, Size size, Timings timings,
+                   List<String> notes, Detail detail) {
 
     public Plan {
         suggestions = List.copyOf(suggestions);
         notes = List.copyOf(notes);
+    }
+
+    /** A plan without heat bounds (every route but the charging route asked for a heat map). */
+    public Plan(Mission mission, Objective objective, Verdict verdict, Method method, String methodReason,
+                Optional<Policy> policy, PolicyChoice policyChoice, int policyFloorUnits, Certification certification,
+                OptionalInt lowestLevelUnits, Optional<Rational> worstScore, OptionalInt highestFloorUnits,
+                boolean highestFloorSearched, OptionalInt lowestStartUnits, List<Suggestion> suggestions,
+                String suggestionsNote, Optional<PlanReplays> replays, Optional<ChargeNeeded> heatMap, Size size,
+                Timings timings, List<String> notes, Detail detail) {
+        this(mission, objective, verdict, method, methodReason, policy, policyChoice, policyFloorUnits, certification,
+                lowestLevelUnits, worstScore, highestFloorUnits, highestFloorSearched, lowestStartUnits, suggestions,
+                suggestionsNote, replays, heatMap, Optional.empty(), size, timings, notes, detail);
+    }
+
+    /** This plan with the given heat bounds. */
+    public Plan withHeatBounds(NeedBounds bounds) {
+        return new Plan(mission, objective, verdict, method, methodReason, policy, policyChoice, policyFloorUnits,
+                certification, lowestLevelUnits, worstScore, highestFloorUnits, highestFloorSearched, lowestStartUnits,
+                suggestions, suggestionsNote, replays, heatMap, Optional.of(bounds), size, timings, notes, detail);
     }
 
     public boolean guaranteed() {

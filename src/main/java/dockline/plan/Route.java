@@ -53,8 +53,16 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Charging, Ro
      * @param suggestions when not guaranteed, find what would make it guaranteed
      * @param orProduct   when the charging route does not apply to the mission, take {@link Product} with the
      *                    safest policy and the same replays and suggestions instead of refusing
+     * @param heatBounds  also give the charge needed from every situation as bounds
+     *                    ({@link dockline.solve.charging.NeedBounds}: exact on a whole arena, a lower and an upper
+     *                    bound on the kept closure phases of a mission with lasting closures)
      */
-    record Charging(boolean replays, boolean suggestions, boolean orProduct) implements Route {
+    record Charging(boolean replays, boolean suggestions, boolean orProduct, boolean heatBounds) implements Route {
+        /** No heat bounds. */
+        public Charging(boolean replays, boolean suggestions, boolean orProduct) {
+            this(replays, suggestions, orProduct, false);
+        }
+
         /** Verdict, policy, certificate and figures; no replays, suggestions when not guaranteed, refuse if not applicable. */
         public static Charging defaults() {
             return new Charging(false, true, false);

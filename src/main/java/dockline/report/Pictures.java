@@ -15,7 +15,8 @@ public interface Pictures {
     /**
      * The map with the worst-case run (or the counterexample) of a one-trip mission.
      *
-     * @param plan a plan of the product route with replays and heat map
+     * @param plan a plan with replays and a heat map: the product route's, or on a large mission with lasting
+     *             closures the charging route's heat bounds ({@code dockline.plan.PictureRoute})
      */
     byte[] oneTrip(Plan plan) throws IOException;
 

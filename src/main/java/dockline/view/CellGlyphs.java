@@ -140,6 +140,23 @@ final class CellGlyphs {
         g.fillRect(x, y, s, s);
     }
 
+    /**
+     * A cell whose need is known only as a range: the colour of its upper bound (enough charge; none when no level
+     * is known to be enough, {@link ViewData#UNKNOWN}) and a light corner triangle with a dark edge, the key's
+     * "at most" mark.
+     */
+    static void paintHeatRange(GraphicsContext g, int upper, int lo, int hi, double x, double y, double s) {
+        if (upper != ViewData.UNKNOWN) {
+            paintHeatCell(g, upper, lo, hi, x, y, s);
+        }
+        double m = Math.max(3, s * 0.4);
+        g.setFill(Palette.IMPOSSIBLE_MARK);
+        g.fillPolygon(new double[] {x, x + m, x}, new double[] {y, y, y + m}, 3);
+        g.setStroke(Palette.IMPOSSIBLE);
+        g.setLineWidth(Math.max(1, s / 16));
+        g.strokeLine(x + m, y, x, y + m);
+    }
+
     /** A door: a bar across the cell between its two walls, with the frames at its ends. */
     static void paintDoor(GraphicsContext g, BuildingMap map, Cell c, double x, double y, double s) {
         boolean wallsLeftRight = !map.isFree(new Cell(c.x() - 1, c.y())) && !map.isFree(new Cell(c.x() + 1, c.y()));

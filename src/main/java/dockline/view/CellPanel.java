@@ -63,8 +63,14 @@ final class CellPanel {
             Mission m = data.mission();
             int k = choices.budget(0);
             int need = data.chargeNeeded(c.index(map.width()), k, choices.progressMask());
+            int atLeast = data.chargeNeededAtLeast(c.index(map.width()), k, choices.progressMask());
             sb.append("charge needed from here: ");
-            if (need == ViewData.IMPOSSIBLE) {
+            if (atLeast != need && atLeast >= 0) {
+                // known only as a range (the heat layer's note says why): never one number that is not known
+                sb.append(need >= 0 ? "between " + Units.both(m, atLeast) + " and " + Units.both(m, need)
+                        + " (enough: " + Units.both(m, need) + ")" : "at least " + Units.both(m, atLeast)
+                        + "; no level is known to be enough");
+            } else if (need == ViewData.IMPOSSIBLE) {
                 sb.append("impossible (no charge is enough)");
             } else if (need == ViewData.UNKNOWN) {
                 sb.append(data.solved() ? "not shown for this kind of mission" : "not known (check the mission first)");

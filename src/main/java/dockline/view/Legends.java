@@ -92,6 +92,31 @@ final class Legends {
      * in Wh and % of capacity, plus the impossible swatch.
      */
     static VBox heatKey(Mission m, int lo, int hi) {
+        return heatKey(m, lo, hi, null, false);
+    }
+
+    /**
+     * As {@link #heatKey(Mission, int, int)}; with a {@code note} (the heat layer is not exact everywhere,
+     * {@link ViewData#heatNote}) also the note, and with {@code ranged} the "at most" mark of a cell whose need
+     * is known only as a range.
+     */
+    static VBox heatKey(Mission m, int lo, int hi, String note, boolean ranged) {
+        VBox box = exactHeatKey(m, lo, hi);
+        if (ranged) {
+            box.getChildren().add(row(swatch(g2 -> CellGlyphs.paintHeatRange(g2, hi, lo, hi, 0, 0, SW)),
+                    "at most: the colour is enough charge (a sure upper bound); the need may be lower"));
+        }
+        if (note != null) {
+            Label words = new Label(note);
+            words.getStyleClass().add("legend-label");
+            words.setWrapText(true);
+            words.setId("heat-note");
+            box.getChildren().add(words);
+        }
+        return box;
+    }
+
+    private static VBox exactHeatKey(Mission m, int lo, int hi) {
         VBox box = new VBox(3);
         Label title = new Label("charge needed to finish safely");
         title.getStyleClass().add("legend-label");

@@ -32,9 +32,14 @@ import java.util.Objects;
  * @param step          its current step
  * @param hover         the cell under the pointer, or {@code null}
  * @param situation     what the policy layer was read for, or {@code null}
+ * @param heatRanged    per cell, whether its heat value is only an upper bound (the need lies in a range,
+ *                      {@link ViewData#chargeNeededAtLeast}), or {@code null} when every value is exact
+ * @param heatNote      what the heat layer claims when it is not exact everywhere ({@link ViewData#heatNote}), or
+ *                      {@code null}
  */
 record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int capacityUnits, int heatLow, int heatHigh,
-                 Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover, Situation situation) {
+                 Action[] policy, boolean[] policyVaries, ViewReplay replay, int step, Cell hover, Situation situation,
+                 boolean[] heatRanged, String heatNote) {
 
     /**
      * What the policy layer was read for, to say a cell's rule in words: the mission (for Wh), the
@@ -49,7 +54,7 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
 
     /** The plan alone (a map opened without a mission). */
     static MapLayers plain(BuildingMap map) {
-        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, null, 0, null, null);
+        return new MapLayers(map, null, Overlay.PLAIN, null, 0, 0, 1, null, null, null, 0, null, null, null, null);
     }
 
     /**
@@ -60,7 +65,7 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
                         Action[] policy, ViewReplay replay, int step) {
         int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
         return new MapLayers(map, start, overlay, heat == null ? null : heat.clone(), 0, heatLow, Math.max(heatLow + 1, heatHigh),
-                policy == null ? null : policy.clone(), null, replay, s, null, null);
+                policy == null ? null : policy.clone(), null, replay, s, null, null, null, null);
     }
 
     /**
@@ -78,16 +83,25 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
         int n = map.cellCount();
         int w = map.width();
         int[] heat = null;
+        boolean[] ranged = null;
+        String note = null;
         Action[] policy = null;
         boolean[] varies = null;
         int lo = data.mission().reserveUnits();
         int hi = lo + 1;
         if (overlay == Overlay.HEAT) {
             heat = new int[n];
+            note = data.heatNote();
             for (int i = 0; i < n; i++) {
-                heat[i] = map.isFree(Cell.ofIndex(i, w)) ? data.chargeNeeded(i, budgetLeft, progress) : ViewData.UNKNOWN;
+                boolean free = map.isFree(Cell.ofIndex(i, w));
+                heat[i] = free ? data.chargeNeeded(i, budgetLeft, progress) : ViewData.UNKNOWN;
                 if (heat[i] >= 0) {
                     hi = Math.max(hi, heat[i]);
+                }
+                // a need known only as a range: the colour is its upper bound (enough charge), marked as such
+                if (note != null && free && data.chargeNeededAtLeast(i, budgetLeft, progress) != heat[i]) {
+                    ranged = ranged == null ? new boolean[n] : ranged;
+                    ranged[i] = true;
                 }
             }
         }
@@ -115,7 +129,7 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
         }
         int s = replay == null ? 0 : Math.max(0, Math.min(step, replay.length()));
         return new MapLayers(map, data.mission().start(), overlay, heat, data.mission().capacityUnits(), lo, hi, policy,
-                varies, replay, s, null, situation);
+                varies, replay, s, null, situation, ranged, note);
     }
 
     /**
@@ -157,14 +171,14 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
     MapLayers withHover(Cell c) {
         return Objects.equals(c, hover) ? this
                 : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, step, c,
-                        situation);
+                        situation, heatRanged, heatNote);
     }
 
     MapLayers withStep(int s) {
         int clamped = replay == null ? 0 : Math.max(0, Math.min(s, replay.length()));
         return clamped == step ? this
                 : new MapLayers(map, start, overlay, heat, capacityUnits, heatLow, heatHigh, policy, policyVaries, replay, clamped,
-                        hover, situation);
+                        hover, situation, heatRanged, heatNote);
     }
 
     /**
@@ -174,7 +188,13 @@ record MapLayers(BuildingMap map, Cell start, Overlay overlay, int[] heat, int c
     boolean sameStaticAs(MapLayers o) {
         return o != null && map == o.map && Objects.equals(start, o.start)
                 && (heat == o.heat || Arrays.equals(heat, o.heat))
-                && (heat == null || heatLow == o.heatLow && heatHigh == o.heatHigh);
+                && (heat == null || heatLow == o.heatLow && heatHigh == o.heatHigh)
+                && Arrays.equals(heatRanged, o.heatRanged);
+    }
+
+    /** Whether the cell's heat value is only an upper bound of its need (see {@link #heatRanged}). */
+    boolean heatRanged(int cellIndex) {
+        return heatRanged != null && heatRanged[cellIndex];
     }
 
     /** Heat value of a cell (see {@link ViewData#chargeNeeded}); {@link ViewData#UNKNOWN} without a heat layer. */

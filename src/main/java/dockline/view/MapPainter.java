@@ -123,6 +123,10 @@ final class MapPainter {
             for (int y = y0; y <= y1; y++) {
                 for (int x = x0; x <= x1; x++) {
                     int hv = layers.heat(y * w + x);
+                    if (layers.heatRanged(y * w + x)) {
+                        CellGlyphs.paintHeatRange(g, hv, layers.heatLow(), layers.heatHigh(), ox + x * s, oy + y * s, s);
+                        continue;
+                    }
                     if (hv == ViewData.UNKNOWN) {
                         continue;
                     }

@@ -225,7 +225,7 @@ final class OverlayPanel {
         Overlay o = overlay();
         VBox key = new VBox(6);
         if (o == Overlay.HEAT) {
-            key.getChildren().add(Legends.heatKey(m, l.heatLow(), l.heatHigh()));
+            key.getChildren().add(Legends.heatKey(m, l.heatLow(), l.heatHigh(), l.heatNote(), l.heatRanged() != null));
         } else if (o == Overlay.POLICY) {
             key.getChildren().add(Legends.policyKey());
         }

@@ -164,7 +164,7 @@ public final class PictureRenderer {
         overlayWords.getStyleClass().add("legend-label");
         keys.getChildren().add(overlayWords);
         if (o.overlay() == Overlay.HEAT) {
-            keys.getChildren().add(Legends.heatKey(m, layers.heatLow(), layers.heatHigh()));
+            keys.getChildren().add(Legends.heatKey(m, layers.heatLow(), layers.heatHigh(), layers.heatNote(), layers.heatRanged() != null));
         } else if (o.overlay() == Overlay.POLICY) {
             keys.getChildren().add(Legends.policyKey());
         }

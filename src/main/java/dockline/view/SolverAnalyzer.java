@@ -10,10 +10,12 @@ import dockline.plan.Certification;
 import dockline.plan.MissionPlanner;
 import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
+import dockline.plan.PictureRoute;
 import dockline.plan.PlanReplays;
 import dockline.plan.PolicyChoice;
 import dockline.plan.Route;
 import dockline.replay.Replay;
+import dockline.solve.charging.NeedBounds;
 import dockline.solve.reserve.ChargeNeeded;
 import dockline.policy.Policy;
 import dockline.policy.PolicyEntry;
@@ -29,8 +31,9 @@ import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 
 /**
- * The real {@link Analyzer}: asks the core ({@link MissionPlanner#plan}, the product route with the
- * safest policy, its replays and heat map) and turns the {@link Plan} into the view's own
+ * The real {@link Analyzer}: asks the core ({@link MissionPlanner#plan} on the route of {@link PictureRoute}: the
+ * product route with the safest policy, its replays and heat map, or on a large mission with lasting closures the
+ * charging route phase by phase with its replays and heat bounds) and turns the {@link Plan} into the view's own
  * {@link ViewData}; it computes nothing itself. The cancellation flag goes down to every solve.
  */
 public final class SolverAnalyzer implements Analyzer {
@@ -64,8 +67,9 @@ public final class SolverAnalyzer implements Analyzer {
                 progress.phase(phase, percent);
             }
         })) {
-            plan = MissionPlanner.plan(mission, PlanOptions.of(new Route.Product(PolicyChoice.SAFEST, false, false,
-                    true, true)).withCancelled(cancelled));
+            // the product route with its exact heat map; a large mission with lasting closures phase by phase
+            plan = MissionPlanner.plan(mission, PlanOptions.of(PictureRoute.of(mission, new Route.Product(
+                    PolicyChoice.SAFEST, false, false, true, true))).withCancelled(cancelled));
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
@@ -76,7 +80,7 @@ public final class SolverAnalyzer implements Analyzer {
     }
 
     /**
-     * The view's data of a plan of the product route with replays and heat map (as {@link #analyze} makes):
+     * The view's data of a plan with replays and a heat map or heat bounds (as {@link #analyze} makes):
      * the worst case or counterexample, and the nominal run when there is a policy. Used by the report's pictures.
      */
     static ViewData of(Plan plan) {
@@ -180,7 +184,8 @@ public final class SolverAnalyzer implements Analyzer {
 
         private final PlanReplays replaysSource;
         private final Plan plan;
-        private final ChargeNeeded heat;
+        private final Optional<ChargeNeeded> heat;
+        private final Optional<NeedBounds> bounds;
         private final VerdictSummary verdict;
         private final List<ViewReplay> replays;
         private final Optional<Policy> policy;
@@ -190,7 +195,8 @@ public final class SolverAnalyzer implements Analyzer {
         SolvedData(Plan plan, VerdictSummary verdict, List<ViewReplay> replays) {
             this.replaysSource = plan.replays().orElseThrow();
             this.plan = plan;
-            this.heat = plan.heatMap().orElseThrow();
+            this.heat = plan.heatMap();
+            this.bounds = plan.heatBounds();
             this.verdict = verdict;
             this.replays = List.copyOf(replays);
             this.policy = replaysSource.policy();
@@ -247,11 +253,46 @@ public final class SolverAnalyzer implements Analyzer {
         @Override
         public int chargeNeeded(int cellIndex, int budgetLeft, int progressMask) {
             try {
-                int u = heat.unitsNeeded(cellIndex, budgetLeft, progressMask);
-                return u == ChargeNeeded.IMPOSSIBLE ? IMPOSSIBLE : u;
+                if (heat.isPresent()) {
+                    int u = heat.get().unitsNeeded(cellIndex, budgetLeft, progressMask);
+                    return u == ChargeNeeded.IMPOSSIBLE ? IMPOSSIBLE : u;
+                }
+                if (bounds.isEmpty()) {
+                    return UNKNOWN;
+                }
+                int u = bounds.get().atMostUnits(cellIndex, budgetLeft, progressMask);
+                return u == NeedBounds.IMPOSSIBLE ? IMPOSSIBLE : u == NeedBounds.UNBOUNDED ? UNKNOWN : u;
             } catch (IllegalArgumentException outOfRange) {
                 return UNKNOWN;
             }
+        }
+
+        @Override
+        public int chargeNeededAtLeast(int cellIndex, int budgetLeft, int progressMask) {
+            if (heat.isPresent() || bounds.isEmpty()) {
+                return chargeNeeded(cellIndex, budgetLeft, progressMask);
+            }
+            try {
+                int u = bounds.get().atLeastUnits(cellIndex, budgetLeft, progressMask);
+                return u == NeedBounds.IMPOSSIBLE ? IMPOSSIBLE : u;
+            } catch (IllegalArgumentException outOfRange) {
+                return UNKNOWN;
+            }
+        }
+
+        @Override
+        public String heatNote() {
+            if (heat.isPresent() || bounds.isPresent() && !bounds.get().restricted()) {
+                return null;
+            }
+            if (bounds.isEmpty()) {
+                return "No charge-needed map: this check did not compute one (the charging route did not apply).";
+            }
+            return "Charge needed with nothing closed yet, from the check by closure phases: an exact figure on every"
+                    + " cell would need the game with every door and zone the building may close, too large for a"
+                    + " quick answer here. Each coloured cell shows enough charge (a sure upper bound): exact where the"
+                    + " cell has no corner mark; a marked cell may need less (point at it for the range), and a marked"
+                    + " cell without colour has no level known to be enough.";
         }
 
         @Override

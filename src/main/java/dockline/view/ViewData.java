@@ -39,6 +39,23 @@ public interface ViewData {
         return UNKNOWN;
     }
 
+    /**
+     * The lower bound of the need where {@link #chargeNeeded} gives only an upper bound (enough charge, or
+     * {@link #UNKNOWN} when no level is known to be enough); equal to {@link #chargeNeeded} where that is exact,
+     * which is every position unless {@link #heatNote} says otherwise.
+     */
+    default int chargeNeededAtLeast(int cellIndex, int budgetLeft, int progressMask) {
+        return chargeNeeded(cellIndex, budgetLeft, progressMask);
+    }
+
+    /**
+     * What the charge-needed map claims, in a sentence, when it is not exact at every position (some needs are
+     * known only as a range) or there is none for a solved mission; {@code null} when it is exact.
+     */
+    default String heatNote() {
+        return null;
+    }
+
     /** The policy's action in that situation, if the policy has one; none for data without a policy. */
     default Optional<Action> policyAction(int cellIndex, int levelUnits, int budgetLeft, int progressMask) {
         return Optional.empty();

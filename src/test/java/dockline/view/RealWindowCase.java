@@ -23,6 +23,16 @@ abstract class RealWindowCase {
         window = FxTests.openReal(stage, width, height, mission);
     }
 
+    /**
+     * Opens a mission built in code (a generated one) in a window on {@code stage}, under the file name {@code name}
+     * (nothing is read: the source hands out {@code mission} for every path).
+     */
+    protected final void open(Stage stage, int width, int height, dockline.model.Mission mission, Path name) {
+        window = FxTests.show(stage, new MissionWindow(new SolverAnalyzer(), FxTests.always(mission), null), width,
+                height);
+        window.open(name);
+    }
+
     @AfterEach
     final void disposeWindow() throws Exception {
         FxTests.dispose(window);

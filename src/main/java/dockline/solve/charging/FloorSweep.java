@@ -114,14 +114,17 @@ public final class FloorSweep extends MinMaxSearch {
     /** The pass gives up once its highest floor cannot reach this (-1: never). */
     private final int giveUpBelow;
     private boolean gaveUp;
+    /** Whether the pass adds every dock good at the mission's floor and then stops ({@link #needsAtFloor}). */
+    private final boolean everyPosition;
 
     private FloorSweep(ChargingSolver solver, int capacity, int floor, int start, boolean leftOutWins,
-                       int giveUpBelow) {
+                       int giveUpBelow, boolean everyPosition) {
         super(solver.arena(), solver.goal(), solver.inverse());
         this.solver = solver;
         this.capacity = capacity;
         this.leftOutWins = leftOutWins;
         this.giveUpBelow = giveUpBelow;
+        this.everyPosition = everyPosition;
         int robotN = positions();
         this.pending = new boolean[robotN];
         this.good = new boolean[robotN];
@@ -153,7 +156,7 @@ public final class FloorSweep extends MinMaxSearch {
         if (floor < 0 || floor > capacity) {
             throw new IllegalArgumentException("reserve floor " + floor + " units is outside 0.." + capacity);
         }
-        return new FloorSweep(solver, capacity, floor, start, leftOutWins, -1);
+        return new FloorSweep(solver, capacity, floor, start, leftOutWins, -1, false);
     }
 
     /**
@@ -170,8 +173,26 @@ public final class FloorSweep extends MinMaxSearch {
             throw new IllegalArgumentException("reserve floor " + floor + " units outside 0.." + capacity
                     + " or a negative target floor " + atLeast);
         }
-        FloorSweep sweep = new FloorSweep(solver, capacity, floor, start, false, atLeast);
+        FloorSweep sweep = new FloorSweep(solver, capacity, floor, start, false, atLeast, false);
         return sweep.gaveUp ? Optional.empty() : Optional.of(sweep);
+    }
+
+    /**
+     * Every position's least charge above {@code floor}, exact everywhere (not only at the start): the pass runs
+     * until every dock good at that floor has been added (the next dock's key is below it), without the early
+     * stop once the start's need is 0 and without the docks of lower floors. With {@code leftOutWins} the
+     * strengthened game of a restricted arena (its needs are lower bounds of the mission's), else the weakened
+     * one (upper bounds); on a whole arena both are the mission's needs. Cost: one pass up to that floor.
+     *
+     * @throws IllegalArgumentException if the floor is negative or above the capacity
+     */
+    public static ChargingSolver.Values needsAtFloor(ChargingSolver solver, int capacity, int floor,
+                                                     boolean leftOutWins) {
+        if (floor < 0 || floor > capacity) {
+            throw new IllegalArgumentException("reserve floor " + floor + " units is outside 0.." + capacity);
+        }
+        FloorSweep sweep = new FloorSweep(solver, capacity, floor, capacity, leftOutWins, -1, true);
+        return sweep.values(sweep.result.floorBatches(), capacity - floor);
     }
 
     public Result result() {
@@ -204,7 +225,7 @@ public final class FloorSweep extends MinMaxSearch {
         long phi = Long.MAX_VALUE; // the last added dock's floor; "infinite" after batch 0
         while (true) {
             int sNeed = startP < 0 ? INF : need[startP];
-            if (floorBatches < 0 && sNeed == 0 && phi >= floor) {
+            if (!everyPosition && floorBatches < 0 && sNeed == 0 && phi >= floor) {
                 // the start's need cannot fall below 0, and every dock added so far is good at the floor: the
                 // need at the floor is known without adding the rest of the docks good there
                 floorNeed = 0;
@@ -227,7 +248,7 @@ public final class FloorSweep extends MinMaxSearch {
                 floorNeed = sNeed == INF || sNeed > capacity - floor ? INF : sNeed;
                 floorBatches = batchEnd.size();
             }
-            if (next < 0 || floorBatches >= 0 && key <= best) {
+            if (next < 0 || floorBatches >= 0 && (key <= best || everyPosition)) {
                 break;
             }
             phi = key;
