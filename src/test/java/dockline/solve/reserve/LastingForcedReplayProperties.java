@@ -47,8 +47,8 @@ import net.jqwik.api.statistics.Statistics;
  * <ul>
  *   <li>the whole arena (every closure phase compiled): the plan's threshold policy played there with the same
  *       forced events gives the same replay, step for step (cells, actions, events and closures, levels, budget,
- *       progress, explanation), or the same refusal in the same words, so the kept phases hid nothing from the
- *       forced run;</li>
+ *       progress, explanation), or the same refusal in the same words, and its closed loop has as many
+ *       situations (the certificate line of the text), so the kept phases hid nothing from the forced run;</li>
  *   <li>{@link LastingMoves}, the move generation written separately from the map records (own closure sets and
  *       counts, no arena compiler): every step of the replay is one of the building's answers to the robot's
  *       action there, so no step goes into a closure phase the restricted arena left out;</li>
@@ -105,6 +105,12 @@ class LastingForcedReplayProperties {
             int loopFloor = p.guaranteed() ? m.reserveUnits() : p.highestFloorUnits().getAsInt();
             String whole = outcome(() -> forcedOnWholeArena(full, detail.thresholds(), loopFloor, m, ev));
             assertThat(phased).as("the same policy's forced run on the whole arena\n%s", why).isEqualTo(whole);
+            // the text's "certified: ... situations" line: the same closed loop on both arenas
+            int situations = CertificateChecker.certify(CertificateChecker.closedLoop(full, detail.thresholds(),
+                    loopFloor, m.startUnits())).statesChecked();
+            if (p.certification() instanceof dockline.plan.Certification.Reserve c) {
+                assertThat(c.certificate().statesChecked()).as("situations checked\n%s", why).isEqualTo(situations);
+            }
         } else {
             assertThat(phased).as("no policy to run\n%s", why).startsWith("no policy to run");
         }
