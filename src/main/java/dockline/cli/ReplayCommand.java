@@ -38,6 +38,14 @@ import picocli.CommandLine.Mixin;
                 "4:internal error (e.g. the policy failed its certificate)"})
 public final class ReplayCommand extends MissionCommand {
 
+    /**
+     * Said when the fewest-moves policy is replayed on a mission with lasting closures: its attractor order is
+     * that of the whole closure arena, which the phases of the charging route do not reproduce.
+     */
+    static final String WHOLE_ARENA_NOTE = "note: --fewest-moves on a mission with lasting closures is solved on the"
+            + " whole closure arena (every set of closed doors and zones is built), which may be slow and need much"
+            + " memory; the default, the safest policy, is decided phase by phase";
+
     /** Which disturbance choices to replay. */
     enum Disturbance { nominal, worst }
 
@@ -94,14 +102,19 @@ public final class ReplayCommand extends MissionCommand {
             return RoundsReplayCommand.run(m, mission, force != null || disturbance == Disturbance.nominal,
                     policy.choice() == dockline.plan.PolicyChoice.SAFEST, json, csv, jsonFile, out, err);
         }
+        boolean lasting = m.map().disturbances().anyLasting();
+        boolean safest = policy.choice() == dockline.plan.PolicyChoice.SAFEST;
+        String wholeArenaNote = lasting && !safest ? WHOLE_ARENA_NOTE : null;
+        if (wholeArenaNote != null && json) {
+            err.println("dockline: " + wholeArenaNote); // the JSON has no place for notes; stdout stays one object
+        }
         Plan plan;
         try {
-            // with lasting closures the safest policy's worst case, counterexample and nominal run come from the
-            // charging route phase by phase (the whole closure arena is never built); forced events may close
-            // what those phases left out, so they keep the product route on the whole arena
-            boolean phased = forced.isEmpty() && policy.choice() == dockline.plan.PolicyChoice.SAFEST
-                    && m.map().disturbances().anyLasting();
-            Route route = phased ? new Route.Charging(true, false, true)
+            // with lasting closures the safest policy's replays (worst case, counterexample, nominal and forced
+            // events) come from the charging route phase by phase, so the whole closure arena is never built: the
+            // policy is certified on the kept phases, where a closure into a left-out phase loses, so no play of it
+            // (forced events included) can meet one, and it plays the same in the mission
+            Route route = lasting && safest ? new Route.Charging(true, false, true)
                     : new Route.Product(policy.choice(), false, false, true, false);
             plan = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
         } catch (RuntimeException | OutOfMemoryError e) {
@@ -139,7 +152,7 @@ public final class ReplayCommand extends MissionCommand {
         if (json) {
             out.println(jsonText);
         } else {
-            print(out, m, plan, mr, replay, what);
+            print(out, m, plan, mr, replay, what, wholeArenaNote);
         }
         return plan.guaranteed() ? ExitCodes.OK : ExitCodes.NOT_GUARANTEED;
     }
@@ -174,7 +187,8 @@ public final class ReplayCommand extends MissionCommand {
         return Json.withCaveats(o);
     }
 
-    private void print(PrintWriter out, Mission m, Plan plan, PlanReplays mr, Replay replay, String what) {
+    private void print(PrintWriter out, Mission m, Plan plan, PlanReplays mr, Replay replay, String what,
+                       String note) {
         out.println(mission.title(m) + ": " + (plan.guaranteed() ? "guaranteed" : "NOT guaranteed"));
         if (plan.certification() instanceof Certification.Reserve r) {
             Certificate c = r.certificate();
@@ -190,6 +204,9 @@ public final class ReplayCommand extends MissionCommand {
         if (!(m.objective() instanceof Objective.Reserve)) {
             out.println("note: this mission's objective is a discounted score; the replay follows the reserve objective"
                     + " (the floor and the tasks) only");
+        }
+        if (note != null) {
+            out.println(note);
         }
         out.println("replay: " + what + ", " + (replay.steps().size() - 1) + " steps, ends " + replay.ending().word());
         out.println();

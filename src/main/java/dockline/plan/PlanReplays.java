@@ -17,6 +17,12 @@ import java.util.Optional;
  * effort (the certified policy for the highest floor that can still be guaranteed from the start,
  * when there is one) and the solver's winning region (the counterexample stays outside it).
  *
+ * <p>On the restricted arena of a mission with lasting closures planned phase by phase ({@link LastingPhases}),
+ * the policy's closed loop was certified there, where an outcome into a left-out closure phase loses: so no
+ * outcome of the policy's choices leads into one, and every replay of the loop, forced events included (each
+ * picks one of those outcomes), is a run of the mission itself under that policy; a forced event the policy's
+ * run does not offer is refused as on the whole arena.
+ *
  * <p>Immutable; each replay is computed when asked, in O(closed loop) ({@link Replayer}).
  */
 public final class PlanReplays {
