@@ -168,7 +168,7 @@ class LastingChargingPlanProperties {
      * The least starting charge from which the brute force guarantees the mission at its floor (winning is
      * upward closed in the start: a higher level dominates), or empty when even a full battery is not enough.
      */
-    private static OptionalInt lowestStart(Mission m) {
+    static OptionalInt lowestStart(Mission m) {
         int floor = m.reserveUnits();
         int cap = m.capacityUnits();
         if (!winsFrom(m, cap)) {
