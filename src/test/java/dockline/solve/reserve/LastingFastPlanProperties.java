@@ -21,8 +21,6 @@ import dockline.solve.fast.FastPath;
 import dockline.solve.fast.MinChargeSolver;
 import java.util.Optional;
 import java.util.OptionalInt;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
@@ -46,9 +44,6 @@ import net.jqwik.api.statistics.Statistics;
  * A mission whose robot can charge before the end on the whole arena must not be taken by the fast path.
  */
 class LastingFastPlanProperties {
-
-    private static final Pattern PHASES = Pattern.compile("phase by phase: (\\d+) of (\\d+) disturbance states kept,"
-            + " in (\\d+) round");
 
     @Property(tries = 1000)
     void phasedFastPlan_matchesTheBruteForce_andTheWholeArena(@ForAll long seed) {
@@ -99,24 +94,9 @@ class LastingFastPlanProperties {
         Plan v = MissionPlanner.plan(m, PlanOptions.of(new Route.VerdictOnly(Route.VerdictOnly.Where.FAST)));
         assertThat(v.guaranteed()).as("the verdict alone\n%s", why).isEqualTo(guaranteed);
 
-        Matcher x = PHASES.matcher(String.join("\n", p.notes()));
-        boolean phased = x.find();
-        // every mission with something a lasting event closes is decided phase by phase, never handed back
-        assertThat(phased).as("phase by phase\n%s", why).isEqualTo(ArenaCompiler.states(m).itemCount() > 0);
-        assertThat(PHASES.matcher(String.join("\n", v.notes())).find()).as("the verdict phase by phase\n%s", why)
+        boolean phased = LastingMissions.phaseStatistics(m, p.notes(), guaranteed, why);
+        assertThat(LastingMissions.PHASES.matcher(String.join("\n", v.notes())).find()).as("the verdict phase by phase\n%s", why)
                 .isEqualTo(phased);
-        Statistics.label("phase by phase").collect(phased);
-        Statistics.label("refined (more than one round)").collect(phased && Integer.parseInt(x.group(3)) > 1);
-        Statistics.label("some phase left out").collect(phased && Integer.parseInt(x.group(1))
-                < Integer.parseInt(x.group(2)));
-        Statistics.label("guaranteed").collect(guaranteed);
-        Statistics.label("phase by phase").coverage(c -> c.check(true).percentage(q -> q >= 30));
-        Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(q -> q >= 3));
-        Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(q -> q >= 10));
-        Statistics.label("guaranteed").coverage(c -> {
-            c.check(true).percentage(q -> q >= 10);
-            c.check(false).percentage(q -> q >= 10);
-        });
     }
 
     /**
