@@ -23,8 +23,9 @@ import java.util.function.Consumer;
 /**
  * The benchmark's rows for lasting disturbances (issue 13): the reserve instance with its door-shut events
  * lasting (a shut door stays shut), solved on the whole arena ({@code lasting}) and phase by phase
- * ({@code lasting-phased}, {@link PhasedLastingSolver}), and {@code check} end to end on it ({@code lasting-check}:
- * {@link MissionPlanner#plan}, the charging route phase by phase), each against the momentary main route on the same
+ * ({@code lasting-phased}, {@link PhasedLastingSolver}), and {@code check} end to end on it and on the consumption
+ * instance ({@code lasting-check}: {@link MissionPlanner#plan}, the charging route or the fast path phase by phase),
+ * each against the momentary main route on the same
  * instance timed again back to back, so that the ratio is of one run. See DEVELOPERS.md, "Lasting doors".
  */
 final class LastingBench {
@@ -46,11 +47,14 @@ final class LastingBench {
             }
             phased(bench.instance(32, Benchmark.RESERVE), sampler, 1);
             check(bench.instance(32, Benchmark.RESERVE), sampler, 1);
+            check(bench.instance(32, Benchmark.CONSUMPTION), sampler, 1);
             for (int side : config.sizes()) {
                 Instance inst = bench.instance(side, Benchmark.RESERVE);
+                // the consumption instance (no charging before the end): check takes the fast path phase by phase
+                Instance consumption = bench.instance(side, Benchmark.CONSUMPTION);
                 for (BenchRow r : List.of(lasting(inst, sampler, config.reps()), phased(inst, sampler,
                         config.reps()), knownPhases(inst, sampler, config.reps()), check(inst, sampler,
-                        config.reps()))) {
+                        config.reps()), check(consumption, sampler, config.reps()))) {
                     rows.add(r);
                     progress.accept(r.compact());
                 }
@@ -202,9 +206,9 @@ final class LastingBench {
     /**
      * What {@code check} runs, end to end: {@link MissionPlanner#plan} with the mission's default options (the
      * compile, the route's solve, the certificate, the suggestions when not guaranteed) on the lasting instance,
-     * then on the momentary one back to back, so that the ratio is of one run. On the lasting instance the
-     * charging route decides phase by phase (its note, quoted in the row's, gives the disturbance states kept and
-     * the rounds).
+     * then on the momentary one back to back, so that the ratio is of one run. On the lasting reserve instance the
+     * charging route decides phase by phase, on the consumption instance (no charging before the end) the fast path
+     * (their note, quoted in the row's, gives the disturbance states kept and the rounds).
      */
     static BenchRow check(Instance inst, HeapSampler sampler, int reps) {
         Mission m = inst.mission();

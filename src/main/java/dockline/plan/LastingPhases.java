@@ -10,7 +10,6 @@ import dockline.solve.charging.ChargingRoute;
 import dockline.solve.charging.ChargingSolver;
 import dockline.solve.charging.FloorSweep;
 import dockline.solve.fast.MinChargeSolver;
-import dockline.solve.reserve.PhasedLastingSolver;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.function.BooleanSupplier;
@@ -77,10 +76,8 @@ final class LastingPhases {
 
         /** The note of the plan. */
         String note() {
-            return "lasting closures phase by phase: " + keptStates + " of " + totalStates + " disturbance states"
-                    + " kept, in " + rounds + " round" + (rounds == 1 ? "" : "s") + " (a closure into a left-out"
-                    + " phase counted as not the building's, until the policy's plays meet none; the figures checked"
-                    + " with such a closure lost)";
+            return PhaseRounds.note(keptStates, totalStates, rounds, "a closure into a left-out phase counted as not"
+                    + " the building's, until the policy's plays meet none; the figures checked with such a closure lost");
         }
     }
 
@@ -138,21 +135,15 @@ final class LastingPhases {
     /** The rounds; every pass polls {@code cancelled} (a {@code CancellationException} when it is raised). */
     private static Optional<Result> refine(Mission mission, DisturbanceStates st, GoalAutomaton goal,
                                            boolean fastFirst, boolean verdictOnly, BooleanSupplier cancelled) {
-        boolean[] keep = new boolean[st.count()];
-        for (int s = 0; s < st.count(); s++) {
-            keep[s] = st.closed(s).length == 0;
-        }
+        PhaseRounds rounds = new PhaseRounds(mission, st);
         int cap = mission.capacityUnits();
         int floor = mission.reserveUnits();
         int start = mission.startUnits();
-        long compileNanos = 0;
-        for (int round = 1; ; round++) {
-            long t0 = System.nanoTime();
-            Arena a = ArenaCompiler.compileWithin(mission, st, keep);
-            compileNanos += System.nanoTime() - t0;
+        while (true) {
+            Arena a = rounds.compile();
             // the restricted arena's plays are plays of the mission, so a charge it can reach before the end is
             // one the whole arena can reach: only when it finds none may the fast path apply
-            if (round == 1 && fastFirst && MinChargeSolver.applicable(a, goal)) {
+            if (rounds.round() == 1 && fastFirst && MinChargeSolver.applicable(a, goal)) {
                 return Optional.empty();
             }
             ChargingSolver solver;
@@ -162,15 +153,7 @@ final class LastingPhases {
                 return Optional.empty();
             }
             ChargingRoute.Analysis s = ChargingRoute.analyse(solver, cap, floor, start, true);
-            boolean[] add = new boolean[st.count()];
-            boolean[] met = new boolean[1];
-            java.util.function.IntConsumer mark = e -> {
-                met[0] = true;
-                int t = PhasedLastingSolver.leftOutState(a, st, e);
-                if (t >= 0) {
-                    add[t] = true;
-                }
-            };
+            java.util.function.IntConsumer mark = rounds::meet;
             // the strengthened policy's plays: where they meet no left-out closure, that policy wins the weakened
             // game too, so the weakened figure is the same; the weakened pass is run only once all of them agree
             OptionalInt hs = s.highestFloorUnits();
@@ -193,30 +176,24 @@ final class LastingPhases {
             // only while its highest floor can still reach the strengthened one (or the mission's floor, for the
             // verdict), which it often cannot, and then the phases met are added without finishing it
             ChargingRoute.Analysis w = null;
-            if (lost || verdictOnly && !met[0]) {
+            if (lost || verdictOnly && !rounds.met()) {
                 w = s; // nothing won, so nothing in the weakened game either; or the plays won it as they are
             } else if (verdictOnly || hs.isPresent()) {
                 long tw = System.nanoTime();
                 Optional<FloorSweep> ws = FloorSweep.runReaching(solver, cap, floor, start,
                         verdictOnly ? floor : hs.getAsInt());
                 w = ws.isPresent() ? ChargingRoute.of(ws.get(), tw) : null;
-            } else if (!met[0]) {
+            } else if (!rounds.met()) {
                 w = ChargingRoute.analyse(solver, cap, floor, start, false);
             }
             boolean agree = lost || w != null && (verdictOnly ? w.guaranteed()
                     : w.highestFloorUnits().equals(hs) && w.startNeed() == s.startNeed());
             if (agree) {
-                int kept = 0;
-                for (boolean k : keep) {
-                    kept += k ? 1 : 0;
-                }
-                return Optional.of(new Result(a, solver, w, s, round, kept, st.count(), compileNanos / 1_000_000));
+                return Optional.of(new Result(a, solver, w, s, rounds.round(), rounds.kept(), rounds.total(),
+                        rounds.compileMillis()));
             }
-            if (!met[0]) {
+            if (!rounds.met() || !rounds.refine()) {
                 return Optional.empty(); // not expected (class comment): the whole arena answers
-            }
-            if (!PhasedLastingSolver.addPhases(st, keep, add)) {
-                return Optional.empty();
             }
         }
     }

@@ -71,7 +71,7 @@ public final class MissionPlanner {
     }
 
     /** The shared inputs of one plan. */
-    private record Context(Mission mission, Arena arena, GoalAutomaton goal, PlanOptions options, long t0,
+    record Context(Mission mission, Arena arena, GoalAutomaton goal, PlanOptions options, long t0,
                            long compileMillis) {
         ProductOptions product() {
             return options.product();
@@ -96,7 +96,10 @@ public final class MissionPlanner {
      */
     public static Plan plan(Mission mission, PlanOptions options) {
         long t0 = System.nanoTime();
-        Optional<Plan> phased = phasedCharging(mission, options, t0);
+        Optional<Plan> phased = FastPlans.phased(mission, options, t0);
+        if (phased.isEmpty()) {
+            phased = phasedCharging(mission, options, t0);
+        }
         if (phased.isEmpty()) {
             phased = phasedMargins(mission, options, t0);
         }
@@ -111,8 +114,7 @@ public final class MissionPlanner {
             Optional<FastPath.Analysis> f = FastPath.analyse(mission, arena, goal, FastPath.DEFAULT_MAX_POLICY_ROWS,
                     false, options.memoryBudgetBytes());
             if (f.isPresent()) {
-                return fast(c, f.get(), "the robot cannot charge on a dock before the mission is complete, so the"
-                        + " battery levels need not be in the game");
+                return FastPlans.plan(c, f.get(), FastPlans.AUTO_REASON, null);
             }
             if (a.policy() == PolicyChoice.SAFEST) {
                 Optional<ChargingSolver> cs = chargingSolver(c);
@@ -143,7 +145,7 @@ public final class MissionPlanner {
         if (r instanceof Route.Fast f) {
             FastPath.Analysis a = FastPath.analyse(mission, arena, goal, f.maxPolicyRows(), false,
                             options.memoryBudgetBytes()).orElseThrow(MissionPlanner::fastDoesNotApply);
-            return fast(c, a, "the fast path was asked for, and it applies: the robot cannot charge before the end");
+            return FastPlans.plan(c, a, FastPlans.FAST_REASON, null);
         }
         if (r instanceof Route.Product p) {
             return product(c, p, "the product game was asked for");
@@ -163,46 +165,6 @@ public final class MissionPlanner {
     private static RouteNotApplicableException fastDoesNotApply() {
         return new RouteNotApplicableException("the fast path does not apply: the robot can charge on a dock before"
                 + " the mission is complete, and the fast path counts consumption only");
-    }
-
-    // ---- fast path
-
-    private static Plan fast(Context c, FastPath.Analysis a, String reason) {
-        Mission m = c.mission();
-        Certification cert;
-        if (a.policy().isPresent()) {
-            Certificate ct = CertificateChecker.check(c.arena(), a.policy().get(), a.reserveUnits(), a.startUnits());
-            int worst = a.worstCaseMinimumUnits().getAsInt();
-            Optional<String> problem = ct.ok() && ct.worstMinimumUnits() == worst ? Optional.empty()
-                    : Optional.of("the fast path says guaranteed with a worst level of " + worst + " units, but its"
-                    + " policy " + (ct.ok() ? "has a worst level of " + ct.worstMinimumUnits() + " units under"
-                    : "failed") + " the independent certificate: " + ct.reason());
-            cert = new Certification.Reserve(ct, problem);
-        } else if (a.guaranteed()) {
-            cert = new Certification.NotChecked("the closed loop is too large (" + (a.loopTooLarge() ? "more than "
-                    + a.maxPolicyRows() : Long.toString(a.loopStates())) + " states; the policy rows are written out"
-                    + " and re-checked up to " + a.maxPolicyRows() + ")");
-        } else {
-            cert = new Certification.NotChecked("not guaranteed: there is no policy to certify");
-        }
-        List<Suggestion> suggestions = List.of();
-        String suggestionsNote = null;
-        List<String> notes = new ArrayList<>();
-        if (!a.guaranteed()) {
-            try {
-                suggestions = Suggestions.find(m, c.product(), a.highestGuaranteedReserveUnits().isPresent()
-                        ? a.highestGuaranteedReserveUnits() : OptionalInt.of(-1));
-            } catch (ProductTooLargeException e) {
-                suggestionsNote = "no suggestions: they are searched on the product game, and " + e.getMessage();
-                notes.add(suggestionsNote);
-            }
-        }
-        return new Plan(m, new Objective.Reserve(), a.verdict(), Method.FAST, reason, a.policy(), null,
-                a.highestGuaranteedReserveUnits().orElse(a.reserveUnits()), cert, a.worstCaseMinimumUnits(),
-                Optional.empty(), a.highestGuaranteedReserveUnits(), true, OptionalInt.empty(), suggestions,
-                suggestionsNote, Optional.empty(), Optional.empty(),
-                new Plan.Size(a.pairVertices(), -1, a.exploredVertices(), null),
-                new Plan.Timings(c.compileMillis(), 0, a.solveMillis(), c.elapsed()), notes, new Plan.Detail.Fast(a));
     }
 
     // ---- charging route
@@ -360,15 +322,7 @@ public final class MissionPlanner {
             Optional<FastPath.Analysis> f = FastPath.analyse(m, c.arena(), c.goal(), FastPath.DEFAULT_MAX_POLICY_ROWS,
                     true, c.options().memoryBudgetBytes());
             if (f.isPresent()) {
-                FastPath.Analysis a = f.get();
-                return new Plan(m, new Objective.Reserve(), a.verdict(), Method.FAST, "only the verdict was asked"
-                        + " for, and the robot cannot charge before the end: the fast path stops once it is known",
-                        Optional.empty(), null, a.reserveUnits(), new Certification.NotChecked(
-                        "verdict only, not certified"), OptionalInt.empty(), Optional.empty(), OptionalInt.empty(),
-                        false, OptionalInt.empty(), List.of(), null, Optional.empty(), Optional.empty(),
-                        new Plan.Size(a.pairVertices(), -1, a.exploredVertices(), null),
-                        new Plan.Timings(c.compileMillis(), 0, a.solveMillis(), c.elapsed()), List.of(),
-                        new Plan.Detail.VerdictOnlyFast(a));
+                return FastPlans.verdictOnly(c, f.get(), List.of());
             }
             if (v.where() == Route.VerdictOnly.Where.FAST) {
                 throw fastDoesNotApply();

@@ -16,6 +16,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.function.IntConsumer;
 
 /**
  * The reserve question for missions without charging before the end, answered on arena × goal by
@@ -104,7 +105,7 @@ public final class FastPath {
     public static Optional<Analysis> analyse(Mission mission, int maxPolicyRows, boolean verdictOnly) {
         long t0 = System.nanoTime();
         return analyseTimed(mission, ArenaCompiler.compile(mission), GoalAutomaton.of(mission), maxPolicyRows,
-                verdictOnly, t0, 0);
+                verdictOnly, t0, 0, null);
     }
 
     /** As {@link #analyse(Mission, int, boolean)} on an arena and goal already compiled from the mission. */
@@ -121,7 +122,27 @@ public final class FastPath {
      */
     public static Optional<Analysis> analyse(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
                                              boolean verdictOnly, long memoryBudgetBytes) {
-        return analyseTimed(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime(), memoryBudgetBytes);
+        return analyseTimed(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime(), memoryBudgetBytes,
+                null);
+    }
+
+    /**
+     * The strengthened pass on an arena restricted to some closure phases
+     * ({@link ArenaCompiler#compileWithin}): as {@link #analyse(Mission, Arena, GoalAutomaton, int, boolean, long)}
+     * on the game in which an outcome into a left-out phase is not the building's to choose
+     * ({@link MinChargeSolver#MinChargeSolver(Arena, GoalAutomaton, boolean)}), so its need is a lower bound of
+     * the mission's and a start it cannot finish from is lost in the mission too. When the start's need is
+     * finite (for the verdict alone: when it is guaranteed) the closed loop of its policy from the start is
+     * walked, and every outcome into a left-out phase it meets is handed to {@code leftOutMet} (by arena edge).
+     * If it meets none, that policy plays in the mission as it is, and the figures and the policy are the
+     * mission's; if it meets one, the figures are bounds only and no policy is given (the rows are not built).
+     * Whether one was met is for the caller to count.
+     */
+    public static Optional<Analysis> analyseStrengthened(Mission mission, Arena arena, GoalAutomaton goal,
+                                                         int maxPolicyRows, boolean verdictOnly,
+                                                         long memoryBudgetBytes, IntConsumer leftOutMet) {
+        return analyseTimed(mission, arena, goal, maxPolicyRows, verdictOnly, System.nanoTime(), memoryBudgetBytes,
+                java.util.Objects.requireNonNull(leftOutMet));
     }
 
     /**
@@ -153,7 +174,8 @@ public final class FastPath {
     }
 
     private static Optional<Analysis> analyseTimed(Mission mission, Arena arena, GoalAutomaton goal, int maxPolicyRows,
-                                                   boolean verdictOnly, long t0, long memoryBudgetBytes) {
+                                                   boolean verdictOnly, long t0, long memoryBudgetBytes,
+                                                   IntConsumer leftOutMet) {
         long budget = ProductOptions.budgetInForce(memoryBudgetBytes);
         long pairs = SizeEstimate.satMul(arena.vertexCount(), goal.stateCount());
         if (MinChargeSolver.canCharge(arena) && (SizeEstimate.satMul(pairs, 5) > budget
@@ -169,9 +191,13 @@ public final class FastPath {
         int s = mission.startUnits();
         int f = mission.reserveUnits();
         int cap = mission.capacityUnits();
-        MinChargeSolver solver = new MinChargeSolver(arena, goal);
+        MinChargeSolver solver = new MinChargeSolver(arena, goal, leftOutMet != null);
         if (verdictOnly) {
-            MinChargeSolver.Result r = solver.decide();
+            MinChargeSolver.Values vs = solver.decideValues();
+            MinChargeSolver.Result r = vs.result();
+            if (leftOutMet != null && r.guaranteed()) {
+                meetsLeftOut(arena, goal, vs, leftOutMet);
+            }
             long ms = (System.nanoTime() - t0) / 1_000_000L;
             return Optional.of(new Analysis(mission, arena, Verdict.of(r.guaranteed()), s, f, cap, r.startNeed(),
                     OptionalInt.empty(), OptionalInt.empty(), Optional.empty(), 0, false, maxPolicyRows,
@@ -187,7 +213,9 @@ public final class FastPath {
         Optional<Policy> policy = Optional.empty();
         long states = 0;
         boolean tooLarge = false;
-        if (r.guaranteed()) {
+        boolean bounds = leftOutMet != null && need != MinChargeSolver.INFINITE
+                && meetsLeftOut(arena, goal, values, leftOutMet);
+        if (r.guaranteed() && !bounds) {
             worst = OptionalInt.of(s - need);
             Rows rows = rows(arena, goal, values, s, maxPolicyRows);
             states = rows.states;
@@ -200,6 +228,25 @@ public final class FastPath {
         return Optional.of(new Analysis(mission, arena, Verdict.of(r.guaranteed()), s, f, cap, need, highest, worst,
                 policy, states, tooLarge, maxPolicyRows, r.explored(), r.productVertices(), false,
                 (solved - t0) / 1_000_000L, (t1 - t0) / 1_000_000L));
+    }
+
+    /**
+     * Whether the closed loop of the chosen actions from the start meets an outcome into a left-out phase; each
+     * one met is handed to {@code leftOutMet}. The start's need must be finite.
+     */
+    private static boolean meetsLeftOut(Arena arena, GoalAutomaton goal, MinChargeSolver.Values values,
+                                        IntConsumer leftOutMet) {
+        int a0 = arena.startVertex();
+        int g0 = goal.initial(arena.cellZones(arena.cell(a0)));
+        if (g0 == GoalAutomaton.REJECT || goal.accepting(g0, arena.isDock(arena.cell(a0)))) {
+            return false; // complete at the start: no loop
+        }
+        boolean[] met = new boolean[1];
+        pairLoop(arena, goal, values, a0, g0, Integer.MAX_VALUE, e -> {
+            met[0] = true;
+            leftOutMet.accept(e);
+        });
+        return met[0];
     }
 
     /** The rows (null when over the bound) and the robot situations met. */
@@ -231,26 +278,10 @@ public final class FastPath {
         }
         chosenAction(arena, values, a0, g0); // the invariant at the start (a start that is not guaranteed fails it)
         // 1. the pairs (robot vertex, goal state) of the loop, without levels: a lower bound of its situations
-        VisitQueue pairs = new VisitQueue(Math.multiplyExact(arena.robotCount(), gc));
-        pairs.visit(a0 * gc + g0);
-        while (pairs.hasNext()) {
-            int p = pairs.next();
-            int v = p / gc;
-            int g = p - v * gc;
-            int d = chosenAction(arena, values, v, g);
-            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
-                int r = arena.target(e);
-                int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
-                if (g2 == GoalAutomaton.REJECT) {
-                    throw brokenLoop(v, g, "an outcome of its chosen action enters an avoided zone");
-                }
-                if (!goal.accepting(g2, arena.isDock(arena.cell(r))) && pairs.visit(r * gc + g2)
-                        && pairs.visited() > max) {
-                    return new Rows(null, pairs.visited());
-                }
-            }
+        int pairs = pairLoop(arena, goal, values, a0, g0, max, null);
+        if (pairs > max) {
+            return new Rows(null, pairs);
         }
-        pairs = null;
         // 2. the situations (pair, level); level = s − spent, packed as pair · (s + 1) + level
         long span = (long) s + 1;
         LongSet seen = new LongSet();
@@ -292,6 +323,44 @@ public final class FastPath {
             }
         }
         return new Rows(entries, tail);
+    }
+
+    /**
+     * Walks the pairs (robot vertex, goal state) of the closed loop of the chosen actions from the start pair
+     * (a0, g0), which must not be complete, without levels (the choices do not depend on them), and stops once
+     * more than {@code max} are met. With {@code leftOut} (on a restricted arena) an outcome into a left-out
+     * closure phase ({@link ArenaCompiler#LEFT_OUT}) is handed to it by edge and not followed; without it every
+     * outcome is followed. O(pairs of the loop × out-degree).
+     *
+     * @return the pairs met (more than {@code max}: the walk stopped there)
+     */
+    static int pairLoop(Arena arena, GoalAutomaton goal, MinChargeSolver.Values values, int a0, int g0, int max,
+                        IntConsumer leftOut) {
+        int gc = goal.stateCount();
+        VisitQueue pairs = new VisitQueue(Math.multiplyExact(arena.robotCount(), gc));
+        pairs.visit(a0 * gc + g0);
+        while (pairs.hasNext()) {
+            int p = pairs.next();
+            int v = p / gc;
+            int g = p - v * gc;
+            int d = chosenAction(arena, values, v, g);
+            for (int e = arena.outBegin(d); e < arena.outEnd(d); e++) {
+                if (leftOut != null && arena.weight(e) == ArenaCompiler.LEFT_OUT) {
+                    leftOut.accept(e);
+                    continue;
+                }
+                int r = arena.target(e);
+                int g2 = goal.step(g, arena.cellZones(arena.cell(r)));
+                if (g2 == GoalAutomaton.REJECT) {
+                    throw brokenLoop(v, g, "an outcome of its chosen action enters an avoided zone");
+                }
+                if (!goal.accepting(g2, arena.isDock(arena.cell(r))) && pairs.visit(r * gc + g2)
+                        && pairs.visited() > max) {
+                    return pairs.visited();
+                }
+            }
+        }
+        return pairs.visited();
     }
 
     /**

@@ -64,6 +64,7 @@ public final class MinChargeSolver {
     private final int startGoal;
     private final int available;
     private final GoalPredecessors inverse;
+    private final boolean strengthened;
 
     /**
      * The outcome of a run.
@@ -89,6 +90,21 @@ public final class MinChargeSolver {
      *                                  or arena × goal has more than {@code Integer.MAX_VALUE} vertices
      */
     public MinChargeSolver(Arena arena, GoalAutomaton goal) {
+        this(arena, goal, false);
+    }
+
+    /**
+     * The solver of the weakened ({@code strengthened} false) or the strengthened game of an arena restricted to
+     * some closure phases ({@link dockline.arena.ArenaCompiler#compileWithin}); on a whole arena, which has no
+     * left-out outcome, both are the mission's. Weakened: an outcome into a left-out phase loses, so every need is
+     * an upper bound of the mission's. Strengthened: such an outcome is not the building's to choose (it is left
+     * out of the disturbance position's maximum; every action keeps its nominal outcome), so every need is a lower
+     * bound, and a start it cannot finish from is lost in the mission too.
+     *
+     * @throws IllegalArgumentException as {@link #MinChargeSolver(Arena, GoalAutomaton)}
+     */
+    public MinChargeSolver(Arena arena, GoalAutomaton goal, boolean strengthened) {
+        this.strengthened = strengthened;
         if (!applicable(arena, goal)) {
             throw new IllegalArgumentException("the robot can charge before the mission is complete:"
                     + " the minimum-charge fast path does not apply; use the product solver");
@@ -168,7 +184,15 @@ public final class MinChargeSolver {
 
     /** The start verdict, stopping as soon as it is known (see the class comment). */
     public Result decide() {
-        return run(Mode.DECIDE).result;
+        return decideValues().result;
+    }
+
+    /**
+     * As {@link #decide()}, with the values and choices found so far: when the start is guaranteed, those of the
+     * closed loop of the chosen actions from it are final (as for {@link #solveStart()}).
+     */
+    public Values decideValues() {
+        return run(Mode.DECIDE);
     }
 
     /**
@@ -239,7 +263,7 @@ public final class MinChargeSolver {
         final boolean stopEarly = mode == Mode.DECIDE;
         final boolean stopAtStart = mode != Mode.ALL;
         final int gc = goalCount;
-        final MinMaxSearch.Counting search = new MinMaxSearch.Counting(arena, goal, inverse);
+        final MinMaxSearch.Counting search = new MinMaxSearch.Counting(arena, goal, inverse, strengthened);
         final int robotN = search.positions();
 
         int startP = startGoal == GoalAutomaton.REJECT ? -1 : arena.startVertex() * gc + startGoal;

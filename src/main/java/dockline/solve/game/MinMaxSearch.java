@@ -1,6 +1,7 @@
 package dockline.solve.game;
 
 import dockline.arena.Arena;
+import dockline.arena.ArenaCompiler;
 import dockline.goal.GoalAutomaton;
 import dockline.util.PackedMinHeap;
 import dockline.util.Progress;
@@ -109,8 +110,14 @@ public abstract class MinMaxSearch {
                 if (w > 0) {
                     continue; // a charge step: the route's business (class comment)
                 }
-                int d = arena.source(e);
                 long cost = (long) x - w;
+                if (w == ArenaCompiler.LEFT_OUT) {
+                    if (skipsLeftOut()) {
+                        continue; // counted as settled from the start (Counting's strengthened game)
+                    }
+                    cost = INFINITE; // a closure into a left-out phase loses (the weakened game)
+                }
+                int d = arena.source(e);
                 int dIdx = (d - rc) * gc;
                 for (int j = gFrom; j < gTo; j++) {
                     int g = inverse.state(j);
@@ -119,6 +126,15 @@ public abstract class MinMaxSearch {
             }
         }
         return settled;
+    }
+
+    /**
+     * Whether an outcome into a left-out closure phase ({@link ArenaCompiler#LEFT_OUT}, on a restricted arena) is
+     * left out of the disturbance positions' maximum, i.e. never handed to {@link #relax}; when false it is handed
+     * on as {@link #INFINITE} (lost).
+     */
+    protected boolean skipsLeftOut() {
+        return false;
     }
 
     /**
@@ -193,13 +209,47 @@ public abstract class MinMaxSearch {
         private final boolean[] done;
         private int cap = INFINITE;
 
+        private final boolean leftOutSkipped;
+
         public Counting(Arena arena, GoalAutomaton goal, GoalPredecessors inverse) {
+            this(arena, goal, inverse, false);
+        }
+
+        /**
+         * @param leftOutSkipped the strengthened game of a restricted arena: an outcome into a left-out closure
+         *                       phase is not the building's to choose, so it is counted as settled before the search
+         *                       and never enters the maximum (false: it is lost, as {@link #INFINITE})
+         */
+        public Counting(Arena arena, GoalAutomaton goal, GoalPredecessors inverse, boolean leftOutSkipped) {
             super(arena, goal, inverse);
             int distN = Math.multiplyExact(arena.vertexCount() - rc, gc);
             this.distMax = new int[distN];
             this.processed = new byte[distN];
             this.done = new boolean[need.length];
+            this.leftOutSkipped = leftOutSkipped;
             Arrays.fill(need, INFINITE);
+            countLeftOut();
+        }
+
+        @Override
+        protected boolean skipsLeftOut() {
+            return leftOutSkipped;
+        }
+
+        /** In the strengthened game, the left-out outcomes of every disturbance position count as settled. */
+        private void countLeftOut() {
+            if (!leftOutSkipped) {
+                return;
+            }
+            for (int d = rc; d < arena.vertexCount(); d++) {
+                int n = 0;
+                for (int f = arena.outBegin(d); f < arena.outEnd(d); f++) {
+                    n += arena.weight(f) == ArenaCompiler.LEFT_OUT ? 1 : 0;
+                }
+                if (n > 0) {
+                    Arrays.fill(processed, (d - rc) * gc, (d - rc + 1) * gc, (byte) n);
+                }
+            }
         }
 
         /** Forgets every value, choice and count (for another round with other targets). */
@@ -209,6 +259,7 @@ public abstract class MinMaxSearch {
             Arrays.fill(processed, (byte) 0);
             Arrays.fill(done, false);
             Arrays.fill(choice, (byte) 0);
+            countLeftOut();
         }
 
         /** Makes robot position p a target: value 0, queued. */

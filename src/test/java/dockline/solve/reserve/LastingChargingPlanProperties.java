@@ -19,8 +19,6 @@ import dockline.solve.charging.ChargingRoute;
 import dockline.solve.charging.ChargingSolver;
 import dockline.solve.charging.FloorSweep;
 import java.util.OptionalInt;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.statistics.Statistics;
@@ -44,9 +42,6 @@ import net.jqwik.api.statistics.Statistics;
  * </ul>
  */
 class LastingChargingPlanProperties {
-
-    private static final Pattern PHASES = Pattern.compile("phase by phase: (\\d+) of (\\d+) disturbance states kept,"
-            + " in (\\d+) round");
 
     @Property(tries = 1000)
     void phasedChargingPlan_matchesTheBruteForce_andTheWholeArena(@ForAll long seed) {
@@ -84,22 +79,7 @@ class LastingChargingPlanProperties {
                     .isGreaterThan(-10 * m.capacityUnits() - 100);
         }
 
-        Matcher x = PHASES.matcher(String.join("\n", p.notes()));
-        boolean phased = x.find();
-        // every mission with something a lasting event closes is decided phase by phase, never handed back
-        assertThat(phased).as("phase by phase\n%s", why).isEqualTo(ArenaCompiler.states(m).itemCount() > 0);
-        Statistics.label("phase by phase").collect(phased);
-        Statistics.label("refined (more than one round)").collect(phased && Integer.parseInt(x.group(3)) > 1);
-        Statistics.label("some phase left out").collect(phased && Integer.parseInt(x.group(1))
-                < Integer.parseInt(x.group(2)));
-        Statistics.label("guaranteed").collect(guaranteed);
-        Statistics.label("phase by phase").coverage(c -> c.check(true).percentage(q -> q >= 30));
-        Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(q -> q >= 5));
-        Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(q -> q >= 10));
-        Statistics.label("guaranteed").coverage(c -> {
-            c.check(true).percentage(q -> q >= 10);
-            c.check(false).percentage(q -> q >= 10);
-        });
+        LastingMissions.phaseStatistics(m, p.notes(), guaranteed, why);
     }
 
     /**
@@ -119,7 +99,7 @@ class LastingChargingPlanProperties {
         assertThat(p.highestFloorUnits()).as("highest floor against the brute force\n%s", why)
                 .isEqualTo(highest >= 0 ? OptionalInt.of(highest) : OptionalInt.empty());
         assertThat(p.lowestStartUnits()).as("lowest start against the brute force\n%s", why).isEqualTo(lowestStart(m));
-        boolean phased = PHASES.matcher(String.join("\n", p.notes())).find();
+        boolean phased = LastingMissions.PHASES.matcher(String.join("\n", p.notes())).find();
         assertThat(phased).as("phase by phase\n%s", why).isEqualTo(ArenaCompiler.states(m).itemCount() > 0
                 && m.reserveUnits() <= m.capacityUnits());
         Statistics.label("phase by phase").collect(phased);
@@ -167,8 +147,8 @@ class LastingChargingPlanProperties {
     /**
      * The least starting charge from which the brute force guarantees the mission at its floor (winning is
      * upward closed in the start: a higher level dominates), or empty when even a full battery is not enough.
+     * Shared with HeatBoundsProperties and the fast path's properties.
      */
-    /** The least start the brute force guarantees (bisection over the start), or empty; shared with HeatBoundsProperties. */
     static OptionalInt lowestStart(Mission m) {
         int floor = m.reserveUnits();
         int cap = m.capacityUnits();

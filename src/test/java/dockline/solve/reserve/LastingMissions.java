@@ -1,6 +1,7 @@
 package dockline.solve.reserve;
 
 import static dockline.fixtures.RandomMissions.pick;
+import static org.assertj.core.api.Assertions.assertThat;
 
 import dockline.fixtures.RandomMissions;
 import dockline.fixtures.TinyMission;
@@ -14,6 +15,9 @@ import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import net.jqwik.api.statistics.Statistics;
 
 /**
  * Random tiny missions with doors and blockages, each lasting or momentary at random, optional
@@ -90,6 +94,34 @@ public final class LastingMissions {
             rules.add(x);
         }
         return withRules(base, rules);
+    }
+
+    /** The phases' note of a plan: states kept, states in all, rounds. */
+    static final Pattern PHASES = Pattern.compile("phase by phase: (\\d+) of (\\d+) disturbance states kept,"
+            + " in (\\d+) round");
+
+    /**
+     * Checks that a plan of a mission with something a lasting event closes was decided phase by phase (its
+     * note), never handed back to the whole arena, and collects how often it was, was refined, left a phase out
+     * and was guaranteed, with their coverage checks; whether the plan was phase by phase.
+     */
+    static boolean phaseStatistics(Mission m, List<String> notes, boolean guaranteed, String why) {
+        Matcher x = PHASES.matcher(String.join("\n", notes));
+        boolean phased = x.find();
+        assertThat(phased).as("phase by phase\n%s", why).isEqualTo(dockline.arena.ArenaCompiler.states(m).itemCount() > 0);
+        Statistics.label("phase by phase").collect(phased);
+        Statistics.label("refined (more than one round)").collect(phased && Integer.parseInt(x.group(3)) > 1);
+        Statistics.label("some phase left out").collect(phased && Integer.parseInt(x.group(1))
+                < Integer.parseInt(x.group(2)));
+        Statistics.label("guaranteed").collect(guaranteed);
+        Statistics.label("phase by phase").coverage(c -> c.check(true).percentage(q -> q >= 30));
+        Statistics.label("refined (more than one round)").coverage(c -> c.check(true).percentage(q -> q >= 5));
+        Statistics.label("some phase left out").coverage(c -> c.check(true).percentage(q -> q >= 10));
+        Statistics.label("guaranteed").coverage(c -> {
+            c.check(true).percentage(q -> q >= 10);
+            c.check(false).percentage(q -> q >= 10);
+        });
+        return phased;
     }
 
     /** The base phase of a restricted arena: the disturbance states with nothing closed. */
