@@ -179,6 +179,11 @@ final class CheckReport {
         if (p.suggestionsNote() != null) {
             out.println("  Note: " + p.suggestionsNote());
         }
+        for (String note : p.notes()) {
+            if (!note.equals(p.suggestionsNote())) {
+                out.println("  Note: " + note);
+            }
+        }
         out.println(Caveats.block());
     }
 

@@ -95,6 +95,9 @@ class CheckCommandTest {
         assertThat(j.get("lowestLevelUnits").isNull()).isTrue();
         CliRun human = run("check", "missions/late-return.yaml");
         assertThat(human.out()).startsWith("NOT GUARANTEED: ").contains("none (there is no safe policy)");
+        // the fast path phase by phase says in the text, as in the JSON, how many closure phases it kept
+        assertThat(human.out()).contains("  Note: lasting closures phase by phase: ");
+        assertThat(j.get("notes").toString()).contains("lasting closures phase by phase: ");
     }
 
     @Test
