@@ -190,6 +190,10 @@ public final class Replayer {
         }
         Cell target = arena.action(d).target();
         if (matching.isEmpty()) {
+            String limit = limitReason(arena, f.kind(), loop.cell(node), target);
+            if (limit != null) {
+                throw new ForcedEventException(at + where + ", and " + limit);
+            }
             String why = switch (f.kind()) {
                 case DOOR_SHUT -> target + " is not a door that may shut";
                 case BLOCKAGE -> target + " is not in a blockage zone";
@@ -219,6 +223,32 @@ public final class Replayer {
         }
         throw new ForcedEventException(at + where + ", and a slip cannot end in " + f.cell() + "; it can end in "
                 + String.join(", ", cells));
+    }
+
+    /**
+     * Why an event of a kind some rule places at this move does not happen, when every such rule has an
+     * {@code at-most} limit of its own (a limit of 0, or one the run has used up); null when a rule without a
+     * limit covers the move or none covers it (the caller then says that the place takes no such event).
+     */
+    private static String limitReason(Arena arena, EventKind kind, Cell from, Cell target) {
+        List<String> limits = new ArrayList<>();
+        for (EventRule rule : arena.mission().map().disturbances().rules()) {
+            boolean covers = rule.covers(target) || kind == EventKind.SLIP && rule.covers(from);
+            if (rule.kind() != kind || !covers) {
+                continue;
+            }
+            if (!rule.limited()) {
+                return null;
+            }
+            limits.add((rule.label() == null || rule.label().isBlank() ? kind.word() : rule.label())
+                    + " (at-most: " + rule.atMost() + ")");
+        }
+        if (limits.isEmpty()) {
+            return null;
+        }
+        return target + " takes " + kind.word() + " events only under " + String.join(", ", limits)
+                + ", and " + (limits.size() == 1 ? "that limit allows" : "those limits allow")
+                + " no more of them at this step (a limit of 0 allows none; else the run's earlier events used it up)";
     }
 
     /**

@@ -79,6 +79,34 @@ class ReplayerTest {
                 .hasMessageContaining("no disturbance budget is left");
     }
 
+    /**
+     * A blockage the map limits with {@code at-most} is refused by naming the limit, not by saying the place takes no
+     * blockage (it does): at-most 0 allows none; at-most 1 allows one, so a second forced one is refused too.
+     */
+    @Test
+    void forced_blockageOverItsLimit_namesTheLimit() throws Exception {
+        for (int limit : new int[] {0, 1}) {
+            Mission plain = TinyMission.plan("...D").costs(1, 1, 1, 0).capacity(30).start("0:0", 20).budget(2)
+                    .rule(EventKind.BLOCKAGE, "carts", "1:0").build();
+            List<dockline.model.EventRule> limited = List.of(plain.map().disturbances().rules().get(0)
+                    .withAtMost(limit, -1));
+            Mission m = new Mission(plain.name(), plain.source(), plain.map().withDisturbances(
+                    new dockline.model.DisturbanceModel(2, limited)), plain.robot(), plain.start(), plain.startCharge(),
+                    plain.reserve(), plain.tasks(), plain.objective());
+            ClosedLoop l = loop(m);
+            String forced = limit == 0 ? "1:blockage" : "1:blockage,2:blockage";
+            assertThatThrownBy(() -> Replayer.forced(l, ForcedEvent.parseList(forced)))
+                    .isInstanceOf(ForcedEventException.class)
+                    .hasMessageContaining("1:0 takes blockage events only under carts (at-most: " + limit + ")")
+                    .hasMessageContaining("no more of them at this step")
+                    .hasMessageNotContaining("not in a blockage zone");
+            if (limit == 1) {
+                assertThat(Replayer.forced(l, ForcedEvent.parseList("1:blockage")).steps().get(1).event().kind())
+                        .isEqualTo(EventKind.BLOCKAGE);
+            }
+        }
+    }
+
     /** A slip beside the target may end in two cells: the user must name one. */
     @Test
     void forced_slip_needsACellWhenThereAreTwo() throws Exception {
