@@ -25,10 +25,32 @@ package dockline.bench;
  * @param forecastVertices the product size forecast before the build by {@code ReserveSizeForecast},
  *                    or -1 when there is none
  * @param note        why a method was skipped, or a remark (e.g. how much the early exit explored)
+ * @param momentaryCpuMillis for a row of lasting disturbances ({@link LastingBench}): the CPU time of the momentary
+ *                    counterpart on the same instance, timed back to back with it in the same run (the ratio of the
+ *                    issue's target is {@link #overMomentary()}); -1 for every other row
  */
 public record BenchRow(int size, String instance, String method, long vertices, long edges, double buildMillis,
                        double solveMillis, double solveCpuMillis, long peakBytes, String verdict, double wallMillis, long estimatedVertices,
-                       long forecastVertices, String note) {
+                       long forecastVertices, String note, double momentaryCpuMillis) {
+
+    /** A row without a momentary counterpart. */
+    public BenchRow(int size, String instance, String method, long vertices, long edges, double buildMillis,
+                    double solveMillis, double solveCpuMillis, long peakBytes, String verdict, double wallMillis,
+                    long estimatedVertices, long forecastVertices, String note) {
+        this(size, instance, method, vertices, edges, buildMillis, solveMillis, solveCpuMillis, peakBytes, verdict,
+                wallMillis, estimatedVertices, forecastVertices, note, -1);
+    }
+
+    /** The same row with its momentary counterpart's CPU time (a lasting row). */
+    BenchRow withMomentary(double cpuMillis) {
+        return new BenchRow(size, instance, method, vertices, edges, buildMillis, solveMillis, solveCpuMillis, peakBytes,
+                verdict, wallMillis, estimatedVertices, forecastVertices, note, cpuMillis);
+    }
+
+    /** A lasting row's CPU time over its momentary counterpart's, both of one run; NaN for other rows. */
+    public double overMomentary() {
+        return ran() && momentaryCpuMillis > 0 && solveCpuMillis >= 0 ? solveCpuMillis / momentaryCpuMillis : Double.NaN;
+    }
 
     /** Whether the method ran (rather than being skipped). */
     public boolean ran() {

@@ -225,10 +225,12 @@ public final class Benchmark {
                 if (!warmup) {
                     rows.add(LastingBench.lasting(inst, sampler, reps));
                 }
+                rows.addAll(LastingBench.inTable(inst, sampler, reps));
             }
             case CONSUMPTION -> {
                 rows.add(fast(inst, sampler, reps));
                 rows.add(fastCheck(inst, sampler, reps));
+                rows.addAll(LastingBench.inTable(inst, sampler, reps));
                 if (products) {
                     rows.addAll(csrMethods(inst, sampler, reps, warmup));
                     rows.addAll(implicitMethods(inst, sampler, reps));

@@ -63,6 +63,31 @@ final class LastingBench {
         return rows;
     }
 
+    /** Largest side on which the table's run ({@link #inTable}) times the phase-by-phase lasting rows. */
+    static final int TABLE_MAX_SIDE = 128;
+
+    /**
+     * The phase-by-phase lasting rows of the table's run: on the reserve instance {@code lasting-phased} (the product
+     * route) and {@code lasting-check} (what {@code check} runs: the charging route), on the consumption instance
+     * {@code lasting-check} (the fast path), each with its momentary counterpart timed back to back; skipped above
+     * {@link #TABLE_MAX_SIDE} ({@code bench --lasting-row --sizes} runs them on any side).
+     */
+    static List<BenchRow> inTable(Instance inst, HeapSampler sampler, int reps) {
+        boolean reserve = inst.kind().equals(Benchmark.RESERVE);
+        if (inst.side() > TABLE_MAX_SIDE) {
+            String why = "skipped: the table's run times the lasting rows up to " + TABLE_MAX_SIDE + "x"
+                    + TABLE_MAX_SIDE + " (bench --lasting-row --sizes " + inst.side() + " runs them here)";
+            List<BenchRow> out = new ArrayList<>();
+            if (reserve) {
+                out.add(BenchRow.skipped(inst.side(), inst.kind(), "lasting-phased", 0, 0, why));
+            }
+            out.add(BenchRow.skipped(inst.side(), inst.kind(), "lasting-check", 0, 0, why));
+            return out;
+        }
+        return reserve ? List.of(phased(inst, sampler, reps), check(inst, sampler, reps))
+                : List.of(check(inst, sampler, reps));
+    }
+
     /** The lasting row is skipped above this many robot vertices of its arena (compile time and heap). */
     static final long LASTING_ROBOT_VERTEX_LIMIT = 1_500_000;
 
@@ -133,7 +158,7 @@ final class LastingBench {
                         inst.arena().stateCount(), arena.vertexCount(), compileMs, inst.arena().vertexCount(),
                         inst.arenaMillis(), ratio, mom.cpuMillis(), forecast / (double) Math.max(1, reachable),
                         pv[0] == 1 ? "policy of " + pv[3] + " rows, worst case " + pv[1] + " units"
-                                : "not guaranteed"));
+                                : "not guaranteed")).withMomentary(mom.cpuMillis());
     }
 
     /**
@@ -162,7 +187,7 @@ final class LastingBench {
                 String.format(java.util.Locale.ROOT, "door-shut events lasting, phase by phase: %d of %d disturbance"
                                 + " states kept in %d rounds, last arena %d vertices; %.2f x the momentary attractor's"
                                 + " CPU time (%.1f ms)", r.keptStates(), r.totalStates(), r.rounds(),
-                        r.arena().vertexCount(), ratio, mom.cpuMillis()));
+                        r.arena().vertexCount(), ratio, mom.cpuMillis())).withMomentary(mom.cpuMillis());
     }
 
     /**
@@ -200,7 +225,7 @@ final class LastingBench {
                 String.format(java.util.Locale.ROOT, "the %d of %d disturbance states the phased solve ends with"
                                 + " (by budget left 0..K: %s), given in advance and solved in one round: %.2f x the"
                                 + " momentary attractor's CPU time (%.1f ms)", r.keptStates(), r.totalStates(), java.util.Arrays.toString(byBudget), ratio,
-                        mom.cpuMillis()));
+                        mom.cpuMillis())).withMomentary(mom.cpuMillis());
     }
 
     /**
@@ -230,7 +255,7 @@ final class LastingBench {
                 String.format(java.util.Locale.ROOT, "check end to end (MissionPlanner.plan, default route %s),"
                                 + " door-shut events lasting: %.1f ms CPU, %.2f x the momentary mission's %.1f ms"
                                 + " (%s, %s); %s", p.method(), lp.cpuMillis(), ratio, mp.cpuMillis(),
-                        mp.value().method(), mp.value().verdict().word(), phases));
+                        mp.value().method(), mp.value().verdict().word(), phases)).withMomentary(mp.cpuMillis());
     }
 
     /** The instance's mission with its door-shut events lasting (the rest as they are). */
