@@ -7,7 +7,8 @@ package dockline.bench;
  * @param instance    which mission on it: {@code reserve}, {@code consumption} or {@code discounted}
  * @param method      {@code attractor}, {@code compact}, {@code bfs}, {@code sweep}, {@code implicit},
  *                    {@code early}, {@code implicit-bfs}, {@code implicit-policy}, {@code fixpoint}, {@code vi} or {@code fast}
- *                    (see {@link Benchmark})
+ *                    (see {@link Benchmark}), or a row of lasting door-shut events: {@code lasting}, {@code lasting-phased},
+ *                    {@code lasting-known-phases}, {@code lasting-check} (see {@link LastingBench})
  * @param vertices    vertices of the graph the method worked on (for a skipped product method: the estimate)
  * @param edges       edges of that graph
  * @param buildMillis time to build that graph (0 when the method works on the arena directly)
