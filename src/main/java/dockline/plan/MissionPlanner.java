@@ -130,7 +130,7 @@ public final class MissionPlanner {
         if (r instanceof Route.Charging ch) {
             Optional<ChargingSolver> cs = chargingSolver(c);
             if (cs.isPresent()) {
-                return PictureRoute.withBounds(ch, cs.get(), charging(c, cs.get(), ch.replays(), ch.suggestions(),
+                return PictureRoute.withBounds(ch, cs.get(), options.cancelled(), charging(c, cs.get(), ch.replays(), ch.suggestions(),
                         "the charging route was asked for: the least charge per position with the good docks as"
                                 + " targets, every floor in one pass"));
             }
@@ -138,7 +138,8 @@ public final class MissionPlanner {
                 throw new RouteNotApplicableException("the charging route does not apply: an energy gain other than"
                         + " a charge step on a dock");
             }
-            return product(c, PolicyChoice.SAFEST, false, null, true, ch.suggestions(), ch.replays(), false,
+            // the pictures asked for heat bounds: here the product route's exact heat map stands in for them
+            return product(c, PolicyChoice.SAFEST, false, null, true, ch.suggestions(), ch.replays(), ch.heatBounds(),
                     "the charging route does not apply (an energy gain other than a charge step on a dock), so the"
                             + " product game");
         }
@@ -209,7 +210,7 @@ public final class MissionPlanner {
                     + " docks as targets, every floor in one pass, no battery levels in the game", p.note()));
         }
         Route.Charging ch = (Route.Charging) r;
-        return Optional.of(PictureRoute.withBounds(ch, p.solver(), charging(c, p.solver(), p.weakened(),
+        return Optional.of(PictureRoute.withBounds(ch, p.solver(), options.cancelled(), charging(c, p.solver(), p.weakened(),
                 p.strengthened(), ch.replays(), ch.suggestions(), "the charging route was asked for: the least charge"
                         + " per position with the good docks as targets, every floor in one pass", p.note())));
     }

@@ -67,6 +67,17 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Charging, Ro
         public static Charging defaults() {
             return new Charging(false, true, false);
         }
+
+        /**
+         * The route of the safest policy of a one-trip mission as {@code export} writes it, with or without its
+         * replays and heat bounds: the charging route (phase by phase on lasting closures), or the product route's
+         * safest policy where the charging route does not apply. {@code replay} and the pictures ({@link
+         * PictureRoute}) take this route too, so the run they show is a run of the very policy in the file; the
+         * flags add replays and a heat map to the plan and never change its policy.
+         */
+        public static Charging exportedPolicy(boolean replays, boolean heatBounds) {
+            return new Charging(replays, false, true, heatBounds);
+        }
     }
 
     /**
