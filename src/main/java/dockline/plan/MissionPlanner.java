@@ -182,6 +182,7 @@ public final class MissionPlanner {
     private static Plan charging(Context c, ChargingSolver solver, boolean wantReplays, boolean wantSuggestions,
                                  String reason) {
         Mission m = c.mission();
+        Progress.stage(5, "solving the game, every floor in one pass");
         ChargingRoute.Analysis a = ChargingRoute.analyse(solver, m.capacityUnits(), m.reserveUnits(), m.startUnits());
         return charging(c, solver, a, a, wantReplays, wantSuggestions, reason, null);
     }
@@ -239,6 +240,8 @@ public final class MissionPlanner {
         ThresholdPolicy thresholds = null;
         ClosedLoop loop = null;
         Certification cert;
+        Progress.stage(55, a.guaranteed() ? "certifying the policy" : "certifying the best effort"
+                + (wantSuggestions ? " and looking for suggestions" : ""));
         if (highest.isPresent()) {
             int hf = highest.getAsInt();
             thresholds = ChargingPolicies.thresholds(solver, a.highest(), hf, start, cap);
@@ -273,6 +276,7 @@ public final class MissionPlanner {
         }
         Optional<PlanReplays> replays = Optional.empty();
         if (wantReplays) {
+            Progress.stage(65, "preparing the replays");
             if (a.guaranteed()) {
                 String why = cert instanceof Certification.Reserve r ? r.certificate().reason() : "no certificate";
                 replays = Optional.of(new PlanReplays(true, c.arena(), floor, start, cert.ok() ? loop : null, -1,
