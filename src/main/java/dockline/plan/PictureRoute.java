@@ -74,8 +74,9 @@ public final class PictureRoute {
 
     /**
      * The plan with the heat bounds when the route asks for them ({@link NeedBounds}: its cost): on the solver's
-     * arena, or on the whole closure arena when the solver's leaves phases out and the whole one is small
-     * ({@link #phased}), so that the heat map is exact there. The plan's policy and replays are not touched.
+     * arena, or, when the route says {@link Route.Charging#wholeHeat}, on the whole closure arena when the solver's
+     * leaves phases out and the whole one is small ({@link #phased}), so that the heat map is exact there. The plan's
+     * policy and replays are not touched.
      */
     static Plan withBounds(Route.Charging route, ChargingSolver solver, BooleanSupplier cancelled, Plan plan) {
         if (!route.heatBounds()) {
@@ -84,7 +85,7 @@ public final class PictureRoute {
         Progress.stage(75, "the charge needed on every cell");
         Mission m = plan.mission();
         ChargingSolver heat = solver;
-        if (NeedBounds.leavesOut(solver.arena()) && !phased(m)) {
+        if (route.wholeHeat() && NeedBounds.leavesOut(solver.arena()) && !phased(m)) {
             heat = new ChargingSolver(ArenaCompiler.compile(m), GoalAutomaton.of(m), cancelled);
         }
         return plan.withHeatBounds(NeedBounds.of(heat, m.capacityUnits(), m.reserveUnits()));

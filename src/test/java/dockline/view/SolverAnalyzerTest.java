@@ -68,4 +68,32 @@ class SolverAnalyzerTest {
             assertThat(d.policyActions(ci, e.budgetLeft(), e.progress())).contains(e.action());
         }
     }
+
+    /**
+     * The lasting demos are small, so the window's heat map is computed on the whole closure arena although the
+     * policy comes from the kept phases: exact on every cell. Oracle: the product game's heat map on the whole arena
+     * (ReserveSolver with the heat map switched on: every closure phase and every battery level, no charging pass).
+     */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"missions/vault-check.yaml", "missions/late-return.yaml"})
+    void on_the_small_lasting_demos_the_heat_map_is_exact(String file) throws Exception {
+        Mission m = MissionLoader.load(Path.of(file));
+        ViewData d = new SolverAnalyzer().analyze(m, () -> false);
+        var heat = dockline.solve.reserve.ReserveSolver.analyse(m, dockline.solve.reserve.ReserveOptions.defaults()
+                .withChargeNeeded(true)).chargeNeeded().orElseThrow();
+        assertThat(d.heatNote()).isNull();
+        int k = m.map().disturbances().budget();
+        int compared = 0;
+        for (int left = 0; left <= k; left++) {
+            for (int c = 0; c < m.map().cellCount(); c++) {
+                int expected = heat.unitsNeeded(c, left, 0);
+                int shown = d.chargeNeeded(c, left, 0);
+                assertThat(shown).as("cell %d, %d left", c, left).isEqualTo(
+                        expected == dockline.solve.reserve.ChargeNeeded.IMPOSSIBLE ? ViewData.IMPOSSIBLE : expected);
+                assertThat(d.chargeNeededAtLeast(c, left, 0)).isEqualTo(shown);
+                compared += expected == dockline.solve.reserve.ChargeNeeded.IMPOSSIBLE ? 0 : 1;
+            }
+        }
+        assertThat(compared).as("cells with a level that will do").isPositive();
+    }
 }
