@@ -70,6 +70,9 @@ public final class MissionPlanner {
     private MissionPlanner() {
     }
 
+    /** How the charging route's note of its pass begins ({@link Plan#solverNote}). */
+    static final String CHARGING_NOTE_START = "charging route: one pass, ";
+
     /** The shared inputs of one plan. */
     record Context(Mission mission, Arena arena, GoalAutomaton goal, PlanOptions options, long t0,
                            long compileMillis) {
@@ -291,7 +294,7 @@ public final class MissionPlanner {
             }
         }
         FloorSweep.Result sw = a.sweep();
-        notes.add("charging route: one pass, " + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
+        notes.add(CHARGING_NOTE_START + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
                 + (sw.batches() - 1) + " dock position" + (sw.batches() == 2 ? "" : "s") + " added in decreasing"
                 + " floor), " + sw.historyEntries() + " policy entries"
                 + (thresholds == null ? "" : "; threshold policy over " + thresholds.size() + " positions, "

@@ -88,6 +88,14 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
         return verdict == Verdict.GUARANTEED;
     }
 
+    /**
+     * Whether a note of {@link #notes()} only tells how the solver went (the charging route's pass, the closure
+     * phases kept): {@code check} prints it for the record, a picture's headline leaves it out.
+     */
+    public static boolean solverNote(String note) {
+        return note.startsWith(MissionPlanner.CHARGING_NOTE_START) || note.startsWith(PhaseRounds.NOTE_START);
+    }
+
     /** Whether only the verdict was computed. */
     public boolean verdictOnly() {
         return detail instanceof Detail.VerdictOnlyFast || detail instanceof Detail.VerdictOnlyProduct;

@@ -145,7 +145,9 @@ public final class SolverAnalyzer implements Analyzer {
             words.append(" (This answers the reserve floor; the mission's discounted objective is checked by 'dockline check'.)");
         }
         for (String n : a.notes()) {
-            words.append(" Note: ").append(n).append('.');
+            if (!Plan.solverNote(n)) { // how the solver went is for check's record, not the picture's headline
+                words.append(" Note: ").append(n).append('.');
+            }
         }
         String cert;
         VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED : VerdictSummary.Outcome.NOT_GUARANTEED;
