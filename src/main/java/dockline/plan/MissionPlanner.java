@@ -70,7 +70,7 @@ public final class MissionPlanner {
     private MissionPlanner() {
     }
 
-    /** How the charging route's note of its pass begins ({@link Plan#solverNote}). */
+    /** How the charging route's note of its pass begins ({@link Plan#passNote}). */
     static final String CHARGING_NOTE_START = "charging route: one pass, ";
 
     /** The shared inputs of one plan. */

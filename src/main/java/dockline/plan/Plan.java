@@ -89,11 +89,16 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
     }
 
     /**
-     * Whether a note of {@link #notes()} only tells how the solver went (the charging route's pass, the closure
-     * phases kept): {@code check} prints it for the record, a picture's headline leaves it out.
+     * Whether a note of {@link #notes()} only tells how the charging route's pass went: {@code check} prints it for
+     * the record, a picture's headline leaves it out.
      */
-    public static boolean solverNote(String note) {
-        return note.startsWith(MissionPlanner.CHARGING_NOTE_START) || note.startsWith(PhaseRounds.NOTE_START);
+    public static boolean passNote(String note) {
+        return note.startsWith(MissionPlanner.CHARGING_NOTE_START);
+    }
+
+    /** Whether a note of {@link #notes()} tells how many closure phases were kept (a plan phase by phase). */
+    public static boolean phasesNote(String note) {
+        return note.startsWith(PhaseRounds.NOTE_START);
     }
 
     /** Whether only the verdict was computed. */

@@ -144,8 +144,12 @@ public final class SolverAnalyzer implements Analyzer {
         if (m.objective() instanceof Objective.Discounted) {
             words.append(" (This answers the reserve floor; the mission's discounted objective is checked by 'dockline check'.)");
         }
+        // how the pass went is for check's record, not the headline; the phases kept are said where the heat map
+        // comes from them too (on a small mission it comes from the whole arena, exact, and the phases are the
+        // solver's business)
+        boolean phasedHeat = a.heatBounds().map(NeedBounds::restricted).orElse(false);
         for (String n : a.notes()) {
-            if (!Plan.solverNote(n)) { // how the solver went is for check's record, not the picture's headline
+            if (!Plan.passNote(n) && (phasedHeat || !Plan.phasesNote(n))) {
                 words.append(" Note: ").append(n).append('.');
             }
         }
