@@ -77,6 +77,16 @@ class ReplayPlaysExportedPolicyTest {
         }
     }
 
+    /** Patrols plan through their own rounds plan in both commands: the lasso is a run of the exported rows too. */
+    @Test
+    void patrolLasso_followsTheExportedPolicy() throws IOException {
+        String mission = "missions/night-patrol.yaml";
+        Path policy = export(mission, List.of());
+        JsonNode replay = replay(mission, List.of(), List.of());
+        assertThat(replay.has("loop")).isTrue();
+        assertFollows(policy, Path.of(mission), replay);
+    }
+
     @Test
     void forcedEventOnADemo_followsTheExportedPolicy() throws IOException {
         String mission = "missions/night-round.yaml";
