@@ -70,7 +70,7 @@ public final class ExportCommand extends MissionCommand {
             }
             // the safest policy of a mission with charging comes as level thresholds (missions/POLICY-FORMAT.md)
             Route route = discounted ? Route.Discounted.defaults()
-                    : policy.choice() == PolicyChoice.SAFEST ? new Route.Charging(false, false, true)
+                    : policy.choice() == PolicyChoice.SAFEST ? Route.Charging.exportedPolicy(false, false)
                     : new Route.Product(policy.choice(), false, false, false, false);
             Plan p = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
             if (!p.guaranteed()) {

@@ -24,9 +24,10 @@ import picocli.CommandLine.Parameters;
  * {@code dockline render MISSION --out PICTURE.png}: solves the mission and draws the map (plain,
  * heat map or policy), the worst-case or counterexample path, the battery chart and the safety
  * line into a PNG, with no display (headless toolkit). The file is written atomically. The solving is
- * the core's ({@link dockline.plan.MissionPlanner}, through the view's {@link SolverAnalyzer}; on a large mission
- * with lasting closures phase by phase, {@link dockline.plan.PictureRoute}, with a heat map of bounds that the
- * picture's key and the text output explain); with
+ * the core's ({@link dockline.plan.MissionPlanner}, through the view's {@link SolverAnalyzer} on the route of
+ * {@link dockline.plan.PictureRoute}: the exported policy's, so the path drawn is a run of the policy {@code export}
+ * writes; on a large mission with lasting closures the heat map is one of bounds, which the picture's key and the
+ * text output explain); with
  * {@code --json} the result is one JSON object (src/main/resources/dockline/schemas/render.schema.json). A patrol
  * or a deadline mission is planned by {@link dockline.plan.RoundsPlan} (the window's adapter of it): the picture shows
  * its lasso (the way in and one lap of the loop) or its slowest play.

@@ -110,11 +110,12 @@ public final class ReplayCommand extends MissionCommand {
         }
         Plan plan;
         try {
-            // with lasting closures the safest policy's replays (worst case, counterexample, nominal and forced
-            // events) come from the charging route phase by phase, so the whole closure arena is never built: the
-            // policy is certified on the kept phases, where a closure into a left-out phase loses, so no play of it
-            // (forced events included) can meet one, and it plays the same in the mission
-            Route route = lasting && safest ? new Route.Charging(true, false, true)
+            // the safest policy is replayed from the route export writes it from, so every run shown (worst case,
+            // counterexample, nominal, forced events) is a run of the very policy in the file; with lasting closures
+            // that route is phase by phase and never builds the whole closure arena: the policy is certified on the
+            // kept phases, where a closure into a left-out phase loses, so no play of it (forced events included)
+            // can meet one, and it plays the same in the mission
+            Route route = safest ? Route.Charging.exportedPolicy(true, false)
                     : new Route.Product(policy.choice(), false, false, true, false);
             plan = MissionPlanner.plan(m, PlanOptions.of(route).withMemoryBudget(mission.memoryBudgetBytes()));
         } catch (RuntimeException | OutOfMemoryError e) {

@@ -70,6 +70,9 @@ public final class MissionPlanner {
     private MissionPlanner() {
     }
 
+    /** How the charging route's note of its pass begins ({@link Plan#passNote}). */
+    static final String CHARGING_NOTE_START = "charging route: one pass, ";
+
     /** The shared inputs of one plan. */
     record Context(Mission mission, Arena arena, GoalAutomaton goal, PlanOptions options, long t0,
                            long compileMillis) {
@@ -130,7 +133,7 @@ public final class MissionPlanner {
         if (r instanceof Route.Charging ch) {
             Optional<ChargingSolver> cs = chargingSolver(c);
             if (cs.isPresent()) {
-                return PictureRoute.withBounds(ch, cs.get(), charging(c, cs.get(), ch.replays(), ch.suggestions(),
+                return PictureRoute.withBounds(ch, cs.get(), options.cancelled(), charging(c, cs.get(), ch.replays(), ch.suggestions(),
                         "the charging route was asked for: the least charge per position with the good docks as"
                                 + " targets, every floor in one pass"));
             }
@@ -138,7 +141,8 @@ public final class MissionPlanner {
                 throw new RouteNotApplicableException("the charging route does not apply: an energy gain other than"
                         + " a charge step on a dock");
             }
-            return product(c, PolicyChoice.SAFEST, false, null, true, ch.suggestions(), ch.replays(), false,
+            // the pictures asked for heat bounds: here the product route's exact heat map stands in for them
+            return product(c, PolicyChoice.SAFEST, false, null, true, ch.suggestions(), ch.replays(), ch.heatBounds(),
                     "the charging route does not apply (an energy gain other than a charge step on a dock), so the"
                             + " product game");
         }
@@ -181,6 +185,7 @@ public final class MissionPlanner {
     private static Plan charging(Context c, ChargingSolver solver, boolean wantReplays, boolean wantSuggestions,
                                  String reason) {
         Mission m = c.mission();
+        Progress.stage(5, "solving the game, every floor in one pass");
         ChargingRoute.Analysis a = ChargingRoute.analyse(solver, m.capacityUnits(), m.reserveUnits(), m.startUnits());
         return charging(c, solver, a, a, wantReplays, wantSuggestions, reason, null);
     }
@@ -209,7 +214,7 @@ public final class MissionPlanner {
                     + " docks as targets, every floor in one pass, no battery levels in the game", p.note()));
         }
         Route.Charging ch = (Route.Charging) r;
-        return Optional.of(PictureRoute.withBounds(ch, p.solver(), charging(c, p.solver(), p.weakened(),
+        return Optional.of(PictureRoute.withBounds(ch, p.solver(), options.cancelled(), charging(c, p.solver(), p.weakened(),
                 p.strengthened(), ch.replays(), ch.suggestions(), "the charging route was asked for: the least charge"
                         + " per position with the good docks as targets, every floor in one pass", p.note())));
     }
@@ -238,6 +243,8 @@ public final class MissionPlanner {
         ThresholdPolicy thresholds = null;
         ClosedLoop loop = null;
         Certification cert;
+        Progress.stage(55, a.guaranteed() ? "certifying the policy" : "certifying the best effort"
+                + (wantSuggestions ? " and looking for suggestions" : ""));
         if (highest.isPresent()) {
             int hf = highest.getAsInt();
             thresholds = ChargingPolicies.thresholds(solver, a.highest(), hf, start, cap);
@@ -272,6 +279,7 @@ public final class MissionPlanner {
         }
         Optional<PlanReplays> replays = Optional.empty();
         if (wantReplays) {
+            Progress.stage(65, "preparing the replays");
             if (a.guaranteed()) {
                 String why = cert instanceof Certification.Reserve r ? r.certificate().reason() : "no certificate";
                 replays = Optional.of(new PlanReplays(true, c.arena(), floor, start, cert.ok() ? loop : null, -1,
@@ -286,7 +294,7 @@ public final class MissionPlanner {
             }
         }
         FloorSweep.Result sw = a.sweep();
-        notes.add("charging route: one pass, " + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
+        notes.add(CHARGING_NOTE_START + sw.batches() + " batch" + (sw.batches() == 1 ? "" : "es") + " ("
                 + (sw.batches() - 1) + " dock position" + (sw.batches() == 2 ? "" : "s") + " added in decreasing"
                 + " floor), " + sw.historyEntries() + " policy entries"
                 + (thresholds == null ? "" : "; threshold policy over " + thresholds.size() + " positions, "

@@ -93,8 +93,11 @@ final class PhaseRounds {
     }
 
     /** The plan's note on the phases: how many states were kept, in how many rounds, and {@code how}. */
+    /** How the note of a phase-by-phase plan begins ({@link Plan#passNote}, {@link Plan#phasesNote}). */
+    static final String NOTE_START = "lasting closures phase by phase: ";
+
     static String note(int kept, int total, int rounds, String how) {
-        return "lasting closures phase by phase: " + kept + " of " + total + " disturbance states kept, in " + rounds
+        return NOTE_START + kept + " of " + total + " disturbance states kept, in " + rounds
                 + " round" + (rounds == 1 ? "" : "s") + " (" + how + ")";
     }
 }

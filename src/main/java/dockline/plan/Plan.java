@@ -88,6 +88,19 @@ public record Plan(Mission mission, Objective objective, Verdict verdict, Method
         return verdict == Verdict.GUARANTEED;
     }
 
+    /**
+     * Whether a note of {@link #notes()} only tells how the charging route's pass went: {@code check} prints it for
+     * the record, a picture's headline leaves it out.
+     */
+    public static boolean passNote(String note) {
+        return note.startsWith(MissionPlanner.CHARGING_NOTE_START);
+    }
+
+    /** Whether a note of {@link #notes()} tells how many closure phases were kept (a plan phase by phase). */
+    public static boolean phasesNote(String note) {
+        return note.startsWith(PhaseRounds.NOTE_START);
+    }
+
     /** Whether only the verdict was computed. */
     public boolean verdictOnly() {
         return detail instanceof Detail.VerdictOnlyFast || detail instanceof Detail.VerdictOnlyProduct;

@@ -56,16 +56,37 @@ public sealed interface Route permits Route.Auto, Route.Fast, Route.Charging, Ro
      * @param heatBounds  also give the charge needed from every situation as bounds
      *                    ({@link dockline.solve.charging.NeedBounds}: exact on a whole arena, a lower and an upper
      *                    bound on the kept closure phases of a mission with lasting closures)
+     * @param wholeHeat   with {@code heatBounds}: when the policy was found on kept closure phases but the whole
+     *                    closure arena is small ({@link PictureRoute#MAX_WHOLE_ROBOT_VERTICES}), give the bounds of
+     *                    the whole arena instead (exact everywhere; one more pass, the policy unchanged)
      */
-    record Charging(boolean replays, boolean suggestions, boolean orProduct, boolean heatBounds) implements Route {
+    record Charging(boolean replays, boolean suggestions, boolean orProduct, boolean heatBounds, boolean wholeHeat)
+            implements Route {
         /** No heat bounds. */
         public Charging(boolean replays, boolean suggestions, boolean orProduct) {
-            this(replays, suggestions, orProduct, false);
+            this(replays, suggestions, orProduct, false, false);
+        }
+
+        /** Heat bounds, when asked for, on the arena the policy was found on. */
+        public Charging(boolean replays, boolean suggestions, boolean orProduct, boolean heatBounds) {
+            this(replays, suggestions, orProduct, heatBounds, false);
         }
 
         /** Verdict, policy, certificate and figures; no replays, suggestions when not guaranteed, refuse if not applicable. */
         public static Charging defaults() {
             return new Charging(false, true, false);
+        }
+
+        /**
+         * The route of the safest policy of a one-trip mission as {@code export} writes it, with or without its
+         * replays and heat bounds: the charging route (phase by phase on lasting closures), or the product route's
+         * safest policy where the charging route does not apply. {@code replay} and the pictures ({@link
+         * PictureRoute}) take this route too, so the run they show is a run of the very policy in the file; the
+         * flags add replays and a heat map (on the whole arena when it is small) to the plan and never change its
+         * policy.
+         */
+        public static Charging exportedPolicy(boolean replays, boolean heatBounds) {
+            return new Charging(replays, false, true, heatBounds, heatBounds);
         }
     }
 

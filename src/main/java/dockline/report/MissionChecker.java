@@ -39,8 +39,8 @@ import java.util.OptionalInt;
  * ({@link MissionResult}). It decides nothing itself: the verdict, method, certificate, worst case,
  * highest floor and suggestions are those of {@link MissionPlanner#plan} with the options
  * {@code dockline check} uses ({@link PlanOptions#defaults}); the lowest start comes from the core's
- * margins route, the pictured run from its product route with replays (the one {@code render} draws; on a large mission with
- * lasting closures the charging route phase by phase, {@link PictureRoute}), and
+ * margins route, the pictured run from the route {@code export} writes the safest policy from, with replays and a
+ * heat map (the one {@code render} draws, {@link PictureRoute}: the run of the exported policy), and
  * the rule of thumb's nominal need from the core at a disturbance budget of 0. Patrols and deadlines go
  * through {@link RoundsPlan} the same way (the lowest start by {@link RoundsPlan#withLowestStart}; for a
  * deadline, the rule's shortest run by {@link RoundsPlan#fewestTurns} at a budget of 0).
@@ -144,12 +144,11 @@ public final class MissionChecker {
             return internal(file, m, inputs, "one-trip", words, problem.get());
         }
         Plan margins = MissionPlanner.plan(m, PlanOptions.of(new Route.Margins()).withMemoryBudget(budget));
-        Plan pictured = MissionPlanner.plan(m, PlanOptions.of(PictureRoute.of(m, new Route.Product(PolicyChoice.SAFEST,
-                true, false, true, true))).withMemoryBudget(budget));
+        Plan pictured = MissionPlanner.plan(m, PlanOptions.of(PictureRoute.of(m)).withMemoryBudget(budget));
         boolean reserveOnly = !(m.objective() instanceof Objective.Discounted);
         if (reserveOnly && (pictured.verdict() != a.verdict() || margins.verdict() != a.verdict())) {
             return internal(file, m, inputs, "one-trip", words, "the routes disagree on the verdict ("
-                    + a.method().word() + ": " + a.verdict().word() + ", product: " + pictured.verdict().word()
+                    + a.method().word() + ": " + a.verdict().word() + ", pictures: " + pictured.verdict().word()
                     + ", margins: " + margins.verdict().word() + ")");
         }
         List<String> notes = new ArrayList<>(a.notes());

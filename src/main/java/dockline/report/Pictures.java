@@ -15,8 +15,8 @@ public interface Pictures {
     /**
      * The map with the worst-case run (or the counterexample) of a one-trip mission.
      *
-     * @param plan a plan with replays and a heat map: the product route's, or on a large mission with lasting
-     *             closures the charging route's heat bounds ({@code dockline.plan.PictureRoute})
+     * @param plan a plan with replays and a heat map: the plan of the route the exported policy comes from, with
+     *             its heat bounds ({@code dockline.plan.PictureRoute})
      */
     byte[] oneTrip(Plan plan) throws IOException;
 

@@ -12,8 +12,6 @@ import dockline.plan.Plan;
 import dockline.plan.PlanOptions;
 import dockline.plan.PictureRoute;
 import dockline.plan.PlanReplays;
-import dockline.plan.PolicyChoice;
-import dockline.plan.Route;
 import dockline.replay.Replay;
 import dockline.solve.charging.NeedBounds;
 import dockline.solve.reserve.ChargeNeeded;
@@ -32,8 +30,8 @@ import java.util.function.BooleanSupplier;
 
 /**
  * The real {@link Analyzer}: asks the core ({@link MissionPlanner#plan} on the route of {@link PictureRoute}: the
- * product route with the safest policy, its replays and heat map, or on a large mission with lasting closures the
- * charging route phase by phase with its replays and heat bounds) and turns the {@link Plan} into the view's own
+ * route {@code export} writes the safest policy from, with its replays and heat map, so the window plays the
+ * exported policy) and turns the {@link Plan} into the view's own
  * {@link ViewData}; it computes nothing itself. The cancellation flag goes down to every solve.
  */
 public final class SolverAnalyzer implements Analyzer {
@@ -67,9 +65,8 @@ public final class SolverAnalyzer implements Analyzer {
                 progress.phase(phase, percent);
             }
         })) {
-            // the product route with its exact heat map; a large mission with lasting closures phase by phase
-            plan = MissionPlanner.plan(mission, PlanOptions.of(PictureRoute.of(mission, new Route.Product(
-                    PolicyChoice.SAFEST, false, false, true, true))).withCancelled(cancelled));
+            // the exported policy's route, with its replays and heat map
+            plan = MissionPlanner.plan(mission, PlanOptions.of(PictureRoute.of(mission)).withCancelled(cancelled));
         } catch (dockline.model.ResourceLimitException e) {
             throw new IllegalArgumentException("the game is too large: " + e.getMessage() + " (" + e.advice() + ")", e);
         }
@@ -147,8 +144,14 @@ public final class SolverAnalyzer implements Analyzer {
         if (m.objective() instanceof Objective.Discounted) {
             words.append(" (This answers the reserve floor; the mission's discounted objective is checked by 'dockline check'.)");
         }
+        // how the pass went is for check's record, not the headline; the phases kept are said where the heat map
+        // comes from them too (on a small mission it comes from the whole arena, exact, and the phases are the
+        // solver's business)
+        boolean phasedHeat = a.heatBounds().map(NeedBounds::restricted).orElse(false);
         for (String n : a.notes()) {
-            words.append(" Note: ").append(n).append('.');
+            if (!Plan.passNote(n) && (phasedHeat || !Plan.phasesNote(n))) {
+                words.append(" Note: ").append(n).append('.');
+            }
         }
         String cert;
         VerdictSummary.Outcome outcome = a.guaranteed() ? VerdictSummary.Outcome.GUARANTEED : VerdictSummary.Outcome.NOT_GUARANTEED;

@@ -29,6 +29,9 @@ class SolverAnalyzerProgressTest {
             assertThat(percents.get(i)).as("step %d of %s", i, words).isGreaterThanOrEqualTo(percents.get(i - 1));
         }
         assertThat(words).anySatisfy(w -> assertThat(w).contains("building the move graph: ").endsWith(" %)"));
-        assertThat(words).anySatisfy(w -> assertThat(w).contains("solving the game at floor"));
+        // the window plans on the exported policy's route, the charging route's one pass
+        assertThat(words).anySatisfy(w -> assertThat(w).contains("solving the game, every floor in one pass"));
+        assertThat(words).anySatisfy(w -> assertThat(w).contains("charging route: docks in decreasing floor: ")
+                .endsWith(" %)"));
     }
 }

@@ -59,7 +59,8 @@ public final class NeedBounds {
         return new NeedBounds(a, solver.goal(), floor, low, high, restricted);
     }
 
-    private static boolean leavesOut(Arena a) {
+    /** Whether the arena leaves some closure phase out (an outcome of energy change {@link ArenaCompiler#LEFT_OUT}). O(edges). */
+    public static boolean leavesOut(Arena a) {
         for (int e = 0; e < a.edgeCount(); e++) {
             if (a.weight(e) == ArenaCompiler.LEFT_OUT) {
                 return true;
